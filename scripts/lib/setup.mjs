@@ -1,0 +1,39 @@
+// Installs what a fresh Debian 12 machine is missing: Debian packages (as root) and node_modules.
+import { spawnSync } from 'node:child_process';
+import { createHash } from 'node:crypto';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
+import { mariadbTools } from './mariadb.mjs';
+
+const run = (cmd, args, opts = {}) => spawnSync(cmd, args, { stdio: 'inherit', ...opts });
+const has = (cmd) => spawnSync('sh', ['-c', `command -v ${cmd}`], { stdio: 'ignore' }).status === 0;
+
+/** Install Debian packages with apt-get when root; otherwise say exactly what to install. */
+export function ensureDebianPackages({ chromium = false } = {}) {
+  const missing = [];
+  if (!mariadbTools()) missing.push('mariadb-server', 'mariadb-client');
+  if (chromium && !existsSync('/usr/bin/chromium')) missing.push('chromium');
+  if (missing.length === 0) return;
+  const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
+  if (!isRoot || !has('apt-get')) {
+    console.error(`\nScanwright needs these Debian packages: ${missing.join(' ')}\nInstall them as root:\n  apt-get update && apt-get install -y --no-install-recommends ${missing.join(' ')}\n`);
+    process.exit(1);
+  }
+  console.log(`Installing Debian packages: ${missing.join(' ')} …`);
+  const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
+  if (run('apt-get', ['update', '-qq'], { env }).status !== 0) process.exit(1);
+  const r = run('apt-get', ['install', '-y', '-qq', '--no-install-recommends', ...missing], { env });
+  if (r.status !== 0) process.exit(r.status ?? 1);
+}
+
+const lockHash = () => createHash('sha256').update(readFileSync('package-lock.json')).digest('hex');
+const STAMP = 'node_modules/.scanwright-lock-hash';
+
+/** Run `npm ci` when node_modules is missing or older than package-lock.json. */
+export function ensureNodeModules() {
+  const hash = lockHash();
+  if (existsSync(STAMP) && readFileSync(STAMP, 'utf8') === hash) return;
+  console.log('Installing npm packages (npm ci) …');
+  const r = run('npm', ['ci', '--no-audit', '--no-fund']);
+  if (r.status !== 0) process.exit(r.status ?? 1);
+  writeFileSync(STAMP, hash);
+}

@@ -1,0 +1,134 @@
+import express, { type Express } from 'express';
+import session from 'express-session';
+import connectSessionSequelize from 'connect-session-sequelize';
+import helmet from 'helmet';
+import compression from 'compression';
+import { pinoHttp } from 'pino-http';
+import { existsSync } from 'node:fs';
+import { resolve } from 'node:path';
+import type { Sequelize } from 'sequelize';
+import type { Config } from './config.ts';
+import { createLogger, type Logger } from './logger.ts';
+import { createSequelize } from './db/sequelize.ts';
+import { initModels } from './models/index.ts';
+import { createPassport } from './auth/passport.ts';
+import { createMailer, type Mailer } from './services/mail.service.ts';
+import { requireCsrf } from './middleware/csrf.ts';
+import { errorHandler, apiNotFound } from './middleware/error-handler.ts';
+import { limiter } from './middleware/rate-limit.ts';
+import { healthRoutes } from './routes/health.routes.ts';
+import { sessionRoutes } from './routes/session.routes.ts';
+import { authRoutes } from './routes/auth.routes.ts';
+import { adminRoutes } from './routes/admin.routes.ts';
+import { workbenchRoutes } from './routes/workbench.routes.ts';
+
+export interface AppHandle {
+  app: Express;
+  sequelize: Sequelize;
+  mailer: Mailer;
+  log: Logger;
+  close(): Promise<void>;
+}
+
+interface SessionStore extends session.Store {
+  stopExpiringSessions(): void;
+}
+
+/** Build the whole Express app (no listen), with its pool, session store, passport and mailer. */
+export async function createApp(config: Config, deps: { mailer?: Mailer; log?: Logger } = {}): Promise<AppHandle> {
+  const log = deps.log ?? createLogger(config.logLevel);
+  const sequelize = createSequelize(config.db);
+  initModels(sequelize);
+  const mailer = deps.mailer ?? createMailer(config.smtpUrl ?? 'smtp://127.0.0.1:2525', config.mailFrom, log);
+  const passport = createPassport(config, mailer, log);
+  const SequelizeStore = connectSessionSequelize(session.Store);
+  const store = new SequelizeStore({
+    db: sequelize,
+    table: 'Session',
+    checkExpirationInterval: 15 * 60 * 1000,
+    expiration: 30 * 24 * 60 * 60 * 1000,
+    extendDefaultFields: (defaults: { data: string; expires: Date }, s: { passport?: { user?: number } }) => ({
+      data: defaults.data,
+      expires: defaults.expires,
+      userId: s.passport?.user ?? null,
+    }),
+  }) as unknown as SessionStore;
+  const https = config.publicUrl.startsWith('https://');
+
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('query parser', 'simple');
+  if (https) app.set('trust proxy', 1);
+  app.use(pinoHttp({ logger: log, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: false,
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'"],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          baseUri: ["'self'"],
+          formAction: ["'self'"],
+          frameAncestors: ["'none'"],
+          ...(https ? { upgradeInsecureRequests: [] } : {}),
+        },
+      },
+      crossOriginEmbedderPolicy: false,
+    }),
+  );
+  app.use(compression());
+
+  const dist = resolve(config.clientDist);
+  if (existsSync(dist)) {
+    app.use('/assets', express.static(resolve(dist, 'assets'), { immutable: true, maxAge: '1y', index: false, fallthrough: false }));
+    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+  }
+  app.use(healthRoutes(sequelize));
+
+  app.use(['/api/workbench', '/api/actuators'], express.json({ limit: '12mb' }));
+  app.use(express.json({ limit: '1mb' }));
+  app.use(
+    session({
+      name: 'scanwright.sid',
+      secret: config.sessionSecret,
+      store,
+      resave: false,
+      saveUninitialized: false,
+      rolling: false,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: https, maxAge: 30 * 24 * 60 * 60 * 1000, path: '/' },
+    }),
+  );
+  app.use(passport.initialize());
+  app.use(passport.session());
+  app.use(['/api', '/auth/logout'], requireCsrf);
+
+  app.use(sessionRoutes());
+  app.use(authRoutes(passport, limiter(config.rateLimits, { windowMs: 60_000, limit: 20, what: 'sign-in attempts' })));
+  app.use(adminRoutes());
+  app.use(workbenchRoutes());
+  app.use(['/api', '/auth'], apiNotFound);
+
+  const indexHtml = resolve(dist, 'index.html');
+  app.get('/{*splat}', (_req, res, next) => {
+    if (!existsSync(indexHtml)) return next();
+    res.set('Cache-Control', 'no-cache').sendFile(indexHtml);
+  });
+  app.use(errorHandler(config.env === 'development'));
+
+  return {
+    app,
+    sequelize,
+    mailer,
+    log,
+    async close() {
+      store.stopExpiringSessions();
+      mailer.close();
+      await sequelize.close();
+    },
+  };
+}

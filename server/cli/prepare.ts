@@ -1,0 +1,14 @@
+// Before serving: apply pending migrations, then seed the demo scenario on the first run only.
+import { loadConfig } from '../config.ts';
+import { createSequelize } from '../db/sequelize.ts';
+import { createMigrator } from '../db/migrator.ts';
+import { initModels } from '../models/index.ts';
+import { seedDemoOnce } from '../db/seed/demo.ts';
+
+const sequelize = createSequelize(loadConfig().db);
+const applied = await createMigrator(sequelize).up();
+if (applied.length) process.stdout.write(`Applied ${applied.length} migration(s).\n`);
+initModels(sequelize);
+const seeded = await seedDemoOnce(sequelize);
+if (seeded) process.stdout.write('Seeded the demo scenario (first run).\n');
+await sequelize.close();

@@ -1,0 +1,82 @@
+import { z } from 'zod';
+
+const bool = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  HOST: z.string().default('127.0.0.1'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  PUBLIC_URL: z.string().url().optional(),
+  DB_HOST: z.string().default('127.0.0.1'),
+  DB_PORT: z.coerce.number().int().default(3307),
+  DB_NAME: z.string().default('scanwright'),
+  DB_USER: z.string().default('scanwright'),
+  DB_PASSWORD: z.string().default(''),
+  DB_POOL_MAX: z.coerce.number().int().min(1).default(10),
+  SESSION_SECRET: z.string().min(16).default('dev-only-session-secret-change-me'),
+  GITHUB_CLIENT_ID: z.string().optional(),
+  GITHUB_CLIENT_SECRET: z.string().optional(),
+  OAUTH_STANDIN_PORT: z.coerce.number().int().default(3001),
+  ADMIN_LOGINS: z.string().default(''),
+  SMTP_URL: z.string().optional(),
+  SMTP_CATCHER_PORT: z.coerce.number().int().default(2525),
+  INBOX_PORT: z.coerce.number().int().default(3025),
+  MAIL_FROM: z.string().default('Scanwright <no-reply@scanwright.local>'),
+  UPLOADS_DIR: z.string().default('uploads'),
+  CLIENT_DIST: z.string().default('dist/client'),
+  RATE_LIMITS: bool.default(true),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+export interface Config {
+  env: Env['NODE_ENV'];
+  host: string;
+  port: number;
+  publicUrl: string;
+  db: { host: string; port: number; name: string; user: string; password: string; poolMax: number };
+  sessionSecret: string;
+  /** Real GitHub when both are set; otherwise the local OAuth stand-in. */
+  github: { clientId: string; clientSecret: string; baseUrl: string; apiUrl: string; standIn: boolean };
+  adminLogins: string[];
+  /** smtp:// URL of the mail relay; the local catcher when unset. */
+  smtpUrl: string | null;
+  mailFrom: string;
+  uploadsDir: string;
+  clientDist: string;
+  rateLimits: boolean;
+  logLevel: string;
+}
+
+/** Parse the environment once, with defaults that fit the embedded set-up. */
+export function loadConfig(source: NodeJS.ProcessEnv = process.env, overrides: Partial<Config> = {}): Config {
+  const e = envSchema.parse(source);
+  const standIn = !(e.GITHUB_CLIENT_ID && e.GITHUB_CLIENT_SECRET);
+  const standInBase = `http://127.0.0.1:${e.OAUTH_STANDIN_PORT}`;
+  const config: Config = {
+    env: e.NODE_ENV,
+    host: e.HOST,
+    port: e.PORT,
+    publicUrl: e.PUBLIC_URL ?? `http://${e.HOST === '0.0.0.0' ? '127.0.0.1' : e.HOST}:${e.PORT}`,
+    db: { host: e.DB_HOST, port: e.DB_PORT, name: e.DB_NAME, user: e.DB_USER, password: e.DB_PASSWORD, poolMax: e.DB_POOL_MAX },
+    sessionSecret: e.SESSION_SECRET,
+    github: standIn
+      ? { clientId: 'scanwright-local', clientSecret: 'scanwright-local-secret', baseUrl: standInBase, apiUrl: standInBase, standIn }
+      : { clientId: e.GITHUB_CLIENT_ID!, clientSecret: e.GITHUB_CLIENT_SECRET!, baseUrl: 'https://github.com', apiUrl: 'https://api.github.com', standIn },
+    adminLogins: e.ADMIN_LOGINS.split(',').map((s) => s.trim().toLowerCase()).filter(Boolean),
+    smtpUrl: e.SMTP_URL ?? null,
+    mailFrom: e.MAIL_FROM,
+    uploadsDir: e.UPLOADS_DIR,
+    clientDist: e.CLIENT_DIST,
+    rateLimits: e.RATE_LIMITS,
+    logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
+  };
+  return { ...config, ...overrides };
+}
+
+/** Ports the local stand-ins listen on when no real service is configured. */
+export function standInPorts(source: NodeJS.ProcessEnv = process.env) {
+  const e = envSchema.parse(source);
+  return { oauth: e.OAUTH_STANDIN_PORT, smtp: e.SMTP_CATCHER_PORT, inbox: e.INBOX_PORT };
+}

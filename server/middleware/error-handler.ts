@@ -1,0 +1,45 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { ZodError } from 'zod';
+import { BaseError, ConnectionError, UniqueConstraintError, TimeoutError, ForeignKeyConstraintError } from 'sequelize';
+import { AppError } from '../errors.ts';
+
+const body = (code: string, message: string, details?: unknown) => ({ error: details === undefined ? { code, message } : { code, message, details } });
+
+/** Unknown /api and /auth paths answer 404 in the error shape. */
+export const apiNotFound: RequestHandler = (req, res) => {
+  res.status(404).json(body('not_found', `No route for ${req.method} ${req.path}`));
+};
+
+function isDbDown(err: unknown): boolean {
+  if (err instanceof ConnectionError || err instanceof TimeoutError) return true;
+  const e = err as { name?: string; original?: { code?: string }; parent?: { code?: string }; code?: string };
+  const code = e?.original?.code ?? e?.parent?.code ?? e?.code ?? '';
+  return /ECONNREFUSED|ER_GET_CONNECTION_TIMEOUT|ER_CONNECTION_TIMEOUT|ER_SOCKET_UNEXPECTED_CLOSE|ECONNRESET|PROTOCOL_CONNECTION_LOST|ER_CONNECTION_ALREADY_CLOSED|ER_POOL_ALREADY_CLOSED/.test(code)
+    || e?.name === 'SequelizeConnectionAcquireTimeoutError';
+}
+
+/** One error middleware, registered last: every failure leaves as `{ error: { code, message, details? } }`. */
+export function errorHandler(showStack: boolean): ErrorRequestHandler {
+  return (err, req, res, _next) => {
+    if (res.headersSent) return void req.socket.destroy();
+    if (err instanceof AppError) return void res.status(err.status).json(body(err.code, err.message, err.details));
+    if (err instanceof ZodError) {
+      const details = err.issues.map((i) => ({ path: i.path.map(String).join('.'), message: i.message, code: i.code }));
+      const first = details[0];
+      return void res.status(400).json(body('validation_failed', first ? `${first.path || 'input'}: ${first.message}` : 'Invalid input.', details));
+    }
+    const status = (err as { status?: number; statusCode?: number }).status ?? (err as { statusCode?: number }).statusCode;
+    const type = (err as { type?: string }).type;
+    if (type === 'entity.parse.failed') return void res.status(400).json(body('malformed_json', 'The request body is not valid JSON.'));
+    if (type === 'entity.too.large') return void res.status(413).json(body('payload_too_large', 'The request body is too large.'));
+    if (type === 'encoding.unsupported' || type === 'charset.unsupported') return void res.status(415).json(body('unsupported_encoding', 'Unsupported body encoding.'));
+    if (status && status >= 400 && status < 500) return void res.status(status).json(body('bad_request', (err as Error).message || 'Bad request.'));
+    if (err instanceof UniqueConstraintError) return void res.status(409).json(body('conflict', 'That already exists.'));
+    if (err instanceof ForeignKeyConstraintError) return void res.status(409).json(body('conflict', 'A referenced record does not exist or is still in use.'));
+    if (isDbDown(err)) return void res.status(503).json(body('db_unavailable', 'The database is not reachable; try again shortly.'));
+    req.log?.error({ err }, 'unhandled error');
+    const message = showStack && err instanceof Error ? `${err.message}\n${err.stack}` : 'Something went wrong on our side.';
+    if (err instanceof BaseError) return void res.status(500).json(body('internal_error', showStack ? err.message : message));
+    res.status(500).json(body('internal_error', message));
+  };
+}

@@ -1,0 +1,37 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import type { Role } from '@shared/policies.ts';
+
+export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
+  declare id: CreationOptional<number>;
+  declare githubId: string;
+  declare login: string;
+  declare name: string | null;
+  declare email: string | null;
+  declare avatarUrl: string | null;
+  declare role: CreationOptional<Role>;
+  declare suspendedAt: CreationOptional<Date | null>;
+  declare mailOptOut: CreationOptional<boolean>;
+  declare lastSignInAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    User.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        githubId: { type: DataTypes.STRING(40), allowNull: false, unique: true },
+        login: { type: DataTypes.STRING(64), allowNull: false, unique: true },
+        name: DataTypes.STRING(120),
+        email: DataTypes.STRING(254),
+        avatarUrl: DataTypes.STRING(500),
+        role: { type: DataTypes.ENUM('maker', 'moderator', 'admin'), allowNull: false, defaultValue: 'maker' },
+        suspendedAt: DataTypes.DATE,
+        mailOptOut: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        lastSignInAt: DataTypes.DATE,
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'users', modelName: 'User', underscored: true },
+    );
+  }
+}

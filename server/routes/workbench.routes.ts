@@ -1,0 +1,6 @@
+import { Router } from 'express';
+
+export function workbenchRoutes(): Router {
+  const r = Router();
+  return r;
+}

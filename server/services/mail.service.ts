@@ -1,0 +1,51 @@
+import nodemailer, { type Transporter } from 'nodemailer';
+import type { Logger } from '../logger.ts';
+
+export interface OutgoingMail {
+  to: string;
+  subject: string;
+  text: string;
+  html: string;
+}
+
+export interface Mailer {
+  /** Send without ever throwing into the caller: a failed send is logged, not fatal. */
+  send(mail: OutgoingMail): Promise<boolean>;
+  close(): void;
+}
+
+/** nodemailer over SMTP (the local catcher in development and tests). */
+export function createMailer(smtpUrl: string, from: string, log: Logger): Mailer {
+  const transport: Transporter = nodemailer.createTransport(smtpUrl);
+  return {
+    async send(mail) {
+      try {
+        await transport.sendMail({ from, ...mail });
+        return true;
+      } catch (err) {
+        log.warn({ err, to: mail.to, subject: mail.subject }, 'mail send failed');
+        return false;
+      }
+    },
+    close: () => transport.close(),
+  };
+}
+
+const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
+
+/** The first-sign-in greeting, in plain text and HTML. */
+export function welcomeMail(to: string, login: string, appUrl: string): OutgoingMail {
+  const text = [
+    `Hello ${login},`,
+    '',
+    'Welcome to Scanwright. You can now write build logs, record calibration runs for your actuators,',
+    'propose parts for the registry and post listings on the exchange.',
+    '',
+    `Start here: ${appUrl}`,
+    '',
+    'Piezo drivers run at tens to hundreds of volts and piezo elements hold charge: follow local',
+    'electrical codes and qualified practice whenever you build or measure.',
+  ].join('\n');
+  const html = `<p>Hello ${escapeHtml(login)},</p><p>Welcome to Scanwright. You can now write build logs, record calibration runs for your actuators, propose parts for the registry and post listings on the exchange.</p><p><a href="${escapeHtml(appUrl)}">Open Scanwright</a></p><p style="color:#8a5a00">Piezo drivers run at tens to hundreds of volts and piezo elements hold charge: follow local electrical codes and qualified practice whenever you build or measure.</p>`;
+  return { to, subject: 'Welcome to Scanwright', text, html };
+}

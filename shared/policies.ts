@@ -1,0 +1,55 @@
+// Every authorization rule of Scanwright, as pure functions. The server enforces them in one place
+// (server/policies/authorize.ts); the client uses them only to hide controls it would refuse.
+
+export const ROLES = ['maker', 'moderator', 'admin'] as const;
+export type Role = (typeof ROLES)[number];
+
+/** The signed-in person as the rules see them; null for a visitor. */
+export interface Actor {
+  id: number;
+  role: Role;
+  suspended: boolean;
+}
+
+/** Whatever a rule needs to know about the thing acted on. */
+export interface Resource {
+  ownerId?: number | null;
+  userId?: number;
+}
+
+type Rule = (actor: Actor, resource?: Resource) => boolean;
+
+const RANK: Record<Role, number> = { maker: 1, moderator: 2, admin: 3 };
+
+/** At least this role (admins can do what moderators can, moderators what makers can). */
+export const hasRole = (role: Role): Rule => (actor) => RANK[actor.role] >= RANK[role];
+/** The actor owns the resource. */
+export const isOwner: Rule = (actor, resource) => resource?.ownerId != null && resource.ownerId === actor.id;
+/** The resource is the actor's own account. */
+export const isSelf: Rule = (actor, resource) => resource?.userId === actor.id;
+export const and = (...rules: Rule[]): Rule => (a, r) => rules.every((rule) => rule(a, r));
+export const or = (...rules: Rule[]): Rule => (a, r) => rules.some((rule) => rule(a, r));
+export const not = (rule: Rule): Rule => (a, r) => !rule(a, r);
+const active: Rule = (actor) => !actor.suspended;
+
+const rules = {
+  /** Anything a signed-in maker may write: builds, runs, listings, reports. */
+  'content.create': and(active, hasRole('maker')),
+  /** Edit something one owns (moderators may edit for upkeep). */
+  'content.update': and(active, or(isOwner, hasRole('moderator'))),
+  'account.update-settings': and(active, isSelf),
+  'review.access': and(active, hasRole('moderator')),
+  'user.list': and(active, hasRole('admin')),
+  /** Admins change others' roles, never their own (so the last admin cannot lock everyone out). */
+  'user.set-role': and(active, hasRole('admin'), not(isSelf)),
+  'user.suspend': and(active, hasRole('admin'), not(isSelf)),
+} satisfies Record<string, Rule>;
+
+export type Action = keyof typeof rules;
+export const ACTIONS = Object.keys(rules) as Action[];
+
+/** Whether this actor may do this action on this resource; visitors may do none of the listed actions. */
+export function can(actor: Actor | null | undefined, action: Action, resource?: Resource): boolean {
+  if (!actor) return false;
+  return rules[action](actor, resource);
+}

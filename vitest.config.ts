@@ -1,0 +1,41 @@
+import { fileURLToPath } from 'node:url';
+import { defineConfig } from 'vitest/config';
+
+const fromRoot = (p: string) => fileURLToPath(new URL(p, import.meta.url));
+const alias = { '@/': fromRoot('./src/'), '@shared/': fromRoot('./shared/') };
+
+export default defineConfig({
+  resolve: { alias },
+  test: {
+    env: { TZ: 'UTC' },
+    projects: [
+      {
+        resolve: { alias },
+        test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node' },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: 'api',
+          include: ['tests/api/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/support/global-setup.ts'],
+          testTimeout: 20000,
+          hookTimeout: 30000,
+        },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: 'browser',
+          include: ['tests/browser/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/support/global-setup.ts', 'tests/support/browser-setup.ts'],
+          testTimeout: 60000,
+          hookTimeout: 60000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});
