@@ -59,7 +59,16 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.disable('x-powered-by');
   app.set('query parser', 'simple');
   if (https) app.set('trust proxy', 1);
-  app.use(pinoHttp({ logger: log, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(
+    pinoHttp({
+      logger: log,
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+      serializers: {
+        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+      },
+    }),
+  );
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -79,6 +88,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
         },
       },
       crossOriginEmbedderPolicy: false,
+      strictTransportSecurity: https,
     }),
   );
   app.use(compression());

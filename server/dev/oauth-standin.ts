@@ -28,7 +28,7 @@ label{display:block;font-size:.9rem;margin-top:1rem}input[type=text]{width:100%;
 <p>This development stand-in replaces GitHub. Pick a demo account or type any handle to create a new maker.</p>
 ${error ? `<p class="err" role="alert">${esc(error)}</p>` : ''}
 <form method="get" action="/login/oauth/authorize">${hidden}<div class="grid">${buttons}</div>
-<label for="login">Another handle</label><input id="login" type="text" name="login" autocomplete="off" pattern="[A-Za-z0-9-]{1,39}">
+<label for="handle">Another handle</label><input id="handle" type="text" name="handle" autocomplete="off" pattern="[A-Za-z0-9-]{1,39}">
 <button class="go" type="submit">Continue</button></form></main></body></html>`;
 }
 
@@ -47,10 +47,10 @@ export async function startOAuthStandIn(port: number): Promise<OAuthStandIn> {
   app.use(express.json());
 
   app.get('/login/oauth/authorize', (req, res) => {
-    const q = new URLSearchParams(req.query as Record<string, string>);
+    const q = new URL(req.originalUrl, 'http://stand-in').searchParams;
     const redirect = q.get('redirect_uri');
     if (!redirect) return void res.status(400).send('redirect_uri is required');
-    const login = (q.get('login') ?? '').trim();
+    const login = (q.get('login') || q.get('handle') || '').trim();
     if (!login) return void res.type('html').send(pickerPage(q));
     if (!HANDLE.test(login)) return void res.status(400).type('html').send(pickerPage(q, 'Handles use letters, digits and single hyphens (max 39).'));
     const code = randomBytes(16).toString('hex');
@@ -60,6 +60,8 @@ export async function startOAuthStandIn(port: number): Promise<OAuthStandIn> {
     if (q.get('state')) target.searchParams.set('state', q.get('state')!);
     res.redirect(302, target.toString());
   });
+
+  app.get('/favicon.ico', (_req, res) => void res.status(204).end());
 
   app.post('/login/oauth/access_token', (req, res) => {
     const code = String(req.body?.code ?? '');

@@ -32,8 +32,8 @@ export interface LineFit {
  * so this loop stays branch-free and allocation-free for million-point records.
  */
 export function fitLineColumns(
-  x: ArrayLike<number>,
-  y: ArrayLike<number>,
+  x: Float64Array,
+  y: Float64Array,
   n: number,
   model: FitModel,
   residualsOut?: Float64Array,
@@ -55,8 +55,8 @@ export function fitLineColumns(
 }
 
 function fitWithIntercept(
-  x: ArrayLike<number>,
-  y: ArrayLike<number>,
+  x: Float64Array,
+  y: Float64Array,
   n: number,
   meanX: number,
   meanY: number,
@@ -114,8 +114,8 @@ function fitWithIntercept(
 }
 
 function fitThroughOrigin(
-  x: ArrayLike<number>,
-  y: ArrayLike<number>,
+  x: Float64Array,
+  y: Float64Array,
   n: number,
   xMin: number,
   xMax: number,

@@ -1,0 +1,106 @@
+// Benchmark of the gain fit: 1,000,000 points with up/down sweeps and seeded noise.
+// Run: node --import tsx scripts/bench-fit.ts   (npm run bench:fit)
+import { performance } from 'node:perf_hooks';
+import {
+  fitCalibration,
+  fitCalibrationColumns,
+  fitCalibrationInUnits,
+  type CalibrationPoint,
+  type RecordedCalibrationPoint,
+} from '../shared/workbench/calibration-fit.ts';
+
+const POINTS = 1_000_000;
+const WARMUP_RUNS = 5;
+const TIMED_RUNS = 15;
+const TARGET_MEDIAN_MS = 100;
+const LEVELS = 1001; // 0 … 150 V in 0.15 V steps
+const MAX_V = 150;
+const GAIN_NM_PER_V = 102.6;
+const HALF_LOOP_NM = 300;
+const NOISE_SD_NM = 2;
+
+// mulberry32 PRNG (public-domain 32-bit generator) and Box–Muller for normal noise.
+function mulberry32(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+function buildPoints(): CalibrationPoint[] {
+  const rand = mulberry32(20240611);
+  const gauss = (): number => {
+    const u = 1 - rand();
+    return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * rand());
+  };
+  const points: CalibrationPoint[] = new Array(POINTS);
+  for (let i = 0; i < POINTS; i++) {
+    const step = i % (2 * LEVELS);
+    const up = step < LEVELS;
+    const level = up ? step : 2 * LEVELS - 1 - step;
+    const volts = (level * MAX_V) / (LEVELS - 1);
+    const loop = HALF_LOOP_NM * Math.sin((Math.PI * volts) / MAX_V) * (up ? -1 : 1);
+    points[i] = {
+      volts,
+      displacementNm: GAIN_NM_PER_V * volts + loop + NOISE_SD_NM * gauss(),
+      sweep: up ? 'up' : 'down',
+    };
+  }
+  return points;
+}
+
+function percentile(sorted: number[], q: number): number {
+  const idx = Math.min(sorted.length - 1, Math.ceil(q * sorted.length) - 1);
+  return sorted[Math.max(0, idx)];
+}
+
+function time(label: string, run: () => unknown): number {
+  for (let i = 0; i < WARMUP_RUNS; i++) run();
+  const ms: number[] = [];
+  for (let i = 0; i < TIMED_RUNS; i++) {
+    const t0 = performance.now();
+    run();
+    ms.push(performance.now() - t0);
+  }
+  ms.sort((a, b) => a - b);
+  const median = percentile(ms, 0.5);
+  console.log(
+    `${label.padEnd(34)} median ${median.toFixed(1).padStart(6)} ms   p90 ${percentile(ms, 0.9)
+      .toFixed(1)
+      .padStart(6)} ms   (${TIMED_RUNS} runs after ${WARMUP_RUNS} warm-up)`,
+  );
+  return median;
+}
+
+const points = buildPoints();
+const recorded: RecordedCalibrationPoint[] = points.map((p) => ({
+  volts: p.volts * 1000,
+  displacement: p.displacementNm / 1000,
+  sweep: p.sweep,
+}));
+const columns = {
+  voltsV: Float64Array.from(points, (p) => p.volts),
+  displacementNm: Float64Array.from(points, (p) => p.displacementNm),
+  sweep: Uint8Array.from(points, (p) => (p.sweep === 'up' ? 1 : 2)),
+};
+const unlimited = { maxPoints: Infinity };
+
+const sample = fitCalibration(points, 'intercept', unlimited);
+console.log(
+  `fit of ${POINTS.toLocaleString('en')} points: gain ${sample.gainNmPerV.toFixed(3)} nm/V ` +
+    `[${sample.gainCi95NmPerV.map((g) => g.toFixed(3)).join(', ')}], ` +
+    `nonlinearity ${sample.nonlinearityPctFs?.toFixed(3)} %FS, hysteresis ${sample.hysteresisPctFs?.toFixed(3)} %FS`,
+);
+const median = time('fitCalibration (objects, nm)', () => fitCalibration(points, 'intercept', unlimited));
+time('fitCalibration origin model', () => fitCalibration(points, 'origin', unlimited));
+time('fitCalibrationInUnits (mV, µm)', () =>
+  fitCalibrationInUnits({ points: recorded, voltageUnit: 'mV', displacementUnit: 'um' }, unlimited),
+);
+time('fitCalibrationColumns (typed)', () => fitCalibrationColumns(columns, 'intercept', unlimited));
+console.log(
+  `target: median ≤ ${TARGET_MEDIAN_MS} ms for fitCalibration → ${median <= TARGET_MEDIAN_MS ? 'met' : 'NOT met'}`,
+);

@@ -1,0 +1,32 @@
+import { createBrowserRouter } from 'react-router-dom';
+import { AppShell } from './layout/app-shell.tsx';
+import { RouteError } from '@/components/ui/route-error.tsx';
+import { queryClient } from '@/lib/query-client.ts';
+import { sessionQuery } from '@/features/session/api/get-session.ts';
+import { workbenchRoutes } from './routes/workbench/workbench-routes.tsx';
+
+/** Each page is its own chunk (route-level code splitting). */
+export const router = createBrowserRouter([
+  {
+    path: '/',
+    element: <AppShell />,
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <p className="p-6 text-ink-soft">Loading Scanwright…</p>,
+    loader: () => queryClient.ensureQueryData(sessionQuery),
+    children: [
+      {
+        errorElement: <RouteError />,
+        children: [
+          { index: true, lazy: async () => ({ Component: (await import('./routes/home.tsx')).HomePage }) },
+          { path: 'builds/*', lazy: async () => ({ Component: (await import('./routes/coming-soon.tsx')).BuildsComingSoon }) },
+          { path: 'parts/*', lazy: async () => ({ Component: (await import('./routes/coming-soon.tsx')).PartsComingSoon }) },
+          { path: 'exchange/*', lazy: async () => ({ Component: (await import('./routes/coming-soon.tsx')).ExchangeComingSoon }) },
+          { path: 'review/*', lazy: async () => ({ Component: (await import('./routes/coming-soon.tsx')).ReviewComingSoon }) },
+          { path: 'admin', lazy: async () => ({ Component: (await import('./routes/admin/users.tsx')).AdminUsersPage }) },
+          workbenchRoutes,
+          { path: '*', lazy: async () => ({ Component: (await import('./routes/not-found.tsx')).NotFoundPage }) },
+        ],
+      },
+    ],
+  },
+]);

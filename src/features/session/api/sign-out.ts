@@ -1,0 +1,14 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '@/lib/api-client.ts';
+
+/** End the session on the server, then forget everything cached for that user. */
+export function useSignOut() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: () => api.post<void>('/auth/logout'),
+    onSuccess: async () => {
+      qc.removeQueries({ predicate: (q) => q.queryKey[0] !== 'session' });
+      await qc.refetchQueries({ queryKey: ['session'] });
+    },
+  });
+}

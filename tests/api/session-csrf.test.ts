@@ -1,0 +1,62 @@
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import request from 'supertest';
+import { startTestApp, type TestApp } from '../support/test-app.ts';
+import { signIn, visitor } from '../support/login.ts';
+import { createUser } from '../support/factories.ts';
+
+describe('GET /api/session', () => {
+  let t: TestApp;
+  beforeAll(async () => { t = await startTestApp(); });
+  afterAll(async () => { await t.close(); });
+
+  test('when a visitor asks, then user is null and a CSRF token is issued in an httpOnly SameSite=Lax cookie session', async () => {
+    const res = await request(t.app).get('/api/session');
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({ user: null, csrfToken: expect.stringMatching(/^[\w-]{20,}$/) });
+    const cookie = String(res.headers['set-cookie']);
+    expect(cookie).toMatch(/HttpOnly/);
+    expect(cookie).toMatch(/SameSite=Lax/);
+    expect(cookie).not.toMatch(/Secure/);
+  });
+
+  test('when signed in, then the user carries id, login, name, avatarUrl and role', async () => {
+    const u = await createUser();
+    const agent = await signIn(t, u.login);
+    const res = await agent.get('/api/session');
+    expect(res.body.user).toEqual({ id: u.id, login: u.login, name: u.login, avatarUrl: null, role: 'maker' });
+  });
+});
+
+describe('CSRF', () => {
+  let t: TestApp;
+  beforeAll(async () => { t = await startTestApp(); });
+  afterAll(async () => { await t.close(); });
+
+  test('when a write carries no token, then 403 csrf_failed', async () => {
+    const admin = await createUser({ role: 'admin' });
+    const target = await createUser();
+    const agent = await signIn(t, admin.login);
+    const res = await agent.patch(`/api/admin/users/${target.id}/role`).send({ role: 'moderator' });
+    expect(res.status).toBe(403);
+    expect(res.body).toMatchObject({ error: { code: 'csrf_failed' } });
+    await target.reload();
+    expect(target.role).toBe('maker');
+  });
+
+  test('when a write carries a wrong token, then 403', async () => {
+    const agent = await visitor(t);
+    const res = await agent.post('/auth/logout').set('X-CSRF-Token', 'x'.repeat(agent.csrf.length));
+    expect(res.status).toBe(403);
+  });
+
+  test('when logout carries the token, then 204 and the session is gone server-side', async () => {
+    const u = await createUser();
+    const agent = await signIn(t, u.login);
+    const cookie = (await agent.get('/api/session')).request.cookies;
+    await agent.post('/auth/logout').set('X-CSRF-Token', agent.csrf).expect(204);
+    expect((await agent.get('/api/session')).body.user).toBeNull();
+    // Replaying the old cookie does not bring the session back.
+    const replay = await request(t.app).get('/api/session').set('Cookie', cookie);
+    expect(replay.body.user).toBeNull();
+  });
+});

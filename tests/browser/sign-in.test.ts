@@ -1,0 +1,58 @@
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
+
+describe('journey: a moderator signs in and out', () => {
+  let live: LiveApp;
+  let browser: Awaited<ReturnType<typeof launchBrowser>>;
+  beforeAll(async () => {
+    live = await startLiveApp();
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await live?.close();
+  });
+
+  test('when demo-moderator signs in through the stand-in page, then the review desk shows in the navigation, and sign-out removes it', async () => {
+    const { page } = browser;
+    const errors: string[] = [];
+    page.on('pageerror', (e) => errors.push(e.message));
+    page.on('console', (m) => { if (m.type() === 'error') errors.push(m.text()); });
+
+    await page.goto(live.baseUrl);
+    await expect(page.getByRole('heading', { level: 1 }).textContent()).resolves.toContain('Measure it once');
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    expect(await nav.getByRole('link', { name: 'Review desk' }).count()).toBe(0);
+    await page.screenshot({ path: `${SCREENSHOTS}/home-visitor.png`, fullPage: true });
+
+    await page.getByRole('link', { name: 'Sign in', exact: true }).first().click();
+    await page.getByRole('heading', { name: /Sign in \(local stand-in\)/ }).waitFor();
+    await page.screenshot({ path: `${SCREENSHOTS}/stand-in-picker.png` });
+    await page.getByRole('button', { name: /demo-moderator/ }).click();
+
+    await page.waitForURL(`${live.baseUrl}/`);
+    await page.screenshot({ path: `${SCREENSHOTS}/after-sign-in.png`, fullPage: true });
+    await page.getByTestId('signed-in-login').waitFor();
+    expect(await page.getByTestId('signed-in-login').textContent()).toBe('demo-moderator');
+    expect(await page.getByTestId('signed-in-role').textContent()).toBe('Moderator');
+    await nav.getByRole('link', { name: 'Review desk' }).waitFor();
+    expect(await nav.getByRole('link', { name: 'Admin' }).count()).toBe(0);
+    await page.screenshot({ path: `${SCREENSHOTS}/home-moderator.png`, fullPage: true });
+
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.getByRole('link', { name: 'Sign in', exact: true }).first().waitFor();
+    expect(await nav.getByRole('link', { name: 'Review desk' }).count()).toBe(0);
+    expect(errors).toEqual([]);
+  });
+
+  test('when a phone-width visitor opens the menu, then the navigation is reachable', async () => {
+    const { page } = browser;
+    await page.setViewportSize({ width: 390, height: 800 });
+    await page.goto(`${live.baseUrl}/no/such/page`);
+    await page.getByRole('heading', { name: 'No page at this address' }).waitFor();
+    await page.getByRole('button', { name: 'Menu' }).click();
+    await page.locator('#mobile-nav').getByRole('link', { name: 'Workbench' }).waitFor();
+    await page.screenshot({ path: `${SCREENSHOTS}/phone-menu-404.png`, fullPage: true });
+    await page.setViewportSize({ width: 1280, height: 860 });
+  });
+});

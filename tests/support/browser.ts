@@ -1,0 +1,60 @@
+import { mkdtempSync, rmSync, mkdirSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { createServer, type AddressInfo } from 'node:net';
+import type { Server } from 'node:http';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { startTestApp, type TestApp } from './test-app.ts';
+import { seedDemoOnce } from '../../server/db/seed/demo.ts';
+
+const freePort = () => new Promise<number>((resolve) => {
+  const s = createServer();
+  s.listen(0, '127.0.0.1', () => { const { port } = s.address() as AddressInfo; s.close(() => resolve(port)); });
+});
+
+export interface LiveApp {
+  t: TestApp;
+  baseUrl: string;
+  close(): Promise<void>;
+}
+
+/** The real built app (dist/client) listening on a free loopback port, demo accounts seeded. */
+export async function startLiveApp(): Promise<LiveApp> {
+  const port = await freePort();
+  const baseUrl = `http://127.0.0.1:${port}`;
+  const t = await startTestApp({ publicUrl: baseUrl, port });
+  await seedDemoOnce(t.handle.sequelize);
+  const server: Server = await new Promise((resolve) => { const s = t.app.listen(port, '127.0.0.1', () => resolve(s)); });
+  return {
+    t,
+    baseUrl,
+    async close() {
+      server.closeAllConnections();
+      await new Promise((r) => server.close(r));
+      await t.close();
+    },
+  };
+}
+
+export const SCREENSHOTS = 'test-output/screenshots';
+
+/** Debian's chromium through playwright-core, with a fresh profile per journey. */
+export async function launchBrowser(): Promise<{ context: BrowserContext; page: Page; close(): Promise<void> }> {
+  mkdirSync(SCREENSHOTS, { recursive: true });
+  const profile = mkdtempSync(join(tmpdir(), 'scanwright-chromium-'));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: '/usr/bin/chromium',
+    headless: true,
+    viewport: { width: 1280, height: 860 },
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--disable-dev-shm-usage'],
+  });
+  const page = context.pages()[0] ?? (await context.newPage());
+  return {
+    context,
+    page,
+    async close() {
+      await context.close();
+      rmSync(profile, { recursive: true, force: true });
+    },
+  };
+}
