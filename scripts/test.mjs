@@ -7,6 +7,7 @@ import { join } from 'node:path';
 import { createServer } from 'node:net';
 import { ensureDebianPackages, ensureNodeModules } from './lib/setup.mjs';
 import { initDataDir, startServer, ensureDatabase, stopServer } from './lib/mariadb.mjs';
+import { clientBuildIsStale } from './lib/paths.mjs';
 
 ensureDebianPackages({ chromium: true });
 ensureNodeModules();
@@ -53,10 +54,14 @@ try {
   };
   const migrate = spawnSync(process.execPath, ['--import', 'tsx', 'server/cli/migrate.ts'], { stdio: 'inherit', env });
   if (migrate.status !== 0) throw new Error('migrations failed');
-  const build = spawnSync('npx', ['vite', 'build', '--logLevel', 'warn'], { stdio: 'inherit', env });
-  if (build.status !== 0) throw new Error('client build failed');
-  mkdirSync('test-output', { recursive: true });
   const extra = process.argv.slice(2);
+  const projects = extra.flatMap((a, i) => (a === '--project' ? [extra[i + 1]] : a.startsWith('--project=') ? [a.slice(10)] : []));
+  const needsClient = projects.length === 0 || projects.includes('browser');
+  if (needsClient && clientBuildIsStale()) {
+    const build = spawnSync('npx', ['vite', 'build', '--logLevel', 'warn'], { stdio: 'inherit', env });
+    if (build.status !== 0) throw new Error('client build failed');
+  }
+  mkdirSync('test-output', { recursive: true });
   status = await runAsync('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', '--outputFile.json=test-output/vitest.json', ...extra], env);
   if (existsSync('test-output/vitest.json')) {
     const r = JSON.parse(readFileSync('test-output/vitest.json', 'utf8'));

@@ -21,6 +21,7 @@ import { sessionRoutes } from './routes/session.routes.ts';
 import { authRoutes } from './routes/auth.routes.ts';
 import { adminRoutes } from './routes/admin.routes.ts';
 import { workbenchRoutes } from './routes/workbench.routes.ts';
+import { photoRoutes } from './routes/photo.routes.ts';
 
 export interface AppHandle {
   app: Express;
@@ -98,6 +99,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
     app.use('/assets', express.static(resolve(dist, 'assets'), { immutable: true, maxAge: '1y', index: false, fallthrough: false }));
     app.use(express.static(dist, { index: false, maxAge: '1h' }));
   }
+  app.use('/uploads', express.static(resolve(config.uploadsDir), { index: false, immutable: true, maxAge: '30d', fallthrough: false }));
   app.use(healthRoutes(sequelize));
 
   app.use(['/api/workbench', '/api/actuators'], express.json({ limit: '12mb' }));
@@ -121,6 +123,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(authRoutes(passport, limiter(config.rateLimits, { windowMs: 60_000, limit: 20, what: 'sign-in attempts' })));
   app.use(adminRoutes());
   app.use(workbenchRoutes());
+  app.use(photoRoutes(config));
   app.use(['/api', '/auth'], apiNotFound);
 
   const indexHtml = resolve(dist, 'index.html');

@@ -38,6 +38,10 @@ const rules = {
   /** Edit something one owns (moderators may edit for upkeep). */
   'content.update': and(active, or(isOwner, hasRole('moderator'))),
   'account.update-settings': and(active, isSelf),
+  /** Builds and everything inside them (entries, photos, actuators, runs) are edited by their owner only. */
+  'build.edit': and(active, isOwner),
+  /** Unpublished builds are visible to their owner and to moderators (who review them). */
+  'build.view-unpublished': or(isOwner, hasRole('moderator')),
   'review.access': and(active, hasRole('moderator')),
   'user.list': and(active, hasRole('admin')),
   /** Admins change others' roles, never their own (so the last admin cannot lock everyone out). */

@@ -3,6 +3,9 @@ import type { QueryInterface, Sequelize } from 'sequelize';
 import * as createUsers from './migrations/20261201000100-create-users.ts';
 import * as createSessions from './migrations/20261201000200-create-sessions.ts';
 import * as createAppMeta from './migrations/20261201000300-create-app-meta.ts';
+import * as createParts from './migrations/20261201001000-create-parts.ts';
+import * as createBuilds from './migrations/20261201001100-create-builds.ts';
+import * as createActuatorsAndRuns from './migrations/20261201001200-create-actuators-and-runs.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -11,6 +14,9 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261201000100-create-users', createUsers],
   ['20261201000200-create-sessions', createSessions],
   ['20261201000300-create-app-meta', createAppMeta],
+  ['20261201001000-create-parts', createParts],
+  ['20261201001100-create-builds', createBuilds],
+  ['20261201001200-create-actuators-and-runs', createActuatorsAndRuns],
 ];
 
 /** Umzug over our migration list; the only source of the schema, in tests too. */

@@ -19,6 +19,7 @@ export const fitPoint = z.strictObject({
   displacement: z.number(),
   sweep: z.enum(['up', 'down']).optional(),
 });
+/** Parsed (defaults applied) FitPoint as the service and the form receive it. */
 export type FitPoint = z.infer<typeof fitPoint>;
 
 /** Body of the gain-fit API and the fit form. */
@@ -28,6 +29,7 @@ export const fitInput = z.strictObject({
   displacementUnit: z.enum(displacementUnits),
   model: z.enum(['intercept', 'origin']).default('intercept'),
 });
+/** Parsed (defaults applied) FitInput as the service and the form receive it. */
 export type FitInput = z.infer<typeof fitInput>;
 
 /** What the fit API returns (a subset of CalibrationFit; r2 and the %FS figures may be null). */
@@ -51,6 +53,7 @@ export const peakToPeakInput = z.strictObject({
   displacementResolutionNm: nonNegative,
   voltsResolutionV: nonNegative.optional(),
 });
+/** Parsed (defaults applied) PeakToPeakInput as the service and the form receive it. */
 export type PeakToPeakInput = z.infer<typeof peakToPeakInput>;
 
 /** Step-and-hold record for the creep fit. */
@@ -60,6 +63,7 @@ export const creepInput = z.strictObject({
     .min(3)
     .max(MAX_WORKBENCH_SAMPLES),
 });
+/** Parsed (defaults applied) CreepInput as the service and the form receive it. */
 export type CreepInput = z.infer<typeof creepInput>;
 
 /** A built-in material key or the user's own d constants (pm/V). */
@@ -84,6 +88,7 @@ export const expectedGainInput = z.discriminatedUnion('actuator', [
     ...tubeGeometry,
   }),
 ]);
+/** Parsed (defaults applied) ExpectedGainInput as the service and the form receive it. */
 export type ExpectedGainInput = z.infer<typeof expectedGainInput>;
 
 const gainRow = z.tuple([z.number(), z.number()]);
@@ -99,6 +104,7 @@ export const mixingInput = z.strictObject({
   limits: driveLimits,
   target: z.strictObject({ xNm: z.number(), yNm: z.number() }).optional(),
 });
+/** Parsed (defaults applied) MixingInput as the service and the form receive it. */
 export type MixingInput = z.infer<typeof mixingInput>;
 
 /** Grid of drive pairs and measured tip positions for fitting G. */
@@ -108,6 +114,7 @@ export const gainMatrixFitInput = z.strictObject({
     .min(3)
     .max(MAX_WORKBENCH_SAMPLES),
 });
+/** Parsed (defaults applied) GainMatrixFitInput as the service and the form receive it. */
 export type GainMatrixFitInput = z.infer<typeof gainMatrixFitInput>;
 
 /** Scan planner: drive chain, raster, and optional resonance and wanted step. */
@@ -123,6 +130,7 @@ export const scanPlanInput = z.strictObject({
   resonanceHz: positive.optional(),
   wantedStepNm: positive.optional(),
 });
+/** Parsed (defaults applied) ScanPlanInput as the service and the form receive it. */
 export type ScanPlanInput = z.infer<typeof scanPlanInput>;
 
 /** Cantilever resonance (SI units) with an optional tip mass. */
@@ -134,6 +142,7 @@ export const resonanceInput = z.strictObject({
   densityKgPerM3: positive,
   tipMassKg: nonNegative.optional(),
 });
+/** Parsed (defaults applied) ResonanceInput as the service and the form receive it. */
 export type ResonanceInput = z.infer<typeof resonanceInput>;
 
 /** Sine drive into a capacitive load (SI units). */
@@ -142,10 +151,12 @@ export const driveCurrentInput = z.strictObject({
   amplitudeV: positive,
   frequencyHz: nonNegative,
 });
+/** Parsed (defaults applied) DriveCurrentInput as the service and the form receive it. */
 export type DriveCurrentInput = z.infer<typeof driveCurrentInput>;
 
 /** Tunnelling sensitivity from a barrier height in eV. */
 export const tunnellingInput = z.strictObject({ workFunctionEv: positive.max(20) });
+/** Parsed (defaults applied) TunnellingInput as the service and the form receive it. */
 export type TunnellingInput = z.infer<typeof tunnellingInput>;
 
 /** Unit converter. */
@@ -154,4 +165,5 @@ export const unitConversionInput = z.strictObject({
   from: z.enum(displacementUnits),
   to: z.enum(displacementUnits),
 });
+/** Parsed (defaults applied) UnitConversionInput as the service and the form receive it. */
 export type UnitConversionInput = z.infer<typeof unitConversionInput>;

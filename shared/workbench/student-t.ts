@@ -1,15 +1,17 @@
 // Student t quantiles for the 95 % interval on a fitted gain.
 //
-// Method: the two-sided tail of Student's t is a regularized incomplete beta function,
-//   P(|T| > t) = I_x(ν/2, 1/2),  x = ν/(ν + t²)   [S: Abramowitz & Stegun 26.7.1 with 26.5.27],
-// evaluated with the continued fraction of A&S 26.5.8 by the modified Lentz method, as in
-// Numerical Recipes (Press et al., 2nd ed. 1992, §6.4 betai/betacf). The quantile is found by
-// Newton's method on that tail (derivative −2·pdf) safeguarded by bisection, started from the
-// Cornish–Fisher expansion A&S 26.7.5. For ν > 1000 the expansion itself is used: its first
-// omitted term is O(ν⁻⁵) < 1e-13. The normal quantile (ν = ∞) inverts erfc(z/√2) = Q(1/2, z²/2),
-// the regularized incomplete gamma of Numerical Recipes §6.2 (gser/gcf), by the same Newton scheme.
-// ln Γ: Lanczos (1964) approximation with g = 7, n = 9 (coefficients as tabulated by P. Godfrey)
-// [memory].
+// Method (published algorithms; equation and section numbers are [memory], the results are
+// checked against the printed NIST/SEMATECH table and by quadrature in the tests):
+// - The two-sided tail of Student's t is a regularized incomplete beta function,
+//   P(|T| > t) = I_x(ν/2, 1/2) with x = ν/(ν + t²) (Abramowitz & Stegun 26.7.1 / 26.5.27),
+//   evaluated by the continued fraction A&S 26.5.8 with the modified Lentz method, as in
+//   Numerical Recipes (Press et al., 2nd ed. 1992, §6.4 betai/betacf).
+// - The quantile solves tail(t) = 2(1 − p) by Newton's method (derivative −2·pdf), safeguarded by
+//   bisection, started from the Cornish–Fisher expansion A&S 26.7.5. For ν > 1000 the expansion
+//   itself is returned: its first omitted term is O(ν⁻⁵) < 1e-13.
+// - The normal quantile (ν = ∞) inverts erfc(z/√2) = Q(1/2, z²/2), the regularized incomplete
+//   gamma of Numerical Recipes §6.2 (gser/gcf), by the same Newton scheme from A&S 26.2.23.
+// - ln Γ: Lanczos (1964) approximation, g = 7, n = 9 (coefficients as tabulated by P. Godfrey).
 
 const EPS = 1e-16;
 const FPMIN = 1e-300;
@@ -75,7 +77,7 @@ function regularizedBeta(a: number, b: number, x: number, y: number, lnX: number
   return 1 - (front * betaContinuedFraction(b, a, y)) / b;
 }
 
-/** Two-sided tail P(|T| > t) of Student's t with df degrees of freedom (A&S 26.7.1). */
+/** Two-sided tail P(|T| > t) of Student's t with df degrees of freedom, via I_x(ν/2, 1/2). */
 export function studentTTwoSidedTail(t: number, df: number): number {
   if (!Number.isFinite(df)) return normalTwoSidedTail(t);
   const t2 = t * t;

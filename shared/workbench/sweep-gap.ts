@@ -1,7 +1,8 @@
 // Up/down sweep gap for the hysteresis figure: max over voltages present in both sweeps of
 // |mean x_up(V) − mean x_down(V)| [practice; how loop width is quoted]. Voltages are grouped by
 // exact value in an open-addressing hash table on the float's bits (typed arrays, no per-point
-// allocation): about 4× faster than a Map keyed by number on million-point records.
+// allocation): about twice as fast as a Map keyed by number on a million-point record (measured
+// 10 ms against 21 ms with 1001 voltage levels).
 
 const SWEEP_UP = 1;
 const SWEEP_DOWN = 2;

@@ -63,7 +63,7 @@ function mulberry32(seed: number): () => number {
   };
 }
 
-describe('fitCalibration against simple-statistics on seeded random data [S: simple-statistics 7.x as second reference]', () => {
+describe('fitCalibration against simple-statistics (npm) on seeded random data [calc: second reference, FIELD.md "Calibration fit"]', () => {
   it.each([1, 2, 3, 4, 5])('when seed %i, then slope, intercept, R² and residual SD agree to 1e-9', (seed) => {
     const rand = mulberry32(seed);
     const n = 20 + Math.floor(rand() * 200);
@@ -122,7 +122,7 @@ describe('fitCalibration worked examples [calc]', () => {
     { volts: 2, displacementNm: 3 },
   ];
 
-  it('when three points are fitted, then gain, SE, CI, R², span and nonlinearity match hand values', () => {
+  it('when three points are fitted, then gain, SE, CI, R², span and nonlinearity match hand values (nonlinearity [S: ANSI/ISA-S37.1; least-squares variant practice])', () => {
     const fit = fitCalibration(points, 'intercept', { includeResiduals: true });
     expect(fit.gainNmPerV).toBeCloseTo(1.5, 14);
     expect(fit.interceptNm).toBeCloseTo(-1 / 6, 14);
@@ -140,7 +140,7 @@ describe('fitCalibration worked examples [calc]', () => {
     expect(fit.lineNm[1]).toBeCloseTo(3 - 1 / 6, 14);
   });
 
-  it('when up and down sweeps share voltages, then hysteresis is the largest gap of sweep means over the span', () => {
+  it('when up and down sweeps share voltages, then hysteresis is the largest gap of sweep means over the span [practice]', () => {
     // up: (0,0) (1,10) (1,12) (2,20) (3,30 up only); down: (2,20) (1,15) (0,2)
     const loop: CalibrationPoint[] = [
       { volts: 0, displacementNm: 0, sweep: 'up' },
@@ -241,15 +241,16 @@ describe('fitCalibrationInUnits and columns', () => {
 });
 
 describe('FitInputError', () => {
-  const codeOf = (run: () => unknown): string | undefined => {
+  const caught = (run: () => unknown): FitInputError | undefined => {
     try {
       run();
     } catch (error) {
-      if (error instanceof FitInputError) return error.code;
+      if (error instanceof FitInputError) return error;
       throw error;
     }
     return undefined;
   };
+  const codeOf = (run: () => unknown): string | undefined => caught(run)?.code;
   const p = (volts: number, displacementNm: number): CalibrationPoint => ({ volts, displacementNm });
 
   it('when fewer than 3 points, then too_few_points', () => {
@@ -259,12 +260,14 @@ describe('FitInputError', () => {
   it('when a value is NaN or infinite, then non_finite_value with its index and field', () => {
     expect(codeOf(() => fitCalibration([p(0, 0), p(NaN, 1), p(2, 2)]))).toBe('non_finite_value');
     expect(codeOf(() => fitCalibration([p(0, 0), p(1, Infinity), p(2, 2)]))).toBe('non_finite_value');
-    try {
-      fitCalibrationInUnits({ points: [{ volts: 0, displacement: 0 }, { volts: 1, displacement: 1 }, { volts: 2, displacement: -Infinity }], displacementUnit: 'nm' });
-    } catch (error) {
-      expect(error).toBeInstanceOf(FitInputError);
-      expect((error as FitInputError).details).toEqual({ index: 2, field: 'displacement' });
-    }
+    const error = caught(() =>
+      fitCalibrationInUnits({
+        points: [{ volts: 0, displacement: 0 }, { volts: 1, displacement: 1 }, { volts: 2, displacement: -Infinity }],
+        displacementUnit: 'nm',
+      }),
+    );
+    expect(error?.code).toBe('non_finite_value');
+    expect(error?.details).toEqual({ index: 2, field: 'displacement' });
   });
 
   it('when all voltages are equal, then voltages_all_equal (both models)', () => {
@@ -284,5 +287,6 @@ describe('FitInputError', () => {
         fitCalibrationInUnits({ points: [{ volts: 0, displacement: 0 }, { volts: 1, displacement: 1e305 }, { volts: 2, displacement: 0 }], displacementUnit: 'mil' }),
       ),
     ).toBe('numeric_overflow');
+    expect(codeOf(() => fitCalibration([p(0, 1e200), p(1, -1e200), p(2, 1e200)]))).toBe('numeric_overflow');
   });
 });

@@ -1,0 +1,48 @@
+import { z } from 'zod';
+import type { PartSummaryDto } from './part.ts';
+import type { RunDto } from './run.ts';
+
+export const ACTUATOR_AXES = ['X', 'Y', 'Z', 'XY'] as const;
+export type ActuatorAxis = (typeof ACTUATOR_AXES)[number];
+export const ACTUATOR_DRIVES = ['single', 'pair-in-phase', 'pair-anti-phase', 'quartered-tube'] as const;
+export type ActuatorDrive = (typeof ACTUATOR_DRIVES)[number];
+
+export const actuatorDriveLabels: Record<ActuatorDrive, string> = {
+  single: 'Single element',
+  'pair-in-phase': 'Pair, in phase',
+  'pair-anti-phase': 'Pair, anti-phase',
+  'quartered-tube': 'Quartered tube',
+};
+
+const optionalText = (max: number) => z.string().trim().max(max).optional();
+
+export const createActuatorInput = z.strictObject({
+  partId: z.number().int().positive(),
+  label: optionalText(120),
+  axis: z.enum(ACTUATOR_AXES),
+  drive: z.enum(ACTUATOR_DRIVES),
+  amplifier: optionalText(200),
+  maxVolts: z.number().positive().max(5000).optional(),
+  notes: optionalText(4000),
+});
+export type CreateActuatorInput = z.infer<typeof createActuatorInput>;
+
+export const updateActuatorInput = createActuatorInput.partial().refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change.' });
+export type UpdateActuatorInput = z.infer<typeof updateActuatorInput>;
+
+export const actuatorIdParams = z.strictObject({ actuatorId: z.coerce.number().int().positive() });
+
+/** An actuator with its part, its runs (newest first) and, where geometry allows, the expected gain. */
+export interface ActuatorDto {
+  id: number;
+  buildId: number;
+  label: string | null;
+  axis: ActuatorAxis;
+  drive: ActuatorDrive;
+  amplifier: string | null;
+  maxVolts: number | null;
+  notes: string | null;
+  part: PartSummaryDto;
+  expectedGain: { gainNmPerV: number; lowNmPerV: number; highNmPerV: number; basis: string } | null;
+  runs: RunDto[];
+}
