@@ -22,6 +22,9 @@ import { authRoutes } from './routes/auth.routes.ts';
 import { adminRoutes } from './routes/admin.routes.ts';
 import { workbenchRoutes } from './routes/workbench.routes.ts';
 import { photoRoutes } from './routes/photo.routes.ts';
+import { buildRoutes } from './routes/build.routes.ts';
+import { actuatorRoutes } from './routes/actuator.routes.ts';
+import { partRoutes } from './routes/part.routes.ts';
 
 export interface AppHandle {
   app: Express;
@@ -124,6 +127,9 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(adminRoutes());
   app.use(workbenchRoutes());
   app.use(photoRoutes(config));
+  app.use(buildRoutes());
+  app.use(actuatorRoutes());
+  app.use(partRoutes());
   app.use(['/api', '/auth'], apiNotFound);
 
   const indexHtml = resolve(dist, 'index.html');

@@ -42,6 +42,8 @@ const rules = {
   'build.edit': and(active, isOwner),
   /** Unpublished builds are visible to their owner and to moderators (who review them). */
   'build.view-unpublished': or(isOwner, hasRole('moderator')),
+  /** Parts not (yet) in the registry are visible to whoever proposed them and to moderators. */
+  'part.view-unlisted': or(isOwner, hasRole('moderator')),
   'review.access': and(active, hasRole('moderator')),
   'user.list': and(active, hasRole('admin')),
   /** Admins change others' roles, never their own (so the last admin cannot lock everyone out). */

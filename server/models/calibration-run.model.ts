@@ -36,7 +36,7 @@ export class CalibrationRun extends Model<InferAttributes<CalibrationRun>, Infer
   declare updatedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
-    const num = { type: DataTypes.DOUBLE, allowNull: true };
+    const num = () => ({ type: DataTypes.DOUBLE, allowNull: true });
     CalibrationRun.init(
       {
         id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
@@ -55,15 +55,15 @@ export class CalibrationRun extends Model<InferAttributes<CalibrationRun>, Infer
         pointsJson: { type: DataTypes.TEXT('long'), allowNull: false },
         pointCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         gainNmPerV: { type: DataTypes.DOUBLE, allowNull: false },
-        gainStdErrNmPerV: num,
-        gainCi95LoNmPerV: { ...num, field: 'gain_ci95_lo_nm_per_v' },
-        gainCi95HiNmPerV: { ...num, field: 'gain_ci95_hi_nm_per_v' },
+        gainStdErrNmPerV: num(),
+        gainCi95LoNmPerV: { ...num(), field: 'gain_ci95_lo_nm_per_v' },
+        gainCi95HiNmPerV: { ...num(), field: 'gain_ci95_hi_nm_per_v' },
         interceptNm: { type: DataTypes.DOUBLE, allowNull: false },
-        r2: num,
-        residualStdNm: num,
+        r2: num(),
+        residualStdNm: num(),
         spanNm: { type: DataTypes.DOUBLE, allowNull: false },
-        nonlinearityPctFs: num,
-        hysteresisPctFs: num,
+        nonlinearityPctFs: num(),
+        hysteresisPctFs: num(),
         reviewNote: DataTypes.TEXT,
         reviewedById: DataTypes.INTEGER.UNSIGNED,
         reviewedAt: DataTypes.DATE,

@@ -1,11 +1,25 @@
 import { DataTypes, type Sequelize } from 'sequelize';
 import { User } from './user.model.ts';
 import { AppMeta } from './app-meta.model.ts';
+import { Part } from './part.model.ts';
+import { Build } from './build.model.ts';
+import { LogEntry } from './log-entry.model.ts';
+import { Photo } from './photo.model.ts';
+import { Actuator } from './actuator.model.ts';
+import { CalibrationRun } from './calibration-run.model.ts';
 
 /** Bind every model to this process's Sequelize instance and declare associations. */
 export function initModels(sequelize: Sequelize) {
   User.initModel(sequelize);
   AppMeta.initModel(sequelize);
+  Part.initModel(sequelize);
+  Build.initModel(sequelize);
+  LogEntry.initModel(sequelize);
+  Photo.initModel(sequelize);
+  Actuator.initModel(sequelize);
+  CalibrationRun.initModel(sequelize);
+  Build.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
+  Actuator.belongsTo(Part, { as: 'part', foreignKey: 'partId' });
   // The session store's model; its table comes from a migration, never from sync().
   sequelize.define(
     'Session',
@@ -17,5 +31,5 @@ export function initModels(sequelize: Sequelize) {
     },
     { tableName: 'sessions', underscored: true },
   );
-  return { User, AppMeta };
+  return { User, AppMeta, Part, Build, LogEntry, Photo, Actuator, CalibrationRun };
 }

@@ -31,7 +31,7 @@ export class Part extends Model<InferAttributes<Part>, InferCreationAttributes<P
   declare updatedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
-    const num = { type: DataTypes.DOUBLE, allowNull: true };
+    const num = () => ({ type: DataTypes.DOUBLE, allowNull: true });
     Part.init(
       {
         id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
@@ -39,26 +39,26 @@ export class Part extends Model<InferAttributes<Part>, InferCreationAttributes<P
         name: { type: DataTypes.STRING(160), allowNull: false },
         salvageSource: DataTypes.STRING(240),
         material: DataTypes.STRING(40),
-        lengthMm: num,
-        widthMm: num,
-        thicknessMm: num,
-        outerDiameterMm: num,
-        wallMm: num,
+        lengthMm: num(),
+        widthMm: num(),
+        thicknessMm: num(),
+        outerDiameterMm: num(),
+        wallMm: num(),
         layers: DataTypes.INTEGER.UNSIGNED,
-        capacitanceNf: num,
-        safeVolts: num,
+        capacitanceNf: num(),
+        safeVolts: num(),
         notes: DataTypes.TEXT,
         status: { type: DataTypes.STRING(12), allowNull: false, defaultValue: 'proposed' },
         proposedById: DataTypes.INTEGER.UNSIGNED,
         mergedIntoId: DataTypes.INTEGER.UNSIGNED,
         acceptedRunCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         buildCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
-        gainMedianNmPerV: num,
-        gainP25NmPerV: { ...num, field: 'gain_p25_nm_per_v' },
-        gainP75NmPerV: { ...num, field: 'gain_p75_nm_per_v' },
-        gainMinNmPerV: num,
-        gainMaxNmPerV: num,
-        hysteresisMedianPct: num,
+        gainMedianNmPerV: num(),
+        gainP25NmPerV: { ...num(), field: 'gain_p25_nm_per_v' },
+        gainP75NmPerV: { ...num(), field: 'gain_p75_nm_per_v' },
+        gainMinNmPerV: num(),
+        gainMaxNmPerV: num(),
+        hysteresisMedianPct: num(),
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

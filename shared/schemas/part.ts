@@ -52,3 +52,18 @@ export interface PartSummaryDto {
 }
 
 export const partIdParams = z.strictObject({ partId: z.coerce.number().int().positive() });
+
+export const listPartsQuery = z.strictObject({
+  q: z.string().trim().max(100).optional(),
+  category: z.enum(PART_CATEGORIES).optional(),
+  page: z.coerce.number().int().min(1).max(100_000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(25),
+});
+export type ListPartsQuery = z.infer<typeof listPartsQuery>;
+
+export interface PartListDto {
+  items: PartSummaryDto[];
+  total: number;
+  page: number;
+  pageSize: number;
+}

@@ -22,8 +22,8 @@ export interface DriveLimits {
  */
 export const MIN_MIXING_SIN_ANGLE = 1e-6;
 
-/** Thrown when the two actuators move along (nearly) the same line, so G has no usable inverse. */
-export class SingularMatrixError extends Error {
+/** Thrown when the two actuators move along (nearly) the same line; a RangeError so routes answer 400. */
+export class SingularMatrixError extends RangeError {
   constructor(message = 'The two actuators move along the same line; the gain matrix has no inverse.') {
     super(message);
     this.name = 'SingularMatrixError';

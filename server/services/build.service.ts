@@ -1,0 +1,84 @@
+import { Op, type WhereOptions } from 'sequelize';
+import type { Actor } from '@shared/policies.ts';
+import type { BuildDto, BuildListDto, CreateBuildInput, ListBuildsQuery, UpdateBuildInput } from '@shared/schemas/build.ts';
+import { Build } from '../models/build.model.ts';
+import { Photo } from '../models/photo.model.ts';
+import { authorize } from '../policies/authorize.ts';
+import { ConflictError, ValidationError } from '../errors.ts';
+import { loadBuildForEdit, loadBuildForView, markEdited } from './build-access.ts';
+import { presentBuildDetail, summarizeBuilds } from './build-read.service.ts';
+
+const escapeLike = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
+
+/** Start a build as a draft owned by the actor. */
+export async function createBuild(actor: Actor | null, input: CreateBuildInput): Promise<BuildDto> {
+  authorize(actor, 'content.create');
+  const build = await Build.create({ ownerId: actor.id, ...input, body: input.body ?? '', stage: input.stage ?? 'planning' });
+  return presentBuildDetail(actor, build);
+}
+
+/** Published builds, newest first, filtered by instrument kind and text. */
+export async function listPublishedBuilds(query: ListBuildsQuery): Promise<BuildListDto> {
+  const where: WhereOptions<Build> = { status: 'published' };
+  if (query.kind) Object.assign(where, { instrumentKind: query.kind });
+  if (query.q) {
+    const like = `%${escapeLike(query.q)}%`;
+    Object.assign(where, { [Op.or]: [{ title: { [Op.like]: like } }, { summary: { [Op.like]: like } }, { body: { [Op.like]: like } }] });
+  }
+  const { rows, count } = await Build.findAndCountAll({
+    where,
+    order: [['publishedAt', 'DESC'], ['id', 'DESC']],
+    limit: query.pageSize,
+    offset: (query.page - 1) * query.pageSize,
+  });
+  return { items: await summarizeBuilds(rows), total: count, page: query.page, pageSize: query.pageSize };
+}
+
+/** Every build of the actor, any state, most recently changed first. */
+export async function listMyBuilds(actor: Actor | null): Promise<BuildListDto> {
+  authorize(actor, 'content.create');
+  const rows = await Build.findAll({ where: { ownerId: actor.id }, order: [['updatedAt', 'DESC'], ['id', 'DESC']], limit: 500 });
+  return { items: await summarizeBuilds(rows), total: rows.length, page: 1, pageSize: rows.length };
+}
+
+/** One build as its page shows it (404 for builds the actor may not see). */
+export async function getBuild(actor: Actor | null, buildId: number): Promise<BuildDto> {
+  return presentBuildDetail(actor, await loadBuildForView(actor, buildId));
+}
+
+/** Owner edits; a published build stays live and is marked edited since review. */
+export async function updateBuild(actor: Actor | null, buildId: number, input: UpdateBuildInput): Promise<BuildDto> {
+  const build = await Build.sequelize!.transaction(async (transaction) => {
+    const b = await loadBuildForEdit(actor, buildId, transaction);
+    if (input.coverPhotoId != null) {
+      const photo = await Photo.findOne({ where: { id: input.coverPhotoId, buildId }, transaction });
+      if (!photo) throw new ValidationError('The cover must be one of this build\'s photos.', [{ path: 'coverPhotoId', message: 'Not a photo of this build.' }]);
+    }
+    await b.update(input, { transaction });
+    await markEdited(b, transaction);
+    return b;
+  });
+  return presentBuildDetail(actor, build);
+}
+
+/** Drafts can be deleted by their owner; anything that was ever submitted stays (409). */
+export async function deleteBuild(actor: Actor | null, buildId: number): Promise<void> {
+  await Build.sequelize!.transaction(async (transaction) => {
+    const b = await loadBuildForEdit(actor, buildId, transaction, { anyState: true });
+    if (b.status !== 'draft') throw new ConflictError('Only drafts can be deleted.', 'invalid_state');
+    await b.destroy({ transaction });
+  });
+}
+
+/** Hand a draft or returned build to the review desk. */
+export async function submitBuild(actor: Actor | null, buildId: number): Promise<BuildDto> {
+  const build = await Build.sequelize!.transaction(async (transaction) => {
+    const b = await loadBuildForEdit(actor, buildId, transaction, { anyState: true });
+    if (b.status !== 'draft' && b.status !== 'returned') {
+      throw new ConflictError(`A ${b.status} build cannot be submitted; only drafts and returned builds can.`, 'invalid_state');
+    }
+    await b.update({ status: 'submitted', submittedAt: new Date() }, { transaction });
+    return b;
+  });
+  return presentBuildDetail(actor, build);
+}

@@ -1,0 +1,132 @@
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import request from 'supertest';
+import { startTestApp, type TestApp } from '../support/test-app.ts';
+import { signIn } from '../support/login.ts';
+import { createBuildRow, createPart, createUser } from '../support/factories.ts';
+import { fitCalibrationInUnits, toFitResultDto } from '../../shared/workbench/calibration-fit.ts';
+import { bimorphSeriesGain } from '../../shared/workbench/expected-gain.ts';
+
+let t: TestApp;
+beforeAll(async () => { t = await startTestApp(); });
+afterAll(async () => { await t.close(); });
+
+const points = [
+  { volts: 0, displacement: 0.01, sweep: 'up' }, { volts: 10, displacement: 0.98, sweep: 'up' }, { volts: 20, displacement: 2.03, sweep: 'up' },
+  { volts: 20, displacement: 2.05, sweep: 'down' }, { volts: 10, displacement: 1.09, sweep: 'down' }, { volts: 0, displacement: 0.02, sweep: 'down' },
+];
+const runBody = { points, voltageUnit: 'V', displacementUnit: 'um', method: 'indicator', drive: { kind: 'dc-steps' }, conditions: { preload: 'none', temperatureC: 21 } };
+
+async function ownerWithActuator(status = 'draft') {
+  const owner = await createUser();
+  const build = await createBuildRow(owner.id, { status });
+  const part = await createPart();
+  const a = await signIn(t, owner.login);
+  const res = await a.post(`/api/builds/${build.id}/actuators`).set('X-CSRF-Token', a.csrf).send({ partId: part.id, axis: 'X', drive: 'single', maxVolts: 40 });
+  expect(res.status).toBe(201);
+  return { owner, build, part, a, actuator: res.body };
+}
+
+describe('POST /api/builds/:id/actuators', () => {
+  test('when the owner adds an actuator, then 201 with its part and the expected gain from geometry', async () => {
+    const { actuator, part } = await ownerWithActuator();
+    expect(actuator).toMatchObject({ id: expect.any(Number), axis: 'X', drive: 'single', part: { id: part.id, category: 'bimorph' }, runs: [] });
+    // 12 × 0.6 mm PZT-5A series bimorph → 102.6 nm/V [calc, FIELD.md; S: Smits, Dalke & Cooney 1991]
+    expect(actuator.expectedGain.gainNmPerV).toBeCloseTo(bimorphSeriesGain('PZT-5A', { lengthMm: 12, thicknessMm: 0.6 }).gainNmPerV, 10);
+    expect(actuator.expectedGain.gainNmPerV).toBeCloseTo(102.6, 1);
+  });
+
+  test.each([
+    ['an unknown axis', { axis: 'W', drive: 'single' }],
+    ['an unknown drive', { axis: 'X', drive: 'sideways' }],
+    ['a negative voltage limit', { axis: 'X', drive: 'single', maxVolts: -5 }],
+  ])('when the body has %s, then 400', async (_n, body) => {
+    const owner = await createUser();
+    const build = await createBuildRow(owner.id);
+    const part = await createPart();
+    const a = await signIn(t, owner.login);
+    expect((await a.post(`/api/builds/${build.id}/actuators`).set('X-CSRF-Token', a.csrf).send({ partId: part.id, ...body })).status).toBe(400);
+  });
+
+  test('when the part does not exist, is rejected, or is someone else\'s proposal, then 400 on partId', async () => {
+    const owner = await createUser();
+    const build = await createBuildRow(owner.id);
+    const a = await signIn(t, owner.login);
+    const rejected = await createPart({ status: 'rejected' });
+    const othersProposal = await createPart({ status: 'proposed', proposedById: (await createUser()).id });
+    for (const partId of [99999999, rejected.id, othersProposal.id]) {
+      const res = await a.post(`/api/builds/${build.id}/actuators`).set('X-CSRF-Token', a.csrf).send({ partId, axis: 'Z', drive: 'single' });
+      expect(res.status).toBe(400);
+      expect(res.body.error.details[0].path).toBe('partId');
+    }
+    const own = await createPart({ status: 'proposed', proposedById: owner.id });
+    expect((await a.post(`/api/builds/${build.id}/actuators`).set('X-CSRF-Token', a.csrf).send({ partId: own.id, axis: 'Z', drive: 'single' })).status).toBe(201);
+  });
+
+  test('when another maker adds an actuator to a published build, then 403', async () => {
+    const owner = await createUser();
+    const build = await createBuildRow(owner.id, { status: 'published' });
+    const part = await createPart();
+    const other = await signIn(t, (await createUser()).login);
+    expect((await other.post(`/api/builds/${build.id}/actuators`).set('X-CSRF-Token', other.csrf).send({ partId: part.id, axis: 'X', drive: 'single' })).status).toBe(403);
+  });
+});
+
+describe('POST /api/actuators/:id/runs', () => {
+  test('when the owner records a run, then 201 pending with the fit the shared code computes from the points', async () => {
+    const { a, actuator } = await ownerWithActuator();
+    const res = await a.post(`/api/actuators/${actuator.id}/runs`).set('X-CSRF-Token', a.csrf).send(runBody);
+    expect(res.status).toBe(201);
+    const expected = toFitResultDto(fitCalibrationInUnits({ points: points as never, voltageUnit: 'V', displacementUnit: 'um', model: 'intercept' }));
+    expect(res.body).toMatchObject({ id: expect.any(Number), status: 'pending', method: 'indicator', displacementUnit: 'um', drive: { kind: 'dc-steps' }, conditions: { temperatureC: 21 } });
+    expect(res.body.fit).toEqual(expected);
+    expect(res.body.fit.hysteresisPctFs).toBeGreaterThan(0);
+    const again = await a.get(`/api/runs/${res.body.id}`);
+    expect(again.body.fit).toEqual(expected);
+    expect(again.body.points).toEqual(points);
+  });
+
+  test('when the client sends its own fit numbers, then they are refused (400), never stored', async () => {
+    const { a, actuator } = await ownerWithActuator();
+    const res = await a.post(`/api/actuators/${actuator.id}/runs`).set('X-CSRF-Token', a.csrf).send({ ...runBody, fit: { gainNmPerV: 1e6 } });
+    expect(res.status).toBe(400);
+  });
+
+  test.each([
+    ['fewer than 3 points', { points: points.slice(0, 2) }, 'validation_failed'],
+    ['equal voltages', { points: [1, 2, 3].map((d) => ({ volts: 5, displacement: d })) }, 'voltages_all_equal'],
+    ['an unknown unit', { displacementUnit: 'cubit' }, 'validation_failed'],
+    ['an unknown method', { method: 'guesswork' }, 'validation_failed'],
+    ['a sine drive without frequency', { drive: { kind: 'sine', amplitudeV: 5 } }, 'validation_failed'],
+  ])('when the run has %s, then 400 %s', async (_n, patch, code) => {
+    const { a, actuator } = await ownerWithActuator();
+    const res = await a.post(`/api/actuators/${actuator.id}/runs`).set('X-CSRF-Token', a.csrf).send({ ...runBody, ...patch });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe(code);
+  });
+
+  test('when another maker records a run, then 403 on a published build; a visitor 401', async () => {
+    const { actuator, build } = await ownerWithActuator('draft');
+    await build.update({ status: 'published' });
+    const other = await signIn(t, (await createUser()).login);
+    expect((await other.post(`/api/actuators/${actuator.id}/runs`).set('X-CSRF-Token', other.csrf).send(runBody)).status).toBe(403);
+    const v = request.agent(t.app);
+    const csrf = (await v.get('/api/session')).body.csrfToken;
+    expect((await v.post(`/api/actuators/${actuator.id}/runs`).set('X-CSRF-Token', csrf).send(runBody)).status).toBe(401);
+  });
+
+  test('when a run belongs to a draft, then visitors get 404 and the build page lists it for the owner', async () => {
+    const { a, actuator, build } = await ownerWithActuator();
+    const run = await a.post(`/api/actuators/${actuator.id}/runs`).set('X-CSRF-Token', a.csrf).send(runBody);
+    expect((await request(t.app).get(`/api/runs/${run.body.id}`)).status).toBe(404);
+    const page = await a.get(`/api/builds/${build.id}`);
+    expect(page.body.actuators[0].runs[0].id).toBe(run.body.id);
+    expect(page.body.gains[0]).toMatchObject({ actuatorId: actuator.id, runStatus: 'pending' });
+  });
+
+  test('when the owner deletes a pending run, then 204; an unknown run, then 404', async () => {
+    const { a, actuator } = await ownerWithActuator();
+    const run = await a.post(`/api/actuators/${actuator.id}/runs`).set('X-CSRF-Token', a.csrf).send(runBody);
+    expect((await a.delete(`/api/runs/${run.body.id}`).set('X-CSRF-Token', a.csrf)).status).toBe(204);
+    expect((await a.get(`/api/runs/${run.body.id}`)).status).toBe(404);
+  });
+});
