@@ -4,6 +4,7 @@ import { RouteError } from '@/components/ui/route-error.tsx';
 import { queryClient } from '@/lib/query-client.ts';
 import { sessionQuery } from '@/features/session/api/get-session.ts';
 import { workbenchRoutes } from './routes/workbench/workbench-routes.tsx';
+import { buildsRoutes } from './routes/builds/builds-routes.tsx';
 
 /** Each page is its own chunk (route-level code splitting). */
 export const router = createBrowserRouter([
@@ -18,7 +19,7 @@ export const router = createBrowserRouter([
         errorElement: <RouteError />,
         children: [
           { index: true, lazy: async () => ({ Component: (await import('./routes/home.tsx')).HomePage }) },
-          { path: 'builds/*', lazy: async () => ({ Component: (await import('./routes/coming-soon.tsx')).BuildsComingSoon }) },
+          buildsRoutes,
           { path: 'parts/*', lazy: async () => ({ Component: (await import('./routes/coming-soon.tsx')).PartsComingSoon }) },
           { path: 'exchange/*', lazy: async () => ({ Component: (await import('./routes/coming-soon.tsx')).ExchangeComingSoon }) },
           { path: 'review/*', lazy: async () => ({ Component: (await import('./routes/coming-soon.tsx')).ReviewComingSoon }) },

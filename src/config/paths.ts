@@ -2,6 +2,10 @@
 export const paths = {
   home: '/',
   builds: '/builds',
+  myBuilds: '/builds/mine',
+  newBuild: '/builds/new',
+  build: (id: number) => `/builds/${id}`,
+  editBuild: (id: number) => `/builds/${id}/edit`,
   parts: '/parts',
   exchange: '/exchange',
   workbench: '/workbench',

@@ -12,9 +12,6 @@ function ComingSoon({ title, what }: { title: string; what: string }) {
   );
 }
 
-export const BuildsComingSoon = () => (
-  <ComingSoon title="Builds" what="Build logs with write-ups, photos, actuators and calibration runs are coming in a later release. Nothing here works yet." />
-);
 export const PartsComingSoon = () => (
   <ComingSoon title="Parts registry" what="The registry of salvaged transducers, searchable by measured nm/V, is coming in a later release. Nothing here works yet." />
 );
