@@ -13,6 +13,7 @@ import { createSequelize } from './db/sequelize.ts';
 import { initModels } from './models/index.ts';
 import { createPassport } from './auth/passport.ts';
 import { createMailer, type Mailer } from './services/mail.service.ts';
+import { startOutboxWorker } from './services/outbox.service.ts';
 import { requireCsrf } from './middleware/csrf.ts';
 import { errorHandler, apiNotFound } from './middleware/error-handler.ts';
 import { limiter } from './middleware/rate-limit.ts';
@@ -25,6 +26,7 @@ import { photoRoutes } from './routes/photo.routes.ts';
 import { buildRoutes } from './routes/build.routes.ts';
 import { actuatorRoutes } from './routes/actuator.routes.ts';
 import { partRoutes } from './routes/part.routes.ts';
+import { reviewRoutes } from './routes/review.routes.ts';
 
 export interface AppHandle {
   app: Express;
@@ -44,7 +46,8 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   const sequelize = createSequelize(config.db);
   initModels(sequelize);
   const mailer = deps.mailer ?? createMailer(config.smtpUrl ?? 'smtp://127.0.0.1:2525', config.mailFrom, log);
-  const passport = createPassport(config, mailer, log);
+  const outbox = startOutboxWorker(mailer, config.publicUrl, log, config.env === 'test' ? 250 : 5000);
+  const passport = createPassport(config, log);
   const SequelizeStore = connectSessionSequelize(session.Store);
   const store = new SequelizeStore({
     db: sequelize,
@@ -130,6 +133,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(buildRoutes());
   app.use(actuatorRoutes());
   app.use(partRoutes());
+  app.use(reviewRoutes());
   app.use(['/api', '/auth'], apiNotFound);
 
   const indexHtml = resolve(dist, 'index.html');
@@ -145,6 +149,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
     mailer,
     log,
     async close() {
+      outbox.stop();
       store.stopExpiringSessions();
       mailer.close();
       await sequelize.close();

@@ -4,7 +4,8 @@ import type { Config } from '../config.ts';
 import type { Logger } from '../logger.ts';
 import { AppError } from '../errors.ts';
 import { findActiveUser, signInFromGithub } from '../services/user.service.ts';
-import { welcomeMail, type Mailer } from '../services/mail.service.ts';
+import { welcomeMail } from '../services/mail.service.ts';
+import { APP_URL, enqueueMail, kickOutbox } from '../services/outbox.service.ts';
 
 /** passport-github2 that also forwards GitHub's own `login` hint to the authorize page. */
 class GitHubWithLoginHint extends GitHubStrategy {
@@ -14,7 +15,7 @@ class GitHubWithLoginHint extends GitHubStrategy {
 }
 
 /** A passport instance for this app: GitHub (or the local stand-in) in, user id in the session. */
-export function createPassport(config: Config, mailer: Mailer, log: Logger): PassportStatic {
+export function createPassport(config: Config, log: Logger): PassportStatic {
   const p = new passport.Passport() as unknown as PassportStatic;
   const gh = config.github;
   p.use(
@@ -43,8 +44,11 @@ export function createPassport(config: Config, mailer: Mailer, log: Logger): Pas
           },
           config.adminLogins,
         )
-          .then(({ user, created }) => {
-            if (created && user.email) void mailer.send(welcomeMail(user.email, user.login, config.publicUrl));
+          .then(async ({ user, created }) => {
+            if (created) {
+              await enqueueMail(user, welcomeMail(user.login, APP_URL), { essential: false });
+              kickOutbox();
+            }
             done(null, user);
           })
           .catch((err: unknown) => {

@@ -6,6 +6,7 @@ import * as createAppMeta from './migrations/20261201000300-create-app-meta.ts';
 import * as createParts from './migrations/20261201001000-create-parts.ts';
 import * as createBuilds from './migrations/20261201001100-create-builds.ts';
 import * as createActuatorsAndRuns from './migrations/20261201001200-create-actuators-and-runs.ts';
+import * as createReview from './migrations/20261201002000-create-review.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -17,6 +18,7 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261201001000-create-parts', createParts],
   ['20261201001100-create-builds', createBuilds],
   ['20261201001200-create-actuators-and-runs', createActuatorsAndRuns],
+  ['20261201002000-create-review', createReview],
 ];
 
 /** Umzug over our migration list; the only source of the schema, in tests too. */

@@ -7,6 +7,9 @@ import { LogEntry } from './log-entry.model.ts';
 import { Photo } from './photo.model.ts';
 import { Actuator } from './actuator.model.ts';
 import { CalibrationRun } from './calibration-run.model.ts';
+import { AuditEntry } from './audit-entry.model.ts';
+import { Report } from './report.model.ts';
+import { OutboxMail } from './outbox-mail.model.ts';
 
 /** Bind every model to this process's Sequelize instance and declare associations. */
 export function initModels(sequelize: Sequelize) {
@@ -18,6 +21,9 @@ export function initModels(sequelize: Sequelize) {
   Photo.initModel(sequelize);
   Actuator.initModel(sequelize);
   CalibrationRun.initModel(sequelize);
+  AuditEntry.initModel(sequelize);
+  Report.initModel(sequelize);
+  OutboxMail.initModel(sequelize);
   Build.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
   Actuator.belongsTo(Part, { as: 'part', foreignKey: 'partId' });
   // The session store's model; its table comes from a migration, never from sync().
@@ -31,5 +37,5 @@ export function initModels(sequelize: Sequelize) {
     },
     { tableName: 'sessions', underscored: true },
   );
-  return { User, AppMeta, Part, Build, LogEntry, Photo, Actuator, CalibrationRun };
+  return { User, AppMeta, Part, Build, LogEntry, Photo, Actuator, CalibrationRun, AuditEntry, Report, OutboxMail };
 }

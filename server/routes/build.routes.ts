@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { buildIdParams, createBuildInput, createEntryInput, entryParams, listBuildsQuery, updateBuildInput, updateEntryInput } from '@shared/schemas/build.ts';
 import { validate } from '../middleware/validate.ts';
+import { requireUser } from '../middleware/auth.ts';
 import { actorOf } from '../middleware/actor.ts';
 import { createBuild, deleteBuild, getBuild, listMyBuilds, listPublishedBuilds, submitBuild, updateBuild } from '../services/build.service.ts';
 import { createEntry, deleteEntry, updateEntry } from '../services/entry.service.ts';
@@ -12,34 +13,34 @@ export function buildRoutes(): Router {
   r.get('/api/builds', validate(listBuildsQuery, 'query'), async (_req, res) => {
     res.json(await listPublishedBuilds(res.locals.query));
   });
-  r.get('/api/builds/mine', async (req, res) => {
+  r.get('/api/builds/mine', requireUser, async (req, res) => {
     res.json(await listMyBuilds(actorOf(req)));
   });
-  r.post('/api/builds', validate(createBuildInput), async (req, res) => {
+  r.post('/api/builds', requireUser, validate(createBuildInput), async (req, res) => {
     res.status(201).json(await createBuild(actorOf(req), res.locals.body));
   });
   r.get('/api/builds/:buildId', id, async (req, res) => {
     res.json(await getBuild(actorOf(req), res.locals.params.buildId));
   });
-  r.patch('/api/builds/:buildId', id, validate(updateBuildInput), async (req, res) => {
+  r.patch('/api/builds/:buildId', requireUser, id, validate(updateBuildInput), async (req, res) => {
     res.json(await updateBuild(actorOf(req), res.locals.params.buildId, res.locals.body));
   });
-  r.delete('/api/builds/:buildId', id, async (req, res) => {
+  r.delete('/api/builds/:buildId', requireUser, id, async (req, res) => {
     await deleteBuild(actorOf(req), res.locals.params.buildId);
     res.status(204).end();
   });
-  r.post('/api/builds/:buildId/submit', id, async (req, res) => {
+  r.post('/api/builds/:buildId/submit', requireUser, id, async (req, res) => {
     res.json(await submitBuild(actorOf(req), res.locals.params.buildId));
   });
 
-  r.post('/api/builds/:buildId/entries', id, validate(createEntryInput), async (req, res) => {
+  r.post('/api/builds/:buildId/entries', requireUser, id, validate(createEntryInput), async (req, res) => {
     res.status(201).json(await createEntry(actorOf(req), res.locals.params.buildId, res.locals.body));
   });
   const entry = validate(entryParams, 'params');
-  r.patch('/api/builds/:buildId/entries/:entryId', entry, validate(updateEntryInput), async (req, res) => {
+  r.patch('/api/builds/:buildId/entries/:entryId', requireUser, entry, validate(updateEntryInput), async (req, res) => {
     res.json(await updateEntry(actorOf(req), res.locals.params.buildId, res.locals.params.entryId, res.locals.body));
   });
-  r.delete('/api/builds/:buildId/entries/:entryId', entry, async (req, res) => {
+  r.delete('/api/builds/:buildId/entries/:entryId', requireUser, entry, async (req, res) => {
     await deleteEntry(actorOf(req), res.locals.params.buildId, res.locals.params.entryId);
     res.status(204).end();
   });

@@ -34,7 +34,7 @@ export function createMailer(smtpUrl: string, from: string, log: Logger): Mailer
 const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
 /** The first-sign-in greeting, in plain text and HTML. */
-export function welcomeMail(to: string, login: string, appUrl: string): OutgoingMail {
+export function welcomeMail(login: string, appUrl: string): Omit<OutgoingMail, 'to'> {
   const text = [
     `Hello ${login},`,
     '',
@@ -47,5 +47,5 @@ export function welcomeMail(to: string, login: string, appUrl: string): Outgoing
     'electrical codes and qualified practice whenever you build or measure.',
   ].join('\n');
   const html = `<p>Hello ${escapeHtml(login)},</p><p>Welcome to Scanwright. You can now write build logs, record calibration runs for your actuators, propose parts for the registry and post listings on the exchange.</p><p><a href="${escapeHtml(appUrl)}">Open Scanwright</a></p><p style="color:#8a5a00">Piezo drivers run at tens to hundreds of volts and piezo elements hold charge: follow local electrical codes and qualified practice whenever you build or measure.</p>`;
-  return { to, subject: 'Welcome to Scanwright', text, html };
+  return { subject: 'Welcome to Scanwright', text, html };
 }

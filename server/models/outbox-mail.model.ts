@@ -1,0 +1,34 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+export class OutboxMail extends Model<InferAttributes<OutboxMail>, InferCreationAttributes<OutboxMail>> {
+  declare id: CreationOptional<number>;
+  declare toAddress: string;
+  declare subject: string;
+  declare textBody: string;
+  declare htmlBody: string;
+  declare attempts: CreationOptional<number>;
+  declare nextAttemptAt: Date;
+  declare sentAt: CreationOptional<Date | null>;
+  declare lastError: CreationOptional<string | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    OutboxMail.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        toAddress: { type: DataTypes.STRING(254), allowNull: false },
+        subject: { type: DataTypes.STRING(300), allowNull: false },
+        textBody: { type: DataTypes.TEXT, allowNull: false },
+        htmlBody: { type: DataTypes.TEXT, allowNull: false },
+        attempts: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
+        nextAttemptAt: { type: DataTypes.DATE, allowNull: false },
+        sentAt: DataTypes.DATE,
+        lastError: DataTypes.STRING(500),
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'mail_outbox', modelName: 'OutboxMail', underscored: true },
+    );
+  }
+}

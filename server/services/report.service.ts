@@ -1,0 +1,38 @@
+import type { Actor } from '@shared/policies.ts';
+import type { CreateReportInput, ReportTargetType } from '@shared/schemas/review.ts';
+import { Report } from '../models/report.model.ts';
+import { Build } from '../models/build.model.ts';
+import { Part } from '../models/part.model.ts';
+import { CalibrationRun } from '../models/calibration-run.model.ts';
+import { authorize } from '../policies/authorize.ts';
+import { NotFoundError } from '../errors.ts';
+import { getRun } from './run.service.ts';
+import { getPart } from './part.service.ts';
+import { loadBuildForView } from './build-access.ts';
+
+/** Listings arrive with the exchange; until then a listing target is looked up through this hook. */
+const visibleTarget: Record<ReportTargetType, (actor: Actor, id: number) => Promise<unknown>> = {
+  build: (actor, id) => loadBuildForView(actor, id),
+  run: (actor, id) => getRun(actor, id),
+  part: (actor, id) => getPart(actor, id),
+  listing: async () => { throw new NotFoundError('No such listing.'); },
+};
+
+/** Anyone signed in may report something they can see; moderators work the report on the desk. */
+export async function createReport(actor: Actor | null, input: CreateReportInput) {
+  authorize(actor, 'content.create');
+  await visibleTarget[input.targetType](actor, input.targetId);
+  const report = await Report.create({ reporterId: actor.id, targetType: input.targetType, targetId: input.targetId, reason: input.reason, note: input.note ?? null });
+  return { id: report.id, status: report.status, targetType: report.targetType, targetId: report.targetId, reason: report.reason };
+}
+
+/** A short human label of a report's target for the desk. */
+export async function describeTarget(type: ReportTargetType, id: number): Promise<string> {
+  if (type === 'build') return (await Build.findByPk(id, { attributes: ['title'] }))?.title ?? `build ${id} (gone)`;
+  if (type === 'part') return (await Part.findByPk(id, { attributes: ['name'] }))?.name ?? `part ${id} (gone)`;
+  if (type === 'run') {
+    const run = await CalibrationRun.findByPk(id, { attributes: ['gainNmPerV'] });
+    return run ? `calibration run ${id} (${Number(run.gainNmPerV.toPrecision(4))} nm/V)` : `run ${id} (gone)`;
+  }
+  return `listing ${id}`;
+}

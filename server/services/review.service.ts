@@ -1,0 +1,143 @@
+import type { Transaction } from 'sequelize';
+import type { Actor } from '@shared/policies.ts';
+import type { AcceptRejectInput, BuildDecisionInput, ReportDecisionInput } from '@shared/schemas/review.ts';
+import { Build } from '../models/build.model.ts';
+import { CalibrationRun } from '../models/calibration-run.model.ts';
+import { Part } from '../models/part.model.ts';
+import { Report } from '../models/report.model.ts';
+import { User } from '../models/user.model.ts';
+import { authorize } from '../policies/authorize.ts';
+import { ConflictError, NotFoundError } from '../errors.ts';
+import { recordAudit } from './audit.service.ts';
+import { recomputePartStats } from './part-stats.service.ts';
+import { enqueueMail, kickOutbox } from './outbox.service.ts';
+import { decisionMail } from './review-mails.ts';
+
+const notWaiting = (what: string) => new ConflictError(`This ${what} is not waiting for a decision.`, 'not_waiting');
+
+/** Run a decision in one transaction (change + audit + stats + queued mail), then nudge the mail worker. */
+async function decide<T>(actor: Actor | null, work: (actor: Actor, t: Transaction) => Promise<T>): Promise<T> {
+  authorize(actor, 'review.access');
+  const result = await Build.sequelize!.transaction((t) => work(actor, t));
+  kickOutbox();
+  return result;
+}
+
+async function recipient(userId: number | null, transaction: Transaction) {
+  return userId ? User.findByPk(userId, { transaction, attributes: ['id', 'login', 'email', 'mailOptOut'] }) : null;
+}
+
+const BUILD_OUTCOME = { publish: 'published', return: 'returned', decline: 'declined' } as const;
+
+/** Publish, return (with notes, editable again) or decline a submitted build; also clears "edited since review" on published ones. */
+export async function decideBuild(actor: Actor | null, buildId: number, input: BuildDecisionInput) {
+  return decide(actor, async (me, transaction) => {
+    const build = await Build.findByPk(buildId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!build) throw new NotFoundError('No such build.');
+    const editedPublished = build.status === 'published' && build.editedSinceReview;
+    if (build.status !== 'submitted' && !editedPublished) throw notWaiting('build');
+    const status = BUILD_OUTCOME[input.decision];
+    await build.update(
+      { status, reviewNote: input.note ?? null, editedSinceReview: false, publishedAt: status === 'published' ? (build.publishedAt ?? new Date()) : build.publishedAt },
+      { transaction },
+    );
+    await recordAudit(me, { action: `build.${input.decision}`, targetType: 'build', targetId: build.id, note: input.note }, transaction);
+    const owner = await recipient(build.ownerId, transaction);
+    if (owner) {
+      const lines = {
+        publish: [`Your build "${build.title}" is published. Its accepted calibration runs count in the parts registry.`],
+        return: [`Your build "${build.title}" was returned with notes. You can edit it and submit it again.`],
+        decline: [`Your build "${build.title}" was declined.`],
+      }[input.decision];
+      const subject = { publish: 'published', return: 'returned with notes', decline: 'declined' }[input.decision];
+      await enqueueMail(owner, decisionMail({ subject: `Build ${subject}: ${build.title}`, greeting: owner.login, lines, note: input.note ?? null, path: `/builds/${build.id}`, linkText: 'Open the build' }), { essential: true, transaction });
+    }
+    return { id: build.id, status };
+  });
+}
+
+/** Accept or reject a pending run; the part's pooled statistics change in the same transaction. */
+export async function decideRun(actor: Actor | null, runId: number, input: AcceptRejectInput) {
+  return decide(actor, async (me, transaction) => {
+    const run = await CalibrationRun.findByPk(runId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!run) throw new NotFoundError('No such calibration run.');
+    if (run.status !== 'pending') throw notWaiting('calibration run');
+    const status = input.decision === 'accept' ? 'accepted' : 'rejected';
+    await run.update({ status, reviewNote: input.note ?? null, reviewedById: me.id, reviewedAt: new Date() }, { transaction });
+    await recomputePartStats(run.partId, transaction);
+    await recordAudit(me, { action: `run.${input.decision}`, targetType: 'run', targetId: run.id, note: input.note }, transaction);
+    const owner = await recipient(run.ownerId, transaction);
+    if (owner) {
+      const gain = `${Number(run.gainNmPerV.toPrecision(4))} nm/V`;
+      await enqueueMail(
+        owner,
+        decisionMail({
+          subject: `Calibration run ${status}: ${gain}`,
+          greeting: owner.login,
+          lines: [status === 'accepted' ? `Your calibration run (${gain}) was accepted and now counts in the parts registry.` : `Your calibration run (${gain}) was rejected; it does not count in the parts registry.`],
+          note: input.note ?? null,
+          path: `/builds/${run.buildId}`,
+          linkText: 'Open the build',
+        }),
+        { essential: false, transaction },
+      );
+    }
+    return { id: run.id, status };
+  });
+}
+
+/** Accept a proposed part into the registry, or reject it. */
+export async function decidePart(actor: Actor | null, partId: number, input: AcceptRejectInput) {
+  return decide(actor, async (me, transaction) => {
+    const part = await Part.findByPk(partId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!part) throw new NotFoundError('No such part.');
+    if (part.status !== 'proposed') throw notWaiting('part');
+    const status = input.decision === 'accept' ? 'accepted' : 'rejected';
+    await part.update({ status }, { transaction });
+    await recordAudit(me, { action: `part.${input.decision}`, targetType: 'part', targetId: part.id, note: input.note }, transaction);
+    const proposer = await recipient(part.proposedById, transaction);
+    if (proposer) {
+      await enqueueMail(
+        proposer,
+        decisionMail({
+          subject: `Part ${status}: ${part.name}`,
+          greeting: proposer.login,
+          lines: [status === 'accepted' ? `The part you proposed, "${part.name}", is now listed in the parts registry.` : `The part you proposed, "${part.name}", was not added to the parts registry.`],
+          note: input.note ?? null,
+          path: `/parts/${part.id}`,
+          linkText: 'Open the part',
+        }),
+        { essential: false, transaction },
+      );
+    }
+    return { id: part.id, status };
+  });
+}
+
+/** Resolve or dismiss an open report; the reporter hears back. */
+export async function decideReport(actor: Actor | null, reportId: number, input: ReportDecisionInput) {
+  return decide(actor, async (me, transaction) => {
+    const report = await Report.findByPk(reportId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!report) throw new NotFoundError('No such report.');
+    if (report.status !== 'open') throw notWaiting('report');
+    const status = input.decision === 'resolve' ? 'resolved' : 'dismissed';
+    await report.update({ status, resolutionNote: input.note, resolvedById: me.id, resolvedAt: new Date() }, { transaction });
+    await recordAudit(me, { action: `report.${input.decision}`, targetType: 'report', targetId: report.id, note: input.note }, transaction);
+    const reporter = await recipient(report.reporterId, transaction);
+    if (reporter) {
+      await enqueueMail(
+        reporter,
+        decisionMail({
+          subject: `Your report was ${status}`,
+          greeting: reporter.login,
+          lines: [`Thank you for your report about a ${report.targetType}. A moderator ${status} it.`],
+          note: input.note,
+          path: '/',
+          linkText: 'Open Scanwright',
+        }),
+        { essential: false, transaction },
+      );
+    }
+    return { id: report.id, status };
+  });
+}

@@ -1,0 +1,142 @@
+import { z } from 'zod';
+import type { PlausibilityFlag } from '../review/plausibility.ts';
+import type { FitResultDto } from './workbench.ts';
+import type { PartStatsDto } from './part.ts';
+
+const note = z.string().trim().max(4000);
+
+/** Publish needs no note; return and decline must say why. */
+export const buildDecisionInput = z
+  .strictObject({ decision: z.enum(['publish', 'return', 'decline']), note: note.optional() })
+  .refine((v) => v.decision === 'publish' || (v.note?.length ?? 0) > 0, { message: 'A note is required to return or decline.', path: ['note'] });
+export type BuildDecisionInput = z.infer<typeof buildDecisionInput>;
+
+/** Accept needs no note; reject must say why. Used for runs and parts. */
+export const acceptRejectInput = z
+  .strictObject({ decision: z.enum(['accept', 'reject']), note: note.optional() })
+  .refine((v) => v.decision === 'accept' || (v.note?.length ?? 0) > 0, { message: 'A note is required to reject.', path: ['note'] });
+export type AcceptRejectInput = z.infer<typeof acceptRejectInput>;
+
+export const reportDecisionInput = z.strictObject({ decision: z.enum(['resolve', 'dismiss']), note: note.min(1, 'Say what you did.') });
+export type ReportDecisionInput = z.infer<typeof reportDecisionInput>;
+
+export const REPORT_TARGETS = ['build', 'run', 'part', 'listing'] as const;
+export type ReportTargetType = (typeof REPORT_TARGETS)[number];
+export const REPORT_REASONS = ['wrong-data', 'spam', 'unsafe', 'offensive', 'duplicate', 'other'] as const;
+export type ReportReason = (typeof REPORT_REASONS)[number];
+export type ReportStatus = 'open' | 'resolved' | 'dismissed';
+export const reportReasonLabels: Record<ReportReason, string> = {
+  'wrong-data': 'Data looks wrong',
+  spam: 'Spam or advertising',
+  unsafe: 'Unsafe advice',
+  offensive: 'Offensive',
+  duplicate: 'Duplicate',
+  other: 'Something else',
+};
+
+export const createReportInput = z.strictObject({
+  targetType: z.enum(REPORT_TARGETS),
+  targetId: z.number().int().positive(),
+  reason: z.enum(REPORT_REASONS),
+  note: note.optional(),
+});
+export type CreateReportInput = z.infer<typeof createReportInput>;
+
+export const reviewIdParams = z.strictObject({ id: z.coerce.number().int().positive() });
+
+export const auditQuery = z.strictObject({
+  actorId: z.coerce.number().int().positive().optional(),
+  targetType: z.enum(['build', 'run', 'part', 'report', 'listing', 'user']).optional(),
+  targetId: z.coerce.number().int().positive().optional(),
+  from: z.iso.date().optional(),
+  to: z.iso.date().optional(),
+  page: z.coerce.number().int().min(1).max(100_000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(50),
+});
+export type AuditQuery = z.infer<typeof auditQuery>;
+
+export const accountSettingsInput = z.strictObject({ mailOptOut: z.boolean() });
+export type AccountSettingsInput = z.infer<typeof accountSettingsInput>;
+
+export interface ReviewAuthorDto {
+  id: number;
+  login: string;
+}
+
+export interface QueueBuildDto {
+  id: number;
+  title: string;
+  instrumentKind: string;
+  summary: string;
+  author: ReviewAuthorDto;
+  submittedAt: string | null;
+  updatedAt: string;
+  photoCount: number;
+  entryCount: number;
+  actuatorCount: number;
+  pendingRunCount: number;
+}
+
+export interface QueueRunDto {
+  id: number;
+  buildId: number;
+  buildTitle: string;
+  actuatorLabel: string | null;
+  axis: string;
+  author: ReviewAuthorDto;
+  part: { id: number; name: string; category: string; stats: PartStatsDto; acceptedGainsNmPerV: number[] };
+  method: string;
+  fit: FitResultDto;
+  points: { volts: number; displacementNm: number; sweep?: 'up' | 'down' }[];
+  expectedGainNmPerV: number | null;
+  flags: PlausibilityFlag[];
+  createdAt: string;
+}
+
+export interface QueuePartDto {
+  id: number;
+  name: string;
+  category: string;
+  salvageSource: string | null;
+  material: string | null;
+  notes: string | null;
+  author: ReviewAuthorDto | null;
+  createdAt: string;
+}
+
+export interface QueueReportDto {
+  id: number;
+  targetType: ReportTargetType;
+  targetId: number;
+  targetLabel: string;
+  reason: ReportReason;
+  note: string | null;
+  reporter: ReviewAuthorDto;
+  createdAt: string;
+}
+
+export interface ReviewQueueDto {
+  counts: { builds: number; runs: number; parts: number; reports: number; edited: number };
+  builds: QueueBuildDto[];
+  runs: QueueRunDto[];
+  parts: QueuePartDto[];
+  reports: QueueReportDto[];
+  edited: QueueBuildDto[];
+}
+
+export interface AuditEntryDto {
+  id: number;
+  actor: ReviewAuthorDto;
+  action: string;
+  targetType: string;
+  targetId: number;
+  note: string | null;
+  createdAt: string;
+}
+
+export interface AuditListDto {
+  items: AuditEntryDto[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
