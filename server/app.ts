@@ -27,6 +27,7 @@ import { buildRoutes } from './routes/build.routes.ts';
 import { actuatorRoutes } from './routes/actuator.routes.ts';
 import { partRoutes } from './routes/part.routes.ts';
 import { reviewRoutes } from './routes/review.routes.ts';
+import { exchangeRoutes } from './routes/exchange.routes.ts';
 
 export interface AppHandle {
   app: Express;
@@ -130,10 +131,11 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(adminRoutes());
   app.use(workbenchRoutes());
   app.use(photoRoutes(config));
-  app.use(buildRoutes());
+  app.use(buildRoutes(config));
   app.use(actuatorRoutes());
   app.use(partRoutes());
-  app.use(reviewRoutes());
+  app.use(reviewRoutes(config));
+  app.use(exchangeRoutes(config));
   app.use(['/api', '/auth'], apiNotFound);
 
   const indexHtml = resolve(dist, 'index.html');

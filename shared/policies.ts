@@ -45,6 +45,12 @@ const rules = {
   /** Parts not (yet) in the registry are visible to whoever proposed them and to moderators. */
   'part.view-unlisted': or(isOwner, hasRole('moderator')),
   'review.access': and(active, hasRole('moderator')),
+  /** Listings are changed by their owner; moderators only hide them (with a note). */
+  'listing.edit': and(active, isOwner),
+  'listing.hide': and(active, hasRole('moderator')),
+  'listing.view-hidden': or(isOwner, hasRole('moderator')),
+  /** Anyone signed in may write to a listing's owner, except the owner themself. */
+  'listing.message': and(active, not(isOwner)),
   'user.list': and(active, hasRole('admin')),
   /** Admins change others' roles, never their own (so the last admin cannot lock everyone out). */
   'user.set-role': and(active, hasRole('admin'), not(isSelf)),

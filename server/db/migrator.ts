@@ -7,6 +7,8 @@ import * as createParts from './migrations/20261201001000-create-parts.ts';
 import * as createBuilds from './migrations/20261201001100-create-builds.ts';
 import * as createActuatorsAndRuns from './migrations/20261201001200-create-actuators-and-runs.ts';
 import * as createReview from './migrations/20261201002000-create-review.ts';
+import * as createExchange from './migrations/20261201003000-create-exchange.ts';
+import * as addPartSearchIndexes from './migrations/20261201003100-add-part-search-indexes.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -19,6 +21,8 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261201001100-create-builds', createBuilds],
   ['20261201001200-create-actuators-and-runs', createActuatorsAndRuns],
   ['20261201002000-create-review', createReview],
+  ['20261201003000-create-exchange', createExchange],
+  ['20261201003100-add-part-search-indexes', addPartSearchIndexes],
 ];
 
 /** Umzug over our migration list; the only source of the schema, in tests too. */

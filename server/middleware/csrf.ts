@@ -24,7 +24,8 @@ const same = (a: string, b: string) => a.length === b.length && timingSafeEqual(
 /** Every state-changing request under /api and /auth/logout must echo the token in X-CSRF-Token. */
 export const requireCsrf: RequestHandler = (req, _res, next) => {
   if (SAFE.has(req.method)) return next();
-  if (STATELESS.some((re) => re.test(req.path)) && req.method === 'POST') return next();
+  const fullPath = req.baseUrl + req.path;
+  if (req.method === 'POST' && STATELESS.some((re) => re.test(fullPath))) return next();
   const sent = req.get('x-csrf-token') ?? '';
   const expected = req.session?.csrfToken;
   if (!expected || !sent || !same(sent, expected)) {

@@ -10,6 +10,9 @@ import { CalibrationRun } from './calibration-run.model.ts';
 import { AuditEntry } from './audit-entry.model.ts';
 import { Report } from './report.model.ts';
 import { OutboxMail } from './outbox-mail.model.ts';
+import { Listing } from './listing.model.ts';
+import { ListingPhoto } from './listing-photo.model.ts';
+import { Message, MessageThread } from './message.model.ts';
 
 /** Bind every model to this process's Sequelize instance and declare associations. */
 export function initModels(sequelize: Sequelize) {
@@ -24,6 +27,10 @@ export function initModels(sequelize: Sequelize) {
   AuditEntry.initModel(sequelize);
   Report.initModel(sequelize);
   OutboxMail.initModel(sequelize);
+  Listing.initModel(sequelize);
+  ListingPhoto.initModel(sequelize);
+  MessageThread.initModel(sequelize);
+  Message.initModel(sequelize);
   Build.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
   Actuator.belongsTo(Part, { as: 'part', foreignKey: 'partId' });
   // The session store's model; its table comes from a migration, never from sync().
@@ -37,5 +44,5 @@ export function initModels(sequelize: Sequelize) {
     },
     { tableName: 'sessions', underscored: true },
   );
-  return { User, AppMeta, Part, Build, LogEntry, Photo, Actuator, CalibrationRun, AuditEntry, Report, OutboxMail };
+  return { User, AppMeta, Part, Build, LogEntry, Photo, Actuator, CalibrationRun, AuditEntry, Report, OutboxMail, Listing, ListingPhoto, MessageThread, Message };
 }

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { buildIdParams, createBuildInput, createEntryInput, entryParams, listBuildsQuery, updateBuildInput, updateEntryInput } from '@shared/schemas/build.ts';
+import type { Config } from '../config.ts';
 import { validate } from '../middleware/validate.ts';
 import { requireUser } from '../middleware/auth.ts';
 import { actorOf } from '../middleware/actor.ts';
@@ -7,7 +8,7 @@ import { createBuild, deleteBuild, getBuild, listMyBuilds, listPublishedBuilds, 
 import { createEntry, deleteEntry, updateEntry } from '../services/entry.service.ts';
 
 /** Builds and their log entries. */
-export function buildRoutes(): Router {
+export function buildRoutes(config: Config): Router {
   const r = Router();
   const id = validate(buildIdParams, 'params');
   r.get('/api/builds', validate(listBuildsQuery, 'query'), async (_req, res) => {
@@ -26,7 +27,7 @@ export function buildRoutes(): Router {
     res.json(await updateBuild(actorOf(req), res.locals.params.buildId, res.locals.body));
   });
   r.delete('/api/builds/:buildId', requireUser, id, async (req, res) => {
-    await deleteBuild(actorOf(req), res.locals.params.buildId);
+    await deleteBuild(actorOf(req), res.locals.params.buildId, config.uploadsDir);
     res.status(204).end();
   });
   r.post('/api/builds/:buildId/submit', requireUser, id, async (req, res) => {

@@ -1,6 +1,8 @@
 import { Router } from 'express';
 import { acceptRejectInput, accountSettingsInput, auditQuery, buildDecisionInput, createReportInput, reportDecisionInput, reviewIdParams } from '@shared/schemas/review.ts';
+import type { Config } from '../config.ts';
 import { validate } from '../middleware/validate.ts';
+import { limiter } from '../middleware/rate-limit.ts';
 import { requireUser } from '../middleware/auth.ts';
 import { actorOf } from '../middleware/actor.ts';
 import { decideBuild, decidePart, decideReport, decideRun } from '../services/review.service.ts';
@@ -10,8 +12,9 @@ import { createReport } from '../services/report.service.ts';
 import { getAccountSettings, updateAccountSettings } from '../services/account.service.ts';
 
 /** The review desk, reports, the audit trail and the mail setting. */
-export function reviewRoutes(): Router {
+export function reviewRoutes(config: Config): Router {
   const r = Router();
+  const reportLimit = limiter(config.rateLimits, { windowMs: 60 * 60_000, limit: 30, what: 'reports', perUser: true });
   const id = validate(reviewIdParams, 'params');
   r.get('/api/review/queue', requireUser, async (req, res) => {
     res.json(await getReviewQueue(actorOf(req)));
@@ -31,7 +34,7 @@ export function reviewRoutes(): Router {
   r.get('/api/review/audit', requireUser, validate(auditQuery, 'query'), async (req, res) => {
     res.json(await listAudit(actorOf(req), res.locals.query));
   });
-  r.post('/api/reports', requireUser, validate(createReportInput), async (req, res) => {
+  r.post('/api/reports', requireUser, reportLimit, validate(createReportInput), async (req, res) => {
     res.status(201).json(await createReport(actorOf(req), res.locals.body));
   });
   r.get('/api/account/settings', requireUser, async (req, res) => {

@@ -7,6 +7,7 @@ import { authorize } from '../policies/authorize.ts';
 import { ConflictError, ValidationError } from '../errors.ts';
 import { loadBuildForEdit, loadBuildForView, markEdited } from './build-access.ts';
 import { presentBuildDetail, summarizeBuilds } from './build-read.service.ts';
+import { filesByHash, pruneUnreferenced } from './photo.service.ts';
 
 const escapeLike = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
@@ -61,13 +62,16 @@ export async function updateBuild(actor: Actor | null, buildId: number, input: U
   return presentBuildDetail(actor, build);
 }
 
-/** Drafts can be deleted by their owner; anything that was ever submitted stays (409). */
-export async function deleteBuild(actor: Actor | null, buildId: number): Promise<void> {
-  await Build.sequelize!.transaction(async (transaction) => {
+/** Drafts can be deleted by their owner; anything that was ever submitted stays (409). Photo files no one else uses go too. */
+export async function deleteBuild(actor: Actor | null, buildId: number, uploadsDir: string): Promise<void> {
+  const photos = await Build.sequelize!.transaction(async (transaction) => {
     const b = await loadBuildForEdit(actor, buildId, transaction, { anyState: true });
     if (b.status !== 'draft') throw new ConflictError('Only drafts can be deleted.', 'invalid_state');
+    const rows = await Photo.findAll({ where: { buildId }, attributes: ['contentHash', 'displayFile', 'thumbFile'], transaction });
     await b.destroy({ transaction });
+    return rows;
   });
+  await pruneUnreferenced(uploadsDir, filesByHash(photos));
 }
 
 /** Hand a draft or returned build to the review desk. */

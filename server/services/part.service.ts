@@ -1,34 +1,154 @@
-import { Op, type WhereOptions } from 'sequelize';
+import { Op, type Order, type WhereOptions } from 'sequelize';
 import { can, type Actor } from '@shared/policies.ts';
-import type { ListPartsQuery, PartListDto, PartSummaryDto } from '@shared/schemas/part.ts';
+import type { ListPartsQuery, PartDetailDto, PartListDto, PartListItemDto, ProposePartInput, GainHistogramDto } from '@shared/schemas/part.ts';
+import { priceLabel } from '@shared/schemas/listing.ts';
+import { expectedGainForPart } from '@shared/workbench/part-expected-gain.ts';
 import { Part } from '../models/part.model.ts';
+import { CalibrationRun } from '../models/calibration-run.model.ts';
+import { Build } from '../models/build.model.ts';
+import { User } from '../models/user.model.ts';
+import { Listing } from '../models/listing.model.ts';
+import { authorize } from '../policies/authorize.ts';
 import { NotFoundError } from '../errors.ts';
 import { presentPartSummary } from '../presenters/part.presenter.ts';
 
 const escapeLike = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
+/** Most rows one export returns. */
+export const EXPORT_LIMIT = 10_000;
 
-/** Listed parts (accepted, not merged away), by name or salvage source and category. */
-export async function listParts(query: ListPartsQuery): Promise<PartListDto> {
-  const where: WhereOptions<Part> = { status: 'accepted', mergedIntoId: null };
-  if (query.category) Object.assign(where, { category: query.category });
-  if (query.q) {
-    const like = `%${escapeLike(query.q)}%`;
-    Object.assign(where, { [Op.or]: [{ name: { [Op.like]: like } }, { salvageSource: { [Op.like]: like } }] });
+const SORTS: Record<ListPartsQuery['sort'], Order> = {
+  gain: [['gainMedianNmPerV', 'ASC'], ['id', 'ASC']],
+  '-gain': [['gainMedianNmPerV', 'DESC'], ['id', 'DESC']],
+  runs: [['acceptedRunCount', 'ASC'], ['id', 'ASC']],
+  '-runs': [['acceptedRunCount', 'DESC'], ['id', 'DESC']],
+  newest: [['createdAt', 'DESC'], ['id', 'DESC']],
+  name: [['name', 'ASC'], ['id', 'ASC']],
+};
+
+/** The WHERE of a registry search: listed parts only; a gain range matches the median and drops parts without runs. */
+export function partSearchWhere(q: ListPartsQuery): WhereOptions<Part> {
+  const where: Record<string | symbol, unknown> = { status: 'accepted' };
+  if (q.category) where.category = q.category;
+  if (q.gainMin !== undefined || q.gainMax !== undefined) {
+    where.gainMedianNmPerV = { [Op.ne]: null, ...(q.gainMin !== undefined ? { [Op.gte]: q.gainMin } : {}), ...(q.gainMax !== undefined ? { [Op.lte]: q.gainMax } : {}) };
   }
-  const { rows, count } = await Part.findAndCountAll({
-    where,
-    order: [['name', 'ASC'], ['id', 'ASC']],
-    limit: query.pageSize,
-    offset: (query.page - 1) * query.pageSize,
-  });
-  return { items: rows.map(presentPartSummary), total: count, page: query.page, pageSize: query.pageSize };
+  if (q.minRuns !== undefined) where.acceptedRunCount = { [Op.gte]: q.minRuns };
+  if (q.maxVolts !== undefined) where.safeVolts = { [Op.lte]: q.maxVolts };
+  if (q.q) {
+    const like = `%${escapeLike(q.q)}%`;
+    where[Op.or] = [{ name: { [Op.like]: like } }, { salvageSource: { [Op.like]: like } }];
+  }
+  return where as WhereOptions<Part>;
+}
+
+function presentListItem(p: Part): PartListItemDto {
+  return {
+    ...presentPartSummary(p),
+    gainMedianNmPerV: p.gainMedianNmPerV,
+    gainP25NmPerV: p.gainP25NmPerV,
+    gainP75NmPerV: p.gainP75NmPerV,
+    acceptedRunCount: p.acceptedRunCount,
+    buildCount: p.buildCount,
+    createdAt: p.createdAt.toISOString(),
+  };
+}
+
+/** Registry search with server-side filters, sort and paging. */
+export async function listParts(q: ListPartsQuery): Promise<PartListDto> {
+  const where = partSearchWhere(q);
+  const [rows, total] = await Promise.all([
+    Part.findAll({ where, order: SORTS[q.sort], limit: q.pageSize, offset: (q.page - 1) * q.pageSize }),
+    Part.count({ where }),
+  ]);
+  return { items: rows.map(presentListItem), total, page: q.page, pageSize: q.pageSize };
+}
+
+/** The whole current search (up to EXPORT_LIMIT rows) for CSV or JSON download. */
+export async function exportParts(q: ListPartsQuery): Promise<PartListItemDto[]> {
+  const rows = await Part.findAll({ where: partSearchWhere(q), order: SORTS[q.sort], limit: EXPORT_LIMIT });
+  return rows.map(presentListItem);
+}
+
+/** Accepted part medians in log-spaced bins (5 per decade) for the range control's histogram. */
+export async function gainHistogram(): Promise<GainHistogramDto> {
+  const perDecade = 5;
+  const rows = (await Part.findAll({
+    where: { status: 'accepted', gainMedianNmPerV: { [Op.gt]: 0 } },
+    attributes: [[Part.sequelize!.literal(`FLOOR(LOG10(gain_median_nm_per_v) * ${perDecade})`), 'bin'], [Part.sequelize!.fn('COUNT', Part.sequelize!.col('id')), 'count']],
+    group: ['bin'],
+    order: [[Part.sequelize!.literal('bin'), 'ASC']],
+    raw: true,
+  })) as unknown as { bin: number; count: number }[];
+  return {
+    binsPerDecade: perDecade,
+    bins: rows.map((r) => ({ fromNmPerV: 10 ** (Number(r.bin) / perDecade), toNmPerV: 10 ** ((Number(r.bin) + 1) / perDecade), count: Number(r.count) })),
+  };
 }
 
 /** One part: listed ones for everyone; a proposed or rejected one only for its proposer and moderators. */
-export async function getPart(actor: Actor | null, partId: number): Promise<PartSummaryDto> {
+export async function getPart(actor: Actor | null, partId: number): Promise<PartDetailDto> {
   const part = await Part.findByPk(partId);
   if (!part || (part.status !== 'accepted' && !can(actor, 'part.view-unlisted', { ownerId: part.proposedById }))) {
     throw new NotFoundError('No such part.');
   }
-  return presentPartSummary(part);
+  const [runs, listings, proposer] = await Promise.all([
+    CalibrationRun.findAll({ where: { partId, status: 'accepted' }, order: [['createdAt', 'ASC'], ['id', 'ASC']], limit: 2000 }),
+    Listing.findAll({ where: { partId, status: { [Op.ne]: 'closed' }, hiddenAt: null }, order: [['createdAt', 'DESC']], limit: 50 }),
+    part.proposedById ? User.findByPk(part.proposedById, { attributes: ['login'] }) : null,
+  ]);
+  const builds = new Map((await Build.findAll({ where: { id: [...new Set(runs.map((r) => r.buildId))] }, attributes: ['id', 'title', 'ownerId'] })).map((b) => [b.id, b]));
+  const userIds = [...new Set([...[...builds.values()].map((b) => b.ownerId), ...listings.map((l) => l.ownerId)])];
+  const users = new Map((await User.findAll({ where: { id: userIds }, attributes: ['id', 'login'] })).map((u) => [u.id, u.login]));
+  const expected = expectedGainForPart(part, 'single');
+  return {
+    ...presentPartSummary(part),
+    notes: part.notes,
+    proposedBy: proposer?.login ?? null,
+    mergedIntoId: part.mergedIntoId,
+    createdAt: part.createdAt.toISOString(),
+    expectedGain: expected,
+    runs: runs.map((r) => ({
+      id: r.id,
+      buildId: r.buildId,
+      buildTitle: builds.get(r.buildId)?.title ?? '',
+      maker: users.get(builds.get(r.buildId)?.ownerId ?? 0) ?? 'unknown',
+      method: r.method,
+      gainNmPerV: Math.abs(r.gainNmPerV),
+      gainCi95NmPerV: [r.gainCi95LoNmPerV, r.gainCi95HiNmPerV],
+      hysteresisPctFs: r.hysteresisPctFs,
+      createdAt: r.createdAt.toISOString(),
+    })),
+    listings: listings.map((l) => ({
+      id: l.id,
+      kind: l.kind,
+      title: `${l.kind === 'offering' ? 'Offering' : 'Seeking'} ${l.quantity} × ${part.name}`,
+      quantity: l.quantity,
+      condition: l.condition,
+      priceLabel: priceLabel(l.priceKind, l.priceAmount, l.currency),
+      region: l.region,
+      owner: users.get(l.ownerId) ?? 'unknown',
+    })),
+  };
+}
+
+/** A maker proposes a part; it waits on the review desk until a moderator accepts it. */
+export async function proposePart(actor: Actor | null, input: ProposePartInput): Promise<{ id: number; status: string }> {
+  authorize(actor, 'content.create');
+  const part = await Part.create({
+    category: input.category,
+    name: input.name,
+    salvageSource: input.salvageSource ?? null,
+    material: input.material ?? null,
+    lengthMm: input.lengthMm ?? null,
+    widthMm: input.widthMm ?? null,
+    thicknessMm: input.thicknessMm ?? null,
+    outerDiameterMm: input.outerDiameterMm ?? null,
+    wallMm: input.wallMm ?? null,
+    layers: input.layers ?? null,
+    capacitanceNf: input.capacitanceNf ?? null,
+    safeVolts: input.safeVolts ?? null,
+    notes: input.notes ?? null,
+    proposedById: actor.id,
+  });
+  return { id: part.id, status: part.status };
 }

@@ -7,6 +7,7 @@ import { Photo } from '../models/photo.model.ts';
 import { NotFoundError, ValidationError } from '../errors.ts';
 import { presentPhoto } from '../presenters/photo.presenter.ts';
 import { loadBuildForEdit, markEdited } from './build-access.ts';
+import { ListingPhoto } from '../models/listing-photo.model.ts';
 import { processPhoto, removeFiles, withContentLocks, writeVariants, type ProcessedPhoto } from './photo-storage.ts';
 
 export interface UploadPhotosInput {
@@ -37,10 +38,18 @@ function altsFor(alt: string[], count: number): string[] {
 }
 
 /** Remove files of content nobody references any more; checked by the indexed content hash. */
-async function pruneUnreferenced(uploadsDir: string, byHash: Map<string, string[]>): Promise<void> {
+export async function pruneUnreferenced(uploadsDir: string, byHash: Map<string, string[]>): Promise<void> {
   for (const [contentHash, files] of byHash) {
-    if ((await Photo.count({ where: { contentHash } })) === 0) await removeFiles(uploadsDir, files);
+    const uses = (await Photo.count({ where: { contentHash } })) + (await ListingPhoto.count({ where: { contentHash } }));
+    if (uses === 0) await removeFiles(uploadsDir, files);
   }
+}
+
+/** Files of the given photo rows grouped by content hash, for pruning after the rows are gone. */
+export function filesByHash(rows: { contentHash: string; displayFile: string; thumbFile: string }[]): Map<string, string[]> {
+  const map = new Map<string, string[]>();
+  for (const r of rows) map.set(r.contentHash, [r.displayFile, r.thumbFile]);
+  return map;
 }
 
 /** The build's photos in display order, for the build page and the builds service. */

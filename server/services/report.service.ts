@@ -5,17 +5,17 @@ import { Build } from '../models/build.model.ts';
 import { Part } from '../models/part.model.ts';
 import { CalibrationRun } from '../models/calibration-run.model.ts';
 import { authorize } from '../policies/authorize.ts';
-import { NotFoundError } from '../errors.ts';
 import { getRun } from './run.service.ts';
 import { getPart } from './part.service.ts';
 import { loadBuildForView } from './build-access.ts';
+import { loadListingForView } from './listing.service.ts';
 
-/** Listings arrive with the exchange; until then a listing target is looked up through this hook. */
+/** Each kind of target must exist and be visible to the reporter (404 otherwise). */
 const visibleTarget: Record<ReportTargetType, (actor: Actor, id: number) => Promise<unknown>> = {
   build: (actor, id) => loadBuildForView(actor, id),
   run: (actor, id) => getRun(actor, id),
   part: (actor, id) => getPart(actor, id),
-  listing: async () => { throw new NotFoundError('No such listing.'); },
+  listing: (actor, id) => loadListingForView(actor, id),
 };
 
 /** Anyone signed in may report something they can see; moderators work the report on the desk. */

@@ -53,17 +53,103 @@ export interface PartSummaryDto {
 
 export const partIdParams = z.strictObject({ partId: z.coerce.number().int().positive() });
 
-export const listPartsQuery = z.strictObject({
-  q: z.string().trim().max(100).optional(),
-  category: z.enum(PART_CATEGORIES).optional(),
-  page: z.coerce.number().int().min(1).max(100_000).default(1),
-  pageSize: z.coerce.number().int().min(1).max(100).default(25),
-});
+export const PART_SORTS = ['gain', '-gain', 'runs', '-runs', 'newest', 'name'] as const;
+export type PartSort = (typeof PART_SORTS)[number];
+
+const optionalNumber = (schema: z.ZodNumber) => z.preprocess((v) => (v === '' ? undefined : v), z.coerce.number().pipe(schema).optional());
+
+/** Registry search; every filter optional. A gain range matches parts whose median lies inside it. */
+export const listPartsQuery = z
+  .strictObject({
+    q: z.string().trim().max(100).optional(),
+    category: z.enum(PART_CATEGORIES).optional(),
+    gainMin: optionalNumber(z.number().min(0).max(1e7)),
+    gainMax: optionalNumber(z.number().min(0).max(1e7)),
+    minRuns: optionalNumber(z.number().int().min(0).max(1e6)),
+    maxVolts: optionalNumber(z.number().min(0).max(1e5)),
+    sort: z.enum(PART_SORTS).default('name'),
+    page: z.coerce.number().int().min(1).max(100_000).default(1),
+    pageSize: z.coerce.number().int().min(1).max(100).default(25),
+    format: z.enum(['json', 'csv']).optional(),
+  })
+  .refine((v) => v.gainMin === undefined || v.gainMax === undefined || v.gainMin <= v.gainMax, { message: 'gainMin must not exceed gainMax.', path: ['gainMin'] });
 export type ListPartsQuery = z.infer<typeof listPartsQuery>;
 
+/** A row of the registry table: the part summary plus its headline figures at the top level. */
+export interface PartListItemDto extends PartSummaryDto {
+  gainMedianNmPerV: number | null;
+  gainP25NmPerV: number | null;
+  gainP75NmPerV: number | null;
+  acceptedRunCount: number;
+  buildCount: number;
+  createdAt: string;
+}
+
 export interface PartListDto {
-  items: PartSummaryDto[];
+  items: PartListItemDto[];
   total: number;
   page: number;
   pageSize: number;
+}
+
+const mm = z.number().positive().max(10_000).nullable().optional();
+/** A maker proposes a part; it is listed once a moderator accepts it. */
+export const proposePartInput = z.strictObject({
+  category: z.enum(PART_CATEGORIES),
+  name: z.string().trim().min(3).max(160),
+  salvageSource: z.string().trim().max(240).optional(),
+  material: z.string().trim().max(40).optional(),
+  lengthMm: mm,
+  widthMm: mm,
+  thicknessMm: mm,
+  outerDiameterMm: mm,
+  wallMm: mm,
+  layers: z.number().int().min(1).max(10_000).nullable().optional(),
+  capacitanceNf: z.number().positive().max(1e9).nullable().optional(),
+  safeVolts: z.number().positive().max(100_000).nullable().optional(),
+  notes: z.string().trim().max(4000).optional(),
+});
+export type ProposePartInput = z.infer<typeof proposePartInput>;
+
+export const mergePartInput = z.strictObject({ intoPartId: z.number().int().positive(), note: z.string().trim().min(1).max(4000) });
+export type MergePartInput = z.infer<typeof mergePartInput>;
+
+/** An accepted run as the part page lists it. */
+export interface PartRunDto {
+  id: number;
+  buildId: number;
+  buildTitle: string;
+  maker: string;
+  method: string;
+  gainNmPerV: number;
+  gainCi95NmPerV: [number | null, number | null];
+  hysteresisPctFs: number | null;
+  createdAt: string;
+}
+
+export interface PartListingRefDto {
+  id: number;
+  kind: 'offering' | 'seeking';
+  title: string;
+  quantity: number;
+  condition: string;
+  priceLabel: string;
+  region: string;
+  owner: string;
+}
+
+export interface PartDetailDto extends PartSummaryDto {
+  notes: string | null;
+  proposedBy: string | null;
+  mergedIntoId: number | null;
+  createdAt: string;
+  expectedGain: { gainNmPerV: number; lowNmPerV: number; highNmPerV: number; basis: string } | null;
+  runs: PartRunDto[];
+  listings: PartListingRefDto[];
+}
+
+/** Counts of accepted part medians in log-spaced bins, for the range control's histogram. */
+export interface GainHistogramDto {
+  binsPerDecade: number;
+  bins: { fromNmPerV: number; toNmPerV: number; count: number }[];
 }

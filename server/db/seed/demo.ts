@@ -10,7 +10,8 @@ import { CalibrationRun } from '../../models/calibration-run.model.ts';
 import { DEMO_ACCOUNTS, standInEmail, standInGithubId } from '../../dev/demo-accounts.ts';
 import { runColumns } from '../../services/run.service.ts';
 import { recomputePartStats } from '../../services/part-stats.service.ts';
-import { DEMO_BUILDS, DEMO_PARTS, type DemoBuild } from './demo-scenario.ts';
+import { DEMO_BUILDS, DEMO_LISTINGS, DEMO_PARTS, type DemoBuild } from './demo-scenario.ts';
+import { Listing } from '../../models/listing.model.ts';
 import { demoSweep } from './demo-points.ts';
 
 const MARK = 'demo_seeded_at';
@@ -98,6 +99,15 @@ export async function seedDemoOnce(sequelize: Sequelize, attach: AttachPictures 
     const parts = await seedParts(users, transaction);
     for (const [i, b] of DEMO_BUILDS.entries()) await seedBuild(b, i, users, parts, attach, transaction);
     for (const part of parts.values()) await recomputePartStats(part.id, transaction);
+    for (const l of DEMO_LISTINGS) {
+      await Listing.create(
+        {
+          ownerId: users.get(l.owner)!.id, partId: parts.get(l.part)!.id, kind: l.kind, quantity: l.quantity, condition: l.condition, priceKind: l.priceKind,
+          priceAmount: l.priceAmount ?? null, currency: l.currency ?? null, region: l.region, shipsTo: l.shipsTo ?? null, notes: l.notes, status: l.status ?? 'open',
+        },
+        { transaction },
+      );
+    }
     await AppMeta.create({ metaKey: MARK, metaValue: new Date().toISOString() }, { transaction });
     return true;
   });

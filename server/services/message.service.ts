@@ -1,0 +1,129 @@
+import { Op } from 'sequelize';
+import type { Actor } from '@shared/policies.ts';
+import type { SendMessageInput, ThreadDto, ThreadSummaryDto } from '@shared/schemas/listing.ts';
+import { Listing } from '../models/listing.model.ts';
+import { Part } from '../models/part.model.ts';
+import { User } from '../models/user.model.ts';
+import { Message, MessageThread } from '../models/message.model.ts';
+import { authorize } from '../policies/authorize.ts';
+import { ConflictError, NotFoundError } from '../errors.ts';
+import { loadListingForView } from './listing.service.ts';
+import { enqueueMail, kickOutbox } from './outbox.service.ts';
+import { decisionMail } from './review-mails.ts';
+
+/** Mail the other party that a message waits on the site; the text never carries anyone's address. */
+async function notify(recipientId: number, senderLogin: string, listingTitle: string, body: string, threadId: number, transaction: import('sequelize').Transaction) {
+  const recipient = await User.findByPk(recipientId, { transaction, attributes: ['id', 'login', 'email', 'mailOptOut'] });
+  if (!recipient) return;
+  const excerpt = body.length > 600 ? `${body.slice(0, 600)}…` : body;
+  await enqueueMail(
+    recipient,
+    decisionMail({
+      subject: `Message from ${senderLogin} about ${listingTitle}`,
+      greeting: recipient.login,
+      lines: [`${senderLogin} wrote about ${listingTitle}:`, excerpt, 'Reply on Scanwright; your e-mail address is not shown to them.'],
+      note: null,
+      path: `/inbox/${threadId}`,
+      linkText: 'Read and reply',
+    }),
+    { essential: true, transaction },
+  );
+}
+
+async function listingTitle(listing: Listing): Promise<string> {
+  const part = await Part.findByPk(listing.partId, { attributes: ['name'] });
+  return `your ${listing.kind === 'offering' ? 'offer' : 'request'}: ${listing.quantity} × ${part?.name ?? 'part'}`;
+}
+
+/** Write to a listing's owner through the site: one thread per listing and enquirer. */
+export async function sendListingMessage(actor: Actor | null, listingId: number, input: SendMessageInput): Promise<{ threadId: number; messageId: number }> {
+  const listing = await loadListingForView(actor, listingId);
+  authorize(actor, 'listing.message', { ownerId: listing.ownerId });
+  if (listing.status === 'closed' || listing.hiddenAt) throw new ConflictError('This listing is closed.', 'listing_closed');
+  const title = await listingTitle(listing);
+  const me = await User.findByPk(actor.id, { attributes: ['login'] });
+  const result = await Listing.sequelize!.transaction(async (transaction) => {
+    const [thread] = await MessageThread.findOrCreate({
+      where: { listingId, starterId: actor.id },
+      defaults: { listingId, starterId: actor.id, ownerId: listing.ownerId, lastMessageAt: new Date() },
+      transaction,
+    });
+    const message = await Message.create({ threadId: thread.id, senderId: actor.id, body: input.body }, { transaction });
+    await thread.update({ lastMessageAt: new Date() }, { transaction });
+    await notify(listing.ownerId, me?.login ?? 'A maker', title, input.body, thread.id, transaction);
+    return { threadId: thread.id, messageId: message.id };
+  });
+  kickOutbox();
+  return result;
+}
+
+async function loadThread(actor: Actor | null, threadId: number): Promise<MessageThread> {
+  authorize(actor, 'content.create');
+  const thread = await MessageThread.findByPk(threadId);
+  if (!thread || (thread.ownerId !== actor.id && thread.starterId !== actor.id)) throw new NotFoundError('No such conversation.');
+  return thread;
+}
+
+async function summarize(actor: Actor, threads: MessageThread[]): Promise<ThreadSummaryDto[]> {
+  if (threads.length === 0) return [];
+  const ids = threads.map((t) => t.id);
+  const [listings, users, messages] = await Promise.all([
+    Listing.findAll({ where: { id: [...new Set(threads.map((t) => t.listingId))] } }),
+    User.findAll({ where: { id: [...new Set(threads.flatMap((t) => [t.ownerId, t.starterId]))] }, attributes: ['id', 'login'] }),
+    Message.findAll({ where: { threadId: ids }, order: [['createdAt', 'DESC'], ['id', 'DESC']] }),
+  ]);
+  const parts = new Map((await Part.findAll({ where: { id: [...new Set(listings.map((l) => l.partId))] }, attributes: ['id', 'name'] })).map((p) => [p.id, p.name]));
+  const listingMap = new Map(listings.map((l) => [l.id, l]));
+  const userMap = new Map(users.map((u) => [u.id, u.login]));
+  return threads.map((t) => {
+    const listing = listingMap.get(t.listingId)!;
+    const otherId = t.ownerId === actor.id ? t.starterId : t.ownerId;
+    const own = messages.filter((m) => m.threadId === t.id);
+    return {
+      id: t.id,
+      listing: { id: listing.id, kind: listing.kind, partName: parts.get(listing.partId) ?? '', status: listing.status },
+      other: { id: otherId, login: userMap.get(otherId) ?? 'unknown' },
+      role: t.ownerId === actor.id ? 'owner' : 'enquirer',
+      lastMessageAt: t.lastMessageAt.toISOString(),
+      lastMessage: own[0]?.body.slice(0, 200) ?? '',
+      unread: own.filter((m) => m.senderId !== actor.id && m.readAt === null).length,
+    };
+  });
+}
+
+/** The signed-in maker's conversations, most recent first. */
+export async function listThreads(actor: Actor | null): Promise<ThreadSummaryDto[]> {
+  authorize(actor, 'content.create');
+  const threads = await MessageThread.findAll({ where: { [Op.or]: [{ ownerId: actor.id }, { starterId: actor.id }] }, order: [['lastMessageAt', 'DESC']], limit: 200 });
+  return summarize(actor, threads);
+}
+
+/** One conversation; opening it marks the other party's messages read. */
+export async function getThread(actor: Actor | null, threadId: number): Promise<ThreadDto> {
+  const thread = await loadThread(actor, threadId);
+  await Message.update({ readAt: new Date() }, { where: { threadId, senderId: { [Op.ne]: actor!.id }, readAt: null } });
+  const [summary] = await summarize(actor!, [thread]);
+  const messages = await Message.findAll({ where: { threadId }, order: [['createdAt', 'ASC'], ['id', 'ASC']] });
+  const logins = new Map((await User.findAll({ where: { id: [thread.ownerId, thread.starterId] }, attributes: ['id', 'login'] })).map((u) => [u.id, u.login]));
+  return {
+    ...summary!,
+    messages: messages.map((m) => ({ id: m.id, fromMe: m.senderId === actor!.id, sender: logins.get(m.senderId) ?? 'unknown', body: m.body, createdAt: m.createdAt.toISOString() })),
+  };
+}
+
+/** Reply inside a conversation; the other party gets a mail with a link, never an address. */
+export async function replyInThread(actor: Actor | null, threadId: number, input: SendMessageInput): Promise<{ threadId: number; messageId: number }> {
+  const thread = await loadThread(actor, threadId);
+  const listing = await Listing.findByPk(thread.listingId);
+  const me = await User.findByPk(actor!.id, { attributes: ['login'] });
+  const otherId = thread.ownerId === actor!.id ? thread.starterId : thread.ownerId;
+  const title = listing ? (thread.ownerId === actor!.id ? `their enquiry` : await listingTitle(listing)) : 'a listing';
+  const result = await Listing.sequelize!.transaction(async (transaction) => {
+    const message = await Message.create({ threadId, senderId: actor!.id, body: input.body }, { transaction });
+    await thread.update({ lastMessageAt: new Date() }, { transaction });
+    await notify(otherId, me?.login ?? 'A maker', title, input.body, threadId, transaction);
+    return { threadId, messageId: message.id };
+  });
+  kickOutbox();
+  return result;
+}

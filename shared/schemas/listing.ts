@@ -1,0 +1,134 @@
+import { z } from 'zod';
+import { PART_CATEGORIES, type PartCategory } from './part.ts';
+
+export const LISTING_KINDS = ['offering', 'seeking'] as const;
+export type ListingKind = (typeof LISTING_KINDS)[number];
+export const LISTING_CONDITIONS = ['new', 'salvaged-tested', 'salvaged-untested'] as const;
+export type ListingCondition = (typeof LISTING_CONDITIONS)[number];
+export const PRICE_KINDS = ['price', 'free', 'swap'] as const;
+export type PriceKind = (typeof PRICE_KINDS)[number];
+export const LISTING_STATUSES = ['open', 'reserved', 'closed'] as const;
+export type ListingStatus = (typeof LISTING_STATUSES)[number];
+
+export const listingConditionLabels: Record<ListingCondition, string> = {
+  new: 'New',
+  'salvaged-tested': 'Salvaged, tested',
+  'salvaged-untested': 'Salvaged, untested',
+};
+
+/** Price as shown: "12.50 EUR", "free" or "swap". */
+export function priceLabel(kind: PriceKind, amount: number | null, currency: string | null): string {
+  if (kind === 'free') return 'Free';
+  if (kind === 'swap') return 'Swap';
+  return `${(amount ?? 0).toFixed(2)} ${currency ?? ''}`.trim();
+}
+
+const text = (max: number) => z.string().trim().max(max);
+
+const listingFields = {
+  partId: z.number().int().positive(),
+  kind: z.enum(LISTING_KINDS),
+  quantity: z.number().int().min(1).max(10_000),
+  condition: z.enum(LISTING_CONDITIONS),
+  priceKind: z.enum(PRICE_KINDS),
+  priceAmount: z.number().min(0).max(1_000_000).multipleOf(0.01).nullable().optional(),
+  currency: z.string().trim().regex(/^[A-Z]{3}$/, 'A three-letter currency code such as EUR.').nullable().optional(),
+  region: text(80).min(2),
+  shipsTo: text(160).optional(),
+  notes: text(4000).optional(),
+};
+
+const priceRule = (v: { priceKind?: PriceKind; priceAmount?: number | null; currency?: string | null }) =>
+  v.priceKind !== 'price' || (v.priceAmount != null && !!v.currency);
+
+export const createListingInput = z.strictObject(listingFields).refine(priceRule, { message: 'A price needs an amount and a currency.', path: ['priceAmount'] });
+export type CreateListingInput = z.infer<typeof createListingInput>;
+
+export const updateListingInput = z
+  .strictObject({ ...listingFields, status: z.enum(LISTING_STATUSES) })
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change.' });
+export type UpdateListingInput = z.infer<typeof updateListingInput>;
+
+const boolParam = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
+export const listListingsQuery = z.strictObject({
+  q: text(100).optional(),
+  kind: z.enum(LISTING_KINDS).optional(),
+  category: z.enum(PART_CATEGORIES).optional(),
+  condition: z.enum(LISTING_CONDITIONS).optional(),
+  region: text(80).optional(),
+  freeOnly: boolParam.optional(),
+  partId: z.coerce.number().int().positive().optional(),
+  page: z.coerce.number().int().min(1).max(100_000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(50).default(20),
+});
+export type ListListingsQuery = z.infer<typeof listListingsQuery>;
+
+export const listingIdParams = z.strictObject({ listingId: z.coerce.number().int().positive() });
+export const hideListingInput = z.strictObject({ hidden: z.boolean(), note: text(4000).min(1, 'Say why.') });
+export type HideListingInput = z.infer<typeof hideListingInput>;
+
+export interface ListingPhotoDto {
+  id: number;
+  url: string;
+  thumbUrl: string;
+  width: number;
+  height: number;
+  alt: string;
+}
+
+export interface ListingDto {
+  id: number;
+  kind: ListingKind;
+  part: { id: number; name: string; category: PartCategory; gainMedianNmPerV: number | null };
+  quantity: number;
+  condition: ListingCondition;
+  priceKind: PriceKind;
+  priceAmount: number | null;
+  currency: string | null;
+  priceLabel: string;
+  region: string;
+  shipsTo: string | null;
+  notes: string | null;
+  status: ListingStatus;
+  hidden: boolean;
+  hiddenNote: string | null;
+  owner: { id: number; login: string };
+  photos: ListingPhotoDto[];
+  createdAt: string;
+  updatedAt: string;
+  abilities: { edit: boolean; message: boolean; hide: boolean };
+}
+
+export interface ListingListDto {
+  items: ListingDto[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export const sendMessageInput = z.strictObject({ body: text(4000).min(1, 'Write a message.') });
+export type SendMessageInput = z.infer<typeof sendMessageInput>;
+export const threadIdParams = z.strictObject({ threadId: z.coerce.number().int().positive() });
+
+export interface ThreadSummaryDto {
+  id: number;
+  listing: { id: number; kind: ListingKind; partName: string; status: ListingStatus };
+  other: { id: number; login: string };
+  role: 'owner' | 'enquirer';
+  lastMessageAt: string;
+  lastMessage: string;
+  unread: number;
+}
+
+export interface MessageDto {
+  id: number;
+  fromMe: boolean;
+  sender: string;
+  body: string;
+  createdAt: string;
+}
+
+export interface ThreadDto extends ThreadSummaryDto {
+  messages: MessageDto[];
+}
