@@ -1,0 +1,132 @@
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import request from 'supertest';
+import { startTestApp, type TestApp } from '../support/test-app.ts';
+import { signIn, type Agent } from '../support/login.ts';
+import { createPart, createUser } from '../support/factories.ts';
+import { standInEmail } from '../../server/dev/demo-accounts.ts';
+import { Message } from '../../server/models/message.model.ts';
+
+let t: TestApp;
+beforeAll(async () => { t = await startTestApp(); });
+afterAll(async () => { await t.close(); });
+
+const send = (a: Agent, method: 'post' | 'patch', path: string, body: object) => a[method](path).set('X-CSRF-Token', a.csrf).send(body);
+
+async function ownerWithListing(over: object = {}) {
+  const owner = await createUser();
+  const part = await createPart();
+  const a = await signIn(t, owner.login);
+  const res = await send(a, 'post', '/api/listings', { partId: part.id, kind: 'offering', quantity: 3, condition: 'salvaged-tested', priceKind: 'price', priceAmount: 4.5, currency: 'EUR', region: 'Lower Saxony', shipsTo: 'EU', notes: 'Three bars.', ...over });
+  expect(res.status).toBe(201);
+  return { owner, part, a, listing: res.body };
+}
+
+describe('listings', () => {
+  test('when a maker posts a listing, then 201 open with its price label, and it appears in the exchange with filters', async () => {
+    const { listing, part, owner } = await ownerWithListing();
+    expect(listing).toMatchObject({ status: 'open', kind: 'offering', priceLabel: '4.50 EUR', owner: { login: owner.login }, part: { id: part.id }, abilities: { edit: true, message: false } });
+    expect(JSON.stringify(listing)).not.toContain('@');
+    const found = await request(t.app).get(`/api/listings?partId=${part.id}`);
+    expect(found.body.items.map((l: { id: number }) => l.id)).toEqual([listing.id]);
+    expect((await request(t.app).get(`/api/listings?partId=${part.id}&kind=seeking`)).body.total).toBe(0);
+    expect((await request(t.app).get(`/api/listings?partId=${part.id}&freeOnly=true`)).body.total).toBe(0);
+    expect((await request(t.app).get(`/api/listings?partId=${part.id}&condition=salvaged-tested&region=saxony`)).body.total).toBe(1);
+    expect((await request(t.app).get(`/api/listings?q=${encodeURIComponent(part.name)}`)).body.items.map((l: { id: number }) => l.id)).toContain(listing.id);
+  });
+
+  test.each([
+    [{ priceKind: 'price', priceAmount: null }, 'a price without amount'],
+    [{ currency: 'euro' }, 'a bad currency'],
+    [{ quantity: 0 }, 'zero quantity'],
+    [{ kind: 'lending' }, 'an unknown kind'],
+    [{ partId: 999999999 }, 'an unknown part'],
+  ])('when the listing has %o (%s), then 400', async (over) => {
+    const owner = await createUser();
+    const part = await createPart();
+    const a = await signIn(t, owner.login);
+    const res = await send(a, 'post', '/api/listings', { partId: part.id, kind: 'offering', quantity: 1, condition: 'new', priceKind: 'price', priceAmount: 1, currency: 'EUR', region: 'Here', ...over });
+    expect(res.status).toBe(400);
+  });
+
+  test('when the owner moves open → reserved → closed, then it leaves the exchange and cannot reopen; others get 403', async () => {
+    const { a, listing, part } = await ownerWithListing({ priceKind: 'free', priceAmount: undefined, currency: undefined });
+    const other = await signIn(t, (await createUser()).login);
+    expect((await send(other, 'patch', `/api/listings/${listing.id}`, { status: 'closed' })).status).toBe(403);
+    expect((await send(a, 'patch', `/api/listings/${listing.id}`, { status: 'reserved' })).body.status).toBe('reserved');
+    expect((await request(t.app).get(`/api/listings?partId=${part.id}`)).body.total).toBe(1);
+    expect((await send(a, 'patch', `/api/listings/${listing.id}`, { status: 'closed' })).body.status).toBe('closed');
+    expect((await request(t.app).get(`/api/listings?partId=${part.id}`)).body.total).toBe(0);
+    expect((await send(a, 'patch', `/api/listings/${listing.id}`, { status: 'open' })).status).toBe(400);
+    expect((await a.get('/api/listings/mine')).body.items.map((l: { id: number }) => l.id)).toContain(listing.id);
+  });
+
+  test('when a moderator hides a listing with a note, then visitors get 404, the owner sees the note, and the trail records it', async () => {
+    const { a, listing } = await ownerWithListing();
+    const mod = await signIn(t, (await createUser({ role: 'moderator' })).login);
+    expect((await send(mod, 'post', `/api/listings/${listing.id}/visibility`, { hidden: true })).status).toBe(400);
+    const res = await send(mod, 'post', `/api/listings/${listing.id}/visibility`, { hidden: true, note: 'Selling mains-powered gear without cautions.' });
+    expect(res.body.hidden).toBe(true);
+    expect((await request(t.app).get(`/api/listings/${listing.id}`)).status).toBe(404);
+    expect((await a.get(`/api/listings/${listing.id}`)).body).toMatchObject({ hidden: true, hiddenNote: 'Selling mains-powered gear without cautions.' });
+    const audit = await mod.get(`/api/review/audit?targetType=listing&targetId=${listing.id}`);
+    expect(audit.body.items[0]).toMatchObject({ action: 'listing.hide' });
+    const maker = await signIn(t, (await createUser()).login);
+    expect((await send(maker, 'post', `/api/listings/${listing.id}/visibility`, { hidden: false, note: 'x' })).status).toBe(403);
+  });
+});
+
+describe('messages', () => {
+  test('when a maker writes to a listing owner, then the message is stored, the owner is e-mailed with a link, and no address leaks', async () => {
+    const { owner, a: ownerAgent, listing } = await ownerWithListing();
+    const buyer = await createUser();
+    const b = await signIn(t, buyer.login);
+    const res = await send(b, 'post', `/api/listings/${listing.id}/messages`, { body: 'Are the bars still available? I can pay by bank transfer.' });
+    expect(res.status).toBe(201);
+    const mail = await t.mail.waitFor((m) => m.to.includes(standInEmail(owner.login)) && m.subject.includes(buyer.login));
+    expect(mail.text).toContain(`${t.config.publicUrl}/inbox/${res.body.threadId}`);
+    expect(mail.text).toContain('Are the bars still available?');
+    expect(mail.text + mail.html + mail.from).not.toContain(standInEmail(buyer.login));
+    const inbox = await ownerAgent.get('/api/inbox');
+    expect(inbox.body.threads[0]).toMatchObject({ id: res.body.threadId, other: { login: buyer.login }, role: 'owner', unread: 1 });
+    expect(JSON.stringify(inbox.body)).not.toContain('@');
+    const thread = await ownerAgent.get(`/api/inbox/${res.body.threadId}`);
+    expect(thread.body.messages).toMatchObject([{ fromMe: false, sender: buyer.login }]);
+    const reply = await send(ownerAgent, 'post', `/api/inbox/${res.body.threadId}/messages`, { body: 'Yes, two left.' });
+    expect(reply.status).toBe(201);
+    const back = await t.mail.waitFor((m) => m.to.includes(standInEmail(buyer.login)) && m.text.includes('Yes, two left.'));
+    expect(back.text + back.html).not.toContain(standInEmail(owner.login));
+    expect((await b.get(`/api/inbox/${res.body.threadId}`)).body.messages.map((m: { body: string }) => m.body)).toEqual(['Are the bars still available? I can pay by bank transfer.', 'Yes, two left.']);
+  });
+
+  test('when the owner writes to their own listing, an outsider reads a thread, or the body is empty, then 403 / 404 / 400', async () => {
+    const { a, listing } = await ownerWithListing();
+    expect((await send(a, 'post', `/api/listings/${listing.id}/messages`, { body: 'me' })).status).toBe(403);
+    const b = await signIn(t, (await createUser()).login);
+    const sent = await send(b, 'post', `/api/listings/${listing.id}/messages`, { body: 'hello' });
+    const outsider = await signIn(t, (await createUser()).login);
+    expect((await outsider.get(`/api/inbox/${sent.body.threadId}`)).status).toBe(404);
+    expect((await send(b, 'post', `/api/listings/${listing.id}/messages`, { body: '   ' })).status).toBe(400);
+    expect((await request(t.app).get('/api/inbox')).status).toBe(401);
+  });
+
+  test('when a sender exceeds the message limit, then 429 in the error shape and nothing more is stored', async () => {
+    const limited = await startTestApp({ rateLimits: true });
+    try {
+      const owner = await createUser();
+      const part = await createPart();
+      const oa = await signIn(limited, owner.login);
+      const listing = (await send(oa, 'post', '/api/listings', { partId: part.id, kind: 'offering', quantity: 1, condition: 'new', priceKind: 'free', region: 'Here' })).body;
+      const b = await signIn(limited, (await createUser()).login);
+      const statuses = [];
+      for (let i = 0; i < 22; i++) statuses.push((await send(b, 'post', `/api/listings/${listing.id}/messages`, { body: `n${i}` })).status);
+      expect(statuses.slice(0, 20).every((s) => s === 201)).toBe(true);
+      const last = await send(b, 'post', `/api/listings/${listing.id}/messages`, { body: 'one more' });
+      expect(last.status).toBe(429);
+      expect(last.body).toMatchObject({ error: { code: 'rate_limited' } });
+      expect(await Message.count({ where: { body: 'one more' } })).toBe(0);
+    } finally {
+      await limited.close();
+      t.rebind();
+    }
+  });
+});
