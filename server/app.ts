@@ -61,6 +61,14 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
       userId: s.passport?.user ?? null,
     }),
   }) as unknown as SessionStore;
+  // express-session touches (extends) a session after the response is already on the wire; a
+  // database failure there reaches the final handler, which cuts that finished response off.
+  // An expiry not extended once is harmless, so the failure is logged and dropped.
+  const touch = store.touch.bind(store);
+  store.touch = (sid, data, done) => touch(sid, data, (err?: unknown) => {
+    if (err) log.warn({ err }, 'session touch failed');
+    done?.();
+  });
   const https = config.publicUrl.startsWith('https://');
 
   const app = express();

@@ -9,6 +9,7 @@ import * as createActuatorsAndRuns from './migrations/20261201001200-create-actu
 import * as createReview from './migrations/20261201002000-create-review.ts';
 import * as createExchange from './migrations/20261201003000-create-exchange.ts';
 import * as addPartSearchIndexes from './migrations/20261201003100-add-part-search-indexes.ts';
+import * as addPartDescIndexes from './migrations/20261201003200-add-part-desc-indexes.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -23,6 +24,7 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261201002000-create-review', createReview],
   ['20261201003000-create-exchange', createExchange],
   ['20261201003100-add-part-search-indexes', addPartSearchIndexes],
+  ['20261201003200-add-part-desc-indexes', addPartDescIndexes],
 ];
 
 /** Umzug over our migration list; the only source of the schema, in tests too. */

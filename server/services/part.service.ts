@@ -1,4 +1,4 @@
-import { Op, type Order, type WhereOptions } from 'sequelize';
+import { IndexHints, Op, type Order, type WhereOptions } from 'sequelize';
 import { can, type Actor } from '@shared/policies.ts';
 import type { ListPartsQuery, PartDetailDto, PartListDto, PartListItemDto, ProposePartInput, GainHistogramDto } from '@shared/schemas/part.ts';
 import { priceLabel } from '@shared/schemas/listing.ts';
@@ -53,11 +53,33 @@ function presentListItem(p: Part): PartListItemDto {
   };
 }
 
+/**
+ * The index that serves a sort (MariaDB-specific hint). Without it the optimizer scans
+ * (status, gain) by status alone for descending sorts; see migration 20261201003200.
+ */
+function sortIndex(q: ListPartsQuery): string | null {
+  if (q.q) return null;
+  switch (q.sort) {
+    case 'gain': return q.category ? 'parts_status_category_gain' : 'parts_status_gain_median_nm_per_v';
+    case '-gain': return q.category ? 'parts_status_category_gain_desc' : 'parts_status_gain_desc';
+    case '-runs': return q.gainMin === undefined && q.gainMax === undefined ? 'parts_status_runs_desc' : null;
+    case 'newest': return q.gainMin === undefined && q.gainMax === undefined ? 'parts_status_created_desc' : null;
+    default: return null;
+  }
+}
+
 /** Registry search with server-side filters, sort and paging. */
 export async function listParts(q: ListPartsQuery): Promise<PartListDto> {
   const where = partSearchWhere(q);
+  const index = sortIndex(q);
   const [rows, total] = await Promise.all([
-    Part.findAll({ where, order: SORTS[q.sort], limit: q.pageSize, offset: (q.page - 1) * q.pageSize }),
+    Part.findAll({
+      where,
+      order: SORTS[q.sort],
+      limit: q.pageSize,
+      offset: (q.page - 1) * q.pageSize,
+      ...(index ? { indexHints: [{ type: IndexHints.FORCE, values: [index] }] } : {}),
+    }),
     Part.count({ where }),
   ]);
   return { items: rows.map(presentListItem), total, page: q.page, pageSize: q.pageSize };

@@ -62,6 +62,9 @@ export async function decideRun(actor: Actor | null, runId: number, input: Accep
     const run = await CalibrationRun.findByPk(runId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!run) throw new NotFoundError('No such calibration run.');
     if (run.status !== 'pending') throw notWaiting('calibration run');
+    // Take the part row first: changing the run's status re-checks its part foreign key (a shared
+    // lock), and two decisions on one part would otherwise deadlock upgrading it for the stats.
+    await Part.findByPk(run.partId, { transaction, lock: transaction.LOCK.UPDATE, attributes: ['id'] });
     const status = input.decision === 'accept' ? 'accepted' : 'rejected';
     await run.update({ status, reviewNote: input.note ?? null, reviewedById: me.id, reviewedAt: new Date() }, { transaction });
     await recomputePartStats(run.partId, transaction);

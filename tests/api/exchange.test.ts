@@ -40,7 +40,7 @@ describe('listings', () => {
     [{ quantity: 0 }, 'zero quantity'],
     [{ kind: 'lending' }, 'an unknown kind'],
     [{ partId: 999999999 }, 'an unknown part'],
-  ])('when the listing has %o (%s), then 400', async (over) => {
+  ])('when the listing has %o (%s), then 400', async (over: object) => {
     const owner = await createUser();
     const part = await createPart();
     const a = await signIn(t, owner.login);
