@@ -34,13 +34,13 @@ describe('listings', () => {
     expect((await request(t.app).get(`/api/listings?q=${encodeURIComponent(part.name)}`)).body.items.map((l: { id: number }) => l.id)).toContain(listing.id);
   });
 
-  test.each([
+  test.each<[object, string]>([
     [{ priceKind: 'price', priceAmount: null }, 'a price without amount'],
     [{ currency: 'euro' }, 'a bad currency'],
     [{ quantity: 0 }, 'zero quantity'],
     [{ kind: 'lending' }, 'an unknown kind'],
     [{ partId: 999999999 }, 'an unknown part'],
-  ])('when the listing has %o (%s), then 400', async (over: object) => {
+  ])('when the listing has %o (%s), then 400', async (over) => {
     const owner = await createUser();
     const part = await createPart();
     const a = await signIn(t, owner.login);
