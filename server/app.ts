@@ -15,6 +15,9 @@ import { createPassport } from './auth/passport.ts';
 import { createMailer, type Mailer } from './services/mail.service.ts';
 import { startOutboxWorker } from './services/outbox.service.ts';
 import { requireCsrf } from './middleware/csrf.ts';
+import { requireSameOrigin } from './middleware/same-origin.ts';
+import { jsonBody } from './middleware/json-body.ts';
+import { sessionUser } from './middleware/session-user.ts';
 import { errorHandler, apiNotFound } from './middleware/error-handler.ts';
 import { limiter } from './middleware/rate-limit.ts';
 import { healthRoutes } from './routes/health.routes.ts';
@@ -108,6 +111,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
     }),
   );
   app.use(compression());
+  app.use(requireSameOrigin(config.publicUrl));
 
   const dist = resolve(config.clientDist);
   if (existsSync(dist)) {
@@ -117,8 +121,8 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use('/uploads', express.static(resolve(config.uploadsDir), { index: false, immutable: true, maxAge: '30d', fallthrough: false }));
   app.use(healthRoutes(sequelize));
 
-  app.use(['/api/workbench', '/api/actuators'], express.json({ limit: '12mb' }));
-  app.use(express.json({ limit: '1mb' }));
+  app.use(['/api/workbench', '/api/actuators'], jsonBody('12mb'));
+  app.use(jsonBody('1mb'));
   app.use(
     session({
       name: 'scanwright.sid',
@@ -131,7 +135,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
     }),
   );
   app.use(passport.initialize());
-  app.use(passport.session());
+  app.use(sessionUser(passport.session()));
   app.use(['/api', '/auth/logout'], requireCsrf);
 
   app.use(sessionRoutes());

@@ -3,6 +3,9 @@ import { ZodError } from 'zod';
 import { BaseError, ConnectionError, UniqueConstraintError, TimeoutError, ForeignKeyConstraintError } from 'sequelize';
 import { AppError } from '../errors.ts';
 
+/** At most this many field issues go back in `details`. */
+const MAX_DETAILS = 50;
+
 const body = (code: string, message: string, details?: unknown) => ({ error: details === undefined ? { code, message } : { code, message, details } });
 
 /** Unknown /api and /auth paths answer 404 in the error shape. */
@@ -24,7 +27,8 @@ export function errorHandler(showStack: boolean): ErrorRequestHandler {
     if (res.headersSent) return void req.socket.destroy();
     if (err instanceof AppError) return void res.status(err.status).json(body(err.code, err.message, err.details));
     if (err instanceof ZodError) {
-      const details = err.issues.map((i) => ({ path: i.path.map(String).join('.'), message: i.message, code: i.code }));
+      // The first issues are enough to fix a form; all of them would let a 4 MB body of bad items become a 30 MB answer.
+      const details = err.issues.slice(0, MAX_DETAILS).map((i) => ({ path: i.path.map(String).join('.'), message: i.message, code: i.code }));
       const first = details[0];
       return void res.status(400).json(body('validation_failed', first ? `${first.path || 'input'}: ${first.message}` : 'Invalid input.', details));
     }

@@ -5,6 +5,7 @@ import { buildIdParams, photoParams, reorderPhotosInput, updatePhotoInput } from
 import type { Config } from '../config.ts';
 import { AppError, ValidationError } from '../errors.ts';
 import { validate } from '../middleware/validate.ts';
+import { requireUser } from '../middleware/auth.ts';
 import { actorOf } from '../middleware/actor.ts';
 import { MAX_FILE_BYTES, MAX_FILES_PER_UPLOAD } from '../services/photo-storage.ts';
 import { assertCanAddPhotos, deletePhoto, reorderPhotos, setCoverPhoto, updatePhoto, uploadPhotos } from '../services/photo.service.ts';
@@ -53,6 +54,7 @@ export function photoRoutes(config: Config): Router {
 
   r.post(
     '/api/builds/:buildId/photos',
+    requireUser,
     build,
     async (req, res, next) => {
       await assertCanAddPhotos(actorOf(req), res.locals.params.buildId);
@@ -66,17 +68,17 @@ export function photoRoutes(config: Config): Router {
       res.status(201).json({ photos });
     },
   );
-  r.put('/api/builds/:buildId/photos/order', build, validate(reorderPhotosInput), async (req, res) => {
+  r.put('/api/builds/:buildId/photos/order', requireUser, build, validate(reorderPhotosInput), async (req, res) => {
     res.json({ photos: await reorderPhotos(actorOf(req), res.locals.params.buildId, res.locals.body.photoIds) });
   });
-  r.patch('/api/builds/:buildId/photos/:photoId', photo, validate(updatePhotoInput), async (req, res) => {
+  r.patch('/api/builds/:buildId/photos/:photoId', requireUser, photo, validate(updatePhotoInput), async (req, res) => {
     res.json(await updatePhoto(actorOf(req), res.locals.params.buildId, res.locals.params.photoId, res.locals.body));
   });
-  r.delete('/api/builds/:buildId/photos/:photoId', photo, async (req, res) => {
+  r.delete('/api/builds/:buildId/photos/:photoId', requireUser, photo, async (req, res) => {
     await deletePhoto(actorOf(req), res.locals.params.buildId, res.locals.params.photoId, config.uploadsDir);
     res.status(204).end();
   });
-  r.post('/api/builds/:buildId/photos/:photoId/cover', photo, async (req, res) => {
+  r.post('/api/builds/:buildId/photos/:photoId/cover', requireUser, photo, async (req, res) => {
     res.json({ cover: await setCoverPhoto(actorOf(req), res.locals.params.buildId, res.locals.params.photoId) });
   });
   return r;

@@ -5,6 +5,9 @@ import { queryClient } from '@/lib/query-client.ts';
 import { sessionQuery } from '@/features/session/api/get-session.ts';
 import { workbenchRoutes } from './routes/workbench/workbench-routes.tsx';
 import { buildsRoutes } from './routes/builds/builds-routes.tsx';
+import { partsRoutes } from './routes/parts/parts-routes.tsx';
+import { exchangeRoutes, inboxRoutes } from './routes/exchange/exchange-routes.tsx';
+import { reviewRoutes } from './routes/review/review-routes.tsx';
 
 /** Each page is its own chunk (route-level code splitting). */
 export const router = createBrowserRouter([
@@ -20,9 +23,11 @@ export const router = createBrowserRouter([
         children: [
           { index: true, lazy: async () => ({ Component: (await import('./routes/home.tsx')).HomePage }) },
           buildsRoutes,
-          { path: 'parts/*', lazy: async () => ({ Component: (await import('./routes/coming-soon.tsx')).PartsComingSoon }) },
-          { path: 'exchange/*', lazy: async () => ({ Component: (await import('./routes/coming-soon.tsx')).ExchangeComingSoon }) },
-          { path: 'review/*', lazy: async () => ({ Component: (await import('./routes/coming-soon.tsx')).ReviewComingSoon }) },
+          partsRoutes,
+          exchangeRoutes,
+          inboxRoutes,
+          reviewRoutes,
+          { path: 'account', lazy: async () => ({ Component: (await import('./routes/account/account-settings.tsx')).AccountSettingsPage }) },
           { path: 'admin', lazy: async () => ({ Component: (await import('./routes/admin/users.tsx')).AdminUsersPage }) },
           workbenchRoutes,
           { path: '*', lazy: async () => ({ Component: (await import('./routes/not-found.tsx')).NotFoundPage }) },

@@ -3,16 +3,35 @@ import request from 'supertest';
 import { startTestApp, type TestApp } from '../support/test-app.ts';
 
 let t: TestApp;
-beforeAll(async () => { t = await startTestApp(); });
+let agent: ReturnType<typeof request.agent>;
+let csrf = '';
+beforeAll(async () => {
+  t = await startTestApp();
+  agent = request.agent(t.app);
+  csrf = (await agent.get('/api/session')).body.csrfToken;
+});
 afterAll(async () => { await t.close(); });
 
-const post = (slug: string, body: unknown) => request(t.app).post(`/api/workbench/${slug}`).send(body as object);
+// The calculations carry a session token like any page would, so their checks do not hinge on the
+// CSRF exemption; the exemption itself is checked on its own below.
+const post = (slug: string, body: unknown) => agent.post(`/api/workbench/${slug}`).set('X-CSRF-Token', csrf).send(body as object);
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 const errorShape = { error: { code: expect.any(String), message: expect.any(String) } };
 const cautionIds = (body: { cautions: { id: string }[] }) => body.cautions.map((c) => c.id);
 
+const slugs = ['fit', 'peak-to-peak', 'creep', 'expected-gain', 'mixing', 'mixing-fit', 'scan-plan', 'resonance', 'drive-current', 'tunnelling', 'convert'];
+
+describe('POST /api/workbench/<slug> without a session or CSRF token', () => {
+  test.each(slugs)('when a visitor with no cookie posts an empty body to %s, then 400 validation_failed, not 403', async (slug) => {
+    const res = await request(t.app).post(`/api/workbench/${slug}`).send({});
+    expect(res.body.error?.code).not.toBe('csrf_failed');
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('validation_failed');
+  });
+});
+
 describe('POST /api/workbench/fit', () => {
-  test('when a visitor posts a straight run without CSRF, then 200 and the gain in nm/V [calc]', async () => {
+  test('when a straight run is posted in µm, then 200 and the gain in nm/V [calc]', async () => {
     const points = [0, 1, 2, 3].map((v) => ({ volts: v, displacement: 0.1026 * v }));
     const res = await post('fit', { points, displacementUnit: 'um' });
     expect(res.status).toBe(200);

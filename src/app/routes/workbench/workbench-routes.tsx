@@ -5,5 +5,15 @@ export const workbenchRoutes: RouteObject = {
   path: 'workbench',
   children: [
     { index: true, lazy: async () => ({ Component: (await import('./workbench-index.tsx')).WorkbenchIndexPage }) },
+    { path: 'fit', lazy: async () => ({ Component: (await import('./fit.tsx')).FitPage }) },
+    { path: 'peak-to-peak', lazy: async () => ({ Component: (await import('./peak-to-peak.tsx')).PeakToPeakPage }) },
+    { path: 'creep', lazy: async () => ({ Component: (await import('./creep.tsx')).CreepPage }) },
+    { path: 'expected-gain', lazy: async () => ({ Component: (await import('./expected-gain.tsx')).ExpectedGainPage }) },
+    { path: 'mixing', lazy: async () => ({ Component: (await import('./mixing.tsx')).MixingPage }) },
+    { path: 'scan-planner', lazy: async () => ({ Component: (await import('./scan-planner.tsx')).ScanPlannerPage }) },
+    { path: 'resonance', lazy: async () => ({ Component: (await import('./resonance.tsx')).ResonancePage }) },
+    { path: 'drive-current', lazy: async () => ({ Component: (await import('./drive-current.tsx')).DriveCurrentPage }) },
+    { path: 'tunnelling', lazy: async () => ({ Component: (await import('./tunnelling.tsx')).TunnellingPage }) },
+    { path: 'units', lazy: async () => ({ Component: (await import('./units.tsx')).UnitsPage }) },
   ],
 };

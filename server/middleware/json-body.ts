@@ -1,0 +1,11 @@
+import { isUtf8 } from 'node:buffer';
+import express, { type RequestHandler } from 'express';
+import { AppError } from '../errors.ts';
+
+/** JSON must be UTF-8 (RFC 8259); without this check invalid bytes would silently become U+FFFD and be stored. */
+function rejectInvalidUtf8(_req: unknown, _res: unknown, buf: Buffer, encoding: string): void {
+  if (encoding === 'utf-8' && !isUtf8(buf)) throw new AppError(400, 'malformed_json', 'The request body is not valid UTF-8.');
+}
+
+/** express.json with a size limit and a UTF-8 check. */
+export const jsonBody = (limit: string): RequestHandler => express.json({ limit, verify: rejectInvalidUtf8 });

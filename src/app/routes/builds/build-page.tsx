@@ -1,0 +1,25 @@
+import { useQuery } from '@tanstack/react-query';
+import { useParams } from 'react-router-dom';
+import { ApiError } from '@/lib/api-client.ts';
+import { useSession } from '@/features/session/api/get-session.ts';
+import { buildQueries } from '@/features/builds/api/build-queries.ts';
+import { BuildNotFound } from '@/features/builds/components/read/build-not-found.tsx';
+import { BuildView } from '@/features/builds/components/read/build-view.tsx';
+import { LoadError, Loading } from '@/features/builds/components/read/load-states.tsx';
+
+const parseId = (raw: string | undefined) => (raw && /^\d{1,10}$/.test(raw) ? Number(raw) : null);
+
+/** /builds/:buildId: one build with its write-up, photos, log entries, actuators and calibration runs. */
+export function BuildPage() {
+  const id = parseId(useParams().buildId);
+  const { data: session } = useSession();
+  const build = useQuery({ ...buildQueries.detail(id ?? 0), enabled: id !== null && id > 0 });
+  const user = session?.user ?? null;
+  if (id === null || id <= 0) return <BuildNotFound signedIn={user !== null} />;
+  if (build.isPending) return <Loading>Loading the build…</Loading>;
+  if (build.isError) {
+    if (build.error instanceof ApiError && build.error.status === 404) return <BuildNotFound signedIn={user !== null} />;
+    return <LoadError what="this build" error={build.error} onRetry={() => void build.refetch()} />;
+  }
+  return <BuildView build={build.data} viewerIsOwner={user?.id === build.data.owner.id} />;
+}

@@ -1,0 +1,42 @@
+import { useEffect } from 'react';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { Link, useLocation, useParams } from 'react-router-dom';
+import { Notice } from '@/components/ui/notice.tsx';
+import { AnchorButton } from '@/components/ui/link-button.tsx';
+import { ApiError } from '@/lib/api-client.ts';
+import { paths } from '@/config/paths.ts';
+import { useSession } from '@/features/session/api/get-session.ts';
+import { inboxQueries } from '@/features/exchange/api/inbox-queries.ts';
+import { LoadError, Loading } from '@/features/exchange/components/load-states.tsx';
+import { ThreadView } from '@/features/exchange/components/thread-view.tsx';
+import { ExchangeNotFound, parseId } from './not-found.tsx';
+
+/** /inbox/:threadId: one conversation; opening it marks it read, so the thread list is refetched. */
+export function InboxThreadPage() {
+  const id = parseId(useParams().threadId);
+  const { data: session } = useSession();
+  const location = useLocation();
+  const qc = useQueryClient();
+  const signedIn = Boolean(session?.user);
+  const thread = useQuery({ ...inboxQueries.thread(id ?? 0), enabled: id !== null && signedIn });
+  const loaded = thread.isSuccess;
+  useEffect(() => {
+    if (loaded) void qc.invalidateQueries({ queryKey: inboxQueries.threads().queryKey });
+  }, [loaded, qc]);
+
+  const notFound = <ExchangeNotFound what="conversation" back={paths.inbox} backLabel="Back to the inbox" />;
+  if (!signedIn) return <Notice title="Sign in to read this conversation"><p><AnchorButton href={paths.signIn(location.pathname)}>Sign in</AnchorButton></p></Notice>;
+  if (id === null) return notFound;
+  if (thread.isPending) return <Loading>Loading the conversation…</Loading>;
+  if (thread.isError) {
+    if (thread.error instanceof ApiError && thread.error.status === 404) return notFound;
+    return <LoadError what="this conversation" error={thread.error} onRetry={() => void thread.refetch()} />;
+  }
+  return (
+    <div>
+      <nav aria-label="Breadcrumb" className="mb-3 text-sm"><Link to={paths.inbox} className="text-copper-dark underline">Inbox</Link></nav>
+      <h1 className="mb-4 border-b border-rule pb-3 text-2xl font-semibold tracking-tight">Conversation with {thread.data.other.login}</h1>
+      <ThreadView thread={thread.data} />
+    </div>
+  );
+}

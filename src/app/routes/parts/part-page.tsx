@@ -1,0 +1,34 @@
+import { useQuery } from '@tanstack/react-query';
+import { Link, useParams } from 'react-router-dom';
+import { ApiError } from '@/lib/api-client.ts';
+import { paths } from '@/config/paths.ts';
+import { useSession } from '@/features/session/api/get-session.ts';
+import { partQueries } from '@/features/parts/api/part-queries.ts';
+import { LoadError, Loading } from '@/features/parts/components/load-states.tsx';
+import { PartView } from '@/features/parts/components/part-view.tsx';
+
+const parseId = (raw: string | undefined) => (raw && /^\d{1,10}$/.test(raw) && Number(raw) > 0 ? Number(raw) : null);
+
+function PartNotFound() {
+  return (
+    <div className="mx-auto max-w-xl py-12 text-center">
+      <h1 className="text-xl font-semibold">No such part in the registry</h1>
+      <p className="mt-2 text-ink-soft">It may have been merged into another entry, or it has not been accepted yet.</p>
+      <p className="mt-4"><Link to={paths.parts} className="text-copper-dark underline">Search the parts registry</Link></p>
+    </div>
+  );
+}
+
+/** /parts/:partId: one part with its pooled figures, every accepted run, and open listings. */
+export function PartPage() {
+  const id = parseId(useParams().partId);
+  const { data: session } = useSession();
+  const part = useQuery({ ...partQueries.detail(id ?? 0), enabled: id !== null });
+  if (id === null) return <PartNotFound />;
+  if (part.isPending) return <Loading>Loading the part…</Loading>;
+  if (part.isError) {
+    if (part.error instanceof ApiError && part.error.status === 404) return <PartNotFound />;
+    return <LoadError what="this part" error={part.error} onRetry={() => void part.refetch()} />;
+  }
+  return <PartView part={part.data} signedIn={Boolean(session?.user)} />;
+}

@@ -1,0 +1,67 @@
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Link } from 'react-router-dom';
+import { displacementUnitLabels, voltageUnitLabels } from '@shared/units.ts';
+import { paths } from '@/config/paths.ts';
+import { ChartFrame } from '@/features/workbench/components/chart-frame.tsx';
+import { LazyCalibrationChart } from '@/features/workbench/components/charts/lazy-charts.ts';
+import { FormRadios, FormSelect } from '@/features/workbench/components/fields.tsx';
+import { NoResult } from '@/features/workbench/components/results.tsx';
+import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
+import { CsvSource } from '@/features/workbench/fit/csv-source.tsx';
+import { exampleRows, fitForm, type FitFormValues } from '@/features/workbench/fit/fit-form.ts';
+import { FitResults } from '@/features/workbench/fit/fit-results.tsx';
+import { PointsGrid } from '@/features/workbench/fit/points-grid.tsx';
+import { RowProblems } from '@/features/workbench/components/row-problems.tsx';
+import { RowsPreview } from '@/features/workbench/fit/rows-preview.tsx';
+import { useFitPreview } from '@/features/workbench/fit/use-fit-preview.ts';
+import { friendlyError } from '@/features/workbench/form/error-map.ts';
+import { displacementOptions, voltageOptions } from '@/features/workbench/unit-options.ts';
+
+const defaults: FitFormValues = { source: 'grid', rows: exampleRows, csvText: '', voltageUnit: 'V', displacementUnit: 'nm', model: 'intercept' };
+const sources = [{ value: 'grid', label: 'Type points' }, { value: 'csv', label: 'Paste or load a CSV' }];
+const models = [{ value: 'intercept', label: 'With intercept' }, { value: 'origin', label: 'Through the origin' }];
+
+export function FitPage() {
+  const form = useForm({ resolver: zodResolver(fitForm, { error: friendlyError }), mode: 'onChange', defaultValues: defaults });
+  const { source, rows, checked, result } = useFitPreview(form);
+  const voltsUnit = voltageUnitLabels[form.watch('voltageUnit') ?? 'V'];
+  const lengthUnit = displacementUnitLabels[form.watch('displacementUnit')];
+  return (
+    <ToolPage slug="fit" lead="Fit the gain of an actuator from a calibration run: displacement against drive voltage, up and down sweeps.">
+      <ToolColumns
+        inputs={
+          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+            <section aria-label="Units and model" className="grid gap-3 rounded-lg border border-rule bg-white p-4 sm:grid-cols-2">
+              <FormSelect form={form} name="voltageUnit" label="Voltage unit" options={voltageOptions} />
+              <FormSelect form={form} name="displacementUnit" label="Displacement unit" options={displacementOptions} />
+              <div className="sm:col-span-2"><FormRadios form={form} name="model" legend="Fit line" options={models} /></div>
+            </section>
+            <section aria-label="Calibration points" className="space-y-3 rounded-lg border border-rule bg-white p-4">
+              <FormRadios form={form} name="source" legend="Points from" options={sources} />
+              {source === 'csv' ? <CsvSource form={form} /> : <PointsGrid form={form} voltsUnit={voltsUnit} lengthUnit={lengthUnit} problems={checked.problems} />}
+              <RowProblems used={checked.points.length} problems={checked.problems} note={checked.note} what={source === 'csv' ? 'Line' : 'Row'} />
+              {source === 'csv' && <RowsPreview rows={rows} problems={checked.problems} voltsUnit={voltsUnit} lengthUnit={lengthUnit} />}
+            </section>
+          </form>
+        }
+        results={
+          result.ok ? (
+            <>
+              <FitResults fit={result.preview.fit} />
+              <ChartFrame label="Calibration plot" caption="Up sweep: copper circles; down sweep: teal triangles; the line is the least-squares fit. Long runs are thinned for drawing only.">
+                <LazyCalibrationChart points={result.preview.plotPoints} line={result.preview.line} />
+              </ChartFrame>
+              <p className="text-sm text-ink-soft">
+                Sine drive instead? Use the <Link className="text-teal-dark underline" to={paths.workbenchTool('peak-to-peak')}>peak-to-peak gain</Link>. A step-and-hold record?{' '}
+                <Link className="text-teal-dark underline" to={paths.workbenchTool('creep')}>Fit its creep</Link>.
+              </p>
+            </>
+          ) : (
+            <NoResult message={result.message} />
+          )
+        }
+      />
+    </ToolPage>
+  );
+}

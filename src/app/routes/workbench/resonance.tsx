@@ -1,0 +1,69 @@
+import { Link } from 'react-router-dom';
+import { paths } from '@/config/paths.ts';
+import { FieldGroup, FormNumber, FormSelect, SelectInput } from '@/features/workbench/components/fields.tsx';
+import { Headline, NoResult, Quantity, ResultPanel, ResultRow } from '@/features/workbench/components/results.tsx';
+import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
+import { formatSi, formatSig } from '@/features/workbench/format.ts';
+import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
+import { computeResonance, resonanceForm, resonancePresets } from '@/features/workbench/simple/resonance-form.ts';
+
+const defaults = { preset: 'PZT-5A', dimensionUnit: 'mm', length: 12, thickness: 0.6, youngsModulusGpa: 61, densityKgPerM3: 7750 } as const;
+const units = [{ value: 'mm', label: 'mm' }, { value: 'um', label: 'µm' }];
+
+export function ResonancePage() {
+  const { form, live } = useLiveForm(resonanceForm, defaults, computeResonance);
+  const unit = form.watch('dimensionUnit') === 'um' ? 'µm' : 'mm';
+  const presetField = form.register('preset', {
+    onChange: (e: { target: { value: string } }) => {
+      const p = resonancePresets.find((x) => x.value === e.target.value);
+      if (p?.eGpa !== undefined) form.setValue('youngsModulusGpa', p.eGpa, { shouldValidate: true });
+      if (p?.rho !== undefined) form.setValue('densityKgPerM3', p.rho, { shouldValidate: true });
+    },
+  });
+  const preset = resonancePresets.find((p) => p.value === form.watch('preset'));
+  const r = live.ok ? live.result : null;
+  return (
+    <ToolPage slug="resonance" lead="First bending mode of a clamped bender bar or a cantilever lever, with an optional tip mass, and its spring constant.">
+      <ToolColumns
+        inputs={
+          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+            <FieldGroup legend="Material">
+              <div className="sm:col-span-2">
+                <SelectInput label="Preset" registration={presetField} options={resonancePresets} hint={`Source: ${preset?.source ?? 'your own values'}`} />
+              </div>
+              <FormNumber form={form} name="youngsModulusGpa" label="Young's modulus E" unit="GPa" />
+              <FormNumber form={form} name="densityKgPerM3" label="Density ρ" unit="kg/m³" />
+            </FieldGroup>
+            <FieldGroup legend="Beam (clamped at one end)">
+              <FormSelect form={form} name="dimensionUnit" label="Dimensions in" options={units} />
+              <FormNumber form={form} name="length" label="Free length L" unit={unit} />
+              <FormNumber form={form} name="thickness" label="Thickness t" unit={unit} />
+              <FormNumber form={form} name="width" label="Width w" unit={unit} optional hint="For the spring constant and a tip mass." />
+              <FormNumber form={form} name="tipMassMg" label="Tip mass M" unit="mg" optional hint="A mirror, probe or holder at the free end." />
+            </FieldGroup>
+          </form>
+        }
+        results={
+          r ? (
+            <ResultPanel
+              headline={<Headline label="First resonance f₁"><Quantity q={formatSi(r.withTipMassHz ?? r.firstModeHz, 'Hz')} /></Headline>}
+              basis="Euler–Bernoulli cantilever, f₁ = (1.8751²/2π)·(t/L²)·√(E/12ρ) ≈ 0.1615·(t/L²)·√(E/ρ) (Rao, Mechanical Vibrations; Timoshenko); k = E·w·t³/4L³; tip mass through the effective mass 0.2427·m [calc]."
+            >
+              {r.withTipMassHz !== null && <ResultRow label="Without the tip mass"><Quantity q={formatSi(r.firstModeHz, 'Hz')} /></ResultRow>}
+              <ResultRow label="Spring constant k" note="Force at the tip per unit deflection.">
+                {r.springConstantNPerM === null ? <span className="text-sm text-ink-soft">needs the width</span> : <Quantity q={{ value: formatSig(r.springConstantNPerM), unit: 'N/m' }} />}
+              </ResultRow>
+              {r.beamMassKg !== null && <ResultRow label="Beam mass m"><Quantity q={formatSi(r.beamMassKg * 1000, 'g', 4, ['n', ''])} /></ResultRow>}
+              <ResultRow label="Line rate, sine-like scan" note="f₀/10 [practice]"><Quantity q={formatSi(r.ceilings.sineLikeHz, 'Hz')} /></ResultRow>
+              <ResultRow label="Line rate, triangular raster" note={<>f₀/100 (Bae &amp; Granick 2000). Plan the rest in the <Link className="text-teal-dark underline" to={paths.workbenchTool('scan-planner')}>scan planner</Link>.</>}>
+                <Quantity q={formatSi(r.ceilings.triangleHz, 'Hz')} />
+              </ResultRow>
+            </ResultPanel>
+          ) : (
+            <NoResult message={live.ok ? '' : live.message} />
+          )
+        }
+      />
+    </ToolPage>
+  );
+}

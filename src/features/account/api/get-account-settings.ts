@@ -1,0 +1,17 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '@/lib/api-client.ts';
+
+/** The signed-in person's own settings, and the address mail goes to. */
+export interface AccountSettingsDto {
+  mailOptOut: boolean;
+  email: string | null;
+}
+
+export const accountKeys = { all: ['account'] as const };
+
+export const accountSettingsQuery = queryOptions({
+  queryKey: [...accountKeys.all, 'settings'] as const,
+  queryFn: () => api.get<AccountSettingsDto>('/api/account/settings'),
+});
+
+export const useAccountSettings = (enabled: boolean) => useQuery({ ...accountSettingsQuery, enabled });

@@ -1,0 +1,66 @@
+import { useForm, useWatch } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { BUILD_STAGES, buildStageLabels, createBuildInput, INSTRUMENT_KINDS, instrumentKindLabels } from '@shared/schemas/build.ts';
+import { Button } from '@/components/ui/button.tsx';
+import { describedBy, Field, FormError, inputClass } from './field.tsx';
+import { MarkdownField } from './markdown-field.tsx';
+import { applyServerErrors, fieldsOf } from './server-errors.ts';
+
+export type BuildDetailsValues = z.output<typeof createBuildInput>;
+const FIELDS = ['title', 'instrumentKind', 'summary', 'body', 'stage'] as const;
+
+/** Title, instrument kind, stage, summary and write-up: the new-build form and the editor's Details section. */
+export function BuildDetailsForm({ defaults, submitLabel, savedMessage, onSave }: {
+  defaults?: Partial<BuildDetailsValues>;
+  submitLabel: string;
+  savedMessage?: string;
+  onSave: (values: BuildDetailsValues) => Promise<unknown>;
+}) {
+  const form = useForm<z.input<typeof createBuildInput>, unknown, BuildDetailsValues>({
+    resolver: zodResolver(createBuildInput),
+    defaultValues: { title: '', summary: '', body: '', instrumentKind: undefined, stage: 'planning', ...defaults },
+  });
+  const { register, handleSubmit, setError, reset, control, formState } = form;
+  const { errors, isSubmitting, isSubmitSuccessful, isDirty } = formState;
+  const body = useWatch({ control, name: 'body' }) ?? '';
+
+  const submit = handleSubmit(async (values) => {
+    try {
+      await onSave(values);
+      reset(values, { keepIsSubmitSuccessful: true });
+    } catch (err) {
+      applyServerErrors(err, setError, fieldsOf(FIELDS));
+    }
+  });
+
+  return (
+    <form onSubmit={submit} noValidate className="space-y-4">
+      <Field label="Title" htmlFor="build-title" error={errors.title?.message}>
+        <input id="build-title" className={inputClass} autoComplete="off" {...describedBy('build-title', errors.title?.message)} {...register('title')} />
+      </Field>
+      <div className="grid gap-4 sm:grid-cols-2">
+        <Field label="Instrument kind" htmlFor="build-kind" error={errors.instrumentKind && 'Pick the kind of instrument.'}>
+          <select id="build-kind" className={inputClass} {...describedBy('build-kind', errors.instrumentKind?.message)} {...register('instrumentKind')}>
+            <option value="">Choose…</option>
+            {INSTRUMENT_KINDS.map((k) => <option key={k} value={k}>{instrumentKindLabels[k]}</option>)}
+          </select>
+        </Field>
+        <Field label="Stage" htmlFor="build-stage" error={errors.stage?.message}>
+          <select id="build-stage" className={inputClass} {...register('stage')}>
+            {BUILD_STAGES.map((s) => <option key={s} value={s}>{buildStageLabels[s]}</option>)}
+          </select>
+        </Field>
+      </div>
+      <Field label="Summary" htmlFor="build-summary" error={errors.summary?.message} hint="One or two sentences for the builds list.">
+        <textarea id="build-summary" rows={2} className={inputClass} {...describedBy('build-summary', errors.summary?.message, true)} {...register('summary')} />
+      </Field>
+      <MarkdownField id="build-body" label="Write-up" value={body} error={errors.body?.message} rows={12} textarea={register('body')} />
+      <FormError message={errors.root?.server?.message} />
+      <div className="flex flex-wrap items-center gap-3">
+        <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : submitLabel}</Button>
+        {savedMessage && isSubmitSuccessful && !isDirty && <p role="status" className="text-sm text-teal-dark">{savedMessage}</p>}
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,61 @@
+import { useFormContext, useWatch } from 'react-hook-form';
+import type { CreateRunInput } from '@shared/schemas/run.ts';
+import { RUN_METHODS, runMethodLabels } from '@shared/schemas/run.ts';
+import { displacementUnitLabels, displacementUnits, voltageUnitLabels, voltageUnits } from '@shared/units.ts';
+import { describedBy, Field, fieldMessage, inputClass } from './field.tsx';
+import type { RunFormValues } from './run-form-schema.ts';
+
+/** How the run was measured and driven, the units the points are in, and the fit model. */
+export function RunSetupFields({ idPrefix }: { idPrefix: string }) {
+  const { register, control, formState: { errors } } = useFormContext<RunFormValues, unknown, CreateRunInput>();
+  const driveKind = useWatch({ control, name: 'drive.kind' });
+  const id = (f: string) => `${idPrefix}-${f}`;
+  const methodError = fieldMessage(errors.method, 'Pick how you measured the displacement.');
+  const freqError = fieldMessage(errors.drive?.frequencyHz, 'Enter the frequency in Hz (more than 0).');
+  const ampError = fieldMessage(errors.drive?.amplitudeV, 'Enter the amplitude in volts (more than 0).');
+
+  return (
+    <div className="grid gap-3 sm:grid-cols-2">
+      <Field label="Method" htmlFor={id('method')} error={methodError}>
+        <select id={id('method')} className={inputClass} {...describedBy(id('method'), methodError)} {...register('method')}>
+          <option value="">Choose…</option>
+          {RUN_METHODS.map((m) => <option key={m} value={m}>{runMethodLabels[m]}</option>)}
+        </select>
+      </Field>
+      <Field label="Drive signal" htmlFor={id('drive')}>
+        <select id={id('drive')} className={inputClass} {...register('drive.kind')}>
+          <option value="dc-steps">DC steps</option>
+          <option value="sine">Sine</option>
+        </select>
+      </Field>
+      {driveKind === 'sine' && (
+        <>
+          <Field label="Frequency (Hz)" htmlFor={id('freq')} error={freqError}>
+            <input id={id('freq')} inputMode="decimal" className={`${inputClass} num`} {...describedBy(id('freq'), freqError)} {...register('drive.frequencyHz')} />
+          </Field>
+          <Field label="Amplitude (V)" htmlFor={id('amp')} error={ampError}>
+            <input id={id('amp')} inputMode="decimal" className={`${inputClass} num`} {...describedBy(id('amp'), ampError)} {...register('drive.amplitudeV')} />
+          </Field>
+        </>
+      )}
+      <div className="grid grid-cols-2 gap-3">
+        <Field label="Drive unit" htmlFor={id('vunit')}>
+          <select id={id('vunit')} className={inputClass} {...register('voltageUnit')}>
+            {voltageUnits.map((u) => <option key={u} value={u}>{voltageUnitLabels[u]}</option>)}
+          </select>
+        </Field>
+        <Field label="Displacement unit" htmlFor={id('dunit')}>
+          <select id={id('dunit')} className={inputClass} {...register('displacementUnit')}>
+            {displacementUnits.map((u) => <option key={u} value={u}>{displacementUnitLabels[u]}</option>)}
+          </select>
+        </Field>
+      </div>
+      <Field label="Fit model" htmlFor={id('model')}>
+        <select id={id('model')} className={inputClass} {...register('model')}>
+          <option value="intercept">Line with intercept</option>
+          <option value="origin">Line through the origin</option>
+        </select>
+      </Field>
+    </div>
+  );
+}

@@ -1,0 +1,29 @@
+import { Link } from 'react-router-dom';
+import { buildStageLabels, instrumentKindLabels, type BuildSummaryDto } from '@shared/schemas/build.ts';
+import { paths } from '@/config/paths.ts';
+import { CoverTile } from './cover-tile.tsx';
+import { GainList } from './gain-list.tsx';
+
+/** One published build on the index: cover, kind, title (the link), maker, stage and its key gains. */
+export function BuildCard({ build }: { build: BuildSummaryDto }) {
+  return (
+    <article className="relative flex flex-col overflow-hidden rounded-lg border border-rule bg-white transition-colors hover:border-copper focus-within:ring-2 focus-within:ring-copper">
+      <CoverTile cover={build.cover} seed={build.id} />
+      <div className="flex flex-1 flex-col gap-2 p-4">
+        <p className="text-xs font-medium uppercase tracking-wide text-teal-dark">{instrumentKindLabels[build.instrumentKind]}</p>
+        <h2 className="text-lg font-semibold leading-snug">
+          <Link to={paths.build(build.id)} className="after:absolute after:inset-0 focus-visible:outline-none">
+            {build.title}
+          </Link>
+        </h2>
+        <p className="line-clamp-2 text-sm text-ink-soft">{build.summary}</p>
+        <p className="mt-auto flex flex-wrap items-center gap-x-2 text-xs text-ink-soft">
+          <span>by <span className="font-medium text-ink">{build.owner.login}</span></span>
+          <span aria-hidden="true">·</span>
+          <span>{buildStageLabels[build.stage]}</span>
+        </p>
+        <GainList gains={build.gains} />
+      </div>
+    </article>
+  );
+}

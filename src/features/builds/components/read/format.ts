@@ -1,0 +1,48 @@
+// Display helpers for the build pages: dates, gains and the expected-gain basis in our words.
+import type { BuildStatus } from '@shared/schemas/build.ts';
+import type { RunStatus } from '@shared/schemas/run.ts';
+import type { BadgeTone } from '@/components/ui/status-badge.tsx';
+
+const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+
+/** "12 Mar 2025" from an ISO timestamp or a plain YYYY-MM-DD date (read as UTC, so no day shifts). */
+export function formatDate(iso: string | null | undefined): string {
+  if (!iso) return '—';
+  const d = new Date(iso.length === 10 ? `${iso}T00:00:00Z` : iso);
+  if (Number.isNaN(d.getTime())) return iso;
+  return dateFormat.formatToParts(d).map((p) => (p.type === 'month' ? p.value.slice(0, 3) : p.value)).join('');
+}
+
+/** Badge colour of each build review state. */
+export const buildStatusTone: Record<BuildStatus, BadgeTone> = {
+  draft: 'neutral',
+  submitted: 'info',
+  published: 'success',
+  returned: 'caution',
+  declined: 'danger',
+};
+
+/** Words and colour of each calibration-run review state. */
+export const runStatusBadge: Record<RunStatus, { label: string; tone: BadgeTone }> = {
+  pending: { label: 'Pending review', tone: 'caution' },
+  accepted: { label: 'Accepted', tone: 'success' },
+  rejected: { label: 'Rejected', tone: 'danger' },
+};
+
+const basisWords: Record<string, string> = {
+  'bimorph-series': 'series bimorph',
+  'bimorph-parallel': 'parallel bimorph',
+  stack: 'multilayer stack',
+  'shear-plate': 'shear plate',
+  'tube-quadrant': 'tube, one quadrant',
+  'tube-opposite-pair': 'tube, opposite quadrants ±V',
+  'tube-axial': 'tube, axial',
+  'plate-thickness': 'plate, thickness mode',
+  'plate-length': 'plate, length mode',
+};
+
+/** "series bimorph, PZT-5A" from the API's "bimorph-series, PZT-5A". */
+export function describeBasis(basis: string): string {
+  const [formula, ...rest] = basis.split(', ');
+  return [basisWords[formula ?? ''] ?? formula, ...rest].join(', ');
+}

@@ -1,0 +1,22 @@
+import { Button } from '@/components/ui/button.tsx';
+import { Notice } from '@/components/ui/notice.tsx';
+
+/** A quiet line saying what is being fetched; screen readers hear it once. */
+export function Loading({ children }: { children: string }) {
+  return (
+    <p role="status" className="flex items-center gap-2 py-6 text-ink-soft">
+      <span aria-hidden="true" className="h-3 w-3 animate-pulse rounded-full bg-copper/60" />
+      {children}
+    </p>
+  );
+}
+
+/** What failed, the server's reason, and a way to try again. */
+export function LoadError({ what, error, onRetry }: { what: string; error: Error; onRetry: () => void }) {
+  return (
+    <Notice tone="danger" title={`Could not load ${what}`}>
+      <p>{error.message}</p>
+      <p><Button variant="secondary" onClick={onRetry}>Try again</Button></p>
+    </Notice>
+  );
+}

@@ -1,0 +1,30 @@
+import { useState } from 'react';
+import type { PhotoDto } from '@shared/schemas/build.ts';
+import { Lightbox } from '@/components/ui/lightbox.tsx';
+
+/** Thumbnails that open the large photo in the lightbox; the alt text is the caption. */
+export function PhotoGrid({ photos, label }: { photos: PhotoDto[]; label: string }) {
+  const [open, setOpen] = useState<number | null>(null);
+  if (photos.length === 0) return null;
+  return (
+    <>
+      <ul aria-label={label} className="grid grid-cols-2 gap-2 sm:grid-cols-3 md:grid-cols-4">
+        {photos.map((p, i) => (
+          <li key={p.id}>
+            <button
+              type="button"
+              onClick={() => setOpen(i)}
+              aria-haspopup="dialog"
+              className="group block w-full overflow-hidden rounded-md border border-rule bg-paper-deep hover:border-copper"
+            >
+              <img src={p.thumbUrl} alt={p.alt} loading="lazy" className="aspect-[4/3] w-full object-cover transition-transform group-hover:scale-[1.02]" />
+            </button>
+          </li>
+        ))}
+      </ul>
+      {open !== null && (
+        <Lightbox images={photos} index={open} onIndexChange={setOpen} onClose={() => setOpen(null)} />
+      )}
+    </>
+  );
+}

@@ -1,0 +1,27 @@
+import { keepPreviousData, queryOptions } from '@tanstack/react-query';
+import type { GainHistogramDto, ListPartsQuery, PartDetailDto, PartListDto } from '@shared/schemas/part.ts';
+import { api, toQuery } from '@/lib/api-client.ts';
+
+/** One key tree for the parts registry; proposals invalidate `partQueries.all`. */
+export const partQueries = {
+  all: ['parts'] as const,
+  list: (p: Partial<ListPartsQuery>) =>
+    queryOptions({
+      queryKey: ['parts', 'list', p] as const,
+      queryFn: () => api.get<PartListDto>(`/api/parts${toQuery(p)}`),
+      placeholderData: keepPreviousData,
+    }),
+  histogram: () =>
+    queryOptions({
+      queryKey: ['parts', 'histogram'] as const,
+      queryFn: () => api.get<GainHistogramDto>('/api/parts/histogram'),
+      staleTime: 5 * 60_000,
+    }),
+  detail: (id: number) => queryOptions({ queryKey: ['parts', 'detail', id] as const, queryFn: () => api.get<PartDetailDto>(`/api/parts/${id}`) }),
+};
+
+/** Address of a download of the whole current search (all pages) as CSV or JSON; the server names the file. */
+export function partsExportHref(p: Partial<ListPartsQuery>, format: 'csv' | 'json'): string {
+  const { page: _page, pageSize: _pageSize, ...search } = p;
+  return `/api/parts${toQuery({ ...search, format })}`;
+}

@@ -1,0 +1,47 @@
+import type { ReactNode } from 'react';
+import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
+import { ApiError } from '@/lib/api-client.ts';
+
+/** Text inputs, selects and text areas of the registry's forms (16 px text so phones do not zoom). */
+export const inputClass = 'w-full rounded-md border border-rule bg-white px-2.5 py-1.5 text-base text-ink aria-[invalid=true]:border-danger';
+
+/** A labelled control with an optional hint and its error; the control carries `id={id}` and `{...describe(id, error, !!hint)}`. */
+export function Field({ id, label, hint, error, children, className = '' }: { id: string; label: ReactNode; hint?: ReactNode; error?: string; children: ReactNode; className?: string }) {
+  return (
+    <div className={`min-w-0 ${className}`}>
+      <label htmlFor={id} className="mb-1 block text-sm font-medium">{label}</label>
+      {children}
+      {hint && !error && <p id={`${id}-hint`} className="mt-1 text-xs text-ink-soft">{hint}</p>}
+      {error && <p id={`${id}-error`} className="mt-1 text-sm text-danger">{error}</p>}
+    </div>
+  );
+}
+
+/** aria attributes tying a control to its Field's hint or error. */
+export const describe = (id: string, error?: string, hint?: boolean) =>
+  ({ 'aria-invalid': error ? true : undefined, 'aria-describedby': error ? `${id}-error` : hint ? `${id}-hint` : undefined }) as const;
+
+/** A form-level error: what the server said that belongs to no single field. */
+export function FormError({ message }: { message?: string }) {
+  if (!message) return null;
+  return <p role="alert" className="rounded-md border border-danger bg-danger/5 px-3 py-2 text-sm text-danger">{message}</p>;
+}
+
+const isIssues = (d: unknown): d is { path: string; message: string }[] =>
+  Array.isArray(d) && d.every((i) => i && typeof i === 'object' && typeof i.path === 'string' && typeof i.message === 'string');
+
+/** Put the server's field issues on the fields they name; the rest (or a plain failure) on `root.server`. */
+export function applyServerErrors<T extends FieldValues>(error: unknown, setError: UseFormSetError<T>, fields: readonly string[]): void {
+  const issues = error instanceof ApiError && isIssues(error.details) ? error.details : [];
+  const rest = issues.filter((i) => !fields.includes(i.path.split('.')[0]!));
+  for (const i of issues) if (!rest.includes(i)) setError(i.path as Path<T>, { type: 'server', message: i.message });
+  if (issues.length === 0 || rest.length > 0) {
+    const message = rest.length ? rest.map((i) => i.message).join(' ') : error instanceof Error ? error.message : 'That did not work; try again.';
+    setError('root.server' as Path<T>, { type: 'server', message });
+  }
+}
+
+/** An empty field becomes null (a number field the maker left blank). */
+export const numberOrNull = (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(v));
+/** An empty text field becomes undefined, so the server stores nothing rather than "". */
+export const textOrUndefined = (v: unknown) => (typeof v === 'string' && v.trim() === '' ? undefined : v);

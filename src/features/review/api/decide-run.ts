@@ -1,0 +1,17 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { AcceptRejectInput } from '@shared/schemas/review.ts';
+import { api } from '@/lib/api-client.ts';
+import { reviewKeys } from './get-review-queue.ts';
+
+/** Accept or reject a pending calibration run. The desk reloads afterwards, also after a refusal (someone may have decided first). */
+export function useDecideRun() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, ...input }: AcceptRejectInput & { id: number }) =>
+      api.post<{ id: number; status: 'accepted' | 'rejected' }>(`/api/review/runs/${id}/decision`, input),
+    onSettled: () => {
+      void qc.invalidateQueries({ queryKey: reviewKeys.all });
+      void qc.invalidateQueries({ queryKey: ['builds'] });
+    },
+  });
+}

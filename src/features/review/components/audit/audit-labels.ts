@@ -1,0 +1,27 @@
+// The audit trail's actions and things in our words.
+
+export const AUDIT_TARGET_TYPES = ['build', 'run', 'part', 'report', 'listing', 'user'] as const;
+
+export const targetTypeLabels: Record<string, string> = {
+  build: 'Build',
+  run: 'Calibration run',
+  part: 'Part',
+  report: 'Report',
+  listing: 'Listing',
+  user: 'Account',
+};
+
+const actionLabels: Record<string, string> = {
+  'build.publish': 'Published the build',
+  'build.return': 'Returned the build with notes',
+  'build.decline': 'Declined the build',
+  'run.accept': 'Accepted the run',
+  'run.reject': 'Rejected the run',
+  'part.accept': 'Accepted the part',
+  'part.reject': 'Rejected the part',
+  'report.resolve': 'Resolved the report',
+  'report.dismiss': 'Dismissed the report',
+};
+
+/** "Returned the build with notes" for `build.return`; unknown actions show as recorded. */
+export const actionLabel = (action: string) => actionLabels[action] ?? action;

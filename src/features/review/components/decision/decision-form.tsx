@@ -1,0 +1,86 @@
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import type { z } from 'zod';
+import { Button } from '@/components/ui/button.tsx';
+import { decisionErrorMessage, noteIssue } from './decision-errors.ts';
+
+/** One decision button: the value sent, its words, its look, and whether the note must say why. */
+export interface DecisionChoice<D extends string> {
+  decision: D;
+  label: string;
+  busyLabel: string;
+  variant: 'primary' | 'secondary' | 'danger';
+}
+
+interface Values<D extends string> {
+  decision: D;
+  note?: string;
+}
+
+/**
+ * The note box and the decision buttons of one desk item, validated with the shared zod schema
+ * (which says which decisions need a note); the server's refusal shows under the buttons.
+ */
+export function DecisionForm<D extends string>({ id, schema, choices, noteLabel, noteHint, onDecide }: {
+  id: string;
+  schema: z.ZodType<Values<D>, Values<string>>;
+  choices: DecisionChoice<D>[];
+  noteLabel: string;
+  noteHint: string;
+  onDecide: (values: Values<D>) => Promise<unknown>;
+}) {
+  const { register, handleSubmit, setValue, setError, formState } = useForm<Values<string>, unknown, Values<D>>({
+    resolver: zodResolver(schema),
+    defaultValues: { decision: choices[0].decision, note: '' },
+  });
+  const [busy, setBusy] = useState<D | null>(null);
+  const noteError = formState.errors.note?.message;
+  const serverError = formState.errors.root?.server?.message;
+  const noteId = `${id}-note`;
+
+  const decide = (decision: D) => {
+    setValue('decision', decision);
+    void handleSubmit(async (values) => {
+      setBusy(decision);
+      try {
+        await onDecide({ decision: values.decision, ...(values.note ? { note: values.note } : {}) });
+      } catch (err) {
+        const issue = noteIssue(err);
+        if (issue) setError('note', { type: 'server', message: issue }, { shouldFocus: true });
+        else setError('root.server', { type: 'server', message: decisionErrorMessage(err) });
+      } finally {
+        setBusy(null);
+      }
+    })();
+  };
+
+  return (
+    <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-3 rounded-lg border border-rule bg-paper-deep/60 p-3" aria-label="Decision">
+      <div>
+        <label htmlFor={noteId} className="mb-1 block text-sm font-medium">{noteLabel}</label>
+        <textarea
+          id={noteId}
+          rows={3}
+          className="w-full rounded-md border border-rule bg-white px-2 py-1.5 text-base aria-[invalid=true]:border-danger"
+          aria-invalid={noteError ? true : undefined}
+          aria-describedby={noteError ? `${noteId}-error` : `${noteId}-hint`}
+          {...register('note')}
+        />
+        {noteError ? (
+          <p id={`${noteId}-error`} className="mt-1 text-sm text-danger">{noteError}</p>
+        ) : (
+          <p id={`${noteId}-hint`} className="mt-1 text-xs text-ink-soft">{noteHint}</p>
+        )}
+      </div>
+      <div className="flex flex-wrap gap-2">
+        {choices.map((c) => (
+          <Button key={c.decision} variant={c.variant} disabled={busy !== null} onClick={() => decide(c.decision)}>
+            {busy === c.decision ? c.busyLabel : c.label}
+          </Button>
+        ))}
+      </div>
+      {serverError && <p role="alert" className="rounded-md border border-danger bg-danger/5 px-3 py-2 text-sm text-danger">{serverError}</p>}
+    </form>
+  );
+}

@@ -1,0 +1,44 @@
+// Display helpers for the review desk: how long something has waited, dates, and measured numbers.
+
+const HOUR = 3_600_000;
+const DAY = 24 * HOUR;
+
+const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
+
+/** "3 days", "5 hours" or "less than an hour" since an ISO timestamp. */
+export function age(iso: string | null | undefined, now = Date.now()): string {
+  if (!iso) return 'unknown time';
+  const ms = Math.max(0, now - new Date(iso).getTime());
+  if (ms < HOUR) return 'less than an hour';
+  if (ms < DAY) return plural(Math.floor(ms / HOUR), 'hour');
+  return plural(Math.floor(ms / DAY), 'day');
+}
+
+const dateTime = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZone: 'UTC' });
+const dateOnly = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+
+/** "12 Mar 2025, 14:05 UTC". */
+export const formatDateTime = (iso: string) => `${dateTime.format(new Date(iso))} UTC`;
+/** "12 Mar 2025". */
+export const formatDate = (iso: string | null | undefined) => (iso ? dateOnly.format(new Date(iso)) : '—');
+
+/** A number to `digits` significant figures without trailing zeros or exponent noise. */
+export function sig(x: number | null | undefined, digits = 3): string {
+  if (x === null || x === undefined || !Number.isFinite(x)) return '—';
+  if (x === 0) return '0';
+  const decimals = Math.max(0, digits - 1 - Math.floor(Math.log10(Math.abs(x))));
+  return x.toFixed(Math.min(decimals, 10));
+}
+
+/** "123.5 ± 2.3": the uncertainty to two significant figures, the value rounded to the same place. */
+export function withUncertainty(value: number, halfWidth: number | null | undefined): string {
+  if (halfWidth === null || halfWidth === undefined || !Number.isFinite(halfWidth) || halfWidth <= 0) return sig(value, 4);
+  const decimals = Math.max(0, 1 - Math.floor(Math.log10(halfWidth)));
+  return `${value.toFixed(Math.min(decimals, 10))} ± ${halfWidth.toFixed(Math.min(decimals, 10))}`;
+}
+
+/** Half the width of a 95 % interval [lo, hi]. */
+export const halfWidth = ([lo, hi]: [number, number]) => (hi - lo) / 2;
+
+/** "4 photos", "1 entry": a count with its noun. */
+export const count = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;

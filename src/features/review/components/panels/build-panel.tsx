@@ -1,0 +1,83 @@
+import { Link } from 'react-router-dom';
+import { buildDecisionInput, type QueueBuildDto } from '@shared/schemas/review.ts';
+import { buildStageLabels, instrumentKindLabels, type BuildDto } from '@shared/schemas/build.ts';
+import { Markdown } from '@/components/ui/markdown.tsx';
+import { paths } from '@/config/paths.ts';
+import { useReviewBuild } from '@/features/review/api/get-review-build.ts';
+import { useDecideBuild } from '@/features/review/api/decide-build.ts';
+import { DecisionForm } from '../decision/decision-form.tsx';
+import { age, count, formatDate } from '../format.ts';
+import { BuildPhotos } from './build-photos.tsx';
+import { buildChoices, editedChoices } from './decision-choices.ts';
+import { Facts, PanelFrame, PanelSection } from './panel-frame.tsx';
+
+/** A submitted (or edited published) build: summary, write-up, photos and actuators, then publish / return / decline. */
+export function BuildPanel({ build, edited, onDecided }: { build: QueueBuildDto; edited: boolean; onDecided: (decision: string) => void }) {
+  const full = useReviewBuild(build.id);
+  const decide = useDecideBuild();
+  const when = edited ? `edited ${age(build.updatedAt)} ago` : `submitted ${formatDate(build.submittedAt)}, ${age(build.submittedAt ?? build.updatedAt)} waiting`;
+  return (
+    <PanelFrame
+      eyebrow={edited ? 'Published build, edited since review' : 'Build submitted for review'}
+      title={build.title}
+      meta={<>by {build.author.login} · {when} · <Link className="text-copper underline" to={paths.build(build.id)}>Open the build page</Link></>}
+      decision={
+        <DecisionForm
+          id={`build-${build.id}`}
+          schema={buildDecisionInput}
+          choices={edited ? editedChoices : buildChoices}
+          noteLabel="Note to the maker"
+          noteHint="Required to return or decline: say what to change or why. The maker sees it on the build and by e-mail."
+          onDecide={async (v) => { await decide.mutateAsync({ id: build.id, ...v }); onDecided(v.decision); }}
+        />
+      }
+    >
+      <p>{build.summary}</p>
+      <p className="text-sm text-ink-soft">
+        {count(build.photoCount, 'photo')} · {count(build.entryCount, 'log entry', 'log entries')} · {count(build.actuatorCount, 'actuator')} · {count(build.pendingRunCount, 'pending run')}
+      </p>
+      {full.isPending && <p role="status" className="text-sm text-ink-soft">Loading the build…</p>}
+      {full.isError && <p role="alert" className="text-sm text-danger">The build did not load: {full.error.message}</p>}
+      {full.data && <BuildDetails build={full.data} />}
+    </PanelFrame>
+  );
+}
+
+function BuildDetails({ build }: { build: BuildDto }) {
+  return (
+    <>
+      <Facts items={[['Instrument', instrumentKindLabels[build.instrumentKind]], ['Stage', buildStageLabels[build.stage]], ['Started', formatDate(build.createdAt)]]} />
+      <PanelSection title="Photos">
+        <BuildPhotos photos={build.photos} />
+      </PanelSection>
+      <PanelSection title="Write-up">
+        {build.body.trim() ? (
+          <div tabIndex={0} aria-label="Write-up" className="max-h-96 overflow-y-auto rounded-md border border-rule bg-white p-3">
+            <Markdown>{build.body}</Markdown>
+          </div>
+        ) : (
+          <p className="text-sm text-ink-soft">No write-up yet.</p>
+        )}
+      </PanelSection>
+      {build.actuators.length > 0 && (
+        <PanelSection title="Actuators">
+          <ul className="space-y-1 text-sm">
+            {build.actuators.map((a) => (
+              <li key={a.id}>
+                <span className="font-medium">{a.label ?? `${a.axis} axis`}</span>: {a.part.name} ·{' '}
+                {count(a.runs.length, 'run')}, {a.runs.filter((r) => r.status === 'pending').length} pending
+              </li>
+            ))}
+          </ul>
+        </PanelSection>
+      )}
+      {build.entries.length > 0 && (
+        <PanelSection title="Log entries">
+          <ul className="list-disc space-y-0.5 pl-5 text-sm">
+            {build.entries.map((e) => <li key={e.id}><span className="text-ink-soft">{formatDate(e.entryDate)}</span> {e.title}</li>)}
+          </ul>
+        </PanelSection>
+      )}
+    </>
+  );
+}

@@ -1,0 +1,60 @@
+import { lazy, Suspense } from 'react';
+import { Link } from 'react-router-dom';
+import { acceptRejectInput, type QueueRunDto } from '@shared/schemas/review.ts';
+import { runMethodLabels, type RunMethod } from '@shared/schemas/run.ts';
+import { paths } from '@/config/paths.ts';
+import { useDecideRun } from '@/features/review/api/decide-run.ts';
+import { DecisionForm } from '../decision/decision-form.tsx';
+import { age } from '../format.ts';
+import { acceptChoices } from './decision-choices.ts';
+import { FitTable } from './fit-table.tsx';
+import { FlagList } from './flag-list.tsx';
+import { PanelFrame, PanelSection } from './panel-frame.tsx';
+import { PartGains } from './part-gains.tsx';
+
+const CalibrationChart = lazy(() => import('@/components/charts/calibration-chart.tsx').then((m) => ({ default: m.CalibrationChart })));
+
+/** A pending calibration run: the plot, the fit, the flags and the part's accepted gains, then accept / reject. */
+export function RunPanel({ run, onDecided }: { run: QueueRunDto; onDecided: (decision: string) => void }) {
+  const decide = useDecideRun();
+  const method = runMethodLabels[run.method as RunMethod] ?? run.method;
+  return (
+    <PanelFrame
+      eyebrow="Calibration run pending"
+      title={run.part.name}
+      meta={
+        <>
+          {run.actuatorLabel ?? `${run.axis} axis`} in <Link className="text-copper underline" to={paths.build(run.buildId)}>{run.buildTitle}</Link> · by {run.author.login} · {method} ·{' '}
+          {age(run.createdAt)} waiting
+        </>
+      }
+      decision={
+        <DecisionForm
+          id={`run-${run.id}`}
+          schema={acceptRejectInput}
+          choices={acceptChoices}
+          noteLabel="Note to the maker"
+          noteHint="Required to reject: say what looks wrong. Only accepted runs count in the part’s statistics."
+          onDecide={async (v) => { await decide.mutateAsync({ id: run.id, ...v }); onDecided(v.decision); }}
+        />
+      }
+    >
+      <PanelSection title="Flags">
+        <FlagList flags={run.flags} />
+      </PanelSection>
+      <PanelSection title="Calibration plot">
+        <div className="rounded-md border border-rule bg-white p-2 sm:p-3">
+          <Suspense fallback={<p role="status" className="flex h-[260px] items-center justify-center text-sm text-ink-soft">Loading the plot…</p>}>
+            <CalibrationChart points={run.points} fit={{ interceptNm: run.fit.interceptNm, gainNmPerV: run.fit.gainNmPerV }} height={260} />
+          </Suspense>
+        </div>
+      </PanelSection>
+      <PanelSection title="Fit">
+        <FitTable fit={run.fit} />
+      </PanelSection>
+      <PanelSection title="Accepted gains of this part">
+        <PartGains run={run} />
+      </PanelSection>
+    </PanelFrame>
+  );
+}

@@ -1,0 +1,16 @@
+// Theme colours for SVG attributes (the same values as the tokens in src/index.css).
+export const chartColors = {
+  ink: '#1D232B',
+  inkSoft: '#4A525C',
+  rule: '#D8D3C8',
+  copper: '#B5532A',
+  teal: '#2F6F73',
+  amber: '#C98A00',
+  danger: '#B42318',
+} as const;
+
+/** Axis tick text in the monospace figures used for every number. */
+export const tickStyle = { fontFamily: '"JetBrains Mono Variable", ui-monospace, monospace', fontSize: 11, fill: chartColors.inkSoft } as const;
+
+/** Axis label text. */
+export const axisLabelStyle = { fontSize: 12, fill: chartColors.inkSoft } as const;

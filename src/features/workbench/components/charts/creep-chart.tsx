@@ -1,0 +1,30 @@
+import { CartesianGrid, Legend, ResponsiveContainer, Scatter, ScatterChart, XAxis, YAxis } from 'recharts';
+import { formatTick } from '../../format.ts';
+import { decadeTicks } from './axis-ticks.ts';
+import { axisLabelStyle, chartColors, tickStyle } from './chart-style.ts';
+
+/** A sample or a point of the fitted law: time since the step (s) and displacement (nm). */
+export interface CreepPoint {
+  timeS: number;
+  displacementNm: number;
+}
+
+const noMarker = () => <g />;
+
+/** Step-and-hold samples (copper) with the fitted x(0.1 s)·[1 + γ·log10(t/0.1 s)] curve (ink), time on a log axis. */
+export function CreepChart({ samples, curve }: { samples: readonly CreepPoint[]; curve: readonly CreepPoint[] }) {
+  const times = [...samples, ...curve].map((p) => p.timeS);
+  const ticks = decadeTicks(Math.min(...times), Math.max(...times));
+  return (
+    <ResponsiveContainer width="100%" height={280}>
+      <ScatterChart margin={{ top: 4, right: 16, bottom: 24, left: 8 }}>
+        <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
+        <XAxis type="number" dataKey="timeS" scale="log" domain={[ticks[0], ticks[ticks.length - 1]]} ticks={ticks} tick={tickStyle} tickFormatter={formatTick} label={{ value: 'Time since the step (s)', position: 'insideBottom', offset: -14, style: axisLabelStyle }} />
+        <YAxis type="number" dataKey="displacementNm" domain={['auto', 'auto']} width={72} tick={tickStyle} tickFormatter={formatTick} label={{ value: 'Displacement (nm)', angle: -90, position: 'insideLeft', offset: 4, style: { ...axisLabelStyle, textAnchor: 'middle' } }} />
+        <Legend verticalAlign="top" itemSorter={null} />
+        <Scatter name="Samples" data={[...samples]} fill={chartColors.copper} isAnimationActive={false} />
+        <Scatter name="Fitted creep law" data={[...curve]} line={{ stroke: chartColors.ink, strokeWidth: 1.5 }} shape={noMarker} legendType="line" fill={chartColors.ink} isAnimationActive={false} />
+      </ScatterChart>
+    </ResponsiveContainer>
+  );
+}

@@ -1,0 +1,44 @@
+import { useId, type ReactNode } from 'react';
+import type { FieldValues, Path, UseFormReturn } from 'react-hook-form';
+import { asNumber, errorOf, FieldShell } from './fields.tsx';
+
+/** A number with its own unit picker beside it (e.g. capacitance in nF or µF); both controls labelled. */
+export function FormQuantity<T extends FieldValues, O>({
+  form,
+  name,
+  unitName,
+  label,
+  units,
+  hint,
+  optional,
+}: {
+  form: UseFormReturn<T, unknown, O>;
+  name: Path<T>;
+  unitName: Path<T>;
+  label: string;
+  units: readonly { value: string; label: string }[];
+  hint?: ReactNode;
+  optional?: boolean;
+}) {
+  const id = useId();
+  const error = errorOf(form, name);
+  return (
+    <FieldShell id={id} label={label} hint={hint} optional={optional} error={error}>
+      <div className="mt-1 flex gap-2">
+        <input
+          id={id}
+          type="number"
+          inputMode="decimal"
+          step="any"
+          aria-invalid={error ? true : undefined}
+          aria-describedby={error ? `${id}-error` : hint ? `${id}-hint` : undefined}
+          className="num min-w-0 flex-1 rounded-md border border-rule bg-white px-2 py-1.5 aria-[invalid=true]:border-danger aria-[invalid=true]:bg-danger/5"
+          {...form.register(name, asNumber)}
+        />
+        <select aria-label={`${label}: unit`} className="w-24 shrink-0 rounded-md border border-rule bg-white px-2 py-1.5" {...form.register(unitName)}>
+          {units.map((u) => <option key={u.value} value={u.value}>{u.label}</option>)}
+        </select>
+      </div>
+    </FieldShell>
+  );
+}

@@ -1,0 +1,70 @@
+import { useId, type ReactNode } from 'react';
+import { formatWithUncertainty, type Formatted } from '../format.ts';
+
+/** A formatted number in monospace tabular figures, with its unit after it. */
+export function Quantity({ q, className = '' }: { q: Formatted; className?: string }) {
+  return (
+    <span className={`whitespace-nowrap ${className}`}>
+      <span className="num">{q.value}</span>
+      {q.unit && <span> {q.unit}</span>}
+    </span>
+  );
+}
+
+/** A gain in nm/V with its ± uncertainty where known, e.g. "102.6 ± 1.3 nm/V". */
+export function Gain({ value, plusMinus, className = '' }: { value: number; plusMinus?: number | null; className?: string }) {
+  const f = formatWithUncertainty(value, plusMinus);
+  return (
+    <span className={`whitespace-nowrap ${className}`}>
+      <span className="num">{f.value}</span>
+      {f.uncertainty && <span className="num"> ± {f.uncertainty}</span>}
+      <span> nm/V</span>
+    </span>
+  );
+}
+
+/** The results card: a heading, the headline, rows, and the basis of the numbers. */
+export function ResultPanel({ title = 'Results', headline, children, basis }: { title?: string; headline?: ReactNode; children?: ReactNode; basis?: ReactNode }) {
+  const id = useId();
+  return (
+    <section aria-labelledby={id} className="rounded-lg border border-rule bg-white p-4">
+      <h2 id={id} className="text-sm font-semibold uppercase tracking-wide text-ink-soft">{title}</h2>
+      {headline && <div className="mt-2">{headline}</div>}
+      {children && <dl className="mt-3 divide-y divide-rule border-t border-rule">{children}</dl>}
+      {basis && <p className="mt-3 text-xs text-ink-soft"><span className="font-semibold">Basis: </span>{basis}</p>}
+    </section>
+  );
+}
+
+/** The one number a page is for, large; an <output> named by its label, so it reads as a live result. */
+export function Headline({ label, children, sub }: { label: string; children: ReactNode; sub?: ReactNode }) {
+  const id = useId();
+  return (
+    <div>
+      <p id={id} className="text-sm text-ink-soft">{label}</p>
+      <output aria-labelledby={id} className="block text-2xl font-semibold text-ink sm:text-3xl">{children}</output>
+      {sub && <p className="mt-1 text-sm text-ink-soft">{sub}</p>}
+    </div>
+  );
+}
+
+/** One labelled result; `note` says what it means or where it comes from. */
+export function ResultRow({ label, children, note }: { label: ReactNode; children: ReactNode; note?: ReactNode }) {
+  return (
+    <div className="grid grid-cols-[minmax(0,1fr)_auto] items-baseline gap-x-4 py-2">
+      <dt className="text-sm">{label}</dt>
+      <dd className="text-right">{children}</dd>
+      {note && <dd className="col-span-2 text-xs text-ink-soft">{note}</dd>}
+    </div>
+  );
+}
+
+/** Shown in place of results while the inputs are incomplete or refused. */
+export function NoResult({ message }: { message: string }) {
+  return (
+    <div role="status" className="rounded-md border border-dashed border-rule bg-paper p-3 text-sm text-ink-soft">
+      <span className="font-medium text-ink">No result yet. </span>
+      {message}
+    </div>
+  );
+}

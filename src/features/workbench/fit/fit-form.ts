@@ -1,0 +1,63 @@
+import type { UseFormReturn } from 'react-hook-form';
+import { z } from 'zod';
+import { fitInput } from '@shared/schemas/workbench.ts';
+import { fitCalibrationInUnits, type CalibrationFit } from '@shared/workbench/calibration-fit.ts';
+import { toNm, toVolts } from '@shared/units.ts';
+import { friendlyError, refusalMessage } from '../form/error-map.ts';
+import type { PlotPoint } from '../components/charts/calibration-chart.tsx';
+import type { CheckedRows } from '../csv/parse-fit-rows.ts';
+
+const gridRow = z.object({ volts: z.string(), displacement: z.string(), sweep: z.enum(['', 'up', 'down']) });
+
+/** The fit form: where the points come from, the grid rows, the CSV text, and the shared fit settings. */
+export const fitForm = z.object({
+  source: z.enum(['grid', 'csv']),
+  rows: z.array(gridRow),
+  csvText: z.string(),
+  ...fitInput.pick({ voltageUnit: true, displacementUnit: true, model: true }).shape,
+});
+
+/** Field values of the fit form. */
+export type FitFormValues = z.input<typeof fitForm>;
+
+/** The fit page's react-hook-form handle. */
+export type FitFormApi = UseFormReturn<FitFormValues, unknown, z.output<typeof fitForm>>;
+
+/** One grid row as typed. */
+export type GridRow = z.infer<typeof gridRow>;
+
+const row = (volts: number, displacement: number, sweep: GridRow['sweep']): GridRow => ({ volts: String(volts), displacement: String(displacement), sweep });
+
+/** Illustrative up and down sweeps of a bender (made-up numbers, about 100 nm/V) to show the page working. */
+export const exampleRows: GridRow[] = [
+  ...[[0, 0], [2, 170], [4, 368], [6, 578], [8, 789], [10, 1004]].map(([v, x]) => row(v, x, 'up')),
+  ...[[10, 1004], [8, 838], [6, 636], [4, 421], [2, 214], [0, 12]].map(([v, x]) => row(v, x, 'down')),
+];
+
+/** Empty rows for a fresh grid. */
+export const blankRows = (n: number): GridRow[] => Array.from({ length: n }, () => ({ volts: '', displacement: '', sweep: '' }));
+
+/** A fit ready to show: the shared result and the points in V and nm for the plot. */
+export interface FitPreview {
+  fit: CalibrationFit;
+  plotPoints: PlotPoint[];
+  line: [PlotPoint, PlotPoint];
+}
+
+/** Runs the shared schema and fit on the good rows; a sentence instead when it cannot. */
+export function previewFit(checked: CheckedRows, settings: Pick<FitFormValues, 'voltageUnit' | 'displacementUnit' | 'model'>): { ok: true; preview: FitPreview } | { ok: false; message: string } {
+  const parsed = fitInput.safeParse({ ...settings, points: checked.points }, { error: friendlyError });
+  if (!parsed.success) {
+    const tooFew = parsed.error.issues.some((i) => i.path[0] === 'points' && i.code === 'too_small');
+    return { ok: false, message: tooFew ? `A fit needs at least 3 good points; there ${checked.points.length === 1 ? 'is' : 'are'} ${checked.points.length}.` : parsed.error.issues[0].message };
+  }
+  try {
+    const fit = fitCalibrationInUnits(parsed.data);
+    const { voltageUnit, displacementUnit } = parsed.data;
+    const plotPoints = parsed.data.points.map((p) => ({ v: toVolts(p.volts, voltageUnit), x: toNm(p.displacement, displacementUnit), sweep: p.sweep }));
+    const line: [PlotPoint, PlotPoint] = [{ v: fit.voltsMinV, x: fit.lineNm[0] }, { v: fit.voltsMaxV, x: fit.lineNm[1] }];
+    return { ok: true, preview: { fit, plotPoints, line } };
+  } catch (err) {
+    return { ok: false, message: refusalMessage(err) };
+  }
+}

@@ -1,0 +1,57 @@
+import { useDeferredValue, useId, useMemo, useState } from 'react';
+import { gainMatrixFitInput } from '@shared/schemas/workbench.ts';
+import { fitGainMatrix } from '@shared/workbench/mixing.ts';
+import { Button } from '@/components/ui/button.tsx';
+import { RowProblems } from '../components/row-problems.tsx';
+import { readNumericColumns } from '../csv/split-csv.ts';
+import { formatLengthNm, formatSig } from '../format.ts';
+import { friendlyError, refusalMessage } from '../form/error-map.ts';
+import { roundMatrix, type MixingFormApi } from './mixing-form.ts';
+
+function fitGrid(text: string) {
+  const { rows, problems } = readNumericColumns(text, ['Va', 'Vb', 'x', 'y']);
+  const samples = rows.map(({ values: [vaV, vbV, xNm, yNm] }) => ({ vaV, vbV, xNm, yNm }));
+  const parsed = gainMatrixFitInput.safeParse({ samples }, { error: friendlyError });
+  if (!parsed.success) return { used: samples.length, problems, fit: null, message: 'A fit of G needs at least 3 good rows.' };
+  try {
+    return { used: samples.length, problems, fit: fitGainMatrix(parsed.data.samples), message: null };
+  } catch (err) {
+    return { used: samples.length, problems, fit: null, message: refusalMessage(err) };
+  }
+}
+
+/** Fit G from a grid of drive pairs and measured tip positions, then use it above. */
+export function GridFitPanel({ form }: { form: MixingFormApi }) {
+  const id = useId();
+  const [text, setText] = useState('');
+  const deferred = useDeferredValue(text);
+  const r = useMemo(() => (deferred.trim() ? fitGrid(deferred) : null), [deferred]);
+  return (
+    <div className="space-y-2 rounded-md border border-dashed border-rule p-3">
+      <label htmlFor={id} className="block text-sm font-medium">Fit G from a grid</label>
+      <textarea
+        id={id}
+        rows={5}
+        spellCheck={false}
+        value={text}
+        onChange={(e) => setText(e.target.value)}
+        aria-describedby={`${id}-hint`}
+        placeholder={'Va,Vb,x,y\n0,0,0,0\n10,0,707,707\n0,10,-707,707\n…'}
+        className="num w-full rounded-md border border-rule bg-white px-2 py-1.5 text-sm"
+      />
+      <p id={`${id}-hint`} className="text-xs text-ink-soft">One row per drive pair: Va and Vb in V, measured x and y in nm. Least squares, no intercept.</p>
+      {r && <RowProblems used={r.used} problems={r.problems} what="Line" noun="row" />}
+      {r?.message && <p role="status" className="text-sm text-danger">{r.message}</p>}
+      {r?.fit && (
+        <div className="flex flex-wrap items-center justify-between gap-2 text-sm">
+          <p>
+            G = <span className="num">[[{r.fit.gain[0].map((v) => formatSig(v)).join(', ')}], [{r.fit.gain[1].map((v) => formatSig(v)).join(', ')}]]</span> nm/V; residual SD x{' '}
+            <span className="num">{formatLengthNm(r.fit.residualStdXNm).value}</span> {formatLengthNm(r.fit.residualStdXNm).unit}, y{' '}
+            <span className="num">{formatLengthNm(r.fit.residualStdYNm).value}</span> {formatLengthNm(r.fit.residualStdYNm).unit}
+          </p>
+          <Button variant="secondary" onClick={() => form.setValue('gain', roundMatrix(r.fit.gain), { shouldValidate: true })}>Use this G</Button>
+        </div>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,162 @@
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import type { Page } from 'playwright-core';
+import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
+
+const BAR = 'Cartridge bimorph bar 11 × 1.5 × 0.5 mm';
+const DISC = 'Brass buzzer disc 27 mm';
+const STACK = 'Multilayer stack 5 × 5 × 9 mm';
+const MESSAGE = 'Hello Marit, could I have two of the cartridge bars for an XY pair? Happy to pay postage to Utrecht.';
+
+const noSideways = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth);
+
+describe('journey: parts registry and exchange', () => {
+  let live: LiveApp;
+  let browser: Awaited<ReturnType<typeof launchBrowser>>;
+  const errors: string[] = [];
+  beforeAll(async () => {
+    live = await startLiveApp();
+    browser = await launchBrowser();
+    browser.page.on('pageerror', (e) => errors.push(e.message));
+    browser.page.on('console', (m) => { if (m.type() === 'error' && !/status of 40[14]/.test(m.text())) errors.push(m.text()); });
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await live?.close();
+  });
+
+  test('when demo-maker filters by 80–150 nm/V, opens the cartridge bar and writes to marit-builds, then marit-builds reads it in the inbox', async () => {
+    const { page } = browser;
+    await page.goto(`${live.baseUrl}/auth/github?returnTo=%2Fparts`);
+    await page.getByRole('heading', { name: /Sign in \(local stand-in\)/ }).waitFor();
+    await page.getByRole('button', { name: /demo-maker/ }).click();
+    await page.waitForURL(`${live.baseUrl}/parts`);
+    await page.getByRole('heading', { level: 1, name: 'Parts registry' }).waitFor();
+    const table = page.getByRole('table');
+    await table.getByRole('link', { name: DISC }).waitFor();
+    expect(await page.getByRole('link', { name: 'Propose a part' }).count()).toBe(1);
+    expect(await page.getByRole('img', { name: /Where listed parts cluster/ }).count()).toBe(1);
+    await page.screenshot({ path: `${SCREENSHOTS}/parts-registry-1280.png`, fullPage: true });
+
+    await page.getByLabel('Gain from (nm/V)').fill('80');
+    await page.getByLabel('Gain to (nm/V)').fill('150');
+    await page.getByRole('button', { name: 'Apply filters' }).click();
+    await page.waitForURL(/\/parts\?gainMin=80&gainMax=150$/);
+    await table.getByRole('link', { name: DISC }).waitFor({ state: 'detached' });
+    await table.getByRole('link', { name: BAR }).waitFor();
+    expect(await table.getByRole('link', { name: STACK }).count()).toBe(0);
+    expect(await table.getByRole('row').nth(1).textContent()).toMatch(/\d+ nm\/V/);
+
+    const csv = await page.getByRole('link', { name: 'Download CSV' }).getAttribute('href');
+    expect(csv).toBe('/api/parts?gainMin=80&gainMax=150&sort=name&format=csv');
+    const download = await page.request.get(`${live.baseUrl}${csv}`);
+    expect(download.headers()['content-type']).toContain('text/csv');
+    expect(await download.text()).toContain(BAR);
+
+    await table.getByRole('button', { name: /Median gain/ }).click();
+    await page.waitForURL(/sort=-gain/);
+    await table.locator('th[aria-sort="descending"]', { hasText: 'Median gain' }).waitFor();
+    await page.screenshot({ path: `${SCREENSHOTS}/parts-registry-filtered-1280.png`, fullPage: true });
+
+    await table.getByRole('link', { name: BAR }).click();
+    await page.getByRole('heading', { level: 1, name: BAR }).waitFor();
+    const plot = page.getByTestId('part-runs-plot');
+    await plot.locator('svg.recharts-surface').waitFor();
+    expect(await plot.locator('.recharts-symbols').count()).toBeGreaterThanOrEqual(4);
+    expect(await page.getByRole('alert').filter({ hasText: 'High voltage: this part is rated up to 60 V' }).count()).toBe(1);
+    expect(await page.getByRole('button', { name: 'Report' }).count()).toBe(1);
+    await page.getByRole('button', { name: 'Report' }).click();
+    await page.getByRole('dialog', { name: 'Report this part' }).getByLabel('Reason').waitFor();
+    await page.keyboard.press('Escape');
+    await page.getByRole('dialog').waitFor({ state: 'hidden' });
+    await page.screenshot({ path: `${SCREENSHOTS}/part-page-1280.png`, fullPage: true });
+
+    await page.getByRole('region', { name: 'On the exchange' }).getByRole('link', { name: /by marit-builds/ }).click();
+    await page.getByRole('heading', { level: 1, name: `3 × ${BAR}` }).waitFor();
+    await page.getByText("Your message goes to marit-builds through Scanwright; neither of you sees the other's e-mail address.").waitFor();
+    await page.getByLabel('Message').fill(MESSAGE);
+    await page.getByRole('button', { name: 'Send message' }).click();
+    await page.getByRole('status').filter({ hasText: 'Sent.' }).waitFor();
+    await page.screenshot({ path: `${SCREENSHOTS}/listing-message-sent-1280.png`, fullPage: true });
+
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.getByRole('link', { name: 'Sign in', exact: true }).first().waitFor();
+    await page.goto(`${live.baseUrl}/auth/github?login=marit-builds&returnTo=%2Finbox`);
+    await page.waitForURL(`${live.baseUrl}/inbox`);
+    await page.getByRole('heading', { level: 1, name: 'Inbox' }).waitFor();
+    const thread = page.getByRole('listitem').filter({ hasText: 'demo-maker' });
+    await thread.getByText('1 unread').waitFor();
+    expect(await thread.textContent()).toContain('Hello Marit');
+    await page.screenshot({ path: `${SCREENSHOTS}/inbox-1280.png`, fullPage: true });
+
+    await thread.getByRole('link', { name: 'demo-maker' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Conversation with demo-maker' }).waitFor();
+    await page.getByRole('list', { name: 'Messages' }).getByText(MESSAGE).waitFor();
+    await page.getByLabel('Reply to demo-maker').fill('Yes, two are yours. I will post them on Monday.');
+    await page.getByRole('button', { name: 'Send reply' }).click();
+    await page.getByRole('list', { name: 'Messages' }).getByText('I will post them on Monday.').waitFor();
+    await page.screenshot({ path: `${SCREENSHOTS}/inbox-thread-1280.png`, fullPage: true });
+    expect(errors).toEqual([]);
+  });
+
+  test('when marit-builds proposes a part, then the page says it waits for a moderator', async () => {
+    const { page } = browser;
+    await page.goto(`${live.baseUrl}/parts/propose`);
+    await page.getByLabel('Category').selectOption('tube');
+    await page.getByLabel('Name', { exact: true }).fill('Short quartered tube 3.2 OD × 6 mm');
+    await page.getByLabel('Outer diameter (mm)').fill('3.2');
+    await page.getByLabel('Length (mm)').fill('6');
+    await page.getByLabel('Wall thickness (mm)').fill('0.4');
+    await page.getByLabel('Material family').selectOption('PZT-5H');
+    await page.getByLabel('Safe voltage (V)').fill('120');
+    await page.screenshot({ path: `${SCREENSHOTS}/propose-part-1280.png`, fullPage: true });
+    await page.getByRole('button', { name: 'Propose this part' }).click();
+    await page.getByRole('status').filter({ hasText: 'Proposed: waiting for a moderator' }).waitFor();
+    await page.getByRole('link', { name: 'Open its page' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Short quartered tube 3.2 OD × 6 mm' }).waitFor();
+    await page.getByText('Only its proposer and the moderators can see this page').waitFor();
+    expect(errors).toEqual([]);
+  });
+
+  test('when the pages are 390 px wide, then nothing scrolls sideways except the registry table inside its region', async () => {
+    const { page } = browser;
+    await page.setViewportSize({ width: 390, height: 844 });
+    await page.goto(`${live.baseUrl}/parts?gainMin=80&gainMax=150`);
+    await page.getByRole('table').getByRole('link', { name: BAR }).waitFor();
+    expect(await noSideways(page)).toBe(true);
+    const region = page.getByRole('region', { name: /Parts, scrolls sideways/ });
+    expect(await region.evaluate((el) => el.scrollWidth > el.clientWidth)).toBe(true);
+    await page.screenshot({ path: `${SCREENSHOTS}/parts-registry-390.png`, fullPage: true });
+
+    await page.getByRole('table').getByRole('link', { name: BAR }).click();
+    await page.getByTestId('part-runs-plot').locator('svg.recharts-surface').waitFor();
+    expect(await noSideways(page)).toBe(true);
+    await page.screenshot({ path: `${SCREENSHOTS}/part-page-390.png`, fullPage: true });
+
+    await page.goto(`${live.baseUrl}/exchange`);
+    await page.getByRole('heading', { level: 1, name: 'Exchange' }).waitFor(); await page.getByText(/listings?$/).first().waitFor({ timeout: 5000 }).catch(() => {}); await page.screenshot({ path: `${SCREENSHOTS}/debug-exchange.png`, fullPage: true });
+    await page.getByRole('link', { name: new RegExp(STACK) }).waitFor();
+    await page.getByLabel('Free only').check();
+    await page.waitForURL(/freeOnly=true/);
+    await page.getByRole('link', { name: new RegExp(STACK) }).waitFor({ state: 'detached' });
+    await page.getByRole('link', { name: new RegExp(DISC) }).waitFor();
+    expect(await noSideways(page)).toBe(true);
+    await page.screenshot({ path: `${SCREENSHOTS}/exchange-390.png`, fullPage: true });
+
+    await page.goto(`${live.baseUrl}/exchange/mine`);
+    await page.getByRole('heading', { level: 1, name: 'My listings' }).waitFor();
+    await page.getByRole('link', { name: `3 × ${BAR}`, exact: true }).waitFor();
+    await page.getByRole('button', { name: `Mark reserved: 3 × ${BAR}` }).click();
+    await page.getByRole('button', { name: `Reopen: 3 × ${BAR}` }).waitFor();
+    expect(await page.getByRole('listitem').filter({ hasText: BAR }).getByText('Reserved', { exact: true }).count()).toBe(1);
+    expect(await noSideways(page)).toBe(true);
+    await page.screenshot({ path: `${SCREENSHOTS}/my-listings-390.png`, fullPage: true });
+
+    await page.goto(`${live.baseUrl}/inbox`);
+    await page.getByRole('link', { name: 'demo-maker' }).click();
+    await page.getByRole('list', { name: 'Messages' }).waitFor();
+    expect(await noSideways(page)).toBe(true);
+    await page.screenshot({ path: `${SCREENSHOTS}/inbox-thread-390.png`, fullPage: true });
+    await page.setViewportSize({ width: 1280, height: 860 });
+    expect(errors).toEqual([]);
+  });
+});

@@ -1,0 +1,663 @@
+// One fixture per state-changing route: the rows the route acts on (owned by the case's maker),
+// a valid body, a cheap read of what the route would change, and a check that a 2xx changed it.
+// Used by the authorization matrix and the hostile-input properties.
+import { randomBytes } from 'node:crypto';
+import { expect } from 'vitest';
+import type request from 'supertest';
+import { CookieAccessInfo } from 'cookiejar';
+import type { z } from 'zod';
+import { createBuildInput, createEntryInput, reorderPhotosInput, updateBuildInput, updateEntryInput, updatePhotoInput } from '@shared/schemas/build.ts';
+import { createActuatorInput, updateActuatorInput } from '@shared/schemas/actuator.ts';
+import { createRunInput } from '@shared/schemas/run.ts';
+import { mergePartInput, proposePartInput } from '@shared/schemas/part.ts';
+import { acceptRejectInput, accountSettingsInput, buildDecisionInput, createReportInput, reportDecisionInput } from '@shared/schemas/review.ts';
+import { createListingInput, hideListingInput, sendMessageInput, updateListingInput } from '@shared/schemas/listing.ts';
+import { setRoleInput, setSuspendedInput } from '@shared/schemas/user.ts';
+import * as wb from '@shared/schemas/workbench.ts';
+import type { TestApp } from './test-app.ts';
+import type { Agent } from './login.ts';
+import { fillPath, type RouteEntry } from './route-table.ts';
+import { createBuildRow, createPart, createRunRow, createUser } from './factories.ts';
+import { jpeg } from './images.ts';
+import { User } from '../../server/models/user.model.ts';
+import { Build } from '../../server/models/build.model.ts';
+import { LogEntry } from '../../server/models/log-entry.model.ts';
+import { Photo } from '../../server/models/photo.model.ts';
+import { Actuator } from '../../server/models/actuator.model.ts';
+import { CalibrationRun } from '../../server/models/calibration-run.model.ts';
+import { Part } from '../../server/models/part.model.ts';
+import { Report } from '../../server/models/report.model.ts';
+import { Listing } from '../../server/models/listing.model.ts';
+import { Message, MessageThread } from '../../server/models/message.model.ts';
+
+/** Who sends the request: a signed-in user with their agent, or a visitor (user null). */
+export interface Acting {
+  user: User | null;
+  agent: Agent;
+}
+
+export interface CaseContext {
+  t: TestApp;
+  /** The maker whose rows the route acts on ("maker (owner)"); for account routes, the account itself. */
+  owner: User;
+  actor: Acting;
+}
+
+export interface Target {
+  params?: Record<string, number>;
+  /** JSON body; absent for routes that take none. */
+  body?: Record<string, unknown>;
+  /** Multipart upload instead of JSON (photos). */
+  multipart?: { files: Buffer[]; fields: Record<string, string> };
+  /** A cheap read of everything the route could change: equal before and after a refusal. */
+  state(): Promise<unknown>;
+  /** After a 2xx: the change the route promises really happened. */
+  changed(res: request.Response): Promise<void>;
+}
+
+export interface Fixture {
+  /** The zod schema of the JSON body, for telling valid from invalid inputs in property tests. */
+  schema?: z.ZodType;
+  /** Who may do this when the fixture is made for the owner: used by tests that need one allowed actor. */
+  allowed: 'owner' | 'other' | 'moderator' | 'admin';
+  /** The route changes the owner's account (role, suspension): the owner must be a fresh user per case. */
+  changesOwner?: boolean;
+  /** The route ends the acting session (logout): every actor must be a fresh sign-in per case. */
+  endsSession?: boolean;
+  make(ctx: CaseContext): Promise<Target>;
+}
+
+const rows = async (...finds: Array<Promise<{ toJSON(): object } | { toJSON(): object }[] | null>>) =>
+  (await Promise.all(finds)).map((r) => (Array.isArray(r) ? r.map((x) => x.toJSON()) : (r?.toJSON() ?? null)));
+const unique = (prefix: string) => `${prefix} ${randomBytes(3).toString('hex')}`;
+
+async function photoRow(buildId: number, ownerId: number, position: number) {
+  const hash = randomBytes(32).toString('hex');
+  return Photo.create({ buildId, ownerId, contentHash: hash, displayFile: `${hash}.webp`, thumbFile: `${hash}-t.webp`, width: 40, height: 30, alt: 'A photo', position });
+}
+
+/** The session id behind an agent's cookie (null when it has none). */
+export function sidOf(agent: Agent): string | null {
+  const cookie = (agent as unknown as { jar: { getCookie(name: string, access: unknown): { value: string } | undefined } }).jar.getCookie('scanwright.sid', CookieAccessInfo.All);
+  if (!cookie) return null;
+  const signed = decodeURIComponent(cookie.value).slice(2);
+  return signed.slice(0, signed.lastIndexOf('.'));
+}
+
+export const sessionRows = async (t: TestApp, where: { sid?: string | null; userId?: number }) =>
+  where.sid === null ? 0 : t.handle.sequelize.models.Session.count({ where: where as Record<string, unknown> });
+
+/** Send the fixture's request as the acting agent, with its CSRF token unless told otherwise. */
+export function send(route: RouteEntry, target: Target, agent: Agent, opts: { csrf?: string | null; body?: unknown; headers?: Record<string, string> } = {}) {
+  const method = route.method.toLowerCase() as 'post' | 'put' | 'patch' | 'delete';
+  let req = agent[method](fillPath(route.path, target.params ?? {}));
+  const csrf = opts.csrf === undefined ? agent.csrf : opts.csrf;
+  if (csrf !== null) req = req.set('X-CSRF-Token', csrf);
+  for (const [k, v] of Object.entries(opts.headers ?? {})) req = req.set(k, v);
+  if (target.multipart && opts.body === undefined) {
+    for (const [name, value] of Object.entries(target.multipart.fields)) req = req.field(name, value);
+    for (const [i, file] of target.multipart.files.entries()) req = req.attach('photos', file, { filename: `p${i}.jpg`, contentType: 'image/jpeg' });
+    return req;
+  }
+  const body = opts.body ?? target.body;
+  return body === undefined ? req : req.send(body as object);
+}
+
+const workbench = (schema: z.ZodType, body: Record<string, unknown>, answers: string): Fixture => ({
+  schema,
+  allowed: 'owner',
+  async make() {
+    return {
+      body,
+      state: async () => null,
+      async changed(res) {
+        expect(res.body).toHaveProperty(answers);
+      },
+    };
+  },
+});
+
+async function draftBuild(ctx: CaseContext, status = 'draft') {
+  return createBuildRow(ctx.owner.id, { status });
+}
+
+const buildState = (id: number) => () => rows(Build.findByPk(id), LogEntry.findAll({ where: { buildId: id } }), Photo.findAll({ where: { buildId: id } }), Actuator.findAll({ where: { buildId: id } }));
+
+export const fixtures: Record<string, Fixture> = {
+  'POST /auth/logout': {
+    allowed: 'owner',
+    endsSession: true,
+    async make({ t, actor }) {
+      const sid = sidOf(actor.agent);
+      return {
+        state: async () => sessionRows(t, { sid }),
+        async changed() {
+          expect(await sessionRows(t, { sid })).toBe(0);
+          expect((await actor.agent.get('/api/session')).body.user).toBeNull();
+        },
+      };
+    },
+  },
+
+  'PATCH /api/admin/users/:userId/role': {
+    schema: setRoleInput,
+    allowed: 'admin',
+    changesOwner: true,
+    async make({ owner }) {
+      return {
+        params: { userId: owner.id },
+        body: { role: 'moderator' },
+        state: () => rows(User.findByPk(owner.id)),
+        async changed(res) {
+          expect(res.body).toMatchObject({ id: owner.id, role: 'moderator' });
+          expect((await User.findByPk(owner.id))?.role).toBe('moderator');
+        },
+      };
+    },
+  },
+  'PATCH /api/admin/users/:userId/suspension': {
+    schema: setSuspendedInput,
+    allowed: 'admin',
+    changesOwner: true,
+    async make({ t, owner }) {
+      return {
+        params: { userId: owner.id },
+        body: { suspended: true },
+        state: () => rows(User.findByPk(owner.id)),
+        async changed(res) {
+          expect(res.body).toMatchObject({ id: owner.id, suspended: true });
+          expect((await User.findByPk(owner.id))?.suspendedAt).not.toBeNull();
+          expect(await sessionRows(t, { userId: owner.id })).toBe(0);
+        },
+      };
+    },
+  },
+
+  'POST /api/workbench/fit': workbench(wb.fitInput, { points: [0, 1, 2, 3].map((v) => ({ volts: v, displacement: 0.1 * v })), displacementUnit: 'um' }, 'gainNmPerV'),
+  'POST /api/workbench/peak-to-peak': workbench(wb.peakToPeakInput, { displacementPpNm: 2000, voltsPpV: 20, displacementResolutionNm: 10 }, 'gainNmPerV'),
+  'POST /api/workbench/creep': workbench(wb.creepInput, { samples: [0.1, 1, 10, 100].map((timeS) => ({ timeS, displacementNm: 1000 * (1 + 0.02 * Math.log10(timeS / 0.1)) })) }, 'gamma'),
+  'POST /api/workbench/expected-gain': workbench(wb.expectedGainInput, { actuator: 'plate-thickness', material: 'PZT-5A' }, 'gainNmPerV'),
+  'POST /api/workbench/mixing': workbench(wb.mixingInput, { gain: [[10, 1], [1, 10]], limits: { vaMinV: -10, vaMaxV: 10, vbMinV: -10, vbMaxV: 10 } }, 'cautions'),
+  'POST /api/workbench/mixing-fit': workbench(
+    wb.gainMatrixFitInput,
+    { samples: [[0, 0], [1, 0], [0, 1], [1, 1], [2, 1]].map(([vaV, vbV]) => ({ vaV, vbV, xNm: 10 * vaV + vbV, yNm: vaV + 10 * vbV })) },
+    'gainNmPerV',
+  ),
+  'POST /api/workbench/scan-plan': workbench(wb.scanPlanInput, { dacBits: 16, dacSpanV: 10, ampGainVPerV: 15, actuatorGainNmPerV: 5, pixelsPerLine: 256, lines: 256, lineRateHz: 1 }, 'cautions'),
+  'POST /api/workbench/resonance': workbench(wb.resonanceInput, { lengthM: 450e-6, thicknessM: 2e-6, widthM: 50e-6, youngsModulusPa: 169e9, densityKgPerM3: 2330 }, 'firstModeHz'),
+  'POST /api/workbench/drive-current': workbench(wb.driveCurrentInput, { capacitanceF: 10e-9, amplitudeV: 100, frequencyHz: 1000 }, 'cautions'),
+  'POST /api/workbench/tunnelling': workbench(wb.tunnellingInput, { workFunctionEv: 4.5 }, 'decayConstantPerAngstrom'),
+  'POST /api/workbench/convert': workbench(wb.unitConversionInput, { value: 1, from: 'nm', to: 'um' }, 'converted'),
+
+  'POST /api/builds/:buildId/photos': {
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      return {
+        params: { buildId: build.id },
+        multipart: { files: [await jpeg(40, 30)], fields: { alt: 'The scan head' } },
+        state: buildState(build.id),
+        async changed(res) {
+          expect(res.status).toBe(201);
+          expect(await Photo.count({ where: { buildId: build.id } })).toBe(1);
+        },
+      };
+    },
+  },
+  'PUT /api/builds/:buildId/photos/order': {
+    schema: reorderPhotosInput,
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const [a, b] = [await photoRow(build.id, ctx.owner.id, 0), await photoRow(build.id, ctx.owner.id, 1)];
+      return {
+        params: { buildId: build.id },
+        body: { photoIds: [b.id, a.id] },
+        state: buildState(build.id),
+        async changed() {
+          expect((await Photo.findAll({ where: { buildId: build.id }, order: [['position', 'ASC']] })).map((p) => p.id)).toEqual([b.id, a.id]);
+        },
+      };
+    },
+  },
+  'PATCH /api/builds/:buildId/photos/:photoId': {
+    schema: updatePhotoInput,
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const photo = await photoRow(build.id, ctx.owner.id, 0);
+      return {
+        params: { buildId: build.id, photoId: photo.id },
+        body: { alt: 'The etched tip' },
+        state: buildState(build.id),
+        async changed() {
+          expect((await Photo.findByPk(photo.id))?.alt).toBe('The etched tip');
+        },
+      };
+    },
+  },
+  'DELETE /api/builds/:buildId/photos/:photoId': {
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const photo = await photoRow(build.id, ctx.owner.id, 0);
+      return {
+        params: { buildId: build.id, photoId: photo.id },
+        state: buildState(build.id),
+        async changed() {
+          expect(await Photo.findByPk(photo.id)).toBeNull();
+        },
+      };
+    },
+  },
+  'POST /api/builds/:buildId/photos/:photoId/cover': {
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const photo = await photoRow(build.id, ctx.owner.id, 0);
+      return {
+        params: { buildId: build.id, photoId: photo.id },
+        state: buildState(build.id),
+        async changed() {
+          expect((await Build.findByPk(build.id))?.coverPhotoId).toBe(photo.id);
+        },
+      };
+    },
+  },
+
+  'POST /api/builds': {
+    schema: createBuildInput,
+    allowed: 'owner',
+    async make({ actor }) {
+      const title = unique('Tube scanner');
+      const mine = () => (actor.user ? Build.findAll({ where: { ownerId: actor.user.id, title } }) : Promise.resolve([]));
+      return {
+        body: { title, instrumentKind: 'tunnelling-microscope', summary: 'A tube-scanner STM.' },
+        state: () => rows(mine()),
+        async changed(res) {
+          expect(res.body).toMatchObject({ title, status: 'draft', owner: { id: actor.user!.id } });
+          expect(await mine()).toHaveLength(1);
+        },
+      };
+    },
+  },
+  'PATCH /api/builds/:buildId': {
+    schema: updateBuildInput,
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      return {
+        params: { buildId: build.id },
+        body: { title: 'Renamed build' },
+        state: buildState(build.id),
+        async changed() {
+          expect((await Build.findByPk(build.id))?.title).toBe('Renamed build');
+        },
+      };
+    },
+  },
+  'DELETE /api/builds/:buildId': {
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      return {
+        params: { buildId: build.id },
+        state: buildState(build.id),
+        async changed() {
+          expect(await Build.findByPk(build.id)).toBeNull();
+        },
+      };
+    },
+  },
+  'POST /api/builds/:buildId/submit': {
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      return {
+        params: { buildId: build.id },
+        state: buildState(build.id),
+        async changed() {
+          expect((await Build.findByPk(build.id))?.status).toBe('submitted');
+        },
+      };
+    },
+  },
+  'POST /api/builds/:buildId/entries': {
+    schema: createEntryInput,
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      return {
+        params: { buildId: build.id },
+        body: { entryDate: '2026-01-10', title: 'First light', body: 'Saw the graphite lattice.' },
+        state: buildState(build.id),
+        async changed() {
+          expect((await LogEntry.findAll({ where: { buildId: build.id } })).map((e) => e.title)).toEqual(['First light']);
+        },
+      };
+    },
+  },
+  'PATCH /api/builds/:buildId/entries/:entryId': {
+    schema: updateEntryInput,
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const entry = await LogEntry.create({ buildId: build.id, entryDate: '2026-01-10', title: 'First light', body: 'x' });
+      return {
+        params: { buildId: build.id, entryId: entry.id },
+        body: { title: 'Second light' },
+        state: buildState(build.id),
+        async changed() {
+          expect((await LogEntry.findByPk(entry.id))?.title).toBe('Second light');
+        },
+      };
+    },
+  },
+  'DELETE /api/builds/:buildId/entries/:entryId': {
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const entry = await LogEntry.create({ buildId: build.id, entryDate: '2026-01-10', title: 'First light', body: 'x' });
+      return {
+        params: { buildId: build.id, entryId: entry.id },
+        state: buildState(build.id),
+        async changed() {
+          expect(await LogEntry.findByPk(entry.id)).toBeNull();
+        },
+      };
+    },
+  },
+
+  'POST /api/builds/:buildId/actuators': {
+    schema: createActuatorInput,
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const part = await createPart();
+      return {
+        params: { buildId: build.id },
+        body: { partId: part.id, axis: 'Z', drive: 'single' },
+        state: buildState(build.id),
+        async changed() {
+          expect(await Actuator.count({ where: { buildId: build.id, partId: part.id } })).toBe(1);
+        },
+      };
+    },
+  },
+  'PATCH /api/actuators/:actuatorId': {
+    schema: updateActuatorInput,
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const part = await createPart();
+      const actuator = await Actuator.create({ buildId: build.id, partId: part.id, label: null, axis: 'Z', drive: 'single', amplifier: null, maxVolts: null, notes: null });
+      return {
+        params: { actuatorId: actuator.id },
+        body: { label: 'Z tube' },
+        state: buildState(build.id),
+        async changed() {
+          expect((await Actuator.findByPk(actuator.id))?.label).toBe('Z tube');
+        },
+      };
+    },
+  },
+  'DELETE /api/actuators/:actuatorId': {
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const part = await createPart();
+      const actuator = await Actuator.create({ buildId: build.id, partId: part.id, label: null, axis: 'Z', drive: 'single', amplifier: null, maxVolts: null, notes: null });
+      return {
+        params: { actuatorId: actuator.id },
+        state: buildState(build.id),
+        async changed() {
+          expect(await Actuator.findByPk(actuator.id)).toBeNull();
+        },
+      };
+    },
+  },
+  'POST /api/actuators/:actuatorId/runs': {
+    schema: createRunInput,
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const part = await createPart();
+      const actuator = await Actuator.create({ buildId: build.id, partId: part.id, label: null, axis: 'Z', drive: 'single', amplifier: null, maxVolts: null, notes: null });
+      const runs = () => CalibrationRun.findAll({ where: { actuatorId: actuator.id } });
+      return {
+        params: { actuatorId: actuator.id },
+        body: { points: [0, 10, 20, 30].map((v) => ({ volts: v, displacement: 4.2 * v })), displacementUnit: 'nm', method: 'indicator' },
+        state: () => rows(runs(), Build.findByPk(build.id)),
+        async changed() {
+          expect((await runs()).map((r) => [r.status, Number(r.gainNmPerV.toFixed(6))])).toEqual([['pending', 4.2]]);
+        },
+      };
+    },
+  },
+  'DELETE /api/runs/:runId': {
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const part = await createPart();
+      const run = await createRunRow({ buildId: build.id, partId: part.id, ownerId: ctx.owner.id, gainNmPerV: 40 });
+      return {
+        params: { runId: run.id },
+        state: () => rows(CalibrationRun.findByPk(run.id)),
+        async changed() {
+          expect(await CalibrationRun.findByPk(run.id)).toBeNull();
+        },
+      };
+    },
+  },
+
+  'POST /api/parts': {
+    schema: proposePartInput,
+    allowed: 'owner',
+    async make({ actor }) {
+      const name = unique('Buzzer disc');
+      const mine = () => Part.findAll({ where: { name } });
+      return {
+        body: { category: 'buzzer-disc', name, salvageSource: 'a doorbell' },
+        state: () => rows(mine()),
+        async changed() {
+          expect((await mine()).map((p) => [p.status, p.proposedById])).toEqual([['proposed', actor.user!.id]]);
+        },
+      };
+    },
+  },
+  'POST /api/parts/:partId/merge': {
+    schema: mergePartInput,
+    allowed: 'moderator',
+    async make({ owner }) {
+      const from = await createPart({ proposedById: owner.id });
+      const into = await createPart();
+      return {
+        params: { partId: from.id },
+        body: { intoPartId: into.id, note: 'Same bar, two names.' },
+        state: () => rows(Part.findByPk(from.id), Part.findByPk(into.id)),
+        async changed() {
+          expect((await Part.findByPk(from.id))?.mergedIntoId).toBe(into.id);
+        },
+      };
+    },
+  },
+
+  'POST /api/review/builds/:id/decision': {
+    schema: buildDecisionInput,
+    allowed: 'moderator',
+    async make(ctx) {
+      const build = await draftBuild(ctx, 'submitted');
+      return {
+        params: { id: build.id },
+        body: { decision: 'publish' },
+        state: buildState(build.id),
+        async changed() {
+          expect((await Build.findByPk(build.id))?.status).toBe('published');
+        },
+      };
+    },
+  },
+  'POST /api/review/runs/:id/decision': {
+    schema: acceptRejectInput,
+    allowed: 'moderator',
+    async make(ctx) {
+      const build = await draftBuild(ctx, 'published');
+      const run = await createRunRow({ buildId: build.id, partId: (await createPart()).id, ownerId: ctx.owner.id, gainNmPerV: 40 });
+      return {
+        params: { id: run.id },
+        body: { decision: 'accept' },
+        state: () => rows(CalibrationRun.findByPk(run.id)),
+        async changed() {
+          expect((await CalibrationRun.findByPk(run.id))?.status).toBe('accepted');
+        },
+      };
+    },
+  },
+  'POST /api/review/parts/:id/decision': {
+    schema: acceptRejectInput,
+    allowed: 'moderator',
+    async make({ owner }) {
+      const part = await createPart({ status: 'proposed', proposedById: owner.id });
+      return {
+        params: { id: part.id },
+        body: { decision: 'accept' },
+        state: () => rows(Part.findByPk(part.id)),
+        async changed() {
+          expect((await Part.findByPk(part.id))?.status).toBe('accepted');
+        },
+      };
+    },
+  },
+  'POST /api/review/reports/:id/decision': {
+    schema: reportDecisionInput,
+    allowed: 'moderator',
+    async make(ctx) {
+      const build = await draftBuild(ctx, 'published');
+      const report = await Report.create({ reporterId: ctx.owner.id, targetType: 'build', targetId: build.id, reason: 'spam', note: null });
+      return {
+        params: { id: report.id },
+        body: { decision: 'dismiss', note: 'Not spam.' },
+        state: () => rows(Report.findByPk(report.id)),
+        async changed() {
+          expect((await Report.findByPk(report.id))?.status).toBe('dismissed');
+        },
+      };
+    },
+  },
+  'POST /api/reports': {
+    schema: createReportInput,
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx, 'published');
+      const reports = () => Report.findAll({ where: { targetType: 'build', targetId: build.id } });
+      return {
+        body: { targetType: 'build', targetId: build.id, reason: 'wrong-data', note: 'The gain is off by 1000.' },
+        state: () => rows(reports()),
+        async changed() {
+          expect((await reports()).map((r) => [r.reporterId, r.status])).toEqual([[ctx.actor.user!.id, 'open']]);
+        },
+      };
+    },
+  },
+  'PATCH /api/account/settings': {
+    schema: accountSettingsInput,
+    allowed: 'owner',
+    async make({ actor }) {
+      return {
+        body: { mailOptOut: true },
+        state: () => rows(actor.user ? User.findByPk(actor.user.id) : Promise.resolve(null)),
+        async changed(res) {
+          expect(res.body).toMatchObject({ mailOptOut: true });
+          expect((await User.findByPk(actor.user!.id))?.mailOptOut).toBe(true);
+        },
+      };
+    },
+  },
+
+  'POST /api/listings': {
+    schema: createListingInput,
+    allowed: 'owner',
+    async make({ actor }) {
+      const part = await createPart();
+      const listings = () => Listing.findAll({ where: { partId: part.id } });
+      return {
+        body: { partId: part.id, kind: 'offering', quantity: 2, condition: 'salvaged-tested', priceKind: 'free', region: 'Lower Saxony' },
+        state: () => rows(listings()),
+        async changed() {
+          expect((await listings()).map((l) => l.ownerId)).toEqual([actor.user!.id]);
+        },
+      };
+    },
+  },
+  'PATCH /api/listings/:listingId': {
+    schema: updateListingInput,
+    allowed: 'owner',
+    async make({ owner }) {
+      const listing = await listingRow(owner.id);
+      return {
+        params: { listingId: listing.id },
+        body: { quantity: 5 },
+        state: () => rows(Listing.findByPk(listing.id)),
+        async changed() {
+          expect((await Listing.findByPk(listing.id))?.quantity).toBe(5);
+        },
+      };
+    },
+  },
+  'POST /api/listings/:listingId/visibility': {
+    schema: hideListingInput,
+    allowed: 'moderator',
+    async make({ owner }) {
+      const listing = await listingRow(owner.id);
+      return {
+        params: { listingId: listing.id },
+        body: { hidden: true, note: 'Mains-powered gear without cautions.' },
+        state: () => rows(Listing.findByPk(listing.id)),
+        async changed() {
+          expect((await Listing.findByPk(listing.id))?.hiddenAt).not.toBeNull();
+        },
+      };
+    },
+  },
+  'POST /api/listings/:listingId/messages': {
+    schema: sendMessageInput,
+    allowed: 'other',
+    async make({ owner, actor }) {
+      const listing = await listingRow(owner.id);
+      const threads = () => MessageThread.findAll({ where: { listingId: listing.id } });
+      return {
+        params: { listingId: listing.id },
+        body: { body: 'Are the bars still available?' },
+        state: () => rows(threads()),
+        async changed(res) {
+          expect((await threads()).map((th) => th.starterId)).toEqual([actor.user!.id]);
+          expect((await Message.findAll({ where: { threadId: res.body.threadId } })).map((m) => m.body)).toEqual(['Are the bars still available?']);
+        },
+      };
+    },
+  },
+  'POST /api/inbox/:threadId/messages': {
+    schema: sendMessageInput,
+    allowed: 'owner',
+    async make({ owner, actor }) {
+      const listing = await listingRow(owner.id);
+      const starter = await createUser();
+      const thread = await MessageThread.create({ listingId: listing.id, starterId: starter.id, ownerId: owner.id, lastMessageAt: new Date() });
+      await Message.create({ threadId: thread.id, senderId: starter.id, body: 'Still there?' });
+      const messages = () => Message.findAll({ where: { threadId: thread.id }, order: [['id', 'ASC']] });
+      return {
+        params: { threadId: thread.id },
+        body: { body: 'Yes, two left.' },
+        state: () => rows(messages()),
+        async changed() {
+          expect((await messages()).map((m) => [m.senderId, m.body])).toEqual([[starter.id, 'Still there?'], [actor.user!.id, 'Yes, two left.']]);
+        },
+      };
+    },
+  },
+};
+
+async function listingRow(ownerId: number) {
+  const part = await createPart();
+  return Listing.create({ ownerId, partId: part.id, kind: 'offering', quantity: 3, condition: 'new', priceKind: 'free', priceAmount: null, currency: null, region: 'Here', shipsTo: null, notes: null });
+}

@@ -1,0 +1,95 @@
+// A MariaDB of a test's own (not the shared test database), for tests that stop, restart, dump or
+// restore it while other test files keep using theirs. Tmpfs when writable, a free port, migrated.
+import { accessSync, constants, mkdtempSync, rmSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import type { ChildProcess } from 'node:child_process';
+// @ts-expect-error plain ESM helper without types
+import { initDataDir, startServer, ensureDatabase, stopServer, rootSql } from '../../scripts/lib/mariadb.mjs';
+import type { Config } from '../../server/config.ts';
+import { createSequelize } from '../../server/db/sequelize.ts';
+import { createMigrator } from '../../server/db/migrator.ts';
+
+export interface PrivateMariaDb {
+  /** Data directory root (data/, mysqld.sock, error.log). */
+  dir: string;
+  socket: string;
+  port: number;
+  /** The app's `config.db` for this server. */
+  db: Config['db'];
+  /** Start mariadbd again on the same data directory and port. */
+  start(): Promise<void>;
+  /** SIGTERM mariadbd and wait until it has exited. */
+  stop(): Promise<void>;
+  running(): boolean;
+  /** SQL as root over the socket; returns mariadb's tab-separated output. */
+  sql(statement: string): string;
+  /** Stop the server and delete the data directory. */
+  destroy(): Promise<void>;
+}
+
+/** A port nothing listens on right now. */
+export function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const s = createServer();
+    s.once('error', reject);
+    s.listen(0, '127.0.0.1', () => {
+      const { port } = s.address() as { port: number };
+      s.close(() => resolve(port));
+    });
+  });
+}
+
+function scratchBase(): string {
+  try {
+    accessSync('/dev/shm', constants.W_OK);
+    return '/dev/shm';
+  } catch {
+    return tmpdir();
+  }
+}
+
+/** Initialise, start, create the database and user, and (by default) apply every migration. */
+export async function startPrivateMariaDb(opts: { database?: string; migrate?: boolean } = {}): Promise<PrivateMariaDb> {
+  const dir = mkdtempSync(join(scratchBase(), 'scanwright-private-'));
+  const port = await freePort();
+  const db: Config['db'] = { host: '127.0.0.1', port, name: opts.database ?? 'scanwright_private', user: 'scanwright', password: 'private-test-password', poolMax: 10 };
+  let child: ChildProcess | null = null;
+  const handle: PrivateMariaDb = {
+    dir,
+    socket: join(dir, 'mysqld.sock'),
+    port,
+    db,
+    async start() {
+      if (handle.running()) return;
+      child = await startServer(dir, port, { fast: true });
+    },
+    async stop() {
+      await stopServer(child);
+    },
+    running: () => child !== null && child.exitCode === null && child.signalCode === null,
+    sql: (statement) => rootSql(dir, statement),
+    async destroy() {
+      await stopServer(child);
+      rmSync(dir, { recursive: true, force: true });
+    },
+  };
+  try {
+    initDataDir(dir);
+    await handle.start();
+    ensureDatabase(dir, { database: db.name, user: db.user, password: db.password });
+    if (opts.migrate !== false) {
+      const sequelize = createSequelize(db);
+      try {
+        await createMigrator(sequelize).up();
+      } finally {
+        await sequelize.close();
+      }
+    }
+  } catch (err) {
+    await handle.destroy();
+    throw err;
+  }
+  return handle;
+}
