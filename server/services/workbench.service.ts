@@ -53,15 +53,28 @@ import type {
 } from '@shared/schemas/workbench.ts';
 import { AppError } from '../errors.ts';
 
-/** Run a shared calculation, turning its input refusals into 400s with the refusal's own code. */
+/** Some number inside is NaN or ±Infinity, which JSON would silently turn into null. */
+function hasNonFinite(value: unknown): boolean {
+  if (typeof value === 'number') return !Number.isFinite(value);
+  if (Array.isArray(value)) return value.some(hasNonFinite);
+  return value !== null && typeof value === 'object' && Object.values(value).some(hasNonFinite);
+}
+
+/**
+ * Run a shared calculation, turning its input refusals into 400s with the refusal's own code;
+ * inputs so extreme that a result overflows double precision are refused too (400 out_of_range).
+ */
 export function asBadRequest<T>(compute: () => T): T {
+  let result: T;
   try {
-    return compute();
+    result = compute();
   } catch (err) {
     if (err instanceof FitInputError) throw new AppError(400, err.code, err.message, err.details);
     if (err instanceof RangeError) throw new AppError(400, 'invalid_input', err.message);
     throw err;
   }
+  if (hasNonFinite(result)) throw new AppError(400, 'out_of_range', 'These values are too large or too small to calculate with; try other units.');
+  return result;
 }
 
 /** The calibration fit exactly as runs store it: same shared code, same DTO. */

@@ -1,6 +1,6 @@
 // Database faults: MariaDB is stopped (SIGTERM) while decisions, writes and reads are in flight,
 // then started again on the same data directory. Runs against a private MariaDB, never the shared one.
-import { request as httpRequest, type Server } from 'node:http';
+import { Agent, request as httpRequest, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { startTestApp, type TestApp } from '../support/test-app.ts';
@@ -23,10 +23,10 @@ let t: TestApp;
 let server: Server;
 let port: number;
 
-/**
- * One request on its own connection (no keep-alive reuse races in the client), bounded in time,
- * with status, parsed body and duration.
- */
+/** Keep-alive connections, as browsers use them: a connection the server cuts shows up as a failure. */
+const agent = new Agent({ keepAlive: true, maxSockets: 32 });
+
+/** One request, bounded in time, with status, parsed body and duration. */
 function call(what: string, path: string, opts: { method?: string; as?: Who; json?: unknown; runId?: number } = {}): Promise<Outcome> {
   const startedAt = Date.now();
   const payload = opts.json === undefined ? undefined : JSON.stringify(opts.json);
@@ -35,7 +35,7 @@ function call(what: string, path: string, opts: { method?: string; as?: Who; jso
   if (payload) Object.assign(headers, { 'content-type': 'application/json', 'content-length': String(Buffer.byteLength(payload)) });
   return new Promise((resolve) => {
     const done = (status: number, body: unknown) => resolve({ what, runId: opts.runId, status, body, startedAt, ms: Date.now() - startedAt });
-    const req = httpRequest({ host: '127.0.0.1', port, path, method: opts.method ?? 'GET', headers, agent: false }, (res) => {
+    const req = httpRequest({ host: '127.0.0.1', port, path, method: opts.method ?? 'GET', headers, agent }, (res) => {
       let text = '';
       res.setEncoding('utf8');
       res.on('data', (c: string) => { text += c; });
@@ -69,6 +69,7 @@ afterAll(async () => {
   await new Promise((r) => (server ? server.close(r) : r(undefined)));
   await t?.close();
   await db?.destroy();
+  agent.destroy();
 });
 
 describe('when MariaDB stops under load and starts again', () => {
@@ -90,7 +91,7 @@ describe('when MariaDB stops under load and starts again', () => {
     maker = await sessionOf(owner.login);
     moderator = await sessionOf((await createUser({ role: 'moderator' })).login);
     const build = await createBuildRow(owner.id, { status: 'published' });
-    partIds = (await Promise.all([0, 1, 2].map(() => createPart()))).map((p) => p.id);
+    partIds = (await Promise.all([0, 1, 2].map(() => createPart()))).map((p) => p.id).sort((a, b) => a - b);
     runIds = [];
     for (let i = 0; i < RUNS; i++) runIds.push((await createRunRow({ buildId: build.id, partId: partIds[i % 3], ownerId: owner.id, gainNmPerV: 60 + i })).id);
 

@@ -70,7 +70,7 @@ describe('journey: parts registry and exchange', () => {
     await page.getByRole('dialog').waitFor({ state: 'hidden' });
     await page.screenshot({ path: `${SCREENSHOTS}/part-page-1280.png`, fullPage: true });
 
-    await page.getByRole('region', { name: 'On the exchange' }).getByRole('link', { name: /by marit-builds/ }).click();
+    await page.getByRole('region', { name: 'On the exchange' }).getByRole('link', { name: '3 from marit-builds' }).click();
     await page.getByRole('heading', { level: 1, name: `3 × ${BAR}` }).waitFor();
     await page.getByText("Your message goes to marit-builds through Scanwright; neither of you sees the other's e-mail address.").waitFor();
     await page.getByLabel('Message').fill(MESSAGE);
@@ -117,6 +117,29 @@ describe('journey: parts registry and exchange', () => {
     expect(errors).toEqual([]);
   });
 
+  test('when marit-builds posts a listing seeking buzzer discs for a price, then its page shows it with the price', async () => {
+    const { page } = browser;
+    await page.goto(`${live.baseUrl}/exchange/new`);
+    await page.getByRole('heading', { level: 1, name: 'New listing' }).waitFor();
+    await page.getByLabel('Find a part').fill('buzzer');
+    await page.getByLabel('Part', { exact: true }).locator('option', { hasText: DISC }).waitFor({ state: 'attached' });
+    await page.getByLabel('Part', { exact: true }).selectOption({ label: `${DISC} (Buzzer disc)` });
+    await page.getByLabel('Seeking: I am looking for parts').check();
+    await page.getByLabel('Quantity').fill('4');
+    await page.getByLabel('For a price').check();
+    await page.getByLabel('Amount').fill('1.50');
+    await page.getByLabel('Currency').fill('eur');
+    await page.getByLabel('Region').fill('Hamburg');
+    await page.getByLabel('Ships to').fill('EU');
+    await page.screenshot({ path: `${SCREENSHOTS}/listing-new-1280.png`, fullPage: true });
+    await page.getByRole('button', { name: 'Post listing' }).click();
+    await page.getByRole('heading', { level: 1, name: `4 × ${DISC}` }).waitFor();
+    expect(await page.getByRole('region', { name: 'Your listing' }).getByRole('button', { name: 'Mark reserved' }).count()).toBe(1);
+    await page.getByText('1.50 EUR').waitFor();
+    await page.screenshot({ path: `${SCREENSHOTS}/listing-own-1280.png`, fullPage: true });
+    expect(errors).toEqual([]);
+  });
+
   test('when the pages are 390 px wide, then nothing scrolls sideways except the registry table inside its region', async () => {
     const { page } = browser;
     await page.setViewportSize({ width: 390, height: 844 });
@@ -133,7 +156,6 @@ describe('journey: parts registry and exchange', () => {
     await page.screenshot({ path: `${SCREENSHOTS}/part-page-390.png`, fullPage: true });
 
     await page.goto(`${live.baseUrl}/exchange`);
-    await page.getByRole('heading', { level: 1, name: 'Exchange' }).waitFor(); await page.getByText(/listings?$/).first().waitFor({ timeout: 5000 }).catch(() => {}); await page.screenshot({ path: `${SCREENSHOTS}/debug-exchange.png`, fullPage: true });
     await page.getByRole('link', { name: new RegExp(STACK) }).waitFor();
     await page.getByLabel('Free only').check();
     await page.waitForURL(/freeOnly=true/);

@@ -35,7 +35,10 @@ describe('journey: a moderator works the review desk', () => {
     await toPublish.update({ submittedAt: new Date(Date.now() - 3 * DAY) });
     await toReturn.update({ submittedAt: new Date(Date.now() - 2 * DAY) });
     for (const gain of [95, 104, 110, 118]) await createRunRow({ buildId: toPublish.id, partId: part.id, ownerId: owner.id, gainNmPerV: gain, status: 'accepted' });
-    await createRunRow({ buildId: toReturn.id, partId: part.id, ownerId: owner.id, gainNmPerV: 240, hysteresis: 0.3 });
+    const pending = await createRunRow({ buildId: toReturn.id, partId: part.id, ownerId: owner.id, gainNmPerV: 240, hysteresis: 0.3 });
+    const reporter = await createUser();
+    const { Report } = await import('../../server/models/report.model.ts');
+    await Report.create({ reporterId: reporter.id, targetType: 'run', targetId: pending.id, reason: 'wrong-data', note: `Looks like µm entered as nm (${tag}).` });
   });
   afterAll(async () => {
     await browser?.close();
@@ -87,6 +90,13 @@ describe('journey: a moderator works the review desk', () => {
     await page.locator('button[aria-current="true"]').press('j');
     await expect.poll(() => rowOf(partName).getAttribute('aria-current')).toBe('true');
     await expect.poll(() => rowOf(partName).evaluate((el) => el === document.activeElement)).toBe(true);
+
+    await page.getByRole('tab', { name: /Reports open/ }).click();
+    await rowOf(`Looks like µm entered as nm \\(${tag}\\)`).click();
+    await panel.getByRole('link', { name: /Calibration run \d+ .*its build/ }).waitFor();
+    await panel.getByRole('button', { name: 'Dismiss' }).click();
+    await panel.getByText('Say what you did.').waitFor();
+    await page.screenshot({ path: `${SCREENSHOTS}/review-desk-report-1280.png`, fullPage: true });
 
     await page.getByRole('link', { name: 'Audit trail' }).click();
     await page.getByRole('heading', { level: 1, name: 'Audit trail' }).waitFor();

@@ -87,20 +87,23 @@ export function sidOf(agent: Agent): string | null {
 export const sessionRows = async (t: TestApp, where: { sid?: string | null; userId?: number }) =>
   where.sid === null ? 0 : t.handle.sequelize.models.Session.count({ where: where as Record<string, unknown> });
 
-/** Send the fixture's request as the acting agent, with its CSRF token unless told otherwise. */
-export function send(route: RouteEntry, target: Target, agent: Agent, opts: { csrf?: string | null; body?: unknown; headers?: Record<string, string> } = {}) {
+/**
+ * Send the fixture's request as the acting agent, with its CSRF token unless told otherwise.
+ * `raw` replaces the body with these exact bytes (set the Content-Type in `headers`).
+ */
+export function send(route: RouteEntry, target: Target, agent: Agent, opts: { csrf?: string | null; raw?: string | Buffer; headers?: Record<string, string> } = {}) {
   const method = route.method.toLowerCase() as 'post' | 'put' | 'patch' | 'delete';
   let req = agent[method](fillPath(route.path, target.params ?? {}));
   const csrf = opts.csrf === undefined ? agent.csrf : opts.csrf;
   if (csrf !== null) req = req.set('X-CSRF-Token', csrf);
   for (const [k, v] of Object.entries(opts.headers ?? {})) req = req.set(k, v);
-  if (target.multipart && opts.body === undefined) {
+  if (opts.raw !== undefined) return req.serialize((b: unknown) => b as string).send(opts.raw as string);
+  if (target.multipart) {
     for (const [name, value] of Object.entries(target.multipart.fields)) req = req.field(name, value);
     for (const [i, file] of target.multipart.files.entries()) req = req.attach('photos', file, { filename: `p${i}.jpg`, contentType: 'image/jpeg' });
     return req;
   }
-  const body = opts.body ?? target.body;
-  return body === undefined ? req : req.send(body as object);
+  return target.body === undefined ? req : req.send(target.body);
 }
 
 const workbench = (schema: z.ZodType, body: Record<string, unknown>, answers: string): Fixture => ({

@@ -28,6 +28,18 @@ function logTicks(lo: number, hi: number): number[] {
   return ticks;
 }
 
+/** A domain widened to round steps (1, 2, 2.5 or 5 × 10ⁿ) and about five ticks on those steps. */
+function linearAxis(lo: number, hi: number): { domain: [number, number]; ticks: number[] } {
+  const raw = (hi - lo) / 5 || Math.abs(hi) / 5 || 1;
+  const power = 10 ** Math.floor(Math.log10(raw));
+  const step = [1, 2, 2.5, 5, 10].map((m) => m * power).find((v) => v >= raw) ?? 10 * power;
+  const from = Math.max(0, Math.floor(lo / step) * step);
+  const to = Math.ceil(hi / step) * step;
+  const ticks: number[] = [];
+  for (let t = from; t <= to + step / 1e6; t += step) ticks.push(Number(t.toPrecision(12)));
+  return { domain: [from, to], ticks };
+}
+
 type Dot = PartRunsChartRun & { y: number };
 
 function RunTooltip({ active, payload }: TooltipContentProps<TooltipValueType, string | number>) {
@@ -59,8 +71,9 @@ export function PartRunsChart({ runs, median, p25, p75, expected, height = 170 }
   const lo = Math.min(...values);
   const hi = Math.max(...values);
   const log = hi / lo > 20;
-  const pad = (hi - lo) * 0.12 || hi * 0.2 || 1;
-  const domain: [number, number] = log ? [lo / 1.5, hi * 1.5] : [Math.max(0, lo - pad), hi + pad];
+  const pad = (hi - lo) * 0.05 || hi * 0.1 || 1;
+  const linear = linearAxis(lo - pad, hi + pad);
+  const domain: [number, number] = log ? [lo / 1.5, hi * 1.5] : linear.domain;
   const dots: Dot[] = runs.map((r, i) => ({ ...r, y: jitter(i) }));
   return (
     <ResponsiveContainer width="100%" height={height}>
@@ -68,7 +81,7 @@ export function PartRunsChart({ runs, median, p25, p75, expected, height = 170 }
         <CartesianGrid stroke={RULE} strokeDasharray="3 3" vertical horizontal={false} />
         <XAxis
           type="number" dataKey="gainNmPerV" name="Gain" scale={log ? 'log' : 'auto'} domain={domain} allowDataOverflow
-          ticks={log ? logTicks(domain[0], domain[1]) : undefined} tick={tick} tickFormatter={fmt}
+          ticks={log ? logTicks(domain[0], domain[1]) : linear.ticks} tick={tick} tickFormatter={fmt}
           label={{ value: `Gain (nm/V)${log ? ', log scale' : ''}`, position: 'bottom', offset: 6, fill: SOFT, fontSize: 12 }}
         />
         <YAxis type="number" dataKey="y" domain={[0, 1]} hide />

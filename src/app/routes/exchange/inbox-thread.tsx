@@ -33,7 +33,7 @@ export function InboxThreadPage() {
     return <LoadError what="this conversation" error={thread.error} onRetry={() => void thread.refetch()} />;
   }
   return (
-    <div>
+    <div className="mx-auto max-w-3xl">
       <nav aria-label="Breadcrumb" className="mb-3 text-sm"><Link to={paths.inbox} className="text-copper-dark underline">Inbox</Link></nav>
       <h1 className="mb-4 border-b border-rule pb-3 text-2xl font-semibold tracking-tight">Conversation with {thread.data.other.login}</h1>
       <ThreadView thread={thread.data} />

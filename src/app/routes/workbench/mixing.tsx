@@ -32,13 +32,13 @@ export function MixingPage() {
               <PairPreset form={form} />
               <GridFitPanel form={form} />
             </fieldset>
-            <FieldGroup legend="Drive limits" note={limitsError ? <span className="font-medium text-danger">{limitsError}</span> : 'What the amplifier may put on each bender.'}>
+            <FieldGroup legend="Drive limits" pairs note={limitsError ? <span className="font-medium text-danger">{limitsError}</span> : 'What the amplifier may put on each bender.'}>
               <FormNumber form={form} name="limits.vaMinV" label="Va minimum" unit="V" />
               <FormNumber form={form} name="limits.vaMaxV" label="Va maximum" unit="V" />
               <FormNumber form={form} name="limits.vbMinV" label="Vb minimum" unit="V" />
               <FormNumber form={form} name="limits.vbMaxV" label="Vb maximum" unit="V" />
             </FieldGroup>
-            <FieldGroup legend="Wanted point">
+            <FieldGroup legend="Wanted point" pairs>
               <FormNumber form={form} name="targetXNm" label="x" unit="nm" optional />
               <FormNumber form={form} name="targetYNm" label="y" unit="nm" optional />
             </FieldGroup>

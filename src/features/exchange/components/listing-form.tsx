@@ -37,7 +37,7 @@ export function ListingForm({ defaults, submitLabel, onSave }: { defaults?: Part
           {LISTING_KINDS.map((k) => (
             <label key={k} className="inline-flex items-center gap-2 text-sm">
               <input type="radio" value={k} className="h-4 w-4 accent-copper" {...register('kind')} />
-              {k === 'offering' ? 'Offering: I have spares' : 'Seeking: I need one'}
+              {k === 'offering' ? 'Offering: I have spares' : 'Seeking: I am looking for parts'}
             </label>
           ))}
         </div>

@@ -29,7 +29,7 @@ function ReplyBox({ thread }: { thread: ThreadDto }) {
 /** One conversation about a listing: the messages in order, mine on the right, and a reply box. */
 export function ThreadView({ thread }: { thread: ThreadDto }) {
   return (
-    <div className="mx-auto max-w-3xl space-y-4">
+    <div className="space-y-4">
       <p className="text-sm text-ink-soft">
         About <Link to={paths.listing(thread.listing.id)} className="text-copper-dark underline">{kindLabels[thread.listing.kind].toLowerCase()}: {thread.listing.partName}</Link>
         {thread.role === 'owner' ? ' (your listing)' : ` (${thread.other.login}'s listing)`}

@@ -33,9 +33,9 @@ export function GainRangeField({ histogram, minText, maxText, onChange, onCommit
     <fieldset className="min-w-0 sm:col-span-2">
       <legend className={labelClass}>Median gain (nm/V)</legend>
       <div className="rounded-md border border-rule bg-paper px-3 pt-2 pb-1">
-        {histogram ? <GainHistogram histogram={histogram} scale={scale} min={min} max={max} /> : <div className="h-16" aria-hidden="true" />}
+        <div className="mx-2.5">{histogram ? <GainHistogram histogram={histogram} scale={scale} min={min} max={max} /> : <div className="h-16" aria-hidden="true" />}</div>
         <div className="relative h-6">
-          <div aria-hidden="true" className="absolute inset-x-0 top-[11px] h-0.5 rounded bg-rule" />
+          <div aria-hidden="true" className="absolute inset-x-2.5 top-[11px] h-0.5 rounded bg-rule" />
           <input
             type="range" min={0} max={scale.steps} value={minPos} className={`${thumb} ${minPos === maxPos && minPos > scale.steps / 2 ? 'z-10' : ''}`}
             aria-label="Lower end of the gain range"
@@ -51,7 +51,7 @@ export function GainRangeField({ histogram, minText, maxText, onChange, onCommit
             {...release}
           />
         </div>
-        <div aria-hidden="true" className="relative h-4 text-[11px] text-ink-soft">
+        <div aria-hidden="true" className="relative mx-2.5 h-4 text-[11px] text-ink-soft">
           {scale.decades.map((d, i) => (
             <span key={d} className={`num absolute ${i === 0 ? '' : i === scale.decades.length - 1 ? '-translate-x-full' : '-translate-x-1/2'}`} style={{ left: `${scale.fraction(d) * 100}%` }}>
               {formatSig(d)}

@@ -52,7 +52,7 @@ export function PartFilters({ search }: { search: PartSearch }) {
     <form
       role="search"
       aria-label="Search the parts registry"
-      className="mb-5 grid gap-4 rounded-lg border border-rule bg-white p-3 sm:grid-cols-2 lg:grid-cols-4"
+      className="mb-5 grid gap-x-6 gap-y-4 rounded-lg border border-rule bg-white p-3 sm:grid-cols-2 sm:p-4 lg:grid-cols-4"
       onSubmit={(e) => { e.preventDefault(); apply(); }}
     >
       <div className="sm:col-span-2">
@@ -73,7 +73,7 @@ export function PartFilters({ search }: { search: PartSearch }) {
         onChange={(gainMin, gainMax) => setDraft({ ...draft, gainMin, gainMax })}
         onCommit={() => apply()}
       />
-      <div className="flex flex-col gap-4 sm:col-span-2 lg:col-span-1">
+      <div className="grid content-start gap-4 sm:col-span-2 sm:grid-cols-2">
         <div>
           <label htmlFor="part-min-runs" className={labelClass}>At least this many accepted runs</label>
           <input id="part-min-runs" type="number" inputMode="numeric" min={0} step={1} value={draft.minRuns} placeholder="any" className={`${fieldClass} num`} onChange={(e) => setDraft({ ...draft, minRuns: e.target.value })} />
@@ -82,10 +82,14 @@ export function PartFilters({ search }: { search: PartSearch }) {
           <label htmlFor="part-max-volts" className={labelClass}>Safe voltage at most (V)</label>
           <input id="part-max-volts" type="number" inputMode="decimal" min={0} step="any" value={draft.maxVolts} placeholder="any" className={`${fieldClass} num`} onChange={(e) => setDraft({ ...draft, maxVolts: e.target.value })} />
         </div>
-      </div>
-      <div className="flex items-end gap-3 sm:col-span-2 lg:col-span-1">
-        <Button type="submit">Apply filters</Button>
-        {search.filtered && <Link to={search.clearHref} className="py-1.5 text-sm text-copper-dark underline">Clear filters</Link>}
+        <p className="text-xs text-ink-soft sm:col-span-2">
+          A part matches a gain range when its median over accepted runs lies inside it; parts without accepted runs drop out.
+          The bars show how many listed parts have their median in each band; drag the copper handles or type the numbers.
+        </p>
+        <div className="flex items-center gap-3 sm:col-span-2">
+          <Button type="submit">Apply filters</Button>
+          {search.filtered && <Link to={search.clearHref} className="text-sm text-copper-dark underline">Clear filters</Link>}
+        </div>
       </div>
     </form>
   );

@@ -19,7 +19,7 @@ export function PartListings({ partId, listings, signedIn }: { partId: number; l
             <li key={l.id} className="flex flex-wrap items-baseline gap-x-3 gap-y-1 px-3 py-2 text-sm">
               <span className={`rounded px-1.5 py-0.5 text-xs font-semibold ${l.kind === 'offering' ? 'bg-teal text-white' : 'bg-amber/20 text-ink'}`}>{l.kind === 'offering' ? 'Offering' : 'Seeking'}</span>
               <Link to={paths.listing(l.id)} className="font-medium text-copper-dark underline decoration-copper/40 underline-offset-2">
-                <span className="num">{l.quantity}</span> × by {l.owner}
+                {l.kind === 'offering' ? <><span className="num">{l.quantity}</span> from {l.owner}</> : <>{l.owner} wants <span className="num">{l.quantity}</span></>}
               </Link>
               <span className="text-ink-soft">{listingConditionLabels[l.condition as ListingCondition] ?? l.condition}</span>
               <span className="num">{l.priceLabel}</span>

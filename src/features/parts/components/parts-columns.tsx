@@ -41,7 +41,7 @@ export const partColumns = [
     header: 'Part',
     sortDescFirst: false,
     cell: (c) => (
-      <div className="min-w-48">
+      <div className="w-40 sm:w-auto sm:min-w-48">
         <Link to={paths.part(c.row.original.id)} className="font-medium text-copper-dark underline decoration-copper/40 underline-offset-2 hover:decoration-copper">{c.getValue()}</Link>
         {c.row.original.salvageSource && <p className="mt-0.5 line-clamp-1 text-xs text-ink-soft">from {c.row.original.salvageSource}</p>}
       </div>

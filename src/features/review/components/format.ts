@@ -42,3 +42,9 @@ export const halfWidth = ([lo, hi]: [number, number]) => (hi - lo) / 2;
 
 /** "4 photos", "1 entry": a count with its noun. */
 export const count = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
+
+/** First letter upper case ("calibration run 18" → "Calibration run 18"). */
+export const sentenceCase = (s: string) => (s ? s[0].toUpperCase() + s.slice(1) : s);
+
+/** Report and audit target types in words. */
+export const targetTypeWords: Record<string, string> = { build: 'build', run: 'calibration run', part: 'part', listing: 'listing', report: 'report', user: 'account' };

@@ -80,12 +80,12 @@ export function FormSelect<T extends FieldValues, O>({ form, name, ...rest }: Ch
   return <SelectInput registration={form.register(name)} error={errorOf(form, name)} {...rest} />;
 }
 
-/** A titled group of fields; two columns from small screens up. */
-export function FieldGroup({ legend, children, note }: { legend: string; children: ReactNode; note?: ReactNode }) {
+/** A titled group of fields; two columns from small screens up, or always for short `pairs` (min/max, x/y). */
+export function FieldGroup({ legend, children, note, pairs }: { legend: string; children: ReactNode; note?: ReactNode; pairs?: boolean }) {
   return (
     <fieldset className="rounded-lg border border-rule bg-white p-4">
       <legend className="px-1 text-sm font-semibold">{legend}</legend>
-      <div className="grid gap-3 sm:grid-cols-2">{children}</div>
+      <div className={`grid gap-3 ${pairs ? 'grid-cols-2' : 'sm:grid-cols-2'}`}>{children}</div>
       {note && <div className="mt-3 text-xs text-ink-soft">{note}</div>}
     </fieldset>
   );

@@ -31,7 +31,7 @@ export function MixingResults({ r }: { r: MixingResult }) {
             </span>
           </Headline>
         ) : (
-          <Headline label="Wanted point">Enter x and y to get the drive voltages.</Headline>
+          <p className="text-sm text-ink-soft">Enter a wanted x and y to get the drive voltages for it.</p>
         )
       }
       basis="r = G·[Va, Vb]ᵀ and [Va, Vb]ᵀ = G⁻¹·r; the reachable region is the drive-limit rectangle mapped through G [practice; small-angle, linear]."

@@ -3,7 +3,7 @@ import { reportReasonLabels, type QueueBuildDto, type QueueRunDto } from '@share
 import { instrumentKindLabels, type InstrumentKind } from '@shared/schemas/build.ts';
 import { partCategoryLabels, type PartCategory } from '@shared/schemas/part.ts';
 import { FlagChips } from '../flag-chips.tsx';
-import { age, count, halfWidth, sig, withUncertainty } from '../format.ts';
+import { age, count, halfWidth, sentenceCase, sig, targetTypeWords, withUncertainty } from '../format.ts';
 import type { QueueEntry } from './queue-model.ts';
 
 const kindLabel = (k: string) => instrumentKindLabels[k as InstrumentKind] ?? k;
@@ -55,7 +55,7 @@ function RowBody({ entry }: { entry: QueueEntry }) {
     case 'reports': {
       const r = entry.item;
       return (
-        <Line title={r.targetLabel} meta={<>Report on a {r.targetType} · by {r.reporter.login} · {age(r.createdAt)} waiting</>}>
+        <Line title={sentenceCase(r.targetLabel)} meta={<>Report on a {targetTypeWords[r.targetType]} · by {r.reporter.login} · {age(r.createdAt)} waiting</>}>
           <span className="font-medium">{reportReasonLabels[r.reason]}</span>
           {r.note && <span className="text-ink-soft">: {r.note.length > 90 ? `${r.note.slice(0, 90)}…` : r.note}</span>}
         </Line>

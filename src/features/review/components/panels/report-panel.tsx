@@ -1,20 +1,18 @@
 import { reportDecisionInput, reportReasonLabels, type QueueReportDto } from '@shared/schemas/review.ts';
 import { useDecideReport } from '@/features/review/api/decide-report.ts';
 import { DecisionForm } from '../decision/decision-form.tsx';
-import { age, formatDate } from '../format.ts';
+import { age, formatDate, sentenceCase, targetTypeWords } from '../format.ts';
 import { reportChoices } from './decision-choices.ts';
 import { Facts, PanelFrame } from './panel-frame.tsx';
 import { TargetLink } from '../target-link.tsx';
-
-const targetWords: Record<QueueReportDto['targetType'], string> = { build: 'Build', run: 'Calibration run', part: 'Part', listing: 'Listing' };
 
 /** An open report: what it is about, why, and the reporter's note; then resolve / dismiss with what was done. */
 export function ReportPanel({ report, onDecided }: { report: QueueReportDto; onDecided: (decision: string) => void }) {
   const decide = useDecideReport();
   return (
     <PanelFrame
-      eyebrow={`Report on a ${targetWords[report.targetType].toLowerCase()}`}
-      title={report.targetLabel}
+      eyebrow={`Report on a ${targetTypeWords[report.targetType]}`}
+      title={sentenceCase(report.targetLabel)}
       meta={<>reported by {report.reporter.login} · {formatDate(report.createdAt)} · {age(report.createdAt)} waiting</>}
       decision={
         <DecisionForm
@@ -29,7 +27,7 @@ export function ReportPanel({ report, onDecided }: { report: QueueReportDto; onD
     >
       <Facts
         items={[
-          ['Reported', <TargetLink key="t" type={report.targetType} id={report.targetId}>{targetWords[report.targetType]}: {report.targetLabel}</TargetLink>],
+          ['Reported', <TargetLink key="t" type={report.targetType} id={report.targetId}>{sentenceCase(report.targetLabel)}{report.targetType === 'run' ? ' (its build)' : ''}</TargetLink>],
           ['Reason', reportReasonLabels[report.reason]],
           ['Note', report.note ? <span className="whitespace-pre-line">{report.note}</span> : <span className="text-ink-soft">No note.</span>],
         ]}

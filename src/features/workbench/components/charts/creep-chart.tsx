@@ -17,7 +17,7 @@ export function CreepChart({ samples, curve }: { samples: readonly CreepPoint[];
   const ticks = decadeTicks(Math.min(...times), Math.max(...times));
   return (
     <ResponsiveContainer width="100%" height={280}>
-      <ScatterChart margin={{ top: 4, right: 16, bottom: 24, left: 8 }}>
+      <ScatterChart margin={{ top: 4, right: 24, bottom: 24, left: 8 }}>
         <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
         <XAxis type="number" dataKey="timeS" scale="log" domain={[ticks[0], ticks[ticks.length - 1]]} ticks={ticks} tick={tickStyle} tickFormatter={formatTick} label={{ value: 'Time since the step (s)', position: 'insideBottom', offset: -14, style: axisLabelStyle }} />
         <YAxis type="number" dataKey="displacementNm" domain={['auto', 'auto']} width={72} tick={tickStyle} tickFormatter={formatTick} label={{ value: 'Displacement (nm)', angle: -90, position: 'insideLeft', offset: 4, style: { ...axisLabelStyle, textAnchor: 'middle' } }} />

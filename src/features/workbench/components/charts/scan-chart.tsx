@@ -16,7 +16,7 @@ export function ScanChart({ steps, bits, wantedStepNm, pixelNm }: { steps: reado
   const ticks = decadeTicks(Math.min(...ys), Math.max(...ys));
   return (
     <ResponsiveContainer width="100%" height={280}>
-      <LineChart data={[...steps]} margin={{ top: 4, right: 16, bottom: 24, left: 8 }}>
+      <LineChart data={[...steps]} margin={{ top: 4, right: 24, bottom: 24, left: 8 }}>
         <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
         <XAxis type="number" dataKey="bits" domain={['dataMin', 'dataMax']} allowDecimals={false} tick={tickStyle} label={{ value: 'DAC bits', position: 'insideBottom', offset: -14, style: axisLabelStyle }} />
         <YAxis type="number" scale="log" domain={[ticks[0], ticks[ticks.length - 1]]} ticks={ticks} allowDataOverflow width={72} tick={tickStyle} tickFormatter={formatTick} label={{ value: 'Step (nm)', angle: -90, position: 'insideLeft', offset: 4, style: { ...axisLabelStyle, textAnchor: 'middle' } }} />
