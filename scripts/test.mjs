@@ -50,6 +50,8 @@ try {
     TZ: 'UTC',
     DB_HOST: '127.0.0.1', DB_PORT: String(port), DB_NAME: db.database, DB_USER: db.user, DB_PASSWORD: db.password,
     MARIADB_SOCKET: join(dir, 'mysqld.sock'),
+    // Live-app browser tests share one uploads folder (demo pictures seeded once); removed with the run.
+    TEST_UPLOADS_DIR: join(dir, 'uploads'),
     SESSION_SECRET: 'test-session-secret-test-session-secret',
   };
   const migrate = spawnSync(process.execPath, ['--import', 'tsx', 'server/cli/migrate.ts'], { stdio: 'inherit', env });

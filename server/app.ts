@@ -68,7 +68,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   // database failure there reaches the final handler, which cuts that finished response off.
   // An expiry not extended once is harmless, so the failure is logged and dropped.
   const touch = store.touch.bind(store);
-  if (process.env.NO_TOUCH_FIX !== '1') store.touch = (sid, data, done) => touch(sid, data, (err?: unknown) => {
+  store.touch = (sid, data, done) => touch(sid, data, (err?: unknown) => {
     if (err) log.warn({ err }, 'session touch failed');
     done?.();
   });

@@ -4,11 +4,13 @@ import { createSequelize } from '../db/sequelize.ts';
 import { createMigrator } from '../db/migrator.ts';
 import { initModels } from '../models/index.ts';
 import { seedDemoOnce } from '../db/seed/demo.ts';
+import { demoPictureAttacher } from '../db/seed/demo-pictures.ts';
 
-const sequelize = createSequelize(loadConfig().db);
+const config = loadConfig();
+const sequelize = createSequelize(config.db);
 const applied = await createMigrator(sequelize).up();
 if (applied.length) process.stdout.write(`Applied ${applied.length} migration(s).\n`);
 initModels(sequelize);
-const seeded = await seedDemoOnce(sequelize);
+const seeded = await seedDemoOnce(sequelize, demoPictureAttacher(config.uploadsDir));
 if (seeded) process.stdout.write('Seeded the demo scenario (first run).\n');
 await sequelize.close();

@@ -12,7 +12,7 @@ export function sessionRoutes(): Router {
     const dto: SessionDto = { user: user ? presentSessionUser(user) : null, csrfToken: csrfTokenFor(req) };
     // Store a new token before handing it out: express-session would save only after the response
     // is on the wire, where a database failure can no longer become a 503.
-    if (fresh && process.env.NO_SAVE_FIX !== '1') await new Promise<void>((resolve, reject) => req.session.save((err) => (err ? reject(err) : resolve())));
+    if (fresh) await new Promise<void>((resolve, reject) => req.session.save((err) => (err ? reject(err) : resolve())));
     res.set('Cache-Control', 'no-store').json(dto);
   });
   return r;

@@ -15,10 +15,9 @@ import { listListingsQuery } from '@shared/schemas/listing.ts';
 import { listUsersQuery } from '@shared/schemas/user.ts';
 import { auditQuery } from '@shared/schemas/review.ts';
 import { startTestApp } from '../support/test-app.ts';
-import { signIn, visitor, type Agent } from '../support/login.ts';
-import { createUser } from '../support/factories.ts';
+import { visitor } from '../support/login.ts';
 import { listRoutes, stateChangingRoutes, type RouteEntry } from '../support/route-table.ts';
-import { fixtures, send, type Acting, type Fixture, type Target } from '../support/matrix-fixtures.ts';
+import { actorPool, armed, fixtures, send } from '../support/matrix-fixtures.ts';
 
 const uploadsDir = mkdtempSync(join(tmpdir(), 'scanwright-hostile-'));
 const t = await startTestApp({ uploadsDir });
@@ -35,28 +34,11 @@ const expectCleanPrototype = () => {
 };
 const errorShape = { error: { code: expect.stringMatching(/^[a-z_]+$/), message: expect.any(String) } };
 
-const signedIn = async (role: 'maker' | 'moderator' | 'admin'): Promise<Acting> => {
-  const user = await createUser({ role });
-  return { user, agent: await signIn(t, user.login) };
+const pool = actorPool(t);
+const armedFor = async (route: RouteEntry) => {
+  const { fixture, target, actor } = await armed(t, pool, route);
+  return { fixture, target, agent: actor.agent };
 };
-const once = <T,>(make: () => Promise<T>) => {
-  let made: Promise<T> | undefined;
-  return () => (made ??= make());
-};
-const actors = { owner: once(() => signedIn('maker')), other: once(() => signedIn('maker')), moderator: once(() => signedIn('moderator')), admin: once(() => signedIn('admin')) };
-
-/** The fixture's rows, made for the one actor allowed to act, so a body that got through would change them. */
-async function armed(route: RouteEntry): Promise<{ fixture: Fixture; target: Target; agent: Agent }> {
-  const fixture = fixtures[route.key]!;
-  if (fixture.endsSession || fixture.changesOwner) {
-    const fresh = await signedIn('maker');
-    const actor = fixture.allowed === 'owner' ? fresh : await actors[fixture.allowed]();
-    return { fixture, agent: actor.agent, target: await fixture.make({ t, owner: fresh.user!, actor }) };
-  }
-  const owner = await actors.owner();
-  const actor = await actors[fixture.allowed]();
-  return { fixture, agent: actor.agent, target: await fixture.make({ t, owner: owner.user!, actor }) };
-}
 
 const cached = <T,>(make: (n: number) => T) => {
   const made = new Map<number, T>();
@@ -158,10 +140,10 @@ const bodyRoutes = stateRoutes.filter((r) => fixtures[r.key]?.schema);
 
 describe('the route table', () => {
   test('when the app is walked, then every state-changing route has a fixture, every JSON body a schema, and every query-validating GET route a schema here', async () => {
-    const admin = await actors.admin();
+    const admin = await pool.shared('admin');
     expect(stateRoutes.filter((r) => !fixtures[r.key]).map((r) => r.key)).toEqual([]);
     for (const r of stateRoutes) {
-      const { fixture, target } = await armed(r);
+      const { fixture, target } = await armedFor(r);
       expect(fixture.schema !== undefined, `${r.key}: a JSON body needs its schema`).toBe(target.body !== undefined);
     }
     for (const r of queryRoutes()) {
@@ -174,7 +156,7 @@ describe('the route table', () => {
 
 describe.concurrent.each(bodyRoutes)('$key with a hostile JSON body', (route) => {
   test('when fields are retyped, dropped, added (incl. __proto__), huge or deeply nested, then a refusal is 4xx in the error shape and changes nothing', async () => {
-    const { fixture, target, agent } = await armed(route);
+    const { fixture, target, agent } = await armedFor(route);
     const examples: [string][] = [
       [apply(target.body, [{ kind: 'add', path: [], key: '__proto__', value: own([['polluted', 'yes']]) }])],
       [apply(target.body, [{ kind: 'add', path: [], key: 'constructor', value: pollution() }])],
@@ -201,7 +183,7 @@ describe.concurrent.each(bodyRoutes)('$key with a hostile JSON body', (route) =>
 
 describe('hostile JSON from a visitor', () => {
   test.concurrent.each(bodyRoutes.filter((r) => !r.key.startsWith('POST /api/workbench/')))('when a visitor sends a malformed-by-schema body to $key, then 401 like a valid one, never a validation answer', async (route) => {
-    const { target } = await armed(route);
+    const { target } = await armedFor(route);
     const guest = await visitor(t);
     await fc.assert(
       fc.asyncProperty(mutations(target.body).map((m) => apply(target.body, m)), async (text) => {
@@ -217,7 +199,7 @@ describe('hostile JSON from a visitor', () => {
 
 describe.concurrent.each(stateRoutes)('$key with a body the parser must refuse', (route) => {
   test('when it is malformed, not UTF-8, in an unknown charset or encoding, or over the limit (plain or gzipped), then 4xx in the error shape and nothing changes', async () => {
-    const { target, agent } = await armed(route);
+    const { target, agent } = await armedFor(route);
     const before = await target.state();
     const json = { 'Content-Type': 'application/json' };
     const cases: Array<[string, string | Buffer, Record<string, string>, number, string]> = [
@@ -265,7 +247,7 @@ function queryString(keys: string[]) {
 describe('query strings', () => {
   test.concurrent.each(Object.keys(querySchemas))('when %s gets repeated keys, arrays, NaN, Infinity, 1e309 or pollution keys, then invalid ones are 400 in the error shape and valid ones 200', async (key) => {
     const schema = querySchemas[key]!;
-    const { agent } = await actors.admin();
+    const { agent } = await pool.shared('admin');
     const path = key.slice(4);
     const examples: [string][] = [['page=1&page=2'], ['page[]=1'], ['pageSize=NaN'], ['page=Infinity'], ['page=1e309'], ['__proto__[polluted]=yes'], ['constructor=x&prototype=y']];
     await fc.assert(
@@ -281,7 +263,7 @@ describe('query strings', () => {
   });
 
   test('when any other GET route gets hostile query strings, then it never answers 5xx', async () => {
-    const { agent } = await actors.admin();
+    const { agent } = await pool.shared('admin');
     const others = queryRoutes().filter((r) => !(r.key in querySchemas));
     expect(others.length).toBeGreaterThan(0);
     await fc.assert(

@@ -65,9 +65,15 @@ describe('journey: parts registry and exchange', () => {
     expect(await page.getByRole('alert').filter({ hasText: 'High voltage: this part is rated up to 60 V' }).count()).toBe(1);
     expect(await page.getByRole('button', { name: 'Report' }).count()).toBe(1);
     await page.getByRole('button', { name: 'Report' }).click();
-    await page.getByRole('dialog', { name: 'Report this part' }).getByLabel('Reason').waitFor();
+    const dialog = page.getByRole('dialog', { name: 'Report this part' });
+    await dialog.getByRole('button', { name: 'Send report' }).click();
+    await dialog.getByText('Pick a reason.').waitFor();
+    await dialog.getByLabel('Reason').selectOption('duplicate');
+    await dialog.getByLabel(/^Note/).fill('Same bar as the one listed from Dual cartridges, I think.');
+    await dialog.getByRole('button', { name: 'Send report' }).click();
+    await dialog.getByRole('status').filter({ hasText: 'your report is with the moderators' }).waitFor();
     await page.keyboard.press('Escape');
-    await page.getByRole('dialog').waitFor({ state: 'hidden' });
+    await dialog.waitFor({ state: 'hidden' });
     await page.screenshot({ path: `${SCREENSHOTS}/part-page-1280.png`, fullPage: true });
 
     await page.getByRole('region', { name: 'On the exchange' }).getByRole('link', { name: '3 from marit-builds' }).click();

@@ -6,6 +6,7 @@ import type { Server } from 'node:http';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { startTestApp, type TestApp } from './test-app.ts';
 import { seedDemoOnce } from '../../server/db/seed/demo.ts';
+import { demoPictureAttacher } from '../../server/db/seed/demo-pictures.ts';
 
 const freePort = () => new Promise<number>((resolve) => {
   const s = createServer();
@@ -22,8 +23,10 @@ export interface LiveApp {
 export async function startLiveApp(): Promise<LiveApp> {
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
-  const t = await startTestApp({ publicUrl: baseUrl, port });
-  await seedDemoOnce(t.handle.sequelize);
+  const uploadsDir = process.env.TEST_UPLOADS_DIR ?? mkdtempSync(join(tmpdir(), 'scanwright-live-uploads-'));
+  mkdirSync(uploadsDir, { recursive: true });
+  const t = await startTestApp({ publicUrl: baseUrl, port, uploadsDir });
+  await seedDemoOnce(t.handle.sequelize, demoPictureAttacher(uploadsDir));
   const server: Server = await new Promise((resolve) => { const s = t.app.listen(port, '127.0.0.1', () => resolve(s)); });
   return {
     t,

@@ -19,6 +19,7 @@ import type { Agent } from './login.ts';
 import { fillPath, type RouteEntry } from './route-table.ts';
 import { createBuildRow, createPart, createRunRow, createUser } from './factories.ts';
 import { jpeg } from './images.ts';
+import { signIn } from './login.ts';
 import { User } from '../../server/models/user.model.ts';
 import { Build } from '../../server/models/build.model.ts';
 import { LogEntry } from '../../server/models/log-entry.model.ts';
@@ -76,12 +77,52 @@ async function photoRow(buildId: number, ownerId: number, position: number) {
   return Photo.create({ buildId, ownerId, contentHash: hash, displayFile: `${hash}.webp`, thumbFile: `${hash}-t.webp`, width: 40, height: 30, alt: 'A photo', position });
 }
 
+/** The agent's session cookie as a Cookie header value (null when it has none). */
+export function sessionCookie(agent: Agent): string | null {
+  const cookie = (agent as unknown as { jar: { getCookie(name: string, access: unknown): { value: string } | undefined } }).jar.getCookie('scanwright.sid', CookieAccessInfo.All);
+  return cookie ? `scanwright.sid=${cookie.value}` : null;
+}
+
 /** The session id behind an agent's cookie (null when it has none). */
 export function sidOf(agent: Agent): string | null {
-  const cookie = (agent as unknown as { jar: { getCookie(name: string, access: unknown): { value: string } | undefined } }).jar.getCookie('scanwright.sid', CookieAccessInfo.All);
+  const cookie = sessionCookie(agent);
   if (!cookie) return null;
-  const signed = decodeURIComponent(cookie.value).slice(2);
+  const signed = decodeURIComponent(cookie.slice('scanwright.sid='.length)).slice(2);
   return signed.slice(0, signed.lastIndexOf('.'));
+}
+
+type Role = 'maker' | 'moderator' | 'admin';
+export interface ActorPool {
+  /** A new user of this role, signed in for real. */
+  fresh(role: Role): Promise<Acting>;
+  /** One signed-in user per kind, shared by every test of a file (signing in is the slow part). */
+  shared(kind: 'owner' | 'other' | 'moderator' | 'admin'): Promise<Acting>;
+}
+export function actorPool(t: TestApp): ActorPool {
+  const made = new Map<string, Promise<Acting>>();
+  const fresh = async (role: Role) => {
+    const user = await createUser({ role });
+    return { user, agent: await signIn(t, user.login) };
+  };
+  return {
+    fresh,
+    shared: (kind) => {
+      if (!made.has(kind)) made.set(kind, fresh(kind === 'owner' || kind === 'other' ? 'maker' : kind));
+      return made.get(kind)!;
+    },
+  };
+}
+
+/**
+ * The route's rows, made for the one actor allowed to act, so that a request which got through
+ * would change them. Routes that end the session or change the owner's account get fresh users.
+ */
+export async function armed(t: TestApp, pool: ActorPool, route: RouteEntry): Promise<{ fixture: Fixture; target: Target; actor: Acting }> {
+  const fixture = fixtures[route.key];
+  if (!fixture) throw new Error(`no fixture for ${route.key}`);
+  const owner = fixture.endsSession || fixture.changesOwner ? await pool.fresh('maker') : await pool.shared('owner');
+  const actor = fixture.allowed === 'owner' ? owner : await pool.shared(fixture.allowed);
+  return { fixture, actor, target: await fixture.make({ t, owner: owner.user!, actor }) };
 }
 
 export const sessionRows = async (t: TestApp, where: { sid?: string | null; userId?: number }) =>

@@ -1,4 +1,7 @@
 import type { Express } from 'express';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { loadConfig, type Config } from '../../server/config.ts';
 import { createApp, type AppHandle } from '../../server/app.ts';
 import { createLogger } from '../../server/logger.ts';
@@ -25,12 +28,14 @@ export interface TestApp {
 export async function startTestApp(overrides: Partial<Config> = {}): Promise<TestApp> {
   const oauth = await startOAuthStandIn(0);
   const mail = await startSmtpCatcher(0, null);
+  const ownUploads = overrides.uploadsDir ? null : mkdtempSync(join(tmpdir(), 'scanwright-uploads-'));
   const base = loadConfig({ ...process.env, NODE_ENV: 'test', RATE_LIMITS: 'false' });
   const config: Config = {
     ...base,
     publicUrl: 'http://127.0.0.1:3999',
     github: { ...base.github, baseUrl: oauth.url, apiUrl: oauth.url, standIn: true },
     smtpUrl: mail.smtpUrl,
+    uploadsDir: ownUploads ?? base.uploadsDir,
     ...overrides,
   };
   const log = createLogger(config.logLevel);
@@ -46,6 +51,7 @@ export async function startTestApp(overrides: Partial<Config> = {}): Promise<Tes
       await handle.close();
       await oauth.close();
       await mail.close();
+      if (ownUploads) rmSync(ownUploads, { recursive: true, force: true });
     },
   };
 }

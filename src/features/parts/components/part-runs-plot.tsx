@@ -22,7 +22,7 @@ export function PartRunsPlot({ part }: { part: PartDetailDto }) {
           <p className="mt-1 text-sm text-ink-soft">
             <span className="num">{runs.length}</span> run{runs.length === 1 ? '' : 's'}, median <span className="num text-ink">{formatSig(s.gainMedianNmPerV)} nm/V</span>
             {e && <>; expected from geometry <span className="num text-ink">{formatSig(e.gainNmPerV)} nm/V</span> (<span className="num">{formatSig(e.lowNmPerV)}–{formatSig(e.highNmPerV)}</span>)</>}.
-            {' '}Point at a dot for its build, maker and method.
+            {' '}Point at or tap a dot for its build, maker and method.
           </p>
           <div className="mt-2" data-testid="part-runs-plot">
             <Suspense fallback={<p role="status" className="flex h-[170px] items-center justify-center text-sm text-ink-soft">Loading the plot…</p>}>

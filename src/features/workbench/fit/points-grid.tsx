@@ -11,6 +11,7 @@ export function PointsGrid({ form, voltsUnit, lengthUnit, problems }: { form: Fi
   const bad = new Set(problems.map((p) => p.line));
   return (
     <div>
+      <p className="mb-2 text-xs text-ink-soft">The grid opens with an illustrative run (made-up numbers); clear it and type your readings.</p>
       <div className="overflow-x-auto">
         <table className="w-full min-w-[20rem] text-left text-sm">
           <caption className="sr-only">Calibration points</caption>
