@@ -24,14 +24,15 @@ if (!fileArg) {
 
 const file = resolve(fileArg);
 if (!existsSync(file) || !statSync(file).isFile()) fail(`No such backup file: ${file}`);
-// A dump from mariadb-dump starts with its banner and, when complete, ends with "-- Dump completed".
-const head = Buffer.alloc(200);
+// A dump from mariadb-dump opens with its banner (after the sandbox-mode line of newer versions)
+// and, when complete, ends with "-- Dump completed".
+const head = Buffer.alloc(300);
 const tail = Buffer.alloc(200);
 const fd = openSync(file, 'r');
 readSync(fd, head, 0, head.length, 0);
 readSync(fd, tail, 0, tail.length, Math.max(0, statSync(file).size - tail.length));
 closeSync(fd);
-if (!/^-- (MariaDB|MySQL) dump/.test(head.toString('utf8'))) fail(`${file} does not look like a mariadb-dump file; nothing was changed.`);
+if (!/^(\/\*M!999999\\- enable the sandbox mode \*\/ *\n)?-- (MariaDB|MySQL) dump/.test(head.toString('utf8'))) fail(`${file} does not look like a mariadb-dump file; nothing was changed.`);
 if (!tail.toString('utf8').includes('-- Dump completed')) fail(`${file} is incomplete (no "-- Dump completed" at the end); nothing was changed.`);
 
 const exists = requireRunningServer(target);

@@ -181,6 +181,41 @@ describe.concurrent.each(bodyRoutes)('$key with a hostile JSON body', (route) =>
   });
 });
 
+describe('workbench calculations at the edge of double precision', () => {
+  const workbenchRoutes = bodyRoutes.filter((r) => r.key.startsWith('POST /api/workbench/'));
+  const extreme = fc.constantFrom(1e308, -1e308, 1.7976931348623157e308, 5e-324, -5e-324, 1e-300, 1e300, 2 ** 53 + 1);
+  /** Paths of the plain numbers in an answer (array items aside, their count may vary). */
+  const numberPaths = (v: unknown, at: string[] = []): string[][] =>
+    typeof v === 'number' ? [at] : v && typeof v === 'object' && !Array.isArray(v) ? Object.entries(v).flatMap(([k, x]) => numberPaths(x, [...at, k])) : [];
+  const at = (v: unknown, path: string[]) => path.reduce<unknown>((node, k) => (node as Record<string, unknown> | null)?.[k], v);
+
+  test.concurrent.each(workbenchRoutes)('when $key gets finite but extreme numbers, then it answers 400, or 200 with every number still a number (never null from NaN or Infinity)', async (route) => {
+    const { target, agent } = await armedFor(route);
+    const baseline = await send(route, target, agent);
+    expect(baseline.status).toBe(200);
+    const numeric = pathsOf(target.body).filter((p) => typeof at(target.body, p.map(String)) === 'number');
+    await fc.assert(
+      fc.asyncProperty(fc.array(fc.tuple(fc.constantFrom(...numeric), extreme), { minLength: 1, maxLength: 4 }), async (changes) => {
+        const text = apply(target.body, changes.map(([path, value]) => ({ kind: 'replace' as const, path, value })));
+        const res = await send(route, target, agent, { raw: text, headers: { 'Content-Type': 'application/json' } });
+        expect(res.status, `${text}: ${res.text.slice(0, 300)}`).toBeLessThan(500);
+        if (res.status >= 400) return void expect(res.body).toMatchObject(errorShape);
+        for (const path of numberPaths(baseline.body)) expect(at(res.body, path), `${path.join('.')} for ${text}`).not.toBeNull();
+      }),
+      { numRuns: RUNS },
+    );
+  });
+
+  test('when 20 000 points are all wrong, then the 400 lists only the first issues instead of echoing 60 000 of them', async () => {
+    const points = Array.from({ length: 20_000 }, () => ({ volts: 'x', displacement: 'y', extra: 1 }));
+    const res = await (await pool.shared('owner')).agent.post('/api/workbench/fit').send({ points, displacementUnit: 'nm' });
+    expect(res.status).toBe(400);
+    expect(res.body).toMatchObject({ error: { code: 'validation_failed', details: expect.any(Array) } });
+    expect(res.body.error.details.length).toBeLessThanOrEqual(50);
+    expect(res.text.length).toBeLessThan(20_000);
+  });
+});
+
 describe('hostile JSON from a visitor', () => {
   test.concurrent.each(bodyRoutes.filter((r) => !r.key.startsWith('POST /api/workbench/')))('when a visitor sends a malformed-by-schema body to $key, then 401 like a valid one, never a validation answer', async (route) => {
     const { target } = await armedFor(route);

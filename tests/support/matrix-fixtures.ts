@@ -220,7 +220,7 @@ export const fixtures: Record<string, Fixture> = {
   'POST /api/workbench/fit': workbench(wb.fitInput, { points: [0, 1, 2, 3].map((v) => ({ volts: v, displacement: 0.1 * v })), displacementUnit: 'um' }, 'gainNmPerV'),
   'POST /api/workbench/peak-to-peak': workbench(wb.peakToPeakInput, { displacementPpNm: 2000, voltsPpV: 20, displacementResolutionNm: 10 }, 'gainNmPerV'),
   'POST /api/workbench/creep': workbench(wb.creepInput, { samples: [0.1, 1, 10, 100].map((timeS) => ({ timeS, displacementNm: 1000 * (1 + 0.02 * Math.log10(timeS / 0.1)) })) }, 'gamma'),
-  'POST /api/workbench/expected-gain': workbench(wb.expectedGainInput, { actuator: 'plate-thickness', material: 'PZT-5A' }, 'gainNmPerV'),
+  'POST /api/workbench/expected-gain': workbench(wb.expectedGainInput, { actuator: 'tube-quadrant', material: { d31PmPerV: -171 }, lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.5 }, 'gainNmPerV'),
   'POST /api/workbench/mixing': workbench(wb.mixingInput, { gain: [[10, 1], [1, 10]], limits: { vaMinV: -10, vaMaxV: 10, vbMinV: -10, vbMaxV: 10 } }, 'cautions'),
   'POST /api/workbench/mixing-fit': workbench(
     wb.gainMatrixFitInput,

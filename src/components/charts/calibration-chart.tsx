@@ -32,16 +32,26 @@ function axis(min: number, max: number): { domain: [number, number]; ticks: numb
 
 const unitOf: Record<string, string> = { Drive: 'V', Displacement: 'nm' };
 
+/** Most markers drawn; longer runs are thinned evenly for the plot only (fits always use every point). */
+export const MAX_PLOTTED_POINTS = 2000;
+
+function thin<T>(items: readonly T[], max: number): T[] {
+  if (items.length <= max) return [...items];
+  const stride = items.length / max;
+  return Array.from({ length: max }, (_, i) => items[Math.floor(i * stride)]!);
+}
+
 /**
  * Displacement against drive voltage: up sweep as copper circles, down sweep as teal triangles
  * (each joined faintly in recorded order so the hysteresis loop shows), unswept points in ink,
  * and the fitted line across the measured range. Import lazily: recharts is large.
  */
-export function CalibrationChart({ points, fit, height = 300 }: {
-  points: CalibrationChartPoint[];
+export function CalibrationChart({ points: all, fit, height = 300 }: {
+  points: readonly CalibrationChartPoint[];
   fit: { interceptNm: number; gainNmPerV: number } | null;
   height?: number;
 }) {
+  const points = thin(all, MAX_PLOTTED_POINTS);
   const up = points.filter((p) => p.sweep === 'up');
   const down = points.filter((p) => p.sweep === 'down');
   const plain = points.filter((p) => p.sweep !== 'up' && p.sweep !== 'down');

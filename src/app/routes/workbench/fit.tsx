@@ -50,7 +50,7 @@ export function FitPage() {
             <>
               <FitResults fit={result.preview.fit} />
               <ChartFrame label="Calibration plot" caption="Up sweep: copper circles; down sweep: teal triangles; the line is the least-squares fit. Long runs are thinned for drawing only.">
-                <LazyCalibrationChart points={result.preview.plotPoints} line={result.preview.line} />
+                <LazyCalibrationChart points={result.preview.plotPoints} fit={result.preview.fit} />
               </ChartFrame>
               <p className="text-sm text-ink-soft">
                 Sine drive instead? Use the <Link className="text-teal-dark underline" to={paths.workbenchTool('peak-to-peak')}>peak-to-peak gain</Link>. A step-and-hold record?{' '}

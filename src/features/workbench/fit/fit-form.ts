@@ -4,7 +4,7 @@ import { fitInput } from '@shared/schemas/workbench.ts';
 import { fitCalibrationInUnits, type CalibrationFit } from '@shared/workbench/calibration-fit.ts';
 import { toNm, toVolts } from '@shared/units.ts';
 import { friendlyError, refusalMessage } from '../form/error-map.ts';
-import type { PlotPoint } from '../components/charts/calibration-chart.tsx';
+import type { CalibrationChartPoint } from '@/components/charts/calibration-chart.tsx';
 import type { CheckedRows } from '../csv/parse-fit-rows.ts';
 
 const gridRow = z.object({ volts: z.string(), displacement: z.string(), sweep: z.enum(['', 'up', 'down']) });
@@ -40,8 +40,7 @@ export const blankRows = (n: number): GridRow[] => Array.from({ length: n }, () 
 /** A fit ready to show: the shared result and the points in V and nm for the plot. */
 export interface FitPreview {
   fit: CalibrationFit;
-  plotPoints: PlotPoint[];
-  line: [PlotPoint, PlotPoint];
+  plotPoints: CalibrationChartPoint[];
 }
 
 /** Runs the shared schema and fit on the good rows; a sentence instead when it cannot. */
@@ -54,9 +53,8 @@ export function previewFit(checked: CheckedRows, settings: Pick<FitFormValues, '
   try {
     const fit = fitCalibrationInUnits(parsed.data);
     const { voltageUnit, displacementUnit } = parsed.data;
-    const plotPoints = parsed.data.points.map((p) => ({ v: toVolts(p.volts, voltageUnit), x: toNm(p.displacement, displacementUnit), sweep: p.sweep }));
-    const line: [PlotPoint, PlotPoint] = [{ v: fit.voltsMinV, x: fit.lineNm[0] }, { v: fit.voltsMaxV, x: fit.lineNm[1] }];
-    return { ok: true, preview: { fit, plotPoints, line } };
+    const plotPoints = parsed.data.points.map((p) => ({ volts: toVolts(p.volts, voltageUnit), displacementNm: toNm(p.displacement, displacementUnit), sweep: p.sweep }));
+    return { ok: true, preview: { fit, plotPoints } };
   } catch (err) {
     return { ok: false, message: refusalMessage(err) };
   }

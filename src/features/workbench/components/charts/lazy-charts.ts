@@ -1,8 +1,8 @@
 // The chart components, each loaded on first use so recharts stays out of the entry chunk.
 import { lazy } from 'react';
 
-/** Calibration scatter with the fit line (charts/calibration-chart.tsx). */
-export const LazyCalibrationChart = lazy(() => import('./calibration-chart.tsx').then((m) => ({ default: m.CalibrationChart })));
+/** Calibration scatter with the fit line (the app-wide chart in components/charts). */
+export const LazyCalibrationChart = lazy(() => import('@/components/charts/calibration-chart.tsx').then((m) => ({ default: m.CalibrationChart })));
 
 /** Reachable parallelogram of a two-axis mixer (charts/mixer-chart.tsx). */
 export const LazyMixerChart = lazy(() => import('./mixer-chart.tsx').then((m) => ({ default: m.MixerChart })));
