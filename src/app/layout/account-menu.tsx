@@ -1,4 +1,4 @@
-import { Link, useLocation } from 'react-router-dom';
+import { useLocation } from 'react-router-dom';
 import type { SessionDto } from '@shared/schemas/user.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { UserBadge } from '@/components/ui/user-badge.tsx';
@@ -27,7 +27,6 @@ export function AccountMenu({ session }: { session: SessionDto | null }) {
         <div className="font-medium" data-testid="signed-in-login">{u.login}</div>
         <div className="text-xs text-teal-dark" data-testid="signed-in-role">{ROLE_LABEL[u.role]}</div>
       </div>
-      <Link to={paths.account} className="text-xs text-ink-soft underline decoration-rule hover:text-copper">Mail settings</Link>
       <Button variant="ghost" onClick={() => signOut.mutate()} disabled={signOut.isPending}>Sign out</Button>
     </div>
   );

@@ -7,6 +7,7 @@ import { paths } from '@/config/paths.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
 import { toActor } from '@/features/session/to-actor.ts';
 import { AccountMenu } from './account-menu.tsx';
+import { PersonalLinks } from './personal-links.tsx';
 
 const linkClass = ({ isActive }: { isActive: boolean }) =>
   `block rounded px-3 py-2 text-sm font-medium md:py-1.5 ${isActive ? 'bg-ink text-paper' : 'text-ink hover:bg-paper-deep'}`;
@@ -58,6 +59,7 @@ export function AppShell() {
           </nav>
         )}
       </header>
+      {session?.user && <PersonalLinks />}
       <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6">
         {signInProblem && (
           <div className="mb-4">
