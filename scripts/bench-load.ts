@@ -73,7 +73,7 @@ try {
     await Part.bulkCreate(Array.from({ length: Math.min(1000, GENERATED_PARTS - i) }, (_, k) => {
       const gain = 5 + Math.random() * 300;
       return {
-        category: pick(['bimorph', 'disc', 'stack', 'tube'] as const), name: `Generated part ${i + k}`, salvageSource: 'bench generator', material: 'PZT-5A',
+        category: pick(['bimorph', 'buzzer-disc', 'stack', 'tube'] as const), name: `Generated part ${i + k}`, salvageSource: 'bench generator', material: 'PZT-5A',
         lengthMm: 10 + (k % 30), widthMm: null, thicknessMm: 0.5, outerDiameterMm: null, wallMm: null, layers: null, capacitanceNf: 1, safeVolts: 60, notes: null,
         status: 'accepted' as const, proposedById: null, acceptedRunCount: 1 + (k % 5), buildCount: 1,
         gainMedianNmPerV: gain, gainP25NmPerV: gain * 0.95, gainP75NmPerV: gain * 1.05, gainMinNmPerV: gain * 0.9, gainMaxNmPerV: gain * 1.1, hysteresisMedianPct: 5,
@@ -100,7 +100,11 @@ try {
     app!.stdout!.on('data', (c: Buffer) => { out += c; if (out.includes('Scanwright is running')) resolve(); });
     app!.once('exit', (c) => reject(new Error(`server exited (${c}) before listening:\n${out}`)));
   });
-  app.stdout!.resume();
+  // Keep the server's error log lines (pino level ≥ 50) to show after the table.
+  const serverErrors: string[] = [];
+  app.stdout!.on('data', (c: Buffer) => {
+    for (const line of c.toString().split('\n')) if (/"level":(50|60)/.test(line)) serverErrors.push(line);
+  });
   say(`server on ${origin} (DB_POOL_MAX ${process.env.DB_POOL_MAX ?? 10})`);
 
   // ---- sign in as a maker through the OAuth stand-in --------------------------------------------
@@ -205,10 +209,19 @@ try {
   lines.push(`${'all'.padEnd(21)} ${pad(routes.reduce((s, r) => s + r.connections, 0), 5)} ${pad(all, 9)} ${pad((all / MEASURE_S).toFixed(0), 7)}`);
   lines.push('', `errors (socket errors, timeouts, non-2xx): ${totalErrors}   lost writes (201 without a row): ${totalLost}   ${totalErrors === 0 && totalLost === 0 ? 'OK' : 'FAILED'}`);
   lines.push('rows+ beyond the 201s are requests cut off when the measuring window closed (stored, never answered).');
+  if (serverErrors.length) {
+    const kinds = new Map<string, number>();
+    for (const l of serverErrors) {
+      const e = JSON.parse(l) as { msg?: string; err?: { message?: string }; req?: { method?: string; url?: string } };
+      const key = `${e.req?.method ?? ''} ${e.req?.url?.replace(/\d+/g, ':id') ?? ''} ${e.msg}: ${(e.err?.message ?? '').split('\n')[0].slice(0, 160)}`;
+      kinds.set(key, (kinds.get(key) ?? 0) + 1);
+    }
+    lines.push('', 'server errors logged:', ...[...kinds].map(([k, n]) => `  ${n} × ${k}`));
+  }
   process.stdout.write(`${lines.join('\n')}\n`);
   process.exitCode = totalErrors === 0 && totalLost === 0 ? 0 : 1;
 } catch (err) {
-  process.stderr.write(`${err instanceof Error ? err.stack : err}\n`);
+  process.stderr.write(`${err instanceof Error ? `${err.message}\n${err.stack}` : err}\n`);
   process.exitCode = 1;
 } finally {
   await cleanup();

@@ -1,4 +1,4 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import type { Actor } from '@shared/policies.ts';
 import type { SendMessageInput, ThreadDto, ThreadSummaryDto } from '@shared/schemas/listing.ts';
 import { Listing } from '../models/listing.model.ts';
@@ -35,6 +35,17 @@ async function listingTitle(listing: Listing): Promise<string> {
   return `your ${listing.kind === 'offering' ? 'offer' : 'request'}: ${listing.quantity} × ${part?.name ?? 'part'}`;
 }
 
+/**
+ * The enquirer's thread on a listing, made on the first message, its lastMessageAt bumped and the
+ * row locked for this transaction. ON DUPLICATE KEY locks an existing row exclusively, so messages
+ * sent at the same moment queue up instead of failing on the unique key or deadlocking.
+ */
+async function lockThread(listing: Listing, starterId: number, transaction: Transaction): Promise<MessageThread> {
+  const where = { listingId: listing.id, starterId };
+  await MessageThread.bulkCreate([{ ...where, ownerId: listing.ownerId, lastMessageAt: new Date() }], { updateOnDuplicate: ['lastMessageAt'], transaction });
+  return (await MessageThread.findOne({ where, transaction, lock: transaction.LOCK.UPDATE }))!;
+}
+
 /** Write to a listing's owner through the site: one thread per listing and enquirer. */
 export async function sendListingMessage(actor: Actor | null, listingId: number, input: SendMessageInput): Promise<{ threadId: number; messageId: number }> {
   const listing = await loadListingForView(actor, listingId);
@@ -43,13 +54,8 @@ export async function sendListingMessage(actor: Actor | null, listingId: number,
   const title = await listingTitle(listing);
   const me = await User.findByPk(actor.id, { attributes: ['login'] });
   const result = await Listing.sequelize!.transaction(async (transaction) => {
-    const [thread] = await MessageThread.findOrCreate({
-      where: { listingId, starterId: actor.id },
-      defaults: { listingId, starterId: actor.id, ownerId: listing.ownerId, lastMessageAt: new Date() },
-      transaction,
-    });
+    const thread = await lockThread(listing, actor.id, transaction);
     const message = await Message.create({ threadId: thread.id, senderId: actor.id, body: input.body }, { transaction });
-    await thread.update({ lastMessageAt: new Date() }, { transaction });
     await notify(listing.ownerId, me?.login ?? 'A maker', title, input.body, thread.id, transaction);
     return { threadId: thread.id, messageId: message.id };
   });
@@ -119,8 +125,10 @@ export async function replyInThread(actor: Actor | null, threadId: number, input
   const otherId = thread.ownerId === actor!.id ? thread.starterId : thread.ownerId;
   const title = listing ? (thread.ownerId === actor!.id ? `their enquiry` : await listingTitle(listing)) : 'a listing';
   const result = await Listing.sequelize!.transaction(async (transaction) => {
-    const message = await Message.create({ threadId, senderId: actor!.id, body: input.body }, { transaction });
+    // The thread row first: the message's foreign key would otherwise take a shared lock on it that
+    // two replies at once both try to upgrade (a deadlock).
     await thread.update({ lastMessageAt: new Date() }, { transaction });
+    const message = await Message.create({ threadId, senderId: actor!.id, body: input.body }, { transaction });
     await notify(otherId, me?.login ?? 'A maker', title, input.body, threadId, transaction);
     return { threadId, messageId: message.id };
   });

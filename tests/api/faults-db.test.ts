@@ -234,3 +234,27 @@ describe('when moderators decide several runs of one part at the same moment', (
     expect(await call('part', `/api/parts/${part.id}`)).toMatchObject({ status: 200, body: { stats: { acceptedRunCount: 12 } } });
   });
 });
+
+describe('when a maker sends several messages on one listing at the same moment', () => {
+  async function listingOf(ownerId: number) {
+    const { Listing } = await import('../../server/models/listing.model.ts');
+    return Listing.create({ ownerId, partId: (await createPart()).id, kind: 'offering', quantity: 1, condition: 'salvaged-tested', priceKind: 'free', region: 'Utrecht', notes: 'Concurrency.' });
+  }
+  const send = (as: Who, listingId: number, i: number) =>
+    call('message', `/api/listings/${listingId}/messages`, { method: 'POST', as, json: { body: `Message ${i}` } });
+
+  test('then every message is stored in one thread, for a new conversation and for an existing one', async () => {
+    const { Message, MessageThread } = await import('../../server/models/message.model.ts');
+    const owner = await createUser();
+    const maker = await createUser();
+    const as = await sessionOf(maker.login);
+    const listing = await listingOf(owner.id);
+    const first = await Promise.all([0, 1, 2, 3, 4].map((i) => send(as, listing.id, i)));
+    expect(first.map((r) => r.status)).toEqual([201, 201, 201, 201, 201]);
+    const again = await Promise.all([5, 6, 7, 8, 9, 10, 11, 12].map((i) => send(as, listing.id, i)));
+    expect(again.map((r) => r.status)).toEqual(again.map(() => 201));
+    const threads = await MessageThread.findAll({ where: { listingId: listing.id } });
+    expect(threads).toHaveLength(1);
+    expect(await Message.count({ where: { threadId: threads[0].id } })).toBe(13);
+  });
+});

@@ -65,7 +65,8 @@ describe('CSRF on every state-changing route', () => {
 describe('cross-origin requests', () => {
   test.concurrent.each(routes)('when $key comes from another origin (Origin, or Referer without Origin, or Origin null), then 403 cross_origin and nothing changes', async (route) => {
     const { actor, target, before } = await armedFor(route);
-    for (const headers of [{ Origin: EVIL }, { Referer: `${EVIL}/page` }, { Origin: 'null' }, { Referer: 'not a url' }, { Origin: EVIL, Referer: `${t.config.publicUrl}/` }]) {
+    const foreign: Array<Record<string, string>> = [{ Origin: EVIL }, { Referer: `${EVIL}/page` }, { Origin: 'null' }, { Referer: 'not a url' }, { Origin: EVIL, Referer: `${t.config.publicUrl}/` }];
+    for (const headers of foreign) {
       const res = await send(route, target, actor.agent, { headers });
       expect(res.status, `${route.key} ${JSON.stringify(headers)}`).toBe(403);
       expect(res.body).toEqual({ error: { code: 'cross_origin', message: expect.any(String) } });
@@ -110,15 +111,15 @@ describe('CORS', () => {
 
   test('when reads, writes and errors are requested with an Origin, then none carries Access-Control-Allow-Origin or -Credentials', async () => {
     const { agent } = await signedIn();
-    const answers = [
-      await agent.get('/api/session').set('Origin', EVIL),
-      await agent.get('/api/builds').set('Origin', EVIL),
-      await agent.get('/api/nope').set('Origin', EVIL),
-      await agent.post('/api/builds').set('Origin', t.config.publicUrl).set('X-CSRF-Token', agent.csrf).send({}),
-      await agent.post('/api/workbench/convert').set('Origin', t.config.publicUrl).send({ value: 1, from: 'nm', to: 'um' }),
-      await request(t.app).get('/api/health').set('Origin', EVIL),
+    const answers: Array<[string, request.Response]> = [
+      ['GET /api/session', await agent.get('/api/session').set('Origin', EVIL)],
+      ['GET /api/builds', await agent.get('/api/builds').set('Origin', EVIL)],
+      ['GET /api/nope (404)', await agent.get('/api/nope').set('Origin', EVIL)],
+      ['POST /api/builds (400)', await agent.post('/api/builds').set('Origin', t.config.publicUrl).set('X-CSRF-Token', agent.csrf).send({})],
+      ['POST /api/workbench/convert', await agent.post('/api/workbench/convert').set('Origin', t.config.publicUrl).send({ value: 1, from: 'nm', to: 'um' })],
+      ['GET /api/health', await request(t.app).get('/api/health').set('Origin', EVIL)],
     ];
-    for (const res of answers) expect(corsHeaders(res), res.req.path).toEqual([]);
+    for (const [what, res] of answers) expect(corsHeaders(res), what).toEqual([]);
   });
 });
 
