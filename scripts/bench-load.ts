@@ -4,7 +4,7 @@
 // (BENCH_SECONDS sets the measured part, 40 by default). Rate limits are off.
 // Prints throughput and latency per route, errors, and lost writes (201s vs rows that appeared).
 import { spawn, type ChildProcess } from 'node:child_process';
-import { accessSync, constants, mkdtempSync, rmSync } from 'node:fs';
+import { accessSync, constants, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -44,6 +44,10 @@ const pick = <T>(xs: readonly T[]) => xs[Math.floor(Math.random() * xs.length)];
 let base = tmpdir();
 try { accessSync('/dev/shm', constants.W_OK); base = '/dev/shm'; } catch { /* tmpdir */ }
 const dir = mkdtempSync(join(base, 'scanwright-bench-load-'));
+// mariadbd keeps temporary tables in $TMPDIR and a starting server deletes every `#sql*` file there,
+// so a private directory keeps this instance and any other starting at the same time apart.
+process.env.TMPDIR = join(dir, 'tmp');
+mkdirSync(process.env.TMPDIR);
 const dbPort = await freePort();
 const db = { host: '127.0.0.1', port: dbPort, name: 'scanwright_load', user: 'scanwright_bench', password: 'bench-only-password', poolMax: 5 };
 let mariadb: ChildProcess | null = null;
@@ -134,41 +138,41 @@ try {
   const routes: Route[] = [
     { name: 'GET /api/builds', connections: 4, method: 'GET', path: () => '/api/builds' },
     { name: 'GET /api/builds/:id', connections: 4, method: 'GET', path: () => `/api/builds/${pick(publishedBuildIds)}` },
-    { name: 'GET /api/parts?gain…', connections: 4, method: 'GET', path: () => { const lo = 10 + Math.floor(Math.random() * 200); return `/api/parts?gainMin=${lo}&gainMax=${lo + 40}&sort=-gain`; } },
+    { name: 'GET /api/parts?gainMin&gainMax', connections: 4, method: 'GET', path: () => { const lo = 10 + Math.floor(Math.random() * 200); return `/api/parts?gainMin=${lo}&gainMax=${lo + 40}&sort=-gain`; } },
     { name: 'GET /api/parts/:id', connections: 4, method: 'GET', path: () => `/api/parts/${pick(partIds)}` },
     {
-      name: 'POST …/runs', connections: 2, method: 'POST', path: () => `/api/actuators/${pick(actuatorIds)}/runs`, body: () => runBody, headers: authed,
+      name: 'POST /api/actuators/:id/runs', connections: 2, method: 'POST', path: () => `/api/actuators/${pick(actuatorIds)}/runs`, body: () => runBody, headers: authed,
       rows: () => CalibrationRun.count({ where: { actuatorId: actuatorIds } }),
     },
     {
-      name: 'POST …/messages', connections: 2, method: 'POST', path: () => `/api/listings/${pick(listingIds)}/messages`, body: () => JSON.stringify({ body: `Still available? ${Math.random()}` }), headers: authed,
+      name: 'POST /api/listings/:id/messages', connections: 2, method: 'POST', path: () => `/api/listings/${pick(listingIds)}/messages`, body: () => JSON.stringify({ body: `Still available? ${Math.random()}` }), headers: authed,
       rows: () => Message.count({ where: { senderId: maker.id } }),
     },
   ];
 
-  interface Figures { route: Route; requests: number; rps: number; p50: number; p95: number; p99: number; max: number; errors: number; non2xx: number; statuses: Map<number, number> }
+  interface Figures { route: Route; sent: number; requests: number; rps: number; p50: number; p95: number; p99: number; max: number; errors: number; non2xx: number; statuses: Map<number, number> }
   function run(route: Route, seconds: number): Promise<Figures> {
     return new Promise((resolve, reject) => {
       const latencies: number[] = [];
       const statuses = new Map<number, number>();
-      const instance = autocannon(
-        {
-          url: origin, connections: route.connections, duration: seconds, pipelining: 1, timeout: 10,
-          requests: [{
-            method: route.method, headers: route.headers,
-            setupRequest: (req: Record<string, unknown>) => ({ ...req, path: route.path(), ...(route.body ? { body: route.body() } : {}) }),
-          }],
-        },
-        (err: Error | null, result: autocannon.Result) => {
-          if (err) return reject(err);
-          latencies.sort((a, b) => a - b);
-          resolve({
-            route, requests: latencies.length, rps: latencies.length / seconds,
-            p50: quantileSorted(latencies, 0.5) ?? NaN, p95: quantileSorted(latencies, 0.95) ?? NaN, p99: quantileSorted(latencies, 0.99) ?? NaN,
-            max: latencies[latencies.length - 1] ?? NaN, errors: result.errors + result.timeouts, non2xx: result.non2xx, statuses,
-          });
-        },
-      );
+      let sent = 0;
+      // setupRequest and timeout are autocannon 9 options the shared type file leaves out.
+      const options = {
+        url: origin, connections: route.connections, duration: seconds, pipelining: 1, timeout: 10,
+        requests: [{
+          method: route.method, headers: route.headers,
+          setupRequest: (req: Record<string, unknown>) => (sent++, { ...req, path: route.path(), ...(route.body ? { body: route.body() } : {}) }),
+        }],
+      };
+      const instance = autocannon(options as unknown as Parameters<typeof autocannon>[0], (err, result) => {
+        if (err) return reject(err);
+        latencies.sort((a, b) => a - b);
+        resolve({
+          route, sent, requests: latencies.length, rps: latencies.length / seconds,
+          p50: quantileSorted(latencies, 0.5) ?? NaN, p95: quantileSorted(latencies, 0.95) ?? NaN, p99: quantileSorted(latencies, 0.99) ?? NaN,
+          max: latencies[latencies.length - 1] ?? NaN, errors: result.errors + result.timeouts, non2xx: result.non2xx, statuses,
+        });
+      });
       instance.on('response', (_c: unknown, status: number, _b: number, ms: number) => {
         latencies.push(ms);
         statuses.set(status, (statuses.get(status) ?? 0) + 1);
@@ -180,7 +184,7 @@ try {
   await Promise.all(routes.map((r) => run(r, WARMUP_S)));
   await new Promise((r) => setTimeout(r, 500));
   const before = await Promise.all(routes.map((r) => r.rows?.() ?? 0));
-  say(`measuring ${MEASURE_S} s: ${routes.map((r) => `${r.name} ×${r.connections}`).join(', ')}`);
+  say(`measuring ${MEASURE_S} s, ${routes.reduce((n, r) => n + r.connections, 0)} connections over ${routes.length} routes`);
   const figures = await Promise.all(routes.map((r) => run(r, MEASURE_S)));
   await new Promise((r) => setTimeout(r, 1000)); // let requests cut off at the end settle
   const after = await Promise.all(routes.map((r) => r.rows?.() ?? 0));
@@ -189,26 +193,29 @@ try {
   const pad = (s: string | number, n: number) => String(s).padStart(n);
   const lines = [
     '',
-    `route                 conns  requests   req/s   p50 ms   p95 ms   p99 ms   max ms  errors  non-2xx   201s  rows+  lost`,
+    `route                            conns  requests   req/s   p50 ms   p95 ms   p99 ms   max ms  errors  non-2xx   201s  rows+  unanswered  lost`,
   ];
   let totalErrors = 0;
   let totalLost = 0;
   figures.forEach((f, i) => {
     const created = f.statuses.get(201) ?? 0;
     const added = after[i] - before[i];
+    // Requests still in flight when the window closed were sent but never answered: they may be stored.
+    const unanswered = f.sent - f.requests;
     const lost = f.route.rows ? Math.max(0, created - added) : 0;
+    const unexplained = f.route.rows ? Math.max(0, added - created - unanswered) : 0;
     totalErrors += f.errors + f.non2xx;
-    totalLost += lost;
+    totalLost += lost + unexplained;
     lines.push(
-      `${f.route.name.padEnd(21)} ${pad(f.route.connections, 5)} ${pad(f.requests, 9)} ${pad(f.rps.toFixed(0), 7)} ${pad(f.p50.toFixed(1), 8)} ${pad(f.p95.toFixed(1), 8)} ${pad(f.p99.toFixed(1), 8)} ${pad(f.max.toFixed(0), 8)} ${pad(f.errors, 7)} ${pad(f.non2xx, 8)}` +
-      (f.route.rows ? ` ${pad(created, 6)} ${pad(added, 6)} ${pad(lost, 5)}` : ''),
+      `${f.route.name.padEnd(32)} ${pad(f.route.connections, 5)} ${pad(f.requests, 9)} ${pad(f.rps.toFixed(0), 7)} ${pad(f.p50.toFixed(1), 8)} ${pad(f.p95.toFixed(1), 8)} ${pad(f.p99.toFixed(1), 8)} ${pad(f.max.toFixed(0), 8)} ${pad(f.errors, 7)} ${pad(f.non2xx, 8)}` +
+      (f.route.rows ? ` ${pad(created, 6)} ${pad(added, 6)} ${pad(unanswered, 11)} ${pad(lost, 5)}` : ''),
     );
     if (f.non2xx) lines.push(`  statuses: ${[...f.statuses].map(([s, n]) => `${s}×${n}`).join(' ')}`);
   });
   const all = figures.reduce((s, f) => s + f.requests, 0);
-  lines.push(`${'all'.padEnd(21)} ${pad(routes.reduce((s, r) => s + r.connections, 0), 5)} ${pad(all, 9)} ${pad((all / MEASURE_S).toFixed(0), 7)}`);
-  lines.push('', `errors (socket errors, timeouts, non-2xx): ${totalErrors}   lost writes (201 without a row): ${totalLost}   ${totalErrors === 0 && totalLost === 0 ? 'OK' : 'FAILED'}`);
-  lines.push('rows+ beyond the 201s are requests cut off when the measuring window closed (stored, never answered).');
+  lines.push(`${'all routes'.padEnd(32)} ${pad(routes.reduce((s, r) => s + r.connections, 0), 5)} ${pad(all, 9)} ${pad((all / MEASURE_S).toFixed(0), 7)}`);
+  lines.push('', `errors (socket errors, timeouts, non-2xx): ${totalErrors}   lost writes: ${totalLost}   ${totalErrors === 0 && totalLost === 0 ? 'OK' : 'FAILED'}`);
+  lines.push('lost = 201s without a new row, or new rows beyond 201s + unanswered (requests cut off when the window closed).');
   if (serverErrors.length) {
     const kinds = new Map<string, number>();
     for (const l of serverErrors) {
@@ -227,3 +234,5 @@ try {
   await cleanup();
   say('done');
 }
+// stopServer's 30 s SIGKILL fallback timer stays pending after a clean stop; do not wait for it.
+process.exit(process.exitCode ?? 0);

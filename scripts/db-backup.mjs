@@ -31,6 +31,7 @@ export function requireRunningServer({ socket, database }) {
   if (!existsSync(socket)) fail(`MariaDB is not running: there is no socket at ${socket}.\n${hint}`);
   const ping = spawnSync('mariadb-admin', [...rootArgs(socket), 'ping'], { encoding: 'utf8' });
   if (ping.error) fail(`Cannot run mariadb-admin (${ping.error.message}); install the Debian package mariadb-client.`);
+  if (ping.status !== 0 && /access denied/i.test(ping.stderr)) fail(`MariaDB answers on ${socket} but refuses root over its socket: run this as the system user that runs npm start (root).`);
   if (ping.status !== 0) fail(`MariaDB is not running or does not answer on ${socket}:\n${(ping.stderr || ping.stdout).trim()}\n${hint}`);
   const has = spawnSync('mariadb', [...rootArgs(socket), '--batch', '--skip-column-names', '-e', `SHOW DATABASES LIKE '${database.replace(/'/g, "''")}'`], { encoding: 'utf8' });
   if (has.status !== 0) fail(`Could not query MariaDB on ${socket}:\n${has.stderr.trim()}`);

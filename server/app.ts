@@ -42,6 +42,7 @@ export interface AppHandle {
 
 interface SessionStore extends session.Store {
   stopExpiringSessions(): void;
+  touch(sid: string, data: session.SessionData, callback?: (err?: unknown) => void): void;
 }
 
 /** Build the whole Express app (no listen), with its pool, session store, passport and mailer. */

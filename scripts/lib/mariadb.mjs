@@ -97,5 +97,8 @@ export async function stopServer(child, timeoutMs = 30_000) {
   if (!child || child.exitCode !== null) return;
   const done = new Promise((resolve) => child.once('exit', resolve));
   child.kill('SIGTERM');
-  await Promise.race([done, sleep(timeoutMs).then(() => child.kill('SIGKILL'))]);
+  let timer;
+  const fallback = new Promise((resolve) => { timer = setTimeout(() => { child.kill('SIGKILL'); resolve(); }, timeoutMs); });
+  await Promise.race([done, fallback]);
+  clearTimeout(timer);
 }

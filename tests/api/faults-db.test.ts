@@ -9,7 +9,7 @@ import { createBuildRow, createPart, createRunRow, createUser } from '../support
 import { startPrivateMariaDb, type PrivateMariaDb } from '../support/private-mariadb.ts';
 
 const RESPONSE_BOUND_MS = 6000;
-const RECOVERY_BOUND_MS = 5000;
+const RECOVERY_BOUND_MS = 8000;
 const RUNS = 160;
 
 interface Outcome { what: string; runId?: number; status: number; body: unknown; startedAt: number; ms: number }
@@ -126,11 +126,16 @@ describe('when MariaDB stops under load and starts again', () => {
     const health = async () => { while (running) { log.push(await call('health', '/api/health')); await pause(50); } };
     const workers = [decider(), decider(), decider(), decider(), writer(), reader(), reader(), health()];
 
-    await pause(600);
+    // Let some decisions be acknowledged first (at least 600 ms of load, longer on a slow machine).
+    const acked = () => log.filter((o) => o.what === 'decide-run' && o.status === 200).length;
+    const loadStart = Date.now();
+    while (Date.now() - loadStart < 600 || (acked() < 4 && Date.now() - loadStart < 20_000)) await pause(25);
     at.stop = Date.now();
     await db.stop();
     at.stopped = Date.now();
-    await pause(1500);
+    // Down for at least 1.5 s and until enough answers have come back from the outage (slow machines).
+    const answeredDuringOutage = (health: boolean) => log.filter((o) => o.startedAt >= at.stopped && (o.what === 'health') === health).length;
+    while (Date.now() - at.stopped < 1500 || ((answeredDuringOutage(true) < 5 || answeredDuringOutage(false) < 25) && Date.now() - at.stopped < 20_000)) await pause(50);
     at.restart = Date.now();
     await db.start();
     at.up = Date.now();
@@ -140,11 +145,14 @@ describe('when MariaDB stops under load and starts again', () => {
       if (ok) at.healthy = ok.startedAt + ok.ms;
       await pause(25);
     }
-    await pause(600);
+    // And some load after recovery, to see it served normally.
+    const okAfter = () => log.filter((o) => at.healthy && o.startedAt > at.healthy + 200 && o.status < 300).length;
+    const recovered = Date.now();
+    while (Date.now() - recovered < 600 || (okAfter() < 10 && Date.now() - recovered < 20_000)) await pause(25);
     running = false;
     await Promise.all(workers);
     scenario = log;
-  }, 120_000);
+  }, 150_000);
 
   test('then requests were in flight when mariadbd got SIGTERM, and kept coming while it was down', () => {
     expect(scenario.filter((o) => o.startedAt <= at.stop && o.startedAt + o.ms >= at.stop).length).toBeGreaterThan(0);
@@ -164,10 +172,10 @@ describe('when MariaDB stops under load and starts again', () => {
   test('then /api/health and every database route answer 503 while MariaDB is stopped', () => {
     const during = scenario.filter((o) => o.startedAt >= at.stopped && o.startedAt + o.ms < at.restart);
     const health = during.filter((o) => o.what === 'health');
-    expect(health.length).toBeGreaterThan(3);
+    expect(health.length).toBeGreaterThanOrEqual(5);
     for (const o of health) expect(o).toMatchObject({ status: 503, body: { status: 'degraded', db: 'down' } });
     const rest = during.filter((o) => o.what !== 'health');
-    expect(rest.length).toBeGreaterThan(10);
+    expect(rest.length).toBeGreaterThanOrEqual(20);
     expect(rest.filter((o) => !isDbUnavailable(o))).toEqual([]);
   });
 

@@ -1,6 +1,6 @@
 // A MariaDB of a test's own (not the shared test database), for tests that stop, restart, dump or
 // restore it while other test files keep using theirs. Tmpfs when writable, a free port, migrated.
-import { accessSync, constants, mkdtempSync, rmSync } from 'node:fs';
+import { accessSync, constants, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -50,6 +50,25 @@ function scratchBase(): string {
   }
 }
 
+/**
+ * Run with TMPDIR pointing into the instance's own directory: mariadbd (and the bootstrap of
+ * mariadb-install-db) keep temporary tables in $TMPDIR, and a server starting up deletes every
+ * `#sql*` file it finds there, so instances started at the same moment over a shared /tmp break
+ * each other ("Error on delete of '/tmp/#sql-temptable-…'").
+ */
+async function withOwnTmpdir<T>(dir: string, work: () => T | Promise<T>): Promise<T> {
+  const tmp = join(dir, 'tmp');
+  mkdirSync(tmp, { recursive: true });
+  const saved = process.env.TMPDIR;
+  process.env.TMPDIR = tmp;
+  try {
+    return await work();
+  } finally {
+    if (saved === undefined) delete process.env.TMPDIR;
+    else process.env.TMPDIR = saved;
+  }
+}
+
 /** Initialise, start, create the database and user, and (by default) apply every migration. */
 export async function startPrivateMariaDb(opts: { database?: string; migrate?: boolean } = {}): Promise<PrivateMariaDb> {
   const dir = mkdtempSync(join(scratchBase(), 'scanwright-private-'));
@@ -63,7 +82,7 @@ export async function startPrivateMariaDb(opts: { database?: string; migrate?: b
     db,
     async start() {
       if (handle.running()) return;
-      child = await startServer(dir, port, { fast: true });
+      child = await withOwnTmpdir(dir, () => startServer(dir, port, { fast: true }));
     },
     async stop() {
       await stopServer(child);
@@ -76,7 +95,7 @@ export async function startPrivateMariaDb(opts: { database?: string; migrate?: b
     },
   };
   try {
-    initDataDir(dir);
+    await withOwnTmpdir(dir, () => initDataDir(dir));
     await handle.start();
     ensureDatabase(dir, { database: db.name, user: db.user, password: db.password });
     if (opts.migrate !== false) {
