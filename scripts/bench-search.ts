@@ -1,11 +1,11 @@
 // `npm run bench:search`: autocannon against the nm/V search and /api/health in the same run, at
 // 10 k and 100 k parts (seeded on first use by seed-scale). Loopback only, bounded in time.
 // Targets: search throughput ≥ 1/3 of health's; p95 at 100 k ≤ 1.5 × p95 at 10 k.
-import type { AddressInfo } from 'node:net';
+import { spawn } from 'node:child_process';
+import { createServer, type AddressInfo } from 'node:net';
+import { setTimeout as sleep } from 'node:timers/promises';
 import autocannon from 'autocannon';
-import { createApp } from '../server/app.ts';
-import { createLogger } from '../server/logger.ts';
-import type { Mailer } from '../server/services/mail.service.ts';
+import { createSequelize } from '../server/db/sequelize.ts';
 import { quantileSorted } from '../shared/stats/quantiles.ts';
 import { benchConfig, scaleDbName, startBenchDb } from './lib/bench-db.ts';
 import { seedScale } from './seed-scale.ts';
@@ -16,7 +16,33 @@ const SIZES = [
 ];
 const SEARCH = '/api/parts?gainMin=80&gainMax=150&sort=-gain&pageSize=25';
 const DURATION_S = Number(process.env.BENCH_SECONDS ?? 10);
-const noMail: Mailer = { send: async () => true, close: () => {} };
+
+const freePort = () => new Promise<number>((resolve) => {
+  const srv = createServer();
+  srv.listen(0, '127.0.0.1', () => { const { port } = srv.address() as AddressInfo; srv.close(() => resolve(port)); });
+});
+
+/** The real server in its own process (as in production), so the load generator does not share its event loop. */
+async function startServerProcess(database: string) {
+  const config = benchConfig(database);
+  const port = await freePort();
+  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+    stdio: ['ignore', 'ignore', 'inherit'],
+    env: {
+      ...process.env, NODE_ENV: 'production', LOG_LEVEL: 'silent', RATE_LIMITS: 'false', PORT: String(port), HOST: '127.0.0.1',
+      DB_HOST: config.db.host, DB_PORT: String(config.db.port), DB_NAME: config.db.name, DB_USER: config.db.user, DB_PASSWORD: config.db.password,
+      DB_POOL_MAX: '20', GITHUB_CLIENT_ID: 'bench', GITHUB_CLIENT_SECRET: 'bench', SMTP_URL: 'smtp://127.0.0.1:9',
+      SESSION_SECRET: 'bench-session-secret-bench-session-secret',
+    },
+  });
+  const base = `http://127.0.0.1:${port}`;
+  for (let i = 0; i < 200; i++) {
+    if (await fetch(`${base}/api/health`).then((r) => r.ok, () => false)) return { base, stop: () => new Promise((r) => { child.once('exit', r); child.kill('SIGTERM'); }) };
+    await sleep(100);
+  }
+  child.kill('SIGKILL');
+  throw new Error('server did not start');
+}
 
 interface Figures { rps: number; p95: number; p50: number; errors: number; requests: number }
 
@@ -43,25 +69,22 @@ const rows: Array<{ size: number; route: string } & Figures> = [];
 try {
   for (const size of SIZES) {
     await seedScale(size.parts, size.runs);
-    const config = benchConfig(scaleDbName(size.parts));
-    const handle = await createApp(config, { mailer: noMail, log: createLogger('silent') });
-    const server = handle.app.listen(0, '127.0.0.1');
-    await new Promise((r) => server.once('listening', r));
-    const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+    const server = await startServerProcess(scaleDbName(size.parts));
+    const base = server.base;
     await measure(`${base}${SEARCH}`); // warm-up pass, discarded
     for (const [route, path] of [['health', '/api/health'], ['search', SEARCH]] as const) {
       rows.push({ size: size.parts, route, ...(await measure(`${base}${path}`)) });
     }
-    const [plan] = await handle.sequelize.query(
+    const sq = createSequelize(benchConfig(scaleDbName(size.parts)).db);
+    const [plan] = await sq.query(
       "EXPLAIN SELECT * FROM parts WHERE status = 'accepted' AND gain_median_nm_per_v IS NOT NULL AND gain_median_nm_per_v >= 80 AND gain_median_nm_per_v <= 150 ORDER BY gain_median_nm_per_v DESC, id DESC LIMIT 0, 25",
     );
-    const [countPlan] = await handle.sequelize.query(
+    const [countPlan] = await sq.query(
       "EXPLAIN SELECT COUNT(*) FROM parts WHERE status = 'accepted' AND gain_median_nm_per_v IS NOT NULL AND gain_median_nm_per_v >= 80 AND gain_median_nm_per_v <= 150",
     );
     process.stdout.write(`\nEXPLAIN at ${size.parts} parts (page):\n${JSON.stringify(plan, null, 1)}\nEXPLAIN (count):\n${JSON.stringify(countPlan, null, 1)}\n`);
-    server.closeAllConnections();
-    await new Promise((r) => server.close(r));
-    await handle.close();
+    await sq.close();
+    await server.stop();
   }
 } finally {
   await stop();

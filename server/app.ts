@@ -18,6 +18,7 @@ import { requireCsrf } from './middleware/csrf.ts';
 import { requireSameOrigin } from './middleware/same-origin.ts';
 import { jsonBody } from './middleware/json-body.ts';
 import { sessionUser } from './middleware/session-user.ts';
+import { outsideApi, unlessAnonymousRead } from './middleware/anonymous-reads.ts';
 import { errorHandler, apiNotFound } from './middleware/error-handler.ts';
 import { limiter } from './middleware/rate-limit.ts';
 import { healthRoutes } from './routes/health.routes.ts';
@@ -117,28 +118,27 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   const dist = resolve(config.clientDist);
   if (existsSync(dist)) {
     app.use('/assets', express.static(resolve(dist, 'assets'), { immutable: true, maxAge: '1y', index: false, fallthrough: false }));
-    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    app.use(outsideApi(express.static(dist, { index: false, maxAge: '1h' })));
   }
   app.use('/uploads', express.static(resolve(config.uploadsDir), { index: false, immutable: true, maxAge: '30d', fallthrough: false }));
   app.use(healthRoutes(sequelize));
 
   app.use(['/api/workbench', '/api/actuators'], jsonBody('12mb'));
   app.use(jsonBody('1mb'));
-  app.use(
-    session({
-      name: 'scanwright.sid',
-      secret: config.sessionSecret,
-      store,
-      resave: false,
-      saveUninitialized: false,
-      rolling: false,
-      cookie: { httpOnly: true, sameSite: 'lax', secure: https, maxAge: 30 * 24 * 60 * 60 * 1000, path: '/' },
-    }),
-  );
-  app.use(passport.initialize());
-  app.use(sessionUser(passport.session()));
+  const sessions = session({
+    name: 'scanwright.sid',
+    secret: config.sessionSecret,
+    store,
+    resave: false,
+    saveUninitialized: false,
+    rolling: false,
+    cookie: { httpOnly: true, sameSite: 'lax', secure: https, maxAge: 30 * 24 * 60 * 60 * 1000, path: '/' },
+  });
+  app.use(...unlessAnonymousRead('scanwright.sid', sessions, passport.initialize(), sessionUser(passport.session())));
   app.use(['/api', '/auth/logout'], requireCsrf);
 
+  // The registry search is the hottest route: first in line.
+  app.use(partRoutes());
   app.use(sessionRoutes());
   app.use(authRoutes(passport, limiter(config.rateLimits, { windowMs: 60_000, limit: 20, what: 'sign-in attempts' })));
   app.use(adminRoutes());
@@ -146,7 +146,6 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(photoRoutes(config));
   app.use(buildRoutes(config));
   app.use(actuatorRoutes());
-  app.use(partRoutes());
   app.use(reviewRoutes(config));
   app.use(exchangeRoutes(config));
   app.use(['/api', '/auth'], apiNotFound);

@@ -1,8 +1,14 @@
 import type { PartSummaryDto } from '@shared/schemas/part.ts';
 import type { Part } from '../models/part.model.ts';
 
+/** The columns a part summary needs: a Part instance or a plain row from the registry search. */
+export type PartRow = Pick<Part,
+  'id' | 'name' | 'category' | 'status' | 'salvageSource' | 'material' | 'safeVolts' | 'capacitanceNf' | 'lengthMm' | 'widthMm' | 'thicknessMm'
+  | 'outerDiameterMm' | 'wallMm' | 'layers' | 'acceptedRunCount' | 'buildCount' | 'gainMedianNmPerV' | 'gainP25NmPerV' | 'gainP75NmPerV'
+  | 'gainMinNmPerV' | 'gainMaxNmPerV' | 'hysteresisMedianPct' | 'createdAt'>;
+
 /** A part with its geometry and pooled statistics. */
-export function presentPartSummary(p: Part): PartSummaryDto {
+export function presentPartSummary(p: PartRow): PartSummaryDto {
   return {
     id: p.id,
     name: p.name,

@@ -8,6 +8,7 @@ import { authorize } from '../policies/authorize.ts';
 import { ConflictError, NotFoundError, ValidationError } from '../errors.ts';
 import { recordAudit } from './audit.service.ts';
 import { recomputePartStats } from './part-stats.service.ts';
+import { invalidateRegistryCounts } from './registry-count-cache.ts';
 
 /** Fold a duplicate part into another: actuators, runs and listings move, both parts' statistics are recomputed, the trail records it. */
 export async function mergeParts(actor: Actor | null, fromId: number, input: MergePartInput) {
@@ -28,6 +29,7 @@ export async function mergeParts(actor: Actor | null, fromId: number, input: Mer
     const [runs] = await CalibrationRun.update(moved, where);
     const [listings] = await Listing.update(moved, where);
     await from.update({ status: 'rejected', mergedIntoId: into.id }, { transaction });
+    transaction.afterCommit(invalidateRegistryCounts);
     await recomputePartStats(from.id, transaction);
     await recomputePartStats(into.id, transaction);
     await recordAudit(actor, { action: 'part.merge', targetType: 'part', targetId: from.id, note: `into part ${into.id}: ${input.note}` }, transaction);

@@ -2,6 +2,7 @@ import type { Transaction } from 'sequelize';
 import { summarize } from '@shared/stats/quantiles.ts';
 import { CalibrationRun } from '../models/calibration-run.model.ts';
 import { Part } from '../models/part.model.ts';
+import { invalidateRegistryCounts } from './registry-count-cache.ts';
 
 /**
  * Recompute a part's pooled figures from its accepted runs, inside the caller's transaction.
@@ -28,4 +29,5 @@ export async function recomputePartStats(partId: number, transaction: Transactio
     },
     { where: { id: partId }, transaction },
   );
+  transaction.afterCommit(invalidateRegistryCounts);
 }

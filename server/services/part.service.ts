@@ -1,4 +1,4 @@
-import { IndexHints, Op, type Order, type WhereOptions } from 'sequelize';
+import { Op } from 'sequelize';
 import { can, type Actor } from '@shared/policies.ts';
 import type { ListPartsQuery, PartDetailDto, PartListDto, PartListItemDto, ProposePartInput, GainHistogramDto } from '@shared/schemas/part.ts';
 import { priceLabel } from '@shared/schemas/listing.ts';
@@ -10,38 +10,14 @@ import { User } from '../models/user.model.ts';
 import { Listing } from '../models/listing.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { NotFoundError } from '../errors.ts';
-import { presentPartSummary } from '../presenters/part.presenter.ts';
+import { presentPartSummary, type PartRow } from '../presenters/part.presenter.ts';
+import { countParts, selectParts } from './part-search.sql.ts';
+import { cachedRegistryCount } from './registry-count-cache.ts';
 
-const escapeLike = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 /** Most rows one export returns. */
 export const EXPORT_LIMIT = 10_000;
 
-const SORTS: Record<ListPartsQuery['sort'], Order> = {
-  gain: [['gainMedianNmPerV', 'ASC'], ['id', 'ASC']],
-  '-gain': [['gainMedianNmPerV', 'DESC'], ['id', 'DESC']],
-  runs: [['acceptedRunCount', 'ASC'], ['id', 'ASC']],
-  '-runs': [['acceptedRunCount', 'DESC'], ['id', 'DESC']],
-  newest: [['createdAt', 'DESC'], ['id', 'DESC']],
-  name: [['name', 'ASC'], ['id', 'ASC']],
-};
-
-/** The WHERE of a registry search: listed parts only; a gain range matches the median and drops parts without runs. */
-export function partSearchWhere(q: ListPartsQuery): WhereOptions<Part> {
-  const where: Record<string | symbol, unknown> = { status: 'accepted' };
-  if (q.category) where.category = q.category;
-  if (q.gainMin !== undefined || q.gainMax !== undefined) {
-    where.gainMedianNmPerV = { [Op.ne]: null, ...(q.gainMin !== undefined ? { [Op.gte]: q.gainMin } : {}), ...(q.gainMax !== undefined ? { [Op.lte]: q.gainMax } : {}) };
-  }
-  if (q.minRuns !== undefined) where.acceptedRunCount = { [Op.gte]: q.minRuns };
-  if (q.maxVolts !== undefined) where.safeVolts = { [Op.lte]: q.maxVolts };
-  if (q.q) {
-    const like = `%${escapeLike(q.q)}%`;
-    where[Op.or] = [{ name: { [Op.like]: like } }, { salvageSource: { [Op.like]: like } }];
-  }
-  return where as WhereOptions<Part>;
-}
-
-function presentListItem(p: Part): PartListItemDto {
+function presentListItem(p: PartRow): PartListItemDto {
   return {
     ...presentPartSummary(p),
     gainMedianNmPerV: p.gainMedianNmPerV,
@@ -49,46 +25,23 @@ function presentListItem(p: Part): PartListItemDto {
     gainP75NmPerV: p.gainP75NmPerV,
     acceptedRunCount: p.acceptedRunCount,
     buildCount: p.buildCount,
-    createdAt: p.createdAt.toISOString(),
+    createdAt: new Date(p.createdAt).toISOString(),
   };
 }
 
-/**
- * The index that serves a sort (MariaDB-specific hint). Without it the optimizer scans
- * (status, gain) by status alone for descending sorts; see migration 20261201003200.
- */
-function sortIndex(q: ListPartsQuery): string | null {
-  if (q.q) return null;
-  switch (q.sort) {
-    case 'gain': return q.category ? 'parts_status_category_gain' : 'parts_status_gain_median_nm_per_v';
-    case '-gain': return q.category ? 'parts_status_category_gain_desc' : 'parts_status_gain_desc';
-    case '-runs': return q.gainMin === undefined && q.gainMax === undefined ? 'parts_status_runs_desc' : null;
-    case 'newest': return q.gainMin === undefined && q.gainMax === undefined ? 'parts_status_created_desc' : null;
-    default: return null;
-  }
-}
-
-/** Registry search with server-side filters, sort and paging. */
+/** Registry search with server-side filters, sort and paging (totals cached briefly, see registry-count-cache). */
 export async function listParts(q: ListPartsQuery): Promise<PartListDto> {
-  const where = partSearchWhere(q);
-  const index = sortIndex(q);
+  const sequelize = Part.sequelize!;
   const [rows, total] = await Promise.all([
-    Part.findAll({
-      where,
-      order: SORTS[q.sort],
-      limit: q.pageSize,
-      offset: (q.page - 1) * q.pageSize,
-      ...(index ? { indexHints: [{ type: IndexHints.FORCE, values: [index] }] } : {}),
-    }),
-    Part.count({ where }),
+    selectParts(sequelize, q, q.pageSize, (q.page - 1) * q.pageSize),
+    cachedRegistryCount(JSON.stringify([q.q, q.category, q.gainMin, q.gainMax, q.minRuns, q.maxVolts]), () => countParts(sequelize, q)),
   ]);
   return { items: rows.map(presentListItem), total, page: q.page, pageSize: q.pageSize };
 }
 
 /** The whole current search (up to EXPORT_LIMIT rows) for CSV or JSON download. */
 export async function exportParts(q: ListPartsQuery): Promise<PartListItemDto[]> {
-  const rows = await Part.findAll({ where: partSearchWhere(q), order: SORTS[q.sort], limit: EXPORT_LIMIT });
-  return rows.map(presentListItem);
+  return (await selectParts(Part.sequelize!, q, EXPORT_LIMIT, 0)).map(presentListItem);
 }
 
 /** Accepted part medians in log-spaced bins (5 per decade) for the range control's histogram. */

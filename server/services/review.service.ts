@@ -12,6 +12,7 @@ import { recordAudit } from './audit.service.ts';
 import { recomputePartStats } from './part-stats.service.ts';
 import { enqueueMail, kickOutbox } from './outbox.service.ts';
 import { decisionMail } from './review-mails.ts';
+import { invalidateRegistryCounts } from './registry-count-cache.ts';
 
 const notWaiting = (what: string) => new ConflictError(`This ${what} is not waiting for a decision.`, 'not_waiting');
 
@@ -97,6 +98,7 @@ export async function decidePart(actor: Actor | null, partId: number, input: Acc
     if (part.status !== 'proposed') throw notWaiting('part');
     const status = input.decision === 'accept' ? 'accepted' : 'rejected';
     await part.update({ status }, { transaction });
+    transaction.afterCommit(invalidateRegistryCounts);
     await recordAudit(me, { action: `part.${input.decision}`, targetType: 'part', targetId: part.id, note: input.note }, transaction);
     const proposer = await recipient(part.proposedById, transaction);
     if (proposer) {
