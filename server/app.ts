@@ -163,7 +163,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
     mailer,
     log,
     async close() {
-      outbox.stop();
+      await outbox.stop();
       store.stopExpiringSessions();
       mailer.close();
       await sequelize.close();

@@ -33,7 +33,8 @@ export function kickOutbox(): void {
 export interface OutboxWorker {
   /** Send what is due now; resolves with how many were sent. */
   flush(): Promise<number>;
-  stop(): void;
+  /** Stop the timer and wait for a pass in progress, so the pool can close under it safely. */
+  stop(): Promise<void>;
 }
 
 /** Sends queued mail in the background and retries failures with exponential backoff (30 s · 2^n). */
@@ -73,9 +74,10 @@ export function startOutboxWorker(mailer: Mailer, appUrl: string, log: Logger, i
   kick = () => void flush();
   return {
     flush,
-    stop: () => {
+    stop: async () => {
       clearInterval(timer);
       kick = () => {};
+      await running;
     },
   };
 }
