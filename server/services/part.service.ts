@@ -18,8 +18,9 @@ import { cachedRegistryCount } from './registry-count-cache.ts';
 export const EXPORT_LIMIT = 10_000;
 
 function presentListItem(p: PartRow): PartListItemDto {
+  const { geometry: _geometry, ...summary } = presentPartSummary(p);
   return {
-    ...presentPartSummary(p),
+    ...summary,
     gainMedianNmPerV: p.gainMedianNmPerV,
     gainP25NmPerV: p.gainP25NmPerV,
     gainP75NmPerV: p.gainP75NmPerV,

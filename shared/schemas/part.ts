@@ -75,8 +75,11 @@ export const listPartsQuery = z
   .refine((v) => v.gainMin === undefined || v.gainMax === undefined || v.gainMin <= v.gainMax, { message: 'gainMin must not exceed gainMax.', path: ['gainMin'] });
 export type ListPartsQuery = z.infer<typeof listPartsQuery>;
 
-/** A row of the registry table: the part summary plus its headline figures at the top level. */
-export interface PartListItemDto extends PartSummaryDto {
+/** A part as pickers show it (no geometry): registry rows and actuators' parts both fit. */
+export type PartChoiceDto = Omit<PartSummaryDto, 'geometry'>;
+
+/** A row of the registry table: the part without geometry, plus its headline figures at the top level. */
+export interface PartListItemDto extends PartChoiceDto {
   gainMedianNmPerV: number | null;
   gainP25NmPerV: number | null;
   gainP75NmPerV: number | null;

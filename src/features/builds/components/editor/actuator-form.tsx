@@ -3,7 +3,7 @@ import { Controller, useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
 import { ACTUATOR_AXES, ACTUATOR_DRIVES, actuatorDriveLabels, createActuatorInput, type ActuatorDto, type CreateActuatorInput } from '@shared/schemas/actuator.ts';
-import type { PartSummaryDto } from '@shared/schemas/part.ts';
+import type { PartChoiceDto } from '@shared/schemas/part.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { describedBy, Field, fieldMessage, FormError, inputClass } from './field.tsx';
 import { HighVoltageCaution } from './high-voltage-caution.tsx';
@@ -22,7 +22,7 @@ export function ActuatorForm({ idPrefix, actuator, submitLabel, onSave, onCancel
   onSave: (values: CreateActuatorInput) => Promise<unknown>;
   onCancel?: () => void;
 }) {
-  const [part, setPart] = useState<PartSummaryDto | undefined>(actuator?.part);
+  const [part, setPart] = useState<PartChoiceDto | undefined>(actuator?.part);
   const { register, handleSubmit, control, setError, formState: { errors, isSubmitting } } = useForm<z.input<typeof createActuatorInput>, unknown, CreateActuatorInput>({
     resolver: zodResolver(createActuatorInput),
     defaultValues: {

@@ -1,19 +1,19 @@
 import { useState } from 'react';
-import { PART_CATEGORIES, partCategoryLabels, type PartCategory, type PartSummaryDto } from '@shared/schemas/part.ts';
+import { PART_CATEGORIES, partCategoryLabels, type PartCategory, type PartChoiceDto } from '@shared/schemas/part.ts';
 import { usePartSearch } from '../../api/search-parts.ts';
 import { inputClass } from './field.tsx';
 import { sig } from './format.ts';
 import { useDebouncedValue } from './use-debounced-value.ts';
 
-const gainText = (p: PartSummaryDto) =>
+const gainText = (p: PartChoiceDto) =>
   p.stats.gainMedianNmPerV === null ? 'no accepted runs yet' : `median ${sig(p.stats.gainMedianNmPerV)} nm/V from ${p.stats.acceptedRunCount} run${p.stats.acceptedRunCount === 1 ? '' : 's'}`;
 
 /** Search listed parts and pick one (a radio group, so arrows and Space work). */
 export function PartPicker({ idPrefix, value, current, onChange, error }: {
   idPrefix: string;
   value: number | undefined;
-  current?: PartSummaryDto;
-  onChange: (part: PartSummaryDto) => void;
+  current?: PartChoiceDto;
+  onChange: (part: PartChoiceDto) => void;
   error?: string;
 }) {
   const [q, setQ] = useState('');
