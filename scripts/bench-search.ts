@@ -6,6 +6,8 @@ import { createServer, type AddressInfo } from 'node:net';
 import { setTimeout as sleep } from 'node:timers/promises';
 import autocannon from 'autocannon';
 import { createSequelize } from '../server/db/sequelize.ts';
+import { countPartsSql, selectPartsSql } from '../server/services/part-search.sql.ts';
+import { listPartsQuery } from '../shared/schemas/part.ts';
 import { quantileSorted } from '../shared/stats/quantiles.ts';
 import { benchConfig, scaleDbName, startBenchDb } from './lib/bench-db.ts';
 import { seedScale } from './seed-scale.ts';
@@ -76,12 +78,11 @@ try {
       rows.push({ size: size.parts, route, ...(await measure(`${base}${path}`)) });
     }
     const sq = createSequelize(benchConfig(scaleDbName(size.parts)).db);
-    const [plan] = await sq.query(
-      "EXPLAIN SELECT * FROM parts WHERE status = 'accepted' AND gain_median_nm_per_v IS NOT NULL AND gain_median_nm_per_v >= 80 AND gain_median_nm_per_v <= 150 ORDER BY gain_median_nm_per_v DESC, id DESC LIMIT 0, 25",
-    );
-    const [countPlan] = await sq.query(
-      "EXPLAIN SELECT COUNT(*) FROM parts WHERE status = 'accepted' AND gain_median_nm_per_v IS NOT NULL AND gain_median_nm_per_v >= 80 AND gain_median_nm_per_v <= 150",
-    );
+    const q = listPartsQuery.parse(Object.fromEntries(new URL(SEARCH, 'http://x').searchParams));
+    const page = selectPartsSql(q, q.pageSize, 0);
+    const count = countPartsSql(q);
+    const [plan] = await sq.query(`EXPLAIN ${page.sql}`, { replacements: page.replacements });
+    const [countPlan] = await sq.query(`EXPLAIN ${count.sql}`, { replacements: count.replacements });
     process.stdout.write(`\nEXPLAIN at ${size.parts} parts (page):\n${JSON.stringify(plan, null, 1)}\nEXPLAIN (count):\n${JSON.stringify(countPlan, null, 1)}\n`);
     await sq.close();
     await server.stop();

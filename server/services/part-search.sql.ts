@@ -56,19 +56,31 @@ function sortIndex(q: ListPartsQuery): string | null {
   }
 }
 
-/** One page (or, for exports, the first `limit` rows) of a search, as plain rows. */
-export async function selectParts(sequelize: Sequelize, q: ListPartsQuery, limit: number, offset: number): Promise<PartRow[]> {
+/** The page statement of a search (also what the benchmark EXPLAINs). */
+export function selectPartsSql(q: ListPartsQuery, limit: number, offset: number): { sql: string; replacements: unknown[] } {
   const where = partSearchWhere(q);
   const index = sortIndex(q);
-  return sequelize.query<PartRow>(
-    `SELECT ${COLUMNS} FROM parts ${index ? `FORCE INDEX (${index})` : ''} WHERE ${where.sql} ORDER BY ${ORDER[q.sort]} LIMIT ? OFFSET ?`,
-    { replacements: [...where.params, limit, offset], type: QueryTypes.SELECT },
-  );
+  return {
+    sql: `SELECT ${COLUMNS} FROM parts ${index ? `FORCE INDEX (${index})` : ''} WHERE ${where.sql} ORDER BY ${ORDER[q.sort]} LIMIT ? OFFSET ?`,
+    replacements: [...where.params, limit, offset],
+  };
+}
+
+/** The count statement of a search. */
+export function countPartsSql(q: ListPartsQuery): { sql: string; replacements: unknown[] } {
+  const where = partSearchWhere(q);
+  return { sql: `SELECT COUNT(*) AS n FROM parts WHERE ${where.sql}`, replacements: where.params };
+}
+
+/** One page (or, for exports, the first `limit` rows) of a search, as plain rows. */
+export async function selectParts(sequelize: Sequelize, q: ListPartsQuery, limit: number, offset: number): Promise<PartRow[]> {
+  const { sql, replacements } = selectPartsSql(q, limit, offset);
+  return sequelize.query<PartRow>(sql, { replacements, type: QueryTypes.SELECT });
 }
 
 /** How many parts match a search. */
 export async function countParts(sequelize: Sequelize, q: ListPartsQuery): Promise<number> {
-  const where = partSearchWhere(q);
-  const [row] = await sequelize.query<{ n: number | bigint }>(`SELECT COUNT(*) AS n FROM parts WHERE ${where.sql}`, { replacements: where.params, type: QueryTypes.SELECT });
+  const { sql, replacements } = countPartsSql(q);
+  const [row] = await sequelize.query<{ n: number | bigint }>(sql, { replacements, type: QueryTypes.SELECT });
   return Number(row?.n ?? 0);
 }
