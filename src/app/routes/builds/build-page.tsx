@@ -5,7 +5,7 @@ import { useSession } from '@/features/session/api/get-session.ts';
 import { buildQueries } from '@/features/builds/api/build-queries.ts';
 import { BuildNotFound } from '@/features/builds/components/read/build-not-found.tsx';
 import { BuildView } from '@/features/builds/components/read/build-view.tsx';
-import { LoadError, Loading } from '@/features/builds/components/read/load-states.tsx';
+import { LoadError, Loading } from '@/components/ui/load-states.tsx';
 
 const parseId = (raw: string | undefined) => (raw && /^\d{1,10}$/.test(raw) ? Number(raw) : null);
 

@@ -7,7 +7,7 @@ import { useSession } from '@/features/session/api/get-session.ts';
 import { buildQueries } from '@/features/builds/api/build-queries.ts';
 import { BuildFilters } from '@/features/builds/components/read/build-filters.tsx';
 import { BuildResults } from '@/features/builds/components/read/build-results.tsx';
-import { LoadError, Loading } from '@/features/builds/components/read/load-states.tsx';
+import { LoadError, Loading } from '@/components/ui/load-states.tsx';
 import { useBuildSearch } from '@/features/builds/components/read/use-build-search.ts';
 
 /** /builds: published build logs, searchable by words and instrument kind, a page at a time. */

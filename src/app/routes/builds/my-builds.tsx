@@ -4,7 +4,7 @@ import { AnchorButton, LinkButton } from '@/components/ui/link-button.tsx';
 import { paths } from '@/config/paths.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
 import { buildQueries } from '@/features/builds/api/build-queries.ts';
-import { LoadError, Loading } from '@/features/builds/components/read/load-states.tsx';
+import { LoadError, Loading } from '@/components/ui/load-states.tsx';
 import { MyBuildRow } from '@/features/builds/components/read/my-build-row.tsx';
 
 const lead = 'Every build you have started, in any state, with notes from the review desk.';

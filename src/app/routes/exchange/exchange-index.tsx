@@ -5,7 +5,7 @@ import { Pager } from '@/components/ui/pager.tsx';
 import { listingQueries } from '@/features/exchange/api/listing-queries.ts';
 import { ListingCard } from '@/features/exchange/components/listing-card.tsx';
 import { ListingFilters } from '@/features/exchange/components/listing-filters.tsx';
-import { LoadError, Loading } from '@/features/exchange/components/load-states.tsx';
+import { LoadError, Loading } from '@/components/ui/load-states.tsx';
 import { useListingSearch } from '@/features/exchange/components/use-listing-search.ts';
 import { ExchangeActions } from './exchange-nav.tsx';
 

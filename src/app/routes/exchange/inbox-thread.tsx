@@ -7,7 +7,7 @@ import { ApiError } from '@/lib/api-client.ts';
 import { paths } from '@/config/paths.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
 import { inboxQueries } from '@/features/exchange/api/inbox-queries.ts';
-import { LoadError, Loading } from '@/features/exchange/components/load-states.tsx';
+import { LoadError, Loading } from '@/components/ui/load-states.tsx';
 import { ThreadView } from '@/features/exchange/components/thread-view.tsx';
 import { ExchangeNotFound, parseId } from './not-found.tsx';
 

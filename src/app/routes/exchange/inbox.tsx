@@ -6,7 +6,7 @@ import { AnchorButton, LinkButton } from '@/components/ui/link-button.tsx';
 import { paths } from '@/config/paths.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
 import { inboxQueries } from '@/features/exchange/api/inbox-queries.ts';
-import { LoadError, Loading } from '@/features/exchange/components/load-states.tsx';
+import { LoadError, Loading } from '@/components/ui/load-states.tsx';
 import { ThreadList } from '@/features/exchange/components/thread-list.tsx';
 
 /** /inbox: conversations about listings, mine and others', latest first. */

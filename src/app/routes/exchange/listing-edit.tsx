@@ -7,7 +7,7 @@ import { paths } from '@/config/paths.ts';
 import { listingQueries } from '@/features/exchange/api/listing-queries.ts';
 import { useUpdateListing } from '@/features/exchange/api/listing-mutations.ts';
 import { ListingForm } from '@/features/exchange/components/listing-form.tsx';
-import { LoadError, Loading } from '@/features/exchange/components/load-states.tsx';
+import { LoadError, Loading } from '@/components/ui/load-states.tsx';
 import { ExchangeNotFound, parseId } from './not-found.tsx';
 
 /** /exchange/:listingId/edit: the owner changes their listing. */

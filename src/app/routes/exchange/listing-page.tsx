@@ -5,7 +5,7 @@ import { paths } from '@/config/paths.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
 import { listingQueries } from '@/features/exchange/api/listing-queries.ts';
 import { ListingView } from '@/features/exchange/components/listing-view.tsx';
-import { LoadError, Loading } from '@/features/exchange/components/load-states.tsx';
+import { LoadError, Loading } from '@/components/ui/load-states.tsx';
 import { ExchangeNotFound, parseId } from './not-found.tsx';
 
 /** /exchange/:listingId: a listing's details, the contact form, and the owner's and moderators' controls. */

@@ -6,7 +6,7 @@ import { AnchorButton, LinkButton } from '@/components/ui/link-button.tsx';
 import { paths } from '@/config/paths.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
 import { listingQueries } from '@/features/exchange/api/listing-queries.ts';
-import { LoadError, Loading } from '@/features/exchange/components/load-states.tsx';
+import { LoadError, Loading } from '@/components/ui/load-states.tsx';
 import { MyListingRow } from '@/features/exchange/components/my-listing-row.tsx';
 import { ExchangeActions } from './exchange-nav.tsx';
 

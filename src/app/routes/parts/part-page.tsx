@@ -4,7 +4,7 @@ import { ApiError } from '@/lib/api-client.ts';
 import { paths } from '@/config/paths.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
 import { partQueries } from '@/features/parts/api/part-queries.ts';
-import { LoadError, Loading } from '@/features/parts/components/load-states.tsx';
+import { LoadError, Loading } from '@/components/ui/load-states.tsx';
 import { PartView } from '@/features/parts/components/part-view.tsx';
 
 const parseId = (raw: string | undefined) => (raw && /^\d{1,10}$/.test(raw) && Number(raw) > 0 ? Number(raw) : null);

@@ -4,7 +4,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { paths } from '@/config/paths.ts';
 import { ApiError } from '@/lib/api-client.ts';
 import { useSendListingMessage } from '../api/message-mutations.ts';
-import { FormError, inputClass } from './form-bits.tsx';
+import { FormError, inputClass } from '@/components/ui/form-bits.tsx';
 
 /** Why a message did not go: our words for sending too fast, the server's otherwise. */
 export function sendFailure(error: unknown): string {

@@ -2,7 +2,7 @@ import { useState, type FormEvent } from 'react';
 import type { ListingDto } from '@shared/schemas/listing.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { useHideListing } from '../api/listing-mutations.ts';
-import { FormError, inputClass } from './form-bits.tsx';
+import { FormError, inputClass } from '@/components/ui/form-bits.tsx';
 
 /** Moderators hide a listing (or show it again) with a note that goes to the audit trail and to the owner. */
 export function HideListingForm({ listing }: { listing: ListingDto }) {

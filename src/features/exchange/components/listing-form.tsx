@@ -3,7 +3,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import { createListingInput, LISTING_CONDITIONS, LISTING_KINDS, listingConditionLabels, type CreateListingInput } from '@shared/schemas/listing.ts';
 import { Button } from '@/components/ui/button.tsx';
-import { applyServerErrors, describe, Field, FormError, inputClass, textOrUndefined } from './form-bits.tsx';
+import { applyServerErrors, describe, Field, FormError, inputClass, textOrUndefined } from '@/components/ui/form-bits.tsx';
 import { PartPicker } from './part-picker.tsx';
 import { PriceFields } from './price-fields.tsx';
 

@@ -4,7 +4,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { LinkButton } from '@/components/ui/link-button.tsx';
 import { paths } from '@/config/paths.ts';
 import { useUpdateListing } from '../api/listing-mutations.ts';
-import { FormError } from './form-bits.tsx';
+import { FormError } from '@/components/ui/form-bits.tsx';
 
 /** The state changes an owner can make from a state: open ⇄ reserved, either → closed (for good). */
 export const nextStates: Record<ListingStatus, { to: ListingStatus; label: string }[]> = {

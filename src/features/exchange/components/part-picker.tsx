@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { partCategoryLabels } from '@shared/schemas/part.ts';
 import { usePartOptions, usePickedPart } from '../api/part-options.ts';
-import { describe, Field, inputClass } from './form-bits.tsx';
+import { describe, Field, inputClass } from '@/components/ui/form-bits.tsx';
 
 /**
  * Pick a listed part: type to narrow the list, then choose it in the select below (both labelled,

@@ -1,7 +1,7 @@
 import type { UseFormRegister, FieldErrors } from 'react-hook-form';
 import type { z } from 'zod';
 import { PRICE_KINDS, type createListingInput, type PriceKind } from '@shared/schemas/listing.ts';
-import { describe, Field, inputClass, numberOrNull } from './form-bits.tsx';
+import { describe, Field, inputClass, numberOrNull } from '@/components/ui/form-bits.tsx';
 
 type Values = z.input<typeof createListingInput>;
 const priceKindLabels: Record<PriceKind, string> = { price: 'For a price', free: 'Free', swap: 'Swap' };

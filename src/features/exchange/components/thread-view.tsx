@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { paths } from '@/config/paths.ts';
 import { useReplyInThread } from '../api/message-mutations.ts';
 import { sendFailure } from './contact-form.tsx';
-import { FormError, inputClass } from './form-bits.tsx';
+import { FormError, inputClass } from '@/components/ui/form-bits.tsx';
 import { formatMoment, kindLabels } from './labels.ts';
 
 function ReplyBox({ thread }: { thread: ThreadDto }) {

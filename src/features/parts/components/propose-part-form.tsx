@@ -4,7 +4,7 @@ import type { z } from 'zod';
 import { PART_CATEGORIES, partCategoryLabels, proposePartInput, type ProposePartInput } from '@shared/schemas/part.ts';
 import { materialKeys } from '@shared/workbench/materials.ts';
 import { Button } from '@/components/ui/button.tsx';
-import { applyServerErrors, describe, Field, FormError, inputClass, numberOrNull, textOrUndefined } from './form-bits.tsx';
+import { applyServerErrors, describe, Field, FormError, inputClass, numberOrNull, textOrUndefined } from '@/components/ui/form-bits.tsx';
 import { GEOMETRY_KEYS, geometryFor } from './geometry-fields.ts';
 
 const FIELDS = ['category', 'name', 'salvageSource', 'material', ...GEOMETRY_KEYS, 'capacitanceNf', 'safeVolts', 'notes'] as const;

@@ -3,7 +3,7 @@ import { REPORT_REASONS, reportReasonLabels, type ReportReason } from '@shared/s
 import { Button } from '@/components/ui/button.tsx';
 import { ApiError } from '@/lib/api-client.ts';
 import { useReportPart } from '../api/report-part.ts';
-import { FormError, inputClass } from './form-bits.tsx';
+import { FormError, inputClass } from '@/components/ui/form-bits.tsx';
 
 const failure = (e: unknown) =>
   e instanceof ApiError && e.status === 429 ? 'You have sent many reports in a short time; try again later.' : e instanceof Error ? e.message : 'The report was not sent; try again.';

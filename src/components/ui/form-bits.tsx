@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
 import { ApiError } from '@/lib/api-client.ts';
 
-/** Text inputs, selects and text areas of the exchange forms (16 px text so phones do not zoom). */
+/** Text inputs, selects and text areas of the app's forms (16 px text so phones do not zoom). */
 export const inputClass = 'w-full rounded-md border border-rule bg-white px-2.5 py-1.5 text-base text-ink aria-[invalid=true]:border-danger';
 
 /** A labelled control with an optional hint and its error; the control carries `id={id}` and `{...describe(id, error, !!hint)}`. */
