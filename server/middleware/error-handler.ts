@@ -15,9 +15,13 @@ export const apiNotFound: RequestHandler = (req, res) => {
 
 function isDbDown(err: unknown): boolean {
   if (err instanceof ConnectionError || err instanceof TimeoutError) return true;
-  const e = err as { name?: string; original?: { code?: string }; parent?: { code?: string }; code?: string };
+  type Coded = { code?: string; sqlState?: string };
+  const e = err as { name?: string; original?: Coded; parent?: Coded } & Coded;
   const code = e?.original?.code ?? e?.parent?.code ?? e?.code ?? '';
-  return /ECONNREFUSED|ER_GET_CONNECTION_TIMEOUT|ER_CONNECTION_TIMEOUT|ER_SOCKET_UNEXPECTED_CLOSE|ECONNRESET|PROTOCOL_CONNECTION_LOST|ER_CONNECTION_ALREADY_CLOSED|ER_POOL_ALREADY_CLOSED/.test(code)
+  const sqlState = e?.original?.sqlState ?? e?.parent?.sqlState ?? e?.sqlState ?? '';
+  // SQLSTATE class 08 is "connection exception" (SQL standard); the codes are the driver's and Node's.
+  return /ECONNREFUSED|ER_GET_CONNECTION_TIMEOUT|ER_CONNECTION_TIMEOUT|ER_SOCKET_UNEXPECTED_CLOSE|ECONNRESET|PROTOCOL_CONNECTION_LOST|ER_CONNECTION_ALREADY_CLOSED|ER_CMD_CONNECTION_CLOSED|ER_POOL_ALREADY_CLOSED/.test(code)
+    || sqlState.startsWith('08')
     || e?.name === 'SequelizeConnectionAcquireTimeoutError';
 }
 
