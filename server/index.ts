@@ -39,12 +39,14 @@ let closing = false;
 async function shutdown(signal: string) {
   if (closing) return;
   closing = true;
+  // Stop listening first, so that once "shutting down" is logged no new connection is accepted.
+  const closed = new Promise<void>((resolve) => server.once('close', () => resolve()));
+  server.close();
+  server.closeIdleConnections();
   log.info({ signal }, 'shutting down');
   const force = setTimeout(() => { log.error('forced exit after 10 s'); process.exit(1); }, 10_000);
   force.unref();
-  server.close();
-  server.closeIdleConnections();
-  await new Promise<void>((resolve) => server.once('close', () => resolve()));
+  await closed;
   await handle.close();
   await oauth?.close();
   await catcher?.close();
