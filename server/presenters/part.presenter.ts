@@ -1,4 +1,4 @@
-import type { PartSummaryDto } from '@shared/schemas/part.ts';
+import type { PartChoiceDto, PartSummaryDto } from '@shared/schemas/part.ts';
 import type { Part } from '../models/part.model.ts';
 
 /** The columns a part summary needs: a Part instance or a plain row from the registry search. */
@@ -7,8 +7,8 @@ export type PartRow = Pick<Part,
   | 'outerDiameterMm' | 'wallMm' | 'layers' | 'acceptedRunCount' | 'buildCount' | 'gainMedianNmPerV' | 'gainP25NmPerV' | 'gainP75NmPerV'
   | 'gainMinNmPerV' | 'gainMaxNmPerV' | 'hysteresisMedianPct' | 'createdAt'>;
 
-/** A part with its geometry and pooled statistics. */
-export function presentPartSummary(p: PartRow): PartSummaryDto {
+/** A part as pickers and registry rows show it: no geometry. */
+export function presentPartChoice(p: PartRow): PartChoiceDto {
   return {
     id: p.id,
     name: p.name,
@@ -18,14 +18,6 @@ export function presentPartSummary(p: PartRow): PartSummaryDto {
     material: p.material,
     safeVolts: p.safeVolts,
     capacitanceNf: p.capacitanceNf,
-    geometry: {
-      lengthMm: p.lengthMm,
-      widthMm: p.widthMm,
-      thicknessMm: p.thicknessMm,
-      outerDiameterMm: p.outerDiameterMm,
-      wallMm: p.wallMm,
-      layers: p.layers,
-    },
     stats: {
       acceptedRunCount: p.acceptedRunCount,
       buildCount: p.buildCount,
@@ -35,6 +27,21 @@ export function presentPartSummary(p: PartRow): PartSummaryDto {
       gainMinNmPerV: p.gainMinNmPerV,
       gainMaxNmPerV: p.gainMaxNmPerV,
       hysteresisMedianPct: p.hysteresisMedianPct,
+    },
+  };
+}
+
+/** A part with its geometry and pooled statistics. */
+export function presentPartSummary(p: PartRow): PartSummaryDto {
+  return {
+    ...presentPartChoice(p),
+    geometry: {
+      lengthMm: p.lengthMm,
+      widthMm: p.widthMm,
+      thicknessMm: p.thicknessMm,
+      outerDiameterMm: p.outerDiameterMm,
+      wallMm: p.wallMm,
+      layers: p.layers,
     },
   };
 }

@@ -8,8 +8,8 @@ import { ConflictError, ValidationError } from '../errors.ts';
 import { loadBuildForEdit, loadBuildForView, markEdited } from './build-access.ts';
 import { presentBuildDetail, summarizeBuilds } from './build-read.service.ts';
 import { filesByHash, pruneUnreferenced } from './photo.service.ts';
+import { containsPattern } from '../db/like-pattern.ts';
 
-const escapeLike = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 /** Start a build as a draft owned by the actor. */
 export async function createBuild(actor: Actor | null, input: CreateBuildInput): Promise<BuildDto> {
@@ -23,7 +23,7 @@ export async function listPublishedBuilds(query: ListBuildsQuery): Promise<Build
   const where: WhereOptions<Build> = { status: 'published' };
   if (query.kind) Object.assign(where, { instrumentKind: query.kind });
   if (query.q) {
-    const like = `%${escapeLike(query.q)}%`;
+    const like = containsPattern(query.q);
     Object.assign(where, { [Op.or]: [{ title: { [Op.like]: like } }, { summary: { [Op.like]: like } }, { body: { [Op.like]: like } }] });
   }
   const { rows, count } = await Build.findAndCountAll({

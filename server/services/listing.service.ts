@@ -8,8 +8,8 @@ import { User } from '../models/user.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { NotFoundError, ValidationError } from '../errors.ts';
 import { recordAudit } from './audit.service.ts';
+import { containsPattern } from '../db/like-pattern.ts';
 
-const escapeLike = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 /** Listings with their parts, owners and photos in a fixed number of queries. */
 async function presentListings(actor: Actor | null, rows: Listing[]): Promise<ListingDto[]> {
@@ -59,15 +59,15 @@ export async function listListings(actor: Actor | null, q: ListListingsQuery): P
   if (q.condition) where.condition = q.condition;
   if (q.partId) where.partId = q.partId;
   if (q.freeOnly) where.priceKind = 'free';
-  if (q.region) where.region = { [Op.like]: `%${escapeLike(q.region)}%` };
+  if (q.region) where.region = { [Op.like]: containsPattern(q.region) };
   const partWhere: Record<string | symbol, unknown> = {};
   if (q.category) partWhere.category = q.category;
-  if (q.q) partWhere[Op.or] = [{ name: { [Op.like]: `%${escapeLike(q.q)}%` } }, { salvageSource: { [Op.like]: `%${escapeLike(q.q)}%` } }];
+  if (q.q) partWhere[Op.or] = [{ name: { [Op.like]: containsPattern(q.q) } }, { salvageSource: { [Op.like]: containsPattern(q.q) } }];
   if (q.category || q.q) {
     const parts = await Part.findAll({ where: partWhere, attributes: ['id'], limit: 5000 });
     const ids = parts.map((p) => p.id);
     where[Op.and] = q.q
-      ? [{ [Op.or]: [{ partId: ids }, { notes: { [Op.like]: `%${escapeLike(q.q)}%` } }] }, ...(q.category ? [{ partId: ids }] : [])]
+      ? [{ [Op.or]: [{ partId: ids }, { notes: { [Op.like]: containsPattern(q.q) } }] }, ...(q.category ? [{ partId: ids }] : [])]
       : [{ partId: ids }];
   }
   const { rows, count } = await Listing.findAndCountAll({ where: where as WhereOptions<Listing>, order: [['createdAt', 'DESC'], ['id', 'DESC']], limit: q.pageSize, offset: (q.page - 1) * q.pageSize });

@@ -4,6 +4,7 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
 import type { ListPartsQuery } from '@shared/schemas/part.ts';
 import type { PartRow } from '../presenters/part.presenter.ts';
+import { containsPattern } from '../db/like-pattern.ts';
 
 const COLUMNS = `id, category, name, salvage_source AS salvageSource, material, length_mm AS lengthMm, width_mm AS widthMm,
   thickness_mm AS thicknessMm, outer_diameter_mm AS outerDiameterMm, wall_mm AS wallMm, layers, capacitance_nf AS capacitanceNf,
@@ -20,7 +21,6 @@ const ORDER: Record<ListPartsQuery['sort'], string> = {
   name: 'name ASC, id ASC',
 };
 
-const escapeLike = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 /** WHERE of a search: listed parts only; a gain range matches the median and drops parts without runs. */
 export function partSearchWhere(q: ListPartsQuery): { sql: string; params: unknown[] } {
@@ -33,7 +33,7 @@ export function partSearchWhere(q: ListPartsQuery): { sql: string; params: unkno
   if (q.minRuns !== undefined) { parts.push('accepted_run_count >= ?'); params.push(q.minRuns); }
   if (q.maxVolts !== undefined) { parts.push('safe_volts <= ?'); params.push(q.maxVolts); }
   if (q.q) {
-    const like = `%${escapeLike(q.q)}%`;
+    const like = containsPattern(q.q);
     parts.push('(name LIKE ? OR salvage_source LIKE ?)');
     params.push(like, like);
   }

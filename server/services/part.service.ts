@@ -10,7 +10,7 @@ import { User } from '../models/user.model.ts';
 import { Listing } from '../models/listing.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { NotFoundError } from '../errors.ts';
-import { presentPartSummary, type PartRow } from '../presenters/part.presenter.ts';
+import { presentPartChoice, presentPartSummary, type PartRow } from '../presenters/part.presenter.ts';
 import { countParts, selectParts } from './part-search.sql.ts';
 import { cachedRegistryCount } from './registry-count-cache.ts';
 
@@ -18,9 +18,8 @@ import { cachedRegistryCount } from './registry-count-cache.ts';
 export const EXPORT_LIMIT = 10_000;
 
 function presentListItem(p: PartRow): PartListItemDto {
-  const { geometry: _geometry, ...summary } = presentPartSummary(p);
   return {
-    ...summary,
+    ...presentPartChoice(p),
     gainMedianNmPerV: p.gainMedianNmPerV,
     gainP25NmPerV: p.gainP25NmPerV,
     gainP75NmPerV: p.gainP75NmPerV,
