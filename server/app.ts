@@ -10,6 +10,7 @@ import type { Sequelize } from 'sequelize';
 import type { Config } from './config.ts';
 import { createLogger, type Logger } from './logger.ts';
 import { createSequelize } from './db/sequelize.ts';
+import { closeReadPool } from './db/read-pool.ts';
 import { initModels } from './models/index.ts';
 import { createPassport } from './auth/passport.ts';
 import { createMailer, type Mailer } from './services/mail.service.ts';
@@ -166,6 +167,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
       await outbox.stop();
       store.stopExpiringSessions();
       mailer.close();
+      await closeReadPool(sequelize);
       await sequelize.close();
     },
   };

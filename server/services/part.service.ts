@@ -11,13 +11,13 @@ import { Listing } from '../models/listing.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { NotFoundError } from '../errors.ts';
 import { presentPartChoice, presentPartSummary, type PartRow } from '../presenters/part.presenter.ts';
-import { countParts, selectParts } from './part-search.sql.ts';
+import { countParts, selectParts, type PartSearchRow } from './part-search.sql.ts';
 import { cachedRegistryCount } from './registry-count-cache.ts';
 
 /** Most rows one export returns. */
 export const EXPORT_LIMIT = 10_000;
 
-function presentListItem(p: PartRow): PartListItemDto {
+function presentListItem(p: PartSearchRow): PartListItemDto {
   return {
     ...presentPartChoice(p),
     gainMedianNmPerV: p.gainMedianNmPerV,
@@ -25,7 +25,7 @@ function presentListItem(p: PartRow): PartListItemDto {
     gainP75NmPerV: p.gainP75NmPerV,
     acceptedRunCount: p.acceptedRunCount,
     buildCount: p.buildCount,
-    createdAt: new Date(p.createdAt).toISOString(),
+    createdAt: p.createdAt,
   };
 }
 
