@@ -5,7 +5,7 @@ import { partCategoryLabels } from '@shared/schemas/part.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { useDeleteActuator, useUpdateActuator } from '../../api/actuators.ts';
 import { ActuatorForm } from './actuator-form.tsx';
-import { ConfirmButton } from './confirm-button.tsx';
+import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { sig } from './format.ts';
 import { RunForm } from './run-form.tsx';
 import { errorMessage } from './server-errors.ts';

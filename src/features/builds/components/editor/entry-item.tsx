@@ -3,7 +3,7 @@ import type { LogEntryDto } from '@shared/schemas/build.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Markdown } from '@/components/ui/markdown.tsx';
 import { useDeleteEntry, useUpdateEntry } from '../../api/entries.ts';
-import { ConfirmButton } from './confirm-button.tsx';
+import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { EntryForm } from './entry-form.tsx';
 import { errorMessage } from './server-errors.ts';
 

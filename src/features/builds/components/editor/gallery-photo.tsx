@@ -1,7 +1,7 @@
 import type { LogEntryDto, PhotoDto } from '@shared/schemas/build.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { useDeletePhoto, useSetCoverPhoto, useUpdatePhoto } from '../../api/photos.ts';
-import { ConfirmButton } from './confirm-button.tsx';
+import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { inputClass } from './field.tsx';
 import { PhotoAltEditor } from './photo-alt-editor.tsx';
 import { errorMessage } from './server-errors.ts';

@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { paths } from '@/config/paths.ts';
 import { useSubmitBuild } from '../../api/submit-build.ts';
 import { useDeleteBuild } from '../../api/delete-build.ts';
-import { ConfirmButton } from './confirm-button.tsx';
+import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { EditorSection } from './editor-section.tsx';
 import { errorMessage } from './server-errors.ts';
 

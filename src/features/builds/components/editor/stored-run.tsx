@@ -5,7 +5,7 @@ import { displacementUnitLabels, toNm, toVolts, voltageUnitLabels } from '@share
 import { StatusBadge, type BadgeTone } from '@/components/ui/status-badge.tsx';
 import { Button } from '@/components/ui/button.tsx';
 import { useDeleteRun } from '../../api/delete-run.ts';
-import { ConfirmButton } from './confirm-button.tsx';
+import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { FitSummary } from './fit-summary.tsx';
 import { sig } from './format.ts';
 import { errorMessage } from './server-errors.ts';

@@ -4,7 +4,7 @@ import { Markdown } from '@/components/ui/markdown.tsx';
 import { ActuatorList } from './actuator-list.tsx';
 import { BuildHeader } from './build-header.tsx';
 import { LogEntries } from './log-entries.tsx';
-import { PhotoGrid } from './photo-grid.tsx';
+import { PhotoGrid } from '@/components/photos/photo-grid.tsx';
 import { ReviewNotices } from './review-notices.tsx';
 
 function Section({ id, title, children }: { id: string; title: string; children: ReactNode }) {

@@ -1,7 +1,7 @@
 import type { LogEntryDto } from '@shared/schemas/build.ts';
 import { Markdown } from '@/components/ui/markdown.tsx';
 import { formatDate } from './format.ts';
-import { PhotoGrid } from './photo-grid.tsx';
+import { PhotoGrid } from '@/components/photos/photo-grid.tsx';
 
 /** The build's log entries in date order, each with its own photos. */
 export function LogEntries({ entries }: { entries: LogEntryDto[] }) {

@@ -1,5 +1,4 @@
 import { ApiError } from '@/lib/api-client.ts';
-import { errorMessage } from './server-errors.ts';
 
 /** Largest photo the server accepts (server/services/photo-storage.ts MAX_FILE_BYTES); checked here only to save a wasted upload. */
 export const MAX_PHOTO_BYTES = 20 * 1024 * 1024;
@@ -7,10 +6,17 @@ export const MAX_PHOTO_BYTES = 20 * 1024 * 1024;
 export const PHOTO_ACCEPT = 'image/jpeg,image/png,image/webp,image/avif';
 
 const UNREADABLE = 'That file is not a photo we can read.';
+const FALLBACK = 'That did not work; try again.';
+
+/** What to tell a person about a failed photo request (upload or delete), in one sentence. */
+export function requestErrorMessage(error: unknown): string {
+  if (error instanceof Error && error.message) return error.message;
+  return FALLBACK;
+}
 
 /** One upload's failure in words a maker can act on. */
 export function photoErrorMessage(error: unknown): string {
-  if (!(error instanceof ApiError)) return errorMessage(error);
+  if (!(error instanceof ApiError)) return requestErrorMessage(error);
   switch (error.code) {
     case 'unsupported_media_type':
       return `${UNREADABLE} ${error.message}`;
@@ -25,7 +31,7 @@ export function photoErrorMessage(error: unknown): string {
       return first?.message ?? error.message;
     }
     default:
-      return errorMessage(error);
+      return requestErrorMessage(error);
   }
 }
 

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Button } from '@/components/ui/button.tsx';
-import { describedBy, inputClass } from './field.tsx';
+import { describe, inputClass } from '@/components/ui/form-bits.tsx';
 import { fileSize } from './photo-errors.ts';
 import type { QueuedPhoto } from './use-photo-queue.ts';
 
@@ -40,8 +40,8 @@ export function UploadQueueItem({ item, onAlt, onRemove }: { item: QueuedPhoto; 
         {item.state !== 'done' && (
           <div>
             <label htmlFor={id} className="mb-1 block text-xs font-medium">Alt text for {item.file.name} (required)</label>
-            <input id={id} value={item.alt} disabled={busy} maxLength={300} className={inputClass} placeholder="What the photo shows, for people who cannot see it"
-              onChange={(e) => onAlt(e.target.value)} {...describedBy(id, altError)} />
+            <input id={id} value={item.alt} disabled={busy} maxLength={300} className={`${inputClass} disabled:bg-paper-deep`} placeholder="What the photo shows, for people who cannot see it"
+              onChange={(e) => onAlt(e.target.value)} {...describe(id, altError)} />
             {altError && <p id={`${id}-error`} className="mt-1 text-sm text-danger">{altError}</p>}
           </div>
         )}

@@ -1,14 +1,16 @@
 import { useState } from 'react';
-import type { PhotoDto } from '@shared/schemas/build.ts';
-import { Lightbox } from '@/components/ui/lightbox.tsx';
+import { Lightbox, type LightboxImage } from '@/components/ui/lightbox.tsx';
+
+/** A stored photo as the grid needs it: the lightbox's picture plus its thumbnail. */
+export type GridPhoto = LightboxImage & { thumbUrl: string };
 
 /** Thumbnails that open the large photo in the lightbox; the alt text is the caption. */
-export function PhotoGrid({ photos, label }: { photos: PhotoDto[]; label: string }) {
+export function PhotoGrid({ photos, label, columns = 'grid-cols-2 sm:grid-cols-3 md:grid-cols-4' }: { photos: GridPhoto[]; label: string; columns?: string }) {
   const [open, setOpen] = useState<number | null>(null);
   if (photos.length === 0) return null;
   return (
     <>
-      <ul aria-label={label} className="grid grid-cols-2 gap-2 sm:grid-cols-3 md:grid-cols-4">
+      <ul aria-label={label} className={`grid gap-2 ${columns}`}>
         {photos.map((p, i) => (
           <li key={p.id}>
             <button

@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { useUploadPhoto } from '../../api/upload-photos.ts';
+import type { PhotoUploadVariables } from '@/lib/photo-upload.ts';
 import { fileSize, MAX_PHOTO_BYTES, photoErrorMessage } from './photo-errors.ts';
 
 export type QueuedState = 'ready' | 'queued' | 'uploading' | 'processing' | 'done' | 'failed';
@@ -17,12 +17,17 @@ export interface QueuedPhoto {
   altMissing?: boolean;
 }
 
+/**
+ * Sends one photo (an upload mutation's `mutateAsync`); `E` is whatever else the place needs with
+ * every file (a build's log entry), handed to `uploadAll`.
+ */
+export type SendPhoto<E extends object> = (photo: PhotoUploadVariables & E) => Promise<unknown>;
+
 let counter = 0;
 
 /** The upload list: each file is sent as its own request (in turn), so each has its own progress bar and error. */
-export function usePhotoQueue(buildId: number) {
+export function usePhotoQueue<E extends object>(send: SendPhoto<E>) {
   const [items, setItems] = useState<QueuedPhoto[]>([]);
-  const upload = useUploadPhoto(buildId);
   const aborts = useRef(new Map<string, AbortController>());
   const urls = useRef(new Set<string>());
   const removed = useRef(new Set<string>());
@@ -66,14 +71,14 @@ export function usePhotoQueue(buildId: number) {
 
   const setAlt = useCallback((key: string, alt: string) => patch(key, { alt, altMissing: false }), [patch]);
 
-  const sendOne = useCallback(async (item: QueuedPhoto, entryId: number | null) => {
+  const sendOne = useCallback(async (item: QueuedPhoto, extra: E) => {
     if (removed.current.has(item.key)) return;
     const controller = new AbortController();
     aborts.current.set(item.key, controller);
     patch(item.key, { state: 'uploading', progress: 0, error: undefined });
     try {
-      await upload.mutateAsync({
-        file: item.file, alt: item.alt.trim(), entryId, signal: controller.signal,
+      await send({
+        ...extra, file: item.file, alt: item.alt.trim(), signal: controller.signal,
         onProgress: (f) => patch(item.key, { progress: f, state: f >= 1 ? 'processing' : 'uploading' }),
       });
       patch(item.key, { state: 'done', progress: 1 });
@@ -82,10 +87,10 @@ export function usePhotoQueue(buildId: number) {
     } finally {
       aborts.current.delete(item.key);
     }
-  }, [patch, upload]);
+  }, [patch, send]);
 
   /** Send every file that is ready (or failed and may be retried); returns the keys still lacking alt text. */
-  const uploadAll = useCallback((entryId: number | null): string[] => {
+  const uploadAll = useCallback((extra: E): string[] => {
     const waiting = items.filter((i) => i.state === 'ready' || (i.state === 'failed' && i.file.size <= MAX_PHOTO_BYTES));
     const missing = waiting.filter((i) => !i.alt.trim()).map((i) => i.key);
     if (missing.length > 0) {
@@ -95,7 +100,7 @@ export function usePhotoQueue(buildId: number) {
     // One after another, so the gallery keeps the order the files were picked in.
     setItems((list) => list.map((i) => (waiting.some((w) => w.key === i.key) ? { ...i, state: 'queued', progress: 0, error: undefined } : i)));
     void (async () => {
-      for (const i of waiting) await sendOne(i, entryId);
+      for (const i of waiting) await sendOne(i, extra);
     })();
     return [];
   }, [items, sendOne]);
