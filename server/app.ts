@@ -139,7 +139,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(['/api', '/auth/logout'], requireCsrf);
 
   // The registry search is the hottest route: first in line.
-  app.use(partRoutes());
+  app.use(partRoutes(config));
   app.use(sessionRoutes());
   app.use(authRoutes(passport, limiter(config.rateLimits, { windowMs: 60_000, limit: 20, what: 'sign-in attempts' })));
   app.use(adminRoutes());

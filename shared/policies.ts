@@ -44,6 +44,8 @@ const rules = {
   'build.view-unpublished': or(isOwner, hasRole('moderator')),
   /** Parts not (yet) in the registry are visible to whoever proposed them and to moderators. */
   'part.view-unlisted': or(isOwner, hasRole('moderator')),
+  /** A part's photos are kept by whoever proposed it and by moderators. */
+  'part.photos': and(active, or(isOwner, hasRole('moderator'))),
   'review.access': and(active, hasRole('moderator')),
   /** Listings are changed by their owner; moderators only hide them (with a note). */
   'listing.edit': and(active, isOwner),

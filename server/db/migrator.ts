@@ -10,6 +10,7 @@ import * as createReview from './migrations/20261201002000-create-review.ts';
 import * as createExchange from './migrations/20261201003000-create-exchange.ts';
 import * as addPartSearchIndexes from './migrations/20261201003100-add-part-search-indexes.ts';
 import * as addPartDescIndexes from './migrations/20261201003200-add-part-desc-indexes.ts';
+import * as createPartPhotos from './migrations/20261202000100-create-part-photos.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -25,6 +26,7 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261201003000-create-exchange', createExchange],
   ['20261201003100-add-part-search-indexes', addPartSearchIndexes],
   ['20261201003200-add-part-desc-indexes', addPartDescIndexes],
+  ['20261202000100-create-part-photos', createPartPhotos],
 ];
 
 /** Umzug over our migration list; the only source of the schema, in tests too. */

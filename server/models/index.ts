@@ -12,6 +12,7 @@ import { Report } from './report.model.ts';
 import { OutboxMail } from './outbox-mail.model.ts';
 import { Listing } from './listing.model.ts';
 import { ListingPhoto } from './listing-photo.model.ts';
+import { PartPhoto } from './part-photo.model.ts';
 import { Message, MessageThread } from './message.model.ts';
 
 /** Bind every model to this process's Sequelize instance and declare associations. */
@@ -29,6 +30,7 @@ export function initModels(sequelize: Sequelize) {
   OutboxMail.initModel(sequelize);
   Listing.initModel(sequelize);
   ListingPhoto.initModel(sequelize);
+  PartPhoto.initModel(sequelize);
   MessageThread.initModel(sequelize);
   Message.initModel(sequelize);
   Build.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
@@ -44,5 +46,5 @@ export function initModels(sequelize: Sequelize) {
     },
     { tableName: 'sessions', underscored: true },
   );
-  return { User, AppMeta, Part, Build, LogEntry, Photo, Actuator, CalibrationRun, AuditEntry, Report, OutboxMail, Listing, ListingPhoto, MessageThread, Message };
+  return { User, AppMeta, Part, Build, LogEntry, Photo, Actuator, CalibrationRun, AuditEntry, Report, OutboxMail, Listing, ListingPhoto, PartPhoto, MessageThread, Message };
 }

@@ -7,6 +7,7 @@ import { actorOf } from '../middleware/actor.ts';
 import { limiter } from '../middleware/rate-limit.ts';
 import { createListing, getListing, hideListing, listListings, listMyListings, updateListing } from '../services/listing.service.ts';
 import { getThread, listThreads, replyInThread, sendListingMessage } from '../services/message.service.ts';
+import { photoRoutesFor } from './attached-photo.routes.ts';
 
 /** The exchange: listings, messages to their owners, and each maker's inbox. */
 export function exchangeRoutes(config: Config): Router {
@@ -44,5 +45,6 @@ export function exchangeRoutes(config: Config): Router {
   r.post('/api/inbox/:threadId/messages', requireUser, messageLimit, thread, validate(sendMessageInput), async (req, res) => {
     res.status(201).json(await replyInThread(actorOf(req), res.locals.params.threadId, res.locals.body));
   });
+  r.use(photoRoutesFor('listing', config.uploadsDir));
   return r;
 }

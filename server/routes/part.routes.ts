@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { Config } from '../config.ts';
 import Papa from 'papaparse';
 import { listPartsQuery, mergePartInput, partIdParams, proposePartInput, type PartListItemDto } from '@shared/schemas/part.ts';
 import { validate } from '../middleware/validate.ts';
@@ -6,12 +7,13 @@ import { requireUser } from '../middleware/auth.ts';
 import { actorOf } from '../middleware/actor.ts';
 import { exportParts, gainHistogram, getPart, listParts, proposePart } from '../services/part.service.ts';
 import { mergeParts } from '../services/part-merge.service.ts';
+import { photoRoutesFor } from './attached-photo.routes.ts';
 
 const CSV_COLUMNS: Array<keyof PartListItemDto> = ['id', 'name', 'category', 'salvageSource', 'material', 'safeVolts', 'capacitanceNf', 'gainMedianNmPerV', 'gainP25NmPerV', 'gainP75NmPerV', 'acceptedRunCount', 'buildCount', 'createdAt'];
 const CSV_HEADERS = ['id', 'name', 'category', 'salvage_source', 'material', 'safe_volts_V', 'capacitance_nF', 'gain_median_nm_per_V', 'gain_p25_nm_per_V', 'gain_p75_nm_per_V', 'accepted_runs', 'builds', 'created_at'];
 
-/** The parts registry: search (paged, or exported as CSV/JSON), histogram, detail, proposals and merges. */
-export function partRoutes(): Router {
+/** The parts registry: search (paged, or exported as CSV/JSON), histogram, detail, proposals, photos and merges. */
+export function partRoutes(config: Config): Router {
   const r = Router();
   r.get('/api/parts', validate(listPartsQuery, 'query'), async (req, res) => {
     const q = res.locals.query;
@@ -36,5 +38,6 @@ export function partRoutes(): Router {
   r.post('/api/parts/:partId/merge', requireUser, validate(partIdParams, 'params'), validate(mergePartInput), async (req, res) => {
     res.json(await mergeParts(actorOf(req), res.locals.params.partId, res.locals.body));
   });
+  r.use(photoRoutesFor('part', config.uploadsDir));
   return r;
 }

@@ -7,7 +7,7 @@ import { authorize } from '../policies/authorize.ts';
 import { ConflictError, ValidationError } from '../errors.ts';
 import { loadBuildForEdit, loadBuildForView, markEdited } from './build-access.ts';
 import { presentBuildDetail, summarizeBuilds } from './build-read.service.ts';
-import { filesByHash, pruneUnreferenced } from './photo.service.ts';
+import { pruneAfterRemoval } from './photo-files.ts';
 import { containsPattern } from '../db/like-pattern.ts';
 
 
@@ -71,7 +71,7 @@ export async function deleteBuild(actor: Actor | null, buildId: number, uploadsD
     await b.destroy({ transaction });
     return rows;
   });
-  await pruneUnreferenced(uploadsDir, filesByHash(photos));
+  await pruneAfterRemoval(uploadsDir, photos);
 }
 
 /** Hand a draft or returned build to the review desk. */

@@ -1,14 +1,14 @@
-import { Op, type WhereOptions } from 'sequelize';
+import { Op, type Transaction, type WhereOptions } from 'sequelize';
 import { can, type Actor } from '@shared/policies.ts';
 import { priceLabel, type CreateListingInput, type HideListingInput, type ListListingsQuery, type ListingDto, type ListingListDto, type UpdateListingInput } from '@shared/schemas/listing.ts';
 import { Listing } from '../models/listing.model.ts';
-import { ListingPhoto } from '../models/listing-photo.model.ts';
 import { Part } from '../models/part.model.ts';
 import { User } from '../models/user.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { NotFoundError, ValidationError } from '../errors.ts';
 import { recordAudit } from './audit.service.ts';
 import { containsPattern } from '../db/like-pattern.ts';
+import { photosBySubject } from './attached-photos.service.ts';
 
 
 /** Listings with their parts, owners and photos in a fixed number of queries. */
@@ -17,7 +17,7 @@ async function presentListings(actor: Actor | null, rows: Listing[]): Promise<Li
   const [parts, owners, photos] = await Promise.all([
     Part.findAll({ where: { id: [...new Set(rows.map((r) => r.partId))] }, attributes: ['id', 'name', 'category', 'gainMedianNmPerV'] }),
     User.findAll({ where: { id: [...new Set(rows.map((r) => r.ownerId))] }, attributes: ['id', 'login'] }),
-    ListingPhoto.findAll({ where: { listingId: rows.map((r) => r.id) }, order: [['position', 'ASC'], ['id', 'ASC']] }),
+    photosBySubject('listing', rows.map((r) => r.id)),
   ]);
   const partMap = new Map(parts.map((p) => [p.id, p]));
   const ownerMap = new Map(owners.map((u) => [u.id, u]));
@@ -40,7 +40,7 @@ async function presentListings(actor: Actor | null, rows: Listing[]): Promise<Li
       hidden: l.hiddenAt !== null,
       hiddenNote: can(actor, 'listing.view-hidden', { ownerId: l.ownerId }) ? l.hiddenNote : null,
       owner: { id: l.ownerId, login: ownerMap.get(l.ownerId)?.login ?? 'unknown' },
-      photos: photos.filter((p) => p.listingId === l.id).map((p) => ({ id: p.id, url: `/uploads/${p.displayFile}`, thumbUrl: `/uploads/${p.thumbFile}`, width: p.width, height: p.height, alt: p.alt })),
+      photos: photos.get(l.id) ?? [],
       createdAt: l.createdAt.toISOString(),
       updatedAt: l.updatedAt.toISOString(),
       abilities: {
@@ -75,8 +75,8 @@ export async function listListings(actor: Actor | null, q: ListListingsQuery): P
 }
 
 /** A listing the actor may see: hidden ones only for the owner and moderators. */
-export async function loadListingForView(actor: Actor | null, listingId: number): Promise<Listing> {
-  const listing = await Listing.findByPk(listingId);
+export async function loadListingForView(actor: Actor | null, listingId: number, transaction?: Transaction): Promise<Listing> {
+  const listing = await Listing.findByPk(listingId, transaction ? { transaction, lock: transaction.LOCK.UPDATE } : {});
   if (!listing || (listing.hiddenAt && !can(actor, 'listing.view-hidden', { ownerId: listing.ownerId }))) throw new NotFoundError('No such listing.');
   return listing;
 }

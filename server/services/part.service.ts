@@ -13,6 +13,7 @@ import { NotFoundError } from '../errors.ts';
 import { presentPartChoice, presentPartSummary, type PartRow } from '../presenters/part.presenter.ts';
 import { countParts, selectParts, type PartSearchRow } from './part-search.sql.ts';
 import { cachedRegistryCount } from './registry-count-cache.ts';
+import { canEditPartPhotos, photosBySubject } from './attached-photos.service.ts';
 
 /** Most rows one export returns. */
 export const EXPORT_LIMIT = 10_000;
@@ -66,10 +67,11 @@ export async function getPart(actor: Actor | null, partId: number): Promise<Part
   if (!part || (part.status !== 'accepted' && !can(actor, 'part.view-unlisted', { ownerId: part.proposedById }))) {
     throw new NotFoundError('No such part.');
   }
-  const [runs, listings, proposer] = await Promise.all([
+  const [runs, listings, proposer, photos] = await Promise.all([
     CalibrationRun.findAll({ where: { partId, status: 'accepted' }, order: [['createdAt', 'ASC'], ['id', 'ASC']], limit: 2000 }),
     Listing.findAll({ where: { partId, status: { [Op.ne]: 'closed' }, hiddenAt: null }, order: [['createdAt', 'DESC']], limit: 50 }),
     part.proposedById ? User.findByPk(part.proposedById, { attributes: ['login'] }) : null,
+    photosBySubject('part', [part.id]),
   ]);
   const builds = new Map((await Build.findAll({ where: { id: [...new Set(runs.map((r) => r.buildId))] }, attributes: ['id', 'title', 'ownerId'] })).map((b) => [b.id, b]));
   const userIds = [...new Set([...[...builds.values()].map((b) => b.ownerId), ...listings.map((l) => l.ownerId)])];
@@ -103,6 +105,8 @@ export async function getPart(actor: Actor | null, partId: number): Promise<Part
       region: l.region,
       owner: users.get(l.ownerId) ?? 'unknown',
     })),
+    photos: photos.get(part.id) ?? [],
+    abilities: { editPhotos: canEditPartPhotos(actor, part) },
   };
 }
 

@@ -7,8 +7,7 @@ import { Photo } from '../models/photo.model.ts';
 import { NotFoundError, ValidationError } from '../errors.ts';
 import { presentPhoto } from '../presenters/photo.presenter.ts';
 import { loadBuildForEdit, markEdited } from './build-access.ts';
-import { ListingPhoto } from '../models/listing-photo.model.ts';
-import { processPhoto, removeFiles, withContentLocks, writeVariants, type ProcessedPhoto } from './photo-storage.ts';
+import { altsFor, processAll, pruneAfterRemoval, storeThenRecord } from './photo-files.ts';
 
 export interface UploadPhotosInput {
   files: Buffer[];
@@ -30,28 +29,6 @@ async function assertEntryOfBuild(buildId: number, entryId: number, transaction:
   if (!entry) throw new ValidationError('entryId: not a log entry of this build.', [{ path: 'entryId', message: 'Not a log entry of this build.', code: 'invalid_entry' }]);
 }
 
-function altsFor(alt: string[], count: number): string[] {
-  if (alt.length === 1) return Array.from({ length: count }, () => alt[0]);
-  if (alt.length === count) return alt;
-  const message = `Send one alt text per photo (${count}) or one for all.`;
-  throw new ValidationError(`alt: ${message}`, [{ path: 'alt', message, code: 'alt_count' }]);
-}
-
-/** Remove files of content nobody references any more; checked by the indexed content hash. */
-export async function pruneUnreferenced(uploadsDir: string, byHash: Map<string, string[]>): Promise<void> {
-  for (const [contentHash, files] of byHash) {
-    const uses = (await Photo.count({ where: { contentHash } })) + (await ListingPhoto.count({ where: { contentHash } }));
-    if (uses === 0) await removeFiles(uploadsDir, files);
-  }
-}
-
-/** Files of the given photo rows grouped by content hash, for pruning after the rows are gone. */
-export function filesByHash(rows: { contentHash: string; displayFile: string; thumbFile: string }[]): Map<string, string[]> {
-  const map = new Map<string, string[]>();
-  for (const r of rows) map.set(r.contentHash, [r.displayFile, r.thumbFile]);
-  return map;
-}
-
 /** The build's photos in display order, for the build page and the builds service. */
 export async function listPhotosForBuild(buildId: number, transaction?: Transaction): Promise<PhotoDto[]> {
   const photos = await Photo.findAll({ where: { buildId }, order, transaction });
@@ -70,12 +47,8 @@ export async function assertCanAddPhotos(actor: Actor | null, buildId: number): 
  */
 export async function uploadPhotos(actor: Actor | null, buildId: number, input: UploadPhotosInput, uploadsDir: string): Promise<PhotoDto[]> {
   const alts = altsFor(input.alt, input.files.length);
-  const processed: ProcessedPhoto[] = [];
-  for (const [index, file] of input.files.entries()) processed.push(await processPhoto(file, index));
-
-  return withContentLocks(processed.map((p) => p.contentHash), async () => {
-    const created = await writeVariants(uploadsDir, processed);
-    try {
+  const processed = await processAll(input.files);
+  return storeThenRecord(uploadsDir, processed, async () => {
       const rows = await Build.sequelize!.transaction(async (transaction) => {
         const build = await loadBuildForEdit(actor, buildId, transaction);
         if (input.entryId !== undefined) await assertEntryOfBuild(buildId, input.entryId, transaction);
@@ -105,13 +78,6 @@ export async function uploadPhotos(actor: Actor | null, buildId: number, input: 
         return photos;
       });
       return rows.map(presentPhoto);
-    } catch (err) {
-      const byHash = new Map<string, string[]>();
-      for (const file of created) byHash.set(file.slice(0, 64), [...(byHash.get(file.slice(0, 64)) ?? []), file]);
-      // The original failure is what the client needs to hear about; a leftover file is the lesser harm.
-      await pruneUnreferenced(uploadsDir, byHash).catch(() => undefined);
-      throw err;
-    }
   });
 }
 
@@ -138,8 +104,7 @@ export async function deletePhoto(actor: Actor | null, buildId: number, photoId:
     await markEdited(build, transaction);
     return p;
   });
-  const byHash = new Map([[photo.contentHash, [photo.displayFile, photo.thumbFile]]]);
-  await withContentLocks(byHash.keys(), () => pruneUnreferenced(uploadsDir, byHash));
+  await pruneAfterRemoval(uploadsDir, [photo]);
 }
 
 /** Put the build's photos in the given order; the list must name each of its photos exactly once. */

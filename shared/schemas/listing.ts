@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { AttachedPhotoDto } from './attached-photo.ts';
 import { PART_CATEGORIES, type PartCategory } from './part.ts';
 
 export const LISTING_KINDS = ['offering', 'seeking'] as const;
@@ -68,14 +69,8 @@ export const listingIdParams = z.strictObject({ listingId: z.coerce.number().int
 export const hideListingInput = z.strictObject({ hidden: z.boolean(), note: text(4000).min(1, 'Say why.') });
 export type HideListingInput = z.infer<typeof hideListingInput>;
 
-export interface ListingPhotoDto {
-  id: number;
-  url: string;
-  thumbUrl: string;
-  width: number;
-  height: number;
-  alt: string;
-}
+/** A listing's photo (see attached-photo.ts for how they are uploaded). */
+export type ListingPhotoDto = AttachedPhotoDto;
 
 export interface ListingDto {
   id: number;

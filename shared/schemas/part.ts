@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { AttachedPhotoDto } from './attached-photo.ts';
 
 export const PART_CATEGORIES = ['bimorph', 'buzzer-disc', 'stack', 'tube', 'shear-plate', 'voice-coil', 'other'] as const;
 export type PartCategory = (typeof PART_CATEGORIES)[number];
@@ -149,6 +150,9 @@ export interface PartDetailDto extends PartSummaryDto {
   expectedGain: { gainNmPerV: number; lowNmPerV: number; highNmPerV: number; basis: string } | null;
   runs: PartRunDto[];
   listings: PartListingRefDto[];
+  photos: AttachedPhotoDto[];
+  /** What the viewer may do here (the server decides; the client only hides controls). */
+  abilities: { editPhotos: boolean };
 }
 
 /** Counts of accepted part medians in log-spaced bins, for the range control's histogram. */

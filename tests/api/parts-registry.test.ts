@@ -8,6 +8,7 @@ import { Part } from '../../server/models/part.model.ts';
 import { Actuator } from '../../server/models/actuator.model.ts';
 import { CalibrationRun } from '../../server/models/calibration-run.model.ts';
 import { Listing } from '../../server/models/listing.model.ts';
+import { PartPhoto } from '../../server/models/part-photo.model.ts';
 import { recomputePartStats } from '../../server/services/part-stats.service.ts';
 
 let t: TestApp;
@@ -184,7 +185,7 @@ describe('POST /api/parts/:id/merge', () => {
   let mod: Agent;
   beforeAll(async () => { mod = await signIn(t, (await createUser({ role: 'moderator' })).login); });
 
-  test('when a moderator merges a duplicate, then runs, actuators and listings move, stats are recomputed and the trail records it', async () => {
+  test('when a moderator merges a duplicate, then runs, actuators, listings and photos move, stats are recomputed and the trail records it', async () => {
     const owner = await createUser();
     const keep = await createPart();
     const dup = await createPart();
@@ -192,9 +193,12 @@ describe('POST /api/parts/:id/merge', () => {
     const r1 = await createRunRow({ buildId: b.id, partId: keep.id, ownerId: owner.id, gainNmPerV: 100, status: 'accepted' });
     const r2 = await createRunRow({ buildId: b.id, partId: dup.id, ownerId: owner.id, gainNmPerV: 120, status: 'accepted' });
     await Listing.create({ ownerId: owner.id, partId: dup.id, kind: 'seeking', quantity: 1, condition: 'new', priceKind: 'swap', priceAmount: null, currency: null, region: 'Here', shipsTo: null, notes: null });
+    const photo = (partId: number, alt: string) => PartPhoto.create({ partId, contentHash: alt.padEnd(64, '0'), displayFile: 'a.webp', thumbFile: 'a-t.webp', width: 4, height: 3, alt });
+    await photo(keep.id, 'kept'); await photo(dup.id, 'moved');
     const res = await mod.post(`/api/parts/${dup.id}/merge`).set('X-CSRF-Token', mod.csrf).send({ intoPartId: keep.id, note: 'Same bar, two names.' });
     expect(res.status).toBe(200);
-    expect(res.body).toEqual({ id: dup.id, mergedIntoId: keep.id, moved: { actuators: 1, runs: 1, listings: 1 } });
+    expect(res.body).toEqual({ id: dup.id, mergedIntoId: keep.id, moved: { actuators: 1, runs: 1, listings: 1, photos: 1 } });
+    expect((await request(t.app).get(`/api/parts/${keep.id}`)).body.photos.map((p: { alt: string }) => p.alt)).toEqual(['kept', 'moved']);
     await keep.reload(); await dup.reload();
     expect(await CalibrationRun.count({ where: { partId: dup.id } })).toBe(0);
     expect(await Actuator.count({ where: { partId: dup.id } })).toBe(0);

@@ -30,6 +30,8 @@ import { Part } from '../../server/models/part.model.ts';
 import { Report } from '../../server/models/report.model.ts';
 import { Listing } from '../../server/models/listing.model.ts';
 import { Message, MessageThread } from '../../server/models/message.model.ts';
+import { PartPhoto } from '../../server/models/part-photo.model.ts';
+import { ListingPhoto } from '../../server/models/listing-photo.model.ts';
 
 /** Who sends the request: a signed-in user with their agent, or a visitor (user null). */
 export interface Acting {
@@ -75,6 +77,11 @@ const unique = (prefix: string) => `${prefix} ${randomBytes(3).toString('hex')}`
 async function photoRow(buildId: number, ownerId: number, position: number) {
   const hash = randomBytes(32).toString('hex');
   return Photo.create({ buildId, ownerId, contentHash: hash, displayFile: `${hash}.webp`, thumbFile: `${hash}-t.webp`, width: 40, height: 30, alt: 'A photo', position });
+}
+
+async function attachedPhotoRow(model: typeof PartPhoto | typeof ListingPhoto, owner: { partId: number } | { listingId: number }) {
+  const hash = randomBytes(32).toString('hex');
+  return (model as typeof ListingPhoto).create({ ...owner, contentHash: hash, displayFile: `${hash}.webp`, thumbFile: `${hash}-t.webp`, width: 40, height: 30, alt: 'A photo' } as never);
 }
 
 /** The agent's session cookie as a Cookie header value (null when it has none). */
@@ -526,6 +533,37 @@ export const fixtures: Record<string, Fixture> = {
     },
   },
 
+  'POST /api/parts/:partId/photos': {
+    allowed: 'owner',
+    async make({ owner }) {
+      const part = await createPart({ proposedById: owner.id });
+      const photos = () => PartPhoto.findAll({ where: { partId: part.id } });
+      return {
+        params: { partId: part.id },
+        multipart: { files: [await jpeg(40, 30)], fields: { alt: 'The bar beside a ruler' } },
+        state: () => rows(photos()),
+        async changed(res) {
+          expect(res.status).toBe(201);
+          expect((await photos()).map((p) => p.alt)).toEqual(['The bar beside a ruler']);
+        },
+      };
+    },
+  },
+  'DELETE /api/parts/:partId/photos/:photoId': {
+    allowed: 'owner',
+    async make({ owner }) {
+      const part = await createPart({ proposedById: owner.id });
+      const photo = await attachedPhotoRow(PartPhoto, { partId: part.id });
+      return {
+        params: { partId: part.id, photoId: photo.id },
+        state: () => rows(PartPhoto.findAll({ where: { partId: part.id } })),
+        async changed() {
+          expect(await PartPhoto.findByPk(photo.id)).toBeNull();
+        },
+      };
+    },
+  },
+
   'POST /api/review/builds/:id/decision': {
     schema: buildDecisionInput,
     allowed: 'moderator',
@@ -644,6 +682,36 @@ export const fixtures: Record<string, Fixture> = {
         state: () => rows(Listing.findByPk(listing.id)),
         async changed() {
           expect((await Listing.findByPk(listing.id))?.quantity).toBe(5);
+        },
+      };
+    },
+  },
+  'POST /api/listings/:listingId/photos': {
+    allowed: 'owner',
+    async make({ owner }) {
+      const listing = await listingRow(owner.id);
+      const photos = () => ListingPhoto.findAll({ where: { listingId: listing.id } });
+      return {
+        params: { listingId: listing.id },
+        multipart: { files: [await jpeg(40, 30)], fields: { alt: 'Three discs in a tray' } },
+        state: () => rows(photos()),
+        async changed(res) {
+          expect(res.status).toBe(201);
+          expect((await photos()).map((p) => p.alt)).toEqual(['Three discs in a tray']);
+        },
+      };
+    },
+  },
+  'DELETE /api/listings/:listingId/photos/:photoId': {
+    allowed: 'owner',
+    async make({ owner }) {
+      const listing = await listingRow(owner.id);
+      const photo = await attachedPhotoRow(ListingPhoto, { listingId: listing.id });
+      return {
+        params: { listingId: listing.id, photoId: photo.id },
+        state: () => rows(ListingPhoto.findAll({ where: { listingId: listing.id } })),
+        async changed() {
+          expect(await ListingPhoto.findByPk(photo.id)).toBeNull();
         },
       };
     },
