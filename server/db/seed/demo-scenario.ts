@@ -22,17 +22,23 @@ export interface DemoPart {
   notes: string;
   status: 'accepted' | 'proposed';
   proposedBy: string;
+  pictures?: DemoPicture[];
 }
+
+/** A drawn picture: a caption (the alt text) and a scene to draw (see demo-pictures.ts). */
+export interface DemoPicture { alt: string; scene: 'bench' | 'head' | 'plot' | 'stage' | 'bar' | 'disc' | 'tube' }
 
 export const DEMO_PARTS: DemoPart[] = [
   {
     key: 'cartridge-bar', category: 'bimorph', name: 'Cartridge bimorph bar 11 × 1.5 × 0.5 mm', salvageSource: 'ceramic record-player cartridges (two-wire bar under the stylus bridge)',
     material: 'PZT-5A', lengthMm: 11, widthMm: 1.5, thicknessMm: 0.5, capacitanceNf: 0.9, safeVolts: 60, status: 'accepted', proposedBy: 'marit-builds',
+    pictures: [{ alt: 'One bar on a millimetre rule, electrode faces up, two thin leads at the clamped end', scene: 'bar' }],
     notes: 'Material is a guess: the ceramic is unmarked. Free length measured from the clamp to the tip. Desolder quickly; the bars depole if heated.',
   },
   {
     key: 'buzzer-27', category: 'buzzer-disc', name: 'Brass buzzer disc 27 mm', salvageSource: 'smoke alarms, kitchen timers',
     material: null, outerDiameterMm: 27, thicknessMm: 0.54, capacitanceNf: 22, safeVolts: 30, status: 'accepted', proposedBy: 'tunnel-rohan',
+    pictures: [{ alt: 'Buzzer disc from above: brass rim around the silvered ceramic, two leads soldered on', scene: 'disc' }],
     notes: 'Unimorph: ceramic on a brass plate. Centre displacement depends heavily on how the rim is clamped.',
   },
   {
@@ -43,6 +49,7 @@ export const DEMO_PARTS: DemoPart[] = [
   {
     key: 'tube-635', category: 'tube', name: 'Quartered tube 6.35 OD × 12.7 mm', salvageSource: 'surplus scanner heads',
     material: 'PZT-5H', lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.5, capacitanceNf: 3.1, safeVolts: 150, status: 'accepted', proposedBy: 'tunnel-rohan',
+    pictures: [{ alt: 'The tube standing on end; three of its four outer electrodes face the camera, marked X+, Y+ and X−', scene: 'tube' }],
     notes: 'Four outer electrodes, one inner. Scratch the outer silver carefully if you have to re-cut quadrants.',
   },
   {
@@ -90,7 +97,7 @@ export interface DemoBuild {
   entries: { daysAgo: number; title: string; body: string }[];
   actuators: DemoActuator[];
   /** Drawn pictures for the gallery: a caption and a scene to draw. */
-  pictures: { alt: string; scene: 'bench' | 'head' | 'plot' | 'stage' }[];
+  pictures: DemoPicture[];
 }
 
 const run = (over: Partial<DemoRun> & Pick<DemoRun, 'gainNmPerV'>): DemoRun => ({
@@ -183,11 +190,12 @@ export interface DemoListing {
   shipsTo?: string;
   notes: string;
   status?: 'open' | 'reserved' | 'closed';
+  pictures?: DemoPicture[];
 }
 
 export const DEMO_LISTINGS: DemoListing[] = [
-  { owner: 'marit-builds', part: 'cartridge-bar', kind: 'offering', quantity: 3, condition: 'salvaged-tested', priceKind: 'price', priceAmount: 4, currency: 'EUR', region: 'Lower Saxony', shipsTo: 'EU', notes: 'Freed from their rubber, each measured at 0.85–0.95 nF. Small chips on one end of one bar.' },
-  { owner: 'tunnel-rohan', part: 'buzzer-27', kind: 'offering', quantity: 10, condition: 'salvaged-untested', priceKind: 'free', region: 'Leeds', shipsTo: 'UK', notes: 'A bag of discs from old alarms. Leads still attached on most.' },
+  { owner: 'marit-builds', part: 'cartridge-bar', kind: 'offering', quantity: 3, condition: 'salvaged-tested', priceKind: 'price', priceAmount: 4, currency: 'EUR', region: 'Lower Saxony', shipsTo: 'EU', notes: 'Freed from their rubber, each measured at 0.85–0.95 nF. Small chips on one end of one bar.', pictures: [{ alt: 'The three bars offered, side by side on a millimetre rule', scene: 'bar' }] },
+  { owner: 'tunnel-rohan', part: 'buzzer-27', kind: 'offering', quantity: 10, condition: 'salvaged-untested', priceKind: 'free', region: 'Leeds', shipsTo: 'UK', notes: 'A bag of discs from old alarms. Leads still attached on most.', pictures: [{ alt: 'One of the discs in the bag, leads still attached', scene: 'disc' }] },
   { owner: 'demo-maker', part: 'tube-635', kind: 'seeking', quantity: 1, condition: 'salvaged-tested', priceKind: 'swap', region: 'Utrecht', shipsTo: 'anywhere', notes: 'Looking for a quartered tube for a first STM; can swap a small HV supply board.' },
   { owner: 'stage-kwame', part: 'stack-5x5', kind: 'offering', quantity: 2, condition: 'salvaged-tested', priceKind: 'price', priceAmount: 15, currency: 'USD', region: 'Accra', shipsTo: 'worldwide', notes: 'Two spares from the same batch as the stage build.', status: 'reserved' },
 ];

@@ -10,7 +10,7 @@ import { CalibrationRun } from '../../models/calibration-run.model.ts';
 import { DEMO_ACCOUNTS, standInEmail, standInGithubId } from '../../dev/demo-accounts.ts';
 import { runColumns } from '../../services/run.service.ts';
 import { recomputePartStats } from '../../services/part-stats.service.ts';
-import { DEMO_BUILDS, DEMO_LISTINGS, DEMO_PARTS, type DemoBuild } from './demo-scenario.ts';
+import { DEMO_BUILDS, DEMO_LISTINGS, DEMO_PARTS, type DemoBuild, type DemoPicture } from './demo-scenario.ts';
 import { Listing } from '../../models/listing.model.ts';
 import { demoSweep } from './demo-points.ts';
 
@@ -18,8 +18,8 @@ const MARK = 'demo_seeded_at';
 const DAY = 24 * 60 * 60 * 1000;
 const ago = (days: number) => new Date(Date.now() - days * DAY);
 
-/** Hook for pictures: given a build, its owner and the transaction, attach drawn photos. */
-export type AttachPictures = (build: Build, pictures: DemoBuild['pictures'], transaction: Transaction) => Promise<void>;
+/** Hook for pictures: attach drawn photos to a build, a part or a listing inside the seed's transaction. */
+export type AttachPictures = (target: { build: Build } | { partId: number } | { listingId: number }, pictures: DemoPicture[], transaction: Transaction) => Promise<void>;
 
 async function seedUsers(transaction: Transaction): Promise<Map<string, User>> {
   const users = new Map<string, User>();
@@ -33,10 +33,10 @@ async function seedUsers(transaction: Transaction): Promise<Map<string, User>> {
   return users;
 }
 
-async function seedParts(users: Map<string, User>, transaction: Transaction): Promise<Map<string, Part>> {
+async function seedParts(users: Map<string, User>, attach: AttachPictures | null, transaction: Transaction): Promise<Map<string, Part>> {
   const parts = new Map<string, Part>();
   for (const p of DEMO_PARTS) {
-    const { key, proposedBy, ...fields } = p;
+    const { key, proposedBy, pictures, ...fields } = p;
     parts.set(key, await Part.create(
       {
         ...fields,
@@ -46,6 +46,7 @@ async function seedParts(users: Map<string, User>, transaction: Transaction): Pr
       },
       { transaction },
     ));
+    if (attach && pictures?.length) await attach({ partId: parts.get(key)!.id }, pictures, transaction);
   }
   return parts;
 }
@@ -87,7 +88,7 @@ async function seedBuild(b: DemoBuild, index: number, users: Map<string, User>, 
       );
     }
   }
-  if (attach && b.pictures.length) await attach(build, b.pictures, transaction);
+  if (attach && b.pictures.length) await attach({ build }, b.pictures, transaction);
 }
 
 /** Seed the invented demo community once; a marker row keeps a restart from seeding again. */
@@ -96,17 +97,18 @@ export async function seedDemoOnce(sequelize: Sequelize, attach: AttachPictures 
     const mark = await AppMeta.findByPk(MARK, { transaction, lock: transaction.LOCK.UPDATE });
     if (mark) return false;
     const users = await seedUsers(transaction);
-    const parts = await seedParts(users, transaction);
+    const parts = await seedParts(users, attach, transaction);
     for (const [i, b] of DEMO_BUILDS.entries()) await seedBuild(b, i, users, parts, attach, transaction);
     for (const part of parts.values()) await recomputePartStats(part.id, transaction);
     for (const l of DEMO_LISTINGS) {
-      await Listing.create(
+      const listing = await Listing.create(
         {
           ownerId: users.get(l.owner)!.id, partId: parts.get(l.part)!.id, kind: l.kind, quantity: l.quantity, condition: l.condition, priceKind: l.priceKind,
           priceAmount: l.priceAmount ?? null, currency: l.currency ?? null, region: l.region, shipsTo: l.shipsTo ?? null, notes: l.notes, status: l.status ?? 'open',
         },
         { transaction },
       );
+      if (attach && l.pictures?.length) await attach({ listingId: listing.id }, l.pictures, transaction);
     }
     await AppMeta.create({ metaKey: MARK, metaValue: new Date().toISOString() }, { transaction });
     return true;
