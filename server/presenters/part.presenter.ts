@@ -8,7 +8,7 @@ export type PartRow = Pick<Part,
   | 'gainMinNmPerV' | 'gainMaxNmPerV' | 'hysteresisMedianPct' | 'createdAt'>;
 
 /** A part as pickers and registry rows show it: no geometry. */
-export function presentPartChoice(p: Omit<PartRow, 'createdAt'>): PartChoiceDto {
+export function presentPartChoice(p: PartRow): PartChoiceDto {
   return {
     id: p.id,
     name: p.name,

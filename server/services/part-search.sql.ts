@@ -3,19 +3,15 @@
 // building it through Sequelize's query generator, model instances and per-field type casts cost
 // about half of each request, so the search speaks SQL directly here.
 import type { Sequelize } from 'sequelize';
-import type { ListPartsQuery } from '@shared/schemas/part.ts';
-import type { PartRow } from '../presenters/part.presenter.ts';
-
-/** A registry search row: the part's columns, with its creation time already as an ISO 8601 string. */
-export type PartSearchRow = Omit<PartRow, 'createdAt'> & { createdAt: string };
+import type { ListPartsQuery, PartListItemDto } from '@shared/schemas/part.ts';
 import { containsPattern } from '../db/like-pattern.ts';
 import { readPool } from '../db/read-pool.ts';
 
-const COLUMNS = `id, category, name, salvage_source AS salvageSource, material, length_mm AS lengthMm, width_mm AS widthMm,
-  thickness_mm AS thicknessMm, outer_diameter_mm AS outerDiameterMm, wall_mm AS wallMm, layers, capacitance_nf AS capacitanceNf,
-  safe_volts AS safeVolts, status, accepted_run_count AS acceptedRunCount, build_count AS buildCount,
-  gain_median_nm_per_v AS gainMedianNmPerV, gain_p25_nm_per_v AS gainP25NmPerV, gain_p75_nm_per_v AS gainP75NmPerV,
-  gain_min_nm_per_v AS gainMinNmPerV, gain_max_nm_per_v AS gainMaxNmPerV, hysteresis_median_pct AS hysteresisMedianPct,
+/** Exactly the fields of a registry row (PartListItemDto), so rows go out as the driver returns them. */
+const COLUMNS = `id, name, category, status, salvage_source AS salvageSource, material, safe_volts AS safeVolts, capacitance_nf AS capacitanceNf,
+  accepted_run_count AS acceptedRunCount, build_count AS buildCount, gain_median_nm_per_v AS gainMedianNmPerV,
+  gain_p25_nm_per_v AS gainP25NmPerV, gain_p75_nm_per_v AS gainP75NmPerV, gain_min_nm_per_v AS gainMinNmPerV,
+  gain_max_nm_per_v AS gainMaxNmPerV, hysteresis_median_pct AS hysteresisMedianPct,
   DATE_FORMAT(created_at, '%Y-%m-%dT%H:%i:%s.000Z') AS createdAt`; // DATETIME(0) holding UTC (Sequelize timezone +00:00)
 
 const ORDER: Record<ListPartsQuery['sort'], string> = {
@@ -79,9 +75,9 @@ export function countPartsSql(q: ListPartsQuery): { sql: string; replacements: u
 }
 
 /** One page (or, for exports, the first `limit` rows) of a search, as plain rows. */
-export async function selectParts(sequelize: Sequelize, q: ListPartsQuery, limit: number, offset: number): Promise<PartSearchRow[]> {
+export async function selectParts(sequelize: Sequelize, q: ListPartsQuery, limit: number, offset: number): Promise<PartListItemDto[]> {
   const { sql, replacements } = selectPartsSql(q, limit, offset);
-  return readPool(sequelize).query(sql, replacements) as Promise<PartSearchRow[]>;
+  return readPool(sequelize).query(sql, replacements) as Promise<PartListItemDto[]>;
 }
 
 /** How many parts match a search. */

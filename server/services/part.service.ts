@@ -10,25 +10,13 @@ import { User } from '../models/user.model.ts';
 import { Listing } from '../models/listing.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { NotFoundError } from '../errors.ts';
-import { presentPartChoice, presentPartSummary, type PartRow } from '../presenters/part.presenter.ts';
-import { countParts, selectParts, type PartSearchRow } from './part-search.sql.ts';
+import { presentPartSummary } from '../presenters/part.presenter.ts';
+import { countParts, selectParts } from './part-search.sql.ts';
 import { cachedRegistryCount } from './registry-count-cache.ts';
 import { canEditPartPhotos, photosBySubject } from './attached-photos.service.ts';
 
 /** Most rows one export returns. */
 export const EXPORT_LIMIT = 10_000;
-
-function presentListItem(p: PartSearchRow): PartListItemDto {
-  return {
-    ...presentPartChoice(p),
-    gainMedianNmPerV: p.gainMedianNmPerV,
-    gainP25NmPerV: p.gainP25NmPerV,
-    gainP75NmPerV: p.gainP75NmPerV,
-    acceptedRunCount: p.acceptedRunCount,
-    buildCount: p.buildCount,
-    createdAt: p.createdAt,
-  };
-}
 
 /** Registry search with server-side filters, sort and paging (totals cached briefly, see registry-count-cache). */
 export async function listParts(q: ListPartsQuery): Promise<PartListDto> {
@@ -37,12 +25,12 @@ export async function listParts(q: ListPartsQuery): Promise<PartListDto> {
     selectParts(sequelize, q, q.pageSize, (q.page - 1) * q.pageSize),
     cachedRegistryCount(JSON.stringify([q.q, q.category, q.gainMin, q.gainMax, q.minRuns, q.maxVolts]), () => countParts(sequelize, q)),
   ]);
-  return { items: rows.map(presentListItem), total, page: q.page, pageSize: q.pageSize };
+  return { items: rows, total, page: q.page, pageSize: q.pageSize };
 }
 
 /** The whole current search (up to EXPORT_LIMIT rows) for CSV or JSON download. */
 export async function exportParts(q: ListPartsQuery): Promise<PartListItemDto[]> {
-  return (await selectParts(Part.sequelize!, q, EXPORT_LIMIT, 0)).map(presentListItem);
+  return selectParts(Part.sequelize!, q, EXPORT_LIMIT, 0);
 }
 
 /** Accepted part medians in log-spaced bins (5 per decade) for the range control's histogram. */

@@ -79,14 +79,24 @@ export type ListPartsQuery = z.infer<typeof listPartsQuery>;
 /** A part as pickers show it (no geometry): registry rows and actuators' parts both fit. */
 export type PartChoiceDto = Omit<PartSummaryDto, 'geometry'>;
 
-/** A row of the registry table: the part without geometry, plus its headline figures at the top level. */
-export interface PartListItemDto extends PartChoiceDto {
-  gainMedianNmPerV: number | null;
-  gainP25NmPerV: number | null;
-  gainP75NmPerV: number | null;
-  acceptedRunCount: number;
-  buildCount: number;
+/**
+ * A row of the registry table (and of pickers that search it): the part without geometry, with
+ * its pooled figures flat at the top level. The registry search is the hottest route, so its rows
+ * carry each figure once.
+ */
+export interface PartListItemDto extends Omit<PartChoiceDto, 'stats'>, PartStatsDto {
   createdAt: string;
+}
+
+/** A registry row in the shape pickers and actuators use (figures under `stats`). */
+export function choiceFromListItem(p: PartListItemDto): PartChoiceDto {
+  return {
+    id: p.id, name: p.name, category: p.category, status: p.status, salvageSource: p.salvageSource, material: p.material, safeVolts: p.safeVolts, capacitanceNf: p.capacitanceNf,
+    stats: {
+      acceptedRunCount: p.acceptedRunCount, buildCount: p.buildCount, gainMedianNmPerV: p.gainMedianNmPerV, gainP25NmPerV: p.gainP25NmPerV,
+      gainP75NmPerV: p.gainP75NmPerV, gainMinNmPerV: p.gainMinNmPerV, gainMaxNmPerV: p.gainMaxNmPerV, hysteresisMedianPct: p.hysteresisMedianPct,
+    },
+  };
 }
 
 export interface PartListDto {

@@ -218,3 +218,19 @@ describe('POST /api/parts/:id/merge', () => {
     expect((await mod.post(`/api/parts/${p.id}/merge`).set('X-CSRF-Token', mod.csrf).send({ intoPartId: q.id })).status).toBe(400);
   });
 });
+
+describe('registry row shape', () => {
+  test('when a part is listed, then its row carries every documented field once, flat, with createdAt as the stored instant in ISO 8601', async () => {
+    const part = await createPart({ name: `Shape check ${randomBytes(3).toString('hex')}` });
+    const res = await request(t.app).get(`/api/parts?q=${encodeURIComponent(part.name)}`);
+    expect(res.status).toBe(200);
+    const [item] = res.body.items;
+    expect(Object.keys(item).sort()).toEqual([
+      'id', 'name', 'category', 'status', 'salvageSource', 'material', 'safeVolts', 'capacitanceNf', 'acceptedRunCount', 'buildCount',
+      'gainMedianNmPerV', 'gainP25NmPerV', 'gainP75NmPerV', 'gainMinNmPerV', 'gainMaxNmPerV', 'hysteresisMedianPct', 'createdAt',
+    ].sort());
+    await part.reload();
+    expect(item).toMatchObject({ id: part.id, status: 'accepted', safeVolts: 60, capacitanceNf: 1, acceptedRunCount: 0, gainMedianNmPerV: null });
+    expect(item.createdAt).toBe(new Date(Math.floor(part.createdAt.getTime() / 1000) * 1000).toISOString());
+  });
+});
