@@ -29,7 +29,7 @@ export function PhotoUploader<E extends object>({ send, extra, controls }: { sen
           </ul>
           <div className="flex flex-wrap items-end gap-3">
             {controls}
-            <Button onClick={handleUpload} disabled={pending === 0}>Upload {pending === 1 ? '1 photo' : `${pending} photos`}</Button>
+            {pending > 0 && <Button onClick={handleUpload}>Upload {pending === 1 ? '1 photo' : `${pending} photos`}</Button>}
             {done && <Button variant="ghost" onClick={queue.clearDone}>Clear uploaded</Button>}
           </div>
         </>

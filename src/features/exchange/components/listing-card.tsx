@@ -4,14 +4,14 @@ import { partCategoryLabels } from '@shared/schemas/part.ts';
 import { StatusBadge } from '@/components/ui/status-badge.tsx';
 import { paths } from '@/config/paths.ts';
 import { KindBadge } from './kind-badge.tsx';
-import { ListingTile } from './listing-tile.tsx';
+import { ListingThumb } from './listing-thumb.tsx';
 import { statusBadge } from './labels.ts';
 
 /** One listing on the exchange: kind, part, quantity, condition, price, where it is and who posted it. */
 export function ListingCard({ listing: l }: { listing: ListingDto }) {
   return (
     <article className="relative flex w-full flex-col overflow-hidden rounded-lg border border-rule bg-white transition-colors focus-within:ring-2 focus-within:ring-copper hover:border-copper">
-      <ListingTile category={l.part.category} seed={l.id} />
+      <ListingThumb listing={l} />
       <div className="flex flex-1 flex-col gap-2 p-4">
         <div className="flex flex-wrap items-center gap-2">
           <KindBadge kind={l.kind} />

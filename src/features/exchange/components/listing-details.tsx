@@ -6,7 +6,7 @@ import { Markdown } from '@/components/ui/markdown.tsx';
 import { paths } from '@/config/paths.ts';
 import { formatSig } from '@/utils/format-number.ts';
 import { formatDay } from './labels.ts';
-import { ListingTile } from './listing-tile.tsx';
+import { ListingPhotos } from './listing-photos.tsx';
 
 function Row({ label, children }: { label: string; children: ReactNode }) {
   return (
@@ -17,20 +17,11 @@ function Row({ label, children }: { label: string; children: ReactNode }) {
   );
 }
 
-/** Photos (a drawn tile until listings have photos), the facts of the listing and the owner's notes. */
+/** Photos (a drawn tile while there are none), the facts of the listing and the owner's notes. */
 export function ListingDetails({ listing: l }: { listing: ListingDto }) {
   return (
     <div className="space-y-4">
-      {l.photos.length > 0 ? (
-        <ul className="grid grid-cols-2 gap-2 sm:grid-cols-3" aria-label="Photos">
-          {l.photos.map((p) => <li key={p.id}><img src={p.thumbUrl} alt={p.alt} width={p.width} height={p.height} loading="lazy" className="aspect-[4/3] w-full rounded-md object-cover" /></li>)}
-        </ul>
-      ) : (
-        <figure className="overflow-hidden rounded-lg border border-rule">
-          <ListingTile category={l.part.category} seed={l.id} className="aspect-[21/9]" />
-          <figcaption className="bg-white px-3 py-1.5 text-xs text-ink-soft">No photos yet: a drawing of a {partCategoryLabels[l.part.category].toLowerCase()}.</figcaption>
-        </figure>
-      )}
+      <ListingPhotos listing={l} />
       <dl className="rounded-lg border border-rule bg-white px-3 py-1">
         <Row label="Part">
           <Link to={paths.part(l.part.id)} className="text-copper-dark underline decoration-copper/40 underline-offset-2">{l.part.name}</Link>

@@ -21,7 +21,7 @@ function Shape({ category, seed }: { category: PartCategory; seed: number }) {
   }
 }
 
-/** Listings have no photos yet: a drawn tile in our palette showing what kind of part it is. */
+/** For listings without photos: a drawn tile in our palette showing what kind of part it is. */
 export function ListingTile({ category, seed, className = 'aspect-[16/9]' }: { category: PartCategory; seed: number; className?: string }) {
   return (
     <div className={`overflow-hidden bg-paper-deep ${className}`}>

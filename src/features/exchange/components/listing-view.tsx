@@ -9,6 +9,7 @@ import { HideListingForm } from './hide-listing-form.tsx';
 import { KindBadge } from './kind-badge.tsx';
 import { statusBadge } from './labels.ts';
 import { ListingDetails } from './listing-details.tsx';
+import { ListingPhotoManager } from './listing-photo-manager.tsx';
 import { OwnerControls } from './owner-controls.tsx';
 
 /** One listing: details on the left; on the right what this viewer can do (write, manage, moderate). */
@@ -36,6 +37,7 @@ export function ListingView({ listing: l, signedIn }: { listing: ListingDto; sig
         <ListingDetails listing={l} />
         <div className="space-y-4">
           {l.abilities.edit && <OwnerControls listing={l} />}
+          {l.abilities.edit && <ListingPhotoManager listing={l} />}
           {l.abilities.message ? (
             <ContactForm listingId={l.id} owner={l.owner.login} />
           ) : !signedIn ? (

@@ -4,7 +4,7 @@ import { StatusBadge } from '@/components/ui/status-badge.tsx';
 import { paths } from '@/config/paths.ts';
 import { KindBadge } from './kind-badge.tsx';
 import { formatDay, statusBadge } from './labels.ts';
-import { ListingTile } from './listing-tile.tsx';
+import { ListingThumb } from './listing-thumb.tsx';
 import { StatusButtons } from './owner-controls.tsx';
 
 /** One of my listings with its state and the changes I can make right here. */
@@ -12,7 +12,7 @@ export function MyListingRow({ listing: l }: { listing: ListingDto }) {
   const badge = statusBadge[l.status];
   return (
     <li className="grid gap-3 rounded-lg border border-rule bg-white p-3 sm:grid-cols-[7rem_1fr_auto] sm:items-start">
-      <ListingTile category={l.part.category} seed={l.id} className="hidden aspect-[4/3] rounded-md sm:block" />
+      <ListingThumb listing={l} className="hidden aspect-[4/3] rounded-md sm:block" />
       <div className="min-w-0 space-y-1">
         <div className="flex flex-wrap items-center gap-2">
           <KindBadge kind={l.kind} />

@@ -5,11 +5,12 @@ import { paths } from '@/config/paths.ts';
 import { PartFacts } from './part-facts.tsx';
 import { PartFigures } from './part-figures.tsx';
 import { PartListings } from './part-listings.tsx';
+import { PartPhotos } from './part-photos.tsx';
 import { PartRunsPlot } from './part-runs-plot.tsx';
 import { PartRunsTable } from './part-runs-table.tsx';
 import { ReportPartButton } from './report-part-button.tsx';
 
-/** One part: its figures and plot, the part itself, the runs behind the figures and its exchange listings. */
+/** One part: its figures and plot, the part itself beside its photos and exchange listings, and the runs behind the figures. */
 export function PartView({ part, signedIn }: { part: PartDetailDto; signedIn: boolean }) {
   return (
     <article className="space-y-6">
@@ -28,7 +29,10 @@ export function PartView({ part, signedIn }: { part: PartDetailDto; signedIn: bo
       <PartRunsPlot part={part} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,4fr)]">
         <PartFacts part={part} />
-        <PartListings partId={part.id} listings={part.listings} signedIn={signedIn && part.status === 'accepted'} />
+        <div className="min-w-0 space-y-6">
+          <PartPhotos part={part} />
+          <PartListings partId={part.id} listings={part.listings} signedIn={signedIn && part.status === 'accepted'} />
+        </div>
       </div>
       <PartRunsTable runs={part.runs} />
     </article>
