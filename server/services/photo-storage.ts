@@ -3,6 +3,8 @@ import { link, mkdir, stat, unlink, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import sharp, { type Metadata } from 'sharp';
 import { fileTypeFromBuffer } from 'file-type';
+import pLimit from 'p-limit';
+import { availableParallelism } from 'node:os';
 import { AppError } from '../errors.ts';
 
 export const MAX_FILE_BYTES = 20 * 1024 * 1024;
@@ -56,7 +58,21 @@ const reject = (status: number, code: string, message: string, index: number) =>
  * (never the name or the client's MIME type), the pixel count is bounded before decoding, the
  * image is auto-oriented and every piece of metadata (EXIF with GPS, XMP, ICC) is left behind.
  */
-export async function processPhoto(input: Buffer, index = 0): Promise<ProcessedPhoto> {
+export function processPhoto(input: Buffer, index = 0): Promise<ProcessedPhoto> {
+  return conversions(() => convert(input, index));
+}
+
+/**
+ * At most this many photos are decoded and re-encoded at once in this process; more requests wait
+ * their turn. Each conversion holds a decoded image (a 12 MP photo is about 36 MB of pixels) and
+ * libvips already spreads one conversion over the cores, so running more at once only adds memory.
+ */
+export const MAX_CONCURRENT_CONVERSIONS = Math.max(1, Math.min(4, availableParallelism()));
+const conversions = pLimit(MAX_CONCURRENT_CONVERSIONS);
+/** How many conversions run and wait right now (for tests and diagnostics). */
+export const conversionLoad = () => ({ active: conversions.activeCount, waiting: conversions.pendingCount });
+
+async function convert(input: Buffer, index: number): Promise<ProcessedPhoto> {
   if (input.length === 0) throw reject(400, 'empty_file', 'The file is empty.', index);
   const sniffed = await fileTypeFromBuffer(input);
   const decoder = sniffed && ACCEPTED.get(sniffed.mime);
