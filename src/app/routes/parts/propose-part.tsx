@@ -39,8 +39,9 @@ export function ProposePartPage() {
             “{proposed.name}” is saved, but it is <strong>not in the registry yet</strong>. A moderator checks each proposal; once they accept it,
             it is listed and calibration runs can count towards it. Until then only you and the moderators can open its page.
           </p>
+          <p className="mt-2">Photos help the moderator and later readers recognise the part: add them on its page (markings, size against a rule, where it sat in the donor device).</p>
           <div className="mt-4 flex flex-wrap gap-3">
-            <LinkButton to={paths.part(proposed.id)} variant="secondary">Open its page</LinkButton>
+            <LinkButton to={paths.part(proposed.id)} variant="secondary">Open its page and add photos</LinkButton>
             <LinkButton to={paths.parts} variant="ghost">Back to the registry</LinkButton>
             <button type="button" className="text-sm text-copper-dark underline" onClick={() => { propose.reset(); setProposed(null); }}>Propose another part</button>
           </div>
