@@ -124,6 +124,12 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use('/uploads', express.static(resolve(config.uploadsDir), { index: false, immutable: true, maxAge: '30d', fallthrough: false }));
   app.use(healthRoutes(sequelize));
 
+  // Workbench calculations are open to visitors, and reading a body of up to 12 MB of points costs
+  // seconds of CPU: large ones are limited per client before the body is read (normal use sends kilobytes).
+  app.use('/api/workbench', limiter(config.rateLimits, {
+    windowMs: 60_000, limit: 10, what: 'large workbench calculations (over 1 MB)',
+    skip: (req) => req.method !== 'POST' || Number(req.headers['content-length'] ?? Infinity) <= 1_000_000,
+  }));
   app.use(['/api/workbench', '/api/actuators'], jsonBody('12mb'));
   app.use(jsonBody('1mb'));
   const sessions = session({

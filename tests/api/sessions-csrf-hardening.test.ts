@@ -182,6 +182,24 @@ describe('rate limits', () => {
     });
   });
 
+  test('when one address sends more than 10 workbench bodies over 1 MB a minute, then 429 before the body is read; small calculations go on', async () => {
+    await limitedApp(async (limited) => {
+      // 40 000 points of a clean 2 nm/V line: about 2 MB of JSON, a valid fit.
+      const big = { displacementUnit: 'nm', points: Array.from({ length: 40_000 }, (_, i) => ({ volts: i / 100, displacement: (2 * i) / 100 })) };
+      const small = { displacementUnit: 'nm', points: [0, 1, 2, 3, 4, 5].map((v) => ({ volts: v, displacement: 2 * v })) };
+      expect(JSON.stringify(big).length).toBeGreaterThan(1_000_000);
+      for (let i = 0; i < 10; i++) {
+        const ok = await request(limited.app).post('/api/workbench/fit').send(big);
+        expect(ok.status).toBe(200);
+        expect(ok.body.gainNmPerV).toBeCloseTo(2, 9);
+      }
+      const over = await request(limited.app).post('/api/workbench/fit').send(big);
+      expect(over.status).toBe(429);
+      expect(over.body).toEqual(rateLimited);
+      for (let i = 0; i < 15; i++) expect((await request(limited.app).post('/api/workbench/fit').send(small)).status).toBe(200);
+    });
+  });
+
   test('when one maker sends 20 messages (listing messages and inbox replies share the budget), then the next is 429 for them only', async () => {
     // The plain 20-then-429 case is in tests/api/exchange.test.ts; this checks the budget is per user and shared by both routes.
     await limitedApp(async (limited) => {
