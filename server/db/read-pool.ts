@@ -27,10 +27,16 @@ export function readPool(sequelize: Sequelize): Pool {
       noControlAfterUse: true,
       acquireTimeout: 5000,
       connectTimeout: 3000,
+      // Give up on one connection attempt (with the driver's retries) after 3 s; the waiting query then fails as 503.
+      initializationTimeout: 3000,
       socketTimeout: 30000,
       bigIntAsNumber: true,
       decimalAsNumber: true,
     });
+    // The driver reports a failed background connection attempt as an 'error' event, which would
+    // crash the process without a listener. The query waiting for that connection fails on its own
+    // (acquire timeout → 503), so the event itself needs no further handling.
+    pool.on('error', () => undefined);
     pools.set(sequelize, pool);
   }
   return pool;
