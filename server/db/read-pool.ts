@@ -36,7 +36,7 @@ export function readPool(sequelize: Sequelize): Pool {
     // The driver reports a failed background connection attempt as an 'error' event, which would
     // crash the process without a listener. The query waiting for that connection fails on its own
     // (acquire timeout → 503), so the event itself needs no further handling.
-    pool.on('error', () => undefined);
+    (pool as unknown as NodeJS.EventEmitter).on('error', () => undefined);
     pools.set(sequelize, pool);
   }
   return pool;

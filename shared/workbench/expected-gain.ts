@@ -164,3 +164,19 @@ export function expectedGain(spec: ExpectedGainSpec): ExpectedGain {
       return tubeAxialGain(spec.material, spec);
   }
 }
+
+/**
+ * Each kind's formula with its source, as the pages print it (the same sources as the functions'
+ * comments above; the part page and the workbench both show these).
+ */
+export const EXPECTED_GAIN_BASIS: Record<ExpectedGainSpec['actuator'], string> = {
+  'bimorph-series': 'δ = (3/2)·d31·V·L²/h² — Smits, Dalke & Cooney, Sens. Actuators A 28 (1991) 41, series bimorph.',
+  'bimorph-parallel': 'δ = 3·d31·V·L²/h² — Smits, Dalke & Cooney 1991, parallel bimorph.',
+  'tube-quadrant': 'Δx = 2√2·d31·V·L²/(π·D·h), D = OD − h — C. J. Chen, Appl. Phys. Lett. 60, 132 (1992).',
+  'tube-opposite-pair': 'Twice one quadrant — C. J. Chen, Appl. Phys. Lett. 60, 132 (1992).',
+  'tube-axial': 'ΔL = d31·V·L/h, length-mode strain of the wall.',
+  stack: 'ΔL = n·d33·V — Murata, piezo actuator basics.',
+  'shear-plate': 'Δx = d15·V per plate; stacked plates add.',
+  'plate-thickness': 'Δt = d33·V, whatever the thickness.',
+  'plate-length': 'ΔL = d31·V·L/t.',
+};

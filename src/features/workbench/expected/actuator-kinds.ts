@@ -1,5 +1,6 @@
 // How the expected-gain page presents each actuator kind: its label, the material constant its
-// formula uses, the geometry it asks for, and the formula with its source (as in expected-gain.ts).
+// formula uses and the geometry it asks for; the formula with its source comes from shared/.
+import { EXPECTED_GAIN_BASIS } from '@shared/workbench/expected-gain.ts';
 
 /** Geometry fields an actuator kind may ask for (names as in the shared expected-gain schema). */
 export type GeometryField = 'lengthMm' | 'thicknessMm' | 'outerDiameterMm' | 'wallMm' | 'layers' | 'plates';
@@ -12,7 +13,6 @@ interface Kind {
   label: string;
   constant: Constant;
   fields: readonly { name: GeometryField; label: string; unit?: string; optional?: boolean }[];
-  basis: string;
 }
 
 const bar = [{ name: 'lengthMm', label: 'Free length L', unit: 'mm' }, { name: 'thicknessMm', label: 'Total thickness h', unit: 'mm' }] as const;
@@ -24,19 +24,22 @@ const tube = [
 
 /** Actuator kinds in the order the picker lists them. */
 export const actuatorKinds: readonly Kind[] = [
-  { value: 'bimorph-series', label: 'Bimorph bender, series (V across the whole bar)', constant: 'd31PmPerV', fields: bar, basis: 'δ = (3/2)·d31·V·L²/h² — Smits, Dalke & Cooney, Sens. Actuators A 28 (1991) 41, series bimorph.' },
-  { value: 'bimorph-parallel', label: 'Bimorph bender, parallel (V across each half)', constant: 'd31PmPerV', fields: bar, basis: 'δ = 3·d31·V·L²/h² — Smits, Dalke & Cooney 1991, parallel bimorph.' },
-  { value: 'tube-quadrant', label: 'Quartered tube, one quadrant driven', constant: 'd31PmPerV', fields: tube, basis: 'Δx = 2√2·d31·V·L²/(π·D·h), D = OD − h — C. J. Chen, Appl. Phys. Lett. 60, 132 (1992).' },
-  { value: 'tube-opposite-pair', label: 'Quartered tube, ±V on opposite quadrants', constant: 'd31PmPerV', fields: tube, basis: 'Twice one quadrant — C. J. Chen, Appl. Phys. Lett. 60, 132 (1992).' },
-  { value: 'tube-axial', label: 'Tube, axial (all quadrants together)', constant: 'd31PmPerV', fields: tube, basis: 'ΔL = d31·V·L/h, length-mode strain of the wall.' },
-  { value: 'stack', label: 'Multilayer stack', constant: 'd33PmPerV', fields: [{ name: 'layers', label: 'Layers n' }], basis: 'ΔL = n·d33·V — Murata, piezo actuator basics.' },
-  { value: 'shear-plate', label: 'Shear plate', constant: 'd15PmPerV', fields: [{ name: 'plates', label: 'Plates stacked', optional: true }], basis: 'Δx = d15·V per plate; stacked plates add.' },
-  { value: 'plate-thickness', label: 'Plate, thickness mode', constant: 'd33PmPerV', fields: [], basis: 'Δt = d33·V, whatever the thickness.' },
-  { value: 'plate-length', label: 'Plate, length mode', constant: 'd31PmPerV', fields: [{ name: 'lengthMm', label: 'Length L', unit: 'mm' }, { name: 'thicknessMm', label: 'Thickness t', unit: 'mm' }], basis: 'ΔL = d31·V·L/t.' },
+  { value: 'bimorph-series', label: 'Bimorph bender, series (V across the whole bar)', constant: 'd31PmPerV', fields: bar },
+  { value: 'bimorph-parallel', label: 'Bimorph bender, parallel (V across each half)', constant: 'd31PmPerV', fields: bar },
+  { value: 'tube-quadrant', label: 'Quartered tube, one quadrant driven', constant: 'd31PmPerV', fields: tube },
+  { value: 'tube-opposite-pair', label: 'Quartered tube, ±V on opposite quadrants', constant: 'd31PmPerV', fields: tube },
+  { value: 'tube-axial', label: 'Tube, axial (all quadrants together)', constant: 'd31PmPerV', fields: tube },
+  { value: 'stack', label: 'Multilayer stack', constant: 'd33PmPerV', fields: [{ name: 'layers', label: 'Layers n' }] },
+  { value: 'shear-plate', label: 'Shear plate', constant: 'd15PmPerV', fields: [{ name: 'plates', label: 'Plates stacked', optional: true }] },
+  { value: 'plate-thickness', label: 'Plate, thickness mode', constant: 'd33PmPerV', fields: [] },
+  { value: 'plate-length', label: 'Plate, length mode', constant: 'd31PmPerV', fields: [{ name: 'lengthMm', label: 'Length L', unit: 'mm' }, { name: 'thicknessMm', label: 'Thickness t', unit: 'mm' }] },
 ];
 
-/** The presentation of one actuator kind. */
-export const kindOf = (value: string) => actuatorKinds.find((k) => k.value === value) ?? actuatorKinds[0];
+/** The presentation of one actuator kind, with its formula and source from shared/workbench/expected-gain.ts. */
+export const kindOf = (value: string) => {
+  const kind = actuatorKinds.find((k) => k.value === value) ?? actuatorKinds[0]!;
+  return { ...kind, basis: EXPECTED_GAIN_BASIS[kind.value] };
+};
 
 /** Short names of the constants, for labels and messages. */
 export const constantLabels: Record<Constant, string> = { d31PmPerV: 'd31', d33PmPerV: 'd33', d15PmPerV: 'd15' };
