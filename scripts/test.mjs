@@ -64,7 +64,14 @@ try {
     if (build.status !== 0) throw new Error('client build failed');
   }
   mkdirSync('test-output', { recursive: true });
+  // A full run also type-checks client, server, shared code and tests (about 20 s); a failure fails the run.
+  let typesOk = true;
+  if (extra.length === 0) {
+    typesOk = spawnSync('npx', ['tsc', '--noEmit', '-p', 'tsconfig.json'], { stdio: 'inherit', env }).status === 0;
+    console.log(`typecheck: ${typesOk ? 'ok' : 'FAILED'}`);
+  }
   status = await runAsync('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', '--outputFile.json=test-output/vitest.json', ...extra], env);
+  if (!typesOk) status = status || 1;
   if (existsSync('test-output/vitest.json')) {
     const r = JSON.parse(readFileSync('test-output/vitest.json', 'utf8'));
     console.log(`\ntests: ${r.numPassedTests} passed, ${r.numFailedTests} failed`);
