@@ -1,14 +1,14 @@
-// Photos attached to registry parts and exchange listings: who may change them, upload and removal.
+// Photos attached to registry parts and exchange listings: who may change them, upload, alt text, order and removal.
 // Part photos are kept by the part's proposer and by moderators; listing photos by the listing's owner.
 import type { Transaction, WhereOptions } from 'sequelize';
 import { can, type Actor } from '@shared/policies.ts';
-import type { AttachedPhotoDto } from '@shared/schemas/attached-photo.ts';
+import type { AttachedPhotoDto, UpdateAttachedPhotoInput } from '@shared/schemas/attached-photo.ts';
 import { Part } from '../models/part.model.ts';
 import { PartPhoto } from '../models/part-photo.model.ts';
 import { ListingPhoto } from '../models/listing-photo.model.ts';
 import type { AttachedPhoto } from '../models/attached-photo.ts';
 import { authorize } from '../policies/authorize.ts';
-import { ConflictError, NotFoundError } from '../errors.ts';
+import { ConflictError, NotFoundError, ValidationError } from '../errors.ts';
 import { presentAttachedPhoto } from '../presenters/photo.presenter.ts';
 import { altsFor, processAll, pruneAfterRemoval, storeThenRecord } from './photo-files.ts';
 import { loadListingForView } from './listing.service.ts';
@@ -90,13 +90,49 @@ export async function attachPhotos(
   }));
 }
 
+async function loadAttachedPhoto(subject: PhotoSubject, id: number, photoId: number, transaction: Transaction): Promise<AttachedPhoto> {
+  const row = await SHELF[subject].model.findOne({ where: { id: photoId, ...whereOwner(subject, id) } as WhereOptions, transaction });
+  if (!row) throw new NotFoundError(`No such photo of this ${subject}.`);
+  return row;
+}
+
+/** Change one photo's alt text. */
+export async function updateAttachedPhoto(
+  actor: Actor | null, subject: PhotoSubject, id: number, photoId: number, input: UpdateAttachedPhotoInput,
+): Promise<AttachedPhotoDto> {
+  return SHELF[subject].model.sequelize!.transaction(async (transaction) => {
+    await assertCanEditPhotos(actor, subject, id, transaction);
+    const row = await loadAttachedPhoto(subject, id, photoId, transaction);
+    await row.update({ alt: input.alt }, { transaction });
+    return presentAttachedPhoto(row);
+  });
+}
+
+/** Put the photos of a part or listing in the given order; the list must name each of them exactly once. */
+export async function reorderAttachedPhotos(actor: Actor | null, subject: PhotoSubject, id: number, photoIds: number[]): Promise<AttachedPhotoDto[]> {
+  const { model } = SHELF[subject];
+  return model.sequelize!.transaction(async (transaction) => {
+    await assertCanEditPhotos(actor, subject, id, transaction);
+    const rows = await model.findAll({ where: whereOwner(subject, id), transaction });
+    const byId = new Map(rows.map((r) => [r.id, r]));
+    if (new Set(photoIds).size !== photoIds.length || photoIds.length !== rows.length || !photoIds.every((pid) => byId.has(pid))) {
+      const message = `Send each of this ${subject}'s ${rows.length} photo ids exactly once.`;
+      throw new ValidationError(`photoIds: ${message}`, [{ path: 'photoIds', message, code: 'photo_ids_mismatch' }]);
+    }
+    for (const [position, pid] of photoIds.entries()) {
+      const row = byId.get(pid)!;
+      if (row.position !== position) await row.update({ position }, { transaction });
+    }
+    return (await photosBySubject(subject, [id], transaction)).get(id) ?? [];
+  });
+}
+
 /** Remove one photo of a part or listing; its files go too once no other photo shows the same content. */
 export async function removeAttachedPhoto(actor: Actor | null, subject: PhotoSubject, id: number, photoId: number, uploadsDir: string): Promise<void> {
   const { model } = SHELF[subject];
   const photo = await model.sequelize!.transaction(async (transaction) => {
     await assertCanEditPhotos(actor, subject, id, transaction);
-    const row = await model.findOne({ where: { id: photoId, ...whereOwner(subject, id) } as WhereOptions, transaction });
-    if (!row) throw new NotFoundError(`No such photo of this ${subject}.`);
+    const row = await loadAttachedPhoto(subject, id, photoId, transaction);
     await row.destroy({ transaction });
     return row;
   });

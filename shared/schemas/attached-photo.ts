@@ -19,3 +19,13 @@ export interface AttachedPhotoDto {
 
 export const partPhotoParams = z.strictObject({ partId: z.coerce.number().int().positive(), photoId: z.coerce.number().int().positive() });
 export const listingPhotoParams = z.strictObject({ listingId: z.coerce.number().int().positive(), photoId: z.coerce.number().int().positive() });
+
+/** `PATCH …/photos/:photoId`: a better description for one photo. */
+export const updateAttachedPhotoInput = z.strictObject({
+  alt: z.string().trim().min(1, 'Describe the photo for people who cannot see it.').max(300),
+});
+export type UpdateAttachedPhotoInput = z.infer<typeof updateAttachedPhotoInput>;
+
+/** `PUT …/photos/order`: every photo id of the part or listing, once each, in the new order. */
+export const reorderAttachedPhotosInput = z.strictObject({ photoIds: z.array(z.number().int().positive()).min(1).max(100) });
+export type ReorderAttachedPhotosInput = z.infer<typeof reorderAttachedPhotosInput>;

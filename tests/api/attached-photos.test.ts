@@ -194,3 +194,42 @@ describe('listing photos', () => {
     expect((await upload(agent, `/api/listings/${listing.id}/photos`, [await img.jpeg(40, 30)])).status).toBe(201);
   });
 });
+
+describe('alt text and order', () => {
+  test('when the proposer rewrites a description and reverses the order, then the part page shows the new text in the new order', async () => {
+    const { user, agent } = await maker();
+    const part = await createPart({ proposedById: user.id });
+    const [a, b, c] = (await upload(agent, `/api/parts/${part.id}/photos`, [await img.jpeg(40, 30), await img.jpeg(30, 40), await img.jpeg(50, 40)], ['one', 'two', 'three'])).body.photos;
+    const patched = await agent.patch(`/api/parts/${part.id}/photos/${b.id}`).set('X-CSRF-Token', agent.csrf).send({ alt: '  The markings, read under a loupe  ' });
+    expect(patched.status).toBe(200);
+    expect(patched.body).toMatchObject({ id: b.id, alt: 'The markings, read under a loupe', url: b.url });
+    const reordered = await agent.put(`/api/parts/${part.id}/photos/order`).set('X-CSRF-Token', agent.csrf).send({ photoIds: [c.id, b.id, a.id] });
+    expect(reordered.status).toBe(200);
+    expect(reordered.body.photos.map((p: { id: number; position: number }) => [p.id, p.position])).toEqual([[c.id, 0], [b.id, 1], [a.id, 2]]);
+    const detail = await request(t.app).get(`/api/parts/${part.id}`);
+    expect(detail.body.photos.map((p: { alt: string }) => p.alt)).toEqual(['three', 'The markings, read under a loupe', 'one']);
+  });
+
+  test('when the order leaves one out, repeats one or names a foreign photo, then 400 photo_ids_mismatch and the order stays', async () => {
+    const { user, agent } = await maker();
+    const listing = await listingOf(user.id);
+    const [a, b] = (await upload(agent, `/api/listings/${listing.id}/photos`, [await img.jpeg(40, 30), await img.jpeg(30, 40)], ['first', 'second'])).body.photos;
+    const foreign = await ListingPhoto.create({ listingId: (await listingOf(user.id)).id, contentHash: 'd'.repeat(64), displayFile: 'z.webp', thumbFile: 'z-t.webp', width: 4, height: 3, alt: 'elsewhere' });
+    for (const photoIds of [[a.id], [a.id, a.id], [a.id, foreign.id], [b.id, a.id, foreign.id]]) {
+      const res = await agent.put(`/api/listings/${listing.id}/photos/order`).set('X-CSRF-Token', agent.csrf).send({ photoIds });
+      expect(res.status).toBe(400);
+      expect(res.body.error.details[0].code).toBe('photo_ids_mismatch');
+    }
+    expect((await request(t.app).get(`/api/listings/${listing.id}`)).body.photos.map((p: { id: number }) => p.id)).toEqual([a.id, b.id]);
+  });
+
+  test('when a description is blank or the photo is not this listing\'s, then 400 and 404, and nothing changes', async () => {
+    const { user, agent } = await maker();
+    const listing = await listingOf(user.id);
+    const [a] = (await upload(agent, `/api/listings/${listing.id}/photos`, [await img.jpeg(40, 30)], 'kept')).body.photos;
+    expect((await agent.patch(`/api/listings/${listing.id}/photos/${a.id}`).set('X-CSRF-Token', agent.csrf).send({ alt: '   ' })).status).toBe(400);
+    const other = await listingOf(user.id);
+    expect((await agent.patch(`/api/listings/${other.id}/photos/${a.id}`).set('X-CSRF-Token', agent.csrf).send({ alt: 'moved?' })).status).toBe(404);
+    expect((await ListingPhoto.findByPk(a.id))?.alt).toBe('kept');
+  });
+});

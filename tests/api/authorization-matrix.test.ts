@@ -68,6 +68,8 @@ const expected: Record<string, Row> = {
   'POST /api/parts':                                [401,   201,  201,  403,   201, 201],
   'POST /api/parts/:partId/merge':                  [401,   403,  403,  403,   200, 200],
   'POST /api/parts/:partId/photos':                 [401,   201,  403,  403,   201, 201],
+  'PUT /api/parts/:partId/photos/order':            [401,   200,  403,  403,   200, 200],
+  'PATCH /api/parts/:partId/photos/:photoId':       [401,   200,  403,  403,   200, 200],
   'DELETE /api/parts/:partId/photos/:photoId':      [401,   204,  403,  403,   204, 204],
 
   'POST /api/review/builds/:id/decision':           [401,   403,  403,  403,   200, 200],
@@ -80,6 +82,8 @@ const expected: Record<string, Row> = {
   'POST /api/listings':                             [401,   201,  201,  403,   201, 201],
   'PATCH /api/listings/:listingId':                 [401,   200,  403,  403,   403, 403],
   'POST /api/listings/:listingId/photos':           [401,   201,  403,  403,   403, 403],
+  'PUT /api/listings/:listingId/photos/order':      [401,   200,  403,  403,   403, 403],
+  'PATCH /api/listings/:listingId/photos/:photoId': [401,   200,  403,  403,   403, 403],
   'DELETE /api/listings/:listingId/photos/:photoId':[401,   204,  403,  403,   403, 403],
   'POST /api/listings/:listingId/visibility':       [401,   403,  403,  403,   200, 200],
   'POST /api/listings/:listingId/messages':         [401,   403,  201,  403,   201, 201],

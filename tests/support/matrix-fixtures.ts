@@ -12,6 +12,7 @@ import { createRunInput } from '@shared/schemas/run.ts';
 import { mergePartInput, proposePartInput } from '@shared/schemas/part.ts';
 import { acceptRejectInput, accountSettingsInput, buildDecisionInput, createReportInput, reportDecisionInput } from '@shared/schemas/review.ts';
 import { createListingInput, hideListingInput, sendMessageInput, updateListingInput } from '@shared/schemas/listing.ts';
+import { reorderAttachedPhotosInput, updateAttachedPhotoInput } from '@shared/schemas/attached-photo.ts';
 import { setRoleInput, setSuspendedInput } from '@shared/schemas/user.ts';
 import * as wb from '@shared/schemas/workbench.ts';
 import type { TestApp } from './test-app.ts';
@@ -82,6 +83,37 @@ async function photoRow(buildId: number, ownerId: number, position: number) {
 async function attachedPhotoRow(model: typeof PartPhoto | typeof ListingPhoto, owner: { partId: number } | { listingId: number }) {
   const hash = randomBytes(32).toString('hex');
   return (model as typeof ListingPhoto).create({ ...owner, contentHash: hash, displayFile: `${hash}.webp`, thumbFile: `${hash}-t.webp`, width: 40, height: 30, alt: 'A photo' } as never);
+}
+
+/** Fixtures for changing a part's or listing's stored photos (alt text, order), owned by the case's maker. */
+function attachedPhotoEdit(subject: 'part' | 'listing', kind: 'alt' | 'order'): Fixture {
+  const model = (subject === 'part' ? PartPhoto : ListingPhoto) as typeof ListingPhoto;
+  return {
+    schema: kind === 'alt' ? updateAttachedPhotoInput : reorderAttachedPhotosInput,
+    allowed: 'owner',
+    async make({ owner }) {
+      const ownerKey: Record<string, number> = subject === 'part'
+        ? { partId: (await createPart({ proposedById: owner.id })).id }
+        : { listingId: (await listingRow(owner.id)).id };
+      const [a, b] = [await attachedPhotoRow(model, ownerKey as { partId: number }), await attachedPhotoRow(model, ownerKey as { partId: number })];
+      await b.update({ position: 1 });
+      const photos = () => model.findAll({ where: ownerKey as never, order: [['position', 'ASC'], ['id', 'ASC']] });
+      const params: Record<string, number> = { ...ownerKey };
+      return kind === 'alt'
+        ? {
+          params: { ...params, photoId: a.id },
+          body: { alt: 'Markings readable under a loupe' },
+          state: () => rows(photos()),
+          async changed() { expect((await model.findByPk(a.id))?.alt).toBe('Markings readable under a loupe'); },
+        }
+        : {
+          params,
+          body: { photoIds: [b.id, a.id] },
+          state: () => rows(photos()),
+          async changed() { expect((await photos()).map((p) => p.id)).toEqual([b.id, a.id]); },
+        };
+    },
+  };
 }
 
 /** The agent's session cookie as a Cookie header value (null when it has none). */
@@ -549,6 +581,8 @@ export const fixtures: Record<string, Fixture> = {
       };
     },
   },
+  'PUT /api/parts/:partId/photos/order': attachedPhotoEdit('part', 'order'),
+  'PATCH /api/parts/:partId/photos/:photoId': attachedPhotoEdit('part', 'alt'),
   'DELETE /api/parts/:partId/photos/:photoId': {
     allowed: 'owner',
     async make({ owner }) {
@@ -702,6 +736,8 @@ export const fixtures: Record<string, Fixture> = {
       };
     },
   },
+  'PUT /api/listings/:listingId/photos/order': attachedPhotoEdit('listing', 'order'),
+  'PATCH /api/listings/:listingId/photos/:photoId': attachedPhotoEdit('listing', 'alt'),
   'DELETE /api/listings/:listingId/photos/:photoId': {
     allowed: 'owner',
     async make({ owner }) {
