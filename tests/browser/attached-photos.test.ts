@@ -47,7 +47,7 @@ describe('journey: photos on registry parts and exchange listings', () => {
     await rm(dir, { recursive: true, force: true });
   });
 
-  test('when a maker proposes a part and adds photos with alt text on its page, then they show there, open large, and one can be deleted', async () => {
+  test('when a maker proposes a part and adds photos with alt text on its page, then they show there, open large, and can be reordered, redescribed and deleted', async () => {
     const { page } = browser;
     await page.goto(`${live.baseUrl}/auth/github?login=${MAKER}&returnTo=%2Fparts%2Fpropose`);
     await page.waitForURL(`${live.baseUrl}/parts/propose`);
@@ -61,7 +61,7 @@ describe('journey: photos on registry parts and exchange listings', () => {
 
     const photos = page.getByRole('region', { name: 'Photos', exact: true });
     await photos.getByText('No photos of this part yet.').waitFor();
-    const manager = photos.getByRole('region', { name: 'Add or remove photos' });
+    const manager = photos.getByRole('region', { name: 'Add, describe or remove photos' });
     const standing = await pngFile(dir, 'tube-standing.png', 900, 1200);
     const lying = await pngFile(dir, 'tube-lying.png', 1200, 600);
     await manager.getByLabel('Choose photos').setInputFiles([standing, lying]);
@@ -88,11 +88,22 @@ describe('journey: photos on registry parts and exchange listings', () => {
     await page.keyboard.press('Escape');
     await page.getByRole('dialog').waitFor({ state: 'detached' });
 
-    await manager.getByRole('button', { name: `Delete photo 2: ${SPARE_ALT}` }).click();
+    // Move the second photo first: the page's grid follows, and focus stays on the moved photo's buttons.
+    await manager.getByRole('button', { name: 'Move photo 2 earlier' }).click();
+    await page.waitForFunction((alt) => document.querySelector('[aria-label="Photos of this part"] img')?.getAttribute('alt') === alt, SPARE_ALT);
+    await page.waitForFunction(() => /^photo-\d+-down$/.test(document.activeElement?.id ?? ''));
+    // Describe it better.
+    const renamed = `${SPARE_ALT}, seen from one end`;
+    const first = manager.getByRole('list', { name: 'Photos you can change' }).getByRole('listitem').first();
+    await first.getByLabel('Alt text').fill(renamed);
+    await first.getByRole('button', { name: 'Save' }).click();
+    await grid.getByRole('img', { name: renamed }).waitFor();
+
+    await manager.getByRole('button', { name: `Delete photo 1: ${renamed}` }).click();
     await manager.getByRole('button', { name: 'Yes, delete' }).click();
-    await grid.getByRole('img', { name: SPARE_ALT }).waitFor({ state: 'detached' });
+    await grid.getByRole('img', { name: renamed }).waitFor({ state: 'detached' });
     expect(await grid.getByRole('img').count()).toBe(1);
-    expect(await manager.getByRole('list', { name: 'Photos you can delete' }).getByRole('listitem').count()).toBe(1);
+    expect(await manager.getByRole('list', { name: 'Photos you can change' }).getByRole('listitem').count()).toBe(1);
 
     await page.setViewportSize({ width: 390, height: 844 });
     await page.reload();
@@ -127,7 +138,7 @@ describe('journey: photos on registry parts and exchange listings', () => {
     await manager.getByRole('button', { name: 'Upload 1 photo' }).click();
     await uploaded(page, 'discs.png');
     await page.getByRole('list', { name: 'Photos of this listing' }).getByRole('img', { name: LISTING_ALT }).waitFor();
-    await manager.getByRole('list', { name: 'Photos you can delete' }).getByText(LISTING_ALT).waitFor();
+    await manager.getByRole('list', { name: 'Photos you can change' }).getByRole('img', { name: LISTING_ALT }).waitFor();
     expect(await page.getByText('No photos yet: a drawing of a buzzer disc.').count()).toBe(0);
     await page.screenshot({ path: `${SCREENSHOTS}/listing-photos-1280.png`, fullPage: true });
 

@@ -3,7 +3,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { useDeletePhoto, useSetCoverPhoto, useUpdatePhoto } from '../../api/photos.ts';
 import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { inputClass } from './field.tsx';
-import { PhotoAltEditor } from './photo-alt-editor.tsx';
+import { PhotoAltEditor } from '@/components/photos/photo-alt-editor.tsx';
 import { errorMessage } from './server-errors.ts';
 
 /** One stored photo with its upkeep: cover, order, alt text, log entry, delete. */

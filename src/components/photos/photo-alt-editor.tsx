@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Button } from '@/components/ui/button.tsx';
-import { inputClass } from './field.tsx';
+import { inputClass } from '@/components/ui/form-bits.tsx';
 
 /** Edit a stored photo's alt text; Save appears once it differs. */
 export function PhotoAltEditor({ photoId, alt, pending, onSave }: { photoId: number; alt: string; pending: boolean; onSave: (alt: string) => void }) {
