@@ -1,4 +1,5 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type ModelAttributes, type Sequelize } from 'sequelize';
+import { attachedPhotoAttributes } from './attached-photo.ts';
 
 export class Photo extends Model<InferAttributes<Photo>, InferCreationAttributes<Photo>> {
   declare id: CreationOptional<number>;
@@ -18,20 +19,11 @@ export class Photo extends Model<InferAttributes<Photo>, InferCreationAttributes
   static initModel(sequelize: Sequelize) {
     Photo.init(
       {
-        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-        buildId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+        // The columns every stored photo has, keyed to its build, plus the build photo's own two.
+        ...attachedPhotoAttributes('buildId'),
         entryId: DataTypes.INTEGER.UNSIGNED,
         ownerId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        contentHash: { type: DataTypes.STRING(64), allowNull: false },
-        displayFile: { type: DataTypes.STRING(120), allowNull: false },
-        thumbFile: { type: DataTypes.STRING(120), allowNull: false },
-        width: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        height: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        alt: { type: DataTypes.STRING(300), allowNull: false },
-        position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
-      },
+      } as ModelAttributes<Photo>,
       { sequelize, tableName: 'photos', modelName: 'Photo', underscored: true },
     );
   }

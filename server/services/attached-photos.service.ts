@@ -10,7 +10,7 @@ import type { AttachedPhoto } from '../models/attached-photo.ts';
 import { authorize } from '../policies/authorize.ts';
 import { ConflictError, NotFoundError, ValidationError } from '../errors.ts';
 import { presentAttachedPhoto } from '../presenters/photo.presenter.ts';
-import { altsFor, processAll, pruneAfterRemoval, storeThenRecord } from './photo-files.ts';
+import { altsFor, processAll, pruneAfterRemoval, storeThenRecord, storedColumns } from './photo-files.ts';
 import { loadListingForView } from './listing.service.ts';
 
 /** Most photos one part or one listing carries (common practice for listings, no source). */
@@ -74,16 +74,7 @@ export async function attachPhotos(
     }
     const last = (await model.max('position', { where: whereOwner(subject, id), transaction })) as number | null;
     const rows = await model.bulkCreate(
-      processed.map((p, i) => ({
-        [SHELF[subject].key]: id,
-        contentHash: p.contentHash,
-        displayFile: p.display.file,
-        thumbFile: p.thumb.file,
-        width: p.display.width,
-        height: p.display.height,
-        alt: alts[i]!,
-        position: (last ?? -1) + 1 + i,
-      }) as never),
+      processed.map((p, i) => ({ ...storedColumns(p), [SHELF[subject].key]: id, alt: alts[i]!, position: (last ?? -1) + 1 + i }) as never),
       { transaction },
     );
     return rows.map(presentAttachedPhoto);

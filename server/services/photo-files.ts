@@ -17,6 +17,11 @@ export function altsFor(alt: string[], count: number): string[] {
   throw new ValidationError(`alt: ${message}`, [{ path: 'alt', message, code: 'alt_count' }]);
 }
 
+/** The columns a converted photo fills in any photo table (files, hash, display size). */
+export function storedColumns(p: ProcessedPhoto) {
+  return { contentHash: p.contentHash, displayFile: p.display.file, thumbFile: p.thumb.file, width: p.display.width, height: p.display.height };
+}
+
 /** Check and convert every upload (one at a time, bounding memory); the first refusal names its file index. */
 export async function processAll(files: Buffer[]): Promise<ProcessedPhoto[]> {
   const processed: ProcessedPhoto[] = [];

@@ -7,7 +7,7 @@ import { Photo } from '../models/photo.model.ts';
 import { NotFoundError, ValidationError } from '../errors.ts';
 import { presentPhoto } from '../presenters/photo.presenter.ts';
 import { loadBuildForEdit, markEdited } from './build-access.ts';
-import { altsFor, processAll, pruneAfterRemoval, storeThenRecord } from './photo-files.ts';
+import { altsFor, processAll, pruneAfterRemoval, storeThenRecord, storedColumns } from './photo-files.ts';
 
 export interface UploadPhotosInput {
   files: Buffer[];
@@ -49,35 +49,22 @@ export async function uploadPhotos(actor: Actor | null, buildId: number, input: 
   const alts = altsFor(input.alt, input.files.length);
   const processed = await processAll(input.files);
   return storeThenRecord(uploadsDir, processed, async () => {
-      const rows = await Build.sequelize!.transaction(async (transaction) => {
-        const build = await loadBuildForEdit(actor, buildId, transaction);
-        if (input.entryId !== undefined) await assertEntryOfBuild(buildId, input.entryId, transaction);
-        const last = await Photo.max<number | null, Photo>('position', { where: { buildId }, transaction });
-        const first = (last ?? -1) + 1;
-        const photos: Photo[] = [];
-        for (const [i, p] of processed.entries()) {
-          photos.push(
-            await Photo.create(
-              {
-                buildId,
-                entryId: input.entryId ?? null,
-                ownerId: build.ownerId,
-                contentHash: p.contentHash,
-                displayFile: p.display.file,
-                thumbFile: p.thumb.file,
-                width: p.display.width,
-                height: p.display.height,
-                alt: alts[i],
-                position: first + i,
-              },
-              { transaction },
-            ),
-          );
-        }
-        await markEdited(build, transaction);
-        return photos;
-      });
-      return rows.map(presentPhoto);
+    const rows = await Build.sequelize!.transaction(async (transaction) => {
+      const build = await loadBuildForEdit(actor, buildId, transaction);
+      if (input.entryId !== undefined) await assertEntryOfBuild(buildId, input.entryId, transaction);
+      const last = await Photo.max<number | null, Photo>('position', { where: { buildId }, transaction });
+      const first = (last ?? -1) + 1;
+      const photos: Photo[] = [];
+      for (const [i, p] of processed.entries()) {
+        photos.push(await Photo.create(
+          { ...storedColumns(p), buildId, entryId: input.entryId ?? null, ownerId: build.ownerId, alt: alts[i]!, position: first + i },
+          { transaction },
+        ));
+      }
+      await markEdited(build, transaction);
+      return photos;
+    });
+    return rows.map(presentPhoto);
   });
 }
 

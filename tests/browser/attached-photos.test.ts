@@ -5,7 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import type { Page } from 'playwright-core';
-import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
+import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp, pickListingPart } from '../support/browser.ts';
 
 const DISC = 'Brass buzzer disc 27 mm';
 /** A maker of this run only, so the part and listing below are ours alone in the shared database. */
@@ -117,10 +117,7 @@ describe('journey: photos on registry parts and exchange listings', () => {
   test('when the maker posts a listing and adds a photo, then the listing page and its exchange card show it, and a visitor gets no upload controls', async () => {
     const { page } = browser;
     await page.goto(`${live.baseUrl}/exchange/new`);
-    await page.getByRole('heading', { level: 1, name: 'New listing' }).waitFor();
-    await page.getByLabel('Find a part').fill('buzzer');
-    await page.getByLabel('Part', { exact: true }).locator('option', { hasText: DISC }).waitFor({ state: 'attached' });
-    await page.getByLabel('Part', { exact: true }).selectOption({ label: `${DISC} (Buzzer disc)` });
+    await pickListingPart(page, 'buzzer', DISC, 'Buzzer disc');
     await page.getByLabel('Quantity').fill('5');
     // A swap, so the other journeys' "Free only" filters never meet this listing.
     await page.getByLabel('Swap', { exact: true }).check();

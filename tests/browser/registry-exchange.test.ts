@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
-import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
+import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp, pickListingPart } from '../support/browser.ts';
 
 const BAR = 'Cartridge bimorph bar 11 × 1.5 × 0.5 mm';
 const DISC = 'Brass buzzer disc 27 mm';
@@ -126,10 +126,7 @@ describe('journey: parts registry and exchange', () => {
   test('when marit-builds posts a listing seeking buzzer discs for a price, then its page shows it with the price', async () => {
     const { page } = browser;
     await page.goto(`${live.baseUrl}/exchange/new`);
-    await page.getByRole('heading', { level: 1, name: 'New listing' }).waitFor();
-    await page.getByLabel('Find a part').fill('buzzer');
-    await page.getByLabel('Part', { exact: true }).locator('option', { hasText: DISC }).waitFor({ state: 'attached' });
-    await page.getByLabel('Part', { exact: true }).selectOption({ label: `${DISC} (Buzzer disc)` });
+    await pickListingPart(page, 'buzzer', DISC, 'Buzzer disc');
     await page.getByLabel('Seeking: I am looking for parts').check();
     await page.getByLabel('Quantity').fill('4');
     await page.getByLabel('For a price').check();

@@ -61,3 +61,11 @@ export async function launchBrowser(): Promise<{ context: BrowserContext; page: 
     },
   };
 }
+
+/** On the new-listing page: search the part picker and choose the part shown as "<name> (<category label>)". */
+export async function pickListingPart(page: Page, search: string, name: string, categoryLabel: string): Promise<void> {
+  await page.getByRole('heading', { level: 1, name: 'New listing' }).waitFor();
+  await page.getByLabel('Find a part').fill(search);
+  await page.getByLabel('Part', { exact: true }).locator('option', { hasText: name }).waitFor({ state: 'attached' });
+  await page.getByLabel('Part', { exact: true }).selectOption({ label: `${name} (${categoryLabel})` });
+}

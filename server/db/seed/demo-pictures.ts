@@ -6,6 +6,7 @@ import { Photo } from '../../models/photo.model.ts';
 import { PartPhoto } from '../../models/part-photo.model.ts';
 import { ListingPhoto } from '../../models/listing-photo.model.ts';
 import { processPhoto, writeVariants } from '../../services/photo-storage.ts';
+import { storedColumns } from '../../services/photo-files.ts';
 import type { AttachPictures } from './demo.ts';
 import type { DemoPicture } from './demo-scenario.ts';
 
@@ -53,10 +54,7 @@ export function demoPictureAttacher(uploadsDir: string): AttachPictures {
       const png = await sharp(Buffer.from(SCENES[picture.scene])).png().toBuffer();
       const processed = await processPhoto(png);
       await writeVariants(uploadsDir, [processed]);
-      const stored = {
-        contentHash: processed.contentHash, displayFile: processed.display.file, thumbFile: processed.thumb.file,
-        width: processed.display.width, height: processed.display.height, alt: picture.alt, position,
-      };
+      const stored = { ...storedColumns(processed), alt: picture.alt, position };
       if ('build' in target) await Photo.create({ ...stored, buildId: target.build.id, entryId: null, ownerId: target.build.ownerId }, { transaction });
       else if ('partId' in target) await PartPhoto.create({ ...stored, partId: target.partId }, { transaction });
       else await ListingPhoto.create({ ...stored, listingId: target.listingId }, { transaction });
