@@ -1,13 +1,6 @@
 // Drive current, reactive power and stored charge of a capacitive (piezo) load (FIELD.md
 // "Drive electronics"). SI units throughout.
-import {
-  HIGH_VOLTAGE_THRESHOLD_V,
-  STORED_CHARGE_THRESHOLD_C,
-  STORED_ENERGY_THRESHOLD_J,
-  cautionsFor,
-  type Caution,
-  type SafetyFlags,
-} from './safety.ts';
+
 
 /** Vacuum permittivity ε0 (F/m), CODATA 2018. */
 export const VACUUM_PERMITTIVITY_F_PER_M = 8.8541878128e-12;
@@ -64,18 +57,4 @@ export function tubeCapacitanceF(g: {
   const id = positive(g.innerDiameterM, 'inner diameter');
   if (id >= od) throw new RangeError('inner diameter must be smaller than outer diameter');
   return (2 * Math.PI * VACUUM_PERMITTIVITY_F_PER_M * positive(g.relPermittivity, 'εr') * positive(g.lengthM, 'length')) / Math.log(od / id);
-}
-
-/**
- * Flags for a page's inputs: high voltage when |V| exceeds 50 V; stored charge when the charge or
- * energy at that voltage reaches the [practice] thresholds in safety.ts. Returns the cautions too.
- */
-export function safetyFlags(input: { voltageV: number; capacitanceF?: number }): SafetyFlags & { cautions: Caution[] } {
-  const v = Math.abs(input.voltageV);
-  const stored = input.capacitanceF !== undefined && input.capacitanceF > 0 ? storedCharge(input.capacitanceF, v) : null;
-  const flags: SafetyFlags = {
-    highVoltage: v > HIGH_VOLTAGE_THRESHOLD_V,
-    storedCharge: stored !== null && (stored.chargeC >= STORED_CHARGE_THRESHOLD_C || stored.energyJ >= STORED_ENERGY_THRESHOLD_J),
-  };
-  return { ...flags, cautions: cautionsFor(flags) };
 }

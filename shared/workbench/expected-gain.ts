@@ -85,31 +85,44 @@ export interface TubeGeometry {
   wallMm: number;
 }
 
-function tubeLateral(material: MaterialInput, g: TubeGeometry): number {
-  const length = positive(g.lengthMm, 'length');
+/** Checks a tube's wall against its diameter (a wall of OD/2 or more leaves no bore). */
+export function tubeWall(g: { outerDiameterMm: number; wallMm: number }): { od: number; wall: number } {
   const od = positive(g.outerDiameterMm, 'outer diameter');
   const wall = positive(g.wallMm, 'wall');
   if (wall >= od / 2) throw new RangeError('wall must be less than half the outer diameter');
-  const meanDiameter = od - wall;
-  return (2 * Math.SQRT2 * coefficientNmPerV(material, 'd31PmPerV') * length * length) / (Math.PI * meanDiameter * wall);
+  return { od, wall };
 }
 
 /**
- * Quartered tube, one quadrant at V: Δx = 2√2·d31·V·L²/(π·D·h), D = mean diameter = OD − wall
+ * One quadrant at V: Δx = √2·d31·V·L²/(π·D·h), D = OD − h. The strain d31·V/h of one 90° quadrant
+ * acts about the tube's neutral axis: its moment over the second moment π·R³·h gives the curvature
+ * ε₀·√2/(π·R) with R = D/2, and a free end deflects curvature·L²/2 [S: C. J. Chen, Appl. Phys. Lett.
+ * 60, 132 (1992); derivation calc].
+ */
+function tubeLateral(material: MaterialInput, g: TubeGeometry): number {
+  const length = positive(g.lengthMm, 'length');
+  const { od, wall } = tubeWall(g);
+  const meanDiameter = od - wall;
+  return (Math.SQRT2 * coefficientNmPerV(material, 'd31PmPerV') * length * length) / (Math.PI * meanDiameter * wall);
+}
+
+/**
+ * Quartered tube, one quadrant at V: Δx = √2·d31·V·L²/(π·D·h), D = mean diameter = OD − wall
  * [S: C. J. Chen, Appl. Phys. Lett. 60, 132 (1992)].
  */
 export function tubeQuadrantGain(material: MaterialInput, g: TubeGeometry): ExpectedGain {
   return withBand(tubeLateral(material, g));
 }
 
-/** Quartered tube, ±V on opposite quadrants: twice one quadrant [S: Chen 1992; FIELD.md]. */
+/** Quartered tube, ±V on opposite quadrants: 2√2·d31·V·L²/(π·D·h), twice one quadrant [S: Chen 1992]. */
 export function tubeOppositePairGain(material: MaterialInput, g: TubeGeometry): ExpectedGain {
   return withBand(2 * tubeLateral(material, g));
 }
 
-/** Tube, axial (all quadrants at V): ΔL = d31·V·L/h [FIELD.md table]. */
-export function tubeAxialGain(material: MaterialInput, g: { lengthMm: number; wallMm: number }): ExpectedGain {
-  const ratio = positive(g.lengthMm, 'length') / positive(g.wallMm, 'wall');
+/** Tube, axial (all quadrants at V): ΔL = d31·V·L/h [FIELD.md table]; the wall must leave a bore. */
+export function tubeAxialGain(material: MaterialInput, g: TubeGeometry): ExpectedGain {
+  const { wall } = tubeWall(g);
+  const ratio = positive(g.lengthMm, 'length') / wall;
   return withBand(coefficientNmPerV(material, 'd31PmPerV') * ratio);
 }
 
@@ -172,8 +185,8 @@ export function expectedGain(spec: ExpectedGainSpec): ExpectedGain {
 export const EXPECTED_GAIN_BASIS: Record<ExpectedGainSpec['actuator'], string> = {
   'bimorph-series': 'δ = (3/2)·d31·V·L²/h² — Smits, Dalke & Cooney, Sens. Actuators A 28 (1991) 41, series bimorph.',
   'bimorph-parallel': 'δ = 3·d31·V·L²/h² — Smits, Dalke & Cooney 1991, parallel bimorph.',
-  'tube-quadrant': 'Δx = 2√2·d31·V·L²/(π·D·h), D = OD − h — C. J. Chen, Appl. Phys. Lett. 60, 132 (1992).',
-  'tube-opposite-pair': 'Twice one quadrant — C. J. Chen, Appl. Phys. Lett. 60, 132 (1992).',
+  'tube-quadrant': 'Δx = √2·d31·V·L²/(π·D·h), D = OD − h, one quadrant at V — C. J. Chen, Appl. Phys. Lett. 60, 132 (1992).',
+  'tube-opposite-pair': 'Δx = 2√2·d31·V·L²/(π·D·h), ±V on opposite quadrants — C. J. Chen, Appl. Phys. Lett. 60, 132 (1992).',
   'tube-axial': 'ΔL = d31·V·L/h, length-mode strain of the wall.',
   stack: 'ΔL = n·d33·V — Murata, piezo actuator basics.',
   'shear-plate': 'Δx = d15·V per plate; stacked plates add.',

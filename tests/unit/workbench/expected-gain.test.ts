@@ -56,12 +56,34 @@ describe('expected gain, FIELD.md check values [calc]', () => {
     expect(bimorphParallelGain('PZT-5A', bar).gainNmPerV).toBeCloseTo(205.2, 1);
   });
 
-  it('when a PZT-5H tube 12.7 × 6.35 × 0.508 mm has one quadrant driven, then 13.4 nm/V [S: C. J. Chen, APL 60, 132 (1992)]', () => {
-    expect(tubeQuadrantGain('PZT-5H', tube).gainNmPerV).toBeCloseTo(13.4, 1);
+  it('when a PZT-5H tube 12.7 × 6.35 × 0.508 mm has one quadrant driven, then 6.70 nm/V [S: C. J. Chen, APL 60, 132 (1992); FIELD check value]', () => {
+    expect(tubeQuadrantGain('PZT-5H', tube).gainNmPerV).toBeCloseTo(6.70, 2);
   });
 
-  it('when opposite quadrants get ±V, then 26.8 nm/V [S: Chen 1992]', () => {
-    expect(tubeOppositePairGain('PZT-5H', tube).gainNmPerV).toBeCloseTo(26.8, 1);
+  it('when opposite quadrants get ±V, then 13.4 nm/V, twice one quadrant [S: Chen 1992]', () => {
+    expect(tubeOppositePairGain('PZT-5H', tube).gainNmPerV).toBeCloseTo(13.4, 1);
+    expect(tubeOppositePairGain('PZT-5H', tube).gainNmPerV).toBeCloseTo(2 * tubeQuadrantGain('PZT-5H', tube).gainNmPerV, 12);
+  });
+
+  it('when the bending of one quadrant is derived from beam theory, then it matches the formula [calc]', () => {
+    // Thin-walled tube of mean radius R and wall h; a free strain ε0 on the quadrant −45°…45°.
+    // Moment about the neutral axis M = E·h·R²·ε0·∫cos θ dθ; I = π·R³·h; curvature M/(E·I); δ = curvature·L²/2.
+    const d31 = 274e-12;
+    const h = tube.wallMm * 1e-3;
+    const r = ((tube.outerDiameterMm - tube.wallMm) / 2) * 1e-3;
+    const l = tube.lengthMm * 1e-3;
+    const eps0 = d31 / h; // per volt
+    const steps = 2000;
+    let integral = 0; // Simpson's rule for ∫cos θ over the quadrant
+    for (let i = 0; i <= steps; i++) {
+      const theta = -Math.PI / 4 + (i * Math.PI) / 2 / steps;
+      const w = i === 0 || i === steps ? 1 : i % 2 === 1 ? 4 : 2;
+      integral += w * Math.cos(theta);
+    }
+    integral *= Math.PI / 2 / steps / 3;
+    const curvature = (h * r * r * eps0 * integral) / (Math.PI * r ** 3 * h);
+    const deflectionNmPerV = ((curvature * l * l) / 2) * 1e9;
+    expect(tubeQuadrantGain('PZT-5H', tube).gainNmPerV).toBeCloseTo(deflectionNmPerV, 9);
   });
 
   it('when all quadrants get V, then the tube lengthens by 6.85 nm/V', () => {
@@ -96,6 +118,7 @@ describe('band, dispatcher and ratio', () => {
   it('when the custom constants lack the one needed, then it throws', () => {
     expect(() => bimorphSeriesGain({ d33PmPerV: 400 }, bar)).toThrow(RangeError);
     expect(() => tubeQuadrantGain('PZT-5H', { ...tube, wallMm: 4 })).toThrow(RangeError);
+    expect(() => tubeAxialGain('PZT-5H', { ...tube, wallMm: tube.outerDiameterMm / 2 })).toThrow(/half the outer diameter/);
   });
 
   it('when loaded by a spring as stiff as the actuator, then half the free gain [memory]', () => {
