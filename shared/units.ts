@@ -72,3 +72,57 @@ export function convertDisplacement(value: number, from: DisplacementUnit, to: D
   return from === to ? value : fromNm(toNm(value, from), to);
 }
 
+
+/** Gain units a gain may be written in (nm/V, µm/V, Å/V, µin/V). */
+export const gainUnits = ['nm/V', 'um/V', 'angstrom/V', 'uin/V'] as const;
+
+/** One of the supported gain units. */
+export type GainUnit = (typeof gainUnits)[number];
+
+/** Human labels for gain units. */
+export const gainUnitLabels: Readonly<Record<GainUnit, string>> = { 'nm/V': 'nm/V', 'um/V': 'µm/V', 'angstrom/V': 'Å/V', 'uin/V': 'µin/V' };
+
+const gainDisplacement: Readonly<Record<GainUnit, DisplacementUnit>> = { 'nm/V': 'nm', 'um/V': 'um', 'angstrom/V': 'angstrom', 'uin/V': 'uin' };
+
+/** Every unit the converter knows, of any kind. */
+export const convertibleUnits = [...displacementUnits, ...voltageUnits, ...gainUnits] as const;
+
+/** A unit of any kind. */
+export type ConvertibleUnit = (typeof convertibleUnits)[number];
+
+/** What a unit measures; only units of one kind convert into each other. */
+export type QuantityKind = 'displacement' | 'voltage' | 'gain';
+
+/** The kind of a unit. */
+export function kindOfUnit(unit: ConvertibleUnit): QuantityKind {
+  if ((displacementUnits as readonly string[]).includes(unit)) return 'displacement';
+  if ((voltageUnits as readonly string[]).includes(unit)) return 'voltage';
+  return 'gain';
+}
+
+/** The units of the same kind as `unit`, with their labels, in picker order. */
+export function unitsOfKind(unit: ConvertibleUnit): { key: ConvertibleUnit; label: string }[] {
+  switch (kindOfUnit(unit)) {
+    case 'displacement':
+      return displacementUnits.map((key) => ({ key, label: displacementUnitLabels[key] }));
+    case 'voltage':
+      return voltageUnits.map((key) => ({ key, label: voltageUnitLabels[key] }));
+    default:
+      return gainUnits.map((key) => ({ key, label: gainUnitLabels[key] }));
+  }
+}
+
+/** Converts a gain between gain units (the volt is common to all, so the length part converts). */
+export function convertGain(value: number, from: GainUnit, to: GainUnit): number {
+  return convertDisplacement(value, gainDisplacement[from], gainDisplacement[to]);
+}
+
+/** Converts between two units of the same kind; throws a RangeError across kinds. */
+export function convertQuantity(value: number, from: ConvertibleUnit, to: ConvertibleUnit): number {
+  const kind = kindOfUnit(from);
+  if (kind !== kindOfUnit(to)) throw new RangeError(`cannot convert ${kind} into ${kindOfUnit(to)}`);
+  if (from === to) return value;
+  if (kind === 'displacement') return convertDisplacement(value, from as DisplacementUnit, to as DisplacementUnit);
+  if (kind === 'voltage') return fromVolts(toVolts(value, from as VoltageUnit), to as VoltageUnit);
+  return convertGain(value, from as GainUnit, to as GainUnit);
+}

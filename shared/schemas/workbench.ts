@@ -3,7 +3,7 @@
 // The fit's "all voltages equal" rule is not a schema refine: the fit itself throws
 // FitInputError('voltages_all_equal'), which the server maps to a 400 (see fit-input-error.ts).
 import { z } from 'zod';
-import { displacementUnits, voltageUnits } from '../units.ts';
+import { convertibleUnits, displacementUnits, kindOfUnit, voltageUnits } from '../units.ts';
 import { MAX_FIT_POINTS, MIN_FIT_POINTS } from '../workbench/fit-input-error.ts';
 import { materialKeys } from '../workbench/materials.ts';
 
@@ -62,6 +62,8 @@ export const creepInput = z.strictObject({
     .array(z.strictObject({ timeS: positive, displacementNm: z.number() }))
     .min(3)
     .max(MAX_WORKBENCH_SAMPLES),
+  /** A later time (s) to project the creep to, besides 10, 100 and 1000 s. */
+  projectToS: positive.optional(),
 });
 /** Parsed (defaults applied) CreepInput as the service and the form receive it. */
 export type CreepInput = z.infer<typeof creepInput>;
@@ -75,17 +77,28 @@ export const materialInput = z.union([
 const tubeGeometry = { lengthMm: positive, outerDiameterMm: positive, wallMm: positive };
 const barGeometry = { lengthMm: positive, thicknessMm: positive };
 
-/** Expected gain: actuator kind, material and geometry in mm. */
+const tolerance = z.number().nonnegative().optional();
+
+/** What every expected-gain request may add: a measured gain to compare, and ± geometry tolerances (mm). */
+const expectedGainExtras = {
+  measuredNmPerV: positive.optional(),
+  tolerances: z
+    .strictObject({ lengthMm: tolerance, thicknessMm: tolerance, outerDiameterMm: tolerance, wallMm: tolerance })
+    .optional(),
+};
+
+/** Expected gain: actuator kind, material and geometry in mm; optionally a measurement and tolerances. */
 export const expectedGainInput = z.discriminatedUnion('actuator', [
-  z.strictObject({ actuator: z.literal('plate-thickness'), material: materialInput }),
-  z.strictObject({ actuator: z.literal('plate-length'), material: materialInput, ...barGeometry }),
-  z.strictObject({ actuator: z.literal('stack'), material: materialInput, layers: z.number().int().min(1) }),
-  z.strictObject({ actuator: z.literal('shear-plate'), material: materialInput, plates: z.number().int().min(1).optional() }),
-  z.strictObject({ actuator: z.enum(['bimorph-series', 'bimorph-parallel']), material: materialInput, ...barGeometry }),
+  z.strictObject({ actuator: z.literal('plate-thickness'), material: materialInput, ...expectedGainExtras }),
+  z.strictObject({ actuator: z.literal('plate-length'), material: materialInput, ...barGeometry, ...expectedGainExtras }),
+  z.strictObject({ actuator: z.literal('stack'), material: materialInput, layers: z.number().int().min(1), ...expectedGainExtras }),
+  z.strictObject({ actuator: z.literal('shear-plate'), material: materialInput, plates: z.number().int().min(1).optional(), ...expectedGainExtras }),
+  z.strictObject({ actuator: z.enum(['bimorph-series', 'bimorph-parallel']), material: materialInput, ...barGeometry, ...expectedGainExtras }),
   z.strictObject({
     actuator: z.enum(['tube-quadrant', 'tube-opposite-pair', 'tube-axial']),
     material: materialInput,
     ...tubeGeometry,
+    ...expectedGainExtras,
   }),
 ]);
 /** Parsed (defaults applied) ExpectedGainInput as the service and the form receive it. */
@@ -113,6 +126,8 @@ export const gainMatrixFitInput = z.strictObject({
     .array(z.strictObject({ vaV: z.number(), vbV: z.number(), xNm: z.number(), yNm: z.number() }))
     .min(3)
     .max(MAX_WORKBENCH_SAMPLES),
+  /** 'affine' fits offsets x₀, y₀ too (an indicator's zero); 'origin' forces them to zero. */
+  model: z.enum(['affine', 'origin']).default('affine'),
 });
 /** Parsed (defaults applied) GainMatrixFitInput as the service and the form receive it. */
 export type GainMatrixFitInput = z.infer<typeof gainMatrixFitInput>;
@@ -154,16 +169,18 @@ export const driveCurrentInput = z.strictObject({
 /** Parsed (defaults applied) DriveCurrentInput as the service and the form receive it. */
 export type DriveCurrentInput = z.infer<typeof driveCurrentInput>;
 
-/** Tunnelling sensitivity from a barrier height in eV. */
-export const tunnellingInput = z.strictObject({ workFunctionEv: positive.max(20) });
+/** Tunnelling sensitivity from a barrier height in eV, and optionally the barrier for a wanted ratio per Å. */
+export const tunnellingInput = z.strictObject({ workFunctionEv: positive.max(20), wantedRatio: z.number().gt(1, 'Must be more than 1.').optional() });
 /** Parsed (defaults applied) TunnellingInput as the service and the form receive it. */
 export type TunnellingInput = z.infer<typeof tunnellingInput>;
 
-/** Unit converter. */
-export const unitConversionInput = z.strictObject({
-  value: z.number(),
-  from: z.enum(displacementUnits),
-  to: z.enum(displacementUnits),
-});
+/** Unit converter: displacements, voltages or gains, within one kind. */
+export const unitConversionInput = z
+  .strictObject({
+    value: z.number(),
+    from: z.enum(convertibleUnits),
+    to: z.enum(convertibleUnits),
+  })
+  .refine((v) => kindOfUnit(v.from) === kindOfUnit(v.to), { message: 'Both units must measure the same thing (a displacement, a voltage or a gain).', path: ['to'] });
 /** Parsed (defaults applied) UnitConversionInput as the service and the form receive it. */
 export type UnitConversionInput = z.infer<typeof unitConversionInput>;

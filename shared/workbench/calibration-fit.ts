@@ -2,15 +2,18 @@
 // Definitions follow FIELD.md "Calibration fit":
 // - least squares with or without intercept, se(b), R² (uncentred through the origin), and the
 //   95 % interval b ± t(0.975, df)·se(b), df = n − 2 or n − 1 [S: NIST/ITL StRD conventions];
-// - nonlinearity = max |residual| / span × 100 %, span = |b|·(Vmax − Vmin)
-//   [S: ANSI/ISA-S37.1 linearity terms; the least-squares variant is practice];
+// - nonlinearity (independent linearity on the calibration curve) = max over distinct voltages of
+//   |mean reading at V (up and down sweeps averaged) − (a + b·V)| / span × 100 %,
+//   span = |b|·(Vmax − Vmin), the line fitted through all points [S: ISA-51.1 / ANSI/ISA-S37.1 terms:
+//   linearity is judged on the calibration curve, the average of upscale and downscale readings —
+//   memory for the clause]; a single sweep read once per voltage gives max |residual| / span;
 // - hysteresis = max over voltages present in both sweeps of |mean x_up(V) − mean x_down(V)| /
 //   span × 100 % [practice; how loop width is quoted].
 import type { FitResultDto } from '../schemas/workbench.ts';
 import { toNm, toVolts, type DisplacementUnit, type VoltageUnit } from '../units.ts';
 import { FitInputError, MAX_FIT_POINTS, MIN_FIT_POINTS } from './fit-input-error.ts';
 import { fitLineColumns, type FitModel } from './line-fit.ts';
-import { maxSweepGapNm } from './sweep-gap.ts';
+import { groupByVoltage, maxCurveDeviationNm, maxSweepGapNm } from './voltage-groups.ts';
 import { tCritical95 } from './student-t.ts';
 
 /** Direction of the drive sweep a point was taken on; hysteresis needs both. */
@@ -64,7 +67,7 @@ export interface CalibrationFit {
   spanNm: number;
   voltsMinV: number;
   voltsMaxV: number;
-  /** null when the span is zero (a gain of exactly zero). */
+  /** Independent linearity on the calibration curve (% of span); null when the span is zero. */
   nonlinearityPctFs: number | null;
   /** null when no voltage appears in both sweeps, or the span is zero. */
   hysteresisPctFs: number | null;
@@ -121,7 +124,7 @@ export function fitCalibration(
     sweep[i] = code;
     sweeps |= code;
   }
-  return fitPacked(v, x, sweeps === 3 ? sweep : null, n, model, options);
+  return fitPacked(v, x, sweeps === 0 ? null : sweep, n, model, options);
 }
 
 /** Fits gain from points in their recorded units (V or mV; nm, µm, Å, µin, mil): the API path. */
@@ -156,7 +159,7 @@ export function fitCalibrationInUnits(
     sweep[i] = code;
     sweeps |= code;
   }
-  return fitPacked(v, x, sweeps === 3 ? sweep : null, n, input.model ?? 'intercept', options);
+  return fitPacked(v, x, sweeps === 0 ? null : sweep, n, input.model ?? 'intercept', options);
 }
 
 /** Fits gain from typed-array columns without copying: the fast path for large records. */
@@ -202,7 +205,9 @@ function fitPacked(
   const t = tCritical95(line.df);
   const halfWidth = t * line.slopeStdErr;
   const spanNm = Math.abs(gain) * (line.xMax - line.xMin);
-  const gapNm = sweep ? maxSweepGapNm(v, x, sweep, n) : null;
+  const groups = groupByVoltage(v, x, sweep, n);
+  const gapNm = maxSweepGapNm(groups);
+  const deviationNm = maxCurveDeviationNm(groups, line.intercept, gain);
   if (![gain, line.slopeStdErr, line.residualStd, line.intercept, spanNm].every(Number.isFinite)) {
     throw new FitInputError('numeric_overflow', 'The values are too large to fit in double precision.');
   }
@@ -222,7 +227,7 @@ function fitPacked(
     spanNm,
     voltsMinV: line.xMin,
     voltsMaxV: line.xMax,
-    nonlinearityPctFs: spanNm > 0 ? (line.maxAbsResidual / spanNm) * 100 : null,
+    nonlinearityPctFs: spanNm > 0 ? (deviationNm / spanNm) * 100 : null,
     hysteresisPctFs: gapNm !== null && spanNm > 0 ? (gapNm / spanNm) * 100 : null,
     lineNm: [line.intercept + gain * line.xMin, line.intercept + gain * line.xMax],
     ...(residuals ? { residualsNm: Array.from(residuals) } : {}),

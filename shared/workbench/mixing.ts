@@ -66,21 +66,88 @@ export interface MixingSample {
   yNm: number;
 }
 
-/** Fitted G with the residual SD of each axis. */
+/** Fitted G (and the offsets x₀, y₀ for the affine model) with the residual SD of each axis. */
 export interface GainMatrixFit {
   n: number;
+  model: GainMatrixModel;
   gain: GainMatrix;
+  offsetNm: readonly [number, number];
   residualStdXNm: number;
   residualStdYNm: number;
 }
 
+/** Affine x = x₀ + G·V (an indicator's zero need not be the rest position), or through the origin. */
+export type GainMatrixModel = 'affine' | 'origin';
+
+/** Why a grid cannot be fitted, so the page and the API can say which. */
+export type GainMatrixRefusal = 'too_few_samples' | 'degenerate_grid' | 'numeric_overflow' | 'numeric_underflow';
+
+/** Thrown for a grid the fit cannot use; a RangeError, so routes answer 400 with `code`. */
+export class GainMatrixFitError extends RangeError {
+  readonly code: GainMatrixRefusal;
+  constructor(code: GainMatrixRefusal, message: string) {
+    super(message);
+    this.name = 'GainMatrixFitError';
+    this.code = code;
+  }
+}
+
+/** Smallest magnitude we scale by safely: below it, squares would fall into subnormals [calc: 2^-511 ≈ 1.5e-154]. */
+const SMALLEST_SAFE_SCALE = 1.5e-154;
+
+function maxAbs(samples: readonly MixingSample[], key: keyof MixingSample): number {
+  let m = 0;
+  for (const s of samples) {
+    const a = Math.abs(s[key]);
+    if (a > m) m = a;
+  }
+  return m;
+}
+
 /**
- * Least-squares G from a grid: x = gxa·Va + gxb·Vb and y = gya·Va + gyb·Vb, two independent
- * no-intercept regressions on the same 2 × 2 normal equations; residual SD with n − 2 df.
+ * Least-squares G from a grid of drive pairs, each axis its own regression on the same design:
+ * affine x = x₀ + gxa·Va + gxb·Vb (centred sums, residual SD with n − 3 df) or through the origin
+ * x = gxa·Va + gxb·Vb (raw sums, n − 2 df) [S: ordinary least squares, e.g. Draper & Smith, Applied
+ * Regression Analysis, ch. 5 — memory for the chapter]. Columns are scaled by their largest
+ * magnitude first, so the sums neither overflow nor underflow for any representable input; a grid
+ * whose Va and Vb do not vary independently (|sin| of the angle between the centred columns below
+ * 1e-6) is refused as degenerate.
  */
-export function fitGainMatrix(samples: readonly MixingSample[]): GainMatrixFit {
+export function fitGainMatrix(samples: readonly MixingSample[], model: GainMatrixModel = 'affine'): GainMatrixFit {
   const n = samples.length;
-  if (n < 3) throw new RangeError('a gain-matrix fit needs at least 3 samples');
+  const params = model === 'affine' ? 3 : 2;
+  if (n < params + 1) {
+    throw new GainMatrixFitError('too_few_samples', `A ${model === 'affine' ? 'fit with offsets' : 'fit through the origin'} needs at least ${params + 1} samples.`);
+  }
+  for (const s of samples) {
+    if (![s.vaV, s.vbV, s.xNm, s.yNm].every(Number.isFinite)) throw new GainMatrixFitError('numeric_overflow', 'Every sample must be a finite number.');
+  }
+  const sa = maxAbs(samples, 'vaV');
+  const sb = maxAbs(samples, 'vbV');
+  const sx = maxAbs(samples, 'xNm') || 1;
+  const sy = maxAbs(samples, 'yNm') || 1;
+  if (sa === 0 || sb === 0) {
+    throw new GainMatrixFitError('degenerate_grid', `${sa === 0 ? 'Va' : 'Vb'} is zero in every sample: the grid cannot separate the two channels. Vary Va and Vb each on its own.`);
+  }
+  if (Math.min(sa, sb, sx, sy) < SMALLEST_SAFE_SCALE) {
+    throw new GainMatrixFitError('numeric_underflow', 'The values are so small that double precision loses them (underflow); enter them in other units (mV, µm).');
+  }
+  let ma = 0;
+  let mb = 0;
+  let mx = 0;
+  let my = 0;
+  if (model === 'affine') {
+    for (const s of samples) {
+      ma += s.vaV / sa;
+      mb += s.vbV / sb;
+      mx += s.xNm / sx;
+      my += s.yNm / sy;
+    }
+    ma /= n;
+    mb /= n;
+    mx /= n;
+    my /= n;
+  }
   let saa = 0;
   let sab = 0;
   let sbb = 0;
@@ -89,31 +156,54 @@ export function fitGainMatrix(samples: readonly MixingSample[]): GainMatrixFit {
   let say = 0;
   let sby = 0;
   for (const s of samples) {
-    if (![s.vaV, s.vbV, s.xNm, s.yNm].every(Number.isFinite)) throw new RangeError('samples must be finite');
-    saa += s.vaV * s.vaV;
-    sab += s.vaV * s.vbV;
-    sbb += s.vbV * s.vbV;
-    sax += s.vaV * s.xNm;
-    sbx += s.vbV * s.xNm;
-    say += s.vaV * s.yNm;
-    sby += s.vbV * s.yNm;
+    const a = s.vaV / sa - ma;
+    const b = s.vbV / sb - mb;
+    const x = s.xNm / sx - mx;
+    const y = s.yNm / sy - my;
+    saa += a * a;
+    sab += a * b;
+    sbb += b * b;
+    sax += a * x;
+    sbx += b * x;
+    say += a * y;
+    sby += b * y;
   }
   const det = saa * sbb - sab * sab;
-  if (!(det > MIN_MIXING_SIN_ANGLE * MIN_MIXING_SIN_ANGLE * saa * sbb)) {
-    throw new SingularMatrixError('The drive grid does not vary Va and Vb independently.');
+  if (!(saa > 0) || !(sbb > 0) || !(det > MIN_MIXING_SIN_ANGLE * MIN_MIXING_SIN_ANGLE * saa * sbb)) {
+    const which = !(saa > 0) ? 'Va never changes' : !(sbb > 0) ? 'Vb never changes' : 'Va and Vb change together';
+    throw new GainMatrixFitError('degenerate_grid', `${which} in this grid, so it cannot separate the two channels. Vary Va and Vb each on its own (a grid of both).`);
   }
+  // Coefficients in scaled units, then back to nm/V.
+  const gxa = ((sbb * sax - sab * sbx) / det) * (sx / sa);
+  const gxb = ((saa * sbx - sab * sax) / det) * (sx / sb);
+  const gya = ((sbb * say - sab * sby) / det) * (sy / sa);
+  const gyb = ((saa * sby - sab * say) / det) * (sy / sb);
   const gain: GainMatrix = [
-    [(sbb * sax - sab * sbx) / det, (saa * sbx - sab * sax) / det],
-    [(sbb * say - sab * sby) / det, (saa * sby - sab * say) / det],
+    [gxa, gxb],
+    [gya, gyb],
   ];
+  const offsetNm: [number, number] =
+    model === 'affine' ? [mx * sx - gxa * ma * sa - gxb * mb * sb, my * sy - gya * ma * sa - gyb * mb * sb] : [0, 0];
   let ssx = 0;
   let ssy = 0;
   for (const s of samples) {
     const p = applyGain(gain, s.vaV, s.vbV);
-    ssx += (s.xNm - p.xNm) ** 2;
-    ssy += (s.yNm - p.yNm) ** 2;
+    ssx += ((s.xNm - offsetNm[0] - p.xNm) / sx) ** 2;
+    ssy += ((s.yNm - offsetNm[1] - p.yNm) / sy) ** 2;
   }
-  return { n, gain, residualStdXNm: Math.sqrt(ssx / (n - 2)), residualStdYNm: Math.sqrt(ssy / (n - 2)) };
+  const df = n - params;
+  const fit = {
+    n,
+    model,
+    gain,
+    offsetNm,
+    residualStdXNm: Math.sqrt(ssx / df) * sx,
+    residualStdYNm: Math.sqrt(ssy / df) * sy,
+  };
+  if (![gxa, gxb, gya, gyb, ...offsetNm, fit.residualStdXNm, fit.residualStdYNm].every(Number.isFinite)) {
+    throw new GainMatrixFitError('numeric_overflow', 'The gains are too large for double precision (overflow); enter the readings in other units.');
+  }
+  return fit;
 }
 
 /**

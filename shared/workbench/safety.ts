@@ -146,3 +146,44 @@ export function largestMagnitude(volts: Iterable<number>): number {
   for (const v of volts) if (Number.isFinite(v) && Math.abs(v) > m) m = Math.abs(v);
   return m;
 }
+
+/** What the safety rule needs of an actuator: its stated limit and its runs' points. */
+export interface ActuatorForSafety {
+  maxVolts: number | null;
+  runs?: readonly { voltageUnit: 'V' | 'mV'; points: readonly { volts: number }[] }[];
+}
+
+/**
+ * The highest voltage an actuator is rated for or was driven at in its runs (V). A stated limit
+ * bounds any waveform, so it is judged as a peak; run points are judged the same way (a run's
+ * steps may be the extremes of a sweep).
+ */
+export function actuatorPeakVolts(a: ActuatorForSafety): number {
+  let peak = a.maxVolts !== null && Number.isFinite(a.maxVolts) ? Math.abs(a.maxVolts) : 0;
+  for (const run of a.runs ?? []) {
+    const scale = run.voltageUnit === 'mV' ? 1e-3 : 1;
+    for (const p of run.points) if (Math.abs(p.volts * scale) > peak) peak = Math.abs(p.volts * scale);
+  }
+  return peak;
+}
+
+/** The safety assessment of one actuator (limit and runs), with the part's capacitance when known. */
+export function assessActuator(a: ActuatorForSafety, capacitanceNf?: number | null): SafetyAssessment {
+  const peakV = actuatorPeakVolts(a);
+  const c = capacitanceNf !== null && capacitanceNf !== undefined && capacitanceNf > 0 ? capacitanceNf * 1e-9 : null;
+  return assessSafety({ peakV, chargeC: c === null ? undefined : c * peakV });
+}
+
+/**
+ * Points of a run above the actuator's stated maximum volts (indices), for the mismatch warning:
+ * either the points or the stated limit are wrong.
+ */
+export function pointsAboveLimit(points: readonly { volts: number }[], voltageUnit: 'V' | 'mV', maxVolts: number | null | undefined): number[] {
+  if (maxVolts === null || maxVolts === undefined || !Number.isFinite(maxVolts)) return [];
+  const scale = voltageUnit === 'mV' ? 1e-3 : 1;
+  const out: number[] = [];
+  points.forEach((p, i) => {
+    if (Number.isFinite(p.volts) && Math.abs(p.volts * scale) > Math.abs(maxVolts)) out.push(i);
+  });
+  return out;
+}

@@ -10,6 +10,10 @@ export const workbenchTools = [
   { slug: 'drive-current', title: 'Drive current', line: 'Peak and RMS current, reactive power and stored charge of a piezo load.' },
   { slug: 'tunnelling', title: 'Tunnelling gap', line: 'Decay constant and current change per ångström from the barrier height.' },
   { slug: 'units', title: 'Units', line: 'Convert nm, µm, Å, µin and mil; V and mV.' },
+  { slug: 'loaded-gain', title: 'Loaded gain', line: 'What an actuator keeps against a spring such as a dial indicator, and how far its preload pushes it back.' },
+  { slug: 'tube', title: 'Piezo tube', line: 'Quadrant capacitance and the first bending and axial resonances of a quartered tube.' },
+  { slug: 'drive-limits', title: 'Drive limits', line: 'Slew rate and current a sine or raster asks of the amplifier, and the frequencies its limits allow.' },
+  { slug: 'noise-floor', title: 'Noise floor', line: 'Amplifier noise, DAC steps and cantilever thermal motion at the tip, and which one dominates.' },
 ] as const;
 
 /** One calculator's URL segment. */

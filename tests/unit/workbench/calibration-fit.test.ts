@@ -122,7 +122,7 @@ describe('fitCalibration worked examples [calc]', () => {
     { volts: 2, displacementNm: 3 },
   ];
 
-  it('when three points are fitted, then gain, SE, CI, R², span and nonlinearity match hand values (nonlinearity [S: ANSI/ISA-S37.1; least-squares variant practice])', () => {
+  it('when three points are fitted, then gain, SE, CI, R², span and nonlinearity match hand values (one sweep: nonlinearity is max |residual| ÷ span [S: ISA-51.1 terms — memory for the clause])', () => {
     const fit = fitCalibration(points, 'intercept', { includeResiduals: true });
     expect(fit.gainNmPerV).toBeCloseTo(1.5, 14);
     expect(fit.interceptNm).toBeCloseTo(-1 / 6, 14);
@@ -156,6 +156,37 @@ describe('fitCalibration worked examples [calc]', () => {
     // gaps: V=0 |0 − 2| = 2, V=1 |11 − 15| = 4, V=2 0; V=3 is in one sweep only.
     expect(fit.hysteresisPctFs).toBeCloseTo((4 / fit.spanNm) * 100, 12);
     expect(fit.spanNm).toBeCloseTo(Math.abs(fit.gainNmPerV) * 3, 12);
+  });
+
+  it('when a perfectly linear part shows a symmetric loop, then nonlinearity is 0 while hysteresis is the loop width [S: ISA-51.1 independent linearity on the calibration curve — memory for the clause]', () => {
+    // Up reads 10·V + 2·sin(π·V/4) on 0…4 V, down 10·V − 2·sin(π·V/4): the average is exactly 10·V.
+    const loop: CalibrationPoint[] = [];
+    for (const v of [0, 1, 2, 3, 4]) loop.push({ volts: v, displacementNm: 10 * v + 2 * Math.sin((Math.PI * v) / 4), sweep: 'up' });
+    for (const v of [4, 3, 2, 1, 0]) loop.push({ volts: v, displacementNm: 10 * v - 2 * Math.sin((Math.PI * v) / 4), sweep: 'down' });
+    const fit = fitCalibration(loop, 'intercept');
+    expect(fit.gainNmPerV).toBeCloseTo(10, 12);
+    expect(fit.nonlinearityPctFs).toBeCloseTo(0, 10);
+    expect(fit.hysteresisPctFs).toBeCloseTo((4 / 40) * 100, 10); // widest gap 2·2 at 2 V over a 40 nm span [calc]
+  });
+
+  it('when the calibration curve bows, then nonlinearity is the largest gap between the sweep-averaged curve and the line over the span [calc]', () => {
+    // Up (0,0) (1,12) (2,20); down (2,20) (1,8) (0,0): the curve is (0,0) (1,10) (2,20), the line through all
+    // six points is x = 10·V (hand: Sxy/Sxx = 40/4), so the curve lies on the line; a bow added to both sweeps at 1 V
+    // of +3 nm moves the curve to 13 at 1 V. Line then: x̄ = 11, slope 10 (bow at the centre voltage leaves it),
+    // intercept 11 − 10 = 1: deviations |0 − 1| = 1, |13 − 11| = 2, |20 − 21| = 1 → 2 nm over a 20 nm span.
+    const bowed: CalibrationPoint[] = [
+      { volts: 0, displacementNm: 0, sweep: 'up' },
+      { volts: 1, displacementNm: 15, sweep: 'up' },
+      { volts: 2, displacementNm: 20, sweep: 'up' },
+      { volts: 2, displacementNm: 20, sweep: 'down' },
+      { volts: 1, displacementNm: 11, sweep: 'down' },
+      { volts: 0, displacementNm: 0, sweep: 'down' },
+    ];
+    const fit = fitCalibration(bowed, 'intercept');
+    expect(fit.gainNmPerV).toBeCloseTo(10, 12);
+    expect(fit.interceptNm).toBeCloseTo(1, 12);
+    expect(fit.nonlinearityPctFs).toBeCloseTo((2 / 20) * 100, 10);
+    expect(fit.hysteresisPctFs).toBeCloseTo((4 / 20) * 100, 10);
   });
 
   it('when no voltage is in both sweeps, then hysteresis is null', () => {

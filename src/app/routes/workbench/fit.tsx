@@ -7,6 +7,7 @@ import { ChartFrame } from '@/features/workbench/components/chart-frame.tsx';
 import { LazyCalibrationChart } from '@/features/workbench/components/charts/lazy-charts.ts';
 import { FormRadios, FormSelect } from '@/features/workbench/components/fields.tsx';
 import { NoResult } from '@/features/workbench/components/results.tsx';
+import { SafetyNotice } from '@/features/workbench/components/safety-notice.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { CsvSource } from '@/features/workbench/fit/csv-source.tsx';
 import { exampleRows, fitForm, type FitFormValues } from '@/features/workbench/fit/fit-form.ts';
@@ -48,6 +49,7 @@ export function FitPage() {
         results={
           result.ok ? (
             <>
+              <SafetyNotice cautions={result.preview.fit.cautions} crossed={result.preview.fit.levelsCrossed} />
               <FitResults fit={result.preview.fit} />
               <ChartFrame label="Calibration plot" caption="Up sweep: copper circles; down sweep: teal triangles; the line is the least-squares fit. Long runs are thinned for drawing only.">
                 <LazyCalibrationChart points={result.preview.plotPoints} fit={result.preview.fit} />

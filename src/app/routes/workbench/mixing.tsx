@@ -1,13 +1,14 @@
 import { ChartFrame } from '@/features/workbench/components/chart-frame.tsx';
 import { LazyMixerChart } from '@/features/workbench/components/charts/lazy-charts.ts';
 import { FieldGroup, FormNumber, errorOf } from '@/features/workbench/components/fields.tsx';
-import { NoResult } from '@/features/workbench/components/results.tsx';
+import { NoResult, ResultWarnings } from '@/features/workbench/components/results.tsx';
 import { SafetyNotice } from '@/features/workbench/components/safety-notice.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { GainMatrixFields } from '@/features/workbench/mixing/gain-matrix-fields.tsx';
 import { GridFitPanel } from '@/features/workbench/mixing/grid-fit-panel.tsx';
-import { computeMixing, mixingForm, type MixingFormValues } from '@/features/workbench/mixing/mixing-form.ts';
+import { mixingForm, type MixingFormValues } from '@/features/workbench/mixing/mixing-form.ts';
+import { mixingCalculator } from '@shared/workbench/calculators/mixing-calculators.ts';
 import { MixingResults } from '@/features/workbench/mixing/mixing-results.tsx';
 import { PairPreset } from '@/features/workbench/mixing/pair-preset.tsx';
 
@@ -19,7 +20,7 @@ const defaults: MixingFormValues = {
 };
 
 export function MixingPage() {
-  const { form, live } = useLiveForm(mixingForm, defaults, computeMixing);
+  const { form, live } = useLiveForm(mixingForm, defaults, mixingCalculator.compute);
   const limitsError = errorOf(form, 'limits');
   return (
     <ToolPage slug="mixing" lead="Two benders meeting at one tip: the drive matrix, the volts for a wanted x, y, and the region the limits allow.">
@@ -47,10 +48,11 @@ export function MixingPage() {
         results={
           live.ok ? (
             <>
-              <SafetyNotice cautions={live.result.cautions} />
+              <SafetyNotice cautions={live.result.cautions} crossed={live.result.levelsCrossed} />
+              <ResultWarnings warnings={live.result.warnings} />
               <MixingResults r={live.result} />
               <ChartFrame label="Reachable region" caption="Teal: every tip position the drive limits allow. The wanted point is a copper dot when reachable, a red cross when not; the black dot is the origin.">
-                <LazyMixerChart region={live.result.region} target={live.result.target} />
+                <LazyMixerChart region={live.result.regionNm} target={live.result.target} />
               </ChartFrame>
             </>
           ) : (

@@ -1,16 +1,20 @@
-import { displacementUnitLabels } from '@shared/units.ts';
+import { convertDisplacement, displacementUnitLabels } from '@shared/units.ts';
+import { peakToPeakCalculator } from '@shared/workbench/calculators/peak-to-peak-calculator.ts';
 import { FieldGroup, FormNumber, FormSelect } from '@/features/workbench/components/fields.tsx';
-import { Gain, Headline, NoResult, Quantity, ResultPanel, ResultRow } from '@/features/workbench/components/results.tsx';
+import { Gain, Headline, NoResult, Quantity, ResultPanel, ResultRow, ResultWarnings } from '@/features/workbench/components/results.tsx';
+import { SafetyNotice } from '@/features/workbench/components/safety-notice.tsx';
+import { useUnitConversion } from '@/features/workbench/form/use-unit-conversion.ts';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
-import { formatSig } from '@/features/workbench/format.ts';
+import { formatSig } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
-import { computePeakToPeak, peakToPeakForm } from '@/features/workbench/simple/peak-to-peak-form.ts';
+import { peakToPeakForm, peakToPeakLengthFields } from '@/features/workbench/simple/peak-to-peak-form.ts';
 import { displacementOptions } from '@/features/workbench/unit-options.ts';
 
 const defaults = { unit: 'um', displacementPp: 2, displacementResolution: 0.1, voltsPpV: 20 } as const;
 
 export function PeakToPeakPage() {
-  const { form, live } = useLiveForm(peakToPeakForm, defaults, computePeakToPeak);
+  const { form, live } = useLiveForm(peakToPeakForm, defaults, peakToPeakCalculator.compute);
+  useUnitConversion(form, 'unit', peakToPeakLengthFields, convertDisplacement);
   const unit = displacementUnitLabels[form.watch('unit') ?? 'nm'];
   const r = live.ok ? live.result : null;
   return (
@@ -19,7 +23,7 @@ export function PeakToPeakPage() {
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
             <FieldGroup legend="Displacement reading">
-              <FormSelect form={form} name="unit" label="Indicator reads in" options={displacementOptions} />
+              <FormSelect form={form} name="unit" label="Indicator reads in" options={displacementOptions} hint="Changing it converts the numbers below." />
               <FormNumber form={form} name="displacementPp" label="Peak-to-peak swing Δx" unit={unit} />
               <FormNumber form={form} name="displacementResolution" label="Reading resolution" unit={unit} hint="Smallest division you can read." />
             </FieldGroup>
@@ -31,15 +35,19 @@ export function PeakToPeakPage() {
         }
         results={
           r ? (
+            <>
+            <SafetyNotice cautions={r.cautions} crossed={r.levelsCrossed} />
+            <ResultWarnings warnings={r.warnings} />
             <ResultPanel
-              headline={<Headline label="Gain" sub="± standard uncertainty (k = 1) from the reading resolution."><Gain value={r.gainNmPerV} plusMinus={r.gainStdUncNmPerV} /></Headline>}
-              basis="gain = Δx_pp / ΔV_pp [practice]; each reading rectangular within ± half a division, u(Δ) = r/√6, relative uncertainties in quadrature (GUM, JCGM 100:2008) [memory]."
+              headline={<Headline label="Gain" sub="± standard uncertainty (k = 1, GUM) from the reading resolution."><Gain value={r.gainNmPerV} plusMinus={r.gainStdUncNmPerV} kind="std" /></Headline>}
+              basis="gain = Δx_pp / ΔV_pp (common practice); each reading rectangular within ± half a division, so the difference of two readings has u = r/√6, relative uncertainties in quadrature (Source: GUM, JCGM 100:2008, 4.3.7 and 5.1.2)."
             >
               <ResultRow label="Relative uncertainty"><Quantity q={{ value: formatSig(r.gainRelStdUnc * 100, 3), unit: '%' }} /></ResultRow>
-              <ResultRow label="Worst-case bounds" note="Both readings off by a full division in the unlucky direction.">
+              <ResultRow label="Worst-case bounds" note="Each reading off by half a division in the unlucky direction, so each swing off by one division.">
                 <span className="whitespace-nowrap"><span className="num">{formatSig(r.gainBoundsNmPerV[0])} – {formatSig(r.gainBoundsNmPerV[1])}</span> nm/V</span>
               </ResultRow>
             </ResultPanel>
+            </>
           ) : (
             <NoResult message={live.ok ? '' : live.message} />
           )

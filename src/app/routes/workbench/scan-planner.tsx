@@ -5,7 +5,8 @@ import { NoResult } from '@/features/workbench/components/results.tsx';
 import { SafetyNotice } from '@/features/workbench/components/safety-notice.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
-import { computeScanPlan, scanForm } from '@/features/workbench/scan/scan-form.ts';
+import { scanForm, type ScanPlan } from '@/features/workbench/scan/scan-form.ts';
+import { scanPlanCalculator } from '@shared/workbench/calculators/scan-plan-calculator.ts';
 import { ScanResults } from '@/features/workbench/scan/scan-results.tsx';
 
 const defaults = {
@@ -13,8 +14,11 @@ const defaults = {
   pixelsPerLine: 256, lines: 256, lineRateHz: 1, scanSizeNm: 5000, resonanceKhz: 1.89,
 };
 
+/** The shared calculator's result, with the parsed plan the chart marks. */
+const computePlan = (plan: ScanPlan) => ({ plan, r: scanPlanCalculator.compute(plan) });
+
 export function ScanPlannerPage() {
-  const { form, live } = useLiveForm(scanForm, defaults, computeScanPlan);
+  const { form, live } = useLiveForm(scanForm, defaults, computePlan);
   return (
     <ToolPage slug="scan-planner" lead="From DAC code to tip motion: the smallest step, the range, and how fast a frame can go.">
       <ToolColumns
@@ -41,10 +45,10 @@ export function ScanPlannerPage() {
         results={
           live.ok ? (
             <>
-              <SafetyNotice cautions={live.result.cautions} />
-              <ScanResults r={live.result} />
+              <SafetyNotice cautions={live.result.r.cautions} crossed={live.result.r.levelsCrossed} />
+              <ScanResults r={live.result.r} plan={live.result.plan} />
               <ChartFrame label="Step against DAC bits" caption="Copper dot: your DAC. Each extra bit halves the step; the range stays the same.">
-                <LazyScanChart steps={live.result.steps} bits={live.result.plan.dacBits} wantedStepNm={live.result.plan.wantedStepNm} pixelNm={live.result.pixelNm ?? undefined} />
+                <LazyScanChart steps={live.result.r.steps} bits={live.result.plan.dacBits} wantedStepNm={live.result.plan.wantedStepNm} pixelNm={live.result.r.pixelNm ?? undefined} />
               </ChartFrame>
             </>
           ) : (

@@ -15,5 +15,9 @@ export const workbenchRoutes: RouteObject = {
     { path: 'drive-current', lazy: async () => ({ Component: (await import('./drive-current.tsx')).DriveCurrentPage }) },
     { path: 'tunnelling', lazy: async () => ({ Component: (await import('./tunnelling.tsx')).TunnellingPage }) },
     { path: 'units', lazy: async () => ({ Component: (await import('./units.tsx')).UnitsPage }) },
+    { path: 'loaded-gain', lazy: async () => ({ Component: (await import('./loaded-gain.tsx')).LoadedGainPage }) },
+    { path: 'tube', lazy: async () => ({ Component: (await import('./tube.tsx')).TubePage }) },
+    { path: 'drive-limits', lazy: async () => ({ Component: (await import('./drive-limits.tsx')).DriveLimitsPage }) },
+    { path: 'noise-floor', lazy: async () => ({ Component: (await import('./noise-floor.tsx')).NoiseFloorPage }) },
   ],
 };

@@ -4,7 +4,7 @@ import { listingConditionLabels, type ListingDto } from '@shared/schemas/listing
 import { partCategoryLabels } from '@shared/schemas/part.ts';
 import { Markdown } from '@/components/ui/markdown.tsx';
 import { paths } from '@/config/paths.ts';
-import { formatSig } from '@/utils/format-number.ts';
+import { formatShort } from '@shared/format/measured-number.ts';
 import { formatDay } from './labels.ts';
 import { ListingPhotos } from './listing-photos.tsx';
 
@@ -26,7 +26,7 @@ export function ListingDetails({ listing: l }: { listing: ListingDto }) {
         <Row label="Part">
           <Link to={paths.part(l.part.id)} className="text-copper-dark underline decoration-copper/40 underline-offset-2">{l.part.name}</Link>
           <span className="text-ink-soft"> · {partCategoryLabels[l.part.category]}</span>
-          {l.part.gainMedianNmPerV !== null && <span className="block text-xs text-ink-soft">registry median <span className="num text-ink">{formatSig(l.part.gainMedianNmPerV)} nm/V</span></span>}
+          {l.part.gainMedianNmPerV !== null && <span className="block text-xs text-ink-soft">registry median <span className="num text-ink">{formatShort(l.part.gainMedianNmPerV)} nm/V</span></span>}
         </Row>
         <Row label="Quantity"><span className="num">{l.quantity}</span></Row>
         <Row label="Condition">{listingConditionLabels[l.condition]}</Row>

@@ -1,5 +1,5 @@
 import type { GainHistogramDto } from '@shared/schemas/part.ts';
-import { formatSig } from '@/utils/format-number.ts';
+import { formatShort } from '@shared/format/measured-number.ts';
 import type { GainScale } from './gain-scale.ts';
 
 const W = 1000;
@@ -22,7 +22,7 @@ export function GainHistogram({ histogram, scale, min, max }: { histogram: GainH
       preserveAspectRatio="none"
       className="block h-16 w-full"
       role="img"
-      aria-label={`Where listed parts cluster: ${total} median gains between ${formatSig(10 ** scale.lo)} and ${formatSig(10 ** scale.hi)} nm/V, log scale`}
+      aria-label={`Where listed parts cluster: ${total} median gains between ${formatShort(10 ** scale.lo)} and ${formatShort(10 ** scale.hi)} nm/V, log scale`}
     >
       <rect x={left} y="0" width={Math.max(0, right - left)} height={H} fill="#2F6F73" fillOpacity="0.1" />
       {scale.decades.map((d) => <line key={d} x1={x(d)} x2={x(d)} y1="0" y2={H} stroke="#D8D3C8" strokeWidth="2" vectorEffect="non-scaling-stroke" />)}
@@ -30,7 +30,7 @@ export function GainHistogram({ histogram, scale, min, max }: { histogram: GainH
         const h = (b.count / peak) * (H - 8);
         return (
           <rect key={b.fromNmPerV} x={x(b.fromNmPerV) + 2} y={H - h} width={Math.max(2, x(b.toNmPerV) - x(b.fromNmPerV) - 4)} height={h} fill={inside(b.fromNmPerV, b.toNmPerV) ? '#B5532A' : '#4A525C'} fillOpacity={inside(b.fromNmPerV, b.toNmPerV) ? 0.9 : 0.35}>
-            <title>{`${formatSig(b.fromNmPerV, 2)}–${formatSig(b.toNmPerV, 2)} nm/V: ${b.count} part${b.count === 1 ? '' : 's'}`}</title>
+            <title>{`${formatShort(b.fromNmPerV, 2)}–${formatShort(b.toNmPerV, 2)} nm/V: ${b.count} part${b.count === 1 ? '' : 's'}`}</title>
           </rect>
         );
       })}

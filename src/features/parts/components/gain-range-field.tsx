@@ -1,5 +1,5 @@
 import type { GainHistogramDto } from '@shared/schemas/part.ts';
-import { formatSig } from '@/utils/format-number.ts';
+import { formatShort } from '@shared/format/measured-number.ts';
 import { GainHistogram } from './gain-histogram.tsx';
 import { gainScale } from './gain-scale.ts';
 import { fieldClass, labelClass } from './filter-styles.ts';
@@ -39,14 +39,14 @@ export function GainRangeField({ histogram, minText, maxText, onChange, onCommit
           <input
             type="range" min={0} max={scale.steps} value={minPos} className={`${thumb} ${minPos === maxPos && minPos > scale.steps / 2 ? 'z-10' : ''}`}
             aria-label="Lower end of the gain range"
-            aria-valuetext={min === undefined ? 'no lower limit' : `${formatSig(min)} nm/V`}
+            aria-valuetext={min === undefined ? 'no lower limit' : `${formatShort(min)} nm/V`}
             onChange={(e) => { const p = Math.min(Number(e.target.value), maxPos); onChange(p === 0 ? '' : String(scale.gainAt(p)), maxText); }}
             {...release}
           />
           <input
             type="range" min={0} max={scale.steps} value={maxPos} className={thumb}
             aria-label="Upper end of the gain range"
-            aria-valuetext={max === undefined ? 'no upper limit' : `${formatSig(max)} nm/V`}
+            aria-valuetext={max === undefined ? 'no upper limit' : `${formatShort(max)} nm/V`}
             onChange={(e) => { const p = Math.max(Number(e.target.value), minPos); onChange(minText, p === scale.steps ? '' : String(scale.gainAt(p))); }}
             {...release}
           />
@@ -54,7 +54,7 @@ export function GainRangeField({ histogram, minText, maxText, onChange, onCommit
         <div aria-hidden="true" className="relative mx-2.5 h-4 text-[11px] text-ink-soft">
           {scale.decades.map((d, i) => (
             <span key={d} className={`num absolute ${i === 0 ? '' : i === scale.decades.length - 1 ? '-translate-x-full' : '-translate-x-1/2'}`} style={{ left: `${scale.fraction(d) * 100}%` }}>
-              {formatSig(d)}
+              {formatShort(d)}
             </span>
           ))}
         </div>

@@ -1,5 +1,5 @@
 import type { PartStatsDto } from '@shared/schemas/part.ts';
-import { formatSig } from '@/utils/format-number.ts';
+import { formatShort } from '@shared/format/measured-number.ts';
 
 function Figure({ label, value, unit, note }: { label: string; value: string; unit?: string; note?: string }) {
   return (
@@ -17,15 +17,15 @@ function Figure({ label, value, unit, note }: { label: string; value: string; un
 /** The pooled figures of a part over its accepted runs, each with its unit. */
 export function PartFigures({ stats }: { stats: PartStatsDto }) {
   const s = stats;
-  const range = (a: number | null, b: number | null) => (a === null || b === null ? '—' : `${formatSig(a)}–${formatSig(b)}`);
+  const range = (a: number | null, b: number | null) => (a === null || b === null ? '—' : `${formatShort(a)}–${formatShort(b)}`);
   return (
     <dl aria-label="Figures from accepted runs" className="grid grid-cols-2 gap-2 sm:grid-cols-3 lg:grid-cols-6">
-      <Figure label="Median gain" value={formatSig(s.gainMedianNmPerV)} unit="nm/V" />
+      <Figure label="Median gain" value={formatShort(s.gainMedianNmPerV)} unit="nm/V" />
       <Figure label="Quartiles (middle half)" value={range(s.gainP25NmPerV, s.gainP75NmPerV)} unit="nm/V" />
       <Figure label="Lowest–highest" value={range(s.gainMinNmPerV, s.gainMaxNmPerV)} unit="nm/V" />
       <Figure label="Accepted runs" value={String(s.acceptedRunCount)} />
       <Figure label="Builds" value={String(s.buildCount)} />
-      <Figure label="Median hysteresis" value={formatSig(s.hysteresisMedianPct, 2)} unit="% of span" />
+      <Figure label="Median hysteresis" value={formatShort(s.hysteresisMedianPct, 2)} unit="% of span" />
     </dl>
   );
 }

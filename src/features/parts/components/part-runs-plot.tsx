@@ -1,7 +1,7 @@
 import { lazy, Suspense } from 'react';
 import type { PartDetailDto } from '@shared/schemas/part.ts';
 import { runMethodLabels, type RunMethod } from '@shared/schemas/run.ts';
-import { formatSig } from '@/utils/format-number.ts';
+import { formatShort } from '@shared/format/measured-number.ts';
 
 const PartRunsChart = lazy(() => import('@/components/charts/part-runs-chart.tsx').then((m) => ({ default: m.PartRunsChart })));
 
@@ -20,8 +20,8 @@ export function PartRunsPlot({ part }: { part: PartDetailDto }) {
       ) : (
         <>
           <p className="mt-1 text-sm text-ink-soft">
-            <span className="num">{runs.length}</span> run{runs.length === 1 ? '' : 's'}, median <span className="num text-ink">{formatSig(s.gainMedianNmPerV)} nm/V</span>
-            {e && <>; expected from geometry <span className="num text-ink">{formatSig(e.gainNmPerV)} nm/V</span> (<span className="num">{formatSig(e.lowNmPerV)}–{formatSig(e.highNmPerV)}</span>)</>}.
+            <span className="num">{runs.length}</span> run{runs.length === 1 ? '' : 's'}, median <span className="num text-ink">{formatShort(s.gainMedianNmPerV)} nm/V</span>
+            {e && <>; expected from geometry <span className="num text-ink">{formatShort(e.gainNmPerV)} nm/V</span> (<span className="num">{formatShort(e.lowNmPerV)}–{formatShort(e.highNmPerV)}</span>)</>}.
             {' '}Point at or tap a dot for its build, maker and method.
           </p>
           <div className="mt-2" data-testid="part-runs-plot">

@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import type { PartRunDto } from '@shared/schemas/part.ts';
 import { runMethodLabels, type RunMethod } from '@shared/schemas/run.ts';
 import { paths } from '@/config/paths.ts';
-import { formatSig, formatWithUncertainty } from '@/utils/format-number.ts';
+import { formatShort, formatWithUncertainty } from '@shared/format/measured-number.ts';
 
 const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
 /** "22 Sep 2026": three-letter months ("Sept" is en-GB's own). */
@@ -10,9 +10,9 @@ const formatDay = (iso: string) => dateFormat.formatToParts(new Date(iso)).map((
 
 function Gain({ run }: { run: PartRunDto }) {
   const [lo, hi] = run.gainCi95NmPerV;
-  if (lo === null || hi === null) return <>{formatSig(run.gainNmPerV)}</>;
+  if (lo === null || hi === null) return <>{formatShort(run.gainNmPerV)}</>;
   const f = formatWithUncertainty(run.gainNmPerV, (Math.abs(hi - lo)) / 2);
-  return <>{f.value}{f.uncertainty && <span className="text-ink-soft"> ± {f.uncertainty}</span>}</>;
+  return <>{f.value}{f.uncertainty && <span className="text-ink-soft"> ± {f.uncertainty} <abbr title="half-width of the 95 % interval (Student t)" className="no-underline">(95 %)</abbr></span>}</>;
 }
 
 /** The accepted runs behind the figures, each linking to the build it was measured in. */
@@ -40,7 +40,7 @@ export function PartRunsTable({ runs }: { runs: PartRunDto[] }) {
                 <td className="whitespace-nowrap px-3 py-1.5">{r.maker}</td>
                 <td className="px-3 py-1.5">{runMethodLabels[r.method as RunMethod] ?? r.method}</td>
                 <td className="num whitespace-nowrap px-3 py-1.5 text-right"><Gain run={r} /></td>
-                <td className="num whitespace-nowrap px-3 py-1.5 text-right">{r.hysteresisPctFs === null ? '—' : `${formatSig(r.hysteresisPctFs, 2)} %`}</td>
+                <td className="num whitespace-nowrap px-3 py-1.5 text-right">{r.hysteresisPctFs === null ? '—' : `${formatShort(r.hysteresisPctFs, 2)} %`}</td>
                 <td className="num whitespace-nowrap px-3 py-1.5 text-right">{formatDay(r.createdAt)}</td>
               </tr>
             ))}

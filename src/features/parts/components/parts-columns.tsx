@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import { createColumnHelper, type RowData } from '@tanstack/react-table';
 import { partCategoryLabels, type PartListItemDto, type PartSort } from '@shared/schemas/part.ts';
 import { paths } from '@/config/paths.ts';
-import { formatSig } from '@/utils/format-number.ts';
+import { formatShort } from '@shared/format/measured-number.ts';
 
 declare module '@tanstack/react-table' {
   // eslint-disable-next-line @typescript-eslint/no-unused-vars
@@ -58,9 +58,9 @@ export const partColumns = [
       if (p.gainMedianNmPerV === null) return <span className="text-ink-soft">no accepted runs</span>;
       return (
         <span className="num whitespace-nowrap">
-          <span className="font-semibold">{formatSig(p.gainMedianNmPerV)}</span> nm/V
+          <span className="font-semibold">{formatShort(p.gainMedianNmPerV)}</span> nm/V
           {p.gainP25NmPerV !== null && p.gainP75NmPerV !== null && p.acceptedRunCount > 1 && (
-            <span className="block text-xs text-ink-soft" title="Interquartile range: the middle half of the accepted runs">IQR {formatSig(p.gainP25NmPerV)}–{formatSig(p.gainP75NmPerV)}</span>
+            <span className="block text-xs text-ink-soft" title="Interquartile range: the middle half of the accepted runs">IQR {formatShort(p.gainP25NmPerV)}–{formatShort(p.gainP75NmPerV)}</span>
           )}
         </span>
       );
@@ -73,6 +73,6 @@ export const partColumns = [
     header: 'Safe voltage',
     enableSorting: false,
     meta: { numeric: true },
-    cell: (c) => (c.getValue() === null ? <span className="text-ink-soft">unknown</span> : <span className="num whitespace-nowrap">{formatSig(c.getValue())} V</span>),
+    cell: (c) => (c.getValue() === null ? <span className="text-ink-soft">unknown</span> : <span className="num whitespace-nowrap">{formatShort(c.getValue())} V</span>),
   }),
 ];

@@ -1,3 +1,4 @@
+import { formatWithUncertainty } from '@shared/format/measured-number.ts';
 // Display helpers for the review desk: how long something has waited, dates, and measured numbers.
 
 const HOUR = 3_600_000;
@@ -30,11 +31,10 @@ export function sig(x: number | null | undefined, digits = 3): string {
   return x.toFixed(Math.min(decimals, 10));
 }
 
-/** "123.5 ± 2.3": the uncertainty to two significant figures, the value rounded to the same place. */
+/** "123.5 ± 2.3": the shared GUM rounding (the uncertainty to two significant figures, the value to the same place). */
 export function withUncertainty(value: number, halfWidth: number | null | undefined): string {
-  if (halfWidth === null || halfWidth === undefined || !Number.isFinite(halfWidth) || halfWidth <= 0) return sig(value, 4);
-  const decimals = Math.max(0, 1 - Math.floor(Math.log10(halfWidth)));
-  return `${value.toFixed(Math.min(decimals, 10))} ± ${halfWidth.toFixed(Math.min(decimals, 10))}`;
+  const f = formatWithUncertainty(value, halfWidth);
+  return f.uncertainty === null ? f.value : `${f.value} ± ${f.uncertainty}`;
 }
 
 /** Half the width of a 95 % interval [lo, hi]. */

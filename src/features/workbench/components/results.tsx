@@ -1,5 +1,6 @@
 import { useId, type ReactNode } from 'react';
-import { formatWithUncertainty, type Formatted } from '../format.ts';
+import { formatWithUncertainty, plusMinusLabels, type Formatted, type PlusMinusKind } from '@shared/format/measured-number.ts';
+import type { ResultWarning } from '@shared/workbench/calculators/calculator.ts';
 
 /** A formatted number in monospace tabular figures, with its unit after it. */
 export function Quantity({ q, className = '' }: { q: Formatted; className?: string }) {
@@ -11,15 +12,35 @@ export function Quantity({ q, className = '' }: { q: Formatted; className?: stri
   );
 }
 
-/** A gain in nm/V with its ± uncertainty where known, e.g. "102.6 ± 1.3 nm/V". */
-export function Gain({ value, plusMinus, className = '' }: { value: number; plusMinus?: number | null; className?: string }) {
+/**
+ * A gain in nm/V with its ± where known, saying which ± it is: "102.6 ± 1.3 nm/V (95 %)" or
+ * "(u, k = 1)"; the full meaning is in the title for a pointer and a screen reader.
+ */
+export function Gain({ value, plusMinus, kind, className = '' }: { value: number; plusMinus?: number | null; kind?: PlusMinusKind; className?: string }) {
   const f = formatWithUncertainty(value, plusMinus);
+  const label = kind ? plusMinusLabels[kind] : null;
   return (
     <span className={`whitespace-nowrap ${className}`}>
       <span className="num">{f.value}</span>
       {f.uncertainty && <span className="num"> ± {f.uncertainty}</span>}
       <span> nm/V</span>
+      {f.uncertainty && label && (
+        <abbr title={label.long} className="ml-1 align-middle text-[0.6em] font-normal text-ink-soft no-underline">({label.short})</abbr>
+      )}
     </span>
+  );
+}
+
+/** The warnings a calculator attached to its result, as a list; nothing when there are none. */
+export function ResultWarnings({ warnings }: { warnings: readonly ResultWarning[] }) {
+  if (warnings.length === 0) return null;
+  return (
+    <div role="status" className="rounded-md border border-l-4 border-amber bg-amber/10 p-3 text-sm">
+      <p className="font-semibold">Read this figure with care</p>
+      <ul className="mt-1 list-disc space-y-1 pl-5">
+        {warnings.map((w) => <li key={w.code}>{w.message}</li>)}
+      </ul>
+    </div>
   );
 }
 

@@ -1,7 +1,7 @@
 import type { UseFormReturn } from 'react-hook-form';
 import { z } from 'zod';
 import { creepInput } from '@shared/schemas/workbench.ts';
-import { creepDisplacementNm, creepPct, fitCreep } from '@shared/workbench/creep.ts';
+import { creepCalculator } from '@shared/workbench/calculators/creep-calculator.ts';
 import { displacementUnits, toNm } from '@shared/units.ts';
 import { friendlyError, refusalMessage } from '../form/error-map.ts';
 import { readNumericColumns, type RowProblem } from '../csv/split-csv.ts';
@@ -22,17 +22,11 @@ export type CreepFormApi = UseFormReturn<CreepFormValues, unknown, z.output<type
 /** An illustrative step-and-hold record (made-up numbers, γ about 0.015). */
 export const exampleRecord = 'time_s,displacement\n0.1,1000\n0.3,1007\n1,1015\n3,1022\n10,1031\n30,1037\n100,1046\n300,1052\n';
 
-function logSpaced(from: number, to: number, n: number): number[] {
-  const a = Math.log10(from);
-  const b = Math.log10(to);
-  return Array.from({ length: n }, (_, i) => 10 ** (a + ((b - a) * i) / (n - 1)));
-}
-
 /** Reads the record, fits the creep law with the shared code, and projects it; a sentence when it cannot. */
 export function previewCreep(text: string, unit: CreepFormValues['unit'], projectToS: number | undefined) {
   const { rows, problems } = readNumericColumns(text, ['time', 'displacement']);
   const samples = rows.map((r) => ({ timeS: r.values[0], displacementNm: toNm(r.values[1], unit) }));
-  const parsed = creepInput.safeParse({ samples }, { error: friendlyError });
+  const parsed = creepInput.safeParse({ samples, projectToS }, { error: friendlyError });
   const base = { used: samples.length, problems: problems as RowProblem[] };
   if (!parsed.success) {
     const issue = parsed.error.issues[0];
@@ -40,11 +34,8 @@ export function previewCreep(text: string, unit: CreepFormValues['unit'], projec
     return { ...base, ok: false as const, message };
   }
   try {
-    const fit = fitCreep(parsed.data.samples);
-    const times = parsed.data.samples.map((s) => s.timeS);
-    const curve = logSpaced(Math.min(...times), Math.max(...times, projectToS ?? 0), 40).map((t) => ({ timeS: t, displacementNm: creepDisplacementNm(fit.displacementAt0p1sNm, fit.gamma, t) }));
-    const projections = [10, 100, 1000, ...(projectToS && ![10, 100, 1000].includes(projectToS) ? [projectToS] : [])].map((t) => ({ timeS: t, pct: creepPct(fit.gamma, t) }));
-    return { ...base, ok: true as const, fit, samples: parsed.data.samples, curve, projections };
+    const fit = creepCalculator.compute(parsed.data);
+    return { ...base, ok: true as const, fit, samples: parsed.data.samples, curve: fit.curve, projections: fit.projections };
   } catch (err) {
     return { ...base, ok: false as const, message: refusalMessage(err) };
   }

@@ -1,6 +1,5 @@
 import { z } from 'zod';
 import { expectedGainInput } from '@shared/schemas/workbench.ts';
-import { expectedGain, measuredToExpectedRatio } from '@shared/workbench/expected-gain.ts';
 import { materialKeys } from '@shared/workbench/materials.ts';
 import { actuatorKinds, constantLabels, kindOf } from './actuator-kinds.ts';
 
@@ -25,6 +24,7 @@ export const expectedGainForm = z
     materialKey: z.enum([...materialKeys, 'custom']),
     custom: z.object({ d31PmPerV: maybe, d33PmPerV: maybe, d15PmPerV: maybe }),
     measuredNmPerV: z.number().positive().optional(),
+    tolerances: z.object({ lengthMm: maybe, thicknessMm: maybe, outerDiameterMm: maybe, wallMm: maybe }),
   })
   .superRefine((v, ctx) => {
     const needed = kindOf(v.spec.actuator).constant;
@@ -32,22 +32,18 @@ export const expectedGainForm = z
       ctx.addIssue({ code: 'custom', path: ['custom', needed], message: `Enter ${constantLabels[needed]}: this actuator's formula uses it.` });
     }
   })
-  .transform((v): { spec: unknown; measuredNmPerV?: number } => {
+  .transform((v): unknown => {
     const kind = kindOf(v.spec.actuator);
     const geometry = Object.fromEntries(kind.fields.map((f) => [f.name, v.spec[f.name]]).filter(([, x]) => x !== undefined));
+    const tolerances = Object.fromEntries(
+      kind.fields.filter((f) => f.unit === 'mm').map((f) => [f.name, v.tolerances[f.name as keyof typeof v.tolerances]]).filter(([, x]) => x !== undefined),
+    );
     return {
-      spec: { actuator: kind.value, material: v.materialKey === 'custom' ? v.custom : v.materialKey, ...geometry },
-      measuredNmPerV: v.measuredNmPerV,
+      actuator: kind.value,
+      material: v.materialKey === 'custom' ? v.custom : v.materialKey,
+      ...geometry,
+      ...(v.measuredNmPerV === undefined ? {} : { measuredNmPerV: v.measuredNmPerV }),
+      ...(Object.keys(tolerances).length > 0 ? { tolerances } : {}),
     };
   })
-  .pipe(z.object({ spec: expectedGainInput, measuredNmPerV: z.number().positive().optional() }));
-
-/** Expected gain with its band, and measured ÷ expected when a measurement is given. */
-export function computeExpectedGain(input: z.output<typeof expectedGainForm>) {
-  const expected = expectedGain(input.spec);
-  return {
-    ...expected,
-    comparison: input.measuredNmPerV === undefined ? null : measuredToExpectedRatio(input.measuredNmPerV, expected),
-    basis: kindOf(input.spec.actuator).basis,
-  };
-}
+  .pipe(expectedGainInput);

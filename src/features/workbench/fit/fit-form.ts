@@ -1,7 +1,8 @@
 import type { UseFormReturn } from 'react-hook-form';
 import { z } from 'zod';
 import { fitInput } from '@shared/schemas/workbench.ts';
-import { fitCalibrationInUnits, type CalibrationFit } from '@shared/workbench/calibration-fit.ts';
+import type { CalculatorResult } from '@shared/workbench/calculators/calculator.ts';
+import { fitCalculator } from '@shared/workbench/calculators/fit-calculator.ts';
 import { toNm, toVolts } from '@shared/units.ts';
 import { friendlyError, refusalMessage } from '../form/error-map.ts';
 import type { CalibrationChartPoint } from '@/components/charts/calibration-chart.tsx';
@@ -37,9 +38,12 @@ export const exampleRows: GridRow[] = [
 /** Empty rows for a fresh grid. */
 export const blankRows = (n: number): GridRow[] => Array.from({ length: n }, () => ({ volts: '', displacement: '', sweep: '' }));
 
+/** What the shared gain-fit calculator returns (the API's answer too). */
+export type FitCalculation = CalculatorResult<typeof fitCalculator>;
+
 /** A fit ready to show: the shared result and the points in V and nm for the plot. */
 export interface FitPreview {
-  fit: CalibrationFit;
+  fit: FitCalculation;
   plotPoints: CalibrationChartPoint[];
 }
 
@@ -51,7 +55,7 @@ export function previewFit(checked: CheckedRows, settings: Pick<FitFormValues, '
     return { ok: false, message: tooFew ? `A fit needs at least 3 good points; there ${checked.points.length === 1 ? 'is' : 'are'} ${checked.points.length}.` : parsed.error.issues[0].message };
   }
   try {
-    const fit = fitCalibrationInUnits(parsed.data);
+    const fit = fitCalculator.compute(parsed.data);
     const { voltageUnit, displacementUnit } = parsed.data;
     const plotPoints = parsed.data.points.map((p) => ({ volts: toVolts(p.volts, voltageUnit), displacementNm: toNm(p.displacement, displacementUnit), sweep: p.sweep }));
     return { ok: true, preview: { fit, plotPoints } };

@@ -1,4 +1,4 @@
-import { formatSi, formatSig } from '../format.ts';
+import { formatSi, formatSig } from '@shared/format/measured-number.ts';
 import { Headline, Quantity, ResultPanel, ResultRow } from '../components/results.tsx';
 import type { MixingResult } from './mixing-form.ts';
 
@@ -34,7 +34,7 @@ export function MixingResults({ r }: { r: MixingResult }) {
           <p className="text-sm text-ink-soft">Enter a wanted x and y to get the drive voltages for it.</p>
         )
       }
-      basis="r = G·[Va, Vb]ᵀ and [Va, Vb]ᵀ = G⁻¹·r; the reachable region is the drive-limit rectangle mapped through G [practice; small-angle, linear]."
+      basis="r = G·[Va, Vb]ᵀ and [Va, Vb]ᵀ = G⁻¹·r; the reachable region is the drive-limit rectangle mapped through G (common practice; small-angle, linear)."
     >
       {t && <ResultRow label="Reachable"><span className={t.reachable ? 'font-semibold text-teal-dark' : 'font-semibold text-danger'}>{t.reachable ? 'yes' : 'no'}</span></ResultRow>}
       <ResultRow label="G⁻¹, row Va" note="Volts per nm of x and of y.">

@@ -1,20 +1,20 @@
-import { Notice } from '@/components/ui/notice.tsx';
-import { formatDuration, formatLengthNm, formatSi, formatSig } from '../format.ts';
-import { Headline, Quantity, ResultPanel, ResultRow } from '../components/results.tsx';
-import type { ScanResult } from './scan-form.ts';
+import { formatDuration, formatLengthNm, formatSi, formatSig } from '@shared/format/measured-number.ts';
+import { Headline, Quantity, ResultPanel, ResultRow, ResultWarnings } from '../components/results.tsx';
+import type { CalculatorResult } from '@shared/workbench/calculators/calculator.ts';
+import type { scanPlanCalculator } from '@shared/workbench/calculators/scan-plan-calculator.ts';
+import type { ScanPlan } from './scan-form.ts';
+
+/** What the shared scan-plan calculator returns. */
+export type ScanResult = CalculatorResult<typeof scanPlanCalculator>;
 
 /** Step, range, timing and line-rate ceilings of a scan plan. */
-export function ScanResults({ r }: { r: ScanResult }) {
-  const { plan } = r;
-  const overRange = plan.scanSizeNm !== undefined && plan.scanSizeNm > r.rangeNm;
-  const overCeiling = r.ceilings !== null && plan.lineRateHz > r.ceilings.sineLikeHz;
+export function ScanResults({ r, plan }: { r: ScanResult; plan: ScanPlan }) {
   return (
     <>
-      {overRange && <Notice tone="caution" title="Scan size beyond the range">The scan size is larger than the drive chain can reach ({formatLengthNm(r.rangeNm).value} {formatLengthNm(r.rangeNm).unit}).</Notice>}
-      {overCeiling && <Notice tone="caution" title="Line rate above the ceiling">The line rate is above f₀/10; expect ringing and a distorted image.</Notice>}
+      <ResultWarnings warnings={r.warnings} />
       <ResultPanel
         headline={<Headline label={`Smallest step at ${plan.dacBits} bit`} sub="One DAC count, through the amplifier and the actuator."><Quantity q={formatLengthNm(r.lsbNm)} /></Headline>}
-        basis="LSB = actuator gain × amplifier gain × DAC span / 2ᴺ, bits N ≥ log₂(range/step) [practice]; ceilings f₀/10 for sine-like scans [practice] and f₀/100 for sharp triangles (Bae & Granick, Rev. Sci. Instrum. 71, 3955, 2000)."
+        basis="LSB = actuator gain × amplifier gain × DAC span / 2ᴺ, bits N ≥ log₂(range/step) (common practice); ceilings f₀/10 for sine-like scans (common practice) and f₀/100 for sharp triangles (Source: Bae & Granick, Rev. Sci. Instrum. 71, 3955, 2000)."
       >
         <ResultRow label="Amplifier output span"><Quantity q={formatSi(r.outputSpanV, 'V', 4, ['m', 'k'])} /></ResultRow>
         <ResultRow label="Full range"><Quantity q={formatLengthNm(r.rangeNm)} /></ResultRow>
@@ -25,15 +25,15 @@ export function ScanResults({ r }: { r: ScanResult }) {
         <ResultRow label="Frame time" note="Line rate counts trace and retrace together."><Quantity q={formatDuration(r.frameTimeS)} /></ResultRow>
         <ResultRow label="Time per pixel (trace)"><Quantity q={formatDuration(r.pixelTimeS)} /></ResultRow>
         {r.tipSpeedNmPerS !== null && <ResultRow label="Tip speed"><Quantity q={{ ...formatLengthNm(r.tipSpeedNmPerS), unit: `${formatLengthNm(r.tipSpeedNmPerS).unit}/s` }} /></ResultRow>}
-        {r.ceilings && (
+        {r.lineRateCeilingSineLikeHz !== null && r.lineRateCeilingTriangleHz !== null && (
           <>
-            <ResultRow label="Line-rate ceiling, sine-like scan"><Quantity q={formatSi(r.ceilings.sineLikeHz, 'Hz')} /></ResultRow>
-            <ResultRow label="Line-rate ceiling, triangular raster"><Quantity q={formatSi(r.ceilings.triangleHz, 'Hz')} /></ResultRow>
+            <ResultRow label="Line-rate ceiling, sine-like scan"><Quantity q={formatSi(r.lineRateCeilingSineLikeHz, 'Hz')} /></ResultRow>
+            <ResultRow label="Line-rate ceiling, triangular raster"><Quantity q={formatSi(r.lineRateCeilingTriangleHz, 'Hz')} /></ResultRow>
           </>
         )}
-        {r.gainErrorPct !== null && (
-          <ResultRow label="Gain error at the line rate" note="Quasi-static, lightly damped 2nd-order actuator: 1/(1 − (f/f₀)²) − 1 [calc].">
-            <Quantity q={{ value: `+${formatSig(r.gainErrorPct, 3)}`, unit: '%' }} />
+        {r.gainErrorAtLineRatePct !== null && (
+          <ResultRow label="Gain error at the line rate" note="Quasi-static, lightly damped 2nd-order actuator: 1/(1 − (f/f₀)²) − 1 (calculated from the formula).">
+            <Quantity q={{ value: `+${formatSig(r.gainErrorAtLineRatePct, 3)}`, unit: '%' }} />
           </ResultRow>
         )}
       </ResultPanel>

@@ -1,6 +1,5 @@
 import { z } from 'zod';
 import { driveCurrentInput } from '@shared/schemas/workbench.ts';
-import { driveCurrent, safetyFlags, storedCharge } from '@shared/workbench/drive-current.ts';
 
 const faradsPer = { nF: 1e-9, uF: 1e-6 } as const;
 const hertzPer = { Hz: 1, kHz: 1e3 } as const;
@@ -24,12 +23,3 @@ export const driveCurrentForm = z
     frequencyHz: v.frequency * hertzPer[v.frequencyUnit],
   }))
   .pipe(driveCurrentInput);
-
-/** Current, reactive power, stored charge and energy, and the cautions they call for. */
-export function computeDriveCurrent(input: z.output<typeof driveCurrentForm>) {
-  return {
-    ...driveCurrent(input),
-    ...storedCharge(input.capacitanceF, input.amplitudeV),
-    safety: safetyFlags({ voltageV: input.amplitudeV, capacitanceF: input.capacitanceF }),
-  };
-}

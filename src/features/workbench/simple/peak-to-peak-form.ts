@@ -1,6 +1,5 @@
 import { z } from 'zod';
 import { peakToPeakInput } from '@shared/schemas/workbench.ts';
-import { peakToPeakGain } from '@shared/workbench/peak-to-peak.ts';
 import { displacementUnits, toNm } from '@shared/units.ts';
 
 const s = peakToPeakInput.shape;
@@ -22,5 +21,5 @@ export const peakToPeakForm = z
   }))
   .pipe(peakToPeakInput);
 
-/** The shared peak-to-peak result. */
-export const computePeakToPeak = (input: z.output<typeof peakToPeakForm>) => peakToPeakGain(input);
+/** The fields that hold displacements, converted when the unit changes. */
+export const peakToPeakLengthFields = ['displacementPp', 'displacementResolution'] as const;

@@ -1,18 +1,12 @@
 import { z } from 'zod';
 import { resonanceInput } from '@shared/schemas/workbench.ts';
 import { materialKeys, materials } from '@shared/workbench/materials.ts';
-import {
-  cantileverSpringConstantNPerM,
-  rectangularBeamMassKg,
-  rectangularCantileverHz,
-  tipMassCorrectedHz,
-} from '@shared/workbench/resonance.ts';
-import { lineRateCeilings } from '@shared/workbench/scan-planner.ts';
+import { sourceInWords } from '@shared/workbench/source-words.ts';
 
 /** Material presets: the built-in PZT families and a silicon lever (FIELD notes: E 169 GPa, ρ 2329 kg/m³ [memory]). */
 export const resonancePresets = [
-  ...materialKeys.map((k) => ({ value: k, label: k, source: materials[k].source, eGpa: materials[k].youngsModulusGpa, rho: materials[k].densityKgPerM3 })),
-  { value: 'silicon', label: 'Silicon (lever)', source: '[memory]', eGpa: 169, rho: 2329 },
+  ...materialKeys.map((k) => ({ value: k, label: k, source: sourceInWords(materials[k].source), eGpa: materials[k].youngsModulusGpa, rho: materials[k].densityKgPerM3 })),
+  { value: 'silicon', label: 'Silicon (lever)', source: sourceInWords('[memory]'), eGpa: 169, rho: 2329 },
   { value: 'custom', label: 'Custom', source: 'your own values', eGpa: undefined, rho: undefined },
 ] as const;
 
@@ -43,19 +37,3 @@ export const resonanceForm = z
     };
   })
   .pipe(resonanceInput);
-
-/** First mode, and with the width: spring constant, beam mass and the tip-mass correction. */
-export function computeResonance(input: z.output<typeof resonanceForm>) {
-  const firstModeHz = rectangularCantileverHz(input);
-  const tipMassKg = input.tipMassKg ?? 0;
-  const beam = input.widthM === undefined ? null : { ...input, widthM: input.widthM };
-  if (!beam && tipMassKg > 0) throw new RangeError('Enter the width too: the tip-mass correction needs the beam mass');
-  const beamMassKg = beam ? rectangularBeamMassKg(beam) : null;
-  return {
-    firstModeHz,
-    springConstantNPerM: beam ? cantileverSpringConstantNPerM(beam) : null,
-    beamMassKg,
-    withTipMassHz: beamMassKg !== null && tipMassKg > 0 ? tipMassCorrectedHz(firstModeHz, beamMassKg, tipMassKg) : null,
-    ceilings: lineRateCeilings(firstModeHz),
-  };
-}

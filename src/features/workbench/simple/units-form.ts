@@ -1,26 +1,19 @@
 import { z } from 'zod';
-import { unitConversionInput } from '@shared/schemas/workbench.ts';
-import {
-  convertDisplacement,
-  displacementUnitLabels,
-  displacementUnits,
-  fromVolts,
-  toVolts,
-  voltageUnitLabels,
-  voltageUnits,
-} from '@shared/units.ts';
+import { convertCalculator } from '@shared/workbench/calculators/simple-calculators.ts';
+import { displacementUnits, gainUnits, voltageUnits } from '@shared/units.ts';
 
-/** A displacement (the shared converter's value and unit) and a voltage to convert. */
+const quantity = <U extends readonly [string, ...string[]]>(units: U) => z.object({ value: z.number(), from: z.enum(units) });
+
+/** A displacement, a voltage and a gain, each with the unit it is written in. */
 export const unitsForm = z.object({
-  length: unitConversionInput.pick({ value: true, from: true }),
-  voltage: z.object({ value: z.number(), unit: z.enum(voltageUnits) }),
+  length: quantity(displacementUnits),
+  voltage: quantity(voltageUnits),
+  gain: quantity(gainUnits),
 });
 
-/** The displacement in every unit, and the voltage in V and mV. */
+/** Each quantity in every unit of its kind: three calls of the shared converter, as the API answers each. */
 export function computeUnits(input: z.output<typeof unitsForm>) {
-  const volts = toVolts(input.voltage.value, input.voltage.unit);
-  return {
-    lengths: displacementUnits.map((to) => ({ unit: displacementUnitLabels[to], value: convertDisplacement(input.length.value, input.length.from, to) })),
-    voltages: voltageUnits.map((u) => ({ unit: voltageUnitLabels[u], value: fromVolts(volts, u) })),
-  };
+  const all = (q: { value: number; from: (typeof displacementUnits)[number] | (typeof voltageUnits)[number] | (typeof gainUnits)[number] }) =>
+    convertCalculator.compute({ value: q.value, from: q.from, to: q.from }).inEveryUnit;
+  return { lengths: all(input.length), voltages: all(input.voltage), gains: all(input.gain) };
 }

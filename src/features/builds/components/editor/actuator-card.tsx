@@ -54,7 +54,7 @@ export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
       <ul className="space-y-2">{a.runs.map((r) => <StoredRun key={r.id} run={r} />)}</ul>
       <div className="mt-3">
         {addingRun ? (
-          <RunForm actuatorId={a.id} onSaved={() => setAddingRun(false)} onCancel={() => setAddingRun(false)} />
+          <RunForm actuatorId={a.id} maxVolts={a.maxVolts} onSaved={() => setAddingRun(false)} onCancel={() => setAddingRun(false)} />
         ) : (
           <Button variant="secondary" onClick={() => setAddingRun(true)} aria-label={`Add a calibration run to ${name}`}>Add a calibration run</Button>
         )}

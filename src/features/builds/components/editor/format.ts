@@ -1,7 +1,7 @@
-import { formatSig, formatWithUncertainty } from '@/utils/format-number.ts';
+import { formatShort, formatWithUncertainty } from '@shared/format/measured-number.ts';
 
 /** A measured number to `digits` significant figures, with a true minus sign. */
-export const sig = (value: number | null | undefined, digits = 3) => formatSig(value, digits).replace('-', '−');
+export const sig = (value: number | null | undefined, digits = 3) => formatShort(value, digits).replace('-', '−');
 
 /** "96.3 ± 2.1": the value rounded to the place its uncertainty is quoted to. */
 export function withUncertainty(value: number, halfWidth: number): string {

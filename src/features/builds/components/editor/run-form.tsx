@@ -15,7 +15,7 @@ import { applyServerErrors, fieldsOf } from './server-errors.ts';
 const FIELDS = ['method', 'voltageUnit', 'displacementUnit', 'model', 'drive', 'conditions', 'notes', 'points'] as const;
 
 /** A new calibration run for one actuator: setup, conditions, points (typed or from CSV) and the live fit. */
-export function RunForm({ actuatorId, onSaved, onCancel }: { actuatorId: number; onSaved: (run: RunDto) => void; onCancel: () => void }) {
+export function RunForm({ actuatorId, maxVolts, onSaved, onCancel }: { actuatorId: number; maxVolts: number | null; onSaved: (run: RunDto) => void; onCancel: () => void }) {
   const create = useCreateRun(actuatorId);
   const form = useForm<RunFormValues, unknown, CreateRunInput>({ resolver: zodResolver(runForm), defaultValues: runFormDefaults() });
   const points = useFieldArray({ control: form.control, name: 'points' });
@@ -42,7 +42,7 @@ export function RunForm({ actuatorId, onSaved, onCancel }: { actuatorId: number;
           <PointsGrid fields={points.fields} array={points} />
           {pointsError && <p className="text-sm text-danger">{pointsError}</p>}
         </fieldset>
-        <FitPreview />
+        <FitPreview maxVolts={maxVolts} />
         <RunConditionsFields idPrefix={idPrefix} />
         <FormError message={errors.root?.server?.message} />
         <p className="text-sm text-ink-soft">The stored fit is computed by Scanwright from your points; the run then waits for a moderator to accept it before it counts in the parts registry.</p>

@@ -20,7 +20,7 @@ export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
         <span className="num rounded bg-teal/10 px-1.5 text-sm font-medium text-teal-dark">{actuator.axis}</span>
       </h3>
       <ActuatorFacts actuator={actuator} />
-      {isHighVoltage(actuator.maxVolts) && <HighVoltageMarker maxVolts={actuator.maxVolts!} />}
+      {isHighVoltage(actuator) && <HighVoltageMarker actuator={actuator} />}
       {actuator.notes && <p className="whitespace-pre-line text-sm">{actuator.notes}</p>}
       <div className="space-y-3">
         <h4 className="text-sm font-semibold">Calibration runs</h4>

@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { actuatorDriveLabels, type ActuatorDto } from '@shared/schemas/actuator.ts';
 import { partCategoryLabels } from '@shared/schemas/part.ts';
-import { formatSig } from '@/utils/format-number.ts';
+import { formatShort } from '@shared/format/measured-number.ts';
 import { describeBasis } from './format.ts';
 
 function Fact({ term, children }: { term: string; children: ReactNode }) {
@@ -31,9 +31,9 @@ export function ActuatorFacts({ actuator }: { actuator: ActuatorDto }) {
       <Fact term="Expected gain">
         {expectedGain ? (
           <>
-            <span className="num">{formatSig(expectedGain.gainNmPerV, 3)} nm/V</span>
+            <span className="num">{formatShort(expectedGain.gainNmPerV, 3)} nm/V</span>
             <span className="block text-xs text-ink-soft">
-              band <span className="num">{formatSig(expectedGain.lowNmPerV, 2)}–{formatSig(expectedGain.highNmPerV, 2)} nm/V</span> · {describeBasis(expectedGain.basis)}
+              band <span className="num">{formatShort(expectedGain.lowNmPerV, 2)}–{formatShort(expectedGain.highNmPerV, 2)} nm/V</span> · {describeBasis(expectedGain.basis)}
             </span>
           </>
         ) : (

@@ -1,5 +1,5 @@
 import type { BuildGainDto } from '@shared/schemas/build.ts';
-import { formatSig } from '@/utils/format-number.ts';
+import { formatShort } from '@shared/format/measured-number.ts';
 
 /** Small amber ring beside a gain whose run waits for review; the words are there for screen readers and on hover. */
 export function PendingMarker() {
@@ -19,7 +19,7 @@ export function GainList({ gains }: { gains: BuildGainDto[] }) {
       {gains.map((g) => (
         <li key={g.actuatorId} title={g.partName} className="inline-flex items-center rounded border border-rule bg-paper px-1.5 py-0.5 text-xs">
           <span className="mr-1 font-semibold text-teal-dark">{g.axis}</span>
-          <span className="num">{formatSig(g.gainNmPerV, 3)} nm/V</span>
+          <span className="num">{formatShort(g.gainNmPerV, 3)} nm/V</span>
           {g.runStatus === 'pending' && <PendingMarker />}
         </li>
       ))}

@@ -17,7 +17,7 @@ export function RunCards({ runs, group, selectedId, onSelect }: { runs: RunDto[]
               <span className="ml-auto"><StatusBadge tone={f.badge.tone}>{f.badge.label}</StatusBadge></span>
             </label>
             <p className="num mt-2 text-base font-medium">
-              {f.gain.value}{f.gain.uncertainty && <span className="font-normal text-ink-soft"> ± {f.gain.uncertainty}</span>} nm/V
+              {f.gain.value}{f.gain.uncertainty && <span className="font-normal text-ink-soft"> ± {f.gain.uncertainty}</span>} nm/V{f.gain.uncertainty && <abbr title="half-width of the 95 % interval (Student t)" className="ml-1 text-xs font-normal text-ink-soft no-underline">(95 %)</abbr>}
               <span className="ml-1 font-sans text-xs font-normal text-ink-soft">(95 %)</span>
             </p>
             <dl className="mt-1 grid grid-cols-2 gap-x-3 text-xs">

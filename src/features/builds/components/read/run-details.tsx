@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import type { ActuatorDto } from '@shared/schemas/actuator.ts';
 import type { RunDto } from '@shared/schemas/run.ts';
-import { formatFixed, formatSig } from '@/utils/format-number.ts';
+import { formatFixed, formatShort } from '@shared/format/measured-number.ts';
 import { describeBasis } from './format.ts';
 
 /** How the selected run was driven, under which conditions, and how its gain compares with the expected one. */
@@ -19,7 +19,7 @@ export function RunDetails({ run, expected }: { run: RunDto; expected: ActuatorD
     items.push({
       term: 'Drive',
       value: drive.kind === 'sine'
-        ? <>sine, <span className="num">{formatSig(drive.frequencyHz, 3)} Hz</span>, <span className="num">{formatSig(drive.amplitudeV, 3)} V</span> amplitude</>
+        ? <>sine, <span className="num">{formatShort(drive.frequencyHz, 3)} Hz</span>, <span className="num">{formatShort(drive.amplitudeV, 3)} V</span> amplitude</>
         : 'DC steps',
     });
   }

@@ -1,5 +1,5 @@
 import { runMethodLabels, type RunDto } from '@shared/schemas/run.ts';
-import { formatFixed, formatSig, formatWithUncertainty } from '@/utils/format-number.ts';
+import { formatFixed, formatShort, formatWithUncertainty } from '@shared/format/measured-number.ts';
 import { formatDate, runStatusBadge } from './format.ts';
 
 /** A run's figures as the table and the phone cards print them: gain ± half the 95 % interval, R² to 4 places, %FS to 1. */
@@ -10,7 +10,7 @@ export function runFigures(run: RunDto) {
     date: formatDate(run.createdAt),
     gain: formatWithUncertainty(fit.gainNmPerV, (hi - lo) / 2),
     r2: formatFixed(fit.r2, 4),
-    residualNm: formatSig(fit.residualStdNm, 2),
+    residualNm: formatShort(fit.residualStdNm, 2),
     nonlinearityPct: formatFixed(fit.nonlinearityPctFs, 1),
     hysteresisPct: formatFixed(fit.hysteresisPctFs, 1),
     n: String(fit.n),

@@ -1,3 +1,4 @@
+import { formatPlusMinus } from '@shared/format/measured-number.ts';
 import type { FitResultDto } from '@shared/schemas/workbench.ts';
 import { halfWidth, sig, withUncertainty } from '../format.ts';
 
@@ -5,7 +6,7 @@ import { halfWidth, sig, withUncertainty } from '../format.ts';
 export function FitTable({ fit }: { fit: FitResultDto }) {
   const [lo, hi] = fit.gainCi95NmPerV;
   const rows: [string, string][] = [
-    ['Gain', `${withUncertainty(fit.gainNmPerV, halfWidth(fit.gainCi95NmPerV))} nm/V`],
+    ['Gain', formatPlusMinus(fit.gainNmPerV, halfWidth(fit.gainCi95NmPerV), 'ci95')],
     ['95 % interval', `${sig(lo, 4)} to ${sig(hi, 4)} nm/V`],
     ['Standard error', `${sig(fit.gainStdErrNmPerV, 2)} nm/V`],
     ['Intercept', `${sig(fit.interceptNm, 3)} nm`],

@@ -1,5 +1,5 @@
 import { CartesianGrid, Legend, ResponsiveContainer, Scatter, ScatterChart, XAxis, YAxis } from 'recharts';
-import { formatTick } from '../../format.ts';
+import { formatTick } from '@shared/format/measured-number.ts';
 import { decadeTicks } from './axis-ticks.ts';
 import { axisLabelStyle, chartColors, tickStyle } from './chart-style.ts';
 

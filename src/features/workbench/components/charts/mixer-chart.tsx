@@ -1,5 +1,5 @@
 import { CartesianGrid, Legend, ReferenceDot, ResponsiveContainer, Scatter, ScatterChart, XAxis, YAxis, useXAxisScale, useYAxisScale } from 'recharts';
-import { formatTick } from '../../format.ts';
+import { formatTick } from '@shared/format/measured-number.ts';
 import { niceStep, stepTicks } from './axis-ticks.ts';
 import { axisLabelStyle, chartColors, tickStyle } from './chart-style.ts';
 

@@ -1,6 +1,9 @@
-// One way to print a measured or computed number on the workbench: a few significant figures, a
-// proper minus sign, grouped thousands, powers of ten outside 10⁻³…10⁶, and SI prefixes where a
-// unit scales. Components render `value` in the monospace `num` class and `unit` beside it.
+// One way to print a measured or computed number anywhere in the app (pages, mails, exports): a
+// few significant figures, a proper minus sign, grouped thousands, powers of ten outside
+// 10⁻³…10⁶, SI prefixes where a unit scales, and a value with its uncertainty rounded as the GUM
+// recommends (the uncertainty to two significant figures, the value to the same decimal place)
+// [S: GUM, JCGM 100:2008, 7.2.6], always saying which ± it is. Pure; components render `value` in
+// the monospace `num` class and `unit` beside it.
 
 /** A number ready to print: the digits and the unit that goes after them. */
 export interface Formatted {
@@ -44,17 +47,45 @@ export function formatFixed(value: number | null | undefined, decimals: number):
 
 /**
  * A value with its uncertainty: the uncertainty to 2 significant figures and the value to the same
- * decimal place (102.6 ± 1.3). When the uncertainty is negligible, each gets its own figures.
+ * decimal place (102.6 ± 1.3; 23 ± 12; 100.0000 ± 0.0012) [S: GUM 7.2.6]. Without a usable
+ * uncertainty the value gets 4 significant figures and `uncertainty` is null.
  */
 export function formatWithUncertainty(value: number, uncertainty: number | null | undefined): { value: string; uncertainty: string | null } {
+  if (value === null || value === undefined || !Number.isFinite(value)) return { value: '—', uncertainty: null };
   if (uncertainty === null || uncertainty === undefined || !(uncertainty > 0) || !Number.isFinite(uncertainty)) {
     return { value: formatSig(value), uncertainty: null };
   }
-  if (value !== 0 && uncertainty / Math.abs(value) < 1e-5) {
-    return { value: formatSig(value, 6), uncertainty: formatSig(uncertainty, 2) };
+  const u2 = Number(uncertainty.toPrecision(2));
+  const place = Math.floor(Math.log10(u2)) - 1; // decimal exponent of the uncertainty's second figure
+  if (place >= 0) {
+    // Uncertainty ≥ 10: round both to that power of ten, print as integers.
+    const step = 10 ** place;
+    return { value: formatFixed(Math.round(value / step) * step, 0), uncertainty: formatFixed(Math.round(u2 / step) * step, 0) };
   }
-  const decimals = Math.max(0, 1 - Math.floor(Math.log10(Number(uncertainty.toPrecision(2)))));
-  return { value: formatFixed(value, decimals), uncertainty: formatFixed(uncertainty, decimals) };
+  const decimals = Math.min(15, -place);
+  return { value: formatFixed(value, decimals), uncertainty: formatFixed(u2, decimals) };
+}
+
+/** Which ± a figure carries: a 95 % interval (Student t) or a standard uncertainty (k = 1, GUM). */
+export type PlusMinusKind = 'ci95' | 'std';
+
+/** The words that follow a ± so the two kinds never look alike. */
+export const plusMinusLabels: Readonly<Record<PlusMinusKind, { short: string; long: string }>> = {
+  ci95: { short: '95 %', long: 'half-width of the 95 % interval (Student t)' },
+  std: { short: 'u, k = 1', long: 'standard uncertainty (k = 1, GUM)' },
+};
+
+/** A value ± uncertainty with its unit and kind as one string: "102.7 ± 0.4 nm/V (95 %)". */
+export function formatPlusMinus(value: number, uncertainty: number | null | undefined, kind: PlusMinusKind, unit = 'nm/V'): string {
+  const f = formatWithUncertainty(value, uncertainty);
+  const u = unit ? ` ${unit}` : '';
+  return f.uncertainty === null ? `${f.value}${u}` : `${f.value} ± ${f.uncertainty}${u} (${plusMinusLabels[kind].short})`;
+}
+
+/** A short figure for cards and tables: `sig` significant figures without trailing zeros (104, 23.5, 0.0123). */
+export function formatShort(value: number | null | undefined, sig = 3): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return '—';
+  return formatSig(Number(value.toPrecision(sig)), sig).replace(/(\.\d*?)0+($|\s)/, '$1$2').replace(/\.($|\s)/, '$1');
 }
 
 const PREFIXES: readonly (readonly [number, string])[] = [

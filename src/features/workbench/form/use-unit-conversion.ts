@@ -1,0 +1,32 @@
+import { useEffect, useRef } from 'react';
+import { useWatch, type FieldValues, type Path, type PathValue, type UseFormReturn } from 'react-hook-form';
+
+/** Ten significant figures: enough to keep a reading exact, few enough to read (0.1 µm → 100 nm, not 100.00000000001). */
+export const tidy = (v: number) => Number(v.toPrecision(10));
+
+/**
+ * When the unit picker `unitName` changes, converts the numbers in `fields` from the old unit to the
+ * new one, so a typed reading keeps its physical value instead of being relabelled.
+ */
+export function useUnitConversion<T extends FieldValues, U extends string>(
+  form: UseFormReturn<T, unknown, unknown>,
+  unitName: Path<T>,
+  fields: readonly Path<T>[],
+  convert: (value: number, from: U, to: U) => number,
+): void {
+  const unit = useWatch({ control: form.control, name: unitName }) as U | undefined;
+  const previous = useRef(unit);
+  useEffect(() => {
+    const from = previous.current;
+    previous.current = unit;
+    if (!from || !unit || from === unit) return;
+    for (const name of fields) {
+      const value: unknown = form.getValues(name);
+      if (typeof value === 'number' && Number.isFinite(value)) {
+        form.setValue(name, tidy(convert(value, from, unit)) as PathValue<T, Path<T>>, { shouldValidate: true });
+      } else if (typeof value === 'string' && value.trim() !== '' && Number.isFinite(Number(value))) {
+        form.setValue(name, String(tidy(convert(Number(value), from, unit))) as PathValue<T, Path<T>>, { shouldValidate: true });
+      }
+    }
+  }, [unit, form, fields, convert]);
+}
