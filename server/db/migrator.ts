@@ -11,6 +11,7 @@ import * as createExchange from './migrations/20261201003000-create-exchange.ts'
 import * as addPartSearchIndexes from './migrations/20261201003100-add-part-search-indexes.ts';
 import * as addPartDescIndexes from './migrations/20261201003200-add-part-desc-indexes.ts';
 import * as createPartPhotos from './migrations/20261202000100-create-part-photos.ts';
+import * as recomputeRunFits from './migrations/20261202100000-recompute-run-fits.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -27,6 +28,7 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261201003100-add-part-search-indexes', addPartSearchIndexes],
   ['20261201003200-add-part-desc-indexes', addPartDescIndexes],
   ['20261202000100-create-part-photos', createPartPhotos],
+  ['20261202100000-recompute-run-fits', recomputeRunFits],
 ];
 
 /** Umzug over our migration list; the only source of the schema, in tests too. */

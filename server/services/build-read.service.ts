@@ -73,7 +73,7 @@ export async function loadActuators(buildId: number, includeRejected: boolean): 
   });
   return actuators.map((a) => {
     const part = a.part!;
-    const expected = expectedGainForPart(part, a.drive);
+    const expected = expectedGainForPart(part, a.drive, a.axis);
     return {
       id: a.id,
       buildId: a.buildId,

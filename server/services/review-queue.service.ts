@@ -67,7 +67,7 @@ async function queueRuns(runs: CalibrationRun[]): Promise<QueueRunDto[]> {
     const part = partMap.get(r.partId)!;
     const actuator = actuatorMap.get(r.actuatorId);
     const gains = accepted.filter((a) => a.partId === r.partId).map((a) => Math.abs(a.gainNmPerV));
-    const expected = actuator ? expectedGainForPart(part, actuator.drive) : null;
+    const expected = actuator ? expectedGainForPart(part, actuator.drive, actuator.axis) : null;
     const dto = presentRun(r);
     const points = (JSON.parse(r.pointsJson) as FitPoint[]).map((p) => ({
       volts: toVolts(p.volts, r.voltageUnit),

@@ -15,10 +15,34 @@ export const LARGE_HYSTERESIS_PCT = 20;
 export const ROBUST_Z_LIMIT = 3.5;
 /** The outlier test needs this many accepted runs to say anything. [practice] */
 export const MIN_RUNS_FOR_OUTLIER = 3;
-/** Unit slips: a ratio to the part median within ±20 % of 25.4 (inch/mm, µin/nm), 1000 (µm/nm, mV/V)
- * or their inverses. [practice; factors exact per NBS 1959] */
-export const UNIT_SLIP_FACTORS = [25.4, 1000, 1 / 25.4, 1 / 1000] as const;
-export const UNIT_SLIP_TOLERANCE = 0.2;
+/** Unit slips and the factor each one leaves, with what it usually means. [practice; 25.4 exact per
+ * NBS 1959; 2√2 is the peak-to-peak ÷ rms ratio of a sine, calc] */
+export const UNIT_SLIPS = [
+  { factor: 25.4, label: '25.4', cause: 'inches against millimetres, or µin against nm' },
+  { factor: 1000, label: '1000', cause: 'µm entered as nm, or mV as V' },
+  { factor: 10, label: '10', cause: 'Å entered as nm' },
+  { factor: 2, label: '2', cause: 'peak amplitude against peak-to-peak' },
+  { factor: 2 * Math.SQRT2, label: '2√2', cause: 'rms against peak-to-peak of a sine' },
+] as const;
+/** Every slip factor and its inverse. */
+export const UNIT_SLIP_FACTORS = UNIT_SLIPS.flatMap((s) => [s.factor, 1 / s.factor]);
+/** How close (relative) the ratio must be to a factor; ±12 % keeps the bands of 2 and 2√2 apart [practice]. */
+export const UNIT_SLIP_TOLERANCE = 0.12;
+
+/** The unit slip a ratio to the part median is closest to, if it lies within the tolerance of one. */
+export function matchUnitSlip(ratio: number): { factor: number; inverse: boolean; label: string; cause: string } | null {
+  let best: { factor: number; inverse: boolean; label: string; cause: string; distance: number } | null = null;
+  for (const s of UNIT_SLIPS) {
+    for (const inverse of [false, true]) {
+      const f = inverse ? 1 / s.factor : s.factor;
+      const distance = Math.abs(Math.log(ratio / f));
+      if (Math.abs(ratio / f - 1) <= UNIT_SLIP_TOLERANCE && (!best || distance < best.distance)) {
+        best = { factor: f, inverse, label: inverse ? `1/${s.label}` : s.label, cause: s.cause, distance };
+      }
+    }
+  }
+  return best && { factor: best.factor, inverse: best.inverse, label: best.label, cause: best.cause };
+}
 /** Measured ÷ expected outside this band: free-gain formulas overestimate loaded parts, but not by
  * more than ×4, and measuring above ×2 the free gain is suspicious. [practice] */
 export const EXPECTED_RATIO_BAND = [0.25, 2] as const;
@@ -68,10 +92,10 @@ export function plausibilityFlags(run: RunForFlags, acceptedGainsNmPerV: readonl
   let slip = false;
   if (median !== null && median > 0 && gain > 0) {
     const ratio = gain / median;
-    const factor = UNIT_SLIP_FACTORS.find((f) => Math.abs(ratio / f - 1) <= UNIT_SLIP_TOLERANCE);
-    if (factor !== undefined) {
+    const match = matchUnitSlip(ratio);
+    if (match) {
       slip = true;
-      flags.push({ code: 'unit-slip', message: `Gain is ${fmt(ratio)}× the part median ${fmt(median)} nm/V — close to a unit factor of ${fmt(factor)}.` });
+      flags.push({ code: 'unit-slip', message: `Gain is ${fmt(ratio)}× the part median ${fmt(median)} nm/V — close to a factor of ${match.label} (${match.cause}).` });
     }
   }
   const z = modifiedZScore(gain, acceptedGainsNmPerV);

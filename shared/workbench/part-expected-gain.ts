@@ -19,10 +19,11 @@ const has = (v: number | null): v is number => v !== null && Number.isFinite(v) 
 /**
  * The formula for this part and drive, or null when the category has none (buzzer discs, voice
  * coils: unimorph or magnetic, not covered) or geometry/material are missing. A bender driven as
- * one element is taken as series-connected (the usual two-wire bar); a quartered tube driven with
- * ±V on opposite quadrants uses the opposite-pair formula; a tube otherwise one quadrant.
+ * one element is taken as series-connected (the usual two-wire bar); a tube on the Z axis (all
+ * quadrants together) uses the axial formula; a quartered tube driven with ±V on opposite
+ * quadrants the opposite-pair formula; a tube otherwise one quadrant.
  */
-export function expectedGainSpecForPart(part: PartForExpectedGain, drive: string): ExpectedGainSpec | null {
+export function expectedGainSpecForPart(part: PartForExpectedGain, drive: string, axis?: string): ExpectedGainSpec | null {
   if (!part.material || !isMaterialKey(part.material)) return null;
   const material = part.material;
   switch (part.category) {
@@ -37,7 +38,7 @@ export function expectedGainSpecForPart(part: PartForExpectedGain, drive: string
     case 'tube':
       if (!has(part.lengthMm) || !has(part.outerDiameterMm) || !has(part.wallMm)) return null;
       return {
-        actuator: drive === 'quartered-tube' ? 'tube-opposite-pair' : 'tube-quadrant',
+        actuator: axis === 'Z' ? 'tube-axial' : drive === 'quartered-tube' ? 'tube-opposite-pair' : 'tube-quadrant',
         material,
         lengthMm: part.lengthMm,
         outerDiameterMm: part.outerDiameterMm,
@@ -49,8 +50,8 @@ export function expectedGainSpecForPart(part: PartForExpectedGain, drive: string
 }
 
 /** Expected gain with its band and the formula's name, or null where no formula applies. */
-export function expectedGainForPart(part: PartForExpectedGain, drive: string): (ExpectedGain & { basis: string }) | null {
-  const spec = expectedGainSpecForPart(part, drive);
+export function expectedGainForPart(part: PartForExpectedGain, drive: string, axis?: string): (ExpectedGain & { basis: string }) | null {
+  const spec = expectedGainSpecForPart(part, drive, axis);
   if (!spec) return null;
   try {
     return { ...expectedGain(spec), basis: `${spec.actuator}, ${part.material}` };

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import request from 'supertest';
 import { startTestApp, type TestApp } from '../support/test-app.ts';
+import { calculators } from '../../shared/workbench/calculators/all-calculators.ts';
 
 let t: TestApp;
 let agent: ReturnType<typeof request.agent>;
@@ -19,7 +20,7 @@ const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 const errorShape = { error: { code: expect.any(String), message: expect.any(String) } };
 const cautionIds = (body: { cautions: { id: string }[] }) => body.cautions.map((c) => c.id);
 
-const slugs = ['fit', 'peak-to-peak', 'creep', 'expected-gain', 'mixing', 'mixing-fit', 'scan-plan', 'resonance', 'drive-current', 'tunnelling', 'convert'];
+const slugs = calculators.map((c) => c.slug);
 
 describe('POST /api/workbench/<slug> without a session or CSRF token', () => {
   test.each(slugs)('when a visitor with no cookie posts an empty body to %s, then 400 validation_failed, not 403', async (slug) => {
@@ -99,13 +100,14 @@ describe('POST /api/workbench/expected-gain', () => {
     expect(res.body.highNmPerV).toBeCloseTo(res.body.gainNmPerV * 1.2, 9);
   });
 
-  test('when a quartered PZT-5H tube is driven on one quadrant and on an opposite pair, then 13.4 and 26.8 nm/V [calc; S: Chen, APL 60, 132 (1992)]', async () => {
+  test('when a quartered PZT-5H tube is driven on one quadrant and on an opposite pair, then 6.70 and 13.4 nm/V [calc; S: Chen, APL 60, 132 (1992); FIELD check values]', async () => {
     const tube = { material: 'PZT-5H', lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.508 };
     const one = await post('expected-gain', { actuator: 'tube-quadrant', ...tube });
     const pair = await post('expected-gain', { actuator: 'tube-opposite-pair', ...tube });
     expect(one.status).toBe(200);
-    expect(one.body.gainNmPerV).toBeCloseTo(13.4, 1);
-    expect(pair.body.gainNmPerV).toBeCloseTo(26.8, 1);
+    expect(one.body.gainNmPerV).toBeCloseTo(6.70, 2);
+    expect(pair.body.gainNmPerV).toBeCloseTo(13.4, 1);
+    expect(one.body.basis).toMatch(/√2·d31/);
     expect(one.body.materialSource).toBe('[S: Erturk & Inman, Piezoelectric Energy Harvesting, Wiley 2011, App. E]');
   });
 
@@ -181,11 +183,35 @@ describe('POST /api/workbench/mixing-fit', () => {
     expect(res.body.residualStdXNm).toBeLessThan(1e-9);
   });
 
-  test('when Va and Vb always move together, then 400 (singular grid)', async () => {
-    const samples = [1, 2, 3].map((v) => ({ vaV: v, vbV: v, xNm: v, yNm: v }));
+  test('when Va and Vb always move together, then 400 degenerate_grid naming the problem', async () => {
+    const samples = [1, 2, 3, 4].map((v) => ({ vaV: v, vbV: v, xNm: v, yNm: v }));
     const res = await post('mixing-fit', { samples });
     expect(res.status).toBe(400);
-    expect(res.body.error.code).toBe('invalid_input');
+    expect(res.body.error.code).toBe('degenerate_grid');
+    expect(res.body.error.message).toMatch(/change together/);
+  });
+
+  test('when the indicator zero is offset by 250 nm, then the affine fit returns offsetNm and the true G; through the origin on request [calc]', async () => {
+    const gain = [[70, -72], [71, 69]];
+    const samples = [0, 5, 10].flatMap((vaV) => [0, 5, 10].map((vbV) => ({
+      vaV, vbV, xNm: 250 + gain[0][0] * vaV + gain[0][1] * vbV, yNm: -30 + gain[1][0] * vaV + gain[1][1] * vbV,
+    })));
+    const res = await post('mixing-fit', { samples });
+    expect(res.status).toBe(200);
+    expect(res.body.model).toBe('affine');
+    expect(res.body.offsetNm[0]).toBeCloseTo(250, 8);
+    expect(res.body.offsetNm[1]).toBeCloseTo(-30, 8);
+    res.body.gainNmPerV.flat().forEach((v: number, i: number) => expect(v).toBeCloseTo(gain.flat()[i], 9));
+    const origin = await post('mixing-fit', { samples, model: 'origin' });
+    expect(origin.status).toBe(200);
+    expect(origin.body.offsetNm).toEqual([0, 0]);
+  });
+
+  test('when the voltages underflow double precision, then 400 numeric_underflow, not a degenerate-grid message', async () => {
+    const samples = [[0, 0], [1, 0], [0, 1], [1, 1]].map(([a, b]) => ({ vaV: a * 1e-200, vbV: b * 1e-200, xNm: a + b, yNm: a - b }));
+    const res = await post('mixing-fit', { samples });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('numeric_underflow');
   });
 
   test('when fewer than 3 samples are sent, then 400 validation_failed', async () => {
@@ -252,6 +278,15 @@ describe('POST /api/workbench/resonance', () => {
     const res = await post('resonance', { ...lever, tipMassKg: (3 / 1.875104068711961 ** 4) * beamMassKg });
     expect(res.status).toBe(200);
     expect(res.body.withTipMassHz).toBeCloseTo(res.body.firstModeHz / Math.SQRT2, 6);
+  });
+
+  test('when a tip mass is given, then the line-rate ceilings follow the loaded mode [S: Bae & Granick 2000; practice]', async () => {
+    const bar = { lengthM: 12e-3, thicknessM: 0.6e-3, widthM: 2e-3, youngsModulusPa: 61e9, densityKgPerM3: 7750, tipMassKg: 100e-6 };
+    const res = await post('resonance', bar);
+    expect(res.status).toBe(200);
+    expect(res.body.withTipMassHz).toBeLessThan(res.body.firstModeHz / 2);
+    expect(res.body.lineRateCeilingSineLikeHz).toBeCloseTo(res.body.withTipMassHz / 10, 9);
+    expect(res.body.lineRateCeilingTriangleHz).toBeCloseTo(res.body.withTipMassHz / 100, 9);
   });
 
   test('when a tip mass comes without a width, then 400 invalid_input', async () => {
@@ -322,6 +357,15 @@ describe('POST /api/workbench/convert', () => {
     expect(mil.body.converted).toBe(25.4);
   });
 
+  test('when 1 µin/V is converted to nm/V, then 25.4 nm/V, and gains do not convert into lengths [S: NBS Circular 572 addendum, 1960; calc]', async () => {
+    const res = await post('convert', { value: 1, from: 'uin/V', to: 'nm/V' });
+    expect(res.status).toBe(200);
+    expect(res.body.converted).toBe(25.4);
+    const bad = await post('convert', { value: 1, from: 'uin/V', to: 'nm' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.code).toBe('validation_failed');
+  });
+
   test('when 10 Å are converted to nm, then 1 nm [S: 1 Å = 0.1 nm]', async () => {
     const res = await post('convert', { value: 10, from: 'angstrom', to: 'nm' });
     expect(res.body.converted).toBe(1);
@@ -335,4 +379,36 @@ describe('POST /api/workbench/convert', () => {
       expect(res.body.error.code).toBe('validation_failed');
     },
   );
+});
+
+// One composition: every calculator's route answers exactly what the shared function (the page's
+// live preview) returns for the same input. A calculator added without an example here fails.
+const examples: Record<string, unknown> = {
+  fit: { points: [0, 2, 4, 6, 8, 10, 8, 6, 4, 2, 0].map((v, i) => ({ volts: v * 8, displacement: 0.1 * v * 8 + (i > 5 ? 0.05 : 0) + 0.01 * Math.sin(i), sweep: i <= 5 ? 'up' : 'down' })), displacementUnit: 'um' },
+  'peak-to-peak': { displacementPpNm: 15, voltsPpV: 60, displacementResolutionNm: 10, voltsResolutionV: 0.5 },
+  creep: { samples: [0.1, 1, 10, 100].map((t) => ({ timeS: t, displacementNm: 1000 * (1 - 0.3 * Math.log10(t / 0.1)) })), projectToS: 3600 },
+  'expected-gain': { actuator: 'tube-opposite-pair', material: 'PZT-5H', lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.508, measuredNmPerV: 11, tolerances: { lengthMm: 0.1, wallMm: 0.02 } },
+  mixing: { gain: [[70.7, -70.7], [70.7, 70.7]], limits: { vaMinV: -150, vaMaxV: 150, vbMinV: -150, vbMaxV: 150 }, target: { xNm: 500, yNm: 1200 } },
+  'mixing-fit': { samples: [0, 5, 10].flatMap((a) => [0, 5, 10].map((b) => ({ vaV: a, vbV: b, xNm: 3 + 70 * a - 69 * b + 0.1 * Math.cos(a + b), yNm: -2 + 71 * a + 70 * b }))) },
+  'scan-plan': { dacBits: 16, dacSpanV: 10, ampGainVPerV: 30, actuatorGainNmPerV: 102.6, pixelsPerLine: 256, lines: 256, lineRateHz: 50, scanSizeNm: 50000, resonanceHz: 1890, wantedStepNm: 0.1 },
+  resonance: { lengthM: 5e-3, thicknessM: 0.6e-3, widthM: 2e-3, youngsModulusPa: 61e9, densityKgPerM3: 7750, tipMassKg: 20e-6 },
+  'drive-current': { capacitanceF: 1e-6, amplitudeV: 150, frequencyHz: 100 },
+  tunnelling: { workFunctionEv: 4, wantedRatio: 10 },
+  convert: { value: 3, from: 'angstrom/V', to: 'uin/V' },
+  'loaded-gain': { freeGainNmPerV: 102.6, actuatorStiffnessNPerM: 300, springRateNPerM: 150, preloadForceN: 0.5 },
+  tube: { lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.508, relPermittivity: 3400, youngsModulusPa: 60.6e9, densityKgPerM3: 7500 },
+  'drive-limits': { capacitanceF: 3.4e-9, amplitudeV: 100, frequencyHz: 1000, currentLimitA: 0.001, rasterSwingPpV: 60, lineRateHz: 5, outputResistanceOhm: 10000 },
+  'noise-floor': { actuatorGainNmPerV: 102.6, ampGainVPerV: 30, noiseDensityVPerRtHz: 20e-9, bandwidthHz: 1000, dacBits: 16, dacSpanV: 10, cantileverStiffnessNPerM: 0.1, temperatureK: 295 },
+};
+
+describe('POST /api/workbench/<slug> answers what the page shows', () => {
+  test.each(calculators.map((c) => [c.slug, c] as const))('when %s gets its example, then the body equals the shared calculator on the same parsed input', async (slug, c) => {
+    expect(examples[slug], `no example input for ${slug}`).toBeDefined();
+    const res = await post(slug, examples[slug]);
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    const parsed: unknown = (c.input as unknown as { parse: (v: unknown) => unknown }).parse(examples[slug]);
+    expect(res.body).toEqual(JSON.parse(JSON.stringify((c.compute as (i: unknown) => unknown)(parsed))));
+    expect(Array.isArray(res.body.warnings)).toBe(true);
+    expect(Array.isArray(res.body.cautions)).toBe(true);
+  });
 });

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
 import { fitCalibrationInUnits } from '../../shared/workbench/calibration-fit.ts';
 import type { DisplacementUnit } from '../../shared/units.ts';
-import { formatWithUncertainty } from '../../src/features/workbench/format.ts';
+import { formatWithUncertainty } from '../../shared/format/measured-number.ts';
 import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
 
 // A bender run with up and down sweeps; one bad line (7) that must be left out and reported.

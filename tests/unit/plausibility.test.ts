@@ -1,9 +1,19 @@
 import { describe, expect, test } from 'vitest';
-import { modifiedZScore, medianAbsoluteDeviation, plausibilityFlags, POOR_FIT_R2, FEW_POINTS, LARGE_HYSTERESIS_PCT } from '../../shared/review/plausibility.ts';
+import { matchUnitSlip, modifiedZScore, medianAbsoluteDeviation, plausibilityFlags, POOR_FIT_R2, FEW_POINTS, LARGE_HYSTERESIS_PCT } from '../../shared/review/plausibility.ts';
 
 const clean = { n: 18, gainNmPerV: 100, r2: 0.999, hysteresisPctFs: 6 };
 const accepted = [96, 100, 104, 98, 102];
 const codes = (f: { code: string }[]) => f.map((x) => x.code);
+
+describe('matchUnitSlip', () => {
+  test('when the ratio lies between 2 and 2√2, then the nearer factor is named, and 2.42 (outside both ±12 % bands) is no slip [calc]', () => {
+    expect(matchUnitSlip(2.1)?.label).toBe('2');
+    expect(matchUnitSlip(2.75)?.label).toBe('2√2');
+    expect(matchUnitSlip(2.42)).toBeNull();
+    expect(matchUnitSlip(0.1)?.label).toBe('1/10');
+    expect(matchUnitSlip(1.3)).toBeNull();
+  });
+});
 
 describe('plausibility flags', () => {
   test('when a run is clean and close to its part, then no flag fires', () => {
@@ -22,7 +32,7 @@ describe('plausibility flags', () => {
     expect(codes(plausibilityFlags({ ...clean, gainNmPerV: 160 }, accepted, null))).toEqual(['outlier']);
   });
 
-  test.each([25.4, 1000, 1 / 25.4, 1 / 1000])('when the gain is the part median × %d (a unit slip), then unit-slip fires instead of outlier', (factor) => {
+  test.each([25.4, 1000, 1 / 25.4, 1 / 1000, 10, 1 / 10, 2, 1 / 2, 2 * Math.SQRT2, 1 / (2 * Math.SQRT2)])('when the gain is the part median × %d (a unit slip), then unit-slip fires instead of outlier [practice; 25.4 exact per NBS 1959, 2√2 = p-p ÷ rms of a sine, calc]', (factor) => {
     expect(codes(plausibilityFlags({ ...clean, gainNmPerV: 100 * factor }, accepted, null))).toEqual(['unit-slip']);
   });
 
@@ -33,7 +43,7 @@ describe('plausibility flags', () => {
   });
 
   test('when fewer than 3 accepted runs exist, then no outlier verdict is given', () => {
-    expect(plausibilityFlags({ ...clean, gainNmPerV: 300 }, [100, 101], null)).toEqual([]);
+    expect(plausibilityFlags({ ...clean, gainNmPerV: 500 }, [100, 101], null)).toEqual([]);
   });
 });
 

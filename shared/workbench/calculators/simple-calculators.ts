@@ -1,6 +1,6 @@
 // Drive-current, tunnelling and unit-conversion pages and APIs.
 import { driveCurrentInput, tunnellingInput, unitConversionInput } from '../../schemas/workbench.ts';
-import { convertQuantity, unitsOfKind } from '../../units.ts';
+import { convertQuantity, kindOfUnit, unitsOfKind } from '../../units.ts';
 import { driveCurrent, storedCharge } from '../drive-current.ts';
 import { assessSafety } from '../safety.ts';
 import { currentRatioPerAngstrom, decayConstantPerAngstrom, gapChangePerDecadeAngstrom, workFunctionForRatioEv } from '../tunnelling.ts';
@@ -54,6 +54,9 @@ export const convertCalculator = defineCalculator({
       from: input.from,
       to: input.to,
       converted,
+      /** The value in nm (displacements), V (voltages) or nm/V (gains), the unit every computation works in. */
+      valueInBase: convertQuantity(input.value, input.from, unitsOfKind(input.from)[0].key),
+      valueNm: kindOfUnit(input.from) === 'displacement' ? convertQuantity(input.value, input.from, 'nm') : null,
       inEveryUnit: unitsOfKind(input.from).map((unit) => ({ unit: unit.key, label: unit.label, value: convertQuantity(input.value, input.from, unit.key) })),
       warnings: [],
       cautions: [],

@@ -1,11 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { driveCurrent, safetyFlags, storedCharge, tubeCapacitanceF } from '@shared/workbench/drive-current.ts';
+import { driveCurrent, storedCharge, tubeCapacitanceF } from '@shared/workbench/drive-current.ts';
 import {
-  HIGH_VOLTAGE_THRESHOLD_V,
-  STORED_CHARGE_THRESHOLD_C,
-  STORED_ENERGY_THRESHOLD_J,
+  HAZARDOUS_LIVE_LEVELS,
+  actuatorPeakVolts,
+  assessActuator,
+  assessSafety,
   cautions,
   cautionsFor,
+  pointsAboveLimit,
 } from '@shared/workbench/safety.ts';
 
 describe('drive current and stored charge', () => {
@@ -28,32 +30,47 @@ describe('drive current and stored charge', () => {
   });
 });
 
-describe('safety flags [practice thresholds; FIELD.md "Safety"]', () => {
-  it('when |V| exceeds 50 V, then high voltage is flagged; at 50 V it is not', () => {
-    expect(HIGH_VOLTAGE_THRESHOLD_V).toBe(50);
-    expect(safetyFlags({ voltageV: 50 }).highVoltage).toBe(false);
-    expect(safetyFlags({ voltageV: 50.1 }).highVoltage).toBe(true);
-    expect(safetyFlags({ voltageV: -120 }).highVoltage).toBe(true);
+describe('safety levels [S: IEC 61010-1 (2nd ed., 2001), clause 6.3.1 — memory for the clause; FIELD.md "Safety"]', () => {
+  it('when the levels are read, then they are 30 V rms, 42.4 V peak, 60 V DC and 45 µC', () => {
+    expect(HAZARDOUS_LIVE_LEVELS).toMatchObject({ rmsV: 30, peakV: 42.4, dcV: 60, chargeC: 45e-6 });
   });
 
-  it('when 1 µF sits at 150 V, then stored charge is flagged too; 3.4 nF at 100 V is high voltage only', () => {
-    expect(safetyFlags({ voltageV: 150, capacitanceF: 1e-6 })).toMatchObject({ highVoltage: true, storedCharge: true });
-    expect(safetyFlags({ voltageV: 100, capacitanceF: 3.4e-9 })).toMatchObject({ highVoltage: true, storedCharge: false });
+  it('when a DC level is 60 V it is not flagged; 60.1 V is, and so is −120 V', () => {
+    expect(assessSafety({ dcV: 60 }).highVoltage).toBe(false);
+    expect(assessSafety({ dcV: 60.1 }).highVoltage).toBe(true);
+    expect(assessSafety({ dcV: -120 }).highVoltage).toBe(true);
   });
 
-  it('when a µF stack sits below 50 V, then the energy or charge limit alone trips the flag', () => {
-    expect(STORED_ENERGY_THRESHOLD_J).toBe(1e-3);
-    expect(STORED_CHARGE_THRESHOLD_C).toBe(50e-6);
-    expect(safetyFlags({ voltageV: 45, capacitanceF: 1e-6 }).storedCharge).toBe(true); // 1.01 mJ
-    expect(safetyFlags({ voltageV: 10, capacitanceF: 5e-6 }).storedCharge).toBe(true); // 50 µC
-    expect(safetyFlags({ voltageV: 10, capacitanceF: 1e-6 }).storedCharge).toBe(false);
+  it('when a sine peaks at 42.4 V it is not flagged; at 43 V it is; an rms of 30.5 V is', () => {
+    expect(assessSafety({ peakV: 42.4 }).highVoltage).toBe(false);
+    expect(assessSafety({ peakV: 43 }).highVoltage).toBe(true);
+    expect(assessSafety({ rmsV: 30.5 }).highVoltage).toBe(true);
+    expect(assessSafety({ peakV: 43 }).crossed).toEqual(['43 V peak is above the 42.4 V peak level']);
   });
 
-  it('when anything is flagged, then the cautions end with local codes; when nothing is, none show', () => {
-    const shown = safetyFlags({ voltageV: 150, capacitanceF: 1e-6 }).cautions.map((c) => c.id);
-    expect(shown).toEqual(['amplifier', 'discharge', 'supply-off', 'reverse-voltage', 'local-codes']);
+  it('when 1 µF sits at 150 V (150 µC), then stored charge is flagged; 3.4 nF at 100 V (0.34 µC) is high voltage only [calc]', () => {
+    expect(assessSafety({ peakV: 150, chargeC: 150e-6 })).toMatchObject({ highVoltage: true, storedCharge: true });
+    expect(assessSafety({ peakV: 100, chargeC: storedCharge(3.4e-9, 100).chargeC })).toMatchObject({ highVoltage: true, storedCharge: false });
+  });
+
+  it('when a µF stack sits at 40 V (40 µC), then nothing is flagged; 5 µF at 10 V (50 µC) flags the charge alone', () => {
+    expect(assessSafety({ peakV: 40, chargeC: 40e-6 })).toMatchObject({ highVoltage: false, storedCharge: false });
+    expect(assessSafety({ peakV: 10, chargeC: 50e-6 })).toMatchObject({ highVoltage: false, storedCharge: true });
+  });
+
+  it('when anything is flagged, then the cautions start with the levels and end with local codes; when nothing is, none show', () => {
+    const shown = assessSafety({ peakV: 150, chargeC: 150e-6 }).cautions.map((c) => c.id);
+    expect(shown).toEqual(['levels', 'amplifier', 'discharge', 'supply-off', 'reverse-voltage', 'local-codes']);
     expect(cautionsFor({ highVoltage: false, storedCharge: false })).toEqual([]);
     expect(cautions.discharge.text).toContain('10 kΩ');
-    expect(cautions.discharge.source).toBe('[S: actuator vendor user manuals]');
+    expect(cautions.discharge.source).toBe('Source: actuator vendor user manuals');
+  });
+
+  it('when an actuator is rated 30 V but a run went to 45 000 mV, then its peak is 45 V and it is flagged; points above the limit are listed', () => {
+    const a = { maxVolts: 30, runs: [{ voltageUnit: 'mV' as const, points: [{ volts: 0 }, { volts: 45_000 }] }] };
+    expect(actuatorPeakVolts(a)).toBe(45);
+    expect(assessActuator(a).highVoltage).toBe(true);
+    expect(pointsAboveLimit(a.runs[0].points, 'mV', 30)).toEqual([1]);
+    expect(pointsAboveLimit([{ volts: 10 }], 'V', null)).toEqual([]);
   });
 });

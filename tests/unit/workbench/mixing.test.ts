@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
+  GainMatrixFitError,
   SingularMatrixError,
   applyGain,
   equalGainPairMatrix,
@@ -75,9 +76,52 @@ describe('two-axis mixing [practice; small-angle, linear]', () => {
     expect(fit.n).toBe(12);
   });
 
-  it('when a grid only moves Va and Vb together, then the fit throws', () => {
-    const samples = [1, 2, 3].map((v) => ({ vaV: v, vbV: v, xNm: v, yNm: v }));
-    expect(() => fitGainMatrix(samples)).toThrow(SingularMatrixError);
+  it('when a grid only moves Va and Vb together, then the fit refuses it as degenerate', () => {
+    const samples = [1, 2, 3, 4].map((v) => ({ vaV: v, vbV: v, xNm: v, yNm: v }));
+    expect(() => fitGainMatrix(samples)).toThrow(GainMatrixFitError);
+    expect(() => fitGainMatrix(samples)).toThrow(/change together/);
+    expect(() => fitGainMatrix(samples, 'origin')).toThrow(/change together/);
+  });
+
+  it('when the indicator zero is offset, then the affine fit returns G and the offsets exactly, and the through-origin fit is biased [calc]', () => {
+    const g: GainMatrix = [[70, -65], [72, 68]];
+    const samples = [];
+    for (const vaV of [0, 5, 10, 15]) {
+      for (const vbV of [0, 5, 10]) {
+        const p = applyGain(g, vaV, vbV);
+        samples.push({ vaV, vbV, xNm: p.xNm + 250, yNm: p.yNm - 40 });
+      }
+    }
+    const fit = fitGainMatrix(samples);
+    fit.gain.flat().forEach((value, i) => expect(value).toBeCloseTo(g.flat()[i], 9));
+    expect(fit.offsetNm[0]).toBeCloseTo(250, 8);
+    expect(fit.offsetNm[1]).toBeCloseTo(-40, 8);
+    expect(fit.residualStdXNm).toBeLessThan(1e-9);
+    const biased = fitGainMatrix(samples, 'origin');
+    expect(Math.abs(biased.gain[0][0] - 70)).toBeGreaterThan(1);
+    expect(biased.offsetNm).toEqual([0, 0]);
+  });
+
+  it('when the affine fit is compared with simple-statistics on one channel (Vb fixed), then the slope and intercept agree [S: simple-statistics linearRegression]', async () => {
+    const { linearRegression } = await import('simple-statistics');
+    // Noisy x against Va with Vb held at two levels: the Va coefficient equals the slope of x on Va within each level.
+    const samples = [];
+    const noise = [0.3, -0.2, 0.1, -0.4, 0.25, 0.05];
+    for (const [k, vaV] of [0, 4, 8, 12, 16, 20].entries()) {
+      for (const vbV of [0, 10]) samples.push({ vaV, vbV, xNm: 12 + 95 * vaV + 3 * vbV + noise[k], yNm: -7 + 2 * vaV + 90 * vbV + noise[5 - k] });
+    }
+    const fit = fitGainMatrix(samples);
+    const level0 = samples.filter((s) => s.vbV === 0);
+    const ref = linearRegression(level0.map((s) => [s.vaV, s.xNm]));
+    expect(fit.gain[0][0]).toBeCloseTo(ref.m, 9);
+    expect(fit.offsetNm[0]).toBeCloseTo(ref.b, 9);
+  });
+
+  it('when the values are extreme, then underflow, overflow and degeneracy are told apart', () => {
+    const base = [[0, 0], [1, 0], [0, 1], [1, 1]].map(([a, b]) => ({ vaV: a, vbV: b, xNm: a + b, yNm: a - b }));
+    expect(() => fitGainMatrix(base.map((s) => ({ ...s, vaV: s.vaV * 1e-200, vbV: s.vbV * 1e-200 })))).toThrow(/underflow/);
+    expect(() => fitGainMatrix(base.map((s) => ({ ...s, xNm: s.xNm * 1e300, vaV: s.vaV * 1e-10, vbV: s.vbV * 1e-10 })))).toThrow(/overflow/);
+    expect(() => fitGainMatrix(base.map((s) => ({ ...s, vbV: 0 })))).toThrow(/Vb is zero in every sample/);
   });
 
   it('when limits are 0–150 V, then the region is the parallelogram of the four corner drives, and reachability follows it', () => {

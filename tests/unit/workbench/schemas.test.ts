@@ -61,7 +61,7 @@ describe('other calculator inputs', () => {
   it('when an expected-gain body is parsed, then it is a valid ExpectedGainSpec for the dispatcher', () => {
     const parsed: ExpectedGainInput = expectedGainInput.parse({ actuator: 'tube-quadrant', material: 'PZT-5H', lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.508 });
     const spec: ExpectedGainSpec = parsed;
-    expect(expectedGain(spec).gainNmPerV).toBeCloseTo(13.4, 1);
+    expect(expectedGain(spec).gainNmPerV).toBeCloseTo(6.70, 2); // one quadrant [S: C. J. Chen, APL 60, 132 (1992); FIELD check value]
     expect(expectedGainInput.safeParse({ actuator: 'bimorph-series', material: { d31PmPerV: -190 }, lengthMm: 10, thicknessMm: 0.5 }).success).toBe(true);
     expect(expectedGainInput.safeParse({ actuator: 'bimorph-series', material: 'PZT-9', lengthMm: 10, thicknessMm: 0.5 }).success).toBe(false);
     expect(expectedGainInput.safeParse({ actuator: 'stack', material: 'PZT-5A', layers: 2.5 }).success).toBe(false);
