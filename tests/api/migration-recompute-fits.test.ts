@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { startTestApp, type TestApp } from '../support/test-app.ts';
 import { createBuildRow, createPart, createRunRow, createUser } from '../support/factories.ts';
-import { up } from '../../server/db/migrations/20261202100000-recompute-run-fits.ts';
+import { recomputeNonlinearity, up } from '../../server/db/migrations/20261202100000-recompute-run-fits.ts';
 import { CalibrationRun } from '../../server/models/calibration-run.model.ts';
 import { runColumns } from '../../server/services/run.service.ts';
 import { fitCalibrationInUnits } from '../../shared/workbench/calibration-fit.ts';
@@ -11,6 +11,8 @@ beforeAll(async () => { t = await startTestApp(); });
 afterAll(async () => { await t.close(); });
 
 const migrateUp = () => up({ name: '20261202100000-recompute-run-fits', context: t.handle.sequelize.getQueryInterface() });
+/** The same recomputation limited to this file's rows, so parallel test files are not touched. */
+const recompute = (...ids: number[]) => recomputeNonlinearity(t.handle.sequelize.getQueryInterface(), ids);
 
 /** A perfectly linear part with a symmetric loop: up 10·V + 2·sin(πV/4), down 10·V − 2·sin(πV/4), V = 0..4. */
 const volts = [0, 1, 2, 3, 4];
@@ -66,9 +68,9 @@ describe('migration 20261202100000-recompute-run-fits', () => {
 
   test('when up runs a second time, then every stored figure stays the same', async () => {
     const { loopRun, other } = await storedRuns();
-    await migrateUp();
+    await recompute(loopRun.id, other.id);
     const once = [fitFigures((await CalibrationRun.findByPk(loopRun.id))!), fitFigures((await CalibrationRun.findByPk(other.id))!)];
-    await migrateUp();
+    await recompute(loopRun.id, other.id);
     const twice = [fitFigures((await CalibrationRun.findByPk(loopRun.id))!), fitFigures((await CalibrationRun.findByPk(other.id))!)];
     expect(twice).toEqual(once);
     expect(once[0]!.nonlinearityPctFs).toBeCloseTo(0, 9);
@@ -78,7 +80,7 @@ describe('migration 20261202100000-recompute-run-fits', () => {
     const { loopRun } = await storedRuns();
     await loopRun.update({ pointsJson: '[]' });
     const before = fitFigures((await CalibrationRun.findByPk(loopRun.id))!);
-    await migrateUp();
+    expect(await recompute(loopRun.id)).toEqual({ updated: 0, unfittable: 1 });
     expect(fitFigures((await CalibrationRun.findByPk(loopRun.id))!)).toEqual(before);
     expect(before.nonlinearityPctFs).toBeCloseTo(5, 12);
   });
