@@ -193,3 +193,16 @@ export const EXPECTED_GAIN_BASIS: Record<ExpectedGainSpec['actuator'], string> =
   'plate-thickness': 'Δt = d33·V, whatever the thickness.',
   'plate-length': 'ΔL = d31·V·L/t.',
 };
+
+/** Each formula's source, short, as a page cites it beside a figure. */
+export const EXPECTED_GAIN_SOURCE: Record<ExpectedGainSpec['actuator'], string> = {
+  'bimorph-series': 'Source: Smits, Dalke & Cooney 1991',
+  'bimorph-parallel': 'Source: Smits, Dalke & Cooney 1991',
+  'tube-quadrant': 'Source: Chen, APL 1992',
+  'tube-opposite-pair': 'Source: Chen, APL 1992',
+  'tube-axial': 'calculated from the wall\'s length-mode strain',
+  stack: 'Source: Murata, piezo actuator basics',
+  'shear-plate': 'calculated from d15',
+  'plate-thickness': 'calculated from d33',
+  'plate-length': 'calculated from d31',
+};

@@ -7,7 +7,7 @@ import { ChartFrame } from '@/features/workbench/components/chart-frame.tsx';
 import { LazyCalibrationChart } from '@/features/workbench/components/charts/lazy-charts.ts';
 import { FormRadios, FormSelect } from '@/features/workbench/components/fields.tsx';
 import { NoResult } from '@/features/workbench/components/results.tsx';
-import { SafetyNotice } from '@/features/workbench/components/safety-notice.tsx';
+import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { CsvSource } from '@/features/workbench/fit/csv-source.tsx';
 import { exampleRows, fitForm, type FitFormValues } from '@/features/workbench/fit/fit-form.ts';
@@ -16,6 +16,8 @@ import { PointsGrid } from '@/features/workbench/fit/points-grid.tsx';
 import { RowProblems } from '@/features/workbench/components/row-problems.tsx';
 import { RowsPreview } from '@/features/workbench/fit/rows-preview.tsx';
 import { useFitPreview } from '@/features/workbench/fit/use-fit-preview.ts';
+import { useFitUnitConversion } from '@/features/workbench/fit/use-fit-unit-conversion.ts';
+import { Button } from '@/components/ui/button.tsx';
 import { friendlyError } from '@/features/workbench/form/error-map.ts';
 import { displacementOptions, voltageOptions } from '@/features/workbench/unit-options.ts';
 
@@ -26,6 +28,7 @@ const models = [{ value: 'intercept', label: 'With intercept' }, { value: 'origi
 export function FitPage() {
   const form = useForm({ resolver: zodResolver(fitForm, { error: friendlyError }), mode: 'onChange', defaultValues: defaults });
   const { source, rows, checked, result } = useFitPreview(form);
+  const unitChange = useFitUnitConversion(form);
   const voltsUnit = voltageUnitLabels[form.watch('voltageUnit') ?? 'V'];
   const lengthUnit = displacementUnitLabels[form.watch('displacementUnit')];
   return (
@@ -36,6 +39,16 @@ export function FitPage() {
             <section aria-label="Units and model" className="grid gap-3 rounded-lg border border-rule bg-white p-4 sm:grid-cols-2">
               <FormSelect form={form} name="voltageUnit" label="Voltage unit" options={voltageOptions} />
               <FormSelect form={form} name="displacementUnit" label="Displacement unit" options={displacementOptions} />
+              {unitChange.pending && (
+                <div role="alert" className="rounded-md border border-l-4 border-amber bg-amber/10 p-3 text-sm sm:col-span-2">
+                  <p>The pasted numbers were not changed: they are now read as {unitChange.pending.field === 'displacementUnit' ? lengthUnit : voltsUnit}. Is that what they are?</p>
+                  <div className="mt-2 flex flex-wrap gap-2">
+                    <Button variant="secondary" onClick={unitChange.keep}>Yes, they are in {unitChange.pending.field === 'displacementUnit' ? lengthUnit : voltsUnit}</Button>
+                    <Button variant="ghost" onClick={unitChange.undo}>No, put the unit back</Button>
+                  </div>
+                </div>
+              )}
+              <p className="text-xs text-ink-soft sm:col-span-2">Changing a unit converts the typed points; pasted CSV text is asked about.</p>
               <div className="sm:col-span-2"><FormRadios form={form} name="model" legend="Fit line" options={models} /></div>
             </section>
             <section aria-label="Calibration points" className="space-y-3 rounded-lg border border-rule bg-white p-4">

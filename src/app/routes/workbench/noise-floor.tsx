@@ -1,7 +1,7 @@
 import { FieldGroup, FormNumber } from '@/features/workbench/components/fields.tsx';
 import { FormQuantity } from '@/features/workbench/components/quantity-field.tsx';
 import { Headline, NoResult, Quantity, ResultPanel, ResultRow, ResultWarnings } from '@/features/workbench/components/results.tsx';
-import { SafetyNotice } from '@/features/workbench/components/safety-notice.tsx';
+import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { formatFixed, formatLengthNm } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';

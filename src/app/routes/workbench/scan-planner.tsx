@@ -2,7 +2,7 @@ import { ChartFrame } from '@/features/workbench/components/chart-frame.tsx';
 import { LazyScanChart } from '@/features/workbench/components/charts/lazy-charts.ts';
 import { FieldGroup, FormNumber } from '@/features/workbench/components/fields.tsx';
 import { NoResult } from '@/features/workbench/components/results.tsx';
-import { SafetyNotice } from '@/features/workbench/components/safety-notice.tsx';
+import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { scanForm, type ScanPlan } from '@/features/workbench/scan/scan-form.ts';

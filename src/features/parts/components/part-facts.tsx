@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import type { PartDetailDto } from '@shared/schemas/part.ts';
 import { assessSafety } from '@shared/workbench/safety.ts';
-import { SafetyNotice } from '@/features/workbench/components/safety-notice.tsx';
+import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
 import { Markdown } from '@/components/ui/markdown.tsx';
 import { formatShort } from '@shared/format/measured-number.ts';
 

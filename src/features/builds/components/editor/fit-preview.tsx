@@ -3,7 +3,7 @@ import { useFormContext, useWatch } from 'react-hook-form';
 import type { CreateRunInput } from '@shared/schemas/run.ts';
 import { fitCalculator } from '@shared/workbench/calculators/fit-calculator.ts';
 import { pointsAboveLimit } from '@shared/workbench/safety.ts';
-import { SafetyNotice } from '@/features/workbench/components/safety-notice.tsx';
+import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
 import { FitInputError } from '@shared/workbench/fit-input-error.ts';
 import { toNm, toVolts, type DisplacementUnit, type VoltageUnit } from '@shared/units.ts';
 import { FitSummary } from './fit-summary.tsx';

@@ -1,5 +1,5 @@
 import { assessActuator } from '@shared/workbench/safety.ts';
-import { SafetyNotice } from '@/features/workbench/components/safety-notice.tsx';
+import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
 
 /** The shared cautions once the drive limit (or the charge it leaves on the part) crosses the IEC 61010-1 levels. */
 export function HighVoltageCaution({ maxVolts, capacitanceNf }: { maxVolts: number | undefined; capacitanceNf: number | null | undefined }) {

@@ -11,6 +11,7 @@ import { RunConditionsFields } from './run-conditions-fields.tsx';
 import { runForm, runFormDefaults, type RunFormValues } from './run-form-schema.ts';
 import { RunSetupFields } from './run-setup-fields.tsx';
 import { applyServerErrors, fieldsOf } from './server-errors.ts';
+import { usePointsUnitConversion } from './use-points-unit-conversion.ts';
 
 const FIELDS = ['method', 'voltageUnit', 'displacementUnit', 'model', 'drive', 'conditions', 'notes', 'points'] as const;
 
@@ -19,6 +20,7 @@ export function RunForm({ actuatorId, maxVolts, onSaved, onCancel }: { actuatorI
   const create = useCreateRun(actuatorId);
   const form = useForm<RunFormValues, unknown, CreateRunInput>({ resolver: zodResolver(runForm), defaultValues: runFormDefaults() });
   const points = useFieldArray({ control: form.control, name: 'points' });
+  usePointsUnitConversion(form, points);
   const { errors, isSubmitting } = form.formState;
   const idPrefix = `run-${actuatorId}`;
   const pointsError = fieldMessage(errors.points?.root ?? (errors.points?.message ? errors.points : undefined), 'A calibration run needs at least 3 points.');

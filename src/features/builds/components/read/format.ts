@@ -1,4 +1,5 @@
 // Display helpers for the build pages: dates, gains and the expected-gain basis in our words.
+import { EXPECTED_GAIN_SOURCE } from '@shared/workbench/expected-gain.ts';
 import type { BuildStatus } from '@shared/schemas/build.ts';
 import type { RunStatus } from '@shared/schemas/run.ts';
 import type { BadgeTone } from '@/components/ui/status-badge.tsx';
@@ -41,8 +42,9 @@ const basisWords: Record<string, string> = {
   'plate-length': 'plate, length mode',
 };
 
-/** "series bimorph, PZT-5A" from the API's "bimorph-series, PZT-5A". */
+/** "series bimorph, PZT-5A (Source: Smits, Dalke & Cooney 1991)" from the API's "bimorph-series, PZT-5A". */
 export function describeBasis(basis: string): string {
   const [formula, ...rest] = basis.split(', ');
-  return [basisWords[formula ?? ''] ?? formula, ...rest].join(', ');
+  const source = formula && formula in EXPECTED_GAIN_SOURCE ? ` (${EXPECTED_GAIN_SOURCE[formula as keyof typeof EXPECTED_GAIN_SOURCE]})` : '';
+  return `${[basisWords[formula ?? ''] ?? formula, ...rest].join(', ')}${source}`;
 }

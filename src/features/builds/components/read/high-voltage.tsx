@@ -1,5 +1,5 @@
 import { assessActuator, cautionsFor, HAZARDOUS_LIVE_LEVELS, type ActuatorForSafety } from '@shared/workbench/safety.ts';
-import { SafetyNotice } from '@/features/workbench/components/safety-notice.tsx';
+import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
 
 /** Id of the one full caution block on a build page, so each high-voltage actuator can point at it. */
 export const HV_CAUTIONS_ID = 'high-voltage-cautions';

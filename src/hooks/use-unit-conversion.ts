@@ -30,3 +30,9 @@ export function useUnitConversion<T extends FieldValues, U extends string>(
     }
   }, [unit, form, fields, convert]);
 }
+
+/** A typed number in a text field converted, or the text left alone when it is empty or not a plain number. */
+export const convertTyped = (text: string, convert: (v: number) => number) => {
+  const t = text.trim();
+  return t !== '' && Number.isFinite(Number(t)) ? String(tidy(convert(Number(t)))) : text;
+};
