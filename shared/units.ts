@@ -126,3 +126,14 @@ export function convertQuantity(value: number, from: ConvertibleUnit, to: Conver
   if (kind === 'voltage') return fromVolts(toVolts(value, from as VoltageUnit), to as VoltageUnit);
   return convertGain(value, from as GainUnit, to as GainUnit);
 }
+
+/** Spellings people type for a unit, mapped to its key ("µm" → "um", "Å/V" → "angstrom/V"). */
+const unitAliases: Readonly<Record<string, ConvertibleUnit>> = {
+  'µm': 'um', 'μm': 'um', 'Å': 'angstrom', 'µin': 'uin', 'μin': 'uin',
+  'µm/V': 'um/V', 'μm/V': 'um/V', 'Å/V': 'angstrom/V', 'µin/V': 'uin/V', 'μin/V': 'uin/V',
+};
+
+/** A unit as typed, turned into its key when it is a known spelling; anything else passes unchanged (for zod to judge). */
+export function unitKey(value: unknown): unknown {
+  return typeof value === 'string' && value in unitAliases ? unitAliases[value] : value;
+}

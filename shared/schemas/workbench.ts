@@ -3,7 +3,7 @@
 // The fit's "all voltages equal" rule is not a schema refine: the fit itself throws
 // FitInputError('voltages_all_equal'), which the server maps to a 400 (see fit-input-error.ts).
 import { z } from 'zod';
-import { convertibleUnits, displacementUnits, kindOfUnit, voltageUnits } from '../units.ts';
+import { convertibleUnits, displacementUnits, kindOfUnit, unitKey, voltageUnits } from '../units.ts';
 import { MAX_FIT_POINTS, MIN_FIT_POINTS } from '../workbench/fit-input-error.ts';
 import { materialKeys } from '../workbench/materials.ts';
 
@@ -126,8 +126,11 @@ export const gainMatrixFitInput = z.strictObject({
     .array(z.strictObject({ vaV: z.number(), vbV: z.number(), xNm: z.number(), yNm: z.number() }))
     .min(3)
     .max(MAX_WORKBENCH_SAMPLES),
-  /** 'affine' fits offsets x₀, y₀ too (an indicator's zero); 'origin' forces them to zero. */
-  model: z.enum(['affine', 'origin']).default('affine'),
+  /** 'affine' (or 'intercept', as the gain fit calls it) fits offsets x₀, y₀ too (an indicator's zero); 'origin' forces them to zero. */
+  model: z
+    .enum(['affine', 'intercept', 'origin'])
+    .default('affine')
+    .transform((m) => (m === 'origin' ? 'origin' : 'affine') as 'affine' | 'origin'),
 });
 /** Parsed (defaults applied) GainMatrixFitInput as the service and the form receive it. */
 export type GainMatrixFitInput = z.infer<typeof gainMatrixFitInput>;
@@ -178,8 +181,8 @@ export type TunnellingInput = z.infer<typeof tunnellingInput>;
 export const unitConversionInput = z
   .strictObject({
     value: z.number(),
-    from: z.enum(convertibleUnits),
-    to: z.enum(convertibleUnits),
+    from: z.preprocess(unitKey, z.enum(convertibleUnits)),
+    to: z.preprocess(unitKey, z.enum(convertibleUnits)),
   })
   .refine((v) => kindOfUnit(v.from) === kindOfUnit(v.to), { message: 'Both units must measure the same thing (a displacement, a voltage or a gain).', path: ['to'] });
 /** Parsed (defaults applied) UnitConversionInput as the service and the form receive it. */

@@ -44,6 +44,10 @@ const expected: Record<string, Row> = {
   'POST /api/workbench/drive-current':              [200,   200,  200,  200,   200, 200],
   'POST /api/workbench/tunnelling':                 [200,   200,  200,  200,   200, 200],
   'POST /api/workbench/convert':                    [200,   200,  200,  200,   200, 200],
+  'POST /api/workbench/loaded-gain':                [200,   200,  200,  200,   200, 200],
+  'POST /api/workbench/tube':                       [200,   200,  200,  200,   200, 200],
+  'POST /api/workbench/drive-limits':               [200,   200,  200,  200,   200, 200],
+  'POST /api/workbench/noise-floor':                [200,   200,  200,  200,   200, 200],
 
   'POST /api/builds/:buildId/photos':               [401,   201,  404,  403,   403, 403],
   'PUT /api/builds/:buildId/photos/order':          [401,   200,  404,  403,   403, 403],

@@ -105,7 +105,7 @@ describe('journey: a maker writes a build and submits it for review', () => {
     expect(await page.evaluate(() => document.activeElement?.getAttribute('aria-label'))).toBe('Move photo 2 earlier');
     await page.locator('#photos').screenshot({ path: `${SCREENSHOTS}/build-editor-photos-1280.png` });
 
-    // An actuator from the parts registry; 60 V trips the high-voltage caution.
+    // An actuator from the parts registry; 60 V trips the IEC 61010-1 caution (above 42.4 V peak).
     await page.getByRole('button', { name: 'Add an actuator' }).click();
     await page.getByLabel('Search the parts registry').fill('cartridge');
     await page.getByRole('radio', { name: PART }).check();
@@ -113,7 +113,7 @@ describe('journey: a maker writes a build and submits it for review', () => {
     await page.getByLabel('Axis').selectOption('Z');
     await page.getByLabel('Drive', { exact: true }).selectOption('pair-anti-phase');
     await page.getByLabel('Max volts (optional)').fill('60');
-    await page.getByText('High voltage: above 50 V').waitFor();
+    await page.getByText('Hazardous voltage: 60 V peak is above the 42.4 V peak level').waitFor();
     await page.getByText(/do not replace local electrical codes or qualified practice/).waitFor();
     await page.getByRole('button', { name: 'Add actuator' }).click();
     await page.getByRole('heading', { name: 'Z bender pair' }).waitFor();

@@ -77,12 +77,12 @@ describe('journey: reading builds', () => {
     expect(await runs.getByRole('row').nth(1).textContent()).toMatch(/\d ± \d/);
     await xBender.getByRole('region', { name: /^Calibration plot: X bender/ }).locator('svg.recharts-surface').waitFor();
     expect(await xBender.locator('.recharts-symbols').count()).toBeGreaterThan(10);
-    expect(await xBender.getByText(/× expected \(series bimorph, PZT-5A\)/).count()).toBe(1);
+    expect(await xBender.getByText(/× expected \(series bimorph, PZT-5A · Source: Smits, Dalke & Cooney 1991\)/).count()).toBe(1);
     await xBender.getByText(/recorded in µm and V, plotted in nm and V/).waitFor();
     await runs.getByRole('radio').nth(1).check();
     await xBender.getByText(/recorded in nm and V; line fitted with an intercept/).waitFor();
-    await page.getByText(/High voltage: some actuators of this build are driven above 50 V/).waitFor();
-    await page.getByRole('article', { name: /^Z tube/ }).getByText('High voltage: driven up to').waitFor();
+    await page.getByText(/Hazardous voltage: some actuators of this build are driven above 42.4 V peak/).waitFor();
+    await page.getByRole('article', { name: /^Z tube/ }).getByText(/Hazardous voltage: .* V peak is above the 42.4 V peak level/).waitFor();
 
     // The demo seeds drawn pictures first; open the first of the photos this test uploaded.
     const thumbs = page.getByRole('list', { name: 'Photos of the build' }).getByRole('button', { name: PHOTO_ALTS[0]! });

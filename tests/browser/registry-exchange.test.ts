@@ -62,7 +62,7 @@ describe('journey: parts registry and exchange', () => {
     const plot = page.getByTestId('part-runs-plot');
     await plot.locator('svg.recharts-surface').waitFor();
     expect(await plot.locator('.recharts-symbols').count()).toBeGreaterThanOrEqual(4);
-    expect(await page.getByRole('alert').filter({ hasText: 'High voltage: this part is rated up to 60 V' }).count()).toBe(1);
+    expect(await page.getByRole('alert').filter({ hasText: 'Hazardous voltage: this part is rated up to 60 V' }).count()).toBe(1);
     expect(await page.getByRole('button', { name: 'Report' }).count()).toBe(1);
     await page.getByRole('button', { name: 'Report' }).click();
     const dialog = page.getByRole('dialog', { name: 'Report this part' });

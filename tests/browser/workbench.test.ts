@@ -69,17 +69,17 @@ describe('journey: a visitor uses the workbench', () => {
     expect(errors).toEqual([]);
   });
 
-  test('when the scan planner drives the actuator above 50 V, then the high-voltage caution shows, and not below', async () => {
+  test('when the scan planner amplifier output crosses 42.4 V peak (IEC 61010-1), then the caution shows, and not below', async () => {
     const { page } = browser;
     await page.goto(`${live.baseUrl}/workbench/scan-planner`);
     const amp = page.getByLabel('Amplifier gain (V/V)');
     await amp.fill('1');
     // 102.6 nm/V × 10 V / 2^16 = 0.01566 nm [calc]
     await page.getByRole('status', { name: 'Smallest step at 16 bit' }).filter({ hasText: '0.01566 nm' }).waitFor();
-    expect(await page.getByRole('alert').filter({ hasText: 'High voltage' }).count()).toBe(0);
+    expect(await page.getByRole('alert').filter({ hasText: 'Hazardous voltage' }).count()).toBe(0);
 
     await amp.fill('20');
-    const caution = page.getByRole('alert').filter({ hasText: 'High voltage' });
+    const caution = page.getByRole('alert').filter({ hasText: 'Hazardous voltage' });
     await caution.waitFor();
     expect(await caution.textContent()).toContain('local electrical codes or qualified practice');
     await page.getByRole('figure', { name: 'Step against DAC bits' }).locator('svg.recharts-surface').first().waitFor();

@@ -15,6 +15,7 @@ import { createListingInput, hideListingInput, sendMessageInput, updateListingIn
 import { reorderAttachedPhotosInput, updateAttachedPhotoInput } from '@shared/schemas/attached-photo.ts';
 import { setRoleInput, setSuspendedInput } from '@shared/schemas/user.ts';
 import * as wb from '@shared/schemas/workbench.ts';
+import * as wbx from '@shared/schemas/workbench-extras.ts';
 import type { TestApp } from './test-app.ts';
 import type { Agent } from './login.ts';
 import { fillPath, type RouteEntry } from './route-table.ts';
@@ -271,6 +272,10 @@ export const fixtures: Record<string, Fixture> = {
   'POST /api/workbench/drive-current': workbench(wb.driveCurrentInput, { capacitanceF: 10e-9, amplitudeV: 100, frequencyHz: 1000 }, 'cautions'),
   'POST /api/workbench/tunnelling': workbench(wb.tunnellingInput, { workFunctionEv: 4.5 }, 'decayConstantPerAngstrom'),
   'POST /api/workbench/convert': workbench(wb.unitConversionInput, { value: 1, from: 'nm', to: 'um' }, 'converted'),
+  'POST /api/workbench/loaded-gain': workbench(wbx.loadedGainInput, { freeGainNmPerV: 102.6, actuatorStiffnessNPerM: 300, springRateNPerM: 150 }, 'loadedGainNmPerV'),
+  'POST /api/workbench/tube': workbench(wbx.tubeInput, { lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.508, relPermittivity: 3400, youngsModulusPa: 60.6e9, densityKgPerM3: 7500 }, 'warnings'),
+  'POST /api/workbench/drive-limits': workbench(wbx.driveLimitsInput, { capacitanceF: 3.4e-9, amplitudeV: 100, frequencyHz: 1000 }, 'cautions'),
+  'POST /api/workbench/noise-floor': workbench(wbx.noiseFloorInput, { actuatorGainNmPerV: 102.6, dacBits: 16, dacSpanV: 10, ampGainVPerV: 30 }, 'warnings'),
 
   'POST /api/builds/:buildId/photos': {
     allowed: 'owner',

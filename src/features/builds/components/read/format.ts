@@ -42,9 +42,9 @@ const basisWords: Record<string, string> = {
   'plate-length': 'plate, length mode',
 };
 
-/** "series bimorph, PZT-5A (Source: Smits, Dalke & Cooney 1991)" from the API's "bimorph-series, PZT-5A". */
+/** "series bimorph, PZT-5A · Source: Smits, Dalke & Cooney 1991" from the API's "bimorph-series, PZT-5A". */
 export function describeBasis(basis: string): string {
   const [formula, ...rest] = basis.split(', ');
-  const source = formula && formula in EXPECTED_GAIN_SOURCE ? ` (${EXPECTED_GAIN_SOURCE[formula as keyof typeof EXPECTED_GAIN_SOURCE]})` : '';
+  const source = formula && formula in EXPECTED_GAIN_SOURCE ? ` · ${EXPECTED_GAIN_SOURCE[formula as keyof typeof EXPECTED_GAIN_SOURCE]}` : '';
   return `${[basisWords[formula ?? ''] ?? formula, ...rest].join(', ')}${source}`;
 }
