@@ -4,6 +4,7 @@ import { fitCalibrationInUnits } from '../../shared/workbench/calibration-fit.ts
 import type { DisplacementUnit } from '../../shared/units.ts';
 import { formatWithUncertainty } from '../../shared/format/measured-number.ts';
 import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
+import { workbenchTools } from '../../src/features/workbench/tools.ts';
 
 // A bender run with up and down sweeps; one bad line (7) that must be left out and reported.
 const csv = [
@@ -23,7 +24,7 @@ function expectedGain(unit: DisplacementUnit): string {
   return `${f.value} ± ${f.uncertainty} nm/V`;
 }
 
-const slugs = ['fit', 'peak-to-peak', 'creep', 'expected-gain', 'mixing', 'scan-planner', 'resonance', 'drive-current', 'tunnelling', 'units'];
+const slugs = workbenchTools.map((t) => t.slug);
 
 async function noHorizontalScroll(page: Page): Promise<boolean> {
   return page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth);

@@ -134,7 +134,7 @@ export const DEMO_BUILDS: DemoBuild[] = [
     ],
     actuators: [
       { part: 'tube-635', label: 'XY scan tube', axis: 'XY', drive: 'quartered-tube', amplifier: 'HV amplifier ±150 V', maxVolts: 150,
-        runs: [run({ gainNmPerV: 23.5, method: 'reference-sample', noiseNm: 3, maxVolts: 140, loopFraction: 0.12, daysAgo: 90 }), run({ gainNmPerV: 25.1, method: 'reference-sample', noiseNm: 3, maxVolts: 140, daysAgo: 70 })] },
+        runs: [run({ gainNmPerV: 11.8, method: 'reference-sample', noiseNm: 1.5, maxVolts: 140, loopFraction: 0.12, daysAgo: 90 }), run({ gainNmPerV: 12.6, method: 'reference-sample', noiseNm: 1.5, maxVolts: 140, daysAgo: 70 })] },
       { part: 'buzzer-27', label: 'Coarse approach disc', axis: 'Z', drive: 'single', amplifier: '12 V driver', maxVolts: 24,
         runs: [run({ gainNmPerV: 31, maxVolts: 24, noiseNm: 12, daysAgo: 95 }), run({ gainNmPerV: 140, status: 'rejected', reviewNote: 'Gain is about 4–5× every other disc of this kind; the indicator was probably on the lever, not the disc centre.', daysAgo: 60 })] },
     ],

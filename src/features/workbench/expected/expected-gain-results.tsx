@@ -15,7 +15,7 @@ export function ExpectedGainResults({ r, materialSource }: { r: Result; material
           <Gain value={r.gainNmPerV} />
         </Headline>
       }
-      basis={<>{r.basis} Material: {materialSource}. Real parts under load give less; always measure.</>}
+      basis={<>{r.basis} Material constants — {materialSource}. Real parts under load give less; always measure.</>}
     >
       {r.tolerance && (
         <ResultRow label="Band from the geometry tolerances" note={<>± 2 standard uncertainties (k = 2) from the tolerances alone; {r.tolerance.contributions.map((c) => `${c.field.replace('Mm', '')} ${formatSig(c.relStdUnc * 100, 2)} %`).join(', ')} (u, k = 1, each).</>}>

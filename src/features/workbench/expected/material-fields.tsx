@@ -1,4 +1,5 @@
 import type { UseFormReturn } from 'react-hook-form';
+import { sourceInWords } from '@shared/workbench/source-words.ts';
 import { materialKeys, materials, type MaterialKey } from '@shared/workbench/materials.ts';
 import { FieldGroup, FormNumber, FormSelect } from '../components/fields.tsx';
 import { constantLabels, type Constant } from './actuator-kinds.ts';
@@ -23,7 +24,7 @@ export function MaterialFields({ form, needed }: { form: Form; needed: Constant 
           <p className="num">
             d31 {pm(material.d31PmPerV)} · d33 {pm(material.d33PmPerV)} · d15 {pm(material.d15PmPerV)} <span className="font-sans">pm/V</span>
           </p>
-          <p className="mt-1 text-xs text-ink-soft">Source: {material.source}</p>
+          <p className="mt-1 text-xs text-ink-soft">{sourceInWords(material.source)}</p>
         </div>
       ) : (
         constants.map((c) => (

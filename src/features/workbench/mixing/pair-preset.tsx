@@ -12,7 +12,7 @@ export function PairPreset({ form }: { form: MixingFormApi }) {
   return (
     <div className="rounded-md border border-dashed border-rule p-3">
       <p className="text-sm font-medium">Equal-gain ±45° bender pair</p>
-      <p className="text-xs text-ink-soft">Two equal benders meeting at the tip at 90°: in phase moves along y, anti-phase along x [practice; small-angle, linear].</p>
+      <p className="text-xs text-ink-soft">Two equal benders meeting at the tip at 90°: in phase moves along y, anti-phase along x (common practice; small-angle, linear).</p>
       <div className="mt-2 flex flex-wrap items-end gap-2">
         <div>
           <label htmlFor={id} className="block text-sm">Gain of each bender g <span className="text-ink-soft">(nm/V)</span></label>
