@@ -1,7 +1,6 @@
 import { FieldGroup, FormNumber } from '@/features/workbench/components/fields.tsx';
 import { FormQuantity } from '@/features/workbench/components/quantity-field.tsx';
-import { Headline, NoResult, Quantity, ResultPanel, ResultRow, ResultWarnings } from '@/features/workbench/components/results.tsx';
-import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
+import { Headline, NoResult, Quantity, ResultPanel, ResultRow, ResultNotesBlock } from '@/features/workbench/components/results.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { formatFixed, formatSi, formatSig, type Formatted } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
@@ -39,8 +38,7 @@ export function DriveLimitsPage() {
         results={
           r ? (
             <>
-              <SafetyNotice cautions={r.cautions} crossed={r.levelsCrossed} />
-              <ResultWarnings warnings={r.warnings} />
+              <ResultNotesBlock r={r} />
               <ResultPanel
                 headline={<Headline label="Peak current of the sine" sub={`Slew rate ${slew(r.sineSlewRateVPerS).value} V/µs`}><Quantity q={formatSi(r.sinePeakCurrentA, 'A')} /></Headline>}
                 basis="Sine slew 2π·f·V, triangle slew 2·V_pp·f, current C·dV/dt, the ceilings those solved for f, and the corner 1/(2π·R·C) of a first-order low-pass: all calculated from the formulas."

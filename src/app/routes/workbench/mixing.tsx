@@ -1,8 +1,7 @@
 import { ChartFrame } from '@/features/workbench/components/chart-frame.tsx';
 import { LazyMixerChart } from '@/features/workbench/components/charts/lazy-charts.ts';
 import { FieldGroup, FormNumber, errorOf } from '@/features/workbench/components/fields.tsx';
-import { NoResult, ResultWarnings } from '@/features/workbench/components/results.tsx';
-import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
+import { NoResult, ResultNotesBlock } from '@/features/workbench/components/results.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { GainMatrixFields } from '@/features/workbench/mixing/gain-matrix-fields.tsx';
@@ -48,8 +47,7 @@ export function MixingPage() {
         results={
           live.ok ? (
             <>
-              <SafetyNotice cautions={live.result.cautions} crossed={live.result.levelsCrossed} />
-              <ResultWarnings warnings={live.result.warnings} />
+              <ResultNotesBlock r={live.result} />
               <MixingResults r={live.result} />
               <ChartFrame label="Reachable region" caption="Teal: every tip position the drive limits allow. The wanted point is a copper dot when reachable, a red cross when not; the black dot is the origin.">
                 <LazyMixerChart region={live.result.regionNm} target={live.result.target} />

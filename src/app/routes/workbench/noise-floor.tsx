@@ -1,7 +1,6 @@
 import { FieldGroup, FormNumber } from '@/features/workbench/components/fields.tsx';
 import { FormQuantity } from '@/features/workbench/components/quantity-field.tsx';
-import { Headline, NoResult, Quantity, ResultPanel, ResultRow, ResultWarnings } from '@/features/workbench/components/results.tsx';
-import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
+import { Headline, NoResult, Quantity, ResultPanel, ResultRow, ResultNotesBlock } from '@/features/workbench/components/results.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { formatFixed, formatLengthNm } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
@@ -61,8 +60,7 @@ export function NoiseFloorPage() {
         results={
           r ? (
             <>
-              <SafetyNotice cautions={r.cautions} crossed={r.levelsCrossed} />
-              <ResultWarnings warnings={r.warnings} />
+              <ResultNotesBlock r={r} />
               <ResultPanel
                 headline={
                   <Headline label="Noise at the tip (rms)" sub={`${sourceLabels[r.dominant].label} dominates: ${formatFixed(r.dominantPowerSharePct, 0)} % of the noise power.`}>

@@ -1,8 +1,7 @@
 import { convertDisplacement, displacementUnitLabels } from '@shared/units.ts';
 import { peakToPeakCalculator } from '@shared/workbench/calculators/peak-to-peak-calculator.ts';
 import { FieldGroup, FormNumber, FormSelect } from '@/features/workbench/components/fields.tsx';
-import { Gain, Headline, NoResult, Quantity, ResultPanel, ResultRow, ResultWarnings } from '@/features/workbench/components/results.tsx';
-import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
+import { Gain, Headline, NoResult, Quantity, ResultPanel, ResultRow, ResultNotesBlock } from '@/features/workbench/components/results.tsx';
 import { useUnitConversion } from '@/hooks/use-unit-conversion.ts';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { formatSig } from '@shared/format/measured-number.ts';
@@ -36,8 +35,7 @@ export function PeakToPeakPage() {
         results={
           r ? (
             <>
-            <SafetyNotice cautions={r.cautions} crossed={r.levelsCrossed} />
-            <ResultWarnings warnings={r.warnings} />
+            <ResultNotesBlock r={r} />
             <ResultPanel
               headline={<Headline label="Gain" sub="± standard uncertainty (k = 1, GUM) from the reading resolution."><Gain value={r.gainNmPerV} plusMinus={r.gainStdUncNmPerV} kind="std" /></Headline>}
               basis="gain = Δx_pp / ΔV_pp (common practice); each reading rectangular within ± half a division, so the difference of two readings has u = r/√6, relative uncertainties in quadrature (Source: GUM, JCGM 100:2008, 4.3.7 and 5.1.2)."

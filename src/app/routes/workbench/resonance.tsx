@@ -5,6 +5,7 @@ import { Headline, NoResult, Quantity, ResultPanel, ResultRow, ResultWarnings } 
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { formatSi, formatSig } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
+import { usePresetField } from '@/features/workbench/form/use-preset.ts';
 import { resonanceForm, resonancePresets } from '@/features/workbench/simple/resonance-form.ts';
 import { resonanceCalculator } from '@shared/workbench/calculators/resonance-calculator.ts';
 
@@ -14,14 +15,7 @@ const units = [{ value: 'mm', label: 'mm' }, { value: 'um', label: 'µm' }];
 export function ResonancePage() {
   const { form, live } = useLiveForm(resonanceForm, defaults, resonanceCalculator.compute);
   const unit = form.watch('dimensionUnit') === 'um' ? 'µm' : 'mm';
-  const presetField = form.register('preset', {
-    onChange: (e: { target: { value: string } }) => {
-      const p = resonancePresets.find((x) => x.value === e.target.value);
-      if (p?.eGpa !== undefined) form.setValue('youngsModulusGpa', p.eGpa, { shouldValidate: true });
-      if (p?.rho !== undefined) form.setValue('densityKgPerM3', p.rho, { shouldValidate: true });
-    },
-  });
-  const preset = resonancePresets.find((p) => p.value === form.watch('preset'));
+  const { registration: presetField, preset } = usePresetField(form, resonancePresets, (p) => ({ youngsModulusGpa: p.eGpa, densityKgPerM3: p.rho }));
   const r = live.ok ? live.result : null;
   return (
     <ToolPage slug="resonance" lead="First bending mode of a clamped bender bar or a cantilever lever, with an optional tip mass, and its spring constant.">

@@ -6,21 +6,14 @@ import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page
 import { tubeForm, tubePresets } from '@/features/workbench/expected/tube-form.ts';
 import { formatSi, formatSig } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
+import { usePresetField } from '@/features/workbench/form/use-preset.ts';
 import { tubeCalculator } from '@shared/workbench/calculators/tube-calculator.ts';
 
 const defaults = { preset: 'PZT-5H', lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.508, relPermittivity: 3400, youngsModulusGpa: 60.6, densityKgPerM3: 7500 } as const;
 
 export function TubePage() {
   const { form, live } = useLiveForm(tubeForm, defaults, tubeCalculator.compute);
-  const presetField = form.register('preset', {
-    onChange: (e: { target: { value: string } }) => {
-      const p = tubePresets.find((x) => x.value === e.target.value);
-      if (p?.relPermittivity !== undefined) form.setValue('relPermittivity', p.relPermittivity, { shouldValidate: true });
-      if (p?.eGpa !== undefined) form.setValue('youngsModulusGpa', p.eGpa, { shouldValidate: true });
-      if (p?.rho !== undefined) form.setValue('densityKgPerM3', p.rho, { shouldValidate: true });
-    },
-  });
-  const preset = tubePresets.find((p) => p.value === form.watch('preset'));
+  const { registration: presetField, preset } = usePresetField(form, tubePresets, (p) => ({ relPermittivity: p.relPermittivity, youngsModulusGpa: p.eGpa, densityKgPerM3: p.rho }));
   const r = live.ok ? live.result : null;
   return (
     <ToolPage slug="tube" lead="A quartered piezo tube: the capacitance each quadrant puts on the amplifier, and the first bending and axial resonances of the tube clamped at one end.">

@@ -1,6 +1,8 @@
 import { useId, type ReactNode } from 'react';
 import { formatWithUncertainty, plusMinusLabels, type Formatted, type PlusMinusKind } from '@shared/format/measured-number.ts';
 import type { ResultWarning } from '@shared/workbench/calculators/calculator.ts';
+import type { Caution } from '@shared/workbench/safety.ts';
+import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
 
 /** A formatted number in monospace tabular figures, with its unit after it. */
 export function Quantity({ q, className = '' }: { q: Formatted; className?: string }) {
@@ -87,5 +89,15 @@ export function NoResult({ message }: { message: string }) {
       <span className="font-medium text-ink">No result yet. </span>
       {message}
     </div>
+  );
+}
+
+/** A calculator's cautions (with the levels crossed) and warnings, above its results; nothing when it has none. */
+export function ResultNotesBlock({ r }: { r: { warnings: readonly ResultWarning[]; cautions: readonly Caution[]; levelsCrossed?: readonly string[] } }) {
+  return (
+    <>
+      <SafetyNotice cautions={r.cautions} crossed={r.levelsCrossed} />
+      <ResultWarnings warnings={r.warnings} />
+    </>
   );
 }
