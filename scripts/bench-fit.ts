@@ -101,6 +101,4 @@ time('fitCalibrationInUnits (mV, µm)', () =>
   fitCalibrationInUnits({ points: recorded, voltageUnit: 'mV', displacementUnit: 'um' }, unlimited),
 );
 time('fitCalibrationColumns (typed)', () => fitCalibrationColumns(columns, 'intercept', unlimited));
-console.log(
-  `target: median ≤ ${TARGET_MEDIAN_MS} ms for fitCalibration → ${median <= TARGET_MEDIAN_MS ? 'met' : 'NOT met'}`,
-);
+console.log(`target: median ≤ ${TARGET_MEDIAN_MS} ms for fitCalibration → ${median <= TARGET_MEDIAN_MS ? 'met' : 'NOT met'}`);

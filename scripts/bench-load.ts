@@ -33,23 +33,39 @@ const MAKER = 'bench-maker';
 const t0 = Date.now();
 const say = (s: string) => process.stdout.write(`[${((Date.now() - t0) / 1000).toFixed(1).padStart(5)} s] ${s}\n`);
 
-const freePort = () => new Promise<number>((resolve, reject) => {
-  const s = createServer();
-  s.once('error', reject);
-  s.listen(0, '127.0.0.1', () => { const { port } = s.address() as { port: number }; s.close(() => resolve(port)); });
-});
+const freePort = () =>
+  new Promise<number>((resolve, reject) => {
+    const s = createServer();
+    s.once('error', reject);
+    s.listen(0, '127.0.0.1', () => {
+      const { port } = s.address() as { port: number };
+      s.close(() => resolve(port));
+    });
+  });
 const pick = <T>(xs: readonly T[]) => xs[Math.floor(Math.random() * xs.length)];
 
 // ---- a private MariaDB, migrated and seeded --------------------------------------------------
 let base = tmpdir();
-try { accessSync('/dev/shm', constants.W_OK); base = '/dev/shm'; } catch { /* tmpdir */ }
+try {
+  accessSync('/dev/shm', constants.W_OK);
+  base = '/dev/shm';
+} catch {
+  /* tmpdir */
+}
 const dir = mkdtempSync(join(base, 'scanwright-bench-load-'));
 // mariadbd keeps temporary tables in $TMPDIR and a starting server deletes every `#sql*` file there,
 // so a private directory keeps this instance and any other starting at the same time apart.
 process.env.TMPDIR = join(dir, 'tmp');
 mkdirSync(process.env.TMPDIR);
 const dbPort = await freePort();
-const db = { host: '127.0.0.1', port: dbPort, name: 'scanwright_load', user: 'scanwright_bench', password: 'bench-only-password', poolMax: 5 };
+const db = {
+  host: '127.0.0.1',
+  port: dbPort,
+  name: 'scanwright_load',
+  user: 'scanwright_bench',
+  password: 'bench-only-password',
+  poolMax: 5,
+};
 let mariadb: ChildProcess | null = null;
 let app: ChildProcess | null = null;
 
@@ -74,15 +90,36 @@ try {
   await seedDemoOnce(sequelize);
   const demoPart = await Part.findOne({ where: { status: 'accepted' }, order: [['id', 'ASC']] });
   for (let i = 0; i < GENERATED_PARTS; i += 1000) {
-    await Part.bulkCreate(Array.from({ length: Math.min(1000, GENERATED_PARTS - i) }, (_, k) => {
-      const gain = 5 + Math.random() * 300;
-      return {
-        category: pick(['bimorph', 'buzzer-disc', 'stack', 'tube'] as const), name: `Generated part ${i + k}`, salvageSource: 'bench generator', material: 'PZT-5A',
-        lengthMm: 10 + (k % 30), widthMm: null, thicknessMm: 0.5, outerDiameterMm: null, wallMm: null, layers: null, capacitanceNf: 1, safeVolts: 60, notes: null,
-        status: 'accepted' as const, proposedById: null, acceptedRunCount: 1 + (k % 5), buildCount: 1,
-        gainMedianNmPerV: gain, gainP25NmPerV: gain * 0.95, gainP75NmPerV: gain * 1.05, gainMinNmPerV: gain * 0.9, gainMaxNmPerV: gain * 1.1, hysteresisMedianPct: 5,
-      };
-    }));
+    await Part.bulkCreate(
+      Array.from({ length: Math.min(1000, GENERATED_PARTS - i) }, (_, k) => {
+        const gain = 5 + Math.random() * 300;
+        return {
+          category: pick(['bimorph', 'buzzer-disc', 'stack', 'tube'] as const),
+          name: `Generated part ${i + k}`,
+          salvageSource: 'bench generator',
+          material: 'PZT-5A',
+          lengthMm: 10 + (k % 30),
+          widthMm: null,
+          thicknessMm: 0.5,
+          outerDiameterMm: null,
+          wallMm: null,
+          layers: null,
+          capacitanceNf: 1,
+          safeVolts: 60,
+          notes: null,
+          status: 'accepted' as const,
+          proposedById: null,
+          acceptedRunCount: 1 + (k % 5),
+          buildCount: 1,
+          gainMedianNmPerV: gain,
+          gainP25NmPerV: gain * 0.95,
+          gainP75NmPerV: gain * 1.05,
+          gainMinNmPerV: gain * 0.9,
+          gainMaxNmPerV: gain * 1.1,
+          hysteresisMedianPct: 5,
+        };
+      }),
+    );
   }
   say(`MariaDB on :${dbPort} (${dir}), migrated, demo seeded, ${GENERATED_PARTS} generated parts`);
 
@@ -93,15 +130,31 @@ try {
   app = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     stdio: ['ignore', 'pipe', 'inherit'],
     env: {
-      ...inherited, NODE_ENV: 'production', LOG_LEVEL: 'warn', HOST: '127.0.0.1', PORT: String(port), PUBLIC_URL: origin,
-      OAUTH_STANDIN_PORT: String(oauth), SMTP_CATCHER_PORT: String(smtp), INBOX_PORT: String(inbox), RATE_LIMITS: 'false',
-      DB_HOST: db.host, DB_PORT: String(db.port), DB_NAME: db.name, DB_USER: db.user, DB_PASSWORD: db.password,
-      SESSION_SECRET: 'bench-load-session-secret-0123456789', UPLOADS_DIR: join(dir, 'uploads'),
+      ...inherited,
+      NODE_ENV: 'production',
+      LOG_LEVEL: 'warn',
+      HOST: '127.0.0.1',
+      PORT: String(port),
+      PUBLIC_URL: origin,
+      OAUTH_STANDIN_PORT: String(oauth),
+      SMTP_CATCHER_PORT: String(smtp),
+      INBOX_PORT: String(inbox),
+      RATE_LIMITS: 'false',
+      DB_HOST: db.host,
+      DB_PORT: String(db.port),
+      DB_NAME: db.name,
+      DB_USER: db.user,
+      DB_PASSWORD: db.password,
+      SESSION_SECRET: 'bench-load-session-secret-0123456789',
+      UPLOADS_DIR: join(dir, 'uploads'),
     },
   });
   await new Promise<void>((resolve, reject) => {
     let out = '';
-    app!.stdout!.on('data', (c: Buffer) => { out += c; if (out.includes('Scanwright is running')) resolve(); });
+    app!.stdout!.on('data', (c: Buffer) => {
+      out += c;
+      if (out.includes('Scanwright is running')) resolve();
+    });
     app!.once('exit', (c) => reject(new Error(`server exited (${c}) before listening:\n${out}`)));
   });
   // Keep the server's error log lines (pino level ≥ 50) to show after the table.
@@ -112,45 +165,113 @@ try {
   say(`server on ${origin} (DB_POOL_MAX ${process.env.DB_POOL_MAX ?? 10})`);
 
   // ---- sign in as a maker through the OAuth stand-in --------------------------------------------
-  const sid = (res: Response) => res.headers.getSetCookie().map((c) => c.split(';')[0]).find((c) => c.startsWith('scanwright.sid='));
+  const sid = (res: Response) =>
+    res.headers
+      .getSetCookie()
+      .map((c) => c.split(';')[0])
+      .find((c) => c.startsWith('scanwright.sid='));
   const start = await fetch(`${origin}/auth/github?login=${MAKER}`, { redirect: 'manual' });
   const atProvider = await fetch(start.headers.get('location')!, { redirect: 'manual' });
   const done = await fetch(atProvider.headers.get('location')!, { redirect: 'manual', headers: { cookie: sid(start) ?? '' } });
   const cookie = sid(done);
-  const session = await (await fetch(`${origin}/api/session`, { headers: { cookie: cookie ?? '' } })).json() as { user: { login: string } | null; csrfToken: string };
+  const session = (await (await fetch(`${origin}/api/session`, { headers: { cookie: cookie ?? '' } })).json()) as {
+    user: { login: string } | null;
+    csrfToken: string;
+  };
   if (session.user?.login !== MAKER || !cookie) throw new Error(`sign-in failed: ${JSON.stringify(session)}`);
   const maker = (await User.findOne({ where: { login: MAKER } }))!;
 
   // The maker's own builds and actuators to record runs on; listings of others to write to.
   const actuatorIds: number[] = [];
   for (let i = 0; i < 4; i++) {
-    const build = await Build.create({ ownerId: maker.id, title: `Bench build ${i}`, instrumentKind: 'profilometer', summary: 'Load benchmark.', body: '', stage: 'working', status: 'draft' });
-    actuatorIds.push((await Actuator.create({ buildId: build.id, partId: demoPart!.id, label: null, axis: 'X', drive: 'single', amplifier: null, maxVolts: 40, notes: null })).id);
+    const build = await Build.create({
+      ownerId: maker.id,
+      title: `Bench build ${i}`,
+      instrumentKind: 'profilometer',
+      summary: 'Load benchmark.',
+      body: '',
+      stage: 'working',
+      status: 'draft',
+    });
+    actuatorIds.push(
+      (
+        await Actuator.create({
+          buildId: build.id,
+          partId: demoPart!.id,
+          label: null,
+          axis: 'X',
+          drive: 'single',
+          amplifier: null,
+          maxVolts: 40,
+          notes: null,
+        })
+      ).id,
+    );
   }
-  const listingIds = (await Listing.findAll({ where: { status: 'open', hiddenAt: null, ownerId: { [Op.ne]: maker.id } }, attributes: ['id'] })).map((l) => l.id);
+  const listingIds = (
+    await Listing.findAll({ where: { status: 'open', hiddenAt: null, ownerId: { [Op.ne]: maker.id } }, attributes: ['id'] })
+  ).map((l) => l.id);
   const publishedBuildIds = (await Build.findAll({ where: { status: 'published' }, attributes: ['id'] })).map((b) => b.id);
   const partIds = (await Part.findAll({ where: { status: 'accepted' }, attributes: ['id'] })).map((p) => p.id);
   const points = demoSweep({ gainNmPerV: 90, loopFraction: 0.05, noiseNm: 0.5, maxVolts: 40, steps: 10, unit: 'nm', seed: 7 });
   const runBody = JSON.stringify({ points, voltageUnit: 'V', displacementUnit: 'nm', model: 'intercept', method: 'indicator' });
   const authed = { cookie, 'x-csrf-token': session.csrfToken, 'content-type': 'application/json' };
 
-  interface Route { name: string; connections: number; method: 'GET' | 'POST'; path: () => string; body?: () => string; headers?: Record<string, string>; rows?: () => Promise<number> }
+  interface Route {
+    name: string;
+    connections: number;
+    method: 'GET' | 'POST';
+    path: () => string;
+    body?: () => string;
+    headers?: Record<string, string>;
+    rows?: () => Promise<number>;
+  }
   const routes: Route[] = [
     { name: 'GET /api/builds', connections: 4, method: 'GET', path: () => '/api/builds' },
     { name: 'GET /api/builds/:id', connections: 4, method: 'GET', path: () => `/api/builds/${pick(publishedBuildIds)}` },
-    { name: 'GET /api/parts?gainMin&gainMax', connections: 4, method: 'GET', path: () => { const lo = 10 + Math.floor(Math.random() * 200); return `/api/parts?gainMin=${lo}&gainMax=${lo + 40}&sort=-gain`; } },
+    {
+      name: 'GET /api/parts?gainMin&gainMax',
+      connections: 4,
+      method: 'GET',
+      path: () => {
+        const lo = 10 + Math.floor(Math.random() * 200);
+        return `/api/parts?gainMin=${lo}&gainMax=${lo + 40}&sort=-gain`;
+      },
+    },
     { name: 'GET /api/parts/:id', connections: 4, method: 'GET', path: () => `/api/parts/${pick(partIds)}` },
     {
-      name: 'POST /api/actuators/:id/runs', connections: 2, method: 'POST', path: () => `/api/actuators/${pick(actuatorIds)}/runs`, body: () => runBody, headers: authed,
+      name: 'POST /api/actuators/:id/runs',
+      connections: 2,
+      method: 'POST',
+      path: () => `/api/actuators/${pick(actuatorIds)}/runs`,
+      body: () => runBody,
+      headers: authed,
       rows: () => CalibrationRun.count({ where: { actuatorId: actuatorIds } }),
     },
     {
-      name: 'POST /api/listings/:id/messages', connections: 2, method: 'POST', path: () => `/api/listings/${pick(listingIds)}/messages`, body: () => JSON.stringify({ body: `Still available? ${Math.random()}` }), headers: authed,
+      name: 'POST /api/listings/:id/messages',
+      connections: 2,
+      method: 'POST',
+      path: () => `/api/listings/${pick(listingIds)}/messages`,
+      body: () => JSON.stringify({ body: `Still available? ${Math.random()}` }),
+      headers: authed,
       rows: () => Message.count({ where: { senderId: maker.id } }),
     },
   ];
 
-  interface Figures { route: Route; sent: number; requests: number; rps: number; p50: number; p95: number; p99: number; max: number; errors: number; non2xx: number; statuses: Map<number, number> }
+  interface Figures {
+    route: Route;
+    sent: number;
+    requests: number;
+    rps: number;
+    p50: number;
+    p95: number;
+    p99: number;
+    max: number;
+    errors: number;
+    non2xx: number;
+    statuses: Map<number, number>;
+  }
   function run(route: Route, seconds: number): Promise<Figures> {
     return new Promise((resolve, reject) => {
       const latencies: number[] = [];
@@ -158,19 +279,37 @@ try {
       let sent = 0;
       // setupRequest and timeout are autocannon 9 options the shared type file leaves out.
       const options = {
-        url: origin, connections: route.connections, duration: seconds, pipelining: 1, timeout: 10,
-        requests: [{
-          method: route.method, headers: route.headers,
-          setupRequest: (req: Record<string, unknown>) => (sent++, { ...req, path: route.path(), ...(route.body ? { body: route.body() } : {}) }),
-        }],
+        url: origin,
+        connections: route.connections,
+        duration: seconds,
+        pipelining: 1,
+        timeout: 10,
+        requests: [
+          {
+            method: route.method,
+            headers: route.headers,
+            setupRequest: (req: Record<string, unknown>) => (
+              sent++,
+              { ...req, path: route.path(), ...(route.body ? { body: route.body() } : {}) }
+            ),
+          },
+        ],
       };
       const instance = autocannon(options as unknown as Parameters<typeof autocannon>[0], (err, result) => {
         if (err) return reject(err);
         latencies.sort((a, b) => a - b);
         resolve({
-          route, sent, requests: latencies.length, rps: latencies.length / seconds,
-          p50: quantileSorted(latencies, 0.5) ?? NaN, p95: quantileSorted(latencies, 0.95) ?? NaN, p99: quantileSorted(latencies, 0.99) ?? NaN,
-          max: latencies[latencies.length - 1] ?? NaN, errors: result.errors + result.timeouts, non2xx: result.non2xx, statuses,
+          route,
+          sent,
+          requests: latencies.length,
+          rps: latencies.length / seconds,
+          p50: quantileSorted(latencies, 0.5) ?? NaN,
+          p95: quantileSorted(latencies, 0.95) ?? NaN,
+          p99: quantileSorted(latencies, 0.99) ?? NaN,
+          max: latencies[latencies.length - 1] ?? NaN,
+          errors: result.errors + result.timeouts,
+          non2xx: result.non2xx,
+          statuses,
         });
       });
       instance.on('response', (_c: unknown, status: number, _b: number, ms: number) => {
@@ -208,13 +347,21 @@ try {
     totalLost += lost + unexplained;
     lines.push(
       `${f.route.name.padEnd(32)} ${pad(f.route.connections, 5)} ${pad(f.requests, 9)} ${pad(f.rps.toFixed(0), 7)} ${pad(f.p50.toFixed(1), 8)} ${pad(f.p95.toFixed(1), 8)} ${pad(f.p99.toFixed(1), 8)} ${pad(f.max.toFixed(0), 8)} ${pad(f.errors, 7)} ${pad(f.non2xx, 8)}` +
-      (f.route.rows ? ` ${pad(created, 6)} ${pad(added, 6)} ${pad(unanswered, 11)} ${pad(lost, 5)}` : ''),
+        (f.route.rows ? ` ${pad(created, 6)} ${pad(added, 6)} ${pad(unanswered, 11)} ${pad(lost, 5)}` : ''),
     );
     if (f.non2xx) lines.push(`  statuses: ${[...f.statuses].map(([s, n]) => `${s}×${n}`).join(' ')}`);
   });
   const all = figures.reduce((s, f) => s + f.requests, 0);
-  lines.push(`${'all routes'.padEnd(32)} ${pad(routes.reduce((s, r) => s + r.connections, 0), 5)} ${pad(all, 9)} ${pad((all / MEASURE_S).toFixed(0), 7)}`);
-  lines.push('', `errors (socket errors, timeouts, non-2xx): ${totalErrors}   lost writes: ${totalLost}   ${totalErrors === 0 && totalLost === 0 ? 'OK' : 'FAILED'}`);
+  lines.push(
+    `${'all routes'.padEnd(32)} ${pad(
+      routes.reduce((s, r) => s + r.connections, 0),
+      5,
+    )} ${pad(all, 9)} ${pad((all / MEASURE_S).toFixed(0), 7)}`,
+  );
+  lines.push(
+    '',
+    `errors (socket errors, timeouts, non-2xx): ${totalErrors}   lost writes: ${totalLost}   ${totalErrors === 0 && totalLost === 0 ? 'OK' : 'FAILED'}`,
+  );
   lines.push('lost = 201s without a new row, or new rows beyond 201s + unanswered (requests cut off when the window closed).');
   if (serverErrors.length) {
     const kinds = new Map<string, number>();

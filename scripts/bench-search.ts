@@ -19,10 +19,14 @@ const SIZES = [
 const SEARCH = '/api/parts?gainMin=80&gainMax=150&sort=-gain&pageSize=25';
 const DURATION_S = Number(process.env.BENCH_SECONDS ?? 10);
 
-const freePort = () => new Promise<number>((resolve) => {
-  const srv = createServer();
-  srv.listen(0, '127.0.0.1', () => { const { port } = srv.address() as AddressInfo; srv.close(() => resolve(port)); });
-});
+const freePort = () =>
+  new Promise<number>((resolve) => {
+    const srv = createServer();
+    srv.listen(0, '127.0.0.1', () => {
+      const { port } = srv.address() as AddressInfo;
+      srv.close(() => resolve(port));
+    });
+  });
 
 /** The real server in its own process (as in production), so the load generator does not share its event loop. */
 async function startServerProcess(database: string) {
@@ -31,22 +35,53 @@ async function startServerProcess(database: string) {
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     stdio: ['ignore', 'ignore', 'inherit'],
     env: {
-      ...process.env, NODE_ENV: 'production', LOG_LEVEL: 'silent', RATE_LIMITS: 'false', PORT: String(port), HOST: '127.0.0.1',
-      DB_HOST: config.db.host, DB_PORT: String(config.db.port), DB_NAME: config.db.name, DB_USER: config.db.user, DB_PASSWORD: config.db.password,
-      DB_POOL_MAX: '20', GITHUB_CLIENT_ID: 'bench', GITHUB_CLIENT_SECRET: 'bench', SMTP_URL: 'smtp://127.0.0.1:9',
+      ...process.env,
+      NODE_ENV: 'production',
+      LOG_LEVEL: 'silent',
+      RATE_LIMITS: 'false',
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      DB_HOST: config.db.host,
+      DB_PORT: String(config.db.port),
+      DB_NAME: config.db.name,
+      DB_USER: config.db.user,
+      DB_PASSWORD: config.db.password,
+      DB_POOL_MAX: '20',
+      GITHUB_CLIENT_ID: 'bench',
+      GITHUB_CLIENT_SECRET: 'bench',
+      SMTP_URL: 'smtp://127.0.0.1:9',
       SESSION_SECRET: 'bench-session-secret-bench-session-secret',
     },
   });
   const base = `http://127.0.0.1:${port}`;
   for (let i = 0; i < 200; i++) {
-    if (await fetch(`${base}/api/health`).then((r) => r.ok, () => false)) return { base, stop: () => new Promise((r) => { child.once('exit', r); child.kill('SIGTERM'); }) };
+    if (
+      await fetch(`${base}/api/health`).then(
+        (r) => r.ok,
+        () => false,
+      )
+    )
+      return {
+        base,
+        stop: () =>
+          new Promise((r) => {
+            child.once('exit', r);
+            child.kill('SIGTERM');
+          }),
+      };
     await sleep(100);
   }
   child.kill('SIGKILL');
   throw new Error('server did not start');
 }
 
-interface Figures { rps: number; p95: number; p50: number; errors: number; requests: number }
+interface Figures {
+  rps: number;
+  p95: number;
+  p50: number;
+  errors: number;
+  requests: number;
+}
 
 function measure(url: string): Promise<Figures> {
   return new Promise((resolve, reject) => {
@@ -74,7 +109,10 @@ try {
     const server = await startServerProcess(scaleDbName(size.parts));
     const base = server.base;
     await measure(`${base}${SEARCH}`); // warm-up pass, discarded
-    for (const [route, path] of [['health', '/api/health'], ['search', SEARCH]] as const) {
+    for (const [route, path] of [
+      ['health', '/api/health'],
+      ['search', SEARCH],
+    ] as const) {
       rows.push({ size: size.parts, route, ...(await measure(`${base}${path}`)) });
     }
     const sq = createSequelize(benchConfig(scaleDbName(size.parts)).db);
@@ -83,7 +121,9 @@ try {
     const count = countPartsSql(q);
     const [plan] = await sq.query(`EXPLAIN ${page.sql}`, { replacements: page.replacements });
     const [countPlan] = await sq.query(`EXPLAIN ${count.sql}`, { replacements: count.replacements });
-    process.stdout.write(`\nEXPLAIN at ${size.parts} parts (page):\n${JSON.stringify(plan, null, 1)}\nEXPLAIN (count):\n${JSON.stringify(countPlan, null, 1)}\n`);
+    process.stdout.write(
+      `\nEXPLAIN at ${size.parts} parts (page):\n${JSON.stringify(plan, null, 1)}\nEXPLAIN (count):\n${JSON.stringify(countPlan, null, 1)}\n`,
+    );
     await sq.close();
     await server.stop();
   }
@@ -92,7 +132,10 @@ try {
 }
 
 process.stdout.write('\nsize     route    req/s     p50 ms   p95 ms   errors\n');
-for (const r of rows) process.stdout.write(`${String(r.size).padEnd(8)} ${r.route.padEnd(8)} ${r.rps.toFixed(0).padStart(7)} ${r.p50.toFixed(2).padStart(8)} ${r.p95.toFixed(2).padStart(8)} ${String(r.errors).padStart(8)}\n`);
+for (const r of rows)
+  process.stdout.write(
+    `${String(r.size).padEnd(8)} ${r.route.padEnd(8)} ${r.rps.toFixed(0).padStart(7)} ${r.p50.toFixed(2).padStart(8)} ${r.p95.toFixed(2).padStart(8)} ${String(r.errors).padStart(8)}\n`,
+  );
 const at = (size: number, route: string) => rows.find((r) => r.size === size && r.route === route)!;
 for (const s of SIZES) {
   const ratio = at(s.parts, 'search').rps / at(s.parts, 'health').rps;

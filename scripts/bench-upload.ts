@@ -15,11 +15,15 @@ const TIMED_RUNS = 7;
 
 /** Smooth gradient plus gaussian sensor noise: compresses like a real photo rather than a flat fill. */
 async function cameraLikeJpeg(): Promise<Buffer> {
-  const gradient = await sharp(Buffer.from([40, 90, 150, 200, 170, 120, 230, 210, 90, 60, 130, 70]), { raw: { width: 2, height: 2, channels: 3 } })
+  const gradient = await sharp(Buffer.from([40, 90, 150, 200, 170, 120, 230, 210, 90, 60, 130, 70]), {
+    raw: { width: 2, height: 2, channels: 3 },
+  })
     .resize(WIDTH, HEIGHT, { kernel: 'linear' })
     .png()
     .toBuffer();
-  const noise = await sharp({ create: { width: WIDTH, height: HEIGHT, channels: 3, background: '#808080', noise: { type: 'gaussian', mean: 128, sigma: 14 } } })
+  const noise = await sharp({
+    create: { width: WIDTH, height: HEIGHT, channels: 3, background: '#808080', noise: { type: 'gaussian', mean: 128, sigma: 14 } },
+  })
     .png()
     .toBuffer();
   return sharp(gradient)

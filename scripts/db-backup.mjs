@@ -31,15 +31,24 @@ export function requireRunningServer({ socket, database }) {
   if (!existsSync(socket)) fail(`MariaDB is not running: there is no socket at ${socket}.\n${hint}`);
   const ping = spawnSync('mariadb-admin', [...rootArgs(socket), 'ping'], { encoding: 'utf8' });
   if (ping.error) fail(`Cannot run mariadb-admin (${ping.error.message}); install the Debian package mariadb-client.`);
-  if (ping.status !== 0 && /access denied/i.test(ping.stderr)) fail(`MariaDB answers on ${socket} but refuses root over its socket: run this as the system user that runs npm start (root).`);
+  if (ping.status !== 0 && /access denied/i.test(ping.stderr))
+    fail(`MariaDB answers on ${socket} but refuses root over its socket: run this as the system user that runs npm start (root).`);
   if (ping.status !== 0) fail(`MariaDB is not running or does not answer on ${socket}:\n${(ping.stderr || ping.stdout).trim()}\n${hint}`);
-  const has = spawnSync('mariadb', [...rootArgs(socket), '--batch', '--skip-column-names', '-e', `SHOW DATABASES LIKE '${database.replace(/'/g, "''")}'`], { encoding: 'utf8' });
+  const has = spawnSync(
+    'mariadb',
+    [...rootArgs(socket), '--batch', '--skip-column-names', '-e', `SHOW DATABASES LIKE '${database.replace(/'/g, "''")}'`],
+    { encoding: 'utf8' },
+  );
   if (has.status !== 0) fail(`Could not query MariaDB on ${socket}:\n${has.stderr.trim()}`);
   return has.stdout.trim() === database;
 }
 
 /** 2026-12-01T23-30-05Z: sortable and safe in file names. */
-const stamp = (d = new Date()) => d.toISOString().replace(/\.\d+Z$/, 'Z').replace(/:/g, '-');
+const stamp = (d = new Date()) =>
+  d
+    .toISOString()
+    .replace(/\.\d+Z$/, 'Z')
+    .replace(/:/g, '-');
 
 /**
  * Dump `database` to `<backupDir>/<prefix><database>-<time>.sql` (written to a .partial file and
@@ -51,14 +60,28 @@ export async function backup({ socket, database, backupDir }, prefix = '') {
   const partial = `${file}.partial`;
   const out = openSync(partial, 'w', 0o600);
   const args = [
-    ...rootArgs(socket), '--single-transaction', '--routines', '--triggers', '--events', '--hex-blob',
-    '--tz-utc', '--add-drop-table', '--quick', '--skip-dump-date', database,
+    ...rootArgs(socket),
+    '--single-transaction',
+    '--routines',
+    '--triggers',
+    '--events',
+    '--hex-blob',
+    '--tz-utc',
+    '--add-drop-table',
+    '--quick',
+    '--skip-dump-date',
+    database,
   ];
   const code = await new Promise((done) => {
     const child = spawn('mariadb-dump', args, { stdio: ['ignore', out, 'pipe'] });
     let err = '';
-    child.stderr.on('data', (c) => { err += c; });
-    child.on('error', (e) => { err += e.message; done(-1); });
+    child.stderr.on('data', (c) => {
+      err += c;
+    });
+    child.on('error', (e) => {
+      err += e.message;
+      done(-1);
+    });
     child.on('exit', (c) => {
       if (c !== 0) process.stderr.write(err);
       done(c ?? 1);
@@ -79,7 +102,9 @@ async function main() {
   try {
     const file = await backup(target);
     const kb = (statSync(file).size / 1024).toFixed(1);
-    process.stdout.write(`Backed up database \`${target.database}\` to ${file} (${kb} KiB).\nRestore it with: npm run db:restore ${file}\n`);
+    process.stdout.write(
+      `Backed up database \`${target.database}\` to ${file} (${kb} KiB).\nRestore it with: npm run db:restore ${file}\n`,
+    );
   } catch (err) {
     fail(err instanceof Error ? err.message : String(err));
   }

@@ -16,8 +16,13 @@ const q = (name) => `\`${name.replace(/`/g, '``')}\``;
 if (!fileArg) {
   let listing = '';
   if (existsSync(target.backupDir)) {
-    const files = readdirSync(target.backupDir).filter((f) => f.endsWith('.sql')).sort().reverse().slice(0, 10);
-    if (files.length) listing = `\nBackups in ${target.backupDir} (newest first):\n${files.map((f) => `  ${join(target.backupDir, f)}`).join('\n')}\n`;
+    const files = readdirSync(target.backupDir)
+      .filter((f) => f.endsWith('.sql'))
+      .sort()
+      .reverse()
+      .slice(0, 10);
+    if (files.length)
+      listing = `\nBackups in ${target.backupDir} (newest first):\n${files.map((f) => `  ${join(target.backupDir, f)}`).join('\n')}\n`;
   }
   fail(`Refusing to restore without a file.\nUsage: npm run db:restore FILE [--yes]   (FILE from npm run db:backup)\n${listing}`, 2);
 }
@@ -32,17 +37,27 @@ const fd = openSync(file, 'r');
 readSync(fd, head, 0, head.length, 0);
 readSync(fd, tail, 0, tail.length, Math.max(0, statSync(file).size - tail.length));
 closeSync(fd);
-if (!/^(\/\*M!999999\\- enable the sandbox mode \*\/ *\n)?-- (MariaDB|MySQL) dump/.test(head.toString('utf8'))) fail(`${file} does not look like a mariadb-dump file; nothing was changed.`);
-if (!tail.toString('utf8').includes('-- Dump completed')) fail(`${file} is incomplete (no "-- Dump completed" at the end); nothing was changed.`);
+if (!/^(\/\*M!999999\\- enable the sandbox mode \*\/ *\n)?-- (MariaDB|MySQL) dump/.test(head.toString('utf8')))
+  fail(`${file} does not look like a mariadb-dump file; nothing was changed.`);
+if (!tail.toString('utf8').includes('-- Dump completed'))
+  fail(`${file} is incomplete (no "-- Dump completed" at the end); nothing was changed.`);
 
 const exists = requireRunningServer(target);
 const sql = (statement, database = '') => {
-  const r = spawnSync('mariadb', [...rootArgs(target.socket), '--batch', '--skip-column-names', '-e', statement, ...(database ? [database] : [])], { encoding: 'utf8' });
+  const r = spawnSync(
+    'mariadb',
+    [...rootArgs(target.socket), '--batch', '--skip-column-names', '-e', statement, ...(database ? [database] : [])],
+    { encoding: 'utf8' },
+  );
   if (r.status !== 0) fail(`MariaDB refused: ${r.stderr.trim()}`);
   return r.stdout.trim();
 };
 const tableCounts = () => {
-  const tables = sql(`SELECT TABLE_NAME FROM information_schema.TABLES WHERE TABLE_SCHEMA = '${target.database.replace(/'/g, "''")}' AND TABLE_TYPE = 'BASE TABLE' ORDER BY TABLE_NAME`).split('\n').filter(Boolean);
+  const tables = sql(
+    `SELECT TABLE_NAME FROM information_schema.TABLES WHERE TABLE_SCHEMA = '${target.database.replace(/'/g, "''")}' AND TABLE_TYPE = 'BASE TABLE' ORDER BY TABLE_NAME`,
+  )
+    .split('\n')
+    .filter(Boolean);
   if (!tables.length) return [];
   const counts = sql(tables.map((t) => `SELECT COUNT(*) FROM ${q(t)}`).join(' UNION ALL '), target.database).split('\n');
   return tables.map((t, i) => `${t} ${counts[i]}`);
@@ -51,11 +66,11 @@ const tableCounts = () => {
 const current = exists ? tableCounts() : [];
 process.stdout.write(
   `This will OVERWRITE database ${q(target.database)} on ${target.socket}\n` +
-  `with the backup ${file} (${(statSync(file).size / 1024).toFixed(1)} KiB, written ${statSync(file).mtime.toISOString()}).\n` +
-  (current.length
-    ? `Everything in it now is replaced (table rows):\n  ${current.join('\n  ')}\n`
-    : 'The database is empty or missing now.\n') +
-  'Sign-ins made after the backup are lost; a running app sees errors for the few seconds the restore takes.\n',
+    `with the backup ${file} (${(statSync(file).size / 1024).toFixed(1)} KiB, written ${statSync(file).mtime.toISOString()}).\n` +
+    (current.length
+      ? `Everything in it now is replaced (table rows):\n  ${current.join('\n  ')}\n`
+      : 'The database is empty or missing now.\n') +
+    'Sign-ins made after the backup are lost; a running app sees errors for the few seconds the restore takes.\n',
 );
 
 if (!yes) {
@@ -75,12 +90,20 @@ if (exists && current.length) {
   }
 }
 
-sql(`DROP DATABASE IF EXISTS ${q(target.database)}; CREATE DATABASE ${q(target.database)} CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`);
+sql(
+  `DROP DATABASE IF EXISTS ${q(target.database)}; CREATE DATABASE ${q(target.database)} CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`,
+);
 const code = await new Promise((done) => {
   const input = openSync(file, 'r');
   const child = spawn('mariadb', [...rootArgs(target.socket), '--binary-mode', target.database], { stdio: [input, 'inherit', 'inherit'] });
   child.on('error', () => done(-1));
-  child.on('exit', (c) => { closeSync(input); done(c ?? 1); });
+  child.on('exit', (c) => {
+    closeSync(input);
+    done(c ?? 1);
+  });
 });
-if (code !== 0) fail(`Loading ${file} failed (exit ${code}); the database is incomplete. Restore again from a good backup (the pre-restore one above, if any).`);
+if (code !== 0)
+  fail(
+    `Loading ${file} failed (exit ${code}); the database is incomplete. Restore again from a good backup (the pre-restore one above, if any).`,
+  );
 process.stdout.write(`Restored ${q(target.database)} from ${file}:\n  ${tableCounts().join('\n  ')}\n`);

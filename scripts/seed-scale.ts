@@ -7,7 +7,13 @@ import { summarize } from '../shared/stats/quantiles.ts';
 import { seededRandom } from '../server/db/seed/demo-points.ts';
 import { benchConfig, scaleDbName, startBenchDb } from './lib/bench-db.ts';
 
-const { values } = parseArgs({ options: { parts: { type: 'string', default: '10000' }, runs: { type: 'string', default: '100000' }, force: { type: 'boolean', default: false } } });
+const { values } = parseArgs({
+  options: {
+    parts: { type: 'string', default: '10000' },
+    runs: { type: 'string', default: '100000' },
+    force: { type: 'boolean', default: false },
+  },
+});
 const nParts = Number(values.parts);
 const nRuns = Number(values.runs);
 if (!(nParts > 0 && nRuns >= 0)) throw new Error('--parts and --runs must be positive numbers');
@@ -31,11 +37,21 @@ export async function seedScale(parts: number, runs: number, force = false): Pro
     const insert = async (table: string, cols: string[], rows: unknown[][]) => {
       for (let i = 0; i < rows.length; i += 2000) {
         const chunk = rows.slice(i, i + 2000);
-        await sq.query(`INSERT INTO ${table} (${cols.join(',')}) VALUES ${chunk.map((r) => `(${r.map(() => '?').join(',')})`).join(',')}`, { replacements: chunk.flat() });
+        await sq.query(`INSERT INTO ${table} (${cols.join(',')}) VALUES ${chunk.map((r) => `(${r.map(() => '?').join(',')})`).join(',')}`, {
+          replacements: chunk.flat(),
+        });
       }
     };
-    await insert('users', ['id', 'github_id', 'login', 'role', 'created_at', 'updated_at'], Array.from({ length: makers }, (_, i) => [i + 1, `scale-${i}`, `scale-maker-${i}`, 'maker', now, now]));
-    await insert('builds', ['id', 'owner_id', 'title', 'instrument_kind', 'summary', 'body', 'status', 'created_at', 'updated_at'], Array.from({ length: makers }, (_, i) => [i + 1, i + 1, `Scale build ${i}`, 'other', 'generated', '', 'published', now, now]));
+    await insert(
+      'users',
+      ['id', 'github_id', 'login', 'role', 'created_at', 'updated_at'],
+      Array.from({ length: makers }, (_, i) => [i + 1, `scale-${i}`, `scale-maker-${i}`, 'maker', now, now]),
+    );
+    await insert(
+      'builds',
+      ['id', 'owner_id', 'title', 'instrument_kind', 'summary', 'body', 'status', 'created_at', 'updated_at'],
+      Array.from({ length: makers }, (_, i) => [i + 1, i + 1, `Scale build ${i}`, 'other', 'generated', '', 'published', now, now]),
+    );
     const cats = ['bimorph', 'buzzer-disc', 'stack', 'tube', 'shear-plate', 'voice-coil', 'other'];
     const perPart = Math.floor(runs / parts);
     let extra = runs - perPart * parts;
@@ -43,7 +59,30 @@ export async function seedScale(parts: number, runs: number, force = false): Pro
     let runRows: unknown[][] = [];
     let runId = 1;
     const flushRuns = async () => {
-      await insert('calibration_runs', ['id', 'actuator_id', 'build_id', 'part_id', 'owner_id', 'status', 'method', 'voltage_unit', 'displacement_unit', 'model', 'points_json', 'point_count', 'gain_nm_per_v', 'intercept_nm', 'span_nm', 'hysteresis_pct_fs', 'created_at', 'updated_at'], runRows);
+      await insert(
+        'calibration_runs',
+        [
+          'id',
+          'actuator_id',
+          'build_id',
+          'part_id',
+          'owner_id',
+          'status',
+          'method',
+          'voltage_unit',
+          'displacement_unit',
+          'model',
+          'points_json',
+          'point_count',
+          'gain_nm_per_v',
+          'intercept_nm',
+          'span_nm',
+          'hysteresis_pct_fs',
+          'created_at',
+          'updated_at',
+        ],
+        runRows,
+      );
       runRows = [];
     };
     const actuatorRows: unknown[][] = [];
@@ -59,13 +98,74 @@ export async function seedScale(parts: number, runs: number, force = false): Pro
         const accepted = rand() < 0.8;
         const gain = center * (0.85 + rand() * 0.3);
         const h = 2 + rand() * 12;
-        if (accepted) { gains.push(gain); hyst.push(h); buildsOfPart.add(builder); }
-        runRows.push([runId++, p, builder, p, builder, accepted ? 'accepted' : 'pending', 'indicator', 'V', 'nm', 'intercept', '[]', 18, gain, 0, gain * 40, h, now, now]);
+        if (accepted) {
+          gains.push(gain);
+          hyst.push(h);
+          buildsOfPart.add(builder);
+        }
+        runRows.push([
+          runId++,
+          p,
+          builder,
+          p,
+          builder,
+          accepted ? 'accepted' : 'pending',
+          'indicator',
+          'V',
+          'nm',
+          'intercept',
+          '[]',
+          18,
+          gain,
+          0,
+          gain * 40,
+          h,
+          now,
+          now,
+        ]);
       }
       const g = summarize(gains);
-      partRows.push([p, cats[p % cats.length], `Generated part ${p}`, 'generated', p % 4 === 0 ? null : 20 + (p % 30) * 10, 'accepted', gains.length, buildsOfPart.size, g.median, g.p25, g.p75, g.min, g.max, summarize(hyst).median, now, now]);
+      partRows.push([
+        p,
+        cats[p % cats.length],
+        `Generated part ${p}`,
+        'generated',
+        p % 4 === 0 ? null : 20 + (p % 30) * 10,
+        'accepted',
+        gains.length,
+        buildsOfPart.size,
+        g.median,
+        g.p25,
+        g.p75,
+        g.min,
+        g.max,
+        summarize(hyst).median,
+        now,
+        now,
+      ]);
       if (partRows.length >= 5000 || p === parts) {
-        await insert('parts', ['id', 'category', 'name', 'salvage_source', 'safe_volts', 'status', 'accepted_run_count', 'build_count', 'gain_median_nm_per_v', 'gain_p25_nm_per_v', 'gain_p75_nm_per_v', 'gain_min_nm_per_v', 'gain_max_nm_per_v', 'hysteresis_median_pct', 'created_at', 'updated_at'], partRows.splice(0));
+        await insert(
+          'parts',
+          [
+            'id',
+            'category',
+            'name',
+            'salvage_source',
+            'safe_volts',
+            'status',
+            'accepted_run_count',
+            'build_count',
+            'gain_median_nm_per_v',
+            'gain_p25_nm_per_v',
+            'gain_p75_nm_per_v',
+            'gain_min_nm_per_v',
+            'gain_max_nm_per_v',
+            'hysteresis_median_pct',
+            'created_at',
+            'updated_at',
+          ],
+          partRows.splice(0),
+        );
         await insert('actuators', ['id', 'build_id', 'part_id', 'axis', 'drive', 'created_at', 'updated_at'], actuatorRows.splice(0));
         await flushRuns();
       }

@@ -47,7 +47,12 @@ process.on('SIGTERM', () => shutdown(0));
 try {
   if (initDataDir(dbDir)) console.log(`Initialised MariaDB data directory in ${dbDir}`);
   mariadb = await startServer(dbDir, dbPort);
-  mariadb.on('exit', (c) => { if (!stopping) { console.error(`MariaDB exited unexpectedly (${c})`); shutdown(1); } });
+  mariadb.on('exit', (c) => {
+    if (!stopping) {
+      console.error(`MariaDB exited unexpectedly (${c})`);
+      shutdown(1);
+    }
+  });
   ensureDatabase(dbDir, { database: env.DB_NAME, user: env.DB_USER, password: env.DB_PASSWORD });
 
   const prepare = spawnSync(process.execPath, ['--import', 'tsx', 'server/cli/prepare.ts'], { stdio: 'inherit', env });
@@ -60,7 +65,9 @@ try {
   }
 
   app = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], { stdio: 'inherit', env });
-  app.on('exit', (code) => { if (!stopping) shutdown(code ?? 1); });
+  app.on('exit', (code) => {
+    if (!stopping) shutdown(code ?? 1);
+  });
 } catch (err) {
   console.error(err instanceof Error ? err.message : err);
   await shutdown(1);

@@ -12,14 +12,23 @@ import { clientBuildIsStale } from './lib/paths.mjs';
 ensureDebianPackages({ chromium: true });
 ensureNodeModules();
 
-const freePort = () => new Promise((resolve, reject) => {
-  const s = createServer();
-  s.once('error', reject);
-  s.listen(0, '127.0.0.1', () => { const { port } = s.address(); s.close(() => resolve(port)); });
-});
+const freePort = () =>
+  new Promise((resolve, reject) => {
+    const s = createServer();
+    s.once('error', reject);
+    s.listen(0, '127.0.0.1', () => {
+      const { port } = s.address();
+      s.close(() => resolve(port));
+    });
+  });
 
 let base = tmpdir();
-try { accessSync('/dev/shm', constants.W_OK); base = '/dev/shm'; } catch { /* use tmpdir */ }
+try {
+  accessSync('/dev/shm', constants.W_OK);
+  base = '/dev/shm';
+} catch {
+  /* use tmpdir */
+}
 const dir = mkdtempSync(join(base, 'scanwright-test-'));
 let mariadb = null;
 let status = 1;
@@ -31,12 +40,17 @@ async function cleanup() {
   await stopServer(mariadb);
   rmSync(dir, { recursive: true, force: true });
 }
-for (const sig of ['SIGINT', 'SIGTERM']) process.on(sig, async () => { await cleanup(); process.exit(130); });
+for (const sig of ['SIGINT', 'SIGTERM'])
+  process.on(sig, async () => {
+    await cleanup();
+    process.exit(130);
+  });
 
-const runAsync = (cmd, args, env) => new Promise((resolve) => {
-  const child = spawn(cmd, args, { stdio: 'inherit', env });
-  child.on('exit', (code) => resolve(code ?? 1));
-});
+const runAsync = (cmd, args, env) =>
+  new Promise((resolve) => {
+    const child = spawn(cmd, args, { stdio: 'inherit', env });
+    child.on('exit', (code) => resolve(code ?? 1));
+  });
 
 try {
   const port = await freePort();
@@ -48,7 +62,11 @@ try {
     ...process.env,
     NODE_ENV: 'test',
     TZ: 'UTC',
-    DB_HOST: '127.0.0.1', DB_PORT: String(port), DB_NAME: db.database, DB_USER: db.user, DB_PASSWORD: db.password,
+    DB_HOST: '127.0.0.1',
+    DB_PORT: String(port),
+    DB_NAME: db.database,
+    DB_USER: db.user,
+    DB_PASSWORD: db.password,
     MARIADB_SOCKET: join(dir, 'mysqld.sock'),
     // Live-app browser tests share one uploads folder (demo pictures seeded once); removed with the run.
     TEST_UPLOADS_DIR: join(dir, 'uploads'),
@@ -70,7 +88,11 @@ try {
     typesOk = spawnSync('npx', ['tsc', '--noEmit', '-p', 'tsconfig.json'], { stdio: 'inherit', env }).status === 0;
     console.log(`typecheck: ${typesOk ? 'ok' : 'FAILED'}`);
   }
-  status = await runAsync('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', '--outputFile.json=test-output/vitest.json', ...extra], env);
+  status = await runAsync(
+    'npx',
+    ['vitest', 'run', '--reporter=default', '--reporter=json', '--outputFile.json=test-output/vitest.json', ...extra],
+    env,
+  );
   if (!typesOk) status = status || 1;
   if (existsSync('test-output/vitest.json')) {
     const r = JSON.parse(readFileSync('test-output/vitest.json', 'utf8'));

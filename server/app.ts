@@ -71,10 +71,11 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   // database failure there reaches the final handler, which cuts that finished response off.
   // An expiry not extended once is harmless, so the failure is logged and dropped.
   const touch = store.touch.bind(store);
-  store.touch = (sid, data, done) => touch(sid, data, (err?: unknown) => {
-    if (err) log.warn({ err }, 'session touch failed');
-    done?.();
-  });
+  store.touch = (sid, data, done) =>
+    touch(sid, data, (err?: unknown) => {
+      if (err) log.warn({ err }, 'session touch failed');
+      done?.();
+    });
   const https = config.publicUrl.startsWith('https://');
 
   const app = express();
@@ -126,10 +127,15 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
 
   // Workbench calculations are open to visitors, and reading a body of up to 12 MB of points costs
   // seconds of CPU: large ones are limited per client before the body is read (normal use sends kilobytes).
-  app.use('/api/workbench', limiter(config.rateLimits, {
-    windowMs: 60_000, limit: 10, what: 'large workbench calculations (over 1 MB)',
-    skip: (req) => req.method !== 'POST' || Number(req.headers['content-length'] ?? Infinity) <= 1_000_000,
-  }));
+  app.use(
+    '/api/workbench',
+    limiter(config.rateLimits, {
+      windowMs: 60_000,
+      limit: 10,
+      what: 'large workbench calculations (over 1 MB)',
+      skip: (req) => req.method !== 'POST' || Number(req.headers['content-length'] ?? Infinity) <= 1_000_000,
+    }),
+  );
   app.use(['/api/workbench', '/api/actuators'], jsonBody('12mb'));
   app.use(jsonBody('1mb'));
   const sessions = session({

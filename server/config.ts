@@ -63,8 +63,16 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env, overrides: P
     sessionSecret: e.SESSION_SECRET,
     github: standIn
       ? { clientId: 'scanwright-local', clientSecret: 'scanwright-local-secret', baseUrl: standInBase, apiUrl: standInBase, standIn }
-      : { clientId: e.GITHUB_CLIENT_ID!, clientSecret: e.GITHUB_CLIENT_SECRET!, baseUrl: 'https://github.com', apiUrl: 'https://api.github.com', standIn },
-    adminLogins: e.ADMIN_LOGINS.split(',').map((s) => s.trim().toLowerCase()).filter(Boolean),
+      : {
+          clientId: e.GITHUB_CLIENT_ID!,
+          clientSecret: e.GITHUB_CLIENT_SECRET!,
+          baseUrl: 'https://github.com',
+          apiUrl: 'https://api.github.com',
+          standIn,
+        },
+    adminLogins: e.ADMIN_LOGINS.split(',')
+      .map((s) => s.trim().toLowerCase())
+      .filter(Boolean),
     smtpUrl: e.SMTP_URL ?? null,
     mailFrom: e.MAIL_FROM,
     uploadsDir: e.UPLOADS_DIR,

@@ -10,20 +10,32 @@ export class AppError extends Error {
   }
 }
 export class ValidationError extends AppError {
-  constructor(message: string, details?: unknown) { super(400, 'validation_failed', message, details); }
+  constructor(message: string, details?: unknown) {
+    super(400, 'validation_failed', message, details);
+  }
 }
 export class UnauthorizedError extends AppError {
-  constructor(message = 'Sign in to do this.') { super(401, 'unauthorized', message); }
+  constructor(message = 'Sign in to do this.') {
+    super(401, 'unauthorized', message);
+  }
 }
 export class ForbiddenError extends AppError {
-  constructor(message = 'You are not allowed to do this.', code = 'forbidden') { super(403, code, message); }
+  constructor(message = 'You are not allowed to do this.', code = 'forbidden') {
+    super(403, code, message);
+  }
 }
 export class NotFoundError extends AppError {
-  constructor(message = 'Not found.') { super(404, 'not_found', message); }
+  constructor(message = 'Not found.') {
+    super(404, 'not_found', message);
+  }
 }
 export class ConflictError extends AppError {
-  constructor(message: string, code = 'conflict') { super(409, code, message); }
+  constructor(message: string, code = 'conflict') {
+    super(409, code, message);
+  }
 }
 export class ServiceUnavailableError extends AppError {
-  constructor(message = 'The database is not reachable; try again shortly.') { super(503, 'db_unavailable', message); }
+  constructor(message = 'The database is not reachable; try again shortly.') {
+    super(503, 'db_unavailable', message);
+  }
 }

@@ -27,7 +27,11 @@ const server: Server = handle.app.listen(config.port, config.host, () => {
     `  App          ${config.publicUrl}`,
     oauth ? `  Sign-in      local stand-in at ${oauth.url} (GitHub when GITHUB_CLIENT_ID/SECRET are set)` : '  Sign-in      GitHub',
     catcher ? `  Mail inbox   ${catcher.inboxUrl}` : `  Mail         ${config.smtpUrl}`,
-    oauth ? `  Demo logins  ${DEMO_ACCOUNTS.slice(0, 3).map((a) => a.login).join(', ')} (+ ${DEMO_ACCOUNTS.length - 3} demo makers)` : '',
+    oauth
+      ? `  Demo logins  ${DEMO_ACCOUNTS.slice(0, 3)
+          .map((a) => a.login)
+          .join(', ')} (+ ${DEMO_ACCOUNTS.length - 3} demo makers)`
+      : '',
     '  Stop         Ctrl-C',
     '',
   ].filter((l) => l !== '');
@@ -44,7 +48,10 @@ async function shutdown(signal: string) {
   server.close();
   server.closeIdleConnections();
   log.info({ signal }, 'shutting down');
-  const force = setTimeout(() => { log.error('forced exit after 10 s'); process.exit(1); }, 10_000);
+  const force = setTimeout(() => {
+    log.error('forced exit after 10 s');
+    process.exit(1);
+  }, 10_000);
   force.unref();
   await closed;
   await handle.close();

@@ -22,14 +22,26 @@ type Rule = (actor: Actor, resource?: Resource) => boolean;
 const RANK: Record<Role, number> = { maker: 1, moderator: 2, admin: 3 };
 
 /** At least this role (admins can do what moderators can, moderators what makers can). */
-export const hasRole = (role: Role): Rule => (actor) => RANK[actor.role] >= RANK[role];
+export const hasRole =
+  (role: Role): Rule =>
+  (actor) =>
+    RANK[actor.role] >= RANK[role];
 /** The actor owns the resource. */
 export const isOwner: Rule = (actor, resource) => resource?.ownerId != null && resource.ownerId === actor.id;
 /** The resource is the actor's own account. */
 export const isSelf: Rule = (actor, resource) => resource?.userId === actor.id;
-export const and = (...rules: Rule[]): Rule => (a, r) => rules.every((rule) => rule(a, r));
-export const or = (...rules: Rule[]): Rule => (a, r) => rules.some((rule) => rule(a, r));
-export const not = (rule: Rule): Rule => (a, r) => !rule(a, r);
+export const and =
+  (...rules: Rule[]): Rule =>
+  (a, r) =>
+    rules.every((rule) => rule(a, r));
+export const or =
+  (...rules: Rule[]): Rule =>
+  (a, r) =>
+    rules.some((rule) => rule(a, r));
+export const not =
+  (rule: Rule): Rule =>
+  (a, r) =>
+    !rule(a, r);
 const active: Rule = (actor) => !actor.suspended;
 
 const rules = {

@@ -72,7 +72,6 @@ export function convertDisplacement(value: number, from: DisplacementUnit, to: D
   return from === to ? value : fromNm(toNm(value, from), to);
 }
 
-
 /** Gain units a gain may be written in (nm/V, µm/V, Å/V, µin/V). */
 export const gainUnits = ['nm/V', 'um/V', 'angstrom/V', 'uin/V'] as const;
 
@@ -82,7 +81,12 @@ export type GainUnit = (typeof gainUnits)[number];
 /** Human labels for gain units. */
 export const gainUnitLabels: Readonly<Record<GainUnit, string>> = { 'nm/V': 'nm/V', 'um/V': 'µm/V', 'angstrom/V': 'Å/V', 'uin/V': 'µin/V' };
 
-const gainDisplacement: Readonly<Record<GainUnit, DisplacementUnit>> = { 'nm/V': 'nm', 'um/V': 'um', 'angstrom/V': 'angstrom', 'uin/V': 'uin' };
+const gainDisplacement: Readonly<Record<GainUnit, DisplacementUnit>> = {
+  'nm/V': 'nm',
+  'um/V': 'um',
+  'angstrom/V': 'angstrom',
+  'uin/V': 'uin',
+};
 
 /** Every unit the converter knows, of any kind. */
 export const convertibleUnits = [...displacementUnits, ...voltageUnits, ...gainUnits] as const;
@@ -129,8 +133,16 @@ export function convertQuantity(value: number, from: ConvertibleUnit, to: Conver
 
 /** Spellings people type for a unit, mapped to its key ("µm" → "um", "Å/V" → "angstrom/V"). */
 const unitAliases: Readonly<Record<string, ConvertibleUnit>> = {
-  'µm': 'um', 'μm': 'um', 'Å': 'angstrom', 'µin': 'uin', 'μin': 'uin',
-  'µm/V': 'um/V', 'μm/V': 'um/V', 'Å/V': 'angstrom/V', 'µin/V': 'uin/V', 'μin/V': 'uin/V',
+  µm: 'um',
+  μm: 'um',
+  Å: 'angstrom',
+  µin: 'uin',
+  μin: 'uin',
+  'µm/V': 'um/V',
+  'μm/V': 'um/V',
+  'Å/V': 'angstrom/V',
+  'µin/V': 'uin/V',
+  'μin/V': 'uin/V',
 };
 
 /** A unit as typed, turned into its key when it is a known spelling; anything else passes unchanged (for zod to judge). */

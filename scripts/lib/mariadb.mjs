@@ -25,7 +25,14 @@ export function initDataDir(dir) {
   mkdirSync(data, { recursive: true });
   const r = spawnSync(
     'mariadb-install-db',
-    ['--no-defaults', '--user=root', `--datadir=${data}`, '--auth-root-authentication-method=socket', '--skip-test-db', '--skip-name-resolve'],
+    [
+      '--no-defaults',
+      '--user=root',
+      `--datadir=${data}`,
+      '--auth-root-authentication-method=socket',
+      '--skip-test-db',
+      '--skip-name-resolve',
+    ],
     { encoding: 'utf8' },
   );
   if (r.status !== 0) throw new Error(`mariadb-install-db failed:\n${r.stdout}\n${r.stderr}`);
@@ -49,23 +56,40 @@ export async function startServer(dir, port, { fast = false } = {}) {
     if (old && pidAlive(old)) throw new Error(`MariaDB already running from ${dir} (pid ${old}); stop it first`);
   }
   const args = [
-    '--no-defaults', '--user=root', `--datadir=${join(dir, 'data')}`, '--skip-networking=0',
-    '--bind-address=127.0.0.1', `--port=${port}`, `--socket=${join(dir, 'mysqld.sock')}`,
-    `--pid-file=${pidFile}`, `--log-error=${join(dir, 'error.log')}`, '--skip-name-resolve',
-    '--character-set-server=utf8mb4', '--collation-server=utf8mb4_unicode_ci', '--max-connections=300',
+    '--no-defaults',
+    '--user=root',
+    `--datadir=${join(dir, 'data')}`,
+    '--skip-networking=0',
+    '--bind-address=127.0.0.1',
+    `--port=${port}`,
+    `--socket=${join(dir, 'mysqld.sock')}`,
+    `--pid-file=${pidFile}`,
+    `--log-error=${join(dir, 'error.log')}`,
+    '--skip-name-resolve',
+    '--character-set-server=utf8mb4',
+    '--collation-server=utf8mb4_unicode_ci',
+    '--max-connections=300',
   ];
   if (fast) args.push('--innodb-flush-log-at-trx-commit=2', '--innodb-doublewrite=0', '--innodb-buffer-pool-size=64M');
   const child = spawn('mariadbd', args, { stdio: 'ignore', detached: false });
   let exited = null;
-  child.on('exit', (code) => { exited = code ?? -1; });
+  child.on('exit', (code) => {
+    exited = code ?? -1;
+  });
   const deadline = Date.now() + 60_000;
   while (Date.now() < deadline) {
     if (exited !== null) {
       let log = '';
-      try { log = readFileSync(join(dir, 'error.log'), 'utf8').split('\n').slice(-15).join('\n'); } catch { /* none */ }
+      try {
+        log = readFileSync(join(dir, 'error.log'), 'utf8').split('\n').slice(-15).join('\n');
+      } catch {
+        /* none */
+      }
       throw new Error(`mariadbd exited with ${exited}:\n${log}`);
     }
-    const ping = spawnSync('mariadb-admin', ['--no-defaults', `--socket=${join(dir, 'mysqld.sock')}`, '-uroot', 'ping'], { stdio: 'ignore' });
+    const ping = spawnSync('mariadb-admin', ['--no-defaults', `--socket=${join(dir, 'mysqld.sock')}`, '-uroot', 'ping'], {
+      stdio: 'ignore',
+    });
     if (ping.status === 0) return child;
     await sleep(100);
   }
@@ -98,7 +122,12 @@ export async function stopServer(child, timeoutMs = 30_000) {
   const done = new Promise((resolve) => child.once('exit', resolve));
   child.kill('SIGTERM');
   let timer;
-  const fallback = new Promise((resolve) => { timer = setTimeout(() => { child.kill('SIGKILL'); resolve(); }, timeoutMs); });
+  const fallback = new Promise((resolve) => {
+    timer = setTimeout(() => {
+      child.kill('SIGKILL');
+      resolve();
+    }, timeoutMs);
+  });
   await Promise.race([done, fallback]);
   clearTimeout(timer);
 }

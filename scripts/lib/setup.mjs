@@ -15,7 +15,9 @@ export function ensureDebianPackages({ chromium = false } = {}) {
   if (missing.length === 0) return;
   const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
   if (!isRoot || !has('apt-get')) {
-    console.error(`\nScanwright needs these Debian packages: ${missing.join(' ')}\nInstall them as root:\n  apt-get update && apt-get install -y --no-install-recommends ${missing.join(' ')}\n`);
+    console.error(
+      `\nScanwright needs these Debian packages: ${missing.join(' ')}\nInstall them as root:\n  apt-get update && apt-get install -y --no-install-recommends ${missing.join(' ')}\n`,
+    );
     process.exit(1);
   }
   console.log(`Installing Debian packages: ${missing.join(' ')} …`);

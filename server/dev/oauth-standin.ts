@@ -12,9 +12,9 @@ function pickerPage(query: URLSearchParams, error?: string): string {
   const hidden = ['client_id', 'redirect_uri', 'state', 'scope']
     .map((k) => `<input type="hidden" name="${k}" value="${esc(query.get(k) ?? '')}">`)
     .join('');
-  const buttons = DEMO_ACCOUNTS.map(
-    (a) => `<button name="login" value="${a.login}"><b>${a.login}</b><span>${a.role}</span></button>`,
-  ).join('');
+  const buttons = DEMO_ACCOUNTS.map((a) => `<button name="login" value="${a.login}"><b>${a.login}</b><span>${a.role}</span></button>`).join(
+    '',
+  );
   return `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1">
 <title>Local sign-in stand-in</title><style>
 body{font-family:system-ui,sans-serif;background:#F6F4EF;color:#1D232B;margin:0;padding:2rem 1rem}
@@ -52,7 +52,8 @@ export async function startOAuthStandIn(port: number): Promise<OAuthStandIn> {
     if (!redirect) return void res.status(400).send('redirect_uri is required');
     const login = (q.get('login') || q.get('handle') || '').trim();
     if (!login) return void res.type('html').send(pickerPage(q));
-    if (!HANDLE.test(login)) return void res.status(400).type('html').send(pickerPage(q, 'Handles use letters, digits and single hyphens (max 39).'));
+    if (!HANDLE.test(login))
+      return void res.status(400).type('html').send(pickerPage(q, 'Handles use letters, digits and single hyphens (max 39).'));
     const code = randomBytes(16).toString('hex');
     codes.set(code, login.toLowerCase());
     const target = new URL(redirect);
@@ -95,6 +96,10 @@ export async function startOAuthStandIn(port: number): Promise<OAuthStandIn> {
   const actual = typeof address === 'object' && address ? address.port : port;
   return {
     url: `http://127.0.0.1:${actual}`,
-    close: () => new Promise((r) => { server.closeAllConnections(); server.close(() => r()); }),
+    close: () =>
+      new Promise((r) => {
+        server.closeAllConnections();
+        server.close(() => r());
+      }),
   };
 }

@@ -27,9 +27,14 @@ export interface SmtpCatcher {
 const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
 function inboxPage(messages: CaughtMail[]): string {
-  const rows = [...messages].reverse().map((m) => `<article><header><b>${esc(m.subject)}</b><time>${esc(m.receivedAt)}</time></header>
+  const rows = [...messages]
+    .reverse()
+    .map(
+      (m) => `<article><header><b>${esc(m.subject)}</b><time>${esc(m.receivedAt)}</time></header>
 <p class="meta">to ${esc(m.to.join(', '))} · from ${esc(m.from)}</p><pre>${esc(m.text)}</pre>
-${m.html ? `<details><summary>HTML part</summary><iframe sandbox="" srcdoc="${esc(m.html)}"></iframe></details>` : ''}</article>`).join('');
+${m.html ? `<details><summary>HTML part</summary><iframe sandbox="" srcdoc="${esc(m.html)}"></iframe></details>` : ''}</article>`,
+    )
+    .join('');
   return `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1">
 <title>Local inbox · Scanwright</title><style>
 body{font-family:system-ui,sans-serif;background:#F6F4EF;color:#1D232B;margin:0;padding:1.5rem}
@@ -79,7 +84,9 @@ export async function startSmtpCatcher(smtpPort: number, inboxPort: number | nul
     const app = express();
     app.get('/', (_req, res) => void res.type('html').send(inboxPage(messages)));
     app.get('/api/messages', (_req, res) => void res.json(messages));
-    web = await new Promise((resolve) => { const s = app.listen(inboxPort, '127.0.0.1', () => resolve(s)); });
+    web = await new Promise((resolve) => {
+      const s = app.listen(inboxPort, '127.0.0.1', () => resolve(s));
+    });
   }
   const webPort = web ? (web.address() as AddressInfo).port : null;
 
@@ -97,14 +104,20 @@ export async function startSmtpCatcher(smtpPort: number, inboxPort: number | nul
           resolve(found);
           return true;
         };
-        const timer = setTimeout(() => { waiters.delete(check); reject(new Error('no matching mail arrived')); }, timeoutMs);
+        const timer = setTimeout(() => {
+          waiters.delete(check);
+          reject(new Error('no matching mail arrived'));
+        }, timeoutMs);
         waiters.add(check);
         check();
       });
     },
     async close() {
       await new Promise<void>((r) => smtp.close(() => r()));
-      if (web) { web.closeAllConnections(); await new Promise<void>((r) => web!.close(() => r())); }
+      if (web) {
+        web.closeAllConnections();
+        await new Promise<void>((r) => web!.close(() => r()));
+      }
     },
   };
 }

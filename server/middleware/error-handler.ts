@@ -6,7 +6,9 @@ import { AppError } from '../errors.ts';
 /** At most this many field issues go back in `details`. */
 const MAX_DETAILS = 50;
 
-const body = (code: string, message: string, details?: unknown) => ({ error: details === undefined ? { code, message } : { code, message, details } });
+const body = (code: string, message: string, details?: unknown) => ({
+  error: details === undefined ? { code, message } : { code, message, details },
+});
 
 /** Unknown /api and /auth paths answer 404 in the error shape. */
 export const apiNotFound: RequestHandler = (req, res) => {
@@ -20,9 +22,13 @@ function isDbDown(err: unknown): boolean {
   const code = e?.original?.code ?? e?.parent?.code ?? e?.code ?? '';
   const sqlState = e?.original?.sqlState ?? e?.parent?.sqlState ?? e?.sqlState ?? '';
   // SQLSTATE class 08 is "connection exception" (SQL standard); the codes are the driver's and Node's.
-  return /ECONNREFUSED|ER_GET_CONNECTION_TIMEOUT|ER_CONNECTION_TIMEOUT|ER_SOCKET_UNEXPECTED_CLOSE|ECONNRESET|PROTOCOL_CONNECTION_LOST|ER_CONNECTION_ALREADY_CLOSED|ER_CMD_CONNECTION_CLOSED|ER_POOL_ALREADY_CLOSED/.test(code)
-    || sqlState.startsWith('08')
-    || e?.name === 'SequelizeConnectionAcquireTimeoutError';
+  return (
+    /ECONNREFUSED|ER_GET_CONNECTION_TIMEOUT|ER_CONNECTION_TIMEOUT|ER_SOCKET_UNEXPECTED_CLOSE|ECONNRESET|PROTOCOL_CONNECTION_LOST|ER_CONNECTION_ALREADY_CLOSED|ER_CMD_CONNECTION_CLOSED|ER_POOL_ALREADY_CLOSED/.test(
+      code,
+    ) ||
+    sqlState.startsWith('08') ||
+    e?.name === 'SequelizeConnectionAcquireTimeoutError'
+  );
 }
 
 /** One error middleware, registered last: every failure leaves as `{ error: { code, message, details? } }`. */
@@ -32,18 +38,25 @@ export function errorHandler(showStack: boolean): ErrorRequestHandler {
     if (err instanceof AppError) return void res.status(err.status).json(body(err.code, err.message, err.details));
     if (err instanceof ZodError) {
       // The first issues are enough to fix a form; all of them would let a 4 MB body of bad items become a 30 MB answer.
-      const details = err.issues.slice(0, MAX_DETAILS).map((i) => ({ path: i.path.map(String).join('.'), message: i.message, code: i.code }));
+      const details = err.issues
+        .slice(0, MAX_DETAILS)
+        .map((i) => ({ path: i.path.map(String).join('.'), message: i.message, code: i.code }));
       const first = details[0];
-      return void res.status(400).json(body('validation_failed', first ? `${first.path || 'input'}: ${first.message}` : 'Invalid input.', details));
+      return void res
+        .status(400)
+        .json(body('validation_failed', first ? `${first.path || 'input'}: ${first.message}` : 'Invalid input.', details));
     }
     const status = (err as { status?: number; statusCode?: number }).status ?? (err as { statusCode?: number }).statusCode;
     const type = (err as { type?: string }).type;
     if (type === 'entity.parse.failed') return void res.status(400).json(body('malformed_json', 'The request body is not valid JSON.'));
     if (type === 'entity.too.large') return void res.status(413).json(body('payload_too_large', 'The request body is too large.'));
-    if (type === 'encoding.unsupported' || type === 'charset.unsupported') return void res.status(415).json(body('unsupported_encoding', 'Unsupported body encoding.'));
-    if (status && status >= 400 && status < 500) return void res.status(status).json(body('bad_request', (err as Error).message || 'Bad request.'));
+    if (type === 'encoding.unsupported' || type === 'charset.unsupported')
+      return void res.status(415).json(body('unsupported_encoding', 'Unsupported body encoding.'));
+    if (status && status >= 400 && status < 500)
+      return void res.status(status).json(body('bad_request', (err as Error).message || 'Bad request.'));
     if (err instanceof UniqueConstraintError) return void res.status(409).json(body('conflict', 'That already exists.'));
-    if (err instanceof ForeignKeyConstraintError) return void res.status(409).json(body('conflict', 'A referenced record does not exist or is still in use.'));
+    if (err instanceof ForeignKeyConstraintError)
+      return void res.status(409).json(body('conflict', 'A referenced record does not exist or is still in use.'));
     if (isDbDown(err)) return void res.status(503).json(body('db_unavailable', 'The database is not reachable; try again shortly.'));
     req.log?.error({ err }, 'unhandled error');
     const message = showStack && err instanceof Error ? `${err.message}\n${err.stack}` : 'Something went wrong on our side.';

@@ -2,7 +2,10 @@ import { rateLimit } from 'express-rate-limit';
 import type { Request, RequestHandler } from 'express';
 
 /** A per-client limiter answering 429 in the error shape; a no-op when limits are switched off (benchmarks, most tests). */
-export function limiter(enabled: boolean, opts: { windowMs: number; limit: number; what: string; perUser?: boolean; skip?: (req: Request) => boolean }): RequestHandler {
+export function limiter(
+  enabled: boolean,
+  opts: { windowMs: number; limit: number; what: string; perUser?: boolean; skip?: (req: Request) => boolean },
+): RequestHandler {
   if (!enabled) return (_req, _res, next) => next();
   return rateLimit({
     windowMs: opts.windowMs,

@@ -10,7 +10,10 @@ const FIELD = 'photos';
 
 const altText = z.string().trim().min(1, 'Describe the photo for people who cannot see it.').max(300);
 /** The `alt` field: once per file (in order) or once for all. */
-export const altTexts = z.preprocess((v) => (typeof v === 'string' ? [v] : v), z.array(altText, { error: 'Alt text is required.' }).min(1).max(MAX_FILES_PER_UPLOAD));
+export const altTexts = z.preprocess(
+  (v) => (typeof v === 'string' ? [v] : v),
+  z.array(altText, { error: 'Alt text is required.' }).min(1).max(MAX_FILES_PER_UPLOAD),
+);
 /** The text fields of a part or listing photo upload. */
 export const attachPhotosFields = z.strictObject({ alt: altTexts });
 
@@ -27,7 +30,13 @@ const multerRefusals: Record<string, (field?: string) => AppError> = {
 export function receivePhotos(): RequestHandler {
   const parse = multer({
     storage: multer.memoryStorage(),
-    limits: { fileSize: MAX_FILE_BYTES, files: MAX_FILES_PER_UPLOAD, fields: 2 * MAX_FILES_PER_UPLOAD, fieldSize: 4096, parts: 3 * MAX_FILES_PER_UPLOAD },
+    limits: {
+      fileSize: MAX_FILE_BYTES,
+      files: MAX_FILES_PER_UPLOAD,
+      fields: 2 * MAX_FILES_PER_UPLOAD,
+      fieldSize: 4096,
+      parts: 3 * MAX_FILES_PER_UPLOAD,
+    },
   }).array(FIELD, MAX_FILES_PER_UPLOAD);
   return (req, res, next) => {
     parse(req, res, (err: unknown) => {

@@ -46,5 +46,22 @@ export function initModels(sequelize: Sequelize) {
     },
     { tableName: 'sessions', underscored: true },
   );
-  return { User, AppMeta, Part, Build, LogEntry, Photo, Actuator, CalibrationRun, AuditEntry, Report, OutboxMail, Listing, ListingPhoto, PartPhoto, MessageThread, Message };
+  return {
+    User,
+    AppMeta,
+    Part,
+    Build,
+    LogEntry,
+    Photo,
+    Actuator,
+    CalibrationRun,
+    AuditEntry,
+    Report,
+    OutboxMail,
+    Listing,
+    ListingPhoto,
+    PartPhoto,
+    MessageThread,
+    Message,
+  };
 }

@@ -6,6 +6,11 @@ export class ListingPhoto extends AttachedPhoto {
   declare listingId: number;
 
   static initModel(sequelize: Sequelize) {
-    ListingPhoto.init(attachedPhotoAttributes('listingId'), { sequelize, tableName: 'listing_photos', modelName: 'ListingPhoto', underscored: true });
+    ListingPhoto.init(attachedPhotoAttributes('listingId'), {
+      sequelize,
+      tableName: 'listing_photos',
+      modelName: 'ListingPhoto',
+      underscored: true,
+    });
   }
 }

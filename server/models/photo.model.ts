@@ -1,4 +1,12 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type ModelAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type ModelAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { attachedPhotoAttributes } from './attached-photo.ts';
 
 export class Photo extends Model<InferAttributes<Photo>, InferCreationAttributes<Photo>> {

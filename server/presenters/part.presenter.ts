@@ -2,10 +2,32 @@ import type { PartChoiceDto, PartSummaryDto } from '@shared/schemas/part.ts';
 import type { Part } from '../models/part.model.ts';
 
 /** The columns a part summary needs: a Part instance or a plain row from the registry search. */
-export type PartRow = Pick<Part,
-  'id' | 'name' | 'category' | 'status' | 'salvageSource' | 'material' | 'safeVolts' | 'capacitanceNf' | 'lengthMm' | 'widthMm' | 'thicknessMm'
-  | 'outerDiameterMm' | 'wallMm' | 'layers' | 'acceptedRunCount' | 'buildCount' | 'gainMedianNmPerV' | 'gainP25NmPerV' | 'gainP75NmPerV'
-  | 'gainMinNmPerV' | 'gainMaxNmPerV' | 'hysteresisMedianPct' | 'createdAt'>;
+export type PartRow = Pick<
+  Part,
+  | 'id'
+  | 'name'
+  | 'category'
+  | 'status'
+  | 'salvageSource'
+  | 'material'
+  | 'safeVolts'
+  | 'capacitanceNf'
+  | 'lengthMm'
+  | 'widthMm'
+  | 'thicknessMm'
+  | 'outerDiameterMm'
+  | 'wallMm'
+  | 'layers'
+  | 'acceptedRunCount'
+  | 'buildCount'
+  | 'gainMedianNmPerV'
+  | 'gainP25NmPerV'
+  | 'gainP75NmPerV'
+  | 'gainMinNmPerV'
+  | 'gainMaxNmPerV'
+  | 'hysteresisMedianPct'
+  | 'createdAt'
+>;
 
 /** A part as pickers and registry rows show it: no geometry. */
 export function presentPartChoice(p: PartRow): PartChoiceDto {

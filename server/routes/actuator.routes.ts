@@ -13,9 +13,15 @@ export function actuatorRoutes(): Router {
   const r = Router();
   const actuator = validate(actuatorIdParams, 'params');
   const run = validate(runIdParams, 'params');
-  r.post('/api/builds/:buildId/actuators', requireUser, validate(buildIdParams, 'params'), validate(createActuatorInput), async (req, res) => {
-    res.status(201).json(await createActuator(actorOf(req), res.locals.params.buildId, res.locals.body));
-  });
+  r.post(
+    '/api/builds/:buildId/actuators',
+    requireUser,
+    validate(buildIdParams, 'params'),
+    validate(createActuatorInput),
+    async (req, res) => {
+      res.status(201).json(await createActuator(actorOf(req), res.locals.params.buildId, res.locals.body));
+    },
+  );
   r.patch('/api/actuators/:actuatorId', requireUser, actuator, validate(updateActuatorInput), async (req, res) => {
     res.json(await updateActuator(actorOf(req), res.locals.params.actuatorId, res.locals.body));
   });

@@ -13,8 +13,14 @@ export function adminRoutes(): Router {
   r.patch('/api/admin/users/:userId/role', requireUser, validate(userIdParams, 'params'), validate(setRoleInput), async (req, res) => {
     res.json(await setUserRole(actorOf(req), res.locals.params.userId, res.locals.body));
   });
-  r.patch('/api/admin/users/:userId/suspension', requireUser, validate(userIdParams, 'params'), validate(setSuspendedInput), async (req, res) => {
-    res.json(await setUserSuspended(actorOf(req), res.locals.params.userId, res.locals.body));
-  });
+  r.patch(
+    '/api/admin/users/:userId/suspension',
+    requireUser,
+    validate(userIdParams, 'params'),
+    validate(setSuspendedInput),
+    async (req, res) => {
+      res.json(await setUserSuspended(actorOf(req), res.locals.params.userId, res.locals.body));
+    },
+  );
   return r;
 }

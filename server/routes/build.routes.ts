@@ -1,10 +1,26 @@
 import { Router } from 'express';
-import { buildIdParams, createBuildInput, createEntryInput, entryParams, listBuildsQuery, updateBuildInput, updateEntryInput } from '@shared/schemas/build.ts';
+import {
+  buildIdParams,
+  createBuildInput,
+  createEntryInput,
+  entryParams,
+  listBuildsQuery,
+  updateBuildInput,
+  updateEntryInput,
+} from '@shared/schemas/build.ts';
 import type { Config } from '../config.ts';
 import { validate } from '../middleware/validate.ts';
 import { requireUser } from '../middleware/auth.ts';
 import { actorOf } from '../middleware/actor.ts';
-import { createBuild, deleteBuild, getBuild, listMyBuilds, listPublishedBuilds, submitBuild, updateBuild } from '../services/build.service.ts';
+import {
+  createBuild,
+  deleteBuild,
+  getBuild,
+  listMyBuilds,
+  listPublishedBuilds,
+  submitBuild,
+  updateBuild,
+} from '../services/build.service.ts';
 import { createEntry, deleteEntry, updateEntry } from '../services/entry.service.ts';
 
 /** Builds and their log entries. */

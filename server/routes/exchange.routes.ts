@@ -1,5 +1,13 @@
 import { Router } from 'express';
-import { createListingInput, hideListingInput, listingIdParams, listListingsQuery, sendMessageInput, threadIdParams, updateListingInput } from '@shared/schemas/listing.ts';
+import {
+  createListingInput,
+  hideListingInput,
+  listingIdParams,
+  listListingsQuery,
+  sendMessageInput,
+  threadIdParams,
+  updateListingInput,
+} from '@shared/schemas/listing.ts';
 import type { Config } from '../config.ts';
 import { validate } from '../middleware/validate.ts';
 import { requireUser } from '../middleware/auth.ts';

@@ -9,21 +9,53 @@ import { exportParts, gainHistogram, getPart, listParts, proposePart } from '../
 import { mergeParts } from '../services/part-merge.service.ts';
 import { photoRoutesFor } from './attached-photo.routes.ts';
 
-const CSV_COLUMNS: Array<keyof PartListItemDto> = ['id', 'name', 'category', 'salvageSource', 'material', 'safeVolts', 'capacitanceNf', 'gainMedianNmPerV', 'gainP25NmPerV', 'gainP75NmPerV', 'acceptedRunCount', 'buildCount', 'createdAt'];
-const CSV_HEADERS = ['id', 'name', 'category', 'salvage_source', 'material', 'safe_volts_V', 'capacitance_nF', 'gain_median_nm_per_V', 'gain_p25_nm_per_V', 'gain_p75_nm_per_V', 'accepted_runs', 'builds', 'created_at'];
+const CSV_COLUMNS: Array<keyof PartListItemDto> = [
+  'id',
+  'name',
+  'category',
+  'salvageSource',
+  'material',
+  'safeVolts',
+  'capacitanceNf',
+  'gainMedianNmPerV',
+  'gainP25NmPerV',
+  'gainP75NmPerV',
+  'acceptedRunCount',
+  'buildCount',
+  'createdAt',
+];
+const CSV_HEADERS = [
+  'id',
+  'name',
+  'category',
+  'salvage_source',
+  'material',
+  'safe_volts_V',
+  'capacitance_nF',
+  'gain_median_nm_per_V',
+  'gain_p25_nm_per_V',
+  'gain_p75_nm_per_V',
+  'accepted_runs',
+  'builds',
+  'created_at',
+];
 
 /** The parts registry: search (paged, or exported as CSV/JSON), histogram, detail, proposals, photos and merges. */
 export function partRoutes(config: Config): Router {
   const r = Router();
   r.get('/api/parts', validate(listPartsQuery, 'query'), async (req, res) => {
     const q = res.locals.query;
-    const format = q.format ?? (req.accepts(['application/json', 'text/csv']) === 'text/csv' && !req.accepts('application/json') ? 'csv' : undefined);
+    const format =
+      q.format ?? (req.accepts(['application/json', 'text/csv']) === 'text/csv' && !req.accepts('application/json') ? 'csv' : undefined);
     if (!format) return void res.json(await listParts(q));
     const rows = await exportParts(q);
     const stamp = new Date().toISOString().slice(0, 10);
     res.attachment(`scanwright-parts-${stamp}.${format}`);
     if (format === 'json') return void res.json(rows);
-    const csv = Papa.unparse({ fields: CSV_HEADERS, data: rows.map((p) => CSV_COLUMNS.map((c) => p[c] as unknown)) }, { escapeFormulae: true });
+    const csv = Papa.unparse(
+      { fields: CSV_HEADERS, data: rows.map((p) => CSV_COLUMNS.map((c) => p[c] as unknown)) },
+      { escapeFormulae: true },
+    );
     res.type('text/csv').send(csv);
   });
   r.get('/api/parts/histogram', async (_req, res) => {

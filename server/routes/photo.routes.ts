@@ -31,7 +31,12 @@ export function photoRoutes(config: Config): Router {
     receivePhotos(),
     validate(uploadPhotosFields),
     async (req, res) => {
-      const photos = await uploadPhotos(actorOf(req), res.locals.params.buildId, { ...res.locals.body, files: uploadedBuffers(req) }, config.uploadsDir);
+      const photos = await uploadPhotos(
+        actorOf(req),
+        res.locals.params.buildId,
+        { ...res.locals.body, files: uploadedBuffers(req) },
+        config.uploadsDir,
+      );
       res.status(201).json({ photos });
     },
   );

@@ -1,5 +1,13 @@
 import { Router } from 'express';
-import { acceptRejectInput, accountSettingsInput, auditQuery, buildDecisionInput, createReportInput, reportDecisionInput, reviewIdParams } from '@shared/schemas/review.ts';
+import {
+  acceptRejectInput,
+  accountSettingsInput,
+  auditQuery,
+  buildDecisionInput,
+  createReportInput,
+  reportDecisionInput,
+  reviewIdParams,
+} from '@shared/schemas/review.ts';
 import type { Config } from '../config.ts';
 import { validate } from '../middleware/validate.ts';
 import { limiter } from '../middleware/rate-limit.ts';

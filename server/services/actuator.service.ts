@@ -31,7 +31,16 @@ export async function createActuator(actor: Actor | null, buildId: number, input
     const build = await loadBuildForEdit(actor, buildId, transaction);
     await usablePart(actor!, input.partId, transaction);
     const a = await Actuator.create(
-      { buildId, partId: input.partId, axis: input.axis, drive: input.drive, label: input.label ?? null, amplifier: input.amplifier ?? null, maxVolts: input.maxVolts ?? null, notes: input.notes ?? null },
+      {
+        buildId,
+        partId: input.partId,
+        axis: input.axis,
+        drive: input.drive,
+        label: input.label ?? null,
+        amplifier: input.amplifier ?? null,
+        maxVolts: input.maxVolts ?? null,
+        notes: input.notes ?? null,
+      },
       { transaction },
     );
     await markEdited(build, transaction);
@@ -69,7 +78,8 @@ export async function deleteActuator(actor: Actor | null, actuatorId: number): P
   await Build.sequelize!.transaction(async (transaction) => {
     const { actuator, build } = await loadActuatorForEdit(actor, actuatorId, transaction);
     const accepted = await CalibrationRun.count({ where: { actuatorId, status: 'accepted' }, transaction });
-    if (accepted > 0) throw new ConflictError('This actuator has accepted calibration runs that count in the parts registry.', 'has_accepted_runs');
+    if (accepted > 0)
+      throw new ConflictError('This actuator has accepted calibration runs that count in the parts registry.', 'has_accepted_runs');
     await CalibrationRun.destroy({ where: { actuatorId }, transaction });
     await actuator.destroy({ transaction });
     await markEdited(build, transaction);

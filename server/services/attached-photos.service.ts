@@ -24,7 +24,10 @@ const SHELF = {
   listing: { model: ListingPhoto, key: 'listingId' },
 } as const;
 
-const order: Array<[string, 'ASC']> = [['position', 'ASC'], ['id', 'ASC']];
+const order: Array<[string, 'ASC']> = [
+  ['position', 'ASC'],
+  ['id', 'ASC'],
+];
 const whereOwner = (subject: PhotoSubject, ids: number | number[]) => ({ [SHELF[subject].key]: ids }) as WhereOptions;
 const ownerOf = (subject: PhotoSubject, photo: AttachedPhoto) => (photo as unknown as Record<string, number>)[SHELF[subject].key]!;
 
@@ -34,20 +37,31 @@ export function canEditPartPhotos(actor: Actor | null, part: Pick<Part, 'propose
 }
 
 /** Load the subject and check the actor may change its photos (also before the multipart body is read). */
-export async function assertCanEditPhotos(actor: Actor | null, subject: PhotoSubject, id: number, transaction?: Transaction): Promise<void> {
+export async function assertCanEditPhotos(
+  actor: Actor | null,
+  subject: PhotoSubject,
+  id: number,
+  transaction?: Transaction,
+): Promise<void> {
   if (subject === 'listing') {
     const listing = await loadListingForView(actor, id, transaction);
     authorize(actor, 'listing.edit', { ownerId: listing.ownerId });
     return;
   }
   const part = await Part.findByPk(id, transaction ? { transaction, lock: transaction.LOCK.UPDATE } : {});
-  if (!part || (part.status !== 'accepted' && !can(actor, 'part.view-unlisted', { ownerId: part.proposedById }))) throw new NotFoundError('No such part.');
+  if (!part || (part.status !== 'accepted' && !can(actor, 'part.view-unlisted', { ownerId: part.proposedById })))
+    throw new NotFoundError('No such part.');
   authorize(actor, 'part.photos', { ownerId: part.proposedById });
-  if (part.mergedIntoId !== null) throw new ConflictError(`This part was merged into part ${part.mergedIntoId}; add photos there.`, 'already_merged');
+  if (part.mergedIntoId !== null)
+    throw new ConflictError(`This part was merged into part ${part.mergedIntoId}; add photos there.`, 'already_merged');
 }
 
 /** The photos of several parts or listings, in display order, by owner id. */
-export async function photosBySubject(subject: PhotoSubject, ids: number[], transaction?: Transaction): Promise<Map<number, AttachedPhotoDto[]>> {
+export async function photosBySubject(
+  subject: PhotoSubject,
+  ids: number[],
+  transaction?: Transaction,
+): Promise<Map<number, AttachedPhotoDto[]>> {
   const map = new Map<number, AttachedPhotoDto[]>(ids.map((id) => [id, []]));
   if (ids.length === 0) return map;
   const rows = await SHELF[subject].model.findAll({ where: whereOwner(subject, ids), order, transaction });
@@ -61,24 +75,32 @@ export async function photosBySubject(subject: PhotoSubject, ids: number[], tran
  * per-subject limit under a row lock); on failure the files this request created are removed.
  */
 export async function attachPhotos(
-  actor: Actor | null, subject: PhotoSubject, id: number, input: { files: Buffer[]; alt: string[] }, uploadsDir: string,
+  actor: Actor | null,
+  subject: PhotoSubject,
+  id: number,
+  input: { files: Buffer[]; alt: string[] },
+  uploadsDir: string,
 ): Promise<AttachedPhotoDto[]> {
   const alts = altsFor(input.alt, input.files.length);
   const processed = await processAll(input.files);
   const { model } = SHELF[subject];
-  return storeThenRecord(uploadsDir, processed, () => model.sequelize!.transaction(async (transaction) => {
-    await assertCanEditPhotos(actor, subject, id, transaction);
-    const existing = await model.count({ where: whereOwner(subject, id), transaction });
-    if (existing + processed.length > MAX_ATTACHED_PHOTOS) {
-      throw new ConflictError(`A ${subject} has at most ${MAX_ATTACHED_PHOTOS} photos (${existing} now).`, 'too_many_photos');
-    }
-    const last = (await model.max('position', { where: whereOwner(subject, id), transaction })) as number | null;
-    const rows = await model.bulkCreate(
-      processed.map((p, i) => ({ ...storedColumns(p), [SHELF[subject].key]: id, alt: alts[i]!, position: (last ?? -1) + 1 + i }) as never),
-      { transaction },
-    );
-    return rows.map(presentAttachedPhoto);
-  }));
+  return storeThenRecord(uploadsDir, processed, () =>
+    model.sequelize!.transaction(async (transaction) => {
+      await assertCanEditPhotos(actor, subject, id, transaction);
+      const existing = await model.count({ where: whereOwner(subject, id), transaction });
+      if (existing + processed.length > MAX_ATTACHED_PHOTOS) {
+        throw new ConflictError(`A ${subject} has at most ${MAX_ATTACHED_PHOTOS} photos (${existing} now).`, 'too_many_photos');
+      }
+      const last = (await model.max('position', { where: whereOwner(subject, id), transaction })) as number | null;
+      const rows = await model.bulkCreate(
+        processed.map(
+          (p, i) => ({ ...storedColumns(p), [SHELF[subject].key]: id, alt: alts[i]!, position: (last ?? -1) + 1 + i }) as never,
+        ),
+        { transaction },
+      );
+      return rows.map(presentAttachedPhoto);
+    }),
+  );
 }
 
 async function loadAttachedPhoto(subject: PhotoSubject, id: number, photoId: number, transaction: Transaction): Promise<AttachedPhoto> {
@@ -89,7 +111,11 @@ async function loadAttachedPhoto(subject: PhotoSubject, id: number, photoId: num
 
 /** Change one photo's alt text. */
 export async function updateAttachedPhoto(
-  actor: Actor | null, subject: PhotoSubject, id: number, photoId: number, input: UpdateAttachedPhotoInput,
+  actor: Actor | null,
+  subject: PhotoSubject,
+  id: number,
+  photoId: number,
+  input: UpdateAttachedPhotoInput,
 ): Promise<AttachedPhotoDto> {
   return SHELF[subject].model.sequelize!.transaction(async (transaction) => {
     await assertCanEditPhotos(actor, subject, id, transaction);
@@ -100,7 +126,12 @@ export async function updateAttachedPhoto(
 }
 
 /** Put the photos of a part or listing in the given order; the list must name each of them exactly once. */
-export async function reorderAttachedPhotos(actor: Actor | null, subject: PhotoSubject, id: number, photoIds: number[]): Promise<AttachedPhotoDto[]> {
+export async function reorderAttachedPhotos(
+  actor: Actor | null,
+  subject: PhotoSubject,
+  id: number,
+  photoIds: number[],
+): Promise<AttachedPhotoDto[]> {
   const { model } = SHELF[subject];
   return model.sequelize!.transaction(async (transaction) => {
     await assertCanEditPhotos(actor, subject, id, transaction);
@@ -119,7 +150,13 @@ export async function reorderAttachedPhotos(actor: Actor | null, subject: PhotoS
 }
 
 /** Remove one photo of a part or listing; its files go too once no other photo shows the same content. */
-export async function removeAttachedPhoto(actor: Actor | null, subject: PhotoSubject, id: number, photoId: number, uploadsDir: string): Promise<void> {
+export async function removeAttachedPhoto(
+  actor: Actor | null,
+  subject: PhotoSubject,
+  id: number,
+  photoId: number,
+  uploadsDir: string,
+): Promise<void> {
   const { model } = SHELF[subject];
   const photo = await model.sequelize!.transaction(async (transaction) => {
     await assertCanEditPhotos(actor, subject, id, transaction);

@@ -11,7 +11,10 @@ export async function recordAudit(
   entry: { action: string; targetType: string; targetId: number; note?: string | null },
   transaction: Transaction,
 ): Promise<void> {
-  await AuditEntry.create({ actorId: actor.id, action: entry.action, targetType: entry.targetType, targetId: entry.targetId, note: entry.note ?? null }, { transaction });
+  await AuditEntry.create(
+    { actorId: actor.id, action: entry.action, targetType: entry.targetType, targetId: entry.targetId, note: entry.note ?? null },
+    { transaction },
+  );
 }
 
 /** The audit trail, newest first, filtered by moderator, thing and date range (UTC days, inclusive). */
@@ -25,8 +28,18 @@ export async function listAudit(actor: Actor | null, q: AuditQuery): Promise<Aud
   if (q.from) range[Op.gte] = new Date(`${q.from}T00:00:00Z`);
   if (q.to) range[Op.lt] = new Date(new Date(`${q.to}T00:00:00Z`).getTime() + 86_400_000);
   if (q.from || q.to) Object.assign(where, { createdAt: range });
-  const { rows, count } = await AuditEntry.findAndCountAll({ where, order: [['createdAt', 'DESC'], ['id', 'DESC']], limit: q.pageSize, offset: (q.page - 1) * q.pageSize });
-  const users = new Map((await User.findAll({ where: { id: [...new Set(rows.map((r) => r.actorId))] }, attributes: ['id', 'login'] })).map((u) => [u.id, u]));
+  const { rows, count } = await AuditEntry.findAndCountAll({
+    where,
+    order: [
+      ['createdAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+    limit: q.pageSize,
+    offset: (q.page - 1) * q.pageSize,
+  });
+  const users = new Map(
+    (await User.findAll({ where: { id: [...new Set(rows.map((r) => r.actorId))] }, attributes: ['id', 'login'] })).map((u) => [u.id, u]),
+  );
   return {
     items: rows.map((r) => ({
       id: r.id,

@@ -27,12 +27,25 @@ export async function summarizeBuilds(builds: Build[]): Promise<BuildSummaryDto[
   const ids = builds.map((b) => b.id);
   const [owners, photos, actuators, runs] = await Promise.all([
     User.findAll({ where: { id: [...new Set(builds.map((b) => b.ownerId))] }, attributes: ['id', 'login', 'name'] }),
-    Photo.findAll({ where: { buildId: ids }, order: [['position', 'ASC'], ['id', 'ASC']] }),
-    Actuator.findAll({ where: { buildId: ids }, include: [{ model: Part, as: 'part', attributes: ['id', 'name'] }], order: [['id', 'ASC']] }),
+    Photo.findAll({
+      where: { buildId: ids },
+      order: [
+        ['position', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    }),
+    Actuator.findAll({
+      where: { buildId: ids },
+      include: [{ model: Part, as: 'part', attributes: ['id', 'name'] }],
+      order: [['id', 'ASC']],
+    }),
     CalibrationRun.findAll({
       where: { buildId: ids, status: { [Op.ne]: 'rejected' } },
       attributes: ['id', 'actuatorId', 'status', 'gainNmPerV', 'createdAt'],
-      order: [['createdAt', 'DESC'], ['id', 'DESC']],
+      order: [
+        ['createdAt', 'DESC'],
+        ['id', 'DESC'],
+      ],
     }),
   ]);
   const ownerMap = byId(owners);
@@ -42,7 +55,8 @@ export async function summarizeBuilds(builds: Build[]): Promise<BuildSummaryDto[
     const gains: BuildGainDto[] = [];
     for (const a of actuators.filter((x) => x.buildId === b.id)) {
       const run = headlineRun(runs.filter((r) => r.actuatorId === a.id));
-      if (run) gains.push({ actuatorId: a.id, axis: a.axis, partName: a.part?.name ?? '', gainNmPerV: run.gainNmPerV, runStatus: run.status });
+      if (run)
+        gains.push({ actuatorId: a.id, axis: a.axis, partName: a.part?.name ?? '', gainNmPerV: run.gainNmPerV, runStatus: run.status });
     }
     const owner = ownerMap.get(b.ownerId);
     return {
@@ -69,7 +83,10 @@ export async function loadActuators(buildId: number, includeRejected: boolean): 
   const actuators = await Actuator.findAll({ where: { buildId }, include: [{ model: Part, as: 'part' }], order: [['id', 'ASC']] });
   const runs = await CalibrationRun.findAll({
     where: { buildId, ...(includeRejected ? {} : { status: { [Op.ne]: 'rejected' } }) },
-    order: [['createdAt', 'DESC'], ['id', 'DESC']],
+    order: [
+      ['createdAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
   });
   return actuators.map((a) => {
     const part = a.part!;
@@ -84,7 +101,9 @@ export async function loadActuators(buildId: number, includeRejected: boolean): 
       maxVolts: a.maxVolts,
       notes: a.notes,
       part: presentPartSummary(part),
-      expectedGain: expected ? { gainNmPerV: expected.gainNmPerV, lowNmPerV: expected.lowNmPerV, highNmPerV: expected.highNmPerV, basis: expected.basis } : null,
+      expectedGain: expected
+        ? { gainNmPerV: expected.gainNmPerV, lowNmPerV: expected.lowNmPerV, highNmPerV: expected.highNmPerV, basis: expected.basis }
+        : null,
       runs: runs.filter((r) => r.actuatorId === a.id).map((r) => presentRun(r)),
     };
   });
@@ -95,8 +114,20 @@ export async function presentBuildDetail(actor: Actor | null, build: Build): Pro
   const [summary] = await summarizeBuilds([build]);
   const mayEdit = can(actor, 'build.edit', { ownerId: build.ownerId });
   const [photos, entries, actuators] = await Promise.all([
-    Photo.findAll({ where: { buildId: build.id }, order: [['position', 'ASC'], ['id', 'ASC']] }),
-    LogEntry.findAll({ where: { buildId: build.id }, order: [['entryDate', 'ASC'], ['id', 'ASC']] }),
+    Photo.findAll({
+      where: { buildId: build.id },
+      order: [
+        ['position', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    }),
+    LogEntry.findAll({
+      where: { buildId: build.id },
+      order: [
+        ['entryDate', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    }),
     loadActuators(build.id, can(actor, 'build.view-unpublished', { ownerId: build.ownerId })),
   ]);
   const entryDtos: LogEntryDto[] = entries.map((e) => ({

@@ -10,7 +10,6 @@ import { presentBuildDetail, summarizeBuilds } from './build-read.service.ts';
 import { pruneAfterRemoval } from './photo-files.ts';
 import { containsPattern } from '../db/like-pattern.ts';
 
-
 /** Start a build as a draft owned by the actor. */
 export async function createBuild(actor: Actor | null, input: CreateBuildInput): Promise<BuildDto> {
   authorize(actor, 'content.create');
@@ -28,7 +27,10 @@ export async function listPublishedBuilds(query: ListBuildsQuery): Promise<Build
   }
   const { rows, count } = await Build.findAndCountAll({
     where,
-    order: [['publishedAt', 'DESC'], ['id', 'DESC']],
+    order: [
+      ['publishedAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
     limit: query.pageSize,
     offset: (query.page - 1) * query.pageSize,
   });
@@ -38,7 +40,14 @@ export async function listPublishedBuilds(query: ListBuildsQuery): Promise<Build
 /** Every build of the actor, any state, most recently changed first. */
 export async function listMyBuilds(actor: Actor | null): Promise<BuildListDto> {
   authorize(actor, 'content.create');
-  const rows = await Build.findAll({ where: { ownerId: actor.id }, order: [['updatedAt', 'DESC'], ['id', 'DESC']], limit: 500 });
+  const rows = await Build.findAll({
+    where: { ownerId: actor.id },
+    order: [
+      ['updatedAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+    limit: 500,
+  });
   return { items: await summarizeBuilds(rows), total: rows.length, page: 1, pageSize: rows.length };
 }
 
@@ -53,7 +62,10 @@ export async function updateBuild(actor: Actor | null, buildId: number, input: U
     const b = await loadBuildForEdit(actor, buildId, transaction);
     if (input.coverPhotoId != null) {
       const photo = await Photo.findOne({ where: { id: input.coverPhotoId, buildId }, transaction });
-      if (!photo) throw new ValidationError('The cover must be one of this build\'s photos.', [{ path: 'coverPhotoId', message: 'Not a photo of this build.' }]);
+      if (!photo)
+        throw new ValidationError("The cover must be one of this build's photos.", [
+          { path: 'coverPhotoId', message: 'Not a photo of this build.' },
+        ]);
     }
     await b.update(input, { transaction });
     await markEdited(b, transaction);

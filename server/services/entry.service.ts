@@ -8,7 +8,13 @@ import { loadBuildForEdit, markEdited } from './build-access.ts';
 import { presentPhoto } from '../presenters/photo.presenter.ts';
 
 async function present(entry: LogEntry): Promise<LogEntryDto> {
-  const photos = await Photo.findAll({ where: { entryId: entry.id }, order: [['position', 'ASC'], ['id', 'ASC']] });
+  const photos = await Photo.findAll({
+    where: { entryId: entry.id },
+    order: [
+      ['position', 'ASC'],
+      ['id', 'ASC'],
+    ],
+  });
   return { id: entry.id, entryDate: entry.entryDate, title: entry.title, body: entry.body, photos: photos.map(presentPhoto) };
 }
 

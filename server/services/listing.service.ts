@@ -1,6 +1,14 @@
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
 import { can, type Actor } from '@shared/policies.ts';
-import { priceLabel, type CreateListingInput, type HideListingInput, type ListListingsQuery, type ListingDto, type ListingListDto, type UpdateListingInput } from '@shared/schemas/listing.ts';
+import {
+  priceLabel,
+  type CreateListingInput,
+  type HideListingInput,
+  type ListListingsQuery,
+  type ListingDto,
+  type ListingListDto,
+  type UpdateListingInput,
+} from '@shared/schemas/listing.ts';
 import { Listing } from '../models/listing.model.ts';
 import { Part } from '../models/part.model.ts';
 import { User } from '../models/user.model.ts';
@@ -10,14 +18,16 @@ import { recordAudit } from './audit.service.ts';
 import { containsPattern } from '../db/like-pattern.ts';
 import { photosBySubject } from './attached-photos.service.ts';
 
-
 /** Listings with their parts, owners and photos in a fixed number of queries. */
 async function presentListings(actor: Actor | null, rows: Listing[]): Promise<ListingDto[]> {
   if (rows.length === 0) return [];
   const [parts, owners, photos] = await Promise.all([
     Part.findAll({ where: { id: [...new Set(rows.map((r) => r.partId))] }, attributes: ['id', 'name', 'category', 'gainMedianNmPerV'] }),
     User.findAll({ where: { id: [...new Set(rows.map((r) => r.ownerId))] }, attributes: ['id', 'login'] }),
-    photosBySubject('listing', rows.map((r) => r.id)),
+    photosBySubject(
+      'listing',
+      rows.map((r) => r.id),
+    ),
   ]);
   const partMap = new Map(parts.map((p) => [p.id, p]));
   const ownerMap = new Map(owners.map((u) => [u.id, u]));
@@ -70,14 +80,23 @@ export async function listListings(actor: Actor | null, q: ListListingsQuery): P
       ? [{ [Op.or]: [{ partId: ids }, { notes: { [Op.like]: containsPattern(q.q) } }] }, ...(q.category ? [{ partId: ids }] : [])]
       : [{ partId: ids }];
   }
-  const { rows, count } = await Listing.findAndCountAll({ where: where as WhereOptions<Listing>, order: [['createdAt', 'DESC'], ['id', 'DESC']], limit: q.pageSize, offset: (q.page - 1) * q.pageSize });
+  const { rows, count } = await Listing.findAndCountAll({
+    where: where as WhereOptions<Listing>,
+    order: [
+      ['createdAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+    limit: q.pageSize,
+    offset: (q.page - 1) * q.pageSize,
+  });
   return { items: await presentListings(actor, rows), total: count, page: q.page, pageSize: q.pageSize };
 }
 
 /** A listing the actor may see: hidden ones only for the owner and moderators. */
 export async function loadListingForView(actor: Actor | null, listingId: number, transaction?: Transaction): Promise<Listing> {
   const listing = await Listing.findByPk(listingId, transaction ? { transaction, lock: transaction.LOCK.UPDATE } : {});
-  if (!listing || (listing.hiddenAt && !can(actor, 'listing.view-hidden', { ownerId: listing.ownerId }))) throw new NotFoundError('No such listing.');
+  if (!listing || (listing.hiddenAt && !can(actor, 'listing.view-hidden', { ownerId: listing.ownerId })))
+    throw new NotFoundError('No such listing.');
   return listing;
 }
 
@@ -99,15 +118,29 @@ async function assertListedPart(partId: number) {
 }
 
 const priceFields = (input: Partial<CreateListingInput>) =>
-  input.priceKind === undefined ? {} : input.priceKind === 'price' ? { priceAmount: input.priceAmount ?? null, currency: input.currency ?? null } : { priceAmount: null, currency: null };
+  input.priceKind === undefined
+    ? {}
+    : input.priceKind === 'price'
+      ? { priceAmount: input.priceAmount ?? null, currency: input.currency ?? null }
+      : { priceAmount: null, currency: null };
 
 /** Offer or seek a listed part. */
 export async function createListing(actor: Actor | null, input: CreateListingInput): Promise<ListingDto> {
   authorize(actor, 'content.create');
   await assertListedPart(input.partId);
   const listing = await Listing.create({
-    ownerId: actor.id, partId: input.partId, kind: input.kind, quantity: input.quantity, condition: input.condition, priceKind: input.priceKind,
-    priceAmount: null, currency: null, ...priceFields(input), region: input.region, shipsTo: input.shipsTo ?? null, notes: input.notes ?? null,
+    ownerId: actor.id,
+    partId: input.partId,
+    kind: input.kind,
+    quantity: input.quantity,
+    condition: input.condition,
+    priceKind: input.priceKind,
+    priceAmount: null,
+    currency: null,
+    ...priceFields(input),
+    region: input.region,
+    shipsTo: input.shipsTo ?? null,
+    notes: input.notes ?? null,
   });
   return getListing(actor, listing.id);
 }
@@ -118,12 +151,15 @@ export async function updateListing(actor: Actor | null, listingId: number, inpu
   authorize(actor, 'listing.edit', { ownerId: listing.ownerId });
   if (input.partId !== undefined) await assertListedPart(input.partId);
   if (listing.status === 'closed' && input.status !== undefined && input.status !== 'closed') {
-    throw new ValidationError('A closed listing stays closed; post a new one.', [{ path: 'status', message: 'Closed listings cannot reopen.' }]);
+    throw new ValidationError('A closed listing stays closed; post a new one.', [
+      { path: 'status', message: 'Closed listings cannot reopen.' },
+    ]);
   }
   const kind = input.priceKind ?? listing.priceKind;
   const amount = input.priceAmount !== undefined ? input.priceAmount : listing.priceAmount;
   const currency = input.currency !== undefined ? input.currency : listing.currency;
-  if (kind === 'price' && (amount == null || !currency)) throw new ValidationError('A price needs an amount and a currency.', [{ path: 'priceAmount', message: 'Required for a price.' }]);
+  if (kind === 'price' && (amount == null || !currency))
+    throw new ValidationError('A price needs an amount and a currency.', [{ path: 'priceAmount', message: 'Required for a price.' }]);
   await listing.update({ ...input, ...priceFields({ priceKind: kind, priceAmount: amount, currency }) });
   return getListing(actor, listing.id);
 }
@@ -135,7 +171,11 @@ export async function hideListing(actor: Actor | null, listingId: number, input:
     const listing = await Listing.findByPk(listingId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!listing) throw new NotFoundError('No such listing.');
     await listing.update({ hiddenAt: input.hidden ? new Date() : null, hiddenNote: input.hidden ? input.note : null }, { transaction });
-    await recordAudit(actor, { action: input.hidden ? 'listing.hide' : 'listing.unhide', targetType: 'listing', targetId: listing.id, note: input.note }, transaction);
+    await recordAudit(
+      actor,
+      { action: input.hidden ? 'listing.hide' : 'listing.unhide', targetType: 'listing', targetId: listing.id, note: input.note },
+      transaction,
+    );
   });
   return getListing(actor, listingId);
 }

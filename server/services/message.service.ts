@@ -12,7 +12,14 @@ import { enqueueMail, kickOutbox } from './outbox.service.ts';
 import { decisionMail } from './review-mails.ts';
 
 /** Mail the other party that a message waits on the site; the text never carries anyone's address. */
-async function notify(recipientId: number, senderLogin: string, listingTitle: string, body: string, threadId: number, transaction: import('sequelize').Transaction) {
+async function notify(
+  recipientId: number,
+  senderLogin: string,
+  listingTitle: string,
+  body: string,
+  threadId: number,
+  transaction: import('sequelize').Transaction,
+) {
   const recipient = await User.findByPk(recipientId, { transaction, attributes: ['id', 'login', 'email', 'mailOptOut'] });
   if (!recipient) return;
   const excerpt = body.length > 600 ? `${body.slice(0, 600)}…` : body;
@@ -42,12 +49,19 @@ async function listingTitle(listing: Listing): Promise<string> {
  */
 async function lockThread(listing: Listing, starterId: number, transaction: Transaction): Promise<MessageThread> {
   const where = { listingId: listing.id, starterId };
-  await MessageThread.bulkCreate([{ ...where, ownerId: listing.ownerId, lastMessageAt: new Date() }], { updateOnDuplicate: ['lastMessageAt'], transaction });
+  await MessageThread.bulkCreate([{ ...where, ownerId: listing.ownerId, lastMessageAt: new Date() }], {
+    updateOnDuplicate: ['lastMessageAt'],
+    transaction,
+  });
   return (await MessageThread.findOne({ where, transaction, lock: transaction.LOCK.UPDATE }))!;
 }
 
 /** Write to a listing's owner through the site: one thread per listing and enquirer. */
-export async function sendListingMessage(actor: Actor | null, listingId: number, input: SendMessageInput): Promise<{ threadId: number; messageId: number }> {
+export async function sendListingMessage(
+  actor: Actor | null,
+  listingId: number,
+  input: SendMessageInput,
+): Promise<{ threadId: number; messageId: number }> {
   const listing = await loadListingForView(actor, listingId);
   authorize(actor, 'listing.message', { ownerId: listing.ownerId });
   if (listing.status === 'closed' || listing.hiddenAt) throw new ConflictError('This listing is closed.', 'listing_closed');
@@ -76,9 +90,20 @@ async function summarize(actor: Actor, threads: MessageThread[]): Promise<Thread
   const [listings, users, messages] = await Promise.all([
     Listing.findAll({ where: { id: [...new Set(threads.map((t) => t.listingId))] } }),
     User.findAll({ where: { id: [...new Set(threads.flatMap((t) => [t.ownerId, t.starterId]))] }, attributes: ['id', 'login'] }),
-    Message.findAll({ where: { threadId: ids }, order: [['createdAt', 'DESC'], ['id', 'DESC']] }),
+    Message.findAll({
+      where: { threadId: ids },
+      order: [
+        ['createdAt', 'DESC'],
+        ['id', 'DESC'],
+      ],
+    }),
   ]);
-  const parts = new Map((await Part.findAll({ where: { id: [...new Set(listings.map((l) => l.partId))] }, attributes: ['id', 'name'] })).map((p) => [p.id, p.name]));
+  const parts = new Map(
+    (await Part.findAll({ where: { id: [...new Set(listings.map((l) => l.partId))] }, attributes: ['id', 'name'] })).map((p) => [
+      p.id,
+      p.name,
+    ]),
+  );
   const listingMap = new Map(listings.map((l) => [l.id, l]));
   const userMap = new Map(users.map((u) => [u.id, u.login]));
   return threads.map((t) => {
@@ -100,7 +125,11 @@ async function summarize(actor: Actor, threads: MessageThread[]): Promise<Thread
 /** The signed-in maker's conversations, most recent first. */
 export async function listThreads(actor: Actor | null): Promise<ThreadSummaryDto[]> {
   authorize(actor, 'content.create');
-  const threads = await MessageThread.findAll({ where: { [Op.or]: [{ ownerId: actor.id }, { starterId: actor.id }] }, order: [['lastMessageAt', 'DESC']], limit: 200 });
+  const threads = await MessageThread.findAll({
+    where: { [Op.or]: [{ ownerId: actor.id }, { starterId: actor.id }] },
+    order: [['lastMessageAt', 'DESC']],
+    limit: 200,
+  });
   return summarize(actor, threads);
 }
 
@@ -109,16 +138,34 @@ export async function getThread(actor: Actor | null, threadId: number): Promise<
   const thread = await loadThread(actor, threadId);
   await Message.update({ readAt: new Date() }, { where: { threadId, senderId: { [Op.ne]: actor!.id }, readAt: null } });
   const [summary] = await summarize(actor!, [thread]);
-  const messages = await Message.findAll({ where: { threadId }, order: [['createdAt', 'ASC'], ['id', 'ASC']] });
-  const logins = new Map((await User.findAll({ where: { id: [thread.ownerId, thread.starterId] }, attributes: ['id', 'login'] })).map((u) => [u.id, u.login]));
+  const messages = await Message.findAll({
+    where: { threadId },
+    order: [
+      ['createdAt', 'ASC'],
+      ['id', 'ASC'],
+    ],
+  });
+  const logins = new Map(
+    (await User.findAll({ where: { id: [thread.ownerId, thread.starterId] }, attributes: ['id', 'login'] })).map((u) => [u.id, u.login]),
+  );
   return {
     ...summary!,
-    messages: messages.map((m) => ({ id: m.id, fromMe: m.senderId === actor!.id, sender: logins.get(m.senderId) ?? 'unknown', body: m.body, createdAt: m.createdAt.toISOString() })),
+    messages: messages.map((m) => ({
+      id: m.id,
+      fromMe: m.senderId === actor!.id,
+      sender: logins.get(m.senderId) ?? 'unknown',
+      body: m.body,
+      createdAt: m.createdAt.toISOString(),
+    })),
   };
 }
 
 /** Reply inside a conversation; the other party gets a mail with a link, never an address. */
-export async function replyInThread(actor: Actor | null, threadId: number, input: SendMessageInput): Promise<{ threadId: number; messageId: number }> {
+export async function replyInThread(
+  actor: Actor | null,
+  threadId: number,
+  input: SendMessageInput,
+): Promise<{ threadId: number; messageId: number }> {
   const thread = await loadThread(actor, threadId);
   const listing = await Listing.findByPk(thread.listingId);
   const me = await User.findByPk(actor!.id, { attributes: ['login'] });

@@ -66,7 +66,9 @@ export function startOutboxWorker(mailer: Mailer, appUrl: string, log: Logger, i
         log.warn({ err }, 'outbox pass failed');
         return 0;
       })
-      .finally(() => { running = null; });
+      .finally(() => {
+        running = null;
+      });
     return running;
   };
   const timer = setInterval(() => void flush(), intervalMs);

@@ -15,7 +15,8 @@ import { invalidateRegistryCounts } from './registry-count-cache.ts';
 /** Fold a duplicate part into another: actuators, runs, listings and photos move, both parts' statistics are recomputed, the trail records it. */
 export async function mergeParts(actor: Actor | null, fromId: number, input: MergePartInput) {
   authorize(actor, 'review.access');
-  if (fromId === input.intoPartId) throw new ValidationError('A part cannot be merged into itself.', [{ path: 'intoPartId', message: 'Pick another part.' }]);
+  if (fromId === input.intoPartId)
+    throw new ValidationError('A part cannot be merged into itself.', [{ path: 'intoPartId', message: 'Pick another part.' }]);
   return Part.sequelize!.transaction(async (transaction) => {
     const [from, into] = await Promise.all([
       Part.findByPk(fromId, { transaction, lock: transaction.LOCK.UPDATE }),
@@ -32,12 +33,19 @@ export async function mergeParts(actor: Actor | null, fromId: number, input: Mer
     const [listings] = await Listing.update(moved, where);
     // Photos follow, after the target's own (positions shifted past its last one).
     const lastInto = ((await PartPhoto.max('position', { where: { partId: into.id }, transaction })) as number | null) ?? -1;
-    const [photos] = await PartPhoto.update({ partId: into.id, position: literal(`position + ${lastInto + 1}`) as unknown as number }, where);
+    const [photos] = await PartPhoto.update(
+      { partId: into.id, position: literal(`position + ${lastInto + 1}`) as unknown as number },
+      where,
+    );
     await from.update({ status: 'rejected', mergedIntoId: into.id }, { transaction });
     transaction.afterCommit(invalidateRegistryCounts);
     await recomputePartStats(from.id, transaction);
     await recomputePartStats(into.id, transaction);
-    await recordAudit(actor, { action: 'part.merge', targetType: 'part', targetId: from.id, note: `into part ${into.id}: ${input.note}` }, transaction);
+    await recordAudit(
+      actor,
+      { action: 'part.merge', targetType: 'part', targetId: from.id, note: `into part ${into.id}: ${input.note}` },
+      transaction,
+    );
     return { id: from.id, mergedIntoId: into.id, moved: { actuators, runs, listings, photos } };
   });
 }

@@ -23,17 +23,31 @@ const ORDER: Record<ListPartsQuery['sort'], string> = {
   name: 'name ASC, id ASC',
 };
 
-
 /** WHERE of a search: listed parts only; a gain range matches the median and drops parts without runs. */
 export function partSearchWhere(q: ListPartsQuery): { sql: string; params: unknown[] } {
   const parts = ["status = 'accepted'"];
   const params: unknown[] = [];
-  if (q.category) { parts.push('category = ?'); params.push(q.category); }
+  if (q.category) {
+    parts.push('category = ?');
+    params.push(q.category);
+  }
   if (q.gainMin !== undefined || q.gainMax !== undefined) parts.push('gain_median_nm_per_v IS NOT NULL');
-  if (q.gainMin !== undefined) { parts.push('gain_median_nm_per_v >= ?'); params.push(q.gainMin); }
-  if (q.gainMax !== undefined) { parts.push('gain_median_nm_per_v <= ?'); params.push(q.gainMax); }
-  if (q.minRuns !== undefined) { parts.push('accepted_run_count >= ?'); params.push(q.minRuns); }
-  if (q.maxVolts !== undefined) { parts.push('safe_volts <= ?'); params.push(q.maxVolts); }
+  if (q.gainMin !== undefined) {
+    parts.push('gain_median_nm_per_v >= ?');
+    params.push(q.gainMin);
+  }
+  if (q.gainMax !== undefined) {
+    parts.push('gain_median_nm_per_v <= ?');
+    params.push(q.gainMax);
+  }
+  if (q.minRuns !== undefined) {
+    parts.push('accepted_run_count >= ?');
+    params.push(q.minRuns);
+  }
+  if (q.maxVolts !== undefined) {
+    parts.push('safe_volts <= ?');
+    params.push(q.maxVolts);
+  }
   if (q.q) {
     const like = containsPattern(q.q);
     parts.push('(name LIKE ? OR salvage_source LIKE ?)');
@@ -50,11 +64,16 @@ function sortIndex(q: ListPartsQuery): string | null {
   if (q.q) return null;
   const noGainRange = q.gainMin === undefined && q.gainMax === undefined;
   switch (q.sort) {
-    case 'gain': return q.category ? 'parts_status_category_gain' : 'parts_status_gain_median_nm_per_v';
-    case '-gain': return q.category ? 'parts_status_category_gain_desc' : 'parts_status_gain_desc';
-    case '-runs': return noGainRange ? 'parts_status_runs_desc' : null;
-    case 'newest': return noGainRange ? 'parts_status_created_desc' : null;
-    default: return null;
+    case 'gain':
+      return q.category ? 'parts_status_category_gain' : 'parts_status_gain_median_nm_per_v';
+    case '-gain':
+      return q.category ? 'parts_status_category_gain_desc' : 'parts_status_gain_desc';
+    case '-runs':
+      return noGainRange ? 'parts_status_runs_desc' : null;
+    case 'newest':
+      return noGainRange ? 'parts_status_created_desc' : null;
+    default:
+      return null;
   }
 }
 

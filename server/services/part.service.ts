@@ -1,6 +1,13 @@
 import { Op } from 'sequelize';
 import { can, type Actor } from '@shared/policies.ts';
-import type { ListPartsQuery, PartDetailDto, PartListDto, PartListItemDto, ProposePartInput, GainHistogramDto } from '@shared/schemas/part.ts';
+import type {
+  ListPartsQuery,
+  PartDetailDto,
+  PartListDto,
+  PartListItemDto,
+  ProposePartInput,
+  GainHistogramDto,
+} from '@shared/schemas/part.ts';
 import { priceLabel } from '@shared/schemas/listing.ts';
 import { expectedGainForPart } from '@shared/workbench/part-expected-gain.ts';
 import { Part } from '../models/part.model.ts';
@@ -38,14 +45,21 @@ export async function gainHistogram(): Promise<GainHistogramDto> {
   const perDecade = 5;
   const rows = (await Part.findAll({
     where: { status: 'accepted', gainMedianNmPerV: { [Op.gt]: 0 } },
-    attributes: [[Part.sequelize!.literal(`FLOOR(LOG10(gain_median_nm_per_v) * ${perDecade})`), 'bin'], [Part.sequelize!.fn('COUNT', Part.sequelize!.col('id')), 'count']],
+    attributes: [
+      [Part.sequelize!.literal(`FLOOR(LOG10(gain_median_nm_per_v) * ${perDecade})`), 'bin'],
+      [Part.sequelize!.fn('COUNT', Part.sequelize!.col('id')), 'count'],
+    ],
     group: ['bin'],
     order: [[Part.sequelize!.literal('bin'), 'ASC']],
     raw: true,
   })) as unknown as { bin: number; count: number }[];
   return {
     binsPerDecade: perDecade,
-    bins: rows.map((r) => ({ fromNmPerV: 10 ** (Number(r.bin) / perDecade), toNmPerV: 10 ** ((Number(r.bin) + 1) / perDecade), count: Number(r.count) })),
+    bins: rows.map((r) => ({
+      fromNmPerV: 10 ** (Number(r.bin) / perDecade),
+      toNmPerV: 10 ** ((Number(r.bin) + 1) / perDecade),
+      count: Number(r.count),
+    })),
   };
 }
 
@@ -56,12 +70,24 @@ export async function getPart(actor: Actor | null, partId: number): Promise<Part
     throw new NotFoundError('No such part.');
   }
   const [runs, listings, proposer, photos] = await Promise.all([
-    CalibrationRun.findAll({ where: { partId, status: 'accepted' }, order: [['createdAt', 'ASC'], ['id', 'ASC']], limit: 2000 }),
+    CalibrationRun.findAll({
+      where: { partId, status: 'accepted' },
+      order: [
+        ['createdAt', 'ASC'],
+        ['id', 'ASC'],
+      ],
+      limit: 2000,
+    }),
     Listing.findAll({ where: { partId, status: { [Op.ne]: 'closed' }, hiddenAt: null }, order: [['createdAt', 'DESC']], limit: 50 }),
     part.proposedById ? User.findByPk(part.proposedById, { attributes: ['login'] }) : null,
     photosBySubject('part', [part.id]),
   ]);
-  const builds = new Map((await Build.findAll({ where: { id: [...new Set(runs.map((r) => r.buildId))] }, attributes: ['id', 'title', 'ownerId'] })).map((b) => [b.id, b]));
+  const builds = new Map(
+    (await Build.findAll({ where: { id: [...new Set(runs.map((r) => r.buildId))] }, attributes: ['id', 'title', 'ownerId'] })).map((b) => [
+      b.id,
+      b,
+    ]),
+  );
   const userIds = [...new Set([...[...builds.values()].map((b) => b.ownerId), ...listings.map((l) => l.ownerId)])];
   const users = new Map((await User.findAll({ where: { id: userIds }, attributes: ['id', 'login'] })).map((u) => [u.id, u.login]));
   const expected = expectedGainForPart(part, 'single');

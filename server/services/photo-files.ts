@@ -7,7 +7,11 @@ import { Photo } from '../models/photo.model.ts';
 import { ValidationError } from '../errors.ts';
 import { processPhoto, removeFiles, withContentLocks, writeVariants, type ProcessedPhoto } from './photo-storage.ts';
 
-interface StoredFiles { contentHash: string; displayFile: string; thumbFile: string }
+interface StoredFiles {
+  contentHash: string;
+  displayFile: string;
+  thumbFile: string;
+}
 
 /** One alt text per file, in order, or a single one for all. */
 export function altsFor(alt: string[], count: number): string[] {
@@ -19,7 +23,13 @@ export function altsFor(alt: string[], count: number): string[] {
 
 /** The columns a converted photo fills in any photo table (files, hash, display size). */
 export function storedColumns(p: ProcessedPhoto) {
-  return { contentHash: p.contentHash, displayFile: p.display.file, thumbFile: p.thumb.file, width: p.display.width, height: p.display.height };
+  return {
+    contentHash: p.contentHash,
+    displayFile: p.display.file,
+    thumbFile: p.thumb.file,
+    width: p.display.width,
+    height: p.display.height,
+  };
 }
 
 /** Check and convert every upload (one at a time, bounding memory); the first refusal names its file index. */
@@ -56,16 +66,19 @@ export async function pruneAfterRemoval(uploadsDir: string, rows: StoredFiles[])
  * same content, and the original failure is rethrown.
  */
 export async function storeThenRecord<T>(uploadsDir: string, processed: ProcessedPhoto[], record: () => Promise<T>): Promise<T> {
-  return withContentLocks(processed.map((p) => p.contentHash), async () => {
-    const created = await writeVariants(uploadsDir, processed);
-    try {
-      return await record();
-    } catch (err) {
-      const byHash = new Map<string, string[]>();
-      for (const file of created) byHash.set(file.slice(0, 64), [...(byHash.get(file.slice(0, 64)) ?? []), file]);
-      // The original failure is what the client needs to hear about; a leftover file is the lesser harm.
-      await pruneUnreferenced(uploadsDir, byHash).catch(() => undefined);
-      throw err;
-    }
-  });
+  return withContentLocks(
+    processed.map((p) => p.contentHash),
+    async () => {
+      const created = await writeVariants(uploadsDir, processed);
+      try {
+        return await record();
+      } catch (err) {
+        const byHash = new Map<string, string[]>();
+        for (const file of created) byHash.set(file.slice(0, 64), [...(byHash.get(file.slice(0, 64)) ?? []), file]);
+        // The original failure is what the client needs to hear about; a leftover file is the lesser harm.
+        await pruneUnreferenced(uploadsDir, byHash).catch(() => undefined);
+        throw err;
+      }
+    },
+  );
 }

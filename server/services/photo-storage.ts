@@ -29,7 +29,12 @@ const ACCEPTED = new Map<string, string>([
   ['image/png', 'png'],
   ['image/webp', 'webp'],
   ['image/avif', 'heif'],
-  ...(readsHeic() ? ([['image/heic', 'heif'], ['image/heif', 'heif']] as const) : []),
+  ...(readsHeic()
+    ? ([
+        ['image/heic', 'heif'],
+        ['image/heif', 'heif'],
+      ] as const)
+    : []),
 ]);
 
 /** The image types an upload may be, for messages and the client's `accept` attribute. */
@@ -77,7 +82,12 @@ async function convert(input: Buffer, index: number): Promise<ProcessedPhoto> {
   const sniffed = await fileTypeFromBuffer(input);
   const decoder = sniffed && ACCEPTED.get(sniffed.mime);
   if (!decoder) {
-    throw reject(415, 'unsupported_media_type', `Photos must be ${ACCEPTED_IMAGE_TYPES.map((t) => t.slice(6).toUpperCase()).join(', ')}.`, index);
+    throw reject(
+      415,
+      'unsupported_media_type',
+      `Photos must be ${ACCEPTED_IMAGE_TYPES.map((t) => t.slice(6).toUpperCase()).join(', ')}.`,
+      index,
+    );
   }
   let meta: Metadata;
   try {
@@ -93,13 +103,18 @@ async function convert(input: Buffer, index: number): Promise<ProcessedPhoto> {
 
   const oriented = sharp(input, { limitInputPixels: MAX_INPUT_PIXELS, failOn: 'warning' }).rotate();
   const variant = (edge: number, quality: number) =>
-    oriented.clone().resize(edge, edge, { fit: 'inside', withoutEnlargement: true }).webp({ quality }).toBuffer({ resolveWithObject: true });
+    oriented
+      .clone()
+      .resize(edge, edge, { fit: 'inside', withoutEnlargement: true })
+      .webp({ quality })
+      .toBuffer({ resolveWithObject: true });
   let display: Awaited<ReturnType<typeof variant>>;
   let thumb: Awaited<ReturnType<typeof variant>>;
   try {
     [display, thumb] = await Promise.all([variant(DISPLAY_EDGE, 82), variant(THUMB_EDGE, 76)]);
   } catch (err) {
-    if (err instanceof Error && /pixel limit/i.test(err.message)) throw reject(413, 'image_too_large', 'The image has too many pixels.', index);
+    if (err instanceof Error && /pixel limit/i.test(err.message))
+      throw reject(413, 'image_too_large', 'The image has too many pixels.', index);
     throw reject(400, 'unreadable_image', 'The image is damaged or incomplete.', index);
   }
   const contentHash = sha256(display.data);
@@ -111,7 +126,11 @@ async function convert(input: Buffer, index: number): Promise<ProcessedPhoto> {
 }
 
 const isMissing = (err: unknown) => (err as NodeJS.ErrnoException).code === 'ENOENT';
-const exists = (path: string) => stat(path).then(() => true, (err) => (isMissing(err) ? false : Promise.reject(err)));
+const exists = (path: string) =>
+  stat(path).then(
+    () => true,
+    (err) => (isMissing(err) ? false : Promise.reject(err)),
+  );
 
 /**
  * Put the variants on disk under their content-hash names and return only the files this call

@@ -16,7 +16,10 @@ export interface UploadPhotosInput {
   entryId?: number;
 }
 
-const order: Array<[string, 'ASC']> = [['position', 'ASC'], ['id', 'ASC']];
+const order: Array<[string, 'ASC']> = [
+  ['position', 'ASC'],
+  ['id', 'ASC'],
+];
 
 async function loadPhoto(buildId: number, photoId: number, transaction: Transaction): Promise<Photo> {
   const photo = await Photo.findOne({ where: { id: photoId, buildId }, transaction });
@@ -26,7 +29,10 @@ async function loadPhoto(buildId: number, photoId: number, transaction: Transact
 
 async function assertEntryOfBuild(buildId: number, entryId: number, transaction: Transaction): Promise<void> {
   const entry = await LogEntry.findOne({ where: { id: entryId, buildId }, attributes: ['id'], transaction });
-  if (!entry) throw new ValidationError('entryId: not a log entry of this build.', [{ path: 'entryId', message: 'Not a log entry of this build.', code: 'invalid_entry' }]);
+  if (!entry)
+    throw new ValidationError('entryId: not a log entry of this build.', [
+      { path: 'entryId', message: 'Not a log entry of this build.', code: 'invalid_entry' },
+    ]);
 }
 
 /** The build's photos in display order, for the build page and the builds service. */
@@ -45,7 +51,12 @@ export async function assertCanAddPhotos(actor: Actor | null, buildId: number): 
  * files land first, then all rows in one transaction; on any failure the files this request
  * created are removed again unless another row already uses the same content.
  */
-export async function uploadPhotos(actor: Actor | null, buildId: number, input: UploadPhotosInput, uploadsDir: string): Promise<PhotoDto[]> {
+export async function uploadPhotos(
+  actor: Actor | null,
+  buildId: number,
+  input: UploadPhotosInput,
+  uploadsDir: string,
+): Promise<PhotoDto[]> {
   const alts = altsFor(input.alt, input.files.length);
   const processed = await processAll(input.files);
   return storeThenRecord(uploadsDir, processed, async () => {
@@ -56,10 +67,12 @@ export async function uploadPhotos(actor: Actor | null, buildId: number, input: 
       const first = (last ?? -1) + 1;
       const photos: Photo[] = [];
       for (const [i, p] of processed.entries()) {
-        photos.push(await Photo.create(
-          { ...storedColumns(p), buildId, entryId: input.entryId ?? null, ownerId: build.ownerId, alt: alts[i]!, position: first + i },
-          { transaction },
-        ));
+        photos.push(
+          await Photo.create(
+            { ...storedColumns(p), buildId, entryId: input.entryId ?? null, ownerId: build.ownerId, alt: alts[i]!, position: first + i },
+            { transaction },
+          ),
+        );
       }
       await markEdited(build, transaction);
       return photos;

@@ -22,7 +22,13 @@ const visibleTarget: Record<ReportTargetType, (actor: Actor, id: number) => Prom
 export async function createReport(actor: Actor | null, input: CreateReportInput) {
   authorize(actor, 'content.create');
   await visibleTarget[input.targetType](actor, input.targetId);
-  const report = await Report.create({ reporterId: actor.id, targetType: input.targetType, targetId: input.targetId, reason: input.reason, note: input.note ?? null });
+  const report = await Report.create({
+    reporterId: actor.id,
+    targetType: input.targetType,
+    targetId: input.targetId,
+    reason: input.reason,
+    note: input.note ?? null,
+  });
   return { id: report.id, status: report.status, targetType: report.targetType, targetId: report.targetId, reason: report.reason };
 }
 

@@ -4,7 +4,14 @@ import { APP_URL } from './outbox.service.ts';
 const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
 /** One notice: a headline, what happened, the moderator's note and a link. */
-export function decisionMail(opts: { subject: string; greeting: string; lines: string[]; note: string | null; path: string; linkText: string }): Omit<OutgoingMail, 'to'> {
+export function decisionMail(opts: {
+  subject: string;
+  greeting: string;
+  lines: string[];
+  note: string | null;
+  path: string;
+  linkText: string;
+}): Omit<OutgoingMail, 'to'> {
   const url = `${APP_URL}${opts.path}`;
   const text = [
     `Hello ${opts.greeting},`,

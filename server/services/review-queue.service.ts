@@ -22,7 +22,10 @@ const LIMIT = 100;
 const countBy = (rows: { buildId: number }[], id: number) => rows.filter((r) => r.buildId === id).length;
 
 async function authors(ids: (number | null)[]) {
-  const users = await User.findAll({ where: { id: [...new Set(ids.filter((i): i is number => i !== null))] }, attributes: ['id', 'login'] });
+  const users = await User.findAll({
+    where: { id: [...new Set(ids.filter((i): i is number => i !== null))] },
+    attributes: ['id', 'login'],
+  });
   const map = new Map(users.map((u) => [u.id, { id: u.id, login: u.login }]));
   return (id: number | null) => (id === null ? null : (map.get(id) ?? { id, login: 'unknown' }));
 }
@@ -86,7 +89,11 @@ async function queueRuns(runs: CalibrationRun[]): Promise<QueueRunDto[]> {
       fit: dto.fit,
       points,
       expectedGainNmPerV: expected?.gainNmPerV ?? null,
-      flags: plausibilityFlags({ n: r.pointCount, gainNmPerV: r.gainNmPerV, r2: r.r2, hysteresisPctFs: r.hysteresisPctFs }, gains, expected?.gainNmPerV ?? null),
+      flags: plausibilityFlags(
+        { n: r.pointCount, gainNmPerV: r.gainNmPerV, r2: r.r2, hysteresisPctFs: r.hysteresisPctFs },
+        gains,
+        expected?.gainNmPerV ?? null,
+      ),
       createdAt: r.createdAt.toISOString(),
     };
   });
@@ -112,11 +119,46 @@ async function queueReports(reports: Report[]): Promise<QueueReportDto[]> {
 export async function getReviewQueue(actor: Actor | null): Promise<ReviewQueueDto> {
   authorize(actor, 'review.access');
   const [builds, edited, runs, parts, reports] = await Promise.all([
-    Build.findAndCountAll({ where: { status: 'submitted' }, order: [['submittedAt', 'ASC'], ['id', 'ASC']], limit: LIMIT }),
-    Build.findAndCountAll({ where: { status: 'published', editedSinceReview: true }, order: [['updatedAt', 'ASC'], ['id', 'ASC']], limit: LIMIT }),
-    CalibrationRun.findAndCountAll({ where: { status: 'pending', buildId: { [Op.notIn]: Build.sequelize!.literal("(SELECT id FROM builds WHERE status = 'draft')") } }, order: [['createdAt', 'ASC'], ['id', 'ASC']], limit: LIMIT }),
-    Part.findAndCountAll({ where: { status: 'proposed', mergedIntoId: null }, order: [['createdAt', 'ASC'], ['id', 'ASC']], limit: LIMIT }),
-    Report.findAndCountAll({ where: { status: 'open' }, order: [['createdAt', 'ASC'], ['id', 'ASC']], limit: LIMIT }),
+    Build.findAndCountAll({
+      where: { status: 'submitted' },
+      order: [
+        ['submittedAt', 'ASC'],
+        ['id', 'ASC'],
+      ],
+      limit: LIMIT,
+    }),
+    Build.findAndCountAll({
+      where: { status: 'published', editedSinceReview: true },
+      order: [
+        ['updatedAt', 'ASC'],
+        ['id', 'ASC'],
+      ],
+      limit: LIMIT,
+    }),
+    CalibrationRun.findAndCountAll({
+      where: { status: 'pending', buildId: { [Op.notIn]: Build.sequelize!.literal("(SELECT id FROM builds WHERE status = 'draft')") } },
+      order: [
+        ['createdAt', 'ASC'],
+        ['id', 'ASC'],
+      ],
+      limit: LIMIT,
+    }),
+    Part.findAndCountAll({
+      where: { status: 'proposed', mergedIntoId: null },
+      order: [
+        ['createdAt', 'ASC'],
+        ['id', 'ASC'],
+      ],
+      limit: LIMIT,
+    }),
+    Report.findAndCountAll({
+      where: { status: 'open' },
+      order: [
+        ['createdAt', 'ASC'],
+        ['id', 'ASC'],
+      ],
+      limit: LIMIT,
+    }),
   ]);
   const partAuthor = await authors(parts.rows.map((p) => p.proposedById));
   return {

@@ -39,7 +39,12 @@ export async function decideBuild(actor: Actor | null, buildId: number, input: B
     if (build.status !== 'submitted' && !editedPublished) throw notWaiting('build');
     const status = BUILD_OUTCOME[input.decision];
     await build.update(
-      { status, reviewNote: input.note ?? null, editedSinceReview: false, publishedAt: status === 'published' ? (build.publishedAt ?? new Date()) : build.publishedAt },
+      {
+        status,
+        reviewNote: input.note ?? null,
+        editedSinceReview: false,
+        publishedAt: status === 'published' ? (build.publishedAt ?? new Date()) : build.publishedAt,
+      },
       { transaction },
     );
     await recordAudit(me, { action: `build.${input.decision}`, targetType: 'build', targetId: build.id, note: input.note }, transaction);
@@ -51,7 +56,18 @@ export async function decideBuild(actor: Actor | null, buildId: number, input: B
         decline: [`Your build "${build.title}" was declined.`],
       }[input.decision];
       const subject = { publish: 'published', return: 'returned with notes', decline: 'declined' }[input.decision];
-      await enqueueMail(owner, decisionMail({ subject: `Build ${subject}: ${build.title}`, greeting: owner.login, lines, note: input.note ?? null, path: `/builds/${build.id}`, linkText: 'Open the build' }), { essential: true, transaction });
+      await enqueueMail(
+        owner,
+        decisionMail({
+          subject: `Build ${subject}: ${build.title}`,
+          greeting: owner.login,
+          lines,
+          note: input.note ?? null,
+          path: `/builds/${build.id}`,
+          linkText: 'Open the build',
+        }),
+        { essential: true, transaction },
+      );
     }
     return { id: build.id, status };
   });
@@ -78,7 +94,11 @@ export async function decideRun(actor: Actor | null, runId: number, input: Accep
         decisionMail({
           subject: `Calibration run ${status}: ${gain}`,
           greeting: owner.login,
-          lines: [status === 'accepted' ? `Your calibration run (${gain}) was accepted and now counts in the parts registry.` : `Your calibration run (${gain}) was rejected; it does not count in the parts registry.`],
+          lines: [
+            status === 'accepted'
+              ? `Your calibration run (${gain}) was accepted and now counts in the parts registry.`
+              : `Your calibration run (${gain}) was rejected; it does not count in the parts registry.`,
+          ],
           note: input.note ?? null,
           path: `/builds/${run.buildId}`,
           linkText: 'Open the build',
@@ -107,7 +127,11 @@ export async function decidePart(actor: Actor | null, partId: number, input: Acc
         decisionMail({
           subject: `Part ${status}: ${part.name}`,
           greeting: proposer.login,
-          lines: [status === 'accepted' ? `The part you proposed, "${part.name}", is now listed in the parts registry.` : `The part you proposed, "${part.name}", was not added to the parts registry.`],
+          lines: [
+            status === 'accepted'
+              ? `The part you proposed, "${part.name}", is now listed in the parts registry.`
+              : `The part you proposed, "${part.name}", was not added to the parts registry.`,
+          ],
           note: input.note ?? null,
           path: `/parts/${part.id}`,
           linkText: 'Open the part',

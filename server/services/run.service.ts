@@ -54,7 +54,8 @@ export async function getRun(actor: Actor | null, runId: number): Promise<RunDto
   const run = await CalibrationRun.findByPk(runId);
   if (!run) throw new NotFoundError('No such calibration run.');
   await loadBuildForView(actor, run.buildId);
-  if (run.status === 'rejected' && !can(actor, 'build.view-unpublished', { ownerId: run.ownerId })) throw new NotFoundError('No such calibration run.');
+  if (run.status === 'rejected' && !can(actor, 'build.view-unpublished', { ownerId: run.ownerId }))
+    throw new NotFoundError('No such calibration run.');
   return presentRun(run);
 }
 
@@ -64,7 +65,8 @@ export async function deleteRun(actor: Actor | null, runId: number): Promise<voi
     const run = await CalibrationRun.findByPk(runId, { transaction });
     if (!run) throw new NotFoundError('No such calibration run.');
     await loadActuatorForEdit(actor, run.actuatorId, transaction);
-    if (run.status === 'accepted') throw new ConflictError('Accepted runs count in the parts registry and cannot be deleted.', 'run_accepted');
+    if (run.status === 'accepted')
+      throw new ConflictError('Accepted runs count in the parts registry and cannot be deleted.', 'run_accepted');
     await run.destroy({ transaction });
   });
 }

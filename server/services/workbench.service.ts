@@ -28,7 +28,8 @@ export function asBadRequest<T>(compute: () => T): T {
     if (err instanceof RangeError) throw new AppError(400, errorCode(err), sentence(err.message));
     throw err;
   }
-  if (hasNonFinite(result)) throw new AppError(400, 'out_of_range', 'These values are too large or too small to calculate with; try other units.');
+  if (hasNonFinite(result))
+    throw new AppError(400, 'out_of_range', 'These values are too large or too small to calculate with; try other units.');
   return result;
 }
 

@@ -14,7 +14,17 @@ export interface Formatted {
 const MINUS = '\u2212';
 const GROUP = '\u202F';
 const SUPERSCRIPT: Record<string, string> = {
-  '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹',
+  '-': '⁻',
+  '0': '⁰',
+  '1': '¹',
+  '2': '²',
+  '3': '³',
+  '4': '⁴',
+  '5': '⁵',
+  '6': '⁶',
+  '7': '⁷',
+  '8': '⁸',
+  '9': '⁹',
 };
 
 const superscript = (n: number) => String(n).replace(/./g, (c) => SUPERSCRIPT[c] ?? c);
@@ -50,7 +60,10 @@ export function formatFixed(value: number | null | undefined, decimals: number):
  * decimal place (102.6 ± 1.3; 23 ± 12; 100.0000 ± 0.0012) [S: GUM 7.2.6]. Without a usable
  * uncertainty the value gets 4 significant figures and `uncertainty` is null.
  */
-export function formatWithUncertainty(value: number, uncertainty: number | null | undefined): { value: string; uncertainty: string | null } {
+export function formatWithUncertainty(
+  value: number,
+  uncertainty: number | null | undefined,
+): { value: string; uncertainty: string | null } {
   if (value === null || value === undefined || !Number.isFinite(value)) return { value: '—', uncertainty: null };
   if (uncertainty === null || uncertainty === undefined || !(uncertainty > 0) || !Number.isFinite(uncertainty)) {
     return { value: formatSig(value), uncertainty: null };
@@ -85,11 +98,20 @@ export function formatPlusMinus(value: number, uncertainty: number | null | unde
 /** A short figure for cards and tables: `sig` significant figures without trailing zeros (104, 23.5, 0.0123). */
 export function formatShort(value: number | null | undefined, sig = 3): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '—';
-  return formatSig(Number(value.toPrecision(sig)), sig).replace(/(\.\d*?)0+($|\s)/, '$1$2').replace(/\.($|\s)/, '$1');
+  return formatSig(Number(value.toPrecision(sig)), sig)
+    .replace(/(\.\d*?)0+($|\s)/, '$1$2')
+    .replace(/\.($|\s)/, '$1');
 }
 
 const PREFIXES: readonly (readonly [number, string])[] = [
-  [1e-12, 'p'], [1e-9, 'n'], [1e-6, 'µ'], [1e-3, 'm'], [1, ''], [1e3, 'k'], [1e6, 'M'], [1e9, 'G'],
+  [1e-12, 'p'],
+  [1e-9, 'n'],
+  [1e-6, 'µ'],
+  [1e-3, 'm'],
+  [1, ''],
+  [1e3, 'k'],
+  [1e6, 'M'],
+  [1e9, 'G'],
 ];
 
 /**

@@ -80,13 +80,21 @@ export function modifiedZScore(x: number, sample: readonly number[]): number | n
 const fmt = (x: number) => Number(x.toPrecision(3)).toString();
 
 /** The flags of one run, given the gains (nm/V, magnitudes) of the part's accepted runs and its expected gain. */
-export function plausibilityFlags(run: RunForFlags, acceptedGainsNmPerV: readonly number[], expectedGainNmPerV: number | null): PlausibilityFlag[] {
+export function plausibilityFlags(
+  run: RunForFlags,
+  acceptedGainsNmPerV: readonly number[],
+  expectedGainNmPerV: number | null,
+): PlausibilityFlag[] {
   const flags: PlausibilityFlag[] = [];
   const gain = Math.abs(run.gainNmPerV);
-  if (run.r2 !== null && run.r2 < POOR_FIT_R2) flags.push({ code: 'poor-fit', message: `R² ${run.r2.toFixed(4)} is below ${POOR_FIT_R2}.` });
+  if (run.r2 !== null && run.r2 < POOR_FIT_R2)
+    flags.push({ code: 'poor-fit', message: `R² ${run.r2.toFixed(4)} is below ${POOR_FIT_R2}.` });
   if (run.n < FEW_POINTS) flags.push({ code: 'few-points', message: `Only ${run.n} points (fewer than ${FEW_POINTS}).` });
   if (run.hysteresisPctFs !== null && run.hysteresisPctFs > LARGE_HYSTERESIS_PCT) {
-    flags.push({ code: 'large-hysteresis', message: `Hysteresis ${fmt(run.hysteresisPctFs)} % of span exceeds ${LARGE_HYSTERESIS_PCT} %.` });
+    flags.push({
+      code: 'large-hysteresis',
+      message: `Hysteresis ${fmt(run.hysteresisPctFs)} % of span exceeds ${LARGE_HYSTERESIS_PCT} %.`,
+    });
   }
   const median = summarize(acceptedGainsNmPerV).median;
   let slip = false;
@@ -95,7 +103,10 @@ export function plausibilityFlags(run: RunForFlags, acceptedGainsNmPerV: readonl
     const match = matchUnitSlip(ratio);
     if (match) {
       slip = true;
-      flags.push({ code: 'unit-slip', message: `Gain is ${fmt(ratio)}× the part median ${fmt(median)} nm/V — close to a factor of ${match.label} (${match.cause}).` });
+      flags.push({
+        code: 'unit-slip',
+        message: `Gain is ${fmt(ratio)}× the part median ${fmt(median)} nm/V — close to a factor of ${match.label} (${match.cause}).`,
+      });
     }
   }
   const z = modifiedZScore(gain, acceptedGainsNmPerV);
@@ -105,7 +116,10 @@ export function plausibilityFlags(run: RunForFlags, acceptedGainsNmPerV: readonl
   if (expectedGainNmPerV !== null && expectedGainNmPerV > 0) {
     const ratio = gain / expectedGainNmPerV;
     if (ratio < EXPECTED_RATIO_BAND[0] || ratio > EXPECTED_RATIO_BAND[1]) {
-      flags.push({ code: 'expected-mismatch', message: `Measured is ${fmt(ratio)}× the expected ${fmt(expectedGainNmPerV)} nm/V (band ${EXPECTED_RATIO_BAND[0]}–${EXPECTED_RATIO_BAND[1]}).` });
+      flags.push({
+        code: 'expected-mismatch',
+        message: `Measured is ${fmt(ratio)}× the expected ${fmt(expectedGainNmPerV)} nm/V (band ${EXPECTED_RATIO_BAND[0]}–${EXPECTED_RATIO_BAND[1]}).`,
+      });
     }
   }
   return flags;

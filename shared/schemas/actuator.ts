@@ -27,7 +27,9 @@ export const createActuatorInput = z.strictObject({
 });
 export type CreateActuatorInput = z.infer<typeof createActuatorInput>;
 
-export const updateActuatorInput = createActuatorInput.partial().refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change.' });
+export const updateActuatorInput = createActuatorInput
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change.' });
 export type UpdateActuatorInput = z.infer<typeof updateActuatorInput>;
 
 export const actuatorIdParams = z.strictObject({ actuatorId: z.coerce.number().int().positive() });

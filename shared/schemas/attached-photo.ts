@@ -18,7 +18,10 @@ export interface AttachedPhotoDto {
 }
 
 export const partPhotoParams = z.strictObject({ partId: z.coerce.number().int().positive(), photoId: z.coerce.number().int().positive() });
-export const listingPhotoParams = z.strictObject({ listingId: z.coerce.number().int().positive(), photoId: z.coerce.number().int().positive() });
+export const listingPhotoParams = z.strictObject({
+  listingId: z.coerce.number().int().positive(),
+  photoId: z.coerce.number().int().positive(),
+});
 
 /** `PATCH …/photos/:photoId`: a better description for one photo. */
 export const updateAttachedPhotoInput = z.strictObject({

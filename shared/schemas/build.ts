@@ -1,7 +1,14 @@
 import { z } from 'zod';
 import type { ActuatorDto } from './actuator.ts';
 
-export const INSTRUMENT_KINDS = ['tunnelling-microscope', 'force-microscope', 'profilometer', 'positioning-stage', 'manipulator', 'other'] as const;
+export const INSTRUMENT_KINDS = [
+  'tunnelling-microscope',
+  'force-microscope',
+  'profilometer',
+  'positioning-stage',
+  'manipulator',
+  'other',
+] as const;
 export type InstrumentKind = (typeof INSTRUMENT_KINDS)[number];
 export const BUILD_STAGES = ['planning', 'assembling', 'first-signal', 'working', 'retired'] as const;
 export type BuildStage = (typeof BUILD_STAGES)[number];

@@ -33,7 +33,12 @@ const listingFields = {
   condition: z.enum(LISTING_CONDITIONS),
   priceKind: z.enum(PRICE_KINDS),
   priceAmount: z.number().min(0).max(1_000_000).multipleOf(0.01).nullable().optional(),
-  currency: z.string().trim().regex(/^[A-Z]{3}$/, 'A three-letter currency code such as EUR.').nullable().optional(),
+  currency: z
+    .string()
+    .trim()
+    .regex(/^[A-Z]{3}$/, 'A three-letter currency code such as EUR.')
+    .nullable()
+    .optional(),
   region: text(80).min(2),
   shipsTo: text(160).optional(),
   notes: text(4000).optional(),
@@ -42,7 +47,9 @@ const listingFields = {
 const priceRule = (v: { priceKind?: PriceKind; priceAmount?: number | null; currency?: string | null }) =>
   v.priceKind !== 'price' || (v.priceAmount != null && !!v.currency);
 
-export const createListingInput = z.strictObject(listingFields).refine(priceRule, { message: 'A price needs an amount and a currency.', path: ['priceAmount'] });
+export const createListingInput = z
+  .strictObject(listingFields)
+  .refine(priceRule, { message: 'A price needs an amount and a currency.', path: ['priceAmount'] });
 export type CreateListingInput = z.infer<typeof createListingInput>;
 
 export const updateListingInput = z

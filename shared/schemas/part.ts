@@ -73,7 +73,10 @@ export const listPartsQuery = z
     pageSize: z.coerce.number().int().min(1).max(100).default(25),
     format: z.enum(['json', 'csv']).optional(),
   })
-  .refine((v) => v.gainMin === undefined || v.gainMax === undefined || v.gainMin <= v.gainMax, { message: 'gainMin must not exceed gainMax.', path: ['gainMin'] });
+  .refine((v) => v.gainMin === undefined || v.gainMax === undefined || v.gainMin <= v.gainMax, {
+    message: 'gainMin must not exceed gainMax.',
+    path: ['gainMin'],
+  });
 export type ListPartsQuery = z.infer<typeof listPartsQuery>;
 
 /** A part as pickers show it (no geometry): registry rows and actuators' parts both fit. */
@@ -91,10 +94,23 @@ export interface PartListItemDto extends Omit<PartChoiceDto, 'stats'>, PartStats
 /** A registry row in the shape pickers and actuators use (figures under `stats`). */
 export function choiceFromListItem(p: PartListItemDto): PartChoiceDto {
   return {
-    id: p.id, name: p.name, category: p.category, status: p.status, salvageSource: p.salvageSource, material: p.material, safeVolts: p.safeVolts, capacitanceNf: p.capacitanceNf,
+    id: p.id,
+    name: p.name,
+    category: p.category,
+    status: p.status,
+    salvageSource: p.salvageSource,
+    material: p.material,
+    safeVolts: p.safeVolts,
+    capacitanceNf: p.capacitanceNf,
     stats: {
-      acceptedRunCount: p.acceptedRunCount, buildCount: p.buildCount, gainMedianNmPerV: p.gainMedianNmPerV, gainP25NmPerV: p.gainP25NmPerV,
-      gainP75NmPerV: p.gainP75NmPerV, gainMinNmPerV: p.gainMinNmPerV, gainMaxNmPerV: p.gainMaxNmPerV, hysteresisMedianPct: p.hysteresisMedianPct,
+      acceptedRunCount: p.acceptedRunCount,
+      buildCount: p.buildCount,
+      gainMedianNmPerV: p.gainMedianNmPerV,
+      gainP25NmPerV: p.gainP25NmPerV,
+      gainP75NmPerV: p.gainP75NmPerV,
+      gainMinNmPerV: p.gainMinNmPerV,
+      gainMaxNmPerV: p.gainMaxNmPerV,
+      hysteresisMedianPct: p.hysteresisMedianPct,
     },
   };
 }

@@ -8,7 +8,10 @@ const note = z.string().trim().max(4000);
 /** Publish needs no note; return and decline must say why. */
 export const buildDecisionInput = z
   .strictObject({ decision: z.enum(['publish', 'return', 'decline']), note: note.optional() })
-  .refine((v) => v.decision === 'publish' || (v.note?.length ?? 0) > 0, { message: 'A note is required to return or decline.', path: ['note'] });
+  .refine((v) => v.decision === 'publish' || (v.note?.length ?? 0) > 0, {
+    message: 'A note is required to return or decline.',
+    path: ['note'],
+  });
 export type BuildDecisionInput = z.infer<typeof buildDecisionInput>;
 
 /** Accept needs no note; reject must say why. Used for runs and parts. */

@@ -82,9 +82,7 @@ const tolerance = z.number().nonnegative().optional();
 /** What every expected-gain request may add: a measured gain to compare, and ± geometry tolerances (mm). */
 const expectedGainExtras = {
   measuredNmPerV: positive.optional(),
-  tolerances: z
-    .strictObject({ lengthMm: tolerance, thicknessMm: tolerance, outerDiameterMm: tolerance, wallMm: tolerance })
-    .optional(),
+  tolerances: z.strictObject({ lengthMm: tolerance, thicknessMm: tolerance, outerDiameterMm: tolerance, wallMm: tolerance }).optional(),
 };
 
 /** Expected gain: actuator kind, material and geometry in mm; optionally a measurement and tolerances. */
@@ -92,8 +90,18 @@ export const expectedGainInput = z.discriminatedUnion('actuator', [
   z.strictObject({ actuator: z.literal('plate-thickness'), material: materialInput, ...expectedGainExtras }),
   z.strictObject({ actuator: z.literal('plate-length'), material: materialInput, ...barGeometry, ...expectedGainExtras }),
   z.strictObject({ actuator: z.literal('stack'), material: materialInput, layers: z.number().int().min(1), ...expectedGainExtras }),
-  z.strictObject({ actuator: z.literal('shear-plate'), material: materialInput, plates: z.number().int().min(1).optional(), ...expectedGainExtras }),
-  z.strictObject({ actuator: z.enum(['bimorph-series', 'bimorph-parallel']), material: materialInput, ...barGeometry, ...expectedGainExtras }),
+  z.strictObject({
+    actuator: z.literal('shear-plate'),
+    material: materialInput,
+    plates: z.number().int().min(1).optional(),
+    ...expectedGainExtras,
+  }),
+  z.strictObject({
+    actuator: z.enum(['bimorph-series', 'bimorph-parallel']),
+    material: materialInput,
+    ...barGeometry,
+    ...expectedGainExtras,
+  }),
   z.strictObject({
     actuator: z.enum(['tube-quadrant', 'tube-opposite-pair', 'tube-axial']),
     material: materialInput,
@@ -173,7 +181,10 @@ export const driveCurrentInput = z.strictObject({
 export type DriveCurrentInput = z.infer<typeof driveCurrentInput>;
 
 /** Tunnelling sensitivity from a barrier height in eV, and optionally the barrier for a wanted ratio per Å. */
-export const tunnellingInput = z.strictObject({ workFunctionEv: positive.max(20), wantedRatio: z.number().gt(1, 'Must be more than 1.').optional() });
+export const tunnellingInput = z.strictObject({
+  workFunctionEv: positive.max(20),
+  wantedRatio: z.number().gt(1, 'Must be more than 1.').optional(),
+});
 /** Parsed (defaults applied) TunnellingInput as the service and the form receive it. */
 export type TunnellingInput = z.infer<typeof tunnellingInput>;
 
@@ -184,6 +195,9 @@ export const unitConversionInput = z
     from: z.preprocess(unitKey, z.enum(convertibleUnits)),
     to: z.preprocess(unitKey, z.enum(convertibleUnits)),
   })
-  .refine((v) => kindOfUnit(v.from) === kindOfUnit(v.to), { message: 'Both units must measure the same thing (a displacement, a voltage or a gain).', path: ['to'] });
+  .refine((v) => kindOfUnit(v.from) === kindOfUnit(v.to), {
+    message: 'Both units must measure the same thing (a displacement, a voltage or a gain).',
+    path: ['to'],
+  });
 /** Parsed (defaults applied) UnitConversionInput as the service and the form receive it. */
 export type UnitConversionInput = z.infer<typeof unitConversionInput>;

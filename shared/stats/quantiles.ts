@@ -28,7 +28,10 @@ export interface Summary {
 
 /** Five-number summary with type-7 quartiles; finite values only. */
 export function summarize(values: readonly number[]): Summary {
-  const sorted = values.filter(Number.isFinite).slice().sort((a, b) => a - b);
+  const sorted = values
+    .filter(Number.isFinite)
+    .slice()
+    .sort((a, b) => a - b);
   return {
     n: sorted.length,
     min: sorted[0] ?? null,

@@ -103,11 +103,7 @@ function nonFinite(index: number, field: 'volts' | 'displacement'): FitInputErro
 }
 
 /** Fits gain from points in volts and nm: the entry point for the client's live preview. */
-export function fitCalibration(
-  points: readonly CalibrationPoint[],
-  model: FitModel = 'intercept',
-  options?: FitOptions,
-): CalibrationFit {
+export function fitCalibration(points: readonly CalibrationPoint[], model: FitModel = 'intercept', options?: FitOptions): CalibrationFit {
   const n = points.length;
   checkCount(n, options);
   const { v, x, sweep } = scratchColumns(n);
@@ -163,11 +159,7 @@ export function fitCalibrationInUnits(
 }
 
 /** Fits gain from typed-array columns without copying: the fast path for large records. */
-export function fitCalibrationColumns(
-  columns: CalibrationColumns,
-  model: FitModel = 'intercept',
-  options?: FitOptions,
-): CalibrationFit {
+export function fitCalibrationColumns(columns: CalibrationColumns, model: FitModel = 'intercept', options?: FitOptions): CalibrationFit {
   const { voltsV, displacementNm } = columns;
   const n = voltsV.length;
   if (displacementNm.length !== n || (columns.sweep && columns.sweep.length !== n)) {

@@ -1,7 +1,6 @@
 // Drive current, reactive power and stored charge of a capacitive (piezo) load (FIELD.md
 // "Drive electronics"). SI units throughout.
 
-
 /** Vacuum permittivity ε0 (F/m), CODATA 2018. */
 export const VACUUM_PERMITTIVITY_F_PER_M = 8.8541878128e-12;
 
@@ -47,14 +46,11 @@ export function storedCharge(capacitanceF: number, voltageV: number): { chargeC:
 }
 
 /** Coaxial tube capacitance C = 2π·ε0·εr·L/ln(OD/ID) [memory]. */
-export function tubeCapacitanceF(g: {
-  lengthM: number;
-  outerDiameterM: number;
-  innerDiameterM: number;
-  relPermittivity: number;
-}): number {
+export function tubeCapacitanceF(g: { lengthM: number; outerDiameterM: number; innerDiameterM: number; relPermittivity: number }): number {
   const od = positive(g.outerDiameterM, 'outer diameter');
   const id = positive(g.innerDiameterM, 'inner diameter');
   if (id >= od) throw new RangeError('inner diameter must be smaller than outer diameter');
-  return (2 * Math.PI * VACUUM_PERMITTIVITY_F_PER_M * positive(g.relPermittivity, 'εr') * positive(g.lengthM, 'length')) / Math.log(od / id);
+  return (
+    (2 * Math.PI * VACUUM_PERMITTIVITY_F_PER_M * positive(g.relPermittivity, 'εr') * positive(g.lengthM, 'length')) / Math.log(od / id)
+  );
 }

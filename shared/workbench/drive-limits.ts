@@ -32,7 +32,9 @@ export function capacitiveCurrentA(capacitanceF: number, slewRateVPerS: number):
 
 /** Highest sine frequency a current limit allows: I_max = 2π·f·C·V_pk solved for f [calc]. */
 export function currentLimitedSineHz(currentLimitA: number, capacitanceF: number, amplitudeV: number): number {
-  return positive(currentLimitA, 'current limit') / (2 * Math.PI * positive(capacitanceF, 'capacitance') * positive(amplitudeV, 'amplitude'));
+  return (
+    positive(currentLimitA, 'current limit') / (2 * Math.PI * positive(capacitanceF, 'capacitance') * positive(amplitudeV, 'amplitude'))
+  );
 }
 
 /** Highest sine frequency a slew-rate limit allows: SR = 2π·f·V_pk solved for f [calc]. */

@@ -70,10 +70,7 @@ export function bimorphSeriesGain(material: MaterialInput, g: { lengthMm: number
 }
 
 /** Bimorph bender, parallel (V across each half): δ = 3·d31·V·L²/h² [S: Smits, Dalke & Cooney 1991]. */
-export function bimorphParallelGain(
-  material: MaterialInput,
-  g: { lengthMm: number; thicknessMm: number },
-): ExpectedGain {
+export function bimorphParallelGain(material: MaterialInput, g: { lengthMm: number; thicknessMm: number }): ExpectedGain {
   const ratio = positive(g.lengthMm, 'length') / positive(g.thicknessMm, 'thickness');
   return withBand(3 * coefficientNmPerV(material, 'd31PmPerV') * ratio * ratio);
 }
@@ -134,10 +131,7 @@ export function loadedGainNmPerV(freeGainNmPerV: number, actuatorStiffnessNPerM:
 }
 
 /** Measured ÷ expected as a sanity check, and whether the measurement falls inside the band. */
-export function measuredToExpectedRatio(
-  measuredNmPerV: number,
-  expected: ExpectedGain,
-): { ratio: number; withinBand: boolean } {
+export function measuredToExpectedRatio(measuredNmPerV: number, expected: ExpectedGain): { ratio: number; withinBand: boolean } {
   const measured = Math.abs(measuredNmPerV);
   return {
     ratio: measured / expected.gainNmPerV,
@@ -200,7 +194,7 @@ export const EXPECTED_GAIN_SOURCE: Record<ExpectedGainSpec['actuator'], string> 
   'bimorph-parallel': 'Source: Smits, Dalke & Cooney 1991',
   'tube-quadrant': 'Source: Chen, APL 1992',
   'tube-opposite-pair': 'Source: Chen, APL 1992',
-  'tube-axial': 'calculated from the wall\'s length-mode strain',
+  'tube-axial': "calculated from the wall's length-mode strain",
   stack: 'Source: Murata, piezo actuator basics',
   'shear-plate': 'calculated from d15',
   'plate-thickness': 'calculated from d33',

@@ -23,20 +23,33 @@ type Sensitivity = [keyof GeometryTolerances, number];
 function sensitivities(spec: ExpectedGainSpec): Sensitivity[] {
   switch (spec.actuator) {
     case 'plate-length':
-      return [['lengthMm', 1 / spec.lengthMm], ['thicknessMm', -1 / spec.thicknessMm]];
+      return [
+        ['lengthMm', 1 / spec.lengthMm],
+        ['thicknessMm', -1 / spec.thicknessMm],
+      ];
     case 'bimorph-series':
     case 'bimorph-parallel':
       // g ∝ L²/h²
-      return [['lengthMm', 2 / spec.lengthMm], ['thicknessMm', -2 / spec.thicknessMm]];
+      return [
+        ['lengthMm', 2 / spec.lengthMm],
+        ['thicknessMm', -2 / spec.thicknessMm],
+      ];
     case 'tube-quadrant':
     case 'tube-opposite-pair': {
       // g ∝ L²/((OD − h)·h)
       const d = spec.outerDiameterMm - spec.wallMm;
-      return [['lengthMm', 2 / spec.lengthMm], ['outerDiameterMm', -1 / d], ['wallMm', 1 / d - 1 / spec.wallMm]];
+      return [
+        ['lengthMm', 2 / spec.lengthMm],
+        ['outerDiameterMm', -1 / d],
+        ['wallMm', 1 / d - 1 / spec.wallMm],
+      ];
     }
     case 'tube-axial':
       // g ∝ L/h
-      return [['lengthMm', 1 / spec.lengthMm], ['wallMm', -1 / spec.wallMm]];
+      return [
+        ['lengthMm', 1 / spec.lengthMm],
+        ['wallMm', -1 / spec.wallMm],
+      ];
     default:
       return [];
   }

@@ -31,13 +31,7 @@ export interface LineFit {
  * Fits y on x over the first n entries; callers validate (n ≥ 3, finite, x not all equal) first,
  * so this loop stays branch-free and allocation-free for million-point records.
  */
-export function fitLineColumns(
-  x: Float64Array,
-  y: Float64Array,
-  n: number,
-  model: FitModel,
-  residualsOut?: Float64Array,
-): LineFit {
+export function fitLineColumns(x: Float64Array, y: Float64Array, n: number, model: FitModel, residualsOut?: Float64Array): LineFit {
   let sumX = 0;
   let sumY = 0;
   let xMin = Infinity;
@@ -113,14 +107,7 @@ function fitWithIntercept(
   };
 }
 
-function fitThroughOrigin(
-  x: Float64Array,
-  y: Float64Array,
-  n: number,
-  xMin: number,
-  xMax: number,
-  residualsOut?: Float64Array,
-): LineFit {
+function fitThroughOrigin(x: Float64Array, y: Float64Array, n: number, xMin: number, xMax: number, residualsOut?: Float64Array): LineFit {
   let sxx = 0;
   let sxy = 0;
   let syy = 0;

@@ -117,20 +117,30 @@ export function fitGainMatrix(samples: readonly MixingSample[], model: GainMatri
   const n = samples.length;
   const params = model === 'affine' ? 3 : 2;
   if (n < params + 1) {
-    throw new GainMatrixFitError('too_few_samples', `A ${model === 'affine' ? 'fit with offsets' : 'fit through the origin'} needs at least ${params + 1} samples.`);
+    throw new GainMatrixFitError(
+      'too_few_samples',
+      `A ${model === 'affine' ? 'fit with offsets' : 'fit through the origin'} needs at least ${params + 1} samples.`,
+    );
   }
   for (const s of samples) {
-    if (![s.vaV, s.vbV, s.xNm, s.yNm].every(Number.isFinite)) throw new GainMatrixFitError('numeric_overflow', 'Every sample must be a finite number.');
+    if (![s.vaV, s.vbV, s.xNm, s.yNm].every(Number.isFinite))
+      throw new GainMatrixFitError('numeric_overflow', 'Every sample must be a finite number.');
   }
   const sa = maxAbs(samples, 'vaV');
   const sb = maxAbs(samples, 'vbV');
   const sx = maxAbs(samples, 'xNm') || 1;
   const sy = maxAbs(samples, 'yNm') || 1;
   if (sa === 0 || sb === 0) {
-    throw new GainMatrixFitError('degenerate_grid', `${sa === 0 ? 'Va' : 'Vb'} is zero in every sample: the grid cannot separate the two channels. Vary Va and Vb each on its own.`);
+    throw new GainMatrixFitError(
+      'degenerate_grid',
+      `${sa === 0 ? 'Va' : 'Vb'} is zero in every sample: the grid cannot separate the two channels. Vary Va and Vb each on its own.`,
+    );
   }
   if (Math.min(sa, sb, sx, sy) < SMALLEST_SAFE_SCALE) {
-    throw new GainMatrixFitError('numeric_underflow', 'The values are so small that double precision loses them (underflow); enter them in other units (mV, µm).');
+    throw new GainMatrixFitError(
+      'numeric_underflow',
+      'The values are so small that double precision loses them (underflow); enter them in other units (mV, µm).',
+    );
   }
   let ma = 0;
   let mb = 0;
@@ -171,7 +181,10 @@ export function fitGainMatrix(samples: readonly MixingSample[], model: GainMatri
   const det = saa * sbb - sab * sab;
   if (!(saa > 0) || !(sbb > 0) || !(det > MIN_MIXING_SIN_ANGLE * MIN_MIXING_SIN_ANGLE * saa * sbb)) {
     const which = !(saa > 0) ? 'Va never changes' : !(sbb > 0) ? 'Vb never changes' : 'Va and Vb change together';
-    throw new GainMatrixFitError('degenerate_grid', `${which} in this grid, so it cannot separate the two channels. Vary Va and Vb each on its own (a grid of both).`);
+    throw new GainMatrixFitError(
+      'degenerate_grid',
+      `${which} in this grid, so it cannot separate the two channels. Vary Va and Vb each on its own (a grid of both).`,
+    );
   }
   // Coefficients in scaled units, then back to nm/V.
   const gxa = ((sbb * sax - sab * sbx) / det) * (sx / sa);
@@ -201,7 +214,10 @@ export function fitGainMatrix(samples: readonly MixingSample[], model: GainMatri
     residualStdYNm: Math.sqrt(ssy / df) * sy,
   };
   if (![gxa, gxb, gya, gyb, ...offsetNm, fit.residualStdXNm, fit.residualStdYNm].every(Number.isFinite)) {
-    throw new GainMatrixFitError('numeric_overflow', 'The gains are too large for double precision (overflow); enter the readings in other units.');
+    throw new GainMatrixFitError(
+      'numeric_overflow',
+      'The gains are too large for double precision (overflow); enter the readings in other units.',
+    );
   }
   return fit;
 }
@@ -220,13 +236,7 @@ export function reachableRegion(g: GainMatrix, limits: DriveLimits): { xNm: numb
 }
 
 /** Whether a wanted (x, y) lies inside the reachable region (voltages within limits ± toleranceV). */
-export function isReachable(
-  g: GainMatrix,
-  limits: DriveLimits,
-  xNm: number,
-  yNm: number,
-  toleranceV = 1e-9,
-): boolean {
+export function isReachable(g: GainMatrix, limits: DriveLimits, xNm: number, yNm: number, toleranceV = 1e-9): boolean {
   const { vaV, vbV } = voltsFor(g, xNm, yNm);
   return (
     vaV >= limits.vaMinV - toleranceV &&

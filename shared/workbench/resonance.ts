@@ -28,7 +28,7 @@ export function cantileverFirstModeHz(b: BeamSection): number {
   const rho = positive(b.densityKgPerM3, 'density');
   const a = positive(b.areaM2, 'area');
   const l = positive(b.lengthM, 'length');
-  return ((CANTILEVER_LAMBDA1 ** 2) / (2 * Math.PI)) * Math.sqrt((e * i) / (rho * a * l ** 4));
+  return (CANTILEVER_LAMBDA1 ** 2 / (2 * Math.PI)) * Math.sqrt((e * i) / (rho * a * l ** 4));
 }
 
 /** A rectangular bar or lever (width only matters for the spring constant). */
@@ -52,7 +52,7 @@ export function rectangularCantileverHz(b: RectangularBeam): number {
   const l = positive(b.lengthM, 'length');
   const e = positive(b.youngsModulusPa, 'E');
   const rho = positive(b.densityKgPerM3, 'density');
-  return ((CANTILEVER_LAMBDA1 ** 2) / (2 * Math.PI)) * (t / (l * l)) * Math.sqrt(e / (12 * rho));
+  return (CANTILEVER_LAMBDA1 ** 2 / (2 * Math.PI)) * (t / (l * l)) * Math.sqrt(e / (12 * rho));
 }
 
 /** End-load spring constant of a rectangular cantilever: k = E·w·t³/(4L³) (= 3EI/L³). */

@@ -104,10 +104,7 @@ const storedChargeCautions: readonly CautionId[] = ['levels', 'discharge', 'supp
 
 /** The cautions to show for a set of flags, in display order (empty when nothing is tripped). */
 export function cautionsFor(flags: SafetyFlags): Caution[] {
-  const ids = new Set<CautionId>([
-    ...(flags.highVoltage ? highVoltageCautions : []),
-    ...(flags.storedCharge ? storedChargeCautions : []),
-  ]);
+  const ids = new Set<CautionId>([...(flags.highVoltage ? highVoltageCautions : []), ...(flags.storedCharge ? storedChargeCautions : [])]);
   if (ids.size > 0) ids.add('local-codes');
   return cautionIds.filter((id) => ids.has(id)).map((id) => cautions[id]);
 }
@@ -178,7 +175,11 @@ export function assessActuator(a: ActuatorForSafety, capacitanceNf?: number | nu
  * Points of a run above the actuator's stated maximum volts (indices), for the mismatch warning:
  * either the points or the stated limit are wrong.
  */
-export function pointsAboveLimit(points: readonly { volts: number }[], voltageUnit: 'V' | 'mV', maxVolts: number | null | undefined): number[] {
+export function pointsAboveLimit(
+  points: readonly { volts: number }[],
+  voltageUnit: 'V' | 'mV',
+  maxVolts: number | null | undefined,
+): number[] {
   if (maxVolts === null || maxVolts === undefined || !Number.isFinite(maxVolts)) return [];
   const scale = voltageUnit === 'mV' ? 1e-3 : 1;
   const out: number[] = [];

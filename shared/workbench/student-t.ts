@@ -20,9 +20,8 @@ const CORNISH_FISHER_MIN_DF = 1000;
 
 const LANCZOS_G = 7;
 const LANCZOS = [
-  0.99999999999980993, 676.5203681218851, -1259.1392167224028, 771.32342877765313,
-  -176.61502916214059, 12.507343278686905, -0.13857109526572012, 9.9843695780195716e-6,
-  1.5056327351493116e-7,
+  0.99999999999980993, 676.5203681218851, -1259.1392167224028, 771.32342877765313, -176.61502916214059, 12.507343278686905,
+  -0.13857109526572012, 9.9843695780195716e-6, 1.5056327351493116e-7,
 ];
 
 /** ln Γ(x) for x > 0; the normalising constants of the t and normal tails need it. */
@@ -133,12 +132,7 @@ export function normalTwoSidedTail(z: number): number {
 
 // Solves tail(t) = alpha for t ≥ 0 where tail decreases from 1 at t = 0: Newton from `guess`,
 // falling back to bisection whenever a step leaves the bracket.
-function invertTail(
-  tail: (t: number) => number,
-  density: (t: number) => number,
-  alpha: number,
-  guess: number,
-): number {
+function invertTail(tail: (t: number) => number, density: (t: number) => number, alpha: number, guess: number): number {
   let lo = 0;
   let hi = Math.max(guess, 1);
   while (tail(hi) > alpha) {
@@ -172,8 +166,7 @@ export function normalQuantile(p: number): number {
   const alpha = 2 * (upper ? 1 - p : p);
   // Starting value: A&S 26.2.23 rational approximation (|error| < 4.5e-4), refined by Newton.
   const w = Math.sqrt(-2 * Math.log(alpha / 2));
-  const guess =
-    w - (2.515517 + 0.802853 * w + 0.010328 * w * w) / (1 + 1.432788 * w + 0.189269 * w * w + 0.001308 * w * w * w);
+  const guess = w - (2.515517 + 0.802853 * w + 0.010328 * w * w) / (1 + 1.432788 * w + 0.189269 * w * w + 0.001308 * w * w * w);
   const z = invertTail(normalTwoSidedTail, normalDensity, alpha, guess);
   return upper ? z : -z;
 }

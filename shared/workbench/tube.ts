@@ -22,7 +22,10 @@ export function tubeDiametersM(g: TubeGeometry): { lengthM: number; outerDiamete
  * one quadrant as a quarter of it: each quadrant electrode covers a quarter of the circumference,
  * the gaps between them neglected [calc].
  */
-export function tubeCapacitances(g: TubeGeometry & { relPermittivity: number }): { tubeCapacitanceF: number; quadrantCapacitanceF: number } {
+export function tubeCapacitances(g: TubeGeometry & { relPermittivity: number }): {
+  tubeCapacitanceF: number;
+  quadrantCapacitanceF: number;
+} {
   const whole = tubeCapacitanceF({ ...tubeDiametersM(g), relPermittivity: g.relPermittivity });
   return { tubeCapacitanceF: whole, quadrantCapacitanceF: whole / 4 };
 }

@@ -27,7 +27,10 @@ export const router = createBrowserRouter([
           exchangeRoutes,
           inboxRoutes,
           reviewRoutes,
-          { path: 'account', lazy: async () => ({ Component: (await import('./routes/account/account-settings.tsx')).AccountSettingsPage }) },
+          {
+            path: 'account',
+            lazy: async () => ({ Component: (await import('./routes/account/account-settings.tsx')).AccountSettingsPage }),
+          },
           { path: 'admin', lazy: async () => ({ Component: (await import('./routes/admin/users.tsx')).AdminUsersPage }) },
           workbenchRoutes,
           { path: '*', lazy: async () => ({ Component: (await import('./routes/not-found.tsx')).NotFoundPage }) },

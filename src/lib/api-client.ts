@@ -8,7 +8,12 @@ export interface ApiErrorBody {
 
 /** An answer from the API that was not 2xx, with its error shape. */
 export class ApiError extends Error {
-  constructor(public readonly status: number, public readonly code: string, message: string, public readonly details?: unknown) {
+  constructor(
+    public readonly status: number,
+    public readonly code: string,
+    message: string,
+    public readonly details?: unknown,
+  ) {
     super(message);
   }
 }
@@ -32,7 +37,12 @@ async function request<T>(method: Method, path: string, body?: unknown, retried 
   const headers: Record<string, string> = { Accept: 'application/json' };
   if (body !== undefined) headers['Content-Type'] = 'application/json';
   if (method !== 'GET') headers['X-CSRF-Token'] = await currentCsrfToken();
-  const res = await fetch(path, { method, headers, credentials: 'same-origin', body: body === undefined ? undefined : JSON.stringify(body) });
+  const res = await fetch(path, {
+    method,
+    headers,
+    credentials: 'same-origin',
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
   if (res.status === 204) return undefined as T;
   const parsed = parseJson(await res.text());
   if (!res.ok) {
@@ -80,7 +90,12 @@ export interface UploadOptions {
  * POST multipart form data with upload progress (0–1), which fetch cannot report; same CSRF header,
  * same one retry on a stale token, same ApiError on failure (status 0, code `network_error`, when no answer came).
  */
-export async function upload<T>(path: string, formData: FormData, onProgress?: (fraction: number) => void, options: UploadOptions = {}): Promise<T> {
+export async function upload<T>(
+  path: string,
+  formData: FormData,
+  onProgress?: (fraction: number) => void,
+  options: UploadOptions = {},
+): Promise<T> {
   const send = (token: string) =>
     new Promise<T>((resolve, reject) => {
       const xhr = new XMLHttpRequest();
@@ -97,7 +112,8 @@ export async function upload<T>(path: string, formData: FormData, onProgress?: (
         if (xhr.status >= 200 && xhr.status < 300) resolve(parsed as T);
         else reject(toApiError(xhr.status, parsed));
       };
-      xhr.onerror = () => reject(new ApiError(0, 'network_error', 'The upload did not reach Scanwright; check the connection and try again.'));
+      xhr.onerror = () =>
+        reject(new ApiError(0, 'network_error', 'The upload did not reach Scanwright; check the connection and try again.'));
       xhr.onabort = () => reject(new ApiError(0, 'aborted', 'The upload was cancelled.'));
       if (options.signal?.aborted) return reject(new ApiError(0, 'aborted', 'The upload was cancelled.'));
       options.signal?.addEventListener('abort', () => xhr.abort(), { once: true });

@@ -12,7 +12,11 @@ export interface PhotoUploadVariables {
  * Send one photo as its own multipart request (field `photos`, then `alt`, then any `fields`), so each
  * file gets its own progress and its own refusal; answers the stored photo.
  */
-export async function uploadOnePhoto<P>(path: string, { file, alt, onProgress, signal }: PhotoUploadVariables, fields: Record<string, string> = {}): Promise<P> {
+export async function uploadOnePhoto<P>(
+  path: string,
+  { file, alt, onProgress, signal }: PhotoUploadVariables,
+  fields: Record<string, string> = {},
+): Promise<P> {
   const form = new FormData();
   form.append('photos', file, file.name);
   form.append('alt', alt);

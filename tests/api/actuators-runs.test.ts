@@ -7,21 +7,39 @@ import { fitCalibrationInUnits, toFitResultDto } from '../../shared/workbench/ca
 import { bimorphSeriesGain } from '../../shared/workbench/expected-gain.ts';
 
 let t: TestApp;
-beforeAll(async () => { t = await startTestApp(); });
-afterAll(async () => { await t.close(); });
+beforeAll(async () => {
+  t = await startTestApp();
+});
+afterAll(async () => {
+  await t.close();
+});
 
 const points = [
-  { volts: 0, displacement: 0.01, sweep: 'up' }, { volts: 10, displacement: 0.98, sweep: 'up' }, { volts: 20, displacement: 2.03, sweep: 'up' },
-  { volts: 20, displacement: 2.05, sweep: 'down' }, { volts: 10, displacement: 1.09, sweep: 'down' }, { volts: 0, displacement: 0.02, sweep: 'down' },
+  { volts: 0, displacement: 0.01, sweep: 'up' },
+  { volts: 10, displacement: 0.98, sweep: 'up' },
+  { volts: 20, displacement: 2.03, sweep: 'up' },
+  { volts: 20, displacement: 2.05, sweep: 'down' },
+  { volts: 10, displacement: 1.09, sweep: 'down' },
+  { volts: 0, displacement: 0.02, sweep: 'down' },
 ];
-const runBody = { points, voltageUnit: 'V', displacementUnit: 'um', method: 'indicator', drive: { kind: 'dc-steps' }, conditions: { preload: 'none', temperatureC: 21 } };
+const runBody = {
+  points,
+  voltageUnit: 'V',
+  displacementUnit: 'um',
+  method: 'indicator',
+  drive: { kind: 'dc-steps' },
+  conditions: { preload: 'none', temperatureC: 21 },
+};
 
 async function ownerWithActuator(status = 'draft') {
   const owner = await createUser();
   const build = await createBuildRow(owner.id, { status });
   const part = await createPart();
   const a = await signIn(t, owner.login);
-  const res = await a.post(`/api/builds/${build.id}/actuators`).set('X-CSRF-Token', a.csrf).send({ partId: part.id, axis: 'X', drive: 'single', maxVolts: 40 });
+  const res = await a
+    .post(`/api/builds/${build.id}/actuators`)
+    .set('X-CSRF-Token', a.csrf)
+    .send({ partId: part.id, axis: 'X', drive: 'single', maxVolts: 40 });
   expect(res.status).toBe(201);
   return { owner, build, part, a, actuator: res.body };
 }
@@ -29,7 +47,13 @@ async function ownerWithActuator(status = 'draft') {
 describe('POST /api/builds/:id/actuators', () => {
   test('when the owner adds an actuator, then 201 with its part and the expected gain from geometry', async () => {
     const { actuator, part } = await ownerWithActuator();
-    expect(actuator).toMatchObject({ id: expect.any(Number), axis: 'X', drive: 'single', part: { id: part.id, category: 'bimorph' }, runs: [] });
+    expect(actuator).toMatchObject({
+      id: expect.any(Number),
+      axis: 'X',
+      drive: 'single',
+      part: { id: part.id, category: 'bimorph' },
+      runs: [],
+    });
     // 12 × 0.6 mm PZT-5A series bimorph → 102.6 nm/V [calc, FIELD.md; S: Smits, Dalke & Cooney 1991]
     expect(actuator.expectedGain.gainNmPerV).toBeCloseTo(bimorphSeriesGain('PZT-5A', { lengthMm: 12, thicknessMm: 0.6 }).gainNmPerV, 10);
     expect(actuator.expectedGain.gainNmPerV).toBeCloseTo(102.6, 1);
@@ -44,22 +68,35 @@ describe('POST /api/builds/:id/actuators', () => {
     const build = await createBuildRow(owner.id);
     const part = await createPart();
     const a = await signIn(t, owner.login);
-    expect((await a.post(`/api/builds/${build.id}/actuators`).set('X-CSRF-Token', a.csrf).send({ partId: part.id, ...body })).status).toBe(400);
+    expect(
+      (
+        await a
+          .post(`/api/builds/${build.id}/actuators`)
+          .set('X-CSRF-Token', a.csrf)
+          .send({ partId: part.id, ...body })
+      ).status,
+    ).toBe(400);
   });
 
-  test('when the part does not exist, is rejected, or is someone else\'s proposal, then 400 on partId', async () => {
+  test("when the part does not exist, is rejected, or is someone else's proposal, then 400 on partId", async () => {
     const owner = await createUser();
     const build = await createBuildRow(owner.id);
     const a = await signIn(t, owner.login);
     const rejected = await createPart({ status: 'rejected' });
     const othersProposal = await createPart({ status: 'proposed', proposedById: (await createUser()).id });
     for (const partId of [99999999, rejected.id, othersProposal.id]) {
-      const res = await a.post(`/api/builds/${build.id}/actuators`).set('X-CSRF-Token', a.csrf).send({ partId, axis: 'Z', drive: 'single' });
+      const res = await a
+        .post(`/api/builds/${build.id}/actuators`)
+        .set('X-CSRF-Token', a.csrf)
+        .send({ partId, axis: 'Z', drive: 'single' });
       expect(res.status).toBe(400);
       expect(res.body.error.details[0].path).toBe('partId');
     }
     const own = await createPart({ status: 'proposed', proposedById: owner.id });
-    expect((await a.post(`/api/builds/${build.id}/actuators`).set('X-CSRF-Token', a.csrf).send({ partId: own.id, axis: 'Z', drive: 'single' })).status).toBe(201);
+    expect(
+      (await a.post(`/api/builds/${build.id}/actuators`).set('X-CSRF-Token', a.csrf).send({ partId: own.id, axis: 'Z', drive: 'single' }))
+        .status,
+    ).toBe(201);
   });
 
   test('when another maker adds an actuator to a published build, then 403', async () => {
@@ -67,7 +104,14 @@ describe('POST /api/builds/:id/actuators', () => {
     const build = await createBuildRow(owner.id, { status: 'published' });
     const part = await createPart();
     const other = await signIn(t, (await createUser()).login);
-    expect((await other.post(`/api/builds/${build.id}/actuators`).set('X-CSRF-Token', other.csrf).send({ partId: part.id, axis: 'X', drive: 'single' })).status).toBe(403);
+    expect(
+      (
+        await other
+          .post(`/api/builds/${build.id}/actuators`)
+          .set('X-CSRF-Token', other.csrf)
+          .send({ partId: part.id, axis: 'X', drive: 'single' })
+      ).status,
+    ).toBe(403);
   });
 });
 
@@ -76,8 +120,17 @@ describe('POST /api/actuators/:id/runs', () => {
     const { a, actuator } = await ownerWithActuator();
     const res = await a.post(`/api/actuators/${actuator.id}/runs`).set('X-CSRF-Token', a.csrf).send(runBody);
     expect(res.status).toBe(201);
-    const expected = toFitResultDto(fitCalibrationInUnits({ points: points as never, voltageUnit: 'V', displacementUnit: 'um', model: 'intercept' }));
-    expect(res.body).toMatchObject({ id: expect.any(Number), status: 'pending', method: 'indicator', displacementUnit: 'um', drive: { kind: 'dc-steps' }, conditions: { temperatureC: 21 } });
+    const expected = toFitResultDto(
+      fitCalibrationInUnits({ points: points as never, voltageUnit: 'V', displacementUnit: 'um', model: 'intercept' }),
+    );
+    expect(res.body).toMatchObject({
+      id: expect.any(Number),
+      status: 'pending',
+      method: 'indicator',
+      displacementUnit: 'um',
+      drive: { kind: 'dc-steps' },
+      conditions: { temperatureC: 21 },
+    });
     expect(res.body.fit).toEqual(expected);
     expect(res.body.fit.hysteresisPctFs).toBeGreaterThan(0);
     const again = await a.get(`/api/runs/${res.body.id}`);
@@ -87,7 +140,10 @@ describe('POST /api/actuators/:id/runs', () => {
 
   test('when the client sends its own fit numbers, then they are refused (400), never stored', async () => {
     const { a, actuator } = await ownerWithActuator();
-    const res = await a.post(`/api/actuators/${actuator.id}/runs`).set('X-CSRF-Token', a.csrf).send({ ...runBody, fit: { gainNmPerV: 1e6 } });
+    const res = await a
+      .post(`/api/actuators/${actuator.id}/runs`)
+      .set('X-CSRF-Token', a.csrf)
+      .send({ ...runBody, fit: { gainNmPerV: 1e6 } });
     expect(res.status).toBe(400);
   });
 
@@ -99,7 +155,10 @@ describe('POST /api/actuators/:id/runs', () => {
     ['a sine drive without frequency', { drive: { kind: 'sine', amplitudeV: 5 } }, 'validation_failed'],
   ])('when the run has %s, then 400 %s', async (_n, patch, code) => {
     const { a, actuator } = await ownerWithActuator();
-    const res = await a.post(`/api/actuators/${actuator.id}/runs`).set('X-CSRF-Token', a.csrf).send({ ...runBody, ...patch });
+    const res = await a
+      .post(`/api/actuators/${actuator.id}/runs`)
+      .set('X-CSRF-Token', a.csrf)
+      .send({ ...runBody, ...patch });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe(code);
   });

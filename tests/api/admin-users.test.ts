@@ -5,8 +5,12 @@ import { signIn, visitor } from '../support/login.ts';
 import { createUser } from '../support/factories.ts';
 
 let t: TestApp;
-beforeAll(async () => { t = await startTestApp(); });
-afterAll(async () => { await t.close(); });
+beforeAll(async () => {
+  t = await startTestApp();
+});
+afterAll(async () => {
+  await t.close();
+});
 
 describe('GET /api/admin/users', () => {
   test('when a visitor asks, then 401', async () => {

@@ -43,16 +43,36 @@ async function maker() {
 
 async function listingOf(ownerId: number) {
   const part = await createPart();
-  return Listing.create({ ownerId, partId: part.id, kind: 'offering', quantity: 2, condition: 'salvaged-tested', priceKind: 'free', priceAmount: null, currency: null, region: 'Here', shipsTo: null, notes: null });
+  return Listing.create({
+    ownerId,
+    partId: part.id,
+    kind: 'offering',
+    quantity: 2,
+    condition: 'salvaged-tested',
+    priceKind: 'free',
+    priceAmount: null,
+    currency: null,
+    region: 'Here',
+    shipsTo: null,
+    notes: null,
+  });
 }
 
 describe('part photos', () => {
   test('when the proposer uploads two photos, then both are stored as WebP variants and the part page lists them in order', async () => {
     const { user, agent } = await maker();
     const part = await createPart({ proposedById: user.id, status: 'proposed' });
-    const res = await upload(agent, `/api/parts/${part.id}/photos`, [await img.jpeg(64, 48), await img.jpeg(48, 64)], ['Front with markings', 'Side, showing the brass shim']);
+    const res = await upload(
+      agent,
+      `/api/parts/${part.id}/photos`,
+      [await img.jpeg(64, 48), await img.jpeg(48, 64)],
+      ['Front with markings', 'Side, showing the brass shim'],
+    );
     expect(res.status).toBe(201);
-    expect(res.body.photos.map((p: { alt: string; position: number }) => [p.alt, p.position])).toEqual([['Front with markings', 0], ['Side, showing the brass shim', 1]]);
+    expect(res.body.photos.map((p: { alt: string; position: number }) => [p.alt, p.position])).toEqual([
+      ['Front with markings', 0],
+      ['Side, showing the brass shim', 1],
+    ]);
     const files = await storedFiles();
     for (const p of res.body.photos) {
       expect(files).toContain(basename(p.url));
@@ -73,7 +93,7 @@ describe('part photos', () => {
     expect(seen.body.photos).toHaveLength(1);
     expect(seen.body.abilities).toEqual({ editPhotos: false });
     expect((await request(t.app).get(`/api/parts/${part.id}`)).body.abilities).toEqual({ editPhotos: false });
-    expect((await (await mod.get(`/api/parts/${part.id}`)).body.abilities)).toEqual({ editPhotos: true });
+    expect(await (await mod.get(`/api/parts/${part.id}`)).body.abilities).toEqual({ editPhotos: true });
     const refused = await upload(other.agent, `/api/parts/${part.id}/photos`, [await img.jpeg(40, 30)]);
     expect(refused.status).toBe(403);
     expect(refused.body.error.code).toBe('forbidden');
@@ -110,7 +130,16 @@ describe('part photos', () => {
     const { user, agent } = await maker();
     const part = await createPart({ proposedById: user.id });
     for (let i = 0; i < MAX_ATTACHED_PHOTOS - 1; i++) {
-      await PartPhoto.create({ partId: part.id, contentHash: `${i}`.padStart(64, 'f'), displayFile: 'x.webp', thumbFile: 'x-t.webp', width: 4, height: 3, alt: `old ${i}`, position: i });
+      await PartPhoto.create({
+        partId: part.id,
+        contentHash: `${i}`.padStart(64, 'f'),
+        displayFile: 'x.webp',
+        thumbFile: 'x-t.webp',
+        width: 4,
+        height: 3,
+        alt: `old ${i}`,
+        position: i,
+      });
     }
     const before = await storedFiles();
     const res = await upload(agent, `/api/parts/${part.id}/photos`, [await img.jpeg(40, 30), await img.jpeg(30, 40)]);
@@ -137,11 +166,19 @@ describe('part photos', () => {
     expect(await storedFiles()).not.toContain(basename(first.thumbUrl));
   });
 
-  test("when a photo id belongs to another part, then 404 and it stays", async () => {
+  test('when a photo id belongs to another part, then 404 and it stays', async () => {
     const { user, agent } = await maker();
     const mine = await createPart({ proposedById: user.id });
     const theirs = await createPart();
-    const photo = await PartPhoto.create({ partId: theirs.id, contentHash: 'e'.repeat(64), displayFile: 'y.webp', thumbFile: 'y-t.webp', width: 4, height: 3, alt: 'theirs' });
+    const photo = await PartPhoto.create({
+      partId: theirs.id,
+      contentHash: 'e'.repeat(64),
+      displayFile: 'y.webp',
+      thumbFile: 'y-t.webp',
+      width: 4,
+      height: 3,
+      alt: 'theirs',
+    });
     const res = await agent.delete(`/api/parts/${mine.id}/photos/${photo.id}`).set('X-CSRF-Token', agent.csrf);
     expect(res.status).toBe(404);
     expect(await PartPhoto.findByPk(photo.id)).not.toBeNull();
@@ -180,7 +217,11 @@ describe('listing photos', () => {
     expect((await upload(other.agent, `/api/listings/${listing.id}/photos`, [await img.jpeg(40, 30)])).status).toBe(403);
     expect((await upload(mod, `/api/listings/${listing.id}/photos`, [await img.jpeg(40, 30)])).status).toBe(403);
     const anon = await visitor(t);
-    const res = await anon.post(`/api/listings/${listing.id}/photos`).set('X-CSRF-Token', anon.csrf).field('alt', 'x').attach('photos', await img.jpeg(40, 30), 'a.jpg');
+    const res = await anon
+      .post(`/api/listings/${listing.id}/photos`)
+      .set('X-CSRF-Token', anon.csrf)
+      .field('alt', 'x')
+      .attach('photos', await img.jpeg(40, 30), 'a.jpg');
     expect(res.status).toBe(401);
     expect(await ListingPhoto.count({ where: { listingId: listing.id } })).toBe(0);
   });
@@ -199,13 +240,30 @@ describe('alt text and order', () => {
   test('when the proposer rewrites a description and reverses the order, then the part page shows the new text in the new order', async () => {
     const { user, agent } = await maker();
     const part = await createPart({ proposedById: user.id });
-    const [a, b, c] = (await upload(agent, `/api/parts/${part.id}/photos`, [await img.jpeg(40, 30), await img.jpeg(30, 40), await img.jpeg(50, 40)], ['one', 'two', 'three'])).body.photos;
-    const patched = await agent.patch(`/api/parts/${part.id}/photos/${b.id}`).set('X-CSRF-Token', agent.csrf).send({ alt: '  The markings, read under a loupe  ' });
+    const [a, b, c] = (
+      await upload(
+        agent,
+        `/api/parts/${part.id}/photos`,
+        [await img.jpeg(40, 30), await img.jpeg(30, 40), await img.jpeg(50, 40)],
+        ['one', 'two', 'three'],
+      )
+    ).body.photos;
+    const patched = await agent
+      .patch(`/api/parts/${part.id}/photos/${b.id}`)
+      .set('X-CSRF-Token', agent.csrf)
+      .send({ alt: '  The markings, read under a loupe  ' });
     expect(patched.status).toBe(200);
     expect(patched.body).toMatchObject({ id: b.id, alt: 'The markings, read under a loupe', url: b.url });
-    const reordered = await agent.put(`/api/parts/${part.id}/photos/order`).set('X-CSRF-Token', agent.csrf).send({ photoIds: [c.id, b.id, a.id] });
+    const reordered = await agent
+      .put(`/api/parts/${part.id}/photos/order`)
+      .set('X-CSRF-Token', agent.csrf)
+      .send({ photoIds: [c.id, b.id, a.id] });
     expect(reordered.status).toBe(200);
-    expect(reordered.body.photos.map((p: { id: number; position: number }) => [p.id, p.position])).toEqual([[c.id, 0], [b.id, 1], [a.id, 2]]);
+    expect(reordered.body.photos.map((p: { id: number; position: number }) => [p.id, p.position])).toEqual([
+      [c.id, 0],
+      [b.id, 1],
+      [a.id, 2],
+    ]);
     const detail = await request(t.app).get(`/api/parts/${part.id}`);
     expect(detail.body.photos.map((p: { alt: string }) => p.alt)).toEqual(['three', 'The markings, read under a loupe', 'one']);
   });
@@ -213,8 +271,18 @@ describe('alt text and order', () => {
   test('when the order leaves one out, repeats one or names a foreign photo, then 400 photo_ids_mismatch and the order stays', async () => {
     const { user, agent } = await maker();
     const listing = await listingOf(user.id);
-    const [a, b] = (await upload(agent, `/api/listings/${listing.id}/photos`, [await img.jpeg(40, 30), await img.jpeg(30, 40)], ['first', 'second'])).body.photos;
-    const foreign = await ListingPhoto.create({ listingId: (await listingOf(user.id)).id, contentHash: 'd'.repeat(64), displayFile: 'z.webp', thumbFile: 'z-t.webp', width: 4, height: 3, alt: 'elsewhere' });
+    const [a, b] = (
+      await upload(agent, `/api/listings/${listing.id}/photos`, [await img.jpeg(40, 30), await img.jpeg(30, 40)], ['first', 'second'])
+    ).body.photos;
+    const foreign = await ListingPhoto.create({
+      listingId: (await listingOf(user.id)).id,
+      contentHash: 'd'.repeat(64),
+      displayFile: 'z.webp',
+      thumbFile: 'z-t.webp',
+      width: 4,
+      height: 3,
+      alt: 'elsewhere',
+    });
     for (const photoIds of [[a.id], [a.id, a.id], [a.id, foreign.id], [b.id, a.id, foreign.id]]) {
       const res = await agent.put(`/api/listings/${listing.id}/photos/order`).set('X-CSRF-Token', agent.csrf).send({ photoIds });
       expect(res.status).toBe(400);
@@ -223,13 +291,17 @@ describe('alt text and order', () => {
     expect((await request(t.app).get(`/api/listings/${listing.id}`)).body.photos.map((p: { id: number }) => p.id)).toEqual([a.id, b.id]);
   });
 
-  test('when a description is blank or the photo is not this listing\'s, then 400 and 404, and nothing changes', async () => {
+  test("when a description is blank or the photo is not this listing's, then 400 and 404, and nothing changes", async () => {
     const { user, agent } = await maker();
     const listing = await listingOf(user.id);
     const [a] = (await upload(agent, `/api/listings/${listing.id}/photos`, [await img.jpeg(40, 30)], 'kept')).body.photos;
-    expect((await agent.patch(`/api/listings/${listing.id}/photos/${a.id}`).set('X-CSRF-Token', agent.csrf).send({ alt: '   ' })).status).toBe(400);
+    expect(
+      (await agent.patch(`/api/listings/${listing.id}/photos/${a.id}`).set('X-CSRF-Token', agent.csrf).send({ alt: '   ' })).status,
+    ).toBe(400);
     const other = await listingOf(user.id);
-    expect((await agent.patch(`/api/listings/${other.id}/photos/${a.id}`).set('X-CSRF-Token', agent.csrf).send({ alt: 'moved?' })).status).toBe(404);
+    expect(
+      (await agent.patch(`/api/listings/${other.id}/photos/${a.id}`).set('X-CSRF-Token', agent.csrf).send({ alt: 'moved?' })).status,
+    ).toBe(404);
     expect((await ListingPhoto.findByPk(a.id))?.alt).toBe('kept');
   });
 });

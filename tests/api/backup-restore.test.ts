@@ -23,8 +23,12 @@ function script(name: 'db-backup' | 'db-restore', args: string[] = [], env: Reco
     });
     let stdout = '';
     let stderr = '';
-    child.stdout.on('data', (c) => { stdout += c; });
-    child.stderr.on('data', (c) => { stderr += c; });
+    child.stdout.on('data', (c) => {
+      stdout += c;
+    });
+    child.stderr.on('data', (c) => {
+      stderr += c;
+    });
     child.on('exit', (code) => resolve({ code, stdout, stderr }));
   });
 }

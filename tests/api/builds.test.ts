@@ -5,8 +5,12 @@ import { signIn, visitor } from '../support/login.ts';
 import { createBuildRow, createUser, uniqueLogin } from '../support/factories.ts';
 
 let t: TestApp;
-beforeAll(async () => { t = await startTestApp(); });
-afterAll(async () => { await t.close(); });
+beforeAll(async () => {
+  t = await startTestApp();
+});
+afterAll(async () => {
+  await t.close();
+});
 
 const newBuild = { title: 'Bender stage', instrumentKind: 'positioning-stage', summary: 'Two benders at 90°.' };
 
@@ -35,9 +39,19 @@ describe('POST /api/builds', () => {
   test('when a maker posts a valid build, then 201 draft owned by them, listed in mine, invisible to others', async () => {
     const u = await createUser();
     const a = await signIn(t, u.login);
-    const res = await a.post('/api/builds').set('X-CSRF-Token', a.csrf).send({ ...newBuild, body: '# Hello', stage: 'assembling' });
+    const res = await a
+      .post('/api/builds')
+      .set('X-CSRF-Token', a.csrf)
+      .send({ ...newBuild, body: '# Hello', stage: 'assembling' });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ id: expect.any(Number), status: 'draft', stage: 'assembling', body: '# Hello', owner: { id: u.id, login: u.login }, abilities: { edit: true, submit: true, delete: true } });
+    expect(res.body).toMatchObject({
+      id: expect.any(Number),
+      status: 'draft',
+      stage: 'assembling',
+      body: '# Hello',
+      owner: { id: u.id, login: u.login },
+      abilities: { edit: true, submit: true, delete: true },
+    });
     const mine = await a.get('/api/builds/mine');
     expect(mine.body.items.map((b: { id: number }) => b.id)).toContain(res.body.id);
     expect((await request(t.app).get(`/api/builds/${res.body.id}`)).status).toBe(404);
@@ -159,12 +173,21 @@ describe('log entries', () => {
     const owner = await createUser();
     const b = await createBuildRow(owner.id, { status: 'published' });
     const a = await signIn(t, owner.login);
-    const later = await a.post(`/api/builds/${b.id}/entries`).set('X-CSRF-Token', a.csrf).send({ entryDate: '2026-11-20', title: 'Later', body: 'Second' });
+    const later = await a
+      .post(`/api/builds/${b.id}/entries`)
+      .set('X-CSRF-Token', a.csrf)
+      .send({ entryDate: '2026-11-20', title: 'Later', body: 'Second' });
     expect(later.status).toBe(201);
-    const earlier = await a.post(`/api/builds/${b.id}/entries`).set('X-CSRF-Token', a.csrf).send({ entryDate: '2026-11-02', title: 'Earlier', body: 'First' });
+    const earlier = await a
+      .post(`/api/builds/${b.id}/entries`)
+      .set('X-CSRF-Token', a.csrf)
+      .send({ entryDate: '2026-11-02', title: 'Earlier', body: 'First' });
     const page = await request(t.app).get(`/api/builds/${b.id}`);
     expect(page.body.entries.map((e: { title: string }) => e.title)).toEqual(['Earlier', 'Later']);
-    const edited = await a.patch(`/api/builds/${b.id}/entries/${earlier.body.id}`).set('X-CSRF-Token', a.csrf).send({ body: 'First, edited' });
+    const edited = await a
+      .patch(`/api/builds/${b.id}/entries/${earlier.body.id}`)
+      .set('X-CSRF-Token', a.csrf)
+      .send({ body: 'First, edited' });
     expect(edited.body.body).toBe('First, edited');
     expect((await a.delete(`/api/builds/${b.id}/entries/${later.body.id}`).set('X-CSRF-Token', a.csrf)).status).toBe(204);
     expect((await request(t.app).get(`/api/builds/${b.id}`)).body.entries).toHaveLength(1);
@@ -175,10 +198,25 @@ describe('log entries', () => {
     const b = await createBuildRow(owner.id, { status: 'published' });
     const b2 = await createBuildRow(owner.id, { status: 'published' });
     const a = await signIn(t, owner.login);
-    expect((await a.post(`/api/builds/${b.id}/entries`).set('X-CSRF-Token', a.csrf).send({ entryDate: '2026-13-40', title: 'Bad', body: 'x' })).status).toBe(400);
-    const e = await a.post(`/api/builds/${b.id}/entries`).set('X-CSRF-Token', a.csrf).send({ entryDate: '2026-11-02', title: 'Fine', body: 'x' });
-    expect((await a.patch(`/api/builds/${b2.id}/entries/${e.body.id}`).set('X-CSRF-Token', a.csrf).send({ title: 'Moved?' })).status).toBe(404);
+    expect(
+      (await a.post(`/api/builds/${b.id}/entries`).set('X-CSRF-Token', a.csrf).send({ entryDate: '2026-13-40', title: 'Bad', body: 'x' }))
+        .status,
+    ).toBe(400);
+    const e = await a
+      .post(`/api/builds/${b.id}/entries`)
+      .set('X-CSRF-Token', a.csrf)
+      .send({ entryDate: '2026-11-02', title: 'Fine', body: 'x' });
+    expect((await a.patch(`/api/builds/${b2.id}/entries/${e.body.id}`).set('X-CSRF-Token', a.csrf).send({ title: 'Moved?' })).status).toBe(
+      404,
+    );
     const other = await signIn(t, (await createUser()).login);
-    expect((await other.post(`/api/builds/${b.id}/entries`).set('X-CSRF-Token', other.csrf).send({ entryDate: '2026-11-02', title: 'Hijack', body: 'x' })).status).toBe(403);
+    expect(
+      (
+        await other
+          .post(`/api/builds/${b.id}/entries`)
+          .set('X-CSRF-Token', other.csrf)
+          .send({ entryDate: '2026-11-02', title: 'Hijack', body: 'x' })
+      ).status,
+    ).toBe(403);
   });
 });

@@ -7,8 +7,12 @@ import { standInEmail } from '../../server/dev/demo-accounts.ts';
 import { Message } from '../../server/models/message.model.ts';
 
 let t: TestApp;
-beforeAll(async () => { t = await startTestApp(); });
-afterAll(async () => { await t.close(); });
+beforeAll(async () => {
+  t = await startTestApp();
+});
+afterAll(async () => {
+  await t.close();
+});
 
 const send = (a: Agent, method: 'post' | 'patch', path: string, body: object) => a[method](path).set('X-CSRF-Token', a.csrf).send(body);
 
@@ -16,7 +20,19 @@ async function ownerWithListing(over: object = {}) {
   const owner = await createUser();
   const part = await createPart();
   const a = await signIn(t, owner.login);
-  const res = await send(a, 'post', '/api/listings', { partId: part.id, kind: 'offering', quantity: 3, condition: 'salvaged-tested', priceKind: 'price', priceAmount: 4.5, currency: 'EUR', region: 'Lower Saxony', shipsTo: 'EU', notes: 'Three bars.', ...over });
+  const res = await send(a, 'post', '/api/listings', {
+    partId: part.id,
+    kind: 'offering',
+    quantity: 3,
+    condition: 'salvaged-tested',
+    priceKind: 'price',
+    priceAmount: 4.5,
+    currency: 'EUR',
+    region: 'Lower Saxony',
+    shipsTo: 'EU',
+    notes: 'Three bars.',
+    ...over,
+  });
   expect(res.status).toBe(201);
   return { owner, part, a, listing: res.body };
 }
@@ -24,14 +40,23 @@ async function ownerWithListing(over: object = {}) {
 describe('listings', () => {
   test('when a maker posts a listing, then 201 open with its price label, and it appears in the exchange with filters', async () => {
     const { listing, part, owner } = await ownerWithListing();
-    expect(listing).toMatchObject({ status: 'open', kind: 'offering', priceLabel: '4.50 EUR', owner: { login: owner.login }, part: { id: part.id }, abilities: { edit: true, message: false } });
+    expect(listing).toMatchObject({
+      status: 'open',
+      kind: 'offering',
+      priceLabel: '4.50 EUR',
+      owner: { login: owner.login },
+      part: { id: part.id },
+      abilities: { edit: true, message: false },
+    });
     expect(JSON.stringify(listing)).not.toContain('@');
     const found = await request(t.app).get(`/api/listings?partId=${part.id}`);
     expect(found.body.items.map((l: { id: number }) => l.id)).toEqual([listing.id]);
     expect((await request(t.app).get(`/api/listings?partId=${part.id}&kind=seeking`)).body.total).toBe(0);
     expect((await request(t.app).get(`/api/listings?partId=${part.id}&freeOnly=true`)).body.total).toBe(0);
     expect((await request(t.app).get(`/api/listings?partId=${part.id}&condition=salvaged-tested&region=saxony`)).body.total).toBe(1);
-    expect((await request(t.app).get(`/api/listings?q=${encodeURIComponent(part.name)}`)).body.items.map((l: { id: number }) => l.id)).toContain(listing.id);
+    expect(
+      (await request(t.app).get(`/api/listings?q=${encodeURIComponent(part.name)}`)).body.items.map((l: { id: number }) => l.id),
+    ).toContain(listing.id);
   });
 
   test.each<[object, string]>([
@@ -44,7 +69,17 @@ describe('listings', () => {
     const owner = await createUser();
     const part = await createPart();
     const a = await signIn(t, owner.login);
-    const res = await send(a, 'post', '/api/listings', { partId: part.id, kind: 'offering', quantity: 1, condition: 'new', priceKind: 'price', priceAmount: 1, currency: 'EUR', region: 'Here', ...over });
+    const res = await send(a, 'post', '/api/listings', {
+      partId: part.id,
+      kind: 'offering',
+      quantity: 1,
+      condition: 'new',
+      priceKind: 'price',
+      priceAmount: 1,
+      currency: 'EUR',
+      region: 'Here',
+      ...over,
+    });
     expect(res.status).toBe(400);
   });
 
@@ -64,10 +99,16 @@ describe('listings', () => {
     const { a, listing } = await ownerWithListing();
     const mod = await signIn(t, (await createUser({ role: 'moderator' })).login);
     expect((await send(mod, 'post', `/api/listings/${listing.id}/visibility`, { hidden: true })).status).toBe(400);
-    const res = await send(mod, 'post', `/api/listings/${listing.id}/visibility`, { hidden: true, note: 'Selling mains-powered gear without cautions.' });
+    const res = await send(mod, 'post', `/api/listings/${listing.id}/visibility`, {
+      hidden: true,
+      note: 'Selling mains-powered gear without cautions.',
+    });
     expect(res.body.hidden).toBe(true);
     expect((await request(t.app).get(`/api/listings/${listing.id}`)).status).toBe(404);
-    expect((await a.get(`/api/listings/${listing.id}`)).body).toMatchObject({ hidden: true, hiddenNote: 'Selling mains-powered gear without cautions.' });
+    expect((await a.get(`/api/listings/${listing.id}`)).body).toMatchObject({
+      hidden: true,
+      hiddenNote: 'Selling mains-powered gear without cautions.',
+    });
     const audit = await mod.get(`/api/review/audit?targetType=listing&targetId=${listing.id}`);
     expect(audit.body.items[0]).toMatchObject({ action: 'listing.hide' });
     const maker = await signIn(t, (await createUser()).login);
@@ -80,7 +121,9 @@ describe('messages', () => {
     const { owner, a: ownerAgent, listing } = await ownerWithListing();
     const buyer = await createUser();
     const b = await signIn(t, buyer.login);
-    const res = await send(b, 'post', `/api/listings/${listing.id}/messages`, { body: 'Are the bars still available? I can pay by bank transfer.' });
+    const res = await send(b, 'post', `/api/listings/${listing.id}/messages`, {
+      body: 'Are the bars still available? I can pay by bank transfer.',
+    });
     expect(res.status).toBe(201);
     const mail = await t.mail.waitFor((m) => m.to.includes(standInEmail(owner.login)) && m.subject.includes(buyer.login));
     expect(mail.text).toContain(`${t.config.publicUrl}/inbox/${res.body.threadId}`);
@@ -95,7 +138,10 @@ describe('messages', () => {
     expect(reply.status).toBe(201);
     const back = await t.mail.waitFor((m) => m.to.includes(standInEmail(buyer.login)) && m.text.includes('Yes, two left.'));
     expect(back.text + back.html).not.toContain(standInEmail(owner.login));
-    expect((await b.get(`/api/inbox/${res.body.threadId}`)).body.messages.map((m: { body: string }) => m.body)).toEqual(['Are the bars still available? I can pay by bank transfer.', 'Yes, two left.']);
+    expect((await b.get(`/api/inbox/${res.body.threadId}`)).body.messages.map((m: { body: string }) => m.body)).toEqual([
+      'Are the bars still available? I can pay by bank transfer.',
+      'Yes, two left.',
+    ]);
   });
 
   test('when the owner writes to their own listing, an outsider reads a thread, or the body is empty, then 403 / 404 / 400', async () => {
@@ -115,7 +161,16 @@ describe('messages', () => {
       const owner = await createUser();
       const part = await createPart();
       const oa = await signIn(limited, owner.login);
-      const listing = (await send(oa, 'post', '/api/listings', { partId: part.id, kind: 'offering', quantity: 1, condition: 'new', priceKind: 'free', region: 'Here' })).body;
+      const listing = (
+        await send(oa, 'post', '/api/listings', {
+          partId: part.id,
+          kind: 'offering',
+          quantity: 1,
+          condition: 'new',
+          priceKind: 'free',
+          region: 'Here',
+        })
+      ).body;
       const b = await signIn(limited, (await createUser()).login);
       const statuses = [];
       for (let i = 0; i < 22; i++) statuses.push((await send(b, 'post', `/api/listings/${listing.id}/messages`, { body: `n${i}` })).status);

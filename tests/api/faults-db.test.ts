@@ -12,8 +12,18 @@ const RESPONSE_BOUND_MS = 6000;
 const RECOVERY_BOUND_MS = 8000;
 const RUNS = 160;
 
-interface Outcome { what: string; runId?: number; status: number; body: unknown; startedAt: number; ms: number }
-interface Who { cookie: string; csrf: string }
+interface Outcome {
+  what: string;
+  runId?: number;
+  status: number;
+  body: unknown;
+  startedAt: number;
+  ms: number;
+}
+interface Who {
+  cookie: string;
+  csrf: string;
+}
 
 const pause = (ms: number) => new Promise((r) => setTimeout(r, ms));
 const isDbUnavailable = (o: Outcome) => o.status === 503 && (o.body as { error?: { code?: string } })?.error?.code === 'db_unavailable';
@@ -34,13 +44,20 @@ function call(what: string, path: string, opts: { method?: string; as?: Who; jso
   if (opts.as) Object.assign(headers, { cookie: opts.as.cookie, 'x-csrf-token': opts.as.csrf });
   if (payload) Object.assign(headers, { 'content-type': 'application/json', 'content-length': String(Buffer.byteLength(payload)) });
   return new Promise((resolve) => {
-    const done = (status: number, body: unknown) => resolve({ what, runId: opts.runId, status, body, startedAt, ms: Date.now() - startedAt });
+    const done = (status: number, body: unknown) =>
+      resolve({ what, runId: opts.runId, status, body, startedAt, ms: Date.now() - startedAt });
     const req = httpRequest({ host: '127.0.0.1', port, path, method: opts.method ?? 'GET', headers, agent }, (res) => {
       let text = '';
       res.setEncoding('utf8');
-      res.on('data', (c: string) => { text += c; });
+      res.on('data', (c: string) => {
+        text += c;
+      });
       res.on('end', () => {
-        try { done(res.statusCode ?? -1, JSON.parse(text)); } catch { done(res.statusCode ?? -1, text); }
+        try {
+          done(res.statusCode ?? -1, JSON.parse(text));
+        } catch {
+          done(res.statusCode ?? -1, text);
+        }
       });
       res.on('error', (err) => done(-1, `response error: ${err.message}`));
     });
@@ -82,9 +99,15 @@ describe('when MariaDB stops under load and starts again', () => {
   const at = { stop: 0, stopped: 0, restart: 0, up: 0, healthy: 0 };
 
   const decide = (runId: number, log: Outcome[]) =>
-    call('decide-run', `/api/review/runs/${runId}/decision`, { method: 'POST', as: moderator, json: { decision: 'accept' }, runId }).then((o) => (log.push(o), o));
+    call('decide-run', `/api/review/runs/${runId}/decision`, { method: 'POST', as: moderator, json: { decision: 'accept' }, runId }).then(
+      (o) => (log.push(o), o),
+    );
   const createDraft = (n: number, log: Outcome[]) =>
-    call('create-build', '/api/builds', { method: 'POST', as: maker, json: { title: `Fault draft ${n}`, instrumentKind: 'profilometer', summary: 'Written while the database was failing.' } }).then((o) => (log.push(o), o));
+    call('create-build', '/api/builds', {
+      method: 'POST',
+      as: maker,
+      json: { title: `Fault draft ${n}`, instrumentKind: 'profilometer', summary: 'Written while the database was failing.' },
+    }).then((o) => (log.push(o), o));
 
   beforeAll(async () => {
     const owner = await createUser();
@@ -93,7 +116,8 @@ describe('when MariaDB stops under load and starts again', () => {
     const build = await createBuildRow(owner.id, { status: 'published' });
     partIds = (await Promise.all([0, 1, 2].map(() => createPart()))).map((p) => p.id).sort((a, b) => a - b);
     runIds = [];
-    for (let i = 0; i < RUNS; i++) runIds.push((await createRunRow({ buildId: build.id, partId: partIds[i % 3], ownerId: owner.id, gainNmPerV: 60 + i })).id);
+    for (let i = 0; i < RUNS; i++)
+      runIds.push((await createRunRow({ buildId: build.id, partId: partIds[i % 3], ownerId: owner.id, gainNmPerV: 60 + i })).id);
 
     const log: Outcome[] = [];
     // Acknowledged before the fault: one decision and one new build.
@@ -114,16 +138,31 @@ describe('when MariaDB stops under load and starts again', () => {
       }
     };
     let draftNo = 1;
-    const writer = async () => { while (running) { await createDraft(draftNo++, log); await pause(25); } };
+    const writer = async () => {
+      while (running) {
+        await createDraft(draftNo++, log);
+        await pause(25);
+      }
+    };
     const reader = async () => {
       while (running) {
-        for (const [what, path, as] of [['read-build', `/api/builds/${build.id}`], ['read-parts', '/api/parts?gainMin=10&gainMax=500'], ['read-session', '/api/session', maker], ['visitor-session', '/api/session']] as const) {
+        for (const [what, path, as] of [
+          ['read-build', `/api/builds/${build.id}`],
+          ['read-parts', '/api/parts?gainMin=10&gainMax=500'],
+          ['read-session', '/api/session', maker],
+          ['visitor-session', '/api/session'],
+        ] as const) {
           log.push(await call(what, path, { as }));
         }
         await pause(10);
       }
     };
-    const health = async () => { while (running) { log.push(await call('health', '/api/health')); await pause(50); } };
+    const health = async () => {
+      while (running) {
+        log.push(await call('health', '/api/health'));
+        await pause(50);
+      }
+    };
     const workers = [decider(), decider(), decider(), decider(), writer(), reader(), reader(), health()];
 
     // Let some decisions be acknowledged first (at least 600 ms of load, longer on a slow machine).
@@ -134,8 +173,13 @@ describe('when MariaDB stops under load and starts again', () => {
     await db.stop();
     at.stopped = Date.now();
     // Down for at least 1.5 s and until enough answers have come back from the outage (slow machines).
-    const answeredDuringOutage = (health: boolean) => log.filter((o) => o.startedAt >= at.stopped && (o.what === 'health') === health).length;
-    while (Date.now() - at.stopped < 1500 || ((answeredDuringOutage(true) < 5 || answeredDuringOutage(false) < 25) && Date.now() - at.stopped < 20_000)) await pause(50);
+    const answeredDuringOutage = (health: boolean) =>
+      log.filter((o) => o.startedAt >= at.stopped && (o.what === 'health') === health).length;
+    while (
+      Date.now() - at.stopped < 1500 ||
+      ((answeredDuringOutage(true) < 5 || answeredDuringOutage(false) < 25) && Date.now() - at.stopped < 20_000)
+    )
+      await pause(50);
     at.restart = Date.now();
     await db.start();
     at.up = Date.now();
@@ -190,15 +234,25 @@ describe('when MariaDB stops under load and starts again', () => {
   });
 
   test('then writes acknowledged before the fault are still there', async () => {
-    expect(await call('check', `/api/runs/${ackedBeforeFault.runId}`)).toMatchObject({ status: 200, body: { id: ackedBeforeFault.runId, status: 'accepted' } });
-    expect(await call('check', `/api/builds/${ackedBeforeFault.buildId}`, { as: maker })).toMatchObject({ status: 200, body: { id: ackedBeforeFault.buildId, title: 'Fault draft 0' } });
+    expect(await call('check', `/api/runs/${ackedBeforeFault.runId}`)).toMatchObject({
+      status: 200,
+      body: { id: ackedBeforeFault.runId, status: 'accepted' },
+    });
+    expect(await call('check', `/api/builds/${ackedBeforeFault.buildId}`, { as: maker })).toMatchObject({
+      status: 200,
+      body: { id: ackedBeforeFault.buildId, title: 'Fault draft 0' },
+    });
   });
 
   test('then every acknowledged write is stored, and a failed decision left no partial rows', async () => {
     const q = <T>(sql: string) => t.handle.sequelize.query(sql, { type: 'SELECT' }) as Promise<T[]>;
     const ids = runIds.join(',');
-    const runs = await q<{ id: number; status: string; part_id: number }>(`SELECT id, status, part_id FROM calibration_runs WHERE id IN (${ids})`);
-    const audits = await q<{ target_id: number; n: number }>(`SELECT target_id, COUNT(*) AS n FROM audit_entries WHERE target_type = 'run' AND action = 'run.accept' AND target_id IN (${ids}) GROUP BY target_id`);
+    const runs = await q<{ id: number; status: string; part_id: number }>(
+      `SELECT id, status, part_id FROM calibration_runs WHERE id IN (${ids})`,
+    );
+    const audits = await q<{ target_id: number; n: number }>(
+      `SELECT target_id, COUNT(*) AS n FROM audit_entries WHERE target_type = 'run' AND action = 'run.accept' AND target_id IN (${ids}) GROUP BY target_id`,
+    );
     const auditCount = new Map(audits.map((a) => [Number(a.target_id), Number(a.n)]));
     const status = new Map(runs.map((r) => [r.id, r.status]));
 
@@ -215,15 +269,20 @@ describe('when MariaDB stops under load and starts again', () => {
     const accepted = runs.filter((r) => r.status === 'accepted').length;
     const [{ n: mails }] = await q<{ n: number }>("SELECT COUNT(*) AS n FROM mail_outbox WHERE subject LIKE 'Calibration run accepted%'");
     expect(Number(mails)).toBe(accepted);
-    const parts = await q<{ id: number; accepted_run_count: number }>(`SELECT id, accepted_run_count FROM parts WHERE id IN (${partIds.join(',')}) ORDER BY id`);
-    expect(parts.map((p) => [p.id, p.accepted_run_count])).toEqual(partIds.map((id) => [id, runs.filter((r) => r.part_id === id && r.status === 'accepted').length]));
+    const parts = await q<{ id: number; accepted_run_count: number }>(
+      `SELECT id, accepted_run_count FROM parts WHERE id IN (${partIds.join(',')}) ORDER BY id`,
+    );
+    expect(parts.map((p) => [p.id, p.accepted_run_count])).toEqual(
+      partIds.map((id) => [id, runs.filter((r) => r.part_id === id && r.status === 'accepted').length]),
+    );
 
     // What failed can simply be decided again now (409 not_waiting when it had committed after all).
     const failed = scenario.filter((o) => o.what === 'decide-run' && o.status !== 200).map((o) => o.runId!);
     expect(failed.length).toBeGreaterThan(0);
     for (const id of runIds.filter((i) => !acked.includes(i))) {
       const again = await decide(id, []);
-      if (again.status !== 200) expect([id, again.status, (again.body as { error: { code: string } }).error.code]).toEqual([id, 409, 'not_waiting']);
+      if (again.status !== 200)
+        expect([id, again.status, (again.body as { error: { code: string } }).error.code]).toEqual([id, 409, 'not_waiting']);
     }
     const final = await q<{ n: number }>(`SELECT SUM(accepted_run_count) AS n FROM parts WHERE id IN (${partIds.join(',')})`);
     expect(Number(final[0].n)).toBe(RUNS);
@@ -236,8 +295,14 @@ describe('when moderators decide several runs of one part at the same moment', (
     const moderator = await sessionOf((await createUser({ role: 'moderator' })).login);
     const build = await createBuildRow(owner.id, { status: 'published' });
     const part = await createPart();
-    const runs = await Promise.all(Array.from({ length: 12 }, (_, i) => createRunRow({ buildId: build.id, partId: part.id, ownerId: owner.id, gainNmPerV: 50 + i })));
-    const res = await Promise.all(runs.map((r) => call('decide-run', `/api/review/runs/${r.id}/decision`, { method: 'POST', as: moderator, json: { decision: 'accept' } })));
+    const runs = await Promise.all(
+      Array.from({ length: 12 }, (_, i) => createRunRow({ buildId: build.id, partId: part.id, ownerId: owner.id, gainNmPerV: 50 + i })),
+    );
+    const res = await Promise.all(
+      runs.map((r) =>
+        call('decide-run', `/api/review/runs/${r.id}/decision`, { method: 'POST', as: moderator, json: { decision: 'accept' } }),
+      ),
+    );
     expect(res.map((r) => r.status)).toEqual(runs.map(() => 200));
     expect(await call('part', `/api/parts/${part.id}`)).toMatchObject({ status: 200, body: { stats: { acceptedRunCount: 12 } } });
   });
@@ -246,7 +311,16 @@ describe('when moderators decide several runs of one part at the same moment', (
 describe('when a maker sends several messages on one listing at the same moment', () => {
   async function listingOf(ownerId: number) {
     const { Listing } = await import('../../server/models/listing.model.ts');
-    return Listing.create({ ownerId, partId: (await createPart()).id, kind: 'offering', quantity: 1, condition: 'salvaged-tested', priceKind: 'free', region: 'Utrecht', notes: 'Concurrency.' });
+    return Listing.create({
+      ownerId,
+      partId: (await createPart()).id,
+      kind: 'offering',
+      quantity: 1,
+      condition: 'salvaged-tested',
+      priceKind: 'free',
+      region: 'Utrecht',
+      notes: 'Concurrency.',
+    });
   }
   const send = (as: Who, listingId: number, i: number) =>
     call('message', `/api/listings/${listingId}/messages`, { method: 'POST', as, json: { body: `Message ${i}` } });

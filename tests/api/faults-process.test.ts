@@ -49,7 +49,11 @@ async function startServer(): Promise<RunningServer> {
       OAUTH_STANDIN_PORT: String(oauth),
       SMTP_CATCHER_PORT: String(smtp),
       INBOX_PORT: String(inbox),
-      DB_HOST: db.db.host, DB_PORT: String(db.db.port), DB_NAME: db.db.name, DB_USER: db.db.user, DB_PASSWORD: db.db.password,
+      DB_HOST: db.db.host,
+      DB_PORT: String(db.db.port),
+      DB_NAME: db.db.name,
+      DB_USER: db.db.user,
+      DB_PASSWORD: db.db.password,
       SESSION_SECRET,
       RATE_LIMITS: 'false',
       UPLOADS_DIR: uploads,
@@ -57,19 +61,40 @@ async function startServer(): Promise<RunningServer> {
   });
   let out = '';
   const listeners = new Set<() => void>();
-  const onData = (chunk: Buffer) => { out += chunk.toString(); for (const l of listeners) l(); };
+  const onData = (chunk: Buffer) => {
+    out += chunk.toString();
+    for (const l of listeners) l();
+  };
   child.stdout!.on('data', onData);
   child.stderr!.on('data', onData);
-  const exited = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((resolve) => child.once('exit', (code, signal) => resolve({ code, signal })));
-  const waitForOutput = (pattern: RegExp, timeoutMs = 10_000) => new Promise<void>((resolve, reject) => {
-    const check = () => { if (pattern.test(out)) { cleanup(); resolve(); } };
-    const timer = setTimeout(() => { cleanup(); reject(new Error(`no ${pattern} in server output within ${timeoutMs} ms:\n${out.slice(-2000)}`)); }, timeoutMs);
-    const gone = () => { cleanup(); reject(new Error(`server exited while waiting for ${pattern}:\n${out.slice(-2000)}`)); };
-    const cleanup = () => { clearTimeout(timer); listeners.delete(check); child.off('exit', gone); };
-    listeners.add(check);
-    child.once('exit', gone);
-    check();
-  });
+  const exited = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((resolve) =>
+    child.once('exit', (code, signal) => resolve({ code, signal })),
+  );
+  const waitForOutput = (pattern: RegExp, timeoutMs = 10_000) =>
+    new Promise<void>((resolve, reject) => {
+      const check = () => {
+        if (pattern.test(out)) {
+          cleanup();
+          resolve();
+        }
+      };
+      const timer = setTimeout(() => {
+        cleanup();
+        reject(new Error(`no ${pattern} in server output within ${timeoutMs} ms:\n${out.slice(-2000)}`));
+      }, timeoutMs);
+      const gone = () => {
+        cleanup();
+        reject(new Error(`server exited while waiting for ${pattern}:\n${out.slice(-2000)}`));
+      };
+      const cleanup = () => {
+        clearTimeout(timer);
+        listeners.delete(check);
+        child.off('exit', gone);
+      };
+      listeners.add(check);
+      child.once('exit', gone);
+      check();
+    });
   const server: RunningServer = {
     port,
     base: `http://127.0.0.1:${port}`,
@@ -88,9 +113,17 @@ async function startServer(): Promise<RunningServer> {
 }
 
 /** A cookie jar of one: the session cookie, as a browser would keep it. */
-interface Browser { base: string; cookie: string; csrf: string }
+interface Browser {
+  base: string;
+  cookie: string;
+  csrf: string;
+}
 
-const sidOf = (res: Response) => res.headers.getSetCookie().map((c) => c.split(';')[0]).find((c) => c.startsWith('scanwright.sid='));
+const sidOf = (res: Response) =>
+  res.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .find((c) => c.startsWith('scanwright.sid='));
 
 /** Sign in through the instance's own OAuth stand-in, following each redirect by hand. */
 async function signInAt(server: RunningServer, login: string): Promise<Browser> {
@@ -117,7 +150,8 @@ async function api(b: Browser | { base: string }, method: string, path: string, 
 }
 
 const globalStatus = (name: string) => Number(db.sql(`SHOW GLOBAL STATUS LIKE '${name}'`).trim().split(/\s+/).pop());
-const appConnections = () => Number(db.sql(`SELECT COUNT(*) FROM information_schema.PROCESSLIST WHERE USER = '${db.db.user}'`).trim().split(/\s+/).pop());
+const appConnections = () =>
+  Number(db.sql(`SELECT COUNT(*) FROM information_schema.PROCESSLIST WHERE USER = '${db.db.user}'`).trim().split(/\s+/).pop());
 
 beforeAll(async () => {
   db = await startPrivateMariaDb({ database: 'scanwright_faults_process' });
@@ -142,16 +176,30 @@ describe('SIGTERM with a request in flight', () => {
     const abortedBefore = globalStatus('Aborted_clients');
 
     // 100 000 points, the first half sent now, the rest after SIGTERM: the request is in flight.
-    const points = Array.from({ length: 100_000 }, (_, i) => ({ volts: (i % 1000) * 0.1, displacement: (i % 1000) * 0.1 * 42.5 + ((i * 7919) % 13) * 0.01 }));
+    const points = Array.from({ length: 100_000 }, (_, i) => ({
+      volts: (i % 1000) * 0.1,
+      displacement: (i % 1000) * 0.1 * 42.5 + ((i * 7919) % 13) * 0.01,
+    }));
     const payload = Buffer.from(JSON.stringify({ points, displacementUnit: 'nm' }));
     let req!: ClientRequest;
-    const response = new Promise<{ status: number; body: { n?: number; gainNmPerV?: number } ; connection?: string }>((resolve, reject) => {
-      req = httpRequest({ host: '127.0.0.1', port: server.port, path: '/api/workbench/fit', method: 'POST', headers: { 'content-type': 'application/json', 'content-length': payload.length } }, (res: IncomingMessage) => {
-        let text = '';
-        res.setEncoding('utf8');
-        res.on('data', (c: string) => { text += c; });
-        res.on('end', () => resolve({ status: res.statusCode!, body: JSON.parse(text), connection: res.headers.connection }));
-      });
+    const response = new Promise<{ status: number; body: { n?: number; gainNmPerV?: number }; connection?: string }>((resolve, reject) => {
+      req = httpRequest(
+        {
+          host: '127.0.0.1',
+          port: server.port,
+          path: '/api/workbench/fit',
+          method: 'POST',
+          headers: { 'content-type': 'application/json', 'content-length': payload.length },
+        },
+        (res: IncomingMessage) => {
+          let text = '';
+          res.setEncoding('utf8');
+          res.on('data', (c: string) => {
+            text += c;
+          });
+          res.on('end', () => resolve({ status: res.statusCode!, body: JSON.parse(text), connection: res.headers.connection }));
+        },
+      );
       req.on('error', reject);
     });
     const half = Math.floor(payload.length / 2);
@@ -165,7 +213,10 @@ describe('SIGTERM with a request in flight', () => {
     // No new connections once shutting down.
     const refused = await new Promise<string>((resolve) => {
       const s = connect(server.port, '127.0.0.1');
-      s.once('connect', () => { s.destroy(); resolve('connected'); });
+      s.once('connect', () => {
+        s.destroy();
+        resolve('connected');
+      });
       s.once('error', (err: NodeJS.ErrnoException) => resolve(err.code ?? String(err)));
     });
     expect(refused).toBe('ECONNREFUSED');
@@ -203,9 +254,16 @@ describe('two instances on two ports over one database', () => {
     const session = await api(onB, 'GET', '/api/session');
     expect(session).toMatchObject({ status: 200, body: { user: { login }, csrfToken: onA.csrf } });
     // And a write with that cookie and token is accepted by B.
-    const created = await api(onB, 'POST', '/api/builds', { title: 'Made on B', instrumentKind: 'tunnelling-microscope', summary: 'Signed in on A.' });
+    const created = await api(onB, 'POST', '/api/builds', {
+      title: 'Made on B',
+      instrumentKind: 'tunnelling-microscope',
+      summary: 'Signed in on A.',
+    });
     expect(created).toMatchObject({ status: 201, body: { title: 'Made on B', status: 'draft' } });
-    expect(await api(onA, 'GET', `/api/builds/${created.body.id}`)).toMatchObject({ status: 200, body: { id: created.body.id, title: 'Made on B' } });
+    expect(await api(onA, 'GET', `/api/builds/${created.body.id}`)).toMatchObject({
+      status: 200,
+      body: { id: created.body.id, title: 'Made on B' },
+    });
   });
 
   test('when a moderator publishes on B a build submitted on A, then A shows it published', async () => {
@@ -214,14 +272,24 @@ describe('two instances on two ports over one database', () => {
     const maker = await signInAt(a, uniqueLogin());
     const moderator = await signInAt(b, moderatorLogin);
 
-    const build = await api(maker, 'POST', '/api/builds', { title: 'Two-instance build', instrumentKind: 'profilometer', summary: 'Submitted on A.' });
+    const build = await api(maker, 'POST', '/api/builds', {
+      title: 'Two-instance build',
+      instrumentKind: 'profilometer',
+      summary: 'Submitted on A.',
+    });
     expect(build.status).toBe(201);
     expect(await api(maker, 'POST', `/api/builds/${build.body.id}/submit`)).toMatchObject({ status: 200, body: { status: 'submitted' } });
     const queue = await api(moderator, 'GET', '/api/review/queue');
     expect(JSON.stringify(queue.body)).toContain('Two-instance build');
 
-    expect(await api(moderator, 'POST', `/api/review/builds/${build.body.id}/decision`, { decision: 'publish' })).toMatchObject({ status: 200, body: { id: build.body.id, status: 'published' } });
-    expect(await api({ base: a.base }, 'GET', `/api/builds/${build.body.id}`)).toMatchObject({ status: 200, body: { status: 'published' } });
+    expect(await api(moderator, 'POST', `/api/review/builds/${build.body.id}/decision`, { decision: 'publish' })).toMatchObject({
+      status: 200,
+      body: { id: build.body.id, status: 'published' },
+    });
+    expect(await api({ base: a.base }, 'GET', `/api/builds/${build.body.id}`)).toMatchObject({
+      status: 200,
+      body: { status: 'published' },
+    });
     const list = await api({ base: a.base }, 'GET', '/api/builds?q=Two-instance');
     expect(list.body.items.map((i: { id: number }) => i.id)).toContain(build.body.id);
   });

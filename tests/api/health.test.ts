@@ -6,8 +6,12 @@ import { createUser } from '../support/factories.ts';
 
 describe('GET /api/health', () => {
   let t: TestApp;
-  beforeAll(async () => { t = await startTestApp(); });
-  afterAll(async () => { await t.close(); });
+  beforeAll(async () => {
+    t = await startTestApp();
+  });
+  afterAll(async () => {
+    await t.close();
+  });
 
   test('when the database answers, then 200 with db up', async () => {
     const res = await request(t.app).get('/api/health');
@@ -30,8 +34,12 @@ describe('GET /api/health', () => {
 
 describe('errors', () => {
   let t: TestApp;
-  beforeAll(async () => { t = await startTestApp(); });
-  afterAll(async () => { await t.close(); });
+  beforeAll(async () => {
+    t = await startTestApp();
+  });
+  afterAll(async () => {
+    await t.close();
+  });
 
   test('when a body is malformed JSON, then 400 malformed_json in the error shape', async () => {
     const res = await request(t.app).post('/api/workbench/fit').set('Content-Type', 'application/json').send('{"points": [1, 2');

@@ -7,8 +7,12 @@ import { runColumns } from '../../server/services/run.service.ts';
 import { fitCalibrationInUnits } from '../../shared/workbench/calibration-fit.ts';
 
 let t: TestApp;
-beforeAll(async () => { t = await startTestApp(); });
-afterAll(async () => { await t.close(); });
+beforeAll(async () => {
+  t = await startTestApp();
+});
+afterAll(async () => {
+  await t.close();
+});
 
 const migrateUp = () => up({ name: '20261202100000-recompute-run-fits', context: t.handle.sequelize.getQueryInterface() });
 /** The same recomputation limited to this file's rows, so parallel test files are not touched. */
@@ -21,7 +25,13 @@ const points = [
   ...volts.map((V) => ({ volts: V, displacement: 10 * V + loop(V), sweep: 'up' as const })),
   ...volts.toReversed().map((V) => ({ volts: V, displacement: 10 * V - loop(V), sweep: 'down' as const })),
 ];
-const input = { points, voltageUnit: 'V' as const, displacementUnit: 'nm' as const, model: 'intercept' as const, method: 'indicator' as const };
+const input = {
+  points,
+  voltageUnit: 'V' as const,
+  displacementUnit: 'nm' as const,
+  model: 'intercept' as const,
+  method: 'indicator' as const,
+};
 
 /** The superseded figure, by hand: max |residual| / span × 100 with the line x = 10·V (symmetry) and span 10 nm/V × 4 V. */
 const oldNonlinearityPct = (Math.max(...points.map((p) => Math.abs(p.displacement - 10 * p.volts))) / 40) * 100;
@@ -62,7 +72,7 @@ describe('migration 20261202100000-recompute-run-fits', () => {
     const after = (await CalibrationRun.findByPk(loopRun.id))!;
     expect(after.nonlinearityPctFs).toBeCloseTo(0, 9);
     expect(after.gainNmPerV).toBeCloseTo(10, 12);
-    expect(after.hysteresisPctFs).toBeCloseTo((2 * loop(2) / 40) * 100, 9);
+    expect(after.hysteresisPctFs).toBeCloseTo(((2 * loop(2)) / 40) * 100, 9);
     expect(fitFigures((await CalibrationRun.findByPk(other.id))!)).toEqual(otherBefore);
   });
 
@@ -76,7 +86,7 @@ describe('migration 20261202100000-recompute-run-fits', () => {
     expect(once[0]!.nonlinearityPctFs).toBeCloseTo(0, 9);
   });
 
-  test('when a run\'s points can no longer be fitted, then up leaves its figures as stored', async () => {
+  test("when a run's points can no longer be fitted, then up leaves its figures as stored", async () => {
     const { loopRun } = await storedRuns();
     await loopRun.update({ pointsJson: '[]' });
     const before = fitFigures((await CalibrationRun.findByPk(loopRun.id))!);

@@ -13,7 +13,15 @@ import { recomputePartStats } from '../../server/services/part-stats.service.ts'
 
 let t: TestApp;
 const tag = `zq${randomBytes(4).toString('hex')}`;
-interface Seeded { id: number; name: string; category: string; median: number | null; runs: number; safeVolts: number | null; createdAt: number }
+interface Seeded {
+  id: number;
+  name: string;
+  category: string;
+  median: number | null;
+  runs: number;
+  safeVolts: number | null;
+  createdAt: number;
+}
 const seeded: Seeded[] = [];
 
 /** Deterministic pseudo-random parts: some without runs, various categories, gains and voltage ratings. */
@@ -23,49 +31,109 @@ beforeAll(async () => {
   for (let i = 0; i < 23; i++) {
     const runs = i % 5 === 0 ? 0 : (i % 4) + 1;
     const median = runs ? Math.round(((i * 37) % 180) + 5) : null;
-    const p = await Part.create({
-      category: cats[i % 4] as 'bimorph', name: `${tag} part ${String(i).padStart(2, '0')}`, salvageSource: 'test', material: null,
-      lengthMm: null, widthMm: null, thicknessMm: null, outerDiameterMm: null, wallMm: null, layers: null, capacitanceNf: null,
-      safeVolts: i % 3 === 0 ? null : 20 + i * 5, notes: null, status: 'accepted', proposedById: null,
-      gainMedianNmPerV: median, acceptedRunCount: runs, createdAt: new Date(Date.UTC(2026, 0, 1 + i)), updatedAt: new Date(),
-    }, { silent: true });
+    const p = await Part.create(
+      {
+        category: cats[i % 4] as 'bimorph',
+        name: `${tag} part ${String(i).padStart(2, '0')}`,
+        salvageSource: 'test',
+        material: null,
+        lengthMm: null,
+        widthMm: null,
+        thicknessMm: null,
+        outerDiameterMm: null,
+        wallMm: null,
+        layers: null,
+        capacitanceNf: null,
+        safeVolts: i % 3 === 0 ? null : 20 + i * 5,
+        notes: null,
+        status: 'accepted',
+        proposedById: null,
+        gainMedianNmPerV: median,
+        acceptedRunCount: runs,
+        createdAt: new Date(Date.UTC(2026, 0, 1 + i)),
+        updatedAt: new Date(),
+      },
+      { silent: true },
+    );
     seeded.push({ id: p.id, name: p.name, category: p.category, median, runs, safeVolts: p.safeVolts, createdAt: p.createdAt.getTime() });
   }
-  await Part.create({ category: 'bimorph', name: `${tag} proposed`, salvageSource: null, material: null, lengthMm: null, widthMm: null, thicknessMm: null, outerDiameterMm: null, wallMm: null, layers: null, capacitanceNf: null, safeVolts: null, notes: null, status: 'proposed', proposedById: null });
+  await Part.create({
+    category: 'bimorph',
+    name: `${tag} proposed`,
+    salvageSource: null,
+    material: null,
+    lengthMm: null,
+    widthMm: null,
+    thicknessMm: null,
+    outerDiameterMm: null,
+    wallMm: null,
+    layers: null,
+    capacitanceNf: null,
+    safeVolts: null,
+    notes: null,
+    status: 'proposed',
+    proposedById: null,
+  });
 });
-afterAll(async () => { await t.close(); });
+afterAll(async () => {
+  await t.close();
+});
 
 /** The independent computation: filter and sort the seeded rows in plain JS. */
 function expected(f: { category?: string; gainMin?: number; gainMax?: number; minRuns?: number; maxVolts?: number; sort?: string }) {
-  let rows = seeded.filter((p) => (!f.category || p.category === f.category)
-    && (f.gainMin === undefined || (p.median !== null && p.median >= f.gainMin))
-    && (f.gainMax === undefined || (p.median !== null && p.median <= f.gainMax))
-    && (f.minRuns === undefined || p.runs >= f.minRuns)
-    && (f.maxVolts === undefined || (p.safeVolts !== null && p.safeVolts <= f.maxVolts)));
+  let rows = seeded.filter(
+    (p) =>
+      (!f.category || p.category === f.category) &&
+      (f.gainMin === undefined || (p.median !== null && p.median >= f.gainMin)) &&
+      (f.gainMax === undefined || (p.median !== null && p.median <= f.gainMax)) &&
+      (f.minRuns === undefined || p.runs >= f.minRuns) &&
+      (f.maxVolts === undefined || (p.safeVolts !== null && p.safeVolts <= f.maxVolts)),
+  );
   const by = (key: (p: Seeded) => number | string, dir: 1 | -1) => (a: Seeded, b: Seeded) => {
-    const ka = key(a); const kb = key(b);
+    const ka = key(a);
+    const kb = key(b);
     if (ka === kb) return dir * (a.id - b.id);
     return dir * (ka < kb ? -1 : 1);
   };
   const nullsLow = (p: Seeded) => p.median ?? -Infinity;
   const sorts: Record<string, (a: Seeded, b: Seeded) => number> = {
-    gain: by(nullsLow, 1), '-gain': by(nullsLow, -1), runs: by((p) => p.runs, 1), '-runs': by((p) => p.runs, -1),
-    newest: by((p) => p.createdAt, -1), name: by((p) => p.name, 1),
+    gain: by(nullsLow, 1),
+    '-gain': by(nullsLow, -1),
+    runs: by((p) => p.runs, 1),
+    '-runs': by((p) => p.runs, -1),
+    newest: by((p) => p.createdAt, -1),
+    name: by((p) => p.name, 1),
   };
   rows = rows.slice().sort(sorts[f.sort ?? 'name']);
   return rows.map((r) => r.id);
 }
 
 async function search(params: Record<string, string | number>) {
-  const qs = new URLSearchParams({ q: tag, pageSize: '100', ...Object.fromEntries(Object.entries(params).map(([k, v]) => [k, String(v)])) });
+  const qs = new URLSearchParams({
+    q: tag,
+    pageSize: '100',
+    ...Object.fromEntries(Object.entries(params).map(([k, v]) => [k, String(v)])),
+  });
   return request(t.app).get(`/api/parts?${qs}`);
 }
 
 describe('GET /api/parts', () => {
   test.each([
-    [{}], [{ category: 'stack' }], [{ gainMin: 50 }], [{ gainMax: 40 }], [{ gainMin: 20, gainMax: 120 }], [{ minRuns: 3 }], [{ maxVolts: 80 }],
+    [{}],
+    [{ category: 'stack' }],
+    [{ gainMin: 50 }],
+    [{ gainMax: 40 }],
+    [{ gainMin: 20, gainMax: 120 }],
+    [{ minRuns: 3 }],
+    [{ maxVolts: 80 }],
     [{ category: 'bimorph', gainMin: 10, minRuns: 1, maxVolts: 200 }],
-    [{ sort: 'gain' }], [{ sort: '-gain' }], [{ sort: 'runs' }], [{ sort: '-runs' }], [{ sort: 'newest' }], [{ sort: 'name' }], [{ gainMin: 0, sort: '-gain' }],
+    [{ sort: 'gain' }],
+    [{ sort: '-gain' }],
+    [{ sort: 'runs' }],
+    [{ sort: '-runs' }],
+    [{ sort: 'newest' }],
+    [{ sort: 'name' }],
+    [{ gainMin: 0, sort: '-gain' }],
   ])('when searching with %o, then the ids equal an independent filter-and-sort of the seeded parts', async (f) => {
     const res = await search(f as Record<string, string | number>);
     expect(res.status).toBe(200);
@@ -83,7 +151,8 @@ describe('GET /api/parts', () => {
   test('when paging, then pages partition the result and the last page is short; past the end is empty', async () => {
     const ids = expected({ sort: 'gain' });
     const pages = [];
-    for (let page = 1; page <= 3; page++) pages.push(...(await search({ sort: 'gain', pageSize: 10, page })).body.items.map((p: { id: number }) => p.id));
+    for (let page = 1; page <= 3; page++)
+      pages.push(...(await search({ sort: 'gain', pageSize: 10, page })).body.items.map((p: { id: number }) => p.id));
     expect(pages).toEqual(ids);
     const past = await search({ sort: 'gain', pageSize: 10, page: 4 });
     expect(past.body).toMatchObject({ items: [], total: ids.length, page: 4, pageSize: 10 });
@@ -91,13 +160,31 @@ describe('GET /api/parts', () => {
 
   test('when an item is listed, then it carries the headline figures', async () => {
     const res = await search({ minRuns: 1, pageSize: 1 });
-    expect(res.body.items[0]).toMatchObject({ id: expect.any(Number), name: expect.any(String), category: expect.any(String), gainMedianNmPerV: expect.any(Number), acceptedRunCount: expect.any(Number), buildCount: expect.any(Number) });
+    expect(res.body.items[0]).toMatchObject({
+      id: expect.any(Number),
+      name: expect.any(String),
+      category: expect.any(String),
+      gainMedianNmPerV: expect.any(Number),
+      acceptedRunCount: expect.any(Number),
+      buildCount: expect.any(Number),
+    });
     expect(res.body.items[0]).toHaveProperty('gainP25NmPerV');
     expect(res.body.items[0]).toHaveProperty('gainP75NmPerV');
   });
 
   test.each([
-    'gainMin=abc', 'gainMin=-1', 'gainMin=50&gainMax=10', 'minRuns=1.5', 'sort=loudest', 'category=crystal', 'page=0', 'pageSize=101', 'maxVolts=NaN', 'gainMax=Infinity', 'unknown=1', 'format=xml',
+    'gainMin=abc',
+    'gainMin=-1',
+    'gainMin=50&gainMax=10',
+    'minRuns=1.5',
+    'sort=loudest',
+    'category=crystal',
+    'page=0',
+    'pageSize=101',
+    'maxVolts=NaN',
+    'gainMax=Infinity',
+    'unknown=1',
+    'format=xml',
   ])('when the query is %s, then 400 with the error shape', async (qs) => {
     const res = await request(t.app).get(`/api/parts?${qs}`);
     expect(res.status).toBe(400);
@@ -110,7 +197,9 @@ describe('GET /api/parts', () => {
     expect(res.headers['content-type']).toMatch(/text\/csv/);
     expect(res.headers['content-disposition']).toMatch(/attachment; filename="?scanwright-parts-\d{4}-\d{2}-\d{2}\.csv"?/);
     const lines = res.text.trim().split(/\r?\n/);
-    expect(lines[0]).toBe('id,name,category,salvage_source,material,safe_volts_V,capacitance_nF,gain_median_nm_per_V,gain_p25_nm_per_V,gain_p75_nm_per_V,accepted_runs,builds,created_at');
+    expect(lines[0]).toBe(
+      'id,name,category,salvage_source,material,safe_volts_V,capacitance_nF,gain_median_nm_per_V,gain_p25_nm_per_V,gain_p75_nm_per_V,accepted_runs,builds,created_at',
+    );
     expect(lines.slice(1).map((l) => Number(l.split(',')[0]))).toEqual(expected({ sort: 'gain', minRuns: 1 }));
   });
 
@@ -144,7 +233,10 @@ describe('POST /api/parts and GET /api/parts/:id', () => {
   test('when a maker proposes a part, then 201 proposed, visible to them and moderators only', async () => {
     const maker = await createUser();
     const a = await signIn(t, maker.login);
-    const res = await a.post('/api/parts').set('X-CSRF-Token', a.csrf).send({ category: 'shear-plate', name: 'Shear plate 10 × 10 mm', salvageSource: 'old printer', thicknessMm: 0.5, safeVolts: 200 });
+    const res = await a
+      .post('/api/parts')
+      .set('X-CSRF-Token', a.csrf)
+      .send({ category: 'shear-plate', name: 'Shear plate 10 × 10 mm', salvageSource: 'old printer', thicknessMm: 0.5, safeVolts: 200 });
     expect(res.status).toBe(201);
     expect(res.body).toEqual({ id: expect.any(Number), status: 'proposed' });
     expect((await a.get(`/api/parts/${res.body.id}`)).status).toBe(200);
@@ -154,7 +246,11 @@ describe('POST /api/parts and GET /api/parts/:id', () => {
   });
 
   test.each([
-    [{ category: 'crystal', name: 'x y z' }], [{ category: 'tube', name: 'ab' }], [{ category: 'tube', name: 'Tube', lengthMm: -1 }], [{ category: 'tube', name: 'Tube', layers: 2.5 }], [{ category: 'tube', name: 'Tube', status: 'accepted' }],
+    [{ category: 'crystal', name: 'x y z' }],
+    [{ category: 'tube', name: 'ab' }],
+    [{ category: 'tube', name: 'Tube', lengthMm: -1 }],
+    [{ category: 'tube', name: 'Tube', layers: 2.5 }],
+    [{ category: 'tube', name: 'Tube', status: 'accepted' }],
   ])('when the proposal is %o, then 400', async (body) => {
     const a = await signIn(t, (await createUser()).login);
     expect((await a.post('/api/parts').set('X-CSRF-Token', a.csrf).send(body)).status).toBe(400);
@@ -173,17 +269,36 @@ describe('POST /api/parts and GET /api/parts/:id', () => {
     const run = await createRunRow({ buildId: b.id, partId: part.id, ownerId: owner.id, gainNmPerV: 99, status: 'accepted' });
     await createRunRow({ buildId: b.id, partId: part.id, ownerId: owner.id, gainNmPerV: 300, status: 'pending' });
     await Part.sequelize!.transaction((tx) => recomputePartStats(part.id, tx));
-    await Listing.create({ ownerId: owner.id, partId: part.id, kind: 'offering', quantity: 2, condition: 'new', priceKind: 'free', priceAmount: null, currency: null, region: 'Here', shipsTo: null, notes: null });
+    await Listing.create({
+      ownerId: owner.id,
+      partId: part.id,
+      kind: 'offering',
+      quantity: 2,
+      condition: 'new',
+      priceKind: 'free',
+      priceAmount: null,
+      currency: null,
+      region: 'Here',
+      shipsTo: null,
+      notes: null,
+    });
     const res = await request(t.app).get(`/api/parts/${part.id}`);
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ id: part.id, stats: { acceptedRunCount: 1, buildCount: 1 }, runs: [{ id: run.id, buildId: b.id, buildTitle: b.title, maker: owner.login, method: 'indicator' }], listings: [{ kind: 'offering', quantity: 2, priceLabel: 'Free', owner: owner.login }] });
+    expect(res.body).toMatchObject({
+      id: part.id,
+      stats: { acceptedRunCount: 1, buildCount: 1 },
+      runs: [{ id: run.id, buildId: b.id, buildTitle: b.title, maker: owner.login, method: 'indicator' }],
+      listings: [{ kind: 'offering', quantity: 2, priceLabel: 'Free', owner: owner.login }],
+    });
     expect(res.body.expectedGain.gainNmPerV).toBeCloseTo(102.6, 1); // [calc, FIELD.md: 12 × 0.6 mm PZT-5A series bimorph]
   });
 });
 
 describe('POST /api/parts/:id/merge', () => {
   let mod: Agent;
-  beforeAll(async () => { mod = await signIn(t, (await createUser({ role: 'moderator' })).login); });
+  beforeAll(async () => {
+    mod = await signIn(t, (await createUser({ role: 'moderator' })).login);
+  });
 
   test('when a moderator merges a duplicate, then runs, actuators, listings and photos move, stats are recomputed and the trail records it', async () => {
     const owner = await createUser();
@@ -192,14 +307,40 @@ describe('POST /api/parts/:id/merge', () => {
     const b = await createBuildRow(owner.id, { status: 'published' });
     const r1 = await createRunRow({ buildId: b.id, partId: keep.id, ownerId: owner.id, gainNmPerV: 100, status: 'accepted' });
     const r2 = await createRunRow({ buildId: b.id, partId: dup.id, ownerId: owner.id, gainNmPerV: 120, status: 'accepted' });
-    await Listing.create({ ownerId: owner.id, partId: dup.id, kind: 'seeking', quantity: 1, condition: 'new', priceKind: 'swap', priceAmount: null, currency: null, region: 'Here', shipsTo: null, notes: null });
-    const photo = (partId: number, alt: string) => PartPhoto.create({ partId, contentHash: alt.padEnd(64, '0'), displayFile: 'a.webp', thumbFile: 'a-t.webp', width: 4, height: 3, alt });
-    await photo(keep.id, 'kept'); await photo(dup.id, 'moved');
-    const res = await mod.post(`/api/parts/${dup.id}/merge`).set('X-CSRF-Token', mod.csrf).send({ intoPartId: keep.id, note: 'Same bar, two names.' });
+    await Listing.create({
+      ownerId: owner.id,
+      partId: dup.id,
+      kind: 'seeking',
+      quantity: 1,
+      condition: 'new',
+      priceKind: 'swap',
+      priceAmount: null,
+      currency: null,
+      region: 'Here',
+      shipsTo: null,
+      notes: null,
+    });
+    const photo = (partId: number, alt: string) =>
+      PartPhoto.create({
+        partId,
+        contentHash: alt.padEnd(64, '0'),
+        displayFile: 'a.webp',
+        thumbFile: 'a-t.webp',
+        width: 4,
+        height: 3,
+        alt,
+      });
+    await photo(keep.id, 'kept');
+    await photo(dup.id, 'moved');
+    const res = await mod
+      .post(`/api/parts/${dup.id}/merge`)
+      .set('X-CSRF-Token', mod.csrf)
+      .send({ intoPartId: keep.id, note: 'Same bar, two names.' });
     expect(res.status).toBe(200);
     expect(res.body).toEqual({ id: dup.id, mergedIntoId: keep.id, moved: { actuators: 1, runs: 1, listings: 1, photos: 1 } });
     expect((await request(t.app).get(`/api/parts/${keep.id}`)).body.photos.map((p: { alt: string }) => p.alt)).toEqual(['kept', 'moved']);
-    await keep.reload(); await dup.reload();
+    await keep.reload();
+    await dup.reload();
     expect(await CalibrationRun.count({ where: { partId: dup.id } })).toBe(0);
     expect(await Actuator.count({ where: { partId: dup.id } })).toBe(0);
     expect(keep.acceptedRunCount).toBe(2);
@@ -207,14 +348,21 @@ describe('POST /api/parts/:id/merge', () => {
     expect(dup).toMatchObject({ status: 'rejected', mergedIntoId: keep.id, acceptedRunCount: 0 });
     const audit = await mod.get(`/api/review/audit?targetType=part&targetId=${dup.id}`);
     expect(audit.body.items[0]).toMatchObject({ action: 'part.merge' });
-    expect((await mod.post(`/api/parts/${dup.id}/merge`).set('X-CSRF-Token', mod.csrf).send({ intoPartId: keep.id, note: 'again' })).status).toBe(409);
+    expect(
+      (await mod.post(`/api/parts/${dup.id}/merge`).set('X-CSRF-Token', mod.csrf).send({ intoPartId: keep.id, note: 'again' })).status,
+    ).toBe(409);
   });
 
   test('when a maker merges, then 403; into itself, then 400; without a note, then 400', async () => {
-    const p = await createPart(); const q = await createPart();
+    const p = await createPart();
+    const q = await createPart();
     const maker = await signIn(t, (await createUser()).login);
-    expect((await maker.post(`/api/parts/${p.id}/merge`).set('X-CSRF-Token', maker.csrf).send({ intoPartId: q.id, note: 'x' })).status).toBe(403);
-    expect((await mod.post(`/api/parts/${p.id}/merge`).set('X-CSRF-Token', mod.csrf).send({ intoPartId: p.id, note: 'x' })).status).toBe(400);
+    expect(
+      (await maker.post(`/api/parts/${p.id}/merge`).set('X-CSRF-Token', maker.csrf).send({ intoPartId: q.id, note: 'x' })).status,
+    ).toBe(403);
+    expect((await mod.post(`/api/parts/${p.id}/merge`).set('X-CSRF-Token', mod.csrf).send({ intoPartId: p.id, note: 'x' })).status).toBe(
+      400,
+    );
     expect((await mod.post(`/api/parts/${p.id}/merge`).set('X-CSRF-Token', mod.csrf).send({ intoPartId: q.id })).status).toBe(400);
   });
 });
@@ -225,12 +373,36 @@ describe('registry row shape', () => {
     const res = await request(t.app).get(`/api/parts?q=${encodeURIComponent(part.name)}`);
     expect(res.status).toBe(200);
     const [item] = res.body.items;
-    expect(Object.keys(item).sort()).toEqual([
-      'id', 'name', 'category', 'status', 'salvageSource', 'material', 'safeVolts', 'capacitanceNf', 'acceptedRunCount', 'buildCount',
-      'gainMedianNmPerV', 'gainP25NmPerV', 'gainP75NmPerV', 'gainMinNmPerV', 'gainMaxNmPerV', 'hysteresisMedianPct', 'createdAt',
-    ].sort());
+    expect(Object.keys(item).sort()).toEqual(
+      [
+        'id',
+        'name',
+        'category',
+        'status',
+        'salvageSource',
+        'material',
+        'safeVolts',
+        'capacitanceNf',
+        'acceptedRunCount',
+        'buildCount',
+        'gainMedianNmPerV',
+        'gainP25NmPerV',
+        'gainP75NmPerV',
+        'gainMinNmPerV',
+        'gainMaxNmPerV',
+        'hysteresisMedianPct',
+        'createdAt',
+      ].sort(),
+    );
     await part.reload();
-    expect(item).toMatchObject({ id: part.id, status: 'accepted', safeVolts: 60, capacitanceNf: 1, acceptedRunCount: 0, gainMedianNmPerV: null });
+    expect(item).toMatchObject({
+      id: part.id,
+      status: 'accepted',
+      safeVolts: 60,
+      capacitanceNf: 1,
+      acceptedRunCount: 0,
+      gainMedianNmPerV: null,
+    });
     expect(item.createdAt).toBe(new Date(Math.floor(part.createdAt.getTime() / 1000) * 1000).toISOString());
   });
 });

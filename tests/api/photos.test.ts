@@ -36,18 +36,33 @@ interface Upload {
 async function makerWithBuild(status: BuildStatus = 'draft') {
   const user = await createUser();
   const agent = await signIn(t, user.login);
-  const build = await Build.create({ ownerId: user.id, title: 'Tube-scanner STM', instrumentKind: 'profilometer', summary: 'x', body: '', status });
+  const build = await Build.create({
+    ownerId: user.id,
+    title: 'Tube-scanner STM',
+    instrumentKind: 'profilometer',
+    summary: 'x',
+    body: '',
+    status,
+  });
   return { user, agent, build };
 }
 
-function post(agent: Agent | request.Agent, buildId: number, files: Upload[], fields: Record<string, string | string[]> = { alt: 'The scan head' }, csrf?: string) {
+function post(
+  agent: Agent | request.Agent,
+  buildId: number,
+  files: Upload[],
+  fields: Record<string, string | string[]> = { alt: 'The scan head' },
+  csrf?: string,
+) {
   let req = agent.post(`/api/builds/${buildId}/photos`);
   if (csrf !== undefined) req = req.set('X-CSRF-Token', csrf);
   for (const [name, value] of Object.entries(fields)) for (const v of [value].flat()) req = req.field(name, v);
-  for (const f of files) req = req.attach('photos', f.bytes, { filename: f.filename ?? 'photo.jpg', contentType: f.contentType ?? 'image/jpeg' });
+  for (const f of files)
+    req = req.attach('photos', f.bytes, { filename: f.filename ?? 'photo.jpg', contentType: f.contentType ?? 'image/jpeg' });
   return req;
 }
-const upload = (agent: Agent, buildId: number, files: Upload[], fields?: Record<string, string | string[]>) => post(agent, buildId, files, fields, agent.csrf);
+const upload = (agent: Agent, buildId: number, files: Upload[], fields?: Record<string, string | string[]>) =>
+  post(agent, buildId, files, fields, agent.csrf);
 
 const storedFiles = async () => (await readdir(uploadsDir)).sort();
 const rowsOf = (buildId: number) => Photo.count({ where: { buildId } });
@@ -72,9 +87,14 @@ async function uploadOne(agent: Agent, buildId: number, bytes?: Buffer) {
 describe('POST /api/builds/:buildId/photos', () => {
   test('when the owner uploads a JPEG and a PNG, then both are stored as WebP display and thumbnail variants with content-hash names', async () => {
     const { agent, build } = await makerWithBuild();
-    const res = await upload(agent, build.id, [{ bytes: await img.jpeg(2400, 1800) }, { bytes: await img.png(640, 480), filename: 'board.png', contentType: 'image/png' }], {
-      alt: ['The scan head on its tripod', 'The preamp board'],
-    });
+    const res = await upload(
+      agent,
+      build.id,
+      [{ bytes: await img.jpeg(2400, 1800) }, { bytes: await img.png(640, 480), filename: 'board.png', contentType: 'image/png' }],
+      {
+        alt: ['The scan head on its tripod', 'The preamp board'],
+      },
+    );
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({
       photos: [
@@ -84,7 +104,10 @@ describe('POST /api/builds/:buildId/photos', () => {
     });
     const [jpegPhoto, pngPhoto] = res.body.photos;
     expect(Object.keys(jpegPhoto).sort()).toEqual(['alt', 'entryId', 'height', 'id', 'position', 'thumbUrl', 'url', 'width']);
-    for (const [photo, thumb] of [[jpegPhoto, [400, 300]], [pngPhoto, [400, 300]]] as const) {
+    for (const [photo, thumb] of [
+      [jpegPhoto, [400, 300]],
+      [pngPhoto, [400, 300]],
+    ] as const) {
       expect(photo.url).toMatch(/^\/uploads\/[a-f0-9]{64}\.webp$/);
       expect(photo.thumbUrl).toBe(photo.url.replace('.webp', '-t.webp'));
       const display = await readFile(onDisk(photo.url));
@@ -120,7 +143,9 @@ describe('POST /api/builds/:buildId/photos', () => {
     expect(res.body.photos[0]).toMatchObject({ width: 200, height: 300 });
     const file = onDisk(res.body.photos[0].url);
     expect((await sharp(file).metadata()).orientation).toBeUndefined();
-    const pixel = async (left: number, top: number) => [...(await sharp(file).extract({ left, top, width: 1, height: 1 }).removeAlpha().raw().toBuffer())];
+    const pixel = async (left: number, top: number) => [
+      ...(await sharp(file).extract({ left, top, width: 1, height: 1 }).removeAlpha().raw().toBuffer()),
+    ];
     const [r1, , b1] = await pixel(100, 60);
     const [r2, , b2] = await pixel(100, 240);
     expect(r1).toBeGreaterThan(200);
@@ -132,9 +157,15 @@ describe('POST /api/builds/:buildId/photos', () => {
   test('when one alt is sent for several photos, then every photo gets it; when a log entry of the build is named, then they belong to it', async () => {
     const { agent, build } = await makerWithBuild();
     const entry = await LogEntry.create({ buildId: build.id, entryDate: '2026-01-10', title: 'First light', body: 'Saw atoms.' });
-    const res = await upload(agent, build.id, [{ bytes: await img.jpeg(200, 100) }, { bytes: await img.jpeg(100, 200) }], { alt: 'Early tip', entryId: String(entry.id) });
+    const res = await upload(agent, build.id, [{ bytes: await img.jpeg(200, 100) }, { bytes: await img.jpeg(100, 200) }], {
+      alt: 'Early tip',
+      entryId: String(entry.id),
+    });
     expect(res.status).toBe(201);
-    expect(res.body.photos).toMatchObject([{ alt: 'Early tip', entryId: entry.id, position: 0 }, { alt: 'Early tip', entryId: entry.id, position: 1 }]);
+    expect(res.body.photos).toMatchObject([
+      { alt: 'Early tip', entryId: entry.id, position: 0 },
+      { alt: 'Early tip', entryId: entry.id, position: 1 },
+    ]);
     const more = await upload(agent, build.id, [{ bytes: await img.jpeg(90, 90) }]);
     expect(more.body.photos[0].position).toBe(2);
   });
@@ -169,11 +200,31 @@ describe('POST /api/builds/:buildId/photos', () => {
   const svg = '<svg xmlns="http://www.w3.org/2000/svg" width="10" height="10"><script>alert(document.cookie)</script></svg>';
   const refusals: Array<[string, number, string, () => Promise<Upload> | Upload]> = [
     ['a text file is named .jpg', 415, 'unsupported_media_type', () => ({ bytes: Buffer.from('Notes on the coarse approach screw.\n') })],
-    ['an SVG carries a script', 415, 'unsupported_media_type', () => ({ bytes: Buffer.from(svg), filename: 'tip.svg', contentType: 'image/svg+xml' })],
-    ['an SVG with an XML prolog is named .png', 415, 'unsupported_media_type', () => ({ bytes: Buffer.from(`<?xml version="1.0"?>${svg}`), filename: 'tip.png', contentType: 'image/png' })],
-    ['an HTML page is named .png', 415, 'unsupported_media_type', () => ({ bytes: Buffer.from('<!doctype html><html><script>alert(1)</script></html>'), filename: 'x.png', contentType: 'image/png' })],
+    [
+      'an SVG carries a script',
+      415,
+      'unsupported_media_type',
+      () => ({ bytes: Buffer.from(svg), filename: 'tip.svg', contentType: 'image/svg+xml' }),
+    ],
+    [
+      'an SVG with an XML prolog is named .png',
+      415,
+      'unsupported_media_type',
+      () => ({ bytes: Buffer.from(`<?xml version="1.0"?>${svg}`), filename: 'tip.png', contentType: 'image/png' }),
+    ],
+    [
+      'an HTML page is named .png',
+      415,
+      'unsupported_media_type',
+      () => ({ bytes: Buffer.from('<!doctype html><html><script>alert(1)</script></html>'), filename: 'x.png', contentType: 'image/png' }),
+    ],
     ['a JPEG is truncated', 400, 'unreadable_image', async () => ({ bytes: await img.truncatedJpeg() })],
-    ['a PNG decodes to 20000×20000 pixels', 413, 'image_too_large', () => ({ bytes: img.pixelBombPng(20_000), filename: 'bomb.png', contentType: 'image/png' })],
+    [
+      'a PNG decodes to 20000×20000 pixels',
+      413,
+      'image_too_large',
+      () => ({ bytes: img.pixelBombPng(20_000), filename: 'bomb.png', contentType: 'image/png' }),
+    ],
     ['the file is empty', 400, 'empty_file', () => ({ bytes: Buffer.alloc(0) })],
     ['the file is over 20 MB', 413, 'file_too_large', () => ({ bytes: img.oversizeJpeg(20 * 1024 * 1024 + 1) })],
   ];
@@ -196,7 +247,13 @@ describe('POST /api/builds/:buildId/photos', () => {
   test('when more than 10 files are sent, then 400 too_many_files and nothing is stored', async () => {
     const { agent, build } = await makerWithBuild();
     const one = await img.jpeg(40, 30);
-    const res = await expectNothingStored(build.id, () => upload(agent, build.id, Array.from({ length: 11 }, () => ({ bytes: one }))));
+    const res = await expectNothingStored(build.id, () =>
+      upload(
+        agent,
+        build.id,
+        Array.from({ length: 11 }, () => ({ bytes: one })),
+      ),
+    );
     expect(res.status).toBe(400);
     expect(res.body).toMatchObject({ error: { code: 'too_many_files' } });
   });
@@ -225,7 +282,9 @@ describe('POST /api/builds/:buildId/photos', () => {
     const { agent, build } = await makerWithBuild();
     const other = await Build.create({ ownerId: build.ownerId, title: 'Other build', instrumentKind: 'other', summary: 'x', body: '' });
     const foreign = await LogEntry.create({ buildId: other.id, entryDate: '2026-02-01', title: 'Elsewhere', body: 'x' });
-    const res = await expectNothingStored(build.id, async () => upload(agent, build.id, [{ bytes: await img.jpeg(300, 300) }], { alt: 'A tip', entryId: String(foreign.id) }));
+    const res = await expectNothingStored(build.id, async () =>
+      upload(agent, build.id, [{ bytes: await img.jpeg(300, 300) }], { alt: 'A tip', entryId: String(foreign.id) }),
+    );
     expect(res.status).toBe(400);
     expect(res.body).toMatchObject({ error: { code: 'validation_failed', details: [{ path: 'entryId' }] } });
   });
@@ -255,7 +314,9 @@ describe('POST /api/builds/:buildId/photos', () => {
   test('when a visitor uploads, then 401', async () => {
     const { build } = await makerWithBuild();
     const guest = await visitor(t);
-    const res = await expectNothingStored(build.id, async () => post(guest, build.id, [{ bytes: await img.jpeg(50, 50) }], undefined, guest.csrf));
+    const res = await expectNothingStored(build.id, async () =>
+      post(guest, build.id, [{ bytes: await img.jpeg(50, 50) }], undefined, guest.csrf),
+    );
     expect(res.status).toBe(401);
     expect(res.body).toMatchObject({ error: { code: 'unauthorized' } });
   });
@@ -290,7 +351,10 @@ describe('PATCH /api/builds/:buildId/photos/:photoId', () => {
     const { agent, build } = await makerWithBuild();
     const photo = await uploadOne(agent, build.id);
     const entry = await LogEntry.create({ buildId: build.id, entryDate: '2026-03-01', title: 'Tip etching', body: 'NaOH, 2 V.' });
-    const res = await agent.patch(`/api/builds/${build.id}/photos/${photo.id}`).set('X-CSRF-Token', agent.csrf).send({ alt: 'Etched tungsten tip', entryId: entry.id, position: 5 });
+    const res = await agent
+      .patch(`/api/builds/${build.id}/photos/${photo.id}`)
+      .set('X-CSRF-Token', agent.csrf)
+      .send({ alt: 'Etched tungsten tip', entryId: entry.id, position: 5 });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ id: photo.id, alt: 'Etched tungsten tip', entryId: entry.id, position: 5, url: photo.url });
     const detach = await agent.patch(`/api/builds/${build.id}/photos/${photo.id}`).set('X-CSRF-Token', agent.csrf).send({ entryId: null });
@@ -302,7 +366,10 @@ describe('PATCH /api/builds/:buildId/photos/:photoId', () => {
     const photo = await uploadOne(agent, build.id);
     const other = await Build.create({ ownerId: build.ownerId, title: 'Other', instrumentKind: 'other', summary: 'x', body: '' });
     const foreign = await LogEntry.create({ buildId: other.id, entryDate: '2026-03-02', title: 'Elsewhere', body: 'x' });
-    const res = await agent.patch(`/api/builds/${build.id}/photos/${photo.id}`).set('X-CSRF-Token', agent.csrf).send({ entryId: foreign.id });
+    const res = await agent
+      .patch(`/api/builds/${build.id}/photos/${photo.id}`)
+      .set('X-CSRF-Token', agent.csrf)
+      .send({ entryId: foreign.id });
     expect(res.status).toBe(400);
     expect(res.body).toMatchObject({ error: { code: 'validation_failed', details: [{ path: 'entryId' }] } });
   });
@@ -323,8 +390,13 @@ describe('PATCH /api/builds/:buildId/photos/:photoId', () => {
     const photo = await uploadOne(agent, build.id);
     const guest = await visitor(t);
     const stranger = await signIn(t, (await createUser()).login);
-    expect((await guest.patch(`/api/builds/${build.id}/photos/${photo.id}`).set('X-CSRF-Token', guest.csrf).send({ alt: 'Mine now' })).status).toBe(401);
-    expect((await stranger.patch(`/api/builds/${build.id}/photos/${photo.id}`).set('X-CSRF-Token', stranger.csrf).send({ alt: 'Mine now' })).status).toBe(404);
+    expect(
+      (await guest.patch(`/api/builds/${build.id}/photos/${photo.id}`).set('X-CSRF-Token', guest.csrf).send({ alt: 'Mine now' })).status,
+    ).toBe(401);
+    expect(
+      (await stranger.patch(`/api/builds/${build.id}/photos/${photo.id}`).set('X-CSRF-Token', stranger.csrf).send({ alt: 'Mine now' }))
+        .status,
+    ).toBe(404);
     expect((await Photo.findByPk(photo.id))?.alt).toBe('The scan head');
   });
 
@@ -403,7 +475,10 @@ describe('PUT /api/builds/:buildId/photos/order', () => {
 
   test('when the build does not exist, then 404', async () => {
     const { agent } = await makerWithBuild();
-    const res = await agent.put('/api/builds/999999999/photos/order').set('X-CSRF-Token', agent.csrf).send({ photoIds: [1] });
+    const res = await agent
+      .put('/api/builds/999999999/photos/order')
+      .set('X-CSRF-Token', agent.csrf)
+      .send({ photoIds: [1] });
     expect(res.status).toBe(404);
   });
 });

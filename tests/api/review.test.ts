@@ -18,7 +18,9 @@ beforeAll(async () => {
   modId = m.id;
   mod = await signIn(t, m.login);
 });
-afterAll(async () => { await t.close(); });
+afterAll(async () => {
+  await t.close();
+});
 
 const post = (a: Agent, path: string, body: object) => a.post(path).set('X-CSRF-Token', a.csrf).send(body);
 
@@ -76,8 +78,14 @@ describe('POST /api/review/builds/:id/decision', () => {
     expect(res.body.status).toBe('returned');
     const a = await signIn(t, owner.login);
     const page = await a.get(`/api/builds/${b.id}`);
-    expect(page.body).toMatchObject({ status: 'returned', reviewNote: 'Add a photo of the head.', abilities: { edit: true, submit: true } });
-    await t.mail.waitFor((m) => m.to.includes(standInEmail(owner.login)) && m.subject.includes('returned') && m.text.includes('Add a photo of the head.'));
+    expect(page.body).toMatchObject({
+      status: 'returned',
+      reviewNote: 'Add a photo of the head.',
+      abilities: { edit: true, submit: true },
+    });
+    await t.mail.waitFor(
+      (m) => m.to.includes(standInEmail(owner.login)) && m.subject.includes('returned') && m.text.includes('Add a photo of the head.'),
+    );
   });
 
   test.each(['draft', 'published', 'returned', 'declined'])('when the build is %s, then a decision is 409 not_waiting', async (status) => {
@@ -109,9 +117,13 @@ describe('POST /api/review/runs/:id/decision', () => {
     const b2 = await createBuildRow(owner.id, { status: 'published' });
     const gains = [90, 110, 100, 130, 95];
     const runs = [];
-    for (const [i, g] of gains.entries()) runs.push(await createRunRow({ buildId: i < 3 ? b1.id : b2.id, partId: part.id, ownerId: owner.id, gainNmPerV: g }));
-    for (const r of runs.slice(0, 4)) expect((await post(mod, `/api/review/runs/${r.id}/decision`, { decision: 'accept' })).status).toBe(200);
-    expect((await post(mod, `/api/review/runs/${runs[4]!.id}/decision`, { decision: 'reject', note: 'Indicator slipped.' })).status).toBe(200);
+    for (const [i, g] of gains.entries())
+      runs.push(await createRunRow({ buildId: i < 3 ? b1.id : b2.id, partId: part.id, ownerId: owner.id, gainNmPerV: g }));
+    for (const r of runs.slice(0, 4))
+      expect((await post(mod, `/api/review/runs/${r.id}/decision`, { decision: 'accept' })).status).toBe(200);
+    expect((await post(mod, `/api/review/runs/${runs[4]!.id}/decision`, { decision: 'reject', note: 'Indicator slipped.' })).status).toBe(
+      200,
+    );
     await part.reload();
     const acceptedGains = runs.slice(0, 4).map((r) => Math.abs(r.gainNmPerV));
     expect(part.acceptedRunCount).toBe(4);
@@ -121,9 +133,15 @@ describe('POST /api/review/runs/:id/decision', () => {
     expect(part.gainP75NmPerV).toBeCloseTo(type7(acceptedGains, 0.75), 9);
     expect(part.gainMinNmPerV).toBeCloseTo(Math.min(...acceptedGains), 9);
     expect(part.gainMaxNmPerV).toBeCloseTo(Math.max(...acceptedGains), 9);
-    expect(part.hysteresisMedianPct).toBeCloseTo(type7(runs.slice(0, 4).map((r) => r.hysteresisPctFs!), 0.5), 9);
+    expect(part.hysteresisMedianPct).toBeCloseTo(
+      type7(
+        runs.slice(0, 4).map((r) => r.hysteresisPctFs!),
+        0.5,
+      ),
+      9,
+    );
     expect((await post(mod, `/api/review/runs/${runs[0]!.id}/decision`, { decision: 'reject', note: 'again' })).status).toBe(409);
-    expect((await AuditEntry.count({ where: { targetType: 'run', targetId: runs.map((r) => r.id) } }))).toBe(5);
+    expect(await AuditEntry.count({ where: { targetType: 'run', targetId: runs.map((r) => r.id) } })).toBe(5);
   });
 
   test('when rejecting without a note, then 400 and nothing changes', async () => {
@@ -140,7 +158,8 @@ describe('POST /api/review/runs/:id/decision', () => {
     const owner = await createUser();
     const part = await createPart();
     const b = await createBuildRow(owner.id, { status: 'published' });
-    for (const g of [100, 102, 98]) await createRunRow({ buildId: b.id, partId: part.id, ownerId: owner.id, gainNmPerV: g, status: 'accepted' });
+    for (const g of [100, 102, 98])
+      await createRunRow({ buildId: b.id, partId: part.id, ownerId: owner.id, gainNmPerV: g, status: 'accepted' });
     const slip = await createRunRow({ buildId: b.id, partId: part.id, ownerId: owner.id, gainNmPerV: 100 * 25.4 });
     const q = await mod.get('/api/review/queue');
     const item = q.body.runs.find((r: { id: number }) => r.id === slip.id);
@@ -156,7 +175,9 @@ describe('POST /api/review/runs/:id/decision', () => {
     const run = await createRunRow({ buildId: b.id, partId: part.id, ownerId: owner.id, gainNmPerV: 100 });
     const sq = t.handle.sequelize;
     // A real database fault: a trigger refuses audit rows carrying this note.
-    await sq.query("CREATE TRIGGER fail_audit BEFORE INSERT ON audit_entries FOR EACH ROW BEGIN IF NEW.note = 'INJECT-FAULT' THEN SIGNAL SQLSTATE '45000' SET MESSAGE_TEXT = 'injected'; END IF; END");
+    await sq.query(
+      "CREATE TRIGGER fail_audit BEFORE INSERT ON audit_entries FOR EACH ROW BEGIN IF NEW.note = 'INJECT-FAULT' THEN SIGNAL SQLSTATE '45000' SET MESSAGE_TEXT = 'injected'; END IF; END",
+    );
     try {
       const res = await post(mod, `/api/review/runs/${run.id}/decision`, { decision: 'accept', note: 'INJECT-FAULT' });
       expect(res.status).toBe(500);
@@ -190,12 +211,26 @@ describe('parts and reports', () => {
     const created = await post(a, '/api/reports', { targetType: 'build', targetId: b.id, reason: 'unsafe', note: 'No bleeder resistor.' });
     expect(created.status).toBe(201);
     const q = await mod.get('/api/review/queue');
-    expect(q.body.reports.find((r: { id: number }) => r.id === created.body.id)).toMatchObject({ targetLabel: b.title, reason: 'unsafe', reporter: { login: reporter.login } });
+    expect(q.body.reports.find((r: { id: number }) => r.id === created.body.id)).toMatchObject({
+      targetLabel: b.title,
+      reason: 'unsafe',
+      reporter: { login: reporter.login },
+    });
     expect((await post(mod, `/api/review/reports/${created.body.id}/decision`, { decision: 'resolve' })).status).toBe(400);
-    expect((await post(mod, `/api/review/reports/${created.body.id}/decision`, { decision: 'resolve', note: 'Asked the author to add a caution.' })).body.status).toBe('resolved');
+    expect(
+      (
+        await post(mod, `/api/review/reports/${created.body.id}/decision`, {
+          decision: 'resolve',
+          note: 'Asked the author to add a caution.',
+        })
+      ).body.status,
+    ).toBe('resolved');
     await t.mail.waitFor((m) => m.to.includes(standInEmail(reporter.login)) && m.subject.includes('resolved'));
     const audit = await mod.get(`/api/review/audit?actorId=${modId}&targetType=report&targetId=${created.body.id}`);
-    expect(audit.body).toMatchObject({ total: 1, items: [{ action: 'report.resolve', actor: { id: modId }, note: 'Asked the author to add a caution.' }] });
+    expect(audit.body).toMatchObject({
+      total: 1,
+      items: [{ action: 'report.resolve', actor: { id: modId }, note: 'Asked the author to add a caution.' }],
+    });
   });
 
   test('when reporting something invisible or unknown, then 404; bad reason 400; visitor 401', async () => {
@@ -218,7 +253,9 @@ describe('parts and reports', () => {
     await post(mod, `/api/review/runs/${run.id}/decision`, { decision: 'accept' });
     await post(mod, `/api/review/builds/${b.id}/decision`, { decision: 'publish' });
     await t.mail.waitFor((m) => m.to.includes(standInEmail(owner.login)) && m.subject.includes('Build published'));
-    expect(t.mail.messages.filter((m) => m.to.includes(standInEmail(owner.login)) && m.subject.includes('Calibration run'))).toHaveLength(0);
+    expect(t.mail.messages.filter((m) => m.to.includes(standInEmail(owner.login)) && m.subject.includes('Calibration run'))).toHaveLength(
+      0,
+    );
   });
 });
 
@@ -233,4 +270,6 @@ describe('audit filters', () => {
   });
 });
 
-void Build; void CalibrationRun; void Part;
+void Build;
+void CalibrationRun;
+void Part;

@@ -6,8 +6,12 @@ import { createUser } from '../support/factories.ts';
 
 describe('GET /api/session', () => {
   let t: TestApp;
-  beforeAll(async () => { t = await startTestApp(); });
-  afterAll(async () => { await t.close(); });
+  beforeAll(async () => {
+    t = await startTestApp();
+  });
+  afterAll(async () => {
+    await t.close();
+  });
 
   test('when a visitor asks, then user is null and a CSRF token is issued in an httpOnly SameSite=Lax cookie session', async () => {
     const res = await request(t.app).get('/api/session');
@@ -29,8 +33,12 @@ describe('GET /api/session', () => {
 
 describe('CSRF', () => {
   let t: TestApp;
-  beforeAll(async () => { t = await startTestApp(); });
-  afterAll(async () => { await t.close(); });
+  beforeAll(async () => {
+    t = await startTestApp();
+  });
+  afterAll(async () => {
+    await t.close();
+  });
 
   test('when a write carries no token, then 403 csrf_failed', async () => {
     const admin = await createUser({ role: 'admin' });

@@ -50,30 +50,42 @@ describe('logout', () => {
 });
 
 describe('CSRF on every state-changing route', () => {
-  test.concurrent.each(guarded)('when $key is sent signed in without, with a wrong, or with another session\'s token, then 403 csrf_failed and nothing changes', async (route) => {
-    const { actor, target, before } = await armedFor(route);
-    const stranger = await visitor(t);
-    for (const csrf of [null, 'x'.repeat(actor.agent.csrf.length), actor.agent.csrf.slice(0, -1), stranger.csrf]) {
-      const res = await send(route, target, actor.agent, { csrf });
-      expect(res.status, `${route.key} with ${csrf}`).toBe(403);
-      expect(res.body).toEqual({ error: { code: 'csrf_failed', message: expect.any(String) } });
-    }
-    expect(await target.state()).toEqual(before);
-  });
+  test.concurrent.each(guarded)(
+    "when $key is sent signed in without, with a wrong, or with another session's token, then 403 csrf_failed and nothing changes",
+    async (route) => {
+      const { actor, target, before } = await armedFor(route);
+      const stranger = await visitor(t);
+      for (const csrf of [null, 'x'.repeat(actor.agent.csrf.length), actor.agent.csrf.slice(0, -1), stranger.csrf]) {
+        const res = await send(route, target, actor.agent, { csrf });
+        expect(res.status, `${route.key} with ${csrf}`).toBe(403);
+        expect(res.body).toEqual({ error: { code: 'csrf_failed', message: expect.any(String) } });
+      }
+      expect(await target.state()).toEqual(before);
+    },
+  );
 });
 
 describe('cross-origin requests', () => {
-  test.concurrent.each(routes)('when $key comes from another origin (Origin, or Referer without Origin, or Origin null), then 403 cross_origin and nothing changes', async (route) => {
-    const { actor, target, before } = await armedFor(route);
-    const foreign: Array<Record<string, string>> = [{ Origin: EVIL }, { Referer: `${EVIL}/page` }, { Origin: 'null' }, { Referer: 'not a url' }, { Origin: EVIL, Referer: `${t.config.publicUrl}/` }];
-    for (const headers of foreign) {
-      const res = await send(route, target, actor.agent, { headers });
-      expect(res.status, `${route.key} ${JSON.stringify(headers)}`).toBe(403);
-      expect(res.body).toEqual({ error: { code: 'cross_origin', message: expect.any(String) } });
-      expect(res.headers['access-control-allow-origin']).toBeUndefined();
-    }
-    expect(await target.state()).toEqual(before);
-  });
+  test.concurrent.each(routes)(
+    'when $key comes from another origin (Origin, or Referer without Origin, or Origin null), then 403 cross_origin and nothing changes',
+    async (route) => {
+      const { actor, target, before } = await armedFor(route);
+      const foreign: Array<Record<string, string>> = [
+        { Origin: EVIL },
+        { Referer: `${EVIL}/page` },
+        { Origin: 'null' },
+        { Referer: 'not a url' },
+        { Origin: EVIL, Referer: `${t.config.publicUrl}/` },
+      ];
+      for (const headers of foreign) {
+        const res = await send(route, target, actor.agent, { headers });
+        expect(res.status, `${route.key} ${JSON.stringify(headers)}`).toBe(403);
+        expect(res.body).toEqual({ error: { code: 'cross_origin', message: expect.any(String) } });
+        expect(res.headers['access-control-allow-origin']).toBeUndefined();
+      }
+      expect(await target.state()).toEqual(before);
+    },
+  );
 
   test('when a write comes from our own origin (Origin or Referer) or names none, then it goes through', async () => {
     const { agent } = await signedIn();
@@ -87,7 +99,11 @@ describe('cross-origin requests', () => {
 
   test('when a cross-origin write carries an oversized body, then it is refused as cross-origin before the body is read', async () => {
     const { agent } = await signedIn();
-    const res = await agent.post('/api/builds').set('X-CSRF-Token', agent.csrf).set('Origin', EVIL).send({ title: 'x'.repeat(2 * 1024 * 1024) });
+    const res = await agent
+      .post('/api/builds')
+      .set('X-CSRF-Token', agent.csrf)
+      .set('Origin', EVIL)
+      .send({ title: 'x'.repeat(2 * 1024 * 1024) });
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('cross_origin');
   });
@@ -115,8 +131,14 @@ describe('CORS', () => {
       ['GET /api/session', await agent.get('/api/session').set('Origin', EVIL)],
       ['GET /api/builds', await agent.get('/api/builds').set('Origin', EVIL)],
       ['GET /api/nope (404)', await agent.get('/api/nope').set('Origin', EVIL)],
-      ['POST /api/builds (400)', await agent.post('/api/builds').set('Origin', t.config.publicUrl).set('X-CSRF-Token', agent.csrf).send({})],
-      ['POST /api/workbench/convert', await agent.post('/api/workbench/convert').set('Origin', t.config.publicUrl).send({ value: 1, from: 'nm', to: 'um' })],
+      [
+        'POST /api/builds (400)',
+        await agent.post('/api/builds').set('Origin', t.config.publicUrl).set('X-CSRF-Token', agent.csrf).send({}),
+      ],
+      [
+        'POST /api/workbench/convert',
+        await agent.post('/api/workbench/convert').set('Origin', t.config.publicUrl).send({ value: 1, from: 'nm', to: 'um' }),
+      ],
       ['GET /api/health', await request(t.app).get('/api/health').set('Origin', EVIL)],
     ];
     for (const [what, res] of answers) expect(corsHeaders(res), what).toEqual([]);
@@ -124,12 +146,17 @@ describe('CORS', () => {
 });
 
 describe('a suspended maker', () => {
-  const write = (a: Agent) => a.post('/api/builds').set('X-CSRF-Token', a.csrf).send({ title: 'After suspension', instrumentKind: 'other', summary: 'x' });
+  const write = (a: Agent) =>
+    a.post('/api/builds').set('X-CSRF-Token', a.csrf).send({ title: 'After suspension', instrumentKind: 'other', summary: 'x' });
 
   test('when suspended by an admin, then the sessions are deleted, a write with the stale token is 403 csrf_failed, and with a fresh token 401', async () => {
     const { user, agent } = await signedIn();
     const admin = await signedIn('admin');
-    await admin.agent.patch(`/api/admin/users/${user!.id}/suspension`).set('X-CSRF-Token', admin.agent.csrf).send({ suspended: true }).expect(200);
+    await admin.agent
+      .patch(`/api/admin/users/${user!.id}/suspension`)
+      .set('X-CSRF-Token', admin.agent.csrf)
+      .send({ suspended: true })
+      .expect(200);
     expect(await sessionRows(t, { userId: user!.id })).toBe(0);
     const stale = await write(agent);
     expect(stale.status).toBe(403);
@@ -143,7 +170,10 @@ describe('a suspended maker', () => {
   });
 
   test.each([
-    ['suspended behind the app\'s back (sessions left in place)', (u: User) => User.update({ suspendedAt: new Date() }, { where: { id: u.id } })],
+    [
+      "suspended behind the app's back (sessions left in place)",
+      (u: User) => User.update({ suspendedAt: new Date() }, { where: { id: u.id } }),
+    ],
     ['deleted', (u: User) => User.destroy({ where: { id: u.id } })],
   ])('when %s, then the next request ends the session the same way: row gone, stale token 403 csrf_failed', async (_what, change) => {
     const { user, agent } = await signedIn();
@@ -185,7 +215,10 @@ describe('rate limits', () => {
   test('when one address sends more than 10 workbench bodies over 1 MB a minute, then 429 before the body is read; small calculations go on', async () => {
     await limitedApp(async (limited) => {
       // 40 000 points of a clean 2 nm/V line: about 2 MB of JSON, a valid fit.
-      const big = { displacementUnit: 'nm', points: Array.from({ length: 40_000 }, (_, i) => ({ volts: i / 100, displacement: (2 * i) / 100 })) };
+      const big = {
+        displacementUnit: 'nm',
+        points: Array.from({ length: 40_000 }, (_, i) => ({ volts: i / 100, displacement: (2 * i) / 100 })),
+      };
       const small = { displacementUnit: 'nm', points: [0, 1, 2, 3, 4, 5].map((v) => ({ volts: v, displacement: 2 * v })) };
       expect(JSON.stringify(big).length).toBeGreaterThan(1_000_000);
       for (let i = 0; i < 10; i++) {
@@ -205,7 +238,19 @@ describe('rate limits', () => {
     await limitedApp(async (limited) => {
       const owner = await createUser();
       const part = await createPart();
-      const listing = await Listing.create({ ownerId: owner.id, partId: part.id, kind: 'offering', quantity: 1, condition: 'new', priceKind: 'free', priceAmount: null, currency: null, region: 'Here', shipsTo: null, notes: null });
+      const listing = await Listing.create({
+        ownerId: owner.id,
+        partId: part.id,
+        kind: 'offering',
+        quantity: 1,
+        condition: 'new',
+        priceKind: 'free',
+        priceAmount: null,
+        currency: null,
+        region: 'Here',
+        shipsTo: null,
+        notes: null,
+      });
       const [a, b] = [await signIn(limited, (await createUser()).login), await signIn(limited, (await createUser()).login)];
       const message = (x: Agent, path: string, body: string) => x.post(path).set('X-CSRF-Token', x.csrf).send({ body });
       const first = await message(a, `/api/listings/${listing.id}/messages`, 'm0');
@@ -224,7 +269,8 @@ describe('rate limits', () => {
     await limitedApp(async (limited) => {
       const build = await createBuildRow((await createUser()).id, { status: 'published' });
       const [a, b] = [await signIn(limited, (await createUser()).login), await signIn(limited, (await createUser()).login)];
-      const report = (x: Agent, note: string) => x.post('/api/reports').set('X-CSRF-Token', x.csrf).send({ targetType: 'build', targetId: build.id, reason: 'spam', note });
+      const report = (x: Agent, note: string) =>
+        x.post('/api/reports').set('X-CSRF-Token', x.csrf).send({ targetType: 'build', targetId: build.id, reason: 'spam', note });
       for (let i = 0; i < 30; i++) expect((await report(a, `r${i}`)).status).toBe(201);
       const over = await report(a, 'one too many');
       expect(over.status).toBe(429);

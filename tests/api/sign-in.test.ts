@@ -8,8 +8,12 @@ import { standInEmail } from '../../server/dev/demo-accounts.ts';
 
 describe('sign-in through the OAuth stand-in', () => {
   let t: TestApp;
-  beforeAll(async () => { t = await startTestApp(); });
-  afterAll(async () => { await t.close(); });
+  beforeAll(async () => {
+    t = await startTestApp();
+  });
+  afterAll(async () => {
+    await t.close();
+  });
 
   test.each(['maker', 'moderator', 'admin'] as const)('when a %s signs in, then the session shows that role', async (role) => {
     const u = await createUser({ role });
@@ -64,7 +68,10 @@ describe('sign-in through the OAuth stand-in', () => {
 
   test('when a returnTo path is given, then sign-in comes back to it; an off-site one is ignored', async () => {
     const u = await createUser();
-    for (const [returnTo, expected] of [['/workbench/fit', '/workbench/fit'], ['//evil.example', '/']]) {
+    for (const [returnTo, expected] of [
+      ['/workbench/fit', '/workbench/fit'],
+      ['//evil.example', '/'],
+    ]) {
       const agent = request.agent(t.app);
       const start = await agent.get(`/auth/github?login=${u.login}&returnTo=${encodeURIComponent(returnTo)}`).expect(302);
       const provider = await fetch(start.headers.location, { redirect: 'manual' });

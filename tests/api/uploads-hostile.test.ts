@@ -67,7 +67,12 @@ function upload(buildId: number, parts: Part[], opts: { truncate?: boolean } = {
     .serialize((b: unknown) => b as string)
     .send(body as unknown as string);
 }
-const photo = (data: Buffer, filenameHeader = 'filename="photo.jpg"', contentType = 'image/jpeg'): Part => ({ name: 'photos', filenameHeader, contentType, data });
+const photo = (data: Buffer, filenameHeader = 'filename="photo.jpg"', contentType = 'image/jpeg'): Part => ({
+  name: 'photos',
+  filenameHeader,
+  contentType,
+  data,
+});
 const alt: Part = { name: 'alt', value: 'The scan head' };
 
 /** The request left the uploads dir and the build's rows exactly as they were. */
@@ -98,22 +103,43 @@ async function expectCleanStore(res: request.Response, marker?: string) {
     expect(served.headers['x-content-type-options']).toBe('nosniff');
     if (marker) expect(Buffer.from(served.body as Buffer).includes(marker)).toBe(false);
   }
-  expect(basename(stored!.url, '.webp')).toBe(createHash('sha256').update(await readFile(join(uploadsDir, basename(stored!.url)))).digest('hex'));
+  expect(basename(stored!.url, '.webp')).toBe(
+    createHash('sha256')
+      .update(await readFile(join(uploadsDir, basename(stored!.url))))
+      .digest('hex'),
+  );
   expect((await files()).filter((f) => !STORED.test(f))).toEqual([]);
 }
 
 /** A JPEG with a COM (comment) segment right after SOI. */
 function withJpegComment(jpg: Buffer, text: string): Buffer {
   const com = Buffer.from(text);
-  return Buffer.concat([jpg.subarray(0, 2), Buffer.from([0xff, 0xfe, (com.length + 2) >> 8, (com.length + 2) & 0xff]), com, jpg.subarray(2)]);
+  return Buffer.concat([
+    jpg.subarray(0, 2),
+    Buffer.from([0xff, 0xfe, (com.length + 2) >> 8, (com.length + 2) & 0xff]),
+    com,
+    jpg.subarray(2),
+  ]);
 }
-const zipWith = (text: string) => Buffer.concat([Buffer.from([0x50, 0x4b, 0x03, 0x04]), Buffer.from(`evil.js ${text}`), Buffer.from([0x50, 0x4b, 0x05, 0x06]), Buffer.alloc(18)]);
+const zipWith = (text: string) =>
+  Buffer.concat([
+    Buffer.from([0x50, 0x4b, 0x03, 0x04]),
+    Buffer.from(`evil.js ${text}`),
+    Buffer.from([0x50, 0x4b, 0x05, 0x06]),
+    Buffer.alloc(18),
+  ]);
 
 describe('POST /api/builds/:buildId/photos with a polyglot', () => {
   test.each([
     ['a ZIP appended to a JPEG', async (m: string) => Buffer.concat([await jpeg(64, 48), zipWith(m)])],
-    ['an HTML page with a script appended to a JPEG', async (m: string) => Buffer.concat([await jpeg(64, 48), Buffer.from(`<html><script>alert("${m}")</script></html>`)])],
-    ['a PHP script appended to a JPEG', async (m: string) => Buffer.concat([await jpeg(64, 48), Buffer.from(`<?php /* ${m} */ system($_GET['c']); ?>`)])],
+    [
+      'an HTML page with a script appended to a JPEG',
+      async (m: string) => Buffer.concat([await jpeg(64, 48), Buffer.from(`<html><script>alert("${m}")</script></html>`)]),
+    ],
+    [
+      'a PHP script appended to a JPEG',
+      async (m: string) => Buffer.concat([await jpeg(64, 48), Buffer.from(`<?php /* ${m} */ system($_GET['c']); ?>`)]),
+    ],
     ['a script in a JPEG comment segment', async (m: string) => withJpegComment(await jpeg(64, 48), `<script>${m}</script>`)],
     ['an HTML page appended to a PNG', async (m: string) => Buffer.concat([await png(64, 48), Buffer.from(`<script>${m}</script>`)])],
   ])('when %s is uploaded, then it is stored only as a clean WebP re-encode without the payload', async (_what, make) => {
@@ -126,13 +152,36 @@ describe('POST /api/builds/:buildId/photos with a polyglot', () => {
 });
 
 describe('POST /api/builds/:buildId/photos with a disguised non-image', () => {
-  const svg = '<svg xmlns="http://www.w3.org/2000/svg" width="10" height="10" onload="alert(1)"><script>alert(document.cookie)</script></svg>';
+  const svg =
+    '<svg xmlns="http://www.w3.org/2000/svg" width="10" height="10" onload="alert(1)"><script>alert(document.cookie)</script></svg>';
   test.each<[string, number, string, () => Buffer, string?]>([
     ['an SVG with a script is sent as photo.jpg with image/jpeg', 415, 'unsupported_media_type', () => Buffer.from(svg)],
-    ['an SVG behind a byte-order mark and blank lines is named .webp', 415, 'unsupported_media_type', () => Buffer.from(`\ufeff\n\n  ${svg}`), 'filename="tip.webp"'],
-    ['an HTML page starts with the JPEG magic bytes', 400, 'unreadable_image', () => Buffer.concat([Buffer.from([0xff, 0xd8, 0xff, 0xe0]), Buffer.from('<html><script>alert(1)</script></html>')])],
-    ['an HTML page is UTF-16 encoded and named .png', 415, 'unsupported_media_type', () => Buffer.from('\ufeff<html><script>alert(1)</script></html>', 'utf16le'), 'filename="x.png"'],
-    ['a GIF carries a script after its header', 415, 'unsupported_media_type', () => Buffer.concat([Buffer.from('GIF89a'), Buffer.from([1, 0, 1, 0, 0, 0, 0]), Buffer.from('<script>alert(1)</script>')])],
+    [
+      'an SVG behind a byte-order mark and blank lines is named .webp',
+      415,
+      'unsupported_media_type',
+      () => Buffer.from(`\ufeff\n\n  ${svg}`),
+      'filename="tip.webp"',
+    ],
+    [
+      'an HTML page starts with the JPEG magic bytes',
+      400,
+      'unreadable_image',
+      () => Buffer.concat([Buffer.from([0xff, 0xd8, 0xff, 0xe0]), Buffer.from('<html><script>alert(1)</script></html>')]),
+    ],
+    [
+      'an HTML page is UTF-16 encoded and named .png',
+      415,
+      'unsupported_media_type',
+      () => Buffer.from('\ufeff<html><script>alert(1)</script></html>', 'utf16le'),
+      'filename="x.png"',
+    ],
+    [
+      'a GIF carries a script after its header',
+      415,
+      'unsupported_media_type',
+      () => Buffer.concat([Buffer.from('GIF89a'), Buffer.from([1, 0, 1, 0, 0, 0, 0]), Buffer.from('<script>alert(1)</script>')]),
+    ],
     ['a ZIP is named .jpg', 415, 'unsupported_media_type', () => zipWith('payload')],
     ['a PDF is named .jpg', 415, 'unsupported_media_type', () => Buffer.from('%PDF-1.4\n1 0 obj<</JS(app.alert(1))>>endobj\n%%EOF')],
   ])('when %s, then %i %s and nothing is stored', async (_what, status, code, make, filenameHeader) => {
@@ -144,7 +193,11 @@ describe('POST /api/builds/:buildId/photos with a disguised non-image', () => {
 });
 
 describe('POST /api/builds/:buildId/photos with a hostile file name', () => {
-  const outside = (name: string) => [resolve(uploadsDir, name), resolve(uploadsDir, name.replaceAll('\\', '/')), resolve(process.cwd(), name.replaceAll('\\', '/'))];
+  const outside = (name: string) => [
+    resolve(uploadsDir, name),
+    resolve(uploadsDir, name.replaceAll('\\', '/')),
+    resolve(process.cwd(), name.replaceAll('\\', '/')),
+  ];
   test.each([
     ['../../etc/passwd.jpg', 'filename="../../etc/passwd.jpg"'],
     ['an absolute path', 'filename="/tmp/scanwright-escape.jpg"'],
@@ -159,7 +212,9 @@ describe('POST /api/builds/:buildId/photos with a hostile file name', () => {
     const buildId = await newBuild();
     const res = await upload(buildId, [alt, photo(await jpeg(32, 24), header)]);
     await expectCleanStore(res);
-    expect((await Photo.findAll({ where: { buildId } })).map((p) => [p.displayFile, p.thumbFile].every((f) => STORED.test(f)))).toEqual([true]);
+    expect((await Photo.findAll({ where: { buildId } })).map((p) => [p.displayFile, p.thumbFile].every((f) => STORED.test(f)))).toEqual([
+      true,
+    ]);
     expect(outside(decodeURIComponent(name)).map(existsSync)).toEqual(existedBefore);
   });
 });
@@ -167,14 +222,21 @@ describe('POST /api/builds/:buildId/photos with a hostile file name', () => {
 describe('POST /api/builds/:buildId/photos with multipart tricks', () => {
   test('when the file name carries a NUL byte, then the part header is refused as malformed and nothing is stored', async () => {
     const buildId = await newBuild();
-    const res = await expectNothingStored(buildId, async () => upload(buildId, [alt, photo(await jpeg(32, 24), 'filename="escape.php\u0000.jpg"')]));
+    const res = await expectNothingStored(buildId, async () =>
+      upload(buildId, [alt, photo(await jpeg(32, 24), 'filename="escape.php\u0000.jpg"')]),
+    );
     expect(res.body.error.code).toBe('malformed_multipart');
   });
 
   test('when text fields are named __proto__[polluted] or constructor[prototype][polluted], then 400 validation_failed, nothing stored and Object.prototype stays clean', async () => {
     const buildId = await newBuild();
     const res = await expectNothingStored(buildId, async () =>
-      upload(buildId, [alt, { name: '__proto__[polluted]', value: 'yes' }, { name: 'constructor[prototype][polluted]', value: 'yes' }, photo(await jpeg(32, 24))]),
+      upload(buildId, [
+        alt,
+        { name: '__proto__[polluted]', value: 'yes' },
+        { name: 'constructor[prototype][polluted]', value: 'yes' },
+        photo(await jpeg(32, 24)),
+      ]),
     );
     expect(res.body.error.code).toBe('validation_failed');
     expect(({} as Record<string, unknown>).polluted).toBeUndefined();
@@ -194,7 +256,9 @@ describe('POST /api/builds/:buildId/photos with multipart tricks', () => {
 
   test('when a text field is longer than 4 KB, then 400 and nothing is stored', async () => {
     const buildId = await newBuild();
-    const res = await expectNothingStored(buildId, async () => upload(buildId, [{ name: 'alt', value: 'x'.repeat(5000) }, photo(await jpeg(32, 24))]));
+    const res = await expectNothingStored(buildId, async () =>
+      upload(buildId, [{ name: 'alt', value: 'x'.repeat(5000) }, photo(await jpeg(32, 24))]),
+    );
     expect(res.status).toBe(400);
   });
 });

@@ -11,11 +11,17 @@ beforeAll(async () => {
   agent = request.agent(t.app);
   csrf = (await agent.get('/api/session')).body.csrfToken;
 });
-afterAll(async () => { await t.close(); });
+afterAll(async () => {
+  await t.close();
+});
 
 // The calculations carry a session token like any page would, so their checks do not hinge on the
 // CSRF exemption; the exemption itself is checked on its own below.
-const post = (slug: string, body: unknown) => agent.post(`/api/workbench/${slug}`).set('X-CSRF-Token', csrf).send(body as object);
+const post = (slug: string, body: unknown) =>
+  agent
+    .post(`/api/workbench/${slug}`)
+    .set('X-CSRF-Token', csrf)
+    .send(body as object);
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 const errorShape = { error: { code: expect.any(String), message: expect.any(String) } };
 const cautionIds = (body: { cautions: { id: string }[] }) => body.cautions.map((c) => c.id);
@@ -53,7 +59,10 @@ describe('POST /api/workbench/peak-to-peak', () => {
   test.each([
     ['a string value', { displacementPpNm: '2000', voltsPpV: 20, displacementResolutionNm: 10 }],
     ['a zero swing', { displacementPpNm: 2000, voltsPpV: 0, displacementResolutionNm: 10 }],
-    ['a voltage resolution as large as the swing', { displacementPpNm: 2000, voltsPpV: 2, displacementResolutionNm: 10, voltsResolutionV: 2 }],
+    [
+      'a voltage resolution as large as the swing',
+      { displacementPpNm: 2000, voltsPpV: 2, displacementResolutionNm: 10, voltsResolutionV: 2 },
+    ],
   ])('when the body has %s, then 400', async (_name, body) => {
     const res = await post('peak-to-peak', body);
     expect(res.status).toBe(400);
@@ -86,12 +95,28 @@ describe('POST /api/workbench/creep', () => {
 
 describe('POST /api/workbench/expected-gain', () => {
   test.each([
-    ['series bimorph 12 × 0.6 mm PZT-5A → 102.6 nm/V [calc; S: Smits, Dalke & Cooney 1991]', { actuator: 'bimorph-series', material: 'PZT-5A', lengthMm: 12, thicknessMm: 0.6 }, 102.6],
-    ['parallel bimorph, same bar → 205.2 nm/V [calc; S: Smits, Dalke & Cooney 1991]', { actuator: 'bimorph-parallel', material: 'PZT-5A', lengthMm: 12, thicknessMm: 0.6 }, 205.2],
-    ['200-layer PZT-5H stack → 118.6 nm/V [calc; S: Murata piezo actuator basics]', { actuator: 'stack', material: 'PZT-5H', layers: 200 }, 118.6],
+    [
+      'series bimorph 12 × 0.6 mm PZT-5A → 102.6 nm/V [calc; S: Smits, Dalke & Cooney 1991]',
+      { actuator: 'bimorph-series', material: 'PZT-5A', lengthMm: 12, thicknessMm: 0.6 },
+      102.6,
+    ],
+    [
+      'parallel bimorph, same bar → 205.2 nm/V [calc; S: Smits, Dalke & Cooney 1991]',
+      { actuator: 'bimorph-parallel', material: 'PZT-5A', lengthMm: 12, thicknessMm: 0.6 },
+      205.2,
+    ],
+    [
+      '200-layer PZT-5H stack → 118.6 nm/V [calc; S: Murata piezo actuator basics]',
+      { actuator: 'stack', material: 'PZT-5H', layers: 200 },
+      118.6,
+    ],
     ['PZT-5A shear plate → 0.584 nm/V [calc]', { actuator: 'shear-plate', material: 'PZT-5A' }, 0.584],
     ['1 mm PZT-5A plate, thickness mode → 0.374 nm/V [calc]', { actuator: 'plate-thickness', material: 'PZT-5A' }, 0.374],
-    ['tube axial 12.7 × 6.35 × 0.508 mm PZT-5H → 6.85 nm/V [calc]', { actuator: 'tube-axial', material: 'PZT-5H', lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.508 }, 6.85],
+    [
+      'tube axial 12.7 × 6.35 × 0.508 mm PZT-5H → 6.85 nm/V [calc]',
+      { actuator: 'tube-axial', material: 'PZT-5H', lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.508 },
+      6.85,
+    ],
   ])('when %s', async (_name, body, expected) => {
     const res = await post('expected-gain', body);
     expect(res.status).toBe(200);
@@ -105,7 +130,7 @@ describe('POST /api/workbench/expected-gain', () => {
     const one = await post('expected-gain', { actuator: 'tube-quadrant', ...tube });
     const pair = await post('expected-gain', { actuator: 'tube-opposite-pair', ...tube });
     expect(one.status).toBe(200);
-    expect(one.body.gainNmPerV).toBeCloseTo(6.70, 2);
+    expect(one.body.gainNmPerV).toBeCloseTo(6.7, 2);
     expect(pair.body.gainNmPerV).toBeCloseTo(13.4, 1);
     expect(one.body.basis).toMatch(/√2·d31/);
     expect(one.body.materialSource).toBe('[S: Erturk & Inman, Piezoelectric Energy Harvesting, Wiley 2011, App. E]');
@@ -132,10 +157,17 @@ describe('POST /api/workbench/expected-gain', () => {
 
 describe('POST /api/workbench/mixing', () => {
   const g = 100 / Math.SQRT2;
-  const pair = [[g, -g], [g, g]];
+  const pair = [
+    [g, -g],
+    [g, g],
+  ];
 
   test('when an equal-gain ±45° pair is asked for x = y = 707.1 nm, then Va = 10 V, Vb = 0 V, reachable [practice; calc]', async () => {
-    const res = await post('mixing', { gain: pair, limits: { vaMinV: -15, vaMaxV: 15, vbMinV: -15, vbMaxV: 15 }, target: { xNm: 1000 / Math.SQRT2, yNm: 1000 / Math.SQRT2 } });
+    const res = await post('mixing', {
+      gain: pair,
+      limits: { vaMinV: -15, vaMaxV: 15, vbMinV: -15, vbMaxV: 15 },
+      target: { xNm: 1000 / Math.SQRT2, yNm: 1000 / Math.SQRT2 },
+    });
     expect(res.status).toBe(200);
     expect(res.body.target.vaV).toBeCloseTo(10, 9);
     expect(res.body.target.vbV).toBeCloseTo(0, 9);
@@ -147,22 +179,50 @@ describe('POST /api/workbench/mixing', () => {
   });
 
   test('when the limits reach ±150 V and the point is outside, then unreachable with the high-voltage cautions [calc]', async () => {
-    const res = await post('mixing', { gain: pair, limits: { vaMinV: -150, vaMaxV: 150, vbMinV: -150, vbMaxV: 150 }, target: { xNm: 0, yNm: 30000 } });
+    const res = await post('mixing', {
+      gain: pair,
+      limits: { vaMinV: -150, vaMaxV: 150, vbMinV: -150, vbMaxV: 150 },
+      target: { xNm: 0, yNm: 30000 },
+    });
     expect(res.status).toBe(200);
     expect(res.body.target.reachable).toBe(false);
     expect(cautionIds(res.body)).toEqual(expect.arrayContaining(['amplifier', 'discharge', 'local-codes']));
   });
 
   test('when G is singular (parallel actuators), then 400 invalid_input', async () => {
-    const res = await post('mixing', { gain: [[1, 2], [2, 4]], limits: { vaMinV: 0, vaMaxV: 10, vbMinV: 0, vbMaxV: 10 } });
+    const res = await post('mixing', {
+      gain: [
+        [1, 2],
+        [2, 4],
+      ],
+      limits: { vaMinV: 0, vaMaxV: 10, vbMinV: 0, vbMaxV: 10 },
+    });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('invalid_input');
   });
 
   test.each([
     ['a minimum above its maximum', { gain: pair, limits: { vaMinV: 10, vaMaxV: 0, vbMinV: 0, vbMaxV: 10 } }],
-    ['a 3-column row', { gain: [[1, 0, 0], [0, 1]], limits: { vaMinV: 0, vaMaxV: 10, vbMinV: 0, vbMaxV: 10 } }],
-    ['a gain as a string', { gain: [['1', 0], [0, 1]], limits: { vaMinV: 0, vaMaxV: 10, vbMinV: 0, vbMaxV: 10 } }],
+    [
+      'a 3-column row',
+      {
+        gain: [
+          [1, 0, 0],
+          [0, 1],
+        ],
+        limits: { vaMinV: 0, vaMaxV: 10, vbMinV: 0, vbMaxV: 10 },
+      },
+    ],
+    [
+      'a gain as a string',
+      {
+        gain: [
+          ['1', 0],
+          [0, 1],
+        ],
+        limits: { vaMinV: 0, vaMaxV: 10, vbMinV: 0, vbMaxV: 10 },
+      },
+    ],
   ])('when the body has %s, then 400 validation_failed', async (_name, body) => {
     const res = await post('mixing', body);
     expect(res.status).toBe(400);
@@ -172,10 +232,18 @@ describe('POST /api/workbench/mixing', () => {
 
 describe('POST /api/workbench/mixing-fit', () => {
   test('when a 3 × 3 grid is driven through a known G, then that G comes back [calc]', async () => {
-    const gain = [[70, -72], [71, 69]];
-    const samples = [-10, 0, 10].flatMap((vaV) => [-10, 0, 10].map((vbV) => ({
-      vaV, vbV, xNm: gain[0][0] * vaV + gain[0][1] * vbV, yNm: gain[1][0] * vaV + gain[1][1] * vbV,
-    })));
+    const gain = [
+      [70, -72],
+      [71, 69],
+    ];
+    const samples = [-10, 0, 10].flatMap((vaV) =>
+      [-10, 0, 10].map((vbV) => ({
+        vaV,
+        vbV,
+        xNm: gain[0][0] * vaV + gain[0][1] * vbV,
+        yNm: gain[1][0] * vaV + gain[1][1] * vbV,
+      })),
+    );
     const res = await post('mixing-fit', { samples });
     expect(res.status).toBe(200);
     expect(res.body.n).toBe(9);
@@ -192,10 +260,18 @@ describe('POST /api/workbench/mixing-fit', () => {
   });
 
   test('when the indicator zero is offset by 250 nm, then the affine fit returns offsetNm and the true G; through the origin on request [calc]', async () => {
-    const gain = [[70, -72], [71, 69]];
-    const samples = [0, 5, 10].flatMap((vaV) => [0, 5, 10].map((vbV) => ({
-      vaV, vbV, xNm: 250 + gain[0][0] * vaV + gain[0][1] * vbV, yNm: -30 + gain[1][0] * vaV + gain[1][1] * vbV,
-    })));
+    const gain = [
+      [70, -72],
+      [71, 69],
+    ];
+    const samples = [0, 5, 10].flatMap((vaV) =>
+      [0, 5, 10].map((vbV) => ({
+        vaV,
+        vbV,
+        xNm: 250 + gain[0][0] * vaV + gain[0][1] * vbV,
+        yNm: -30 + gain[1][0] * vaV + gain[1][1] * vbV,
+      })),
+    );
     const res = await post('mixing-fit', { samples });
     expect(res.status).toBe(200);
     expect(res.body.model).toBe('affine');
@@ -208,7 +284,12 @@ describe('POST /api/workbench/mixing-fit', () => {
   });
 
   test('when the voltages underflow double precision, then 400 numeric_underflow, not a degenerate-grid message', async () => {
-    const samples = [[0, 0], [1, 0], [0, 1], [1, 1]].map(([a, b]) => ({ vaV: a * 1e-200, vbV: b * 1e-200, xNm: a + b, yNm: a - b }));
+    const samples = [
+      [0, 0],
+      [1, 0],
+      [0, 1],
+      [1, 1],
+    ].map(([a, b]) => ({ vaV: a * 1e-200, vbV: b * 1e-200, xNm: a + b, yNm: a - b }));
     const res = await post('mixing-fit', { samples });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('numeric_underflow');
@@ -290,7 +371,13 @@ describe('POST /api/workbench/resonance', () => {
   });
 
   test('when a tip mass comes without a width, then 400 invalid_input', async () => {
-    const res = await post('resonance', { lengthM: 0.012, thicknessM: 0.0006, youngsModulusPa: 61e9, densityKgPerM3: 7750, tipMassKg: 1e-6 });
+    const res = await post('resonance', {
+      lengthM: 0.012,
+      thicknessM: 0.0006,
+      youngsModulusPa: 61e9,
+      densityKgPerM3: 7750,
+      tipMassKg: 1e-6,
+    });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('invalid_input');
   });
@@ -341,7 +428,11 @@ describe('POST /api/workbench/tunnelling', () => {
     expect(res.body.gapChangePerDecadeAngstrom).toBeCloseTo(Math.LN10 / (2 * res.body.decayConstantPerAngstrom), 12);
   });
 
-  test.each([['zero', 0], ['above 20 eV', 25], ['a string', '4']])('when φ is %s, then 400', async (_name, workFunctionEv) => {
+  test.each([
+    ['zero', 0],
+    ['above 20 eV', 25],
+    ['a string', '4'],
+  ])('when φ is %s, then 400', async (_name, workFunctionEv) => {
     const res = await post('tunnelling', { workFunctionEv });
     expect(res.status).toBe(400);
     expect(res.body).toMatchObject(errorShape);
@@ -371,44 +462,104 @@ describe('POST /api/workbench/convert', () => {
     expect(res.body.converted).toBe(1);
   });
 
-  test.each([['an unknown unit', { value: 1, from: 'furlong', to: 'nm' }], ['a string value', { value: '1', from: 'nm', to: 'um' }]])(
-    'when the body has %s, then 400 validation_failed',
-    async (_name, body) => {
-      const res = await post('convert', body);
-      expect(res.status).toBe(400);
-      expect(res.body.error.code).toBe('validation_failed');
-    },
-  );
+  test.each([
+    ['an unknown unit', { value: 1, from: 'furlong', to: 'nm' }],
+    ['a string value', { value: '1', from: 'nm', to: 'um' }],
+  ])('when the body has %s, then 400 validation_failed', async (_name, body) => {
+    const res = await post('convert', body);
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('validation_failed');
+  });
 });
 
 // One composition: every calculator's route answers exactly what the shared function (the page's
 // live preview) returns for the same input. A calculator added without an example here fails.
 const examples: Record<string, unknown> = {
-  fit: { points: [0, 2, 4, 6, 8, 10, 8, 6, 4, 2, 0].map((v, i) => ({ volts: v * 8, displacement: 0.1 * v * 8 + (i > 5 ? 0.05 : 0) + 0.01 * Math.sin(i), sweep: i <= 5 ? 'up' : 'down' })), displacementUnit: 'um' },
+  fit: {
+    points: [0, 2, 4, 6, 8, 10, 8, 6, 4, 2, 0].map((v, i) => ({
+      volts: v * 8,
+      displacement: 0.1 * v * 8 + (i > 5 ? 0.05 : 0) + 0.01 * Math.sin(i),
+      sweep: i <= 5 ? 'up' : 'down',
+    })),
+    displacementUnit: 'um',
+  },
   'peak-to-peak': { displacementPpNm: 15, voltsPpV: 60, displacementResolutionNm: 10, voltsResolutionV: 0.5 },
-  creep: { samples: [0.1, 1, 10, 100].map((t) => ({ timeS: t, displacementNm: 1000 * (1 - 0.3 * Math.log10(t / 0.1)) })), projectToS: 3600 },
-  'expected-gain': { actuator: 'tube-opposite-pair', material: 'PZT-5H', lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.508, measuredNmPerV: 11, tolerances: { lengthMm: 0.1, wallMm: 0.02 } },
-  mixing: { gain: [[70.7, -70.7], [70.7, 70.7]], limits: { vaMinV: -150, vaMaxV: 150, vbMinV: -150, vbMaxV: 150 }, target: { xNm: 500, yNm: 1200 } },
-  'mixing-fit': { samples: [0, 5, 10].flatMap((a) => [0, 5, 10].map((b) => ({ vaV: a, vbV: b, xNm: 3 + 70 * a - 69 * b + 0.1 * Math.cos(a + b), yNm: -2 + 71 * a + 70 * b }))) },
-  'scan-plan': { dacBits: 16, dacSpanV: 10, ampGainVPerV: 30, actuatorGainNmPerV: 102.6, pixelsPerLine: 256, lines: 256, lineRateHz: 50, scanSizeNm: 50000, resonanceHz: 1890, wantedStepNm: 0.1 },
+  creep: {
+    samples: [0.1, 1, 10, 100].map((t) => ({ timeS: t, displacementNm: 1000 * (1 - 0.3 * Math.log10(t / 0.1)) })),
+    projectToS: 3600,
+  },
+  'expected-gain': {
+    actuator: 'tube-opposite-pair',
+    material: 'PZT-5H',
+    lengthMm: 12.7,
+    outerDiameterMm: 6.35,
+    wallMm: 0.508,
+    measuredNmPerV: 11,
+    tolerances: { lengthMm: 0.1, wallMm: 0.02 },
+  },
+  mixing: {
+    gain: [
+      [70.7, -70.7],
+      [70.7, 70.7],
+    ],
+    limits: { vaMinV: -150, vaMaxV: 150, vbMinV: -150, vbMaxV: 150 },
+    target: { xNm: 500, yNm: 1200 },
+  },
+  'mixing-fit': {
+    samples: [0, 5, 10].flatMap((a) =>
+      [0, 5, 10].map((b) => ({ vaV: a, vbV: b, xNm: 3 + 70 * a - 69 * b + 0.1 * Math.cos(a + b), yNm: -2 + 71 * a + 70 * b })),
+    ),
+  },
+  'scan-plan': {
+    dacBits: 16,
+    dacSpanV: 10,
+    ampGainVPerV: 30,
+    actuatorGainNmPerV: 102.6,
+    pixelsPerLine: 256,
+    lines: 256,
+    lineRateHz: 50,
+    scanSizeNm: 50000,
+    resonanceHz: 1890,
+    wantedStepNm: 0.1,
+  },
   resonance: { lengthM: 5e-3, thicknessM: 0.6e-3, widthM: 2e-3, youngsModulusPa: 61e9, densityKgPerM3: 7750, tipMassKg: 20e-6 },
   'drive-current': { capacitanceF: 1e-6, amplitudeV: 150, frequencyHz: 100 },
   tunnelling: { workFunctionEv: 4, wantedRatio: 10 },
   convert: { value: 3, from: 'angstrom/V', to: 'uin/V' },
   'loaded-gain': { freeGainNmPerV: 102.6, actuatorStiffnessNPerM: 300, springRateNPerM: 150, preloadForceN: 0.5 },
   tube: { lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.508, relPermittivity: 3400, youngsModulusPa: 60.6e9, densityKgPerM3: 7500 },
-  'drive-limits': { capacitanceF: 3.4e-9, amplitudeV: 100, frequencyHz: 1000, currentLimitA: 0.001, rasterSwingPpV: 60, lineRateHz: 5, outputResistanceOhm: 10000 },
-  'noise-floor': { actuatorGainNmPerV: 102.6, ampGainVPerV: 30, noiseDensityVPerRtHz: 20e-9, bandwidthHz: 1000, dacBits: 16, dacSpanV: 10, cantileverStiffnessNPerM: 0.1, temperatureK: 295 },
+  'drive-limits': {
+    capacitanceF: 3.4e-9,
+    amplitudeV: 100,
+    frequencyHz: 1000,
+    currentLimitA: 0.001,
+    rasterSwingPpV: 60,
+    lineRateHz: 5,
+    outputResistanceOhm: 10000,
+  },
+  'noise-floor': {
+    actuatorGainNmPerV: 102.6,
+    ampGainVPerV: 30,
+    noiseDensityVPerRtHz: 20e-9,
+    bandwidthHz: 1000,
+    dacBits: 16,
+    dacSpanV: 10,
+    cantileverStiffnessNPerM: 0.1,
+    temperatureK: 295,
+  },
 };
 
 describe('POST /api/workbench/<slug> answers what the page shows', () => {
-  test.each(calculators.map((c) => [c.slug, c] as const))('when %s gets its example, then the body equals the shared calculator on the same parsed input', async (slug, c) => {
-    expect(examples[slug], `no example input for ${slug}`).toBeDefined();
-    const res = await post(slug, examples[slug]);
-    expect(res.status, JSON.stringify(res.body)).toBe(200);
-    const parsed: unknown = (c.input as unknown as { parse: (v: unknown) => unknown }).parse(examples[slug]);
-    expect(res.body).toEqual(JSON.parse(JSON.stringify((c.compute as (i: unknown) => unknown)(parsed))));
-    expect(Array.isArray(res.body.warnings)).toBe(true);
-    expect(Array.isArray(res.body.cautions)).toBe(true);
-  });
+  test.each(calculators.map((c) => [c.slug, c] as const))(
+    'when %s gets its example, then the body equals the shared calculator on the same parsed input',
+    async (slug, c) => {
+      expect(examples[slug], `no example input for ${slug}`).toBeDefined();
+      const res = await post(slug, examples[slug]);
+      expect(res.status, JSON.stringify(res.body)).toBe(200);
+      const parsed: unknown = (c.input as unknown as { parse: (v: unknown) => unknown }).parse(examples[slug]);
+      expect(res.body).toEqual(JSON.parse(JSON.stringify((c.compute as (i: unknown) => unknown)(parsed))));
+      expect(Array.isArray(res.body.warnings)).toBe(true);
+      expect(Array.isArray(res.body.cautions)).toBe(true);
+    },
+  );
 });

@@ -10,9 +10,15 @@ beforeAll(async () => {
   agent = request.agent(t.app);
   csrf = (await agent.get('/api/session')).body.csrfToken;
 });
-afterAll(async () => { await t.close(); });
+afterAll(async () => {
+  await t.close();
+});
 
-const post = (slug: string, body: unknown) => agent.post(`/api/workbench/${slug}`).set('X-CSRF-Token', csrf).send(body as object);
+const post = (slug: string, body: unknown) =>
+  agent
+    .post(`/api/workbench/${slug}`)
+    .set('X-CSRF-Token', csrf)
+    .send(body as object);
 const errorShape = (code: string) => ({ error: { code, message: expect.any(String) } });
 
 describe('POST /api/workbench/loaded-gain', () => {
@@ -40,7 +46,14 @@ describe('POST /api/workbench/loaded-gain', () => {
 });
 
 describe('POST /api/workbench/tube', () => {
-  const tube = { lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.508, relPermittivity: 3400, youngsModulusPa: 60.6e9, densityKgPerM3: 7500 };
+  const tube = {
+    lengthMm: 12.7,
+    outerDiameterMm: 6.35,
+    wallMm: 0.508,
+    relPermittivity: 3400,
+    youngsModulusPa: 60.6e9,
+    densityKgPerM3: 7500,
+  };
 
   test("when FIELD.md's PZT-5H tube is posted, then 200 with a quadrant of C = 2π·ε0·εr·L/ln(OD/ID)/4 ≈ 3.4 nF [memory; calc]", async () => {
     const res = await post('tube', tube);

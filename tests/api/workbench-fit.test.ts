@@ -6,10 +6,17 @@ import { readStrdFile } from '../support/nist-strd.ts';
 const readStrd = (name: string) => readStrdFile(new URL(`../fixtures/${name}`, import.meta.url));
 
 let t: TestApp;
-beforeAll(async () => { t = await startTestApp(); });
-afterAll(async () => { await t.close(); });
+beforeAll(async () => {
+  t = await startTestApp();
+});
+afterAll(async () => {
+  await t.close();
+});
 
-const post = (body: unknown) => request(t.app).post('/api/workbench/fit').send(body as object);
+const post = (body: unknown) =>
+  request(t.app)
+    .post('/api/workbench/fit')
+    .send(body as object);
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
 describe('POST /api/workbench/fit', () => {
@@ -53,12 +60,71 @@ describe('POST /api/workbench/fit', () => {
   });
 
   test.each([
-    ['fewer than 3 points', { points: [{ volts: 0, displacement: 0 }, { volts: 1, displacement: 1 }], displacementUnit: 'nm' }],
-    ['a string value', { points: [{ volts: '1', displacement: 0 }, { volts: 1, displacement: 1 }, { volts: 2, displacement: 2 }], displacementUnit: 'nm' }],
-    ['a null value', { points: [{ volts: null, displacement: 0 }, { volts: 1, displacement: 1 }, { volts: 2, displacement: 2 }], displacementUnit: 'nm' }],
-    ['an unknown unit', { points: [{ volts: 0, displacement: 0 }, { volts: 1, displacement: 1 }, { volts: 2, displacement: 2 }], displacementUnit: 'furlong' }],
-    ['a missing unit', { points: [{ volts: 0, displacement: 0 }, { volts: 1, displacement: 1 }, { volts: 2, displacement: 2 }] }],
-    ['an unknown model', { points: [{ volts: 0, displacement: 0 }, { volts: 1, displacement: 1 }, { volts: 2, displacement: 2 }], displacementUnit: 'nm', model: 'cubic' }],
+    [
+      'fewer than 3 points',
+      {
+        points: [
+          { volts: 0, displacement: 0 },
+          { volts: 1, displacement: 1 },
+        ],
+        displacementUnit: 'nm',
+      },
+    ],
+    [
+      'a string value',
+      {
+        points: [
+          { volts: '1', displacement: 0 },
+          { volts: 1, displacement: 1 },
+          { volts: 2, displacement: 2 },
+        ],
+        displacementUnit: 'nm',
+      },
+    ],
+    [
+      'a null value',
+      {
+        points: [
+          { volts: null, displacement: 0 },
+          { volts: 1, displacement: 1 },
+          { volts: 2, displacement: 2 },
+        ],
+        displacementUnit: 'nm',
+      },
+    ],
+    [
+      'an unknown unit',
+      {
+        points: [
+          { volts: 0, displacement: 0 },
+          { volts: 1, displacement: 1 },
+          { volts: 2, displacement: 2 },
+        ],
+        displacementUnit: 'furlong',
+      },
+    ],
+    [
+      'a missing unit',
+      {
+        points: [
+          { volts: 0, displacement: 0 },
+          { volts: 1, displacement: 1 },
+          { volts: 2, displacement: 2 },
+        ],
+      },
+    ],
+    [
+      'an unknown model',
+      {
+        points: [
+          { volts: 0, displacement: 0 },
+          { volts: 1, displacement: 1 },
+          { volts: 2, displacement: 2 },
+        ],
+        displacementUnit: 'nm',
+        model: 'cubic',
+      },
+    ],
   ])('when the body has %s, then 400 in the error shape', async (_name, body) => {
     const res = await post(body);
     expect(res.status).toBe(400);
@@ -72,8 +138,12 @@ describe('POST /api/workbench/fit', () => {
   });
 
   test('when a value is non-finite in JSON (1e999 parses to Infinity), then 400', async () => {
-    const res = await request(t.app).post('/api/workbench/fit').set('Content-Type', 'application/json')
-      .send('{"points":[{"volts":1e999,"displacement":0},{"volts":1,"displacement":1},{"volts":2,"displacement":2}],"displacementUnit":"nm"}');
+    const res = await request(t.app)
+      .post('/api/workbench/fit')
+      .set('Content-Type', 'application/json')
+      .send(
+        '{"points":[{"volts":1e999,"displacement":0},{"volts":1,"displacement":1},{"volts":2,"displacement":2}],"displacementUnit":"nm"}',
+      );
     expect(res.status).toBe(400);
   });
 

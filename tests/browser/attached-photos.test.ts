@@ -20,12 +20,20 @@ const REGION = `Gouda ${randomInt(1e6)}`;
 async function pngFile(dir: string, name: string, width: number, height: number): Promise<string> {
   const path = join(dir, name);
   const background = { r: randomInt(256), g: randomInt(256), b: randomInt(256) };
-  await writeFile(path, await sharp({ create: { width, height, channels: 3, background } }).png().toBuffer());
+  await writeFile(
+    path,
+    await sharp({ create: { width, height, channels: 3, background } })
+      .png()
+      .toBuffer(),
+  );
   return path;
 }
 
 const uploaded = (page: Page, name: string) =>
-  page.getByRole('progressbar', { name: `Upload of ${name}` }).and(page.locator('[aria-valuenow="100"][aria-valuetext="Uploaded"]')).waitFor();
+  page
+    .getByRole('progressbar', { name: `Upload of ${name}` })
+    .and(page.locator('[aria-valuenow="100"][aria-valuetext="Uploaded"]'))
+    .waitFor();
 
 const noSideways = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth);
 
@@ -39,7 +47,9 @@ describe('journey: photos on registry parts and exchange listings', () => {
     live = await startLiveApp();
     browser = await launchBrowser();
     browser.page.on('pageerror', (e) => errors.push(e.message));
-    browser.page.on('console', (m) => { if (m.type() === 'error' && !/status of 40[14]/.test(m.text())) errors.push(m.text()); });
+    browser.page.on('console', (m) => {
+      if (m.type() === 'error' && !/status of 40[14]/.test(m.text())) errors.push(m.text());
+    });
   });
   afterAll(async () => {
     await browser?.close();
@@ -67,7 +77,9 @@ describe('journey: photos on registry parts and exchange listings', () => {
     await manager.getByLabel('Choose photos').setInputFiles([standing, lying]);
     await manager.getByRole('button', { name: 'Upload 2 photos' }).click();
     await manager.getByText('Describe the photo before uploading it.').first().waitFor();
-    expect(await page.evaluate(() => document.activeElement?.getAttribute('aria-label') ?? document.activeElement?.id)).toMatch(/^alt-photo-/);
+    expect(await page.evaluate(() => document.activeElement?.getAttribute('aria-label') ?? document.activeElement?.id)).toMatch(
+      /^alt-photo-/,
+    );
     await manager.getByLabel('Alt text for tube-standing.png (required)').fill(PART_ALT);
     await manager.getByLabel('Alt text for tube-lying.png (required)').fill(SPARE_ALT);
     await manager.getByRole('button', { name: 'Upload 2 photos' }).click();
@@ -90,7 +102,10 @@ describe('journey: photos on registry parts and exchange listings', () => {
 
     // Move the second photo first: the page's grid follows, and focus stays on the moved photo's buttons.
     await manager.getByRole('button', { name: 'Move photo 2 earlier' }).click();
-    await page.waitForFunction((alt) => document.querySelector('[aria-label="Photos of this part"] img')?.getAttribute('alt') === alt, SPARE_ALT);
+    await page.waitForFunction(
+      (alt) => document.querySelector('[aria-label="Photos of this part"] img')?.getAttribute('alt') === alt,
+      SPARE_ALT,
+    );
     await page.waitForFunction(() => /^photo-\d+-down$/.test(document.activeElement?.id ?? ''));
     // Describe it better.
     const renamed = `${SPARE_ALT}, seen from one end`;

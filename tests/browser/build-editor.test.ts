@@ -34,7 +34,9 @@ describe('journey: a maker writes a build and submits it for review', () => {
     browser = await launchBrowser();
     browser.page.on('pageerror', (e) => errors.push(e.message));
     // The non-photo upload answers 415 on purpose; the browser logs that as a console error.
-    browser.page.on('console', (m) => { if (m.type() === 'error' && !/status of 415/.test(m.text())) errors.push(m.text()); });
+    browser.page.on('console', (m) => {
+      if (m.type() === 'error' && !/status of 415/.test(m.text())) errors.push(m.text());
+    });
   });
   afterAll(async () => {
     await browser?.close();
@@ -75,9 +77,19 @@ describe('journey: a maker writes a build and submits it for review', () => {
 
     // Photos: a JPEG, a PNG and a file that only pretends to be a photo, each its own request with its own bar.
     const photo = join(dir, 'scanner-head.jpg');
-    await writeFile(photo, await sharp({ create: { width: 1200, height: 900, channels: 3, background: { r: 181, g: 83, b: 42 } } }).jpeg().toBuffer());
+    await writeFile(
+      photo,
+      await sharp({ create: { width: 1200, height: 900, channels: 3, background: { r: 181, g: 83, b: 42 } } })
+        .jpeg()
+        .toBuffer(),
+    );
     const bench = join(dir, 'bench.png');
-    await writeFile(bench, await sharp({ create: { width: 800, height: 600, channels: 3, background: { r: 47, g: 111, b: 115 } } }).png().toBuffer());
+    await writeFile(
+      bench,
+      await sharp({ create: { width: 800, height: 600, channels: 3, background: { r: 47, g: 111, b: 115 } } })
+        .png()
+        .toBuffer(),
+    );
     const fake = join(dir, 'notes.jpg');
     await writeFile(fake, 'not an image at all, just text');
     await page.getByLabel('Choose photos').setInputFiles([photo, bench, fake]);
@@ -88,7 +100,10 @@ describe('journey: a maker writes a build and submits it for review', () => {
     await page.getByLabel('Alt text for notes.jpg (required)').fill('Not really a photo');
     await page.getByRole('button', { name: 'Upload 3 photos' }).click();
     for (const name of ['scanner-head.jpg', 'bench.png']) {
-      await page.getByRole('progressbar', { name: `Upload of ${name}` }).and(page.locator('[aria-valuenow="100"][aria-valuetext="Uploaded"]')).waitFor();
+      await page
+        .getByRole('progressbar', { name: `Upload of ${name}` })
+        .and(page.locator('[aria-valuenow="100"][aria-valuetext="Uploaded"]'))
+        .waitFor();
     }
     await page.getByText('That file is not a photo we can read.').waitFor();
     const gallery = page.getByRole('list', { name: 'Photos of this build' });

@@ -10,7 +10,10 @@ import { Build } from '../../server/models/build.model.ts';
 
 const AFM = 'Beam-deflection AFM on a slate offcut';
 const STM = 'Tube-scanner STM in a biscuit tin';
-const PHOTO_ALTS = ['Optical lever bench: laser, mirror on the cantilever and the split photodiode', 'The two bimorph bars glued to the tip holder'];
+const PHOTO_ALTS = [
+  'Optical lever bench: laser, mirror on the cantilever and the split photodiode',
+  'The two bimorph bars glued to the tip holder',
+];
 
 /** Adds two photos to Marit's published build through the real upload route, so the gallery has something to open. */
 async function addPhotos(live: LiveApp): Promise<number> {
@@ -18,7 +21,11 @@ async function addPhotos(live: LiveApp): Promise<number> {
   const build = await Build.findOne({ where: { title: AFM } });
   let req = agent.post(`/api/builds/${build!.id}/photos`).set('X-CSRF-Token', agent.csrf);
   for (const alt of PHOTO_ALTS) req = req.field('alt', alt);
-  for (const [i, size] of [[1200, 800], [800, 1000]].entries()) req = req.attach('photos', await jpeg(size[0]!, size[1]!), { filename: `p${i}.jpg`, contentType: 'image/jpeg' });
+  for (const [i, size] of [
+    [1200, 800],
+    [800, 1000],
+  ].entries())
+    req = req.attach('photos', await jpeg(size[0]!, size[1]!), { filename: `p${i}.jpg`, contentType: 'image/jpeg' });
   const res = await req;
   expect(res.status).toBe(201);
   return build!.id;
@@ -39,7 +46,9 @@ describe('journey: reading builds', () => {
     afmId = await addPhotos(live);
     browser = await launchBrowser();
     browser.page.on('pageerror', (e) => errors.push(e.message));
-    browser.page.on('console', (m) => { if (m.type() === 'error' && !/status of 40[14]/.test(m.text())) errors.push(m.text()); });
+    browser.page.on('console', (m) => {
+      if (m.type() === 'error' && !/status of 40[14]/.test(m.text())) errors.push(m.text());
+    });
   });
   afterAll(async () => {
     await browser?.close();
@@ -55,7 +64,9 @@ describe('journey: reading builds', () => {
     await page.getByRole('heading', { level: 1, name: 'Builds' }).waitFor();
     await page.getByRole('link', { name: STM }).waitFor();
     expect(await page.getByRole('link', { name: 'Stylus profilometer from a record-player arm' }).count()).toBe(0);
-    expect(await page.getByRole('link', { name: 'Sign in to write a build' }).getAttribute('href')).toBe('/auth/github?returnTo=%2Fbuilds%3Fkind%3Dtunnelling-microscope');
+    expect(await page.getByRole('link', { name: 'Sign in to write a build' }).getAttribute('href')).toBe(
+      '/auth/github?returnTo=%2Fbuilds%3Fkind%3Dtunnelling-microscope',
+    );
     expect(await page.getByRole('list', { name: 'Measured gains' }).first().textContent()).toMatch(/nm\/V/);
     await page.screenshot({ path: `${SCREENSHOTS}/builds-index-1280.png`, fullPage: true });
 
@@ -75,14 +86,20 @@ describe('journey: reading builds', () => {
     expect(await runs.getByRole('columnheader', { name: 'Gain ± 95 % (nm/V)' }).count()).toBe(1);
     expect(await runs.getByRole('radio').count()).toBe(2);
     expect(await runs.getByRole('row').nth(1).textContent()).toMatch(/\d ± \d/);
-    await xBender.getByRole('region', { name: /^Calibration plot: X bender/ }).locator('svg.recharts-surface').waitFor();
+    await xBender
+      .getByRole('region', { name: /^Calibration plot: X bender/ })
+      .locator('svg.recharts-surface')
+      .waitFor();
     expect(await xBender.locator('.recharts-symbols').count()).toBeGreaterThan(10);
     expect(await xBender.getByText(/× expected \(series bimorph, PZT-5A · Source: Smits, Dalke & Cooney 1991\)/).count()).toBe(1);
     await xBender.getByText(/recorded in µm and V, plotted in nm and V/).waitFor();
     await runs.getByRole('radio').nth(1).check();
     await xBender.getByText(/recorded in nm and V; line fitted with an intercept/).waitFor();
     await page.getByText(/Hazardous voltage: some actuators of this build are driven above 42.4 V peak/).waitFor();
-    await page.getByRole('article', { name: /^Z tube/ }).getByText(/Hazardous voltage: .* V peak is above the 42.4 V peak level/).waitFor();
+    await page
+      .getByRole('article', { name: /^Z tube/ })
+      .getByText(/Hazardous voltage: .* V peak is above the 42.4 V peak level/)
+      .waitFor();
 
     // The demo seeds drawn pictures first; open the first of the photos this test uploaded.
     const thumbs = page.getByRole('list', { name: 'Photos of the build' }).getByRole('button', { name: PHOTO_ALTS[0]! });
@@ -125,7 +142,10 @@ describe('journey: reading builds', () => {
     await page.screenshot({ path: `${SCREENSHOTS}/builds-index-390.png`, fullPage: true });
     await page.goto(`${live.baseUrl}/builds/${afmId}`);
     const xBender = page.getByRole('article', { name: /^X bender/ });
-    await xBender.getByRole('region', { name: /^Calibration plot: X bender/ }).locator('svg.recharts-surface').waitFor();
+    await xBender
+      .getByRole('region', { name: /^Calibration plot: X bender/ })
+      .locator('svg.recharts-surface')
+      .waitFor();
     expect(await xBender.getByRole('table').count()).toBe(0);
     expect(await xBender.getByRole('radio', { name: /^Plot the run of/ }).count()).toBe(2);
     expect(await xBender.getByText(/^Nonlinearity$/).count()).toBe(2);
@@ -143,7 +163,9 @@ describe('journey: reading builds', () => {
     await page.getByRole('link', { name: 'Write a build' }).waitFor();
 
     await page.goto(`${live.baseUrl}/builds/mine`);
-    const draft = page.getByRole('listitem').filter({ has: page.getByRole('link', { name: 'My first tunnelling microscope', exact: true }) });
+    const draft = page
+      .getByRole('listitem')
+      .filter({ has: page.getByRole('link', { name: 'My first tunnelling microscope', exact: true }) });
     await draft.getByText('Draft', { exact: true }).waitFor();
     await page.screenshot({ path: `${SCREENSHOTS}/my-builds-1280.png`, fullPage: true });
     await page.setViewportSize({ width: 390, height: 844 });
@@ -165,7 +187,9 @@ describe('journey: reading builds', () => {
     await page.getByRole('button', { name: /stage-kwame/ }).click();
     await page.waitForURL(/\/$|\/builds/);
     await page.goto(`${live.baseUrl}/builds/mine`);
-    const returned = page.getByRole('listitem').filter({ has: page.getByRole('link', { name: 'Micromanipulator for pulling glass tips', exact: true }) });
+    const returned = page
+      .getByRole('listitem')
+      .filter({ has: page.getByRole('link', { name: 'Micromanipulator for pulling glass tips', exact: true }) });
     await returned.getByText('Returned with notes').waitFor();
     await returned.getByText(/Please add at least one photo/).waitFor();
     await page.getByText('edited since review').waitFor();

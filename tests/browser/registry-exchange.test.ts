@@ -17,7 +17,9 @@ describe('journey: parts registry and exchange', () => {
     live = await startLiveApp();
     browser = await launchBrowser();
     browser.page.on('pageerror', (e) => errors.push(e.message));
-    browser.page.on('console', (m) => { if (m.type() === 'error' && !/status of 40[14]/.test(m.text())) errors.push(m.text()); });
+    browser.page.on('console', (m) => {
+      if (m.type() === 'error' && !/status of 40[14]/.test(m.text())) errors.push(m.text());
+    });
   });
   afterAll(async () => {
     await browser?.close();

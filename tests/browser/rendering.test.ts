@@ -32,11 +32,19 @@ describe('journey: hostile Markdown renders inert under the Content-Security-Pol
     const owner = await createUser();
     const build = await createBuildRow(owner.id, { status: 'published', title: 'Hostile rendering check' });
     await build.update({ body: HOSTILE });
-    await LogEntry.create({ buildId: build.id, entryDate: '2026-11-30', title: 'Entry with HTML', body: '<script>window.__pwned="entry"</script> <b onmouseover="window.__pwned=\'b\'">bold?</b>' });
+    await LogEntry.create({
+      buildId: build.id,
+      entryDate: '2026-11-30',
+      title: 'Entry with HTML',
+      body: '<script>window.__pwned="entry"</script> <b onmouseover="window.__pwned=\'b\'">bold?</b>',
+    });
     const { page } = browser;
     const dialogs: string[] = [];
     const violations: string[] = [];
-    page.on('dialog', async (d) => { dialogs.push(d.message()); await d.dismiss(); });
+    page.on('dialog', async (d) => {
+      dialogs.push(d.message());
+      await d.dismiss();
+    });
     await page.addInitScript(() => {
       document.addEventListener('securitypolicyviolation', (e) => {
         (window as unknown as { __violations: string[] }).__violations ??= [];
@@ -62,8 +70,14 @@ describe('journey: hostile Markdown renders inert under the Content-Security-Pol
     expect(await page.getByRole('link', { name: 'raw anchor' }).count()).toBe(0);
     expect(await page.locator('text=raw div').count()).toBe(0);
 
-    await page.getByRole('link', { name: 'click me' }).click({ timeout: 2000 }).catch(() => {});
-    await page.locator('text=bold?').hover({ timeout: 2000 }).catch(() => {});
+    await page
+      .getByRole('link', { name: 'click me' })
+      .click({ timeout: 2000 })
+      .catch(() => {});
+    await page
+      .locator('text=bold?')
+      .hover({ timeout: 2000 })
+      .catch(() => {});
     expect(await page.evaluate(() => (window as unknown as { __pwned?: unknown }).__pwned)).toBeUndefined();
     expect(dialogs).toEqual([]);
 

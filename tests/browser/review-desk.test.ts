@@ -34,11 +34,18 @@ describe('journey: a moderator works the review desk', () => {
     toReturn = await createBuildRow(owner.id, { status: 'submitted', title: `Tube scanner ${tag}` });
     await toPublish.update({ submittedAt: new Date(Date.now() - 3 * DAY) });
     await toReturn.update({ submittedAt: new Date(Date.now() - 2 * DAY) });
-    for (const gain of [95, 104, 110, 118]) await createRunRow({ buildId: toPublish.id, partId: part.id, ownerId: owner.id, gainNmPerV: gain, status: 'accepted' });
+    for (const gain of [95, 104, 110, 118])
+      await createRunRow({ buildId: toPublish.id, partId: part.id, ownerId: owner.id, gainNmPerV: gain, status: 'accepted' });
     const pending = await createRunRow({ buildId: toReturn.id, partId: part.id, ownerId: owner.id, gainNmPerV: 240, hysteresis: 0.3 });
     const reporter = await createUser();
     const { Report } = await import('../../server/models/report.model.ts');
-    await Report.create({ reporterId: reporter.id, targetType: 'run', targetId: pending.id, reason: 'wrong-data', note: `Looks like µm entered as nm (${tag}).` });
+    await Report.create({
+      reporterId: reporter.id,
+      targetType: 'run',
+      targetId: pending.id,
+      reason: 'wrong-data',
+      note: `Looks like µm entered as nm (${tag}).`,
+    });
   });
   afterAll(async () => {
     await browser?.close();
@@ -49,7 +56,9 @@ describe('journey: a moderator works the review desk', () => {
     const { page } = browser;
     const errors: string[] = [];
     page.on('pageerror', (e) => errors.push(e.message));
-    page.on('console', (m) => { if (m.type() === 'error') errors.push(m.text()); });
+    page.on('console', (m) => {
+      if (m.type() === 'error') errors.push(m.text());
+    });
 
     await signInAsDemo(page, live.baseUrl, 'demo-moderator');
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Review desk' }).click();
@@ -63,7 +72,10 @@ describe('journey: a moderator works the review desk', () => {
     expect(await rowOf(toPublish.title).textContent()).toContain('3 days waiting');
     await page.screenshot({ path: `${SCREENSHOTS}/review-desk-build-1280.png`, fullPage: true });
     await panel.getByRole('button', { name: 'Publish' }).click();
-    await page.getByRole('status').filter({ hasText: `Published: ${toPublish.title}.` }).waitFor();
+    await page
+      .getByRole('status')
+      .filter({ hasText: `Published: ${toPublish.title}.` })
+      .waitFor();
     await rowOf(toPublish.title).waitFor({ state: 'detached' });
 
     await rowOf(toReturn.title).click();
@@ -72,7 +84,10 @@ describe('journey: a moderator works the review desk', () => {
     await panel.getByText('A note is required to return or decline.').waitFor();
     await panel.getByLabel('Note to the maker').fill(note);
     await panel.getByRole('button', { name: 'Return with notes' }).click();
-    await page.getByRole('status').filter({ hasText: `Returned with notes: ${toReturn.title}.` }).waitFor();
+    await page
+      .getByRole('status')
+      .filter({ hasText: `Returned with notes: ${toReturn.title}.` })
+      .waitFor();
     await rowOf(toReturn.title).waitFor({ state: 'detached' });
     const mail = await live.t.mail.waitFor((m) => m.subject.includes(toReturn.title));
     expect(mail.text).toContain(note);
@@ -80,7 +95,10 @@ describe('journey: a moderator works the review desk', () => {
     await page.getByRole('tab', { name: /Calibration runs pending/ }).click();
     await rowOf(partName).click();
     await panel.getByRole('heading', { level: 2, name: partName }).waitFor();
-    await panel.getByText(/Large hysteresis/).first().waitFor();
+    await panel
+      .getByText(/Large hysteresis/)
+      .first()
+      .waitFor();
     await panel.getByRole('table').waitFor();
     await panel.getByText('Quartiles and median').waitFor();
     await panel.getByText('Fitted line').waitFor();
@@ -127,7 +145,12 @@ describe('journey: a moderator works the review desk', () => {
     await page.goto(`${live.baseUrl}/builds/mine`);
     const returned = page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: toReturn.title }) });
     await returned.getByText(note).waitFor();
-    await page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: toPublish.title }) }).getByText('Published').first().waitFor();
+    await page
+      .getByRole('listitem')
+      .filter({ has: page.getByRole('heading', { name: toPublish.title }) })
+      .getByText('Published')
+      .first()
+      .waitFor();
     await page.screenshot({ path: `${SCREENSHOTS}/review-returned-owner-1280.png`, fullPage: true });
 
     await page.goto(`${live.baseUrl}/review`);

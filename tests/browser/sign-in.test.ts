@@ -17,7 +17,9 @@ describe('journey: a moderator signs in and out', () => {
     const { page } = browser;
     const errors: string[] = [];
     page.on('pageerror', (e) => errors.push(e.message));
-    page.on('console', (m) => { if (m.type() === 'error') errors.push(m.text()); });
+    page.on('console', (m) => {
+      if (m.type() === 'error') errors.push(m.text());
+    });
 
     await page.goto(live.baseUrl);
     await expect(page.getByRole('heading', { level: 1 }).textContent()).resolves.toContain('Measure it once');

@@ -9,14 +9,27 @@ import { workbenchTools } from '../../src/features/workbench/tools.ts';
 // A bender run with up and down sweeps; one bad line (7) that must be left out and reported.
 const csv = [
   'volts,displacement,sweep',
-  '0,2,up', '2,171,up', '4,366,up', '6,577,up', '8,790,up', '10,1003,up',
+  '0,2,up',
+  '2,171,up',
+  '4,366,up',
+  '6,577,up',
+  '8,790,up',
+  '10,1003,up',
   '8,abc,down',
-  '10,1003,down', '8,840,down', '6,634,down', '4,420,down', '2,215,down', '0,11,down',
+  '10,1003,down',
+  '8,840,down',
+  '6,634,down',
+  '4,420,down',
+  '2,215,down',
+  '0,11,down',
 ].join('\n');
 
 /** The gain text the page must show, computed with the same shared fit and formatter [calc]. */
 function expectedGain(unit: DisplacementUnit): string {
-  const points = csv.split('\n').slice(1).map((l) => l.split(','))
+  const points = csv
+    .split('\n')
+    .slice(1)
+    .map((l) => l.split(','))
     .filter(([, x]) => x !== 'abc')
     .map(([v, x, s]) => ({ volts: Number(v), displacement: Number(x), sweep: s as 'up' | 'down' }));
   const fit = fitCalibrationInUnits({ points, displacementUnit: unit });
@@ -38,7 +51,9 @@ describe('journey: a visitor uses the workbench', () => {
     live = await startLiveApp();
     browser = await launchBrowser();
     browser.page.on('pageerror', (e) => errors.push(e.message));
-    browser.page.on('console', (m) => { if (m.type() === 'error') errors.push(m.text()); });
+    browser.page.on('console', (m) => {
+      if (m.type() === 'error') errors.push(m.text());
+    });
   });
   afterAll(async () => {
     await browser?.close();
@@ -96,7 +111,10 @@ describe('journey: a visitor uses the workbench', () => {
       for (const slug of slugs) {
         await page.goto(`${live.baseUrl}/workbench/${slug}`);
         await page.getByRole('heading', { level: 1 }).waitFor();
-        await page.getByRole('region', { name: /Results|Displacement/ }).first().waitFor();
+        await page
+          .getByRole('region', { name: /Results|Displacement/ })
+          .first()
+          .waitFor();
         const chart = page.getByRole('figure');
         if (await chart.count()) await chart.first().locator('svg.recharts-surface').first().waitFor();
         if (width === 390 || !['fit', 'scan-planner'].includes(slug)) {

@@ -8,10 +8,14 @@ import { startTestApp, type TestApp } from './test-app.ts';
 import { seedDemoOnce } from '../../server/db/seed/demo.ts';
 import { demoPictureAttacher } from '../../server/db/seed/demo-pictures.ts';
 
-const freePort = () => new Promise<number>((resolve) => {
-  const s = createServer();
-  s.listen(0, '127.0.0.1', () => { const { port } = s.address() as AddressInfo; s.close(() => resolve(port)); });
-});
+const freePort = () =>
+  new Promise<number>((resolve) => {
+    const s = createServer();
+    s.listen(0, '127.0.0.1', () => {
+      const { port } = s.address() as AddressInfo;
+      s.close(() => resolve(port));
+    });
+  });
 
 export interface LiveApp {
   t: TestApp;
@@ -27,7 +31,9 @@ export async function startLiveApp(): Promise<LiveApp> {
   mkdirSync(uploadsDir, { recursive: true });
   const t = await startTestApp({ publicUrl: baseUrl, port, uploadsDir });
   await seedDemoOnce(t.handle.sequelize, demoPictureAttacher(uploadsDir));
-  const server: Server = await new Promise((resolve) => { const s = t.app.listen(port, '127.0.0.1', () => resolve(s)); });
+  const server: Server = await new Promise((resolve) => {
+    const s = t.app.listen(port, '127.0.0.1', () => resolve(s));
+  });
   return {
     t,
     baseUrl,
@@ -49,7 +55,16 @@ export async function launchBrowser(): Promise<{ context: BrowserContext; page: 
     executablePath: '/usr/bin/chromium',
     headless: true,
     viewport: { width: 1280, height: 860 },
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--disable-dev-shm-usage'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--disable-dev-shm-usage',
+    ],
   });
   const page = context.pages()[0] ?? (await context.newPage());
   return {

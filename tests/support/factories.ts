@@ -21,7 +21,17 @@ export async function createUser(overrides: { login?: string; role?: Role; suspe
 }
 
 /** A listed registry part (accepted), bimorph by default. */
-export async function createPart(overrides: Partial<{ name: string; category: string; status: string; material: string | null; lengthMm: number | null; thicknessMm: number | null; proposedById: number | null }> = {}) {
+export async function createPart(
+  overrides: Partial<{
+    name: string;
+    category: string;
+    status: string;
+    material: string | null;
+    lengthMm: number | null;
+    thicknessMm: number | null;
+    proposedById: number | null;
+  }> = {},
+) {
   const { Part } = await import('../../server/models/part.model.ts');
   return Part.create({
     category: (overrides.category ?? 'bimorph') as 'bimorph',
@@ -57,15 +67,52 @@ export async function createBuildRow(ownerId: number, overrides: Partial<{ statu
 }
 
 /** An actuator on `buildId` using `partId`, with one run whose points follow `gainNmPerV` (fit computed by the shared code). */
-export async function createRunRow(opts: { buildId: number; partId: number; ownerId: number; gainNmPerV: number; status?: 'pending' | 'accepted' | 'rejected'; hysteresis?: number }) {
+export async function createRunRow(opts: {
+  buildId: number;
+  partId: number;
+  ownerId: number;
+  gainNmPerV: number;
+  status?: 'pending' | 'accepted' | 'rejected';
+  hysteresis?: number;
+}) {
   const { Actuator } = await import('../../server/models/actuator.model.ts');
   const { CalibrationRun } = await import('../../server/models/calibration-run.model.ts');
   const { runColumns } = await import('../../server/services/run.service.ts');
   const { fitCalibrationInUnits } = await import('../../shared/workbench/calibration-fit.ts');
   const { demoSweep } = await import('../../server/db/seed/demo-points.ts');
-  const actuator = await Actuator.create({ buildId: opts.buildId, partId: opts.partId, label: null, axis: 'X', drive: 'single', amplifier: null, maxVolts: 40, notes: null });
-  const points = demoSweep({ gainNmPerV: opts.gainNmPerV, loopFraction: opts.hysteresis ?? 0.05, noiseNm: 0.5, maxVolts: 40, steps: 8, unit: 'nm', seed: Math.floor(Math.random() * 1e9) });
-  const input = { points, voltageUnit: 'V' as const, displacementUnit: 'nm' as const, model: 'intercept' as const, method: 'indicator' as const };
+  const actuator = await Actuator.create({
+    buildId: opts.buildId,
+    partId: opts.partId,
+    label: null,
+    axis: 'X',
+    drive: 'single',
+    amplifier: null,
+    maxVolts: 40,
+    notes: null,
+  });
+  const points = demoSweep({
+    gainNmPerV: opts.gainNmPerV,
+    loopFraction: opts.hysteresis ?? 0.05,
+    noiseNm: 0.5,
+    maxVolts: 40,
+    steps: 8,
+    unit: 'nm',
+    seed: Math.floor(Math.random() * 1e9),
+  });
+  const input = {
+    points,
+    voltageUnit: 'V' as const,
+    displacementUnit: 'nm' as const,
+    model: 'intercept' as const,
+    method: 'indicator' as const,
+  };
   const fit = fitCalibrationInUnits(input);
-  return CalibrationRun.create({ actuatorId: actuator.id, buildId: opts.buildId, partId: opts.partId, ownerId: opts.ownerId, status: opts.status ?? 'pending', ...runColumns(input, fit) });
+  return CalibrationRun.create({
+    actuatorId: actuator.id,
+    buildId: opts.buildId,
+    partId: opts.partId,
+    ownerId: opts.ownerId,
+    status: opts.status ?? 'pending',
+    ...runColumns(input, fit),
+  });
 }

@@ -13,7 +13,11 @@ export const GPS_EXIF = {
 };
 
 /** A plain-colour JPEG; with `gps` it carries a GPS position, with `orientation` an EXIF Orientation tag. */
-export async function jpeg(width: number, height: number, opts: { colour?: Rgb; gps?: boolean; orientation?: number } = {}): Promise<Buffer> {
+export async function jpeg(
+  width: number,
+  height: number,
+  opts: { colour?: Rgb; gps?: boolean; orientation?: number } = {},
+): Promise<Buffer> {
   let img = sharp({ create: { width, height, channels: 3, background: opts.colour ?? randomColour() } }).jpeg({ quality: 90 });
   if (opts.orientation) img = img.withMetadata({ orientation: opts.orientation });
   if (opts.gps) img = img.withExifMerge(GPS_EXIF);
@@ -29,7 +33,9 @@ export async function noisyJpeg(width: number, height: number, quality = 88): Pr
 
 /** Left half red, right half blue, stored sideways with EXIF Orientation 6 (a phone held upright): shown upright, red is on top. */
 export async function sidewaysJpeg(width = 300, height = 200): Promise<Buffer> {
-  const red = await sharp({ create: { width: width / 2, height, channels: 3, background: { r: 255, g: 0, b: 0 } } }).png().toBuffer();
+  const red = await sharp({ create: { width: width / 2, height, channels: 3, background: { r: 255, g: 0, b: 0 } } })
+    .png()
+    .toBuffer();
   return sharp({ create: { width, height, channels: 3, background: { r: 0, g: 0, b: 255 } } })
     .composite([{ input: red, left: 0, top: 0 }])
     .jpeg({ quality: 95 })
@@ -39,7 +45,9 @@ export async function sidewaysJpeg(width = 300, height = 200): Promise<Buffer> {
 
 /** A PNG with an alpha channel. */
 export async function png(width: number, height: number): Promise<Buffer> {
-  return sharp({ create: { width, height, channels: 4, background: { ...randomColour(), alpha: 0.6 } } }).png().toBuffer();
+  return sharp({ create: { width, height, channels: 4, background: { ...randomColour(), alpha: 0.6 } } })
+    .png()
+    .toBuffer();
 }
 
 /** The first `fraction` of a noisy JPEG: it still starts like a JPEG but its scan data stops early. */

@@ -6,11 +6,24 @@ import { expect } from 'vitest';
 import type request from 'supertest';
 import { CookieAccessInfo } from 'cookiejar';
 import type { z } from 'zod';
-import { createBuildInput, createEntryInput, reorderPhotosInput, updateBuildInput, updateEntryInput, updatePhotoInput } from '@shared/schemas/build.ts';
+import {
+  createBuildInput,
+  createEntryInput,
+  reorderPhotosInput,
+  updateBuildInput,
+  updateEntryInput,
+  updatePhotoInput,
+} from '@shared/schemas/build.ts';
 import { createActuatorInput, updateActuatorInput } from '@shared/schemas/actuator.ts';
 import { createRunInput } from '@shared/schemas/run.ts';
 import { mergePartInput, proposePartInput } from '@shared/schemas/part.ts';
-import { acceptRejectInput, accountSettingsInput, buildDecisionInput, createReportInput, reportDecisionInput } from '@shared/schemas/review.ts';
+import {
+  acceptRejectInput,
+  accountSettingsInput,
+  buildDecisionInput,
+  createReportInput,
+  reportDecisionInput,
+} from '@shared/schemas/review.ts';
 import { createListingInput, hideListingInput, sendMessageInput, updateListingInput } from '@shared/schemas/listing.ts';
 import { reorderAttachedPhotosInput, updateAttachedPhotoInput } from '@shared/schemas/attached-photo.ts';
 import { setRoleInput, setSuspendedInput } from '@shared/schemas/user.ts';
@@ -78,12 +91,30 @@ const unique = (prefix: string) => `${prefix} ${randomBytes(3).toString('hex')}`
 
 async function photoRow(buildId: number, ownerId: number, position: number) {
   const hash = randomBytes(32).toString('hex');
-  return Photo.create({ buildId, ownerId, contentHash: hash, displayFile: `${hash}.webp`, thumbFile: `${hash}-t.webp`, width: 40, height: 30, alt: 'A photo', position });
+  return Photo.create({
+    buildId,
+    ownerId,
+    contentHash: hash,
+    displayFile: `${hash}.webp`,
+    thumbFile: `${hash}-t.webp`,
+    width: 40,
+    height: 30,
+    alt: 'A photo',
+    position,
+  });
 }
 
 async function attachedPhotoRow(model: typeof PartPhoto | typeof ListingPhoto, owner: { partId: number } | { listingId: number }) {
   const hash = randomBytes(32).toString('hex');
-  return (model as typeof ListingPhoto).create({ ...owner, contentHash: hash, displayFile: `${hash}.webp`, thumbFile: `${hash}-t.webp`, width: 40, height: 30, alt: 'A photo' } as never);
+  return (model as typeof ListingPhoto).create({
+    ...owner,
+    contentHash: hash,
+    displayFile: `${hash}.webp`,
+    thumbFile: `${hash}-t.webp`,
+    width: 40,
+    height: 30,
+    alt: 'A photo',
+  } as never);
 }
 
 /** Fixtures for changing a part's or listing's stored photos (alt text, order), owned by the case's maker. */
@@ -93,33 +124,49 @@ function attachedPhotoEdit(subject: 'part' | 'listing', kind: 'alt' | 'order'): 
     schema: kind === 'alt' ? updateAttachedPhotoInput : reorderAttachedPhotosInput,
     allowed: 'owner',
     async make({ owner }) {
-      const ownerKey: Record<string, number> = subject === 'part'
-        ? { partId: (await createPart({ proposedById: owner.id })).id }
-        : { listingId: (await listingRow(owner.id)).id };
-      const [a, b] = [await attachedPhotoRow(model, ownerKey as { partId: number }), await attachedPhotoRow(model, ownerKey as { partId: number })];
+      const ownerKey: Record<string, number> =
+        subject === 'part' ? { partId: (await createPart({ proposedById: owner.id })).id } : { listingId: (await listingRow(owner.id)).id };
+      const [a, b] = [
+        await attachedPhotoRow(model, ownerKey as { partId: number }),
+        await attachedPhotoRow(model, ownerKey as { partId: number }),
+      ];
       await b.update({ position: 1 });
-      const photos = () => model.findAll({ where: ownerKey as never, order: [['position', 'ASC'], ['id', 'ASC']] });
+      const photos = () =>
+        model.findAll({
+          where: ownerKey as never,
+          order: [
+            ['position', 'ASC'],
+            ['id', 'ASC'],
+          ],
+        });
       const params: Record<string, number> = { ...ownerKey };
       return kind === 'alt'
         ? {
-          params: { ...params, photoId: a.id },
-          body: { alt: 'Markings readable under a loupe' },
-          state: () => rows(photos()),
-          async changed() { expect((await model.findByPk(a.id))?.alt).toBe('Markings readable under a loupe'); },
-        }
+            params: { ...params, photoId: a.id },
+            body: { alt: 'Markings readable under a loupe' },
+            state: () => rows(photos()),
+            async changed() {
+              expect((await model.findByPk(a.id))?.alt).toBe('Markings readable under a loupe');
+            },
+          }
         : {
-          params,
-          body: { photoIds: [b.id, a.id] },
-          state: () => rows(photos()),
-          async changed() { expect((await photos()).map((p) => p.id)).toEqual([b.id, a.id]); },
-        };
+            params,
+            body: { photoIds: [b.id, a.id] },
+            state: () => rows(photos()),
+            async changed() {
+              expect((await photos()).map((p) => p.id)).toEqual([b.id, a.id]);
+            },
+          };
     },
   };
 }
 
 /** The agent's session cookie as a Cookie header value (null when it has none). */
 export function sessionCookie(agent: Agent): string | null {
-  const cookie = (agent as unknown as { jar: { getCookie(name: string, access: unknown): { value: string } | undefined } }).jar.getCookie('scanwright.sid', CookieAccessInfo.All);
+  const cookie = (agent as unknown as { jar: { getCookie(name: string, access: unknown): { value: string } | undefined } }).jar.getCookie(
+    'scanwright.sid',
+    CookieAccessInfo.All,
+  );
   return cookie ? `scanwright.sid=${cookie.value}` : null;
 }
 
@@ -172,7 +219,12 @@ export const sessionRows = async (t: TestApp, where: { sid?: string | null; user
  * Send the fixture's request as the acting agent, with its CSRF token unless told otherwise.
  * `raw` replaces the body with these exact bytes (set the Content-Type in `headers`).
  */
-export function send(route: RouteEntry, target: Target, agent: Agent, opts: { csrf?: string | null; raw?: string | Buffer; headers?: Record<string, string> } = {}) {
+export function send(
+  route: RouteEntry,
+  target: Target,
+  agent: Agent,
+  opts: { csrf?: string | null; raw?: string | Buffer; headers?: Record<string, string> } = {},
+) {
   const method = route.method.toLowerCase() as 'post' | 'put' | 'patch' | 'delete';
   let req = agent[method](fillPath(route.path, target.params ?? {}));
   const csrf = opts.csrf === undefined ? agent.csrf : opts.csrf;
@@ -181,7 +233,8 @@ export function send(route: RouteEntry, target: Target, agent: Agent, opts: { cs
   if (opts.raw !== undefined) return req.serialize((b: unknown) => b as string).send(opts.raw as string);
   if (target.multipart) {
     for (const [name, value] of Object.entries(target.multipart.fields)) req = req.field(name, value);
-    for (const [i, file] of target.multipart.files.entries()) req = req.attach('photos', file, { filename: `p${i}.jpg`, contentType: 'image/jpeg' });
+    for (const [i, file] of target.multipart.files.entries())
+      req = req.attach('photos', file, { filename: `p${i}.jpg`, contentType: 'image/jpeg' });
     return req;
   }
   return target.body === undefined ? req : req.send(target.body);
@@ -205,7 +258,13 @@ async function draftBuild(ctx: CaseContext, status = 'draft') {
   return createBuildRow(ctx.owner.id, { status });
 }
 
-const buildState = (id: number) => () => rows(Build.findByPk(id), LogEntry.findAll({ where: { buildId: id } }), Photo.findAll({ where: { buildId: id } }), Actuator.findAll({ where: { buildId: id } }));
+const buildState = (id: number) => () =>
+  rows(
+    Build.findByPk(id),
+    LogEntry.findAll({ where: { buildId: id } }),
+    Photo.findAll({ where: { buildId: id } }),
+    Actuator.findAll({ where: { buildId: id } }),
+  );
 
 export const fixtures: Record<string, Fixture> = {
   'POST /auth/logout': {
@@ -257,25 +316,87 @@ export const fixtures: Record<string, Fixture> = {
     },
   },
 
-  'POST /api/workbench/fit': workbench(wb.fitInput, { points: [0, 1, 2, 3].map((v) => ({ volts: v, displacement: 0.1 * v })), displacementUnit: 'um' }, 'gainNmPerV'),
-  'POST /api/workbench/peak-to-peak': workbench(wb.peakToPeakInput, { displacementPpNm: 2000, voltsPpV: 20, displacementResolutionNm: 10 }, 'gainNmPerV'),
-  'POST /api/workbench/creep': workbench(wb.creepInput, { samples: [0.1, 1, 10, 100].map((timeS) => ({ timeS, displacementNm: 1000 * (1 + 0.02 * Math.log10(timeS / 0.1)) })) }, 'gamma'),
-  'POST /api/workbench/expected-gain': workbench(wb.expectedGainInput, { actuator: 'tube-quadrant', material: { d31PmPerV: -171 }, lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.5 }, 'gainNmPerV'),
-  'POST /api/workbench/mixing': workbench(wb.mixingInput, { gain: [[10, 1], [1, 10]], limits: { vaMinV: -10, vaMaxV: 10, vbMinV: -10, vbMaxV: 10 } }, 'cautions'),
-  'POST /api/workbench/mixing-fit': workbench(
-    wb.gainMatrixFitInput,
-    { samples: [[0, 0], [1, 0], [0, 1], [1, 1], [2, 1]].map(([vaV, vbV]) => ({ vaV, vbV, xNm: 10 * vaV + vbV, yNm: vaV + 10 * vbV })) },
+  'POST /api/workbench/fit': workbench(
+    wb.fitInput,
+    { points: [0, 1, 2, 3].map((v) => ({ volts: v, displacement: 0.1 * v })), displacementUnit: 'um' },
     'gainNmPerV',
   ),
-  'POST /api/workbench/scan-plan': workbench(wb.scanPlanInput, { dacBits: 16, dacSpanV: 10, ampGainVPerV: 15, actuatorGainNmPerV: 5, pixelsPerLine: 256, lines: 256, lineRateHz: 1 }, 'cautions'),
-  'POST /api/workbench/resonance': workbench(wb.resonanceInput, { lengthM: 450e-6, thicknessM: 2e-6, widthM: 50e-6, youngsModulusPa: 169e9, densityKgPerM3: 2330 }, 'firstModeHz'),
-  'POST /api/workbench/drive-current': workbench(wb.driveCurrentInput, { capacitanceF: 10e-9, amplitudeV: 100, frequencyHz: 1000 }, 'cautions'),
+  'POST /api/workbench/peak-to-peak': workbench(
+    wb.peakToPeakInput,
+    { displacementPpNm: 2000, voltsPpV: 20, displacementResolutionNm: 10 },
+    'gainNmPerV',
+  ),
+  'POST /api/workbench/creep': workbench(
+    wb.creepInput,
+    { samples: [0.1, 1, 10, 100].map((timeS) => ({ timeS, displacementNm: 1000 * (1 + 0.02 * Math.log10(timeS / 0.1)) })) },
+    'gamma',
+  ),
+  'POST /api/workbench/expected-gain': workbench(
+    wb.expectedGainInput,
+    { actuator: 'tube-quadrant', material: { d31PmPerV: -171 }, lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.5 },
+    'gainNmPerV',
+  ),
+  'POST /api/workbench/mixing': workbench(
+    wb.mixingInput,
+    {
+      gain: [
+        [10, 1],
+        [1, 10],
+      ],
+      limits: { vaMinV: -10, vaMaxV: 10, vbMinV: -10, vbMaxV: 10 },
+    },
+    'cautions',
+  ),
+  'POST /api/workbench/mixing-fit': workbench(
+    wb.gainMatrixFitInput,
+    {
+      samples: [
+        [0, 0],
+        [1, 0],
+        [0, 1],
+        [1, 1],
+        [2, 1],
+      ].map(([vaV, vbV]) => ({ vaV, vbV, xNm: 10 * vaV + vbV, yNm: vaV + 10 * vbV })),
+    },
+    'gainNmPerV',
+  ),
+  'POST /api/workbench/scan-plan': workbench(
+    wb.scanPlanInput,
+    { dacBits: 16, dacSpanV: 10, ampGainVPerV: 15, actuatorGainNmPerV: 5, pixelsPerLine: 256, lines: 256, lineRateHz: 1 },
+    'cautions',
+  ),
+  'POST /api/workbench/resonance': workbench(
+    wb.resonanceInput,
+    { lengthM: 450e-6, thicknessM: 2e-6, widthM: 50e-6, youngsModulusPa: 169e9, densityKgPerM3: 2330 },
+    'firstModeHz',
+  ),
+  'POST /api/workbench/drive-current': workbench(
+    wb.driveCurrentInput,
+    { capacitanceF: 10e-9, amplitudeV: 100, frequencyHz: 1000 },
+    'cautions',
+  ),
   'POST /api/workbench/tunnelling': workbench(wb.tunnellingInput, { workFunctionEv: 4.5 }, 'decayConstantPerAngstrom'),
   'POST /api/workbench/convert': workbench(wb.unitConversionInput, { value: 1, from: 'nm', to: 'um' }, 'converted'),
-  'POST /api/workbench/loaded-gain': workbench(wbx.loadedGainInput, { freeGainNmPerV: 102.6, actuatorStiffnessNPerM: 300, springRateNPerM: 150 }, 'loadedGainNmPerV'),
-  'POST /api/workbench/tube': workbench(wbx.tubeInput, { lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.508, relPermittivity: 3400, youngsModulusPa: 60.6e9, densityKgPerM3: 7500 }, 'warnings'),
-  'POST /api/workbench/drive-limits': workbench(wbx.driveLimitsInput, { capacitanceF: 3.4e-9, amplitudeV: 100, frequencyHz: 1000 }, 'cautions'),
-  'POST /api/workbench/noise-floor': workbench(wbx.noiseFloorInput, { actuatorGainNmPerV: 102.6, dacBits: 16, dacSpanV: 10, ampGainVPerV: 30 }, 'warnings'),
+  'POST /api/workbench/loaded-gain': workbench(
+    wbx.loadedGainInput,
+    { freeGainNmPerV: 102.6, actuatorStiffnessNPerM: 300, springRateNPerM: 150 },
+    'loadedGainNmPerV',
+  ),
+  'POST /api/workbench/tube': workbench(
+    wbx.tubeInput,
+    { lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.508, relPermittivity: 3400, youngsModulusPa: 60.6e9, densityKgPerM3: 7500 },
+    'warnings',
+  ),
+  'POST /api/workbench/drive-limits': workbench(
+    wbx.driveLimitsInput,
+    { capacitanceF: 3.4e-9, amplitudeV: 100, frequencyHz: 1000 },
+    'cautions',
+  ),
+  'POST /api/workbench/noise-floor': workbench(
+    wbx.noiseFloorInput,
+    { actuatorGainNmPerV: 102.6, dacBits: 16, dacSpanV: 10, ampGainVPerV: 30 },
+    'warnings',
+  ),
 
   'POST /api/builds/:buildId/photos': {
     allowed: 'owner',
@@ -303,7 +424,10 @@ export const fixtures: Record<string, Fixture> = {
         body: { photoIds: [b.id, a.id] },
         state: buildState(build.id),
         async changed() {
-          expect((await Photo.findAll({ where: { buildId: build.id }, order: [['position', 'ASC']] })).map((p) => p.id)).toEqual([b.id, a.id]);
+          expect((await Photo.findAll({ where: { buildId: build.id }, order: [['position', 'ASC']] })).map((p) => p.id)).toEqual([
+            b.id,
+            a.id,
+          ]);
         },
       };
     },
@@ -478,7 +602,16 @@ export const fixtures: Record<string, Fixture> = {
     async make(ctx) {
       const build = await draftBuild(ctx);
       const part = await createPart();
-      const actuator = await Actuator.create({ buildId: build.id, partId: part.id, label: null, axis: 'Z', drive: 'single', amplifier: null, maxVolts: null, notes: null });
+      const actuator = await Actuator.create({
+        buildId: build.id,
+        partId: part.id,
+        label: null,
+        axis: 'Z',
+        drive: 'single',
+        amplifier: null,
+        maxVolts: null,
+        notes: null,
+      });
       return {
         params: { actuatorId: actuator.id },
         body: { label: 'Z tube' },
@@ -494,7 +627,16 @@ export const fixtures: Record<string, Fixture> = {
     async make(ctx) {
       const build = await draftBuild(ctx);
       const part = await createPart();
-      const actuator = await Actuator.create({ buildId: build.id, partId: part.id, label: null, axis: 'Z', drive: 'single', amplifier: null, maxVolts: null, notes: null });
+      const actuator = await Actuator.create({
+        buildId: build.id,
+        partId: part.id,
+        label: null,
+        axis: 'Z',
+        drive: 'single',
+        amplifier: null,
+        maxVolts: null,
+        notes: null,
+      });
       return {
         params: { actuatorId: actuator.id },
         state: buildState(build.id),
@@ -510,7 +652,16 @@ export const fixtures: Record<string, Fixture> = {
     async make(ctx) {
       const build = await draftBuild(ctx);
       const part = await createPart();
-      const actuator = await Actuator.create({ buildId: build.id, partId: part.id, label: null, axis: 'Z', drive: 'single', amplifier: null, maxVolts: null, notes: null });
+      const actuator = await Actuator.create({
+        buildId: build.id,
+        partId: part.id,
+        label: null,
+        axis: 'Z',
+        drive: 'single',
+        amplifier: null,
+        maxVolts: null,
+        notes: null,
+      });
       const runs = () => CalibrationRun.findAll({ where: { actuatorId: actuator.id } });
       return {
         params: { actuatorId: actuator.id },
@@ -784,7 +935,9 @@ export const fixtures: Record<string, Fixture> = {
         state: () => rows(threads()),
         async changed(res) {
           expect((await threads()).map((th) => th.starterId)).toEqual([actor.user!.id]);
-          expect((await Message.findAll({ where: { threadId: res.body.threadId } })).map((m) => m.body)).toEqual(['Are the bars still available?']);
+          expect((await Message.findAll({ where: { threadId: res.body.threadId } })).map((m) => m.body)).toEqual([
+            'Are the bars still available?',
+          ]);
         },
       };
     },
@@ -795,7 +948,12 @@ export const fixtures: Record<string, Fixture> = {
     async make({ owner, actor }) {
       const listing = await listingRow(owner.id);
       const starter = await createUser();
-      const thread = await MessageThread.create({ listingId: listing.id, starterId: starter.id, ownerId: owner.id, lastMessageAt: new Date() });
+      const thread = await MessageThread.create({
+        listingId: listing.id,
+        starterId: starter.id,
+        ownerId: owner.id,
+        lastMessageAt: new Date(),
+      });
       await Message.create({ threadId: thread.id, senderId: starter.id, body: 'Still there?' });
       const messages = () => Message.findAll({ where: { threadId: thread.id }, order: [['id', 'ASC']] });
       return {
@@ -803,7 +961,10 @@ export const fixtures: Record<string, Fixture> = {
         body: { body: 'Yes, two left.' },
         state: () => rows(messages()),
         async changed() {
-          expect((await messages()).map((m) => [m.senderId, m.body])).toEqual([[starter.id, 'Still there?'], [actor.user!.id, 'Yes, two left.']]);
+          expect((await messages()).map((m) => [m.senderId, m.body])).toEqual([
+            [starter.id, 'Still there?'],
+            [actor.user!.id, 'Yes, two left.'],
+          ]);
         },
       };
     },
@@ -812,5 +973,17 @@ export const fixtures: Record<string, Fixture> = {
 
 async function listingRow(ownerId: number) {
   const part = await createPart();
-  return Listing.create({ ownerId, partId: part.id, kind: 'offering', quantity: 3, condition: 'new', priceKind: 'free', priceAmount: null, currency: null, region: 'Here', shipsTo: null, notes: null });
+  return Listing.create({
+    ownerId,
+    partId: part.id,
+    kind: 'offering',
+    quantity: 3,
+    condition: 'new',
+    priceKind: 'free',
+    priceAmount: null,
+    currency: null,
+    region: 'Here',
+    shipsTo: null,
+    notes: null,
+  });
 }

@@ -51,10 +51,7 @@ export function parseStrd(text: string): StrdDataset {
     new RegExp(`Residual\\s+Standard Deviation\\s+${NUMBER}`),
     new RegExp(`residual standard deviation\\s*=\\s*${NUMBER}`, 'i'),
   ]);
-  const r2 = required(text, 'R-squared', [
-    new RegExp(`R-Squared\\s+${NUMBER}`),
-    new RegExp(`R-squared[^=\\n]*=\\s*${NUMBER}`, 'i'),
-  ]);
+  const r2 = required(text, 'R-squared', [new RegExp(`R-Squared\\s+${NUMBER}`), new RegExp(`R-squared[^=\\n]*=\\s*${NUMBER}`, 'i')]);
   const rss = find(text, [
     new RegExp(`^Residual\\s+\\d+\\s+${NUMBER}\\s+${NUMBER}`, 'm'),
     new RegExp(`residual sum of squares\\s*=\\s*${NUMBER}`, 'i'),

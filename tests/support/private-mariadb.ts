@@ -73,7 +73,14 @@ async function withOwnTmpdir<T>(dir: string, work: () => T | Promise<T>): Promis
 export async function startPrivateMariaDb(opts: { database?: string; migrate?: boolean } = {}): Promise<PrivateMariaDb> {
   const dir = mkdtempSync(join(scratchBase(), 'scanwright-private-'));
   const port = await freePort();
-  const db: Config['db'] = { host: '127.0.0.1', port, name: opts.database ?? 'scanwright_private', user: 'scanwright', password: 'private-test-password', poolMax: 10 };
+  const db: Config['db'] = {
+    host: '127.0.0.1',
+    port,
+    name: opts.database ?? 'scanwright_private',
+    user: 'scanwright',
+    password: 'private-test-password',
+    poolMax: 10,
+  };
   let child: ChildProcess | null = null;
   const handle: PrivateMariaDb = {
     dir,

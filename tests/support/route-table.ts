@@ -29,7 +29,8 @@ function walk(stack: Layer[], prefix: string, out: RouteEntry[]): void {
         }
       }
     } else if (layer.handle?.stack) {
-      if (!layer.slash && typeof layer.rawPath !== 'string') throw new Error('route-table: a router mounted on several paths cannot be listed');
+      if (!layer.slash && typeof layer.rawPath !== 'string')
+        throw new Error('route-table: a router mounted on several paths cannot be listed');
       walk(layer.handle.stack, layer.slash ? prefix : prefix + String(layer.rawPath), out);
     }
   }

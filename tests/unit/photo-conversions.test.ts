@@ -9,7 +9,9 @@ test('when more photos arrive at once than may convert together, then the rest w
   let maxActive = 0;
   let sawWaiting = false;
   let done = false;
-  const all = Promise.all(files.map((f, i) => processPhoto(f, i))).finally(() => { done = true; });
+  const all = Promise.all(files.map((f, i) => processPhoto(f, i))).finally(() => {
+    done = true;
+  });
   while (!done) {
     const load = conversionLoad();
     maxActive = Math.max(maxActive, load.active);

@@ -1,5 +1,13 @@
 import { describe, expect, test } from 'vitest';
-import { matchUnitSlip, modifiedZScore, medianAbsoluteDeviation, plausibilityFlags, POOR_FIT_R2, FEW_POINTS, LARGE_HYSTERESIS_PCT } from '../../shared/review/plausibility.ts';
+import {
+  matchUnitSlip,
+  modifiedZScore,
+  medianAbsoluteDeviation,
+  plausibilityFlags,
+  POOR_FIT_R2,
+  FEW_POINTS,
+  LARGE_HYSTERESIS_PCT,
+} from '../../shared/review/plausibility.ts';
 
 const clean = { n: 18, gainNmPerV: 100, r2: 0.999, hysteresisPctFs: 6 };
 const accepted = [96, 100, 104, 98, 102];
@@ -32,9 +40,12 @@ describe('plausibility flags', () => {
     expect(codes(plausibilityFlags({ ...clean, gainNmPerV: 160 }, accepted, null))).toEqual(['outlier']);
   });
 
-  test.each([25.4, 1000, 1 / 25.4, 1 / 1000, 10, 1 / 10, 2, 1 / 2, 2 * Math.SQRT2, 1 / (2 * Math.SQRT2)])('when the gain is the part median × %d (a unit slip), then unit-slip fires instead of outlier [practice; 25.4 exact per NBS 1959, 2√2 = p-p ÷ rms of a sine, calc]', (factor) => {
-    expect(codes(plausibilityFlags({ ...clean, gainNmPerV: 100 * factor }, accepted, null))).toEqual(['unit-slip']);
-  });
+  test.each([25.4, 1000, 1 / 25.4, 1 / 1000, 10, 1 / 10, 2, 1 / 2, 2 * Math.SQRT2, 1 / (2 * Math.SQRT2)])(
+    'when the gain is the part median × %d (a unit slip), then unit-slip fires instead of outlier [practice; 25.4 exact per NBS 1959, 2√2 = p-p ÷ rms of a sine, calc]',
+    (factor) => {
+      expect(codes(plausibilityFlags({ ...clean, gainNmPerV: 100 * factor }, accepted, null))).toEqual(['unit-slip']);
+    },
+  );
 
   test('when measured ÷ expected is outside 0.25–2, then expected-mismatch fires; inside, it stays quiet', () => {
     expect(codes(plausibilityFlags(clean, [], 30))).toEqual(['expected-mismatch']);

@@ -22,17 +22,24 @@ describe('quantileSorted (Hyndman & Fan type 7)', () => {
   // piecewise-linear interpolation of the empirical points ((k)/(n−1), x[k]).
   test('when values are random, then it equals linear interpolation of the points (k/(n−1), x_k)', () => {
     fc.assert(
-      fc.property(fc.array(fc.double({ min: -1e6, max: 1e6, noNaN: true }), { minLength: 2, maxLength: 60 }), fc.double({ min: 0, max: 1, noNaN: true }), (xs, p) => {
-        const s = xs.slice().sort((a, b) => a - b);
-        const n = s.length;
-        let expected = s[n - 1]!;
-        for (let k = 0; k < n - 1; k++) {
-          const a = k / (n - 1);
-          const b = (k + 1) / (n - 1);
-          if (p >= a && p <= b) { expected = s[k]! + ((p - a) / (b - a)) * (s[k + 1]! - s[k]!); break; }
-        }
-        expect(quantileSorted(s, p)!).toBeCloseTo(expected, 6);
-      }),
+      fc.property(
+        fc.array(fc.double({ min: -1e6, max: 1e6, noNaN: true }), { minLength: 2, maxLength: 60 }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        (xs, p) => {
+          const s = xs.slice().sort((a, b) => a - b);
+          const n = s.length;
+          let expected = s[n - 1]!;
+          for (let k = 0; k < n - 1; k++) {
+            const a = k / (n - 1);
+            const b = (k + 1) / (n - 1);
+            if (p >= a && p <= b) {
+              expected = s[k]! + ((p - a) / (b - a)) * (s[k + 1]! - s[k]!);
+              break;
+            }
+          }
+          expect(quantileSorted(s, p)!).toBeCloseTo(expected, 6);
+        },
+      ),
     );
   });
 

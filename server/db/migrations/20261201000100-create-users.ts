@@ -18,4 +18,6 @@ export const up: Migration = async ({ context: qi }) => {
   });
   await qi.addIndex('users', ['role']);
 };
-export const down: Migration = async ({ context: qi }) => { await qi.dropTable('users'); };
+export const down: Migration = async ({ context: qi }) => {
+  await qi.dropTable('users');
+};

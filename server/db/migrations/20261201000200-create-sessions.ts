@@ -13,4 +13,6 @@ export const up: Migration = async ({ context: qi }) => {
   await qi.addIndex('sessions', ['expires']);
   await qi.addIndex('sessions', ['user_id']);
 };
-export const down: Migration = async ({ context: qi }) => { await qi.dropTable('sessions'); };
+export const down: Migration = async ({ context: qi }) => {
+  await qi.dropTable('sessions');
+};

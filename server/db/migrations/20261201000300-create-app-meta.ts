@@ -10,4 +10,6 @@ export const up: Migration = async ({ context: qi }) => {
     updated_at: { type: DataTypes.DATE, allowNull: false },
   });
 };
-export const down: Migration = async ({ context: qi }) => { await qi.dropTable('app_meta'); };
+export const down: Migration = async ({ context: qi }) => {
+  await qi.dropTable('app_meta');
+};

@@ -36,4 +36,6 @@ export const up: Migration = async ({ context: qi }) => {
   await qi.addIndex('parts', ['status', 'gain_median_nm_per_v']);
   await qi.addIndex('parts', ['name']);
 };
-export const down: Migration = async ({ context: qi }) => { await qi.dropTable('parts'); };
+export const down: Migration = async ({ context: qi }) => {
+  await qi.dropTable('parts');
+};

@@ -13,7 +13,11 @@ export const up: Migration = async ({ context: qi }) => {
     },
     summary: { type: DataTypes.STRING(600), allowNull: false },
     body: { type: DataTypes.TEXT('medium'), allowNull: false },
-    stage: { type: DataTypes.ENUM('planning', 'assembling', 'first-signal', 'working', 'retired'), allowNull: false, defaultValue: 'planning' },
+    stage: {
+      type: DataTypes.ENUM('planning', 'assembling', 'first-signal', 'working', 'retired'),
+      allowNull: false,
+      defaultValue: 'planning',
+    },
     status: { type: DataTypes.ENUM('draft', 'submitted', 'published', 'returned', 'declined'), allowNull: false, defaultValue: 'draft' },
     cover_photo_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
     edited_since_review: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },

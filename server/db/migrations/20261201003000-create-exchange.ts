@@ -56,7 +56,12 @@ export const up: Migration = async ({ context: qi }) => {
 
   await qi.createTable('messages', {
     id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-    thread_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: 'message_threads', key: 'id' }, onDelete: 'CASCADE' },
+    thread_id: {
+      type: DataTypes.INTEGER.UNSIGNED,
+      allowNull: false,
+      references: { model: 'message_threads', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     sender_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'CASCADE' },
     body: { type: DataTypes.TEXT, allowNull: false },
     read_at: { type: DataTypes.DATE, allowNull: true },

@@ -8,5 +8,6 @@ export const up: Migration = async ({ context: qi }) => {
   await qi.addIndex('parts', ['status', 'name'], { name: 'parts_status_name' });
 };
 export const down: Migration = async ({ context: qi }) => {
-  for (const name of ['parts_status_category_gain', 'parts_status_runs', 'parts_status_created', 'parts_status_name']) await qi.removeIndex('parts', name);
+  for (const name of ['parts_status_category_gain', 'parts_status_runs', 'parts_status_created', 'parts_status_name'])
+    await qi.removeIndex('parts', name);
 };

@@ -32,7 +32,12 @@ function refit(run: StoredRun): unknown[] | null {
     const points: unknown = JSON.parse(run.points_json);
     if (!Array.isArray(points)) return null;
     const fit = fitCalibrationInUnits(
-      { points: points as RecordedCalibrationPoint[], voltageUnit: run.voltage_unit, displacementUnit: run.displacement_unit, model: run.model },
+      {
+        points: points as RecordedCalibrationPoint[],
+        voltageUnit: run.voltage_unit,
+        displacementUnit: run.displacement_unit,
+        model: run.model,
+      },
       { maxPoints: Number.MAX_SAFE_INTEGER },
     );
     return [fit.nonlinearityPctFs, run.id];
@@ -45,7 +50,10 @@ function refit(run: StoredRun): unknown[] | null {
  * Refits runs in batches by id, one transaction per batch; runs that no longer fit stay as stored.
  * `onlyIds` limits it to some runs (tests use it so they touch only their own rows).
  */
-export async function recomputeNonlinearity(qi: QueryInterface, onlyIds?: readonly number[]): Promise<{ updated: number; unfittable: number }> {
+export async function recomputeNonlinearity(
+  qi: QueryInterface,
+  onlyIds?: readonly number[],
+): Promise<{ updated: number; unfittable: number }> {
   let lastId = 0;
   let updated = 0;
   let unfittable = 0;
@@ -53,7 +61,11 @@ export async function recomputeNonlinearity(qi: QueryInterface, onlyIds?: readon
     const batch = await qi.sequelize.transaction(async (transaction: Transaction) => {
       const runs = await qi.sequelize.query<StoredRun>(
         `SELECT id, points_json, voltage_unit, displacement_unit, model FROM calibration_runs WHERE id > ?${onlyIds ? ' AND id IN (?)' : ''} ORDER BY id LIMIT ?`,
-        { replacements: onlyIds ? [lastId, onlyIds.length > 0 ? onlyIds : [0], BATCH] : [lastId, BATCH], type: QueryTypes.SELECT, transaction },
+        {
+          replacements: onlyIds ? [lastId, onlyIds.length > 0 ? onlyIds : [0], BATCH] : [lastId, BATCH],
+          type: QueryTypes.SELECT,
+          transaction,
+        },
       );
       for (const run of runs) {
         const columns = refit(run);

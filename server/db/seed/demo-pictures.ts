@@ -55,7 +55,8 @@ export function demoPictureAttacher(uploadsDir: string): AttachPictures {
       const processed = await processPhoto(png);
       await writeVariants(uploadsDir, [processed]);
       const stored = { ...storedColumns(processed), alt: picture.alt, position };
-      if ('build' in target) await Photo.create({ ...stored, buildId: target.build.id, entryId: null, ownerId: target.build.ownerId }, { transaction });
+      if ('build' in target)
+        await Photo.create({ ...stored, buildId: target.build.id, entryId: null, ownerId: target.build.ownerId }, { transaction });
       else if ('partId' in target) await PartPhoto.create({ ...stored, partId: target.partId }, { transaction });
       else await ListingPhoto.create({ ...stored, listingId: target.listingId }, { transaction });
     }

@@ -16,7 +16,15 @@ export function seededRandom(seed: number): () => number {
 }
 
 /** Up then down sweep from 0 to maxVolts; the loop opens by loopFraction of the span at mid-range. */
-export function demoSweep(opts: { gainNmPerV: number; loopFraction: number; noiseNm: number; maxVolts: number; steps: number; unit: DisplacementUnit; seed: number }): FitPoint[] {
+export function demoSweep(opts: {
+  gainNmPerV: number;
+  loopFraction: number;
+  noiseNm: number;
+  maxVolts: number;
+  steps: number;
+  unit: DisplacementUnit;
+  seed: number;
+}): FitPoint[] {
   const rand = seededRandom(opts.seed);
   const gauss = () => Math.sqrt(-2 * Math.log(1 - rand())) * Math.cos(2 * Math.PI * rand());
   const half = (opts.loopFraction * opts.gainNmPerV * opts.maxVolts) / 2;
@@ -26,5 +34,11 @@ export function demoSweep(opts: { gainNmPerV: number; loopFraction: number; nois
     const nm = opts.gainNmPerV * v + loop + opts.noiseNm * gauss();
     return { volts: Math.round(v * 100) / 100, displacement: Number(fromNm(nm, opts.unit).toPrecision(5)), sweep };
   };
-  return [...volts.map((v) => point(v, 'up')), ...volts.slice().reverse().map((v) => point(v, 'down'))];
+  return [
+    ...volts.map((v) => point(v, 'up')),
+    ...volts
+      .slice()
+      .reverse()
+      .map((v) => point(v, 'down')),
+  ];
 }

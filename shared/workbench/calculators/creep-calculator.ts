@@ -24,10 +24,20 @@ function logSpaced(from: number, to: number, n: number): number[] {
 function gammaWarnings(gamma: number): ResultWarning[] {
   const g = Number(gamma.toPrecision(2));
   if (gamma < 0) {
-    return [{ code: 'gamma_negative', message: `γ = ${g} is negative: the reading falls after the step. Creep of a piezo adds to the step; check the sign of the readings, drift of the indicator, or whether the record starts after the step settled. The projections below are not meaningful.` }];
+    return [
+      {
+        code: 'gamma_negative',
+        message: `γ = ${g} is negative: the reading falls after the step. Creep of a piezo adds to the step; check the sign of the readings, drift of the indicator, or whether the record starts after the step settled. The projections below are not meaningful.`,
+      },
+    ];
   }
   if (gamma < TYPICAL_GAMMA[0] / FAR_OUTSIDE_FACTOR || gamma > TYPICAL_GAMMA[1] * FAR_OUTSIDE_FACTOR) {
-    return [{ code: 'gamma_atypical', message: `γ = ${g} is far outside the 0.01–0.02 typical of open-loop PZT (vendor catalogues, recalled value, not yet checked against a source): check the record before trusting the projections.` }];
+    return [
+      {
+        code: 'gamma_atypical',
+        message: `γ = ${g} is far outside the 0.01–0.02 typical of open-loop PZT (vendor catalogues, recalled value, not yet checked against a source): check the record before trusting the projections.`,
+      },
+    ];
   }
   return [];
 }
@@ -44,7 +54,10 @@ export const creepCalculator = defineCalculator({
       if (s.timeS < tMin) tMin = s.timeS;
       if (s.timeS > tMax) tMax = s.timeS;
     }
-    const times = input.projectToS !== undefined && !STANDARD_TIMES_S.includes(input.projectToS) ? [...STANDARD_TIMES_S, input.projectToS] : STANDARD_TIMES_S;
+    const times =
+      input.projectToS !== undefined && !STANDARD_TIMES_S.includes(input.projectToS)
+        ? [...STANDARD_TIMES_S, input.projectToS]
+        : STANDARD_TIMES_S;
     const projections = times.map((timeS) => ({ timeS, pct: creepPct(fit.gamma, timeS) }));
     const curve = logSpaced(tMin, Math.max(tMax, input.projectToS ?? 0), CURVE_POINTS).map((timeS) => ({
       timeS,

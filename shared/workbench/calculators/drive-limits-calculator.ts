@@ -28,21 +28,28 @@ export const driveLimitsCalculator = defineCalculator({
     if ((input.rasterSwingPpV === undefined) !== (input.lineRateHz === undefined)) {
       throw new RangeError('Enter both the raster swing and its line rate, or neither');
     }
-    const raster = input.rasterSwingPpV !== undefined && input.lineRateHz !== undefined ? { swingPpV: input.rasterSwingPpV, lineRateHz: input.lineRateHz } : null;
+    const raster =
+      input.rasterSwingPpV !== undefined && input.lineRateHz !== undefined
+        ? { swingPpV: input.rasterSwingPpV, lineRateHz: input.lineRateHz }
+        : null;
     const sineSlew = sineSlewRateVPerS(v, f);
     const rasterSlewRateVPerS = raster ? triangleSlewRateVPerS(raster.swingPpV, raster.lineRateHz) : null;
     const currentLimit = input.currentLimitA;
     const slewLimit = input.slewRateVPerS;
     const currentLimitedMaxHz = currentLimit === undefined ? null : currentLimitedSineHz(currentLimit, c, v);
     const slewLimitedMaxHz = slewLimit === undefined ? null : slewLimitedSineHz(slewLimit, v);
-    const rasterCurrentLimitedLineRateHz = raster && currentLimit !== undefined ? currentLimitedLineRateHz(currentLimit, c, raster.swingPpV) : null;
+    const rasterCurrentLimitedLineRateHz =
+      raster && currentLimit !== undefined ? currentLimitedLineRateHz(currentLimit, c, raster.swingPpV) : null;
     const rasterSlewLimitedLineRateHz = raster && slewLimit !== undefined ? slewLimitedLineRateHz(slewLimit, raster.swingPpV) : null;
     const cornerHz = input.outputResistanceOhm === undefined ? null : rcCornerHz(input.outputResistanceOhm, c);
 
     const warnings: ResultWarning[] = [];
     const over = (code: string, asked: string, askedHz: number, limitHz: number | null, limit: string) => {
       if (limitHz !== null && askedHz > limitHz) {
-        warnings.push({ code, message: `${asked} ${hz(askedHz)} is above the ${hz(limitHz)} ${limit} allows: the amplifier cannot follow it and the drive distorts.` });
+        warnings.push({
+          code,
+          message: `${asked} ${hz(askedHz)} is above the ${hz(limitHz)} ${limit} allows: the amplifier cannot follow it and the drive distorts.`,
+        });
       }
     };
     over('sine_over_current_limit', 'The sine at', f, currentLimitedMaxHz, 'its current limit');

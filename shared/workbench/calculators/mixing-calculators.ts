@@ -18,7 +18,10 @@ export const mixingCalculator = defineCalculator({
     const sinAngle = mixingSinAngle(gain);
     const warnings: ResultWarning[] = [];
     if (sinAngle < POORLY_CONDITIONED_SIN) {
-      warnings.push({ code: 'nearly_parallel', message: `The two actuators move nearly along one line (|sin| of the angle ${Number(sinAngle.toPrecision(2))}): small gain errors become large position errors, and the region is a thin sliver.` });
+      warnings.push({
+        code: 'nearly_parallel',
+        message: `The two actuators move nearly along one line (|sin| of the angle ${Number(sinAngle.toPrecision(2))}): small gain errors become large position errors, and the region is a thin sliver.`,
+      });
     }
     // A drive limit bounds whatever waveform is sent: judged as a peak.
     const safety = assessSafety({ peakV: largestMagnitude([limits.vaMinV, limits.vaMaxV, limits.vbMinV, limits.vbMaxV]) });
@@ -27,7 +30,9 @@ export const mixingCalculator = defineCalculator({
       inverseVPerNm,
       sinAngle,
       regionNm: reachableRegion(gain, limits),
-      target: target ? { ...target, ...voltsFor(gain, target.xNm, target.yNm), reachable: isReachable(gain, limits, target.xNm, target.yNm) } : null,
+      target: target
+        ? { ...target, ...voltsFor(gain, target.xNm, target.yNm), reachable: isReachable(gain, limits, target.xNm, target.yNm) }
+        : null,
       warnings,
       cautions: safety.cautions,
       levelsCrossed: safety.crossed,

@@ -38,15 +38,25 @@ export const noiseFloorCalculator = defineCalculator({
     }
     let dac: ReturnType<typeof dacQuantisationNm> | null = null;
     if (input.dacBits !== undefined || input.dacSpanV !== undefined) {
-      if (input.dacBits === undefined || input.dacSpanV === undefined) throw new RangeError("The DAC's quantisation needs both its bits and its span");
-      dac = dacQuantisationNm({ dacBits: input.dacBits, dacSpanV: input.dacSpanV, ampGainVPerV: needsAmpGain("DAC's quantisation"), actuatorGainNmPerV: input.actuatorGainNmPerV });
+      if (input.dacBits === undefined || input.dacSpanV === undefined)
+        throw new RangeError("The DAC's quantisation needs both its bits and its span");
+      dac = dacQuantisationNm({
+        dacBits: input.dacBits,
+        dacSpanV: input.dacSpanV,
+        ampGainVPerV: needsAmpGain("DAC's quantisation"),
+        actuatorGainNmPerV: input.actuatorGainNmPerV,
+      });
     }
     let thermalNm: number | null = null;
     if (input.cantileverStiffnessNPerM !== undefined) {
       if (input.temperatureK === undefined) throw new RangeError("The cantilever's thermal noise needs the temperature");
       thermalNm = thermalNoiseNm(input.cantileverStiffnessNPerM, input.temperatureK);
     }
-    const given: [NoiseSource, number | null][] = [['amplifier', amplifierNm], ['dac', dac?.noiseNm ?? null], ['thermal', thermalNm]];
+    const given: [NoiseSource, number | null][] = [
+      ['amplifier', amplifierNm],
+      ['dac', dac?.noiseNm ?? null],
+      ['thermal', thermalNm],
+    ];
     const present = given.filter((g): g is [NoiseSource, number] => g[1] !== null);
     if (present.length === 0) throw new RangeError('Enter at least one noise source: the amplifier, the DAC or a cantilever');
     const totalNoiseNm = rootSumSquare(present.map(([, x]) => x));

@@ -34,7 +34,9 @@ export const peakToPeakCalculator = defineCalculator({
     // The sine's peak against ground is not known (it may ride on an offset): judge the whole swing as a peak.
     const safety = assessSafety({ peakV: input.voltsPpV });
     const levelsCrossed = safety.highVoltage
-      ? [`a ${Number(input.voltsPpV.toPrecision(3))} V peak-to-peak swing may peak at ${Number(input.voltsPpV.toPrecision(3))} V on an offset, above the 42.4 V peak level`]
+      ? [
+          `a ${Number(input.voltsPpV.toPrecision(3))} V peak-to-peak swing may peak at ${Number(input.voltsPpV.toPrecision(3))} V on an offset, above the 42.4 V peak level`,
+        ]
       : [];
     return { ...result, warnings, cautions: safety.cautions, levelsCrossed };
   },

@@ -1,12 +1,7 @@
 // Cantilever resonance page and API: the first bending mode, with a tip mass when one is given, and
 // the line-rate ceilings of the mode that actually moves (the loaded one).
 import { resonanceInput } from '../../schemas/workbench.ts';
-import {
-  cantileverSpringConstantNPerM,
-  rectangularBeamMassKg,
-  rectangularCantileverHz,
-  tipMassCorrectedHz,
-} from '../resonance.ts';
+import { cantileverSpringConstantNPerM, rectangularBeamMassKg, rectangularCantileverHz, tipMassCorrectedHz } from '../resonance.ts';
 import { lineRateCeilings } from '../scan-planner.ts';
 import { defineCalculator, type ResultWarning } from './calculator.ts';
 

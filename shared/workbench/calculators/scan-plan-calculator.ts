@@ -21,9 +21,16 @@ export const scanPlanCalculator = defineCalculator({
     const ceilings = input.resonanceHz === undefined ? null : lineRateCeilings(input.resonanceHz);
     const warnings: ResultWarning[] = [];
     if (ceilings && input.lineRateHz > ceilings.sineLikeHz) {
-      warnings.push({ code: 'line_rate_above_ceiling', message: 'The line rate is above f₀/10: the scanner will ring and the image will distort (common practice).' });
+      warnings.push({
+        code: 'line_rate_above_ceiling',
+        message: 'The line rate is above f₀/10: the scanner will ring and the image will distort (common practice).',
+      });
     } else if (ceilings && input.lineRateHz > ceilings.triangleHz) {
-      warnings.push({ code: 'line_rate_above_triangle_ceiling', message: 'The line rate is above f₀/100: a sharp triangular raster will ring at its turning points; round the turns or slow down (Bae & Granick 2000).' });
+      warnings.push({
+        code: 'line_rate_above_triangle_ceiling',
+        message:
+          'The line rate is above f₀/100: a sharp triangular raster will ring at its turning points; round the turns or slow down (Bae & Granick 2000).',
+      });
     }
     if (input.scanSizeNm !== undefined && input.scanSizeNm > resolution.rangeNm) {
       warnings.push({ code: 'scan_beyond_range', message: 'The scan size is larger than the range the drive chain can reach.' });
@@ -42,7 +49,9 @@ export const scanPlanCalculator = defineCalculator({
       lineRateCeilingSineLikeHz: ceilings?.sineLikeHz ?? null,
       lineRateCeilingTriangleHz: ceilings?.triangleHz ?? null,
       gainErrorAtLineRatePct:
-        input.resonanceHz !== undefined && input.lineRateHz < input.resonanceHz ? quasiStaticGainError(input.lineRateHz, input.resonanceHz) * 100 : null,
+        input.resonanceHz !== undefined && input.lineRateHz < input.resonanceHz
+          ? quasiStaticGainError(input.lineRateHz, input.resonanceHz) * 100
+          : null,
       steps: bitsAround(input.dacBits).map((bits) => ({ bits, lsbNm: dacResolution({ ...input, dacBits: bits }).lsbNm })),
       warnings,
       cautions: safety.cautions,

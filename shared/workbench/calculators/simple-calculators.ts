@@ -57,7 +57,11 @@ export const convertCalculator = defineCalculator({
       /** The value in nm (displacements), V (voltages) or nm/V (gains), the unit every computation works in. */
       valueInBase: convertQuantity(input.value, input.from, unitsOfKind(input.from)[0].key),
       valueNm: kindOfUnit(input.from) === 'displacement' ? convertQuantity(input.value, input.from, 'nm') : null,
-      inEveryUnit: unitsOfKind(input.from).map((unit) => ({ unit: unit.key, label: unit.label, value: convertQuantity(input.value, input.from, unit.key) })),
+      inEveryUnit: unitsOfKind(input.from).map((unit) => ({
+        unit: unit.key,
+        label: unit.label,
+        value: convertQuantity(input.value, input.from, unit.key),
+      })),
       warnings: [],
       cautions: [],
     };

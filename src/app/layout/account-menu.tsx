@@ -14,7 +14,10 @@ export function AccountMenu({ session }: { session: SessionDto | null }) {
   if (!session) return null;
   if (!session.user) {
     return (
-      <a href={paths.signIn(location.pathname + location.search)} className="inline-flex rounded-md border border-copper bg-copper px-3 py-1.5 text-sm font-medium text-white hover:bg-copper-dark">
+      <a
+        href={paths.signIn(location.pathname + location.search)}
+        className="inline-flex rounded-md border border-copper bg-copper px-3 py-1.5 text-sm font-medium text-white hover:bg-copper-dark"
+      >
         Sign in
       </a>
     );
@@ -24,10 +27,16 @@ export function AccountMenu({ session }: { session: SessionDto | null }) {
     <div className="flex items-center gap-3">
       <UserBadge login={u.login} name={u.name} />
       <div className="text-sm leading-tight">
-        <div className="font-medium" data-testid="signed-in-login">{u.login}</div>
-        <div className="text-xs text-teal-dark" data-testid="signed-in-role">{ROLE_LABEL[u.role]}</div>
+        <div className="font-medium" data-testid="signed-in-login">
+          {u.login}
+        </div>
+        <div className="text-xs text-teal-dark" data-testid="signed-in-role">
+          {ROLE_LABEL[u.role]}
+        </div>
       </div>
-      <Button variant="ghost" onClick={() => signOut.mutate()} disabled={signOut.isPending}>Sign out</Button>
+      <Button variant="ghost" onClick={() => signOut.mutate()} disabled={signOut.isPending}>
+        Sign out
+      </Button>
     </div>
   );
 }

@@ -31,7 +31,9 @@ export function AppShell() {
 
   return (
     <div className="flex min-h-screen flex-col">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-white focus:p-2">Skip to content</a>
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-white focus:p-2">
+        Skip to content
+      </a>
       <header className="border-b border-rule bg-paper/95">
         <div className="mx-auto flex max-w-6xl items-center gap-4 px-4 py-3">
           <Link to={paths.home} className="flex items-center gap-2" aria-label="Scanwright, start page">
@@ -39,9 +41,19 @@ export function AppShell() {
             <span className="text-lg font-semibold tracking-tight">Scanwright</span>
           </Link>
           <nav aria-label="Main" className="hidden flex-1 md:block">
-            <ul className="flex gap-1">{nav.map((n) => <li key={n.to}><NavLink to={n.to} className={linkClass}>{n.label}</NavLink></li>)}</ul>
+            <ul className="flex gap-1">
+              {nav.map((n) => (
+                <li key={n.to}>
+                  <NavLink to={n.to} className={linkClass}>
+                    {n.label}
+                  </NavLink>
+                </li>
+              ))}
+            </ul>
           </nav>
-          <div className="ml-auto hidden md:block"><AccountMenu session={session ?? null} /></div>
+          <div className="ml-auto hidden md:block">
+            <AccountMenu session={session ?? null} />
+          </div>
           <button
             type="button"
             className="ml-auto rounded border border-rule px-2 py-1 text-sm md:hidden"
@@ -54,8 +66,18 @@ export function AppShell() {
         </div>
         {open && (
           <nav id="mobile-nav" aria-label="Main" className="border-t border-rule px-4 py-2 md:hidden" onClick={() => setOpen(false)}>
-            <ul className="space-y-1">{nav.map((n) => <li key={n.to}><NavLink to={n.to} className={linkClass}>{n.label}</NavLink></li>)}</ul>
-            <div className="mt-3 border-t border-rule pt-3"><AccountMenu session={session ?? null} /></div>
+            <ul className="space-y-1">
+              {nav.map((n) => (
+                <li key={n.to}>
+                  <NavLink to={n.to} className={linkClass}>
+                    {n.label}
+                  </NavLink>
+                </li>
+              ))}
+            </ul>
+            <div className="mt-3 border-t border-rule pt-3">
+              <AccountMenu session={session ?? null} />
+            </div>
           </nav>
         )}
       </header>
@@ -64,7 +86,9 @@ export function AppShell() {
         {signInProblem && (
           <div className="mb-4">
             <Notice tone="danger" title="Sign-in did not complete">
-              {signInProblem === 'suspended' ? 'This account is suspended. Contact an admin if you think this is a mistake.' : 'Please try again.'}
+              {signInProblem === 'suspended'
+                ? 'This account is suspended. Contact an admin if you think this is a mistake.'
+                : 'Please try again.'}
             </Notice>
           </div>
         )}

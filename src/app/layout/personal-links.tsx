@@ -15,7 +15,11 @@ export function PersonalLinks() {
       <ul className="mx-auto flex max-w-6xl flex-wrap gap-x-4 gap-y-1 px-4 py-1.5 text-xs">
         {links.map((l) => (
           <li key={l.to}>
-            <NavLink to={l.to} end className={({ isActive }) => (isActive ? 'font-semibold text-copper-dark' : 'text-ink-soft hover:text-copper')}>
+            <NavLink
+              to={l.to}
+              end
+              className={({ isActive }) => (isActive ? 'font-semibold text-copper-dark' : 'text-ink-soft hover:text-copper')}
+            >
               {l.label}
             </NavLink>
           </li>

@@ -24,7 +24,9 @@ function axis(min: number, max: number): { domain: [number, number]; ticks: numb
   const hi = max + pad;
   const raw = (hi - lo) / 5;
   const power = 10 ** Math.floor(Math.log10(raw));
-  const step = [1, 2, 2.5, 5, 10].map((m) => m * power).reduce((best, s) => (Math.abs(Math.log(s / raw)) < Math.abs(Math.log(best / raw)) ? s : best));
+  const step = [1, 2, 2.5, 5, 10]
+    .map((m) => m * power)
+    .reduce((best, s) => (Math.abs(Math.log(s / raw)) < Math.abs(Math.log(best / raw)) ? s : best));
   const ticks: number[] = [];
   for (let t = Math.ceil(lo / step) * step; t <= hi; t += step) ticks.push(Number(t.toPrecision(12)));
   return { domain: [lo, hi], ticks };
@@ -46,7 +48,11 @@ function thin<T>(items: readonly T[], max: number): T[] {
  * (each joined faintly in recorded order so the hysteresis loop shows), unswept points in ink,
  * and the fitted line across the measured range. Import lazily: recharts is large.
  */
-export function CalibrationChart({ points: all, fit, height = 300 }: {
+export function CalibrationChart({
+  points: all,
+  fit,
+  height = 300,
+}: {
   points: readonly CalibrationChartPoint[];
   fit: { interceptNm: number; gainNmPerV: number } | null;
   height?: number;
@@ -58,9 +64,13 @@ export function CalibrationChart({ points: all, fit, height = 300 }: {
   const volts = points.map((p) => p.volts);
   const vMin = Math.min(...volts);
   const vMax = Math.max(...volts);
-  const line = fit && points.length > 1 && vMax > vMin
-    ? ([{ x: vMin, y: fit.interceptNm + fit.gainNmPerV * vMin }, { x: vMax, y: fit.interceptNm + fit.gainNmPerV * vMax }] as const)
-    : null;
+  const line =
+    fit && points.length > 1 && vMax > vMin
+      ? ([
+          { x: vMin, y: fit.interceptNm + fit.gainNmPerV * vMin },
+          { x: vMax, y: fit.interceptNm + fit.gainNmPerV * vMax },
+        ] as const)
+      : null;
   const ys = [...points.map((p) => p.displacementNm), ...(line ? [line[0].y, line[1].y] : [])];
   const x = axis(vMin, vMax);
   const y = axis(Math.min(...ys), Math.max(...ys));
@@ -89,7 +99,15 @@ export function CalibrationChart({ points: all, fit, height = 300 }: {
             tick={tick}
             tickFormatter={number}
             width={52}
-            label={{ value: 'Displacement (nm)', angle: -90, position: 'insideLeft', offset: 0, fill: SOFT, fontSize: 12, style: { textAnchor: 'middle' } }}
+            label={{
+              value: 'Displacement (nm)',
+              angle: -90,
+              position: 'insideLeft',
+              offset: 0,
+              fill: SOFT,
+              fontSize: 12,
+              style: { textAnchor: 'middle' },
+            }}
           />
           <Tooltip
             cursor={{ strokeDasharray: '3 3' }}
@@ -97,16 +115,62 @@ export function CalibrationChart({ points: all, fit, height = 300 }: {
             contentStyle={{ fontFamily: tick.fontFamily, fontSize: 12, borderColor: RULE }}
           />
           {line && <ReferenceLine segment={[line[0], line[1]]} stroke={INK} strokeWidth={1.5} ifOverflow="hidden" />}
-          {up.length > 0 && <Scatter name="Up sweep" data={up} fill={COPPER} shape="circle" line={{ stroke: COPPER, strokeOpacity: 0.35 }} isAnimationActive={false} />}
-          {down.length > 0 && <Scatter name="Down sweep" data={down} fill={TEAL} shape="triangle" line={{ stroke: TEAL, strokeOpacity: 0.35 }} isAnimationActive={false} />}
+          {up.length > 0 && (
+            <Scatter
+              name="Up sweep"
+              data={up}
+              fill={COPPER}
+              shape="circle"
+              line={{ stroke: COPPER, strokeOpacity: 0.35 }}
+              isAnimationActive={false}
+            />
+          )}
+          {down.length > 0 && (
+            <Scatter
+              name="Down sweep"
+              data={down}
+              fill={TEAL}
+              shape="triangle"
+              line={{ stroke: TEAL, strokeOpacity: 0.35 }}
+              isAnimationActive={false}
+            />
+          )}
           {plain.length > 0 && <Scatter name="Points" data={plain} fill={INK} shape="circle" isAnimationActive={false} />}
         </ScatterChart>
       </ResponsiveContainer>
       <ul className="mt-1 flex flex-wrap justify-center gap-x-4 gap-y-1 text-xs text-ink-soft" aria-label="Legend">
-        {up.length > 0 && <li className="flex items-center gap-1"><svg width="10" height="10" aria-hidden="true"><circle cx="5" cy="5" r="4" fill={COPPER} /></svg>Up sweep</li>}
-        {down.length > 0 && <li className="flex items-center gap-1"><svg width="10" height="10" aria-hidden="true"><path d="M5 1 9 9H1z" fill={TEAL} /></svg>Down sweep</li>}
-        {plain.length > 0 && <li className="flex items-center gap-1"><svg width="10" height="10" aria-hidden="true"><circle cx="5" cy="5" r="4" fill={INK} /></svg>Points</li>}
-        {line && <li className="flex items-center gap-1"><svg width="16" height="10" aria-hidden="true"><path d="M1 5h14" stroke={INK} strokeWidth="1.5" /></svg>Fitted line</li>}
+        {up.length > 0 && (
+          <li className="flex items-center gap-1">
+            <svg width="10" height="10" aria-hidden="true">
+              <circle cx="5" cy="5" r="4" fill={COPPER} />
+            </svg>
+            Up sweep
+          </li>
+        )}
+        {down.length > 0 && (
+          <li className="flex items-center gap-1">
+            <svg width="10" height="10" aria-hidden="true">
+              <path d="M5 1 9 9H1z" fill={TEAL} />
+            </svg>
+            Down sweep
+          </li>
+        )}
+        {plain.length > 0 && (
+          <li className="flex items-center gap-1">
+            <svg width="10" height="10" aria-hidden="true">
+              <circle cx="5" cy="5" r="4" fill={INK} />
+            </svg>
+            Points
+          </li>
+        )}
+        {line && (
+          <li className="flex items-center gap-1">
+            <svg width="16" height="10" aria-hidden="true">
+              <path d="M1 5h14" stroke={INK} strokeWidth="1.5" />
+            </svg>
+            Fitted line
+          </li>
+        )}
       </ul>
     </div>
   );

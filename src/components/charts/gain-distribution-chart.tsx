@@ -43,7 +43,12 @@ function logTicks(lo: number, hi: number): number[] {
  * and the expected gain as a dashed line. Switches to a log scale when values span more than ×20
  * (a unit slip would otherwise squash the rest). Import lazily: recharts is large.
  */
-export function GainDistributionChart({ gains, candidateNmPerV, expectedNmPerV = null, height = 150 }: {
+export function GainDistributionChart({
+  gains,
+  candidateNmPerV,
+  expectedNmPerV = null,
+  height = 150,
+}: {
   gains: number[];
   candidateNmPerV: number;
   expectedNmPerV?: number | null;
@@ -77,20 +82,84 @@ export function GainDistributionChart({ gains, candidateNmPerV, expectedNmPerV =
             label={{ value: `Gain (nm/V)${log ? ', log scale' : ''}`, position: 'bottom', offset: 6, fill: SOFT, fontSize: 12 }}
           />
           <YAxis type="number" dataKey="y" domain={[0, 1]} hide />
-          {s.p25 !== null && s.p75 !== null && <ReferenceArea x1={s.p25} x2={s.p75} y1={0.22} y2={0.78} fill={TEAL} fillOpacity={0.14} stroke={TEAL} strokeOpacity={0.6} />}
-          {s.min !== null && s.p25 !== null && <ReferenceLine segment={[{ x: s.min, y: 0.5 }, { x: s.p25, y: 0.5 }]} stroke={TEAL} />}
-          {s.max !== null && s.p75 !== null && <ReferenceLine segment={[{ x: s.p75, y: 0.5 }, { x: s.max, y: 0.5 }]} stroke={TEAL} />}
-          {s.median !== null && <ReferenceLine segment={[{ x: s.median, y: 0.16 }, { x: s.median, y: 0.84 }]} stroke={TEAL_DARK} strokeWidth={2.5} />}
+          {s.p25 !== null && s.p75 !== null && (
+            <ReferenceArea x1={s.p25} x2={s.p75} y1={0.22} y2={0.78} fill={TEAL} fillOpacity={0.14} stroke={TEAL} strokeOpacity={0.6} />
+          )}
+          {s.min !== null && s.p25 !== null && (
+            <ReferenceLine
+              segment={[
+                { x: s.min, y: 0.5 },
+                { x: s.p25, y: 0.5 },
+              ]}
+              stroke={TEAL}
+            />
+          )}
+          {s.max !== null && s.p75 !== null && (
+            <ReferenceLine
+              segment={[
+                { x: s.p75, y: 0.5 },
+                { x: s.max, y: 0.5 },
+              ]}
+              stroke={TEAL}
+            />
+          )}
+          {s.median !== null && (
+            <ReferenceLine
+              segment={[
+                { x: s.median, y: 0.16 },
+                { x: s.median, y: 0.84 },
+              ]}
+              stroke={TEAL_DARK}
+              strokeWidth={2.5}
+            />
+          )}
           {expectedNmPerV ? <ReferenceLine x={expectedNmPerV} stroke={INK} strokeDasharray="5 4" ifOverflow="extendDomain" /> : null}
-          {dots.length > 0 && <Scatter name="Accepted runs" data={dots} fill={TEAL} fillOpacity={0.75} shape="circle" isAnimationActive={false} />}
-          <Scatter name="This run" data={[{ gain: candidate, y: 0.5 }]} fill={COPPER} stroke={INK} shape="diamond" legendType="diamond" isAnimationActive={false} />
+          {dots.length > 0 && (
+            <Scatter name="Accepted runs" data={dots} fill={TEAL} fillOpacity={0.75} shape="circle" isAnimationActive={false} />
+          )}
+          <Scatter
+            name="This run"
+            data={[{ gain: candidate, y: 0.5 }]}
+            fill={COPPER}
+            stroke={INK}
+            shape="diamond"
+            legendType="diamond"
+            isAnimationActive={false}
+          />
         </ScatterChart>
       </ResponsiveContainer>
       <ul className="mt-1 flex flex-wrap justify-center gap-x-4 gap-y-1 text-xs text-ink-soft" aria-label="Legend">
-        {dots.length > 0 && <li className="flex items-center gap-1"><svg width="10" height="10" aria-hidden="true"><circle cx="5" cy="5" r="4" fill={TEAL} /></svg>Accepted runs</li>}
-        {s.n > 1 && <li className="flex items-center gap-1"><svg width="16" height="10" aria-hidden="true"><rect x="1" y="1" width="14" height="8" fill={TEAL} fillOpacity="0.14" stroke={TEAL} /><path d="M8 0v10" stroke={TEAL_DARK} strokeWidth="2" /></svg>Quartiles and median</li>}
-        <li className="flex items-center gap-1"><svg width="12" height="12" aria-hidden="true"><path d="M6 0.5 11.5 6 6 11.5 0.5 6z" fill={COPPER} stroke={INK} /></svg>This run</li>
-        {expectedNmPerV ? <li className="flex items-center gap-1"><svg width="16" height="10" aria-hidden="true"><path d="M1 5h14" stroke={INK} strokeDasharray="4 3" /></svg>Expected from geometry</li> : null}
+        {dots.length > 0 && (
+          <li className="flex items-center gap-1">
+            <svg width="10" height="10" aria-hidden="true">
+              <circle cx="5" cy="5" r="4" fill={TEAL} />
+            </svg>
+            Accepted runs
+          </li>
+        )}
+        {s.n > 1 && (
+          <li className="flex items-center gap-1">
+            <svg width="16" height="10" aria-hidden="true">
+              <rect x="1" y="1" width="14" height="8" fill={TEAL} fillOpacity="0.14" stroke={TEAL} />
+              <path d="M8 0v10" stroke={TEAL_DARK} strokeWidth="2" />
+            </svg>
+            Quartiles and median
+          </li>
+        )}
+        <li className="flex items-center gap-1">
+          <svg width="12" height="12" aria-hidden="true">
+            <path d="M6 0.5 11.5 6 6 11.5 0.5 6z" fill={COPPER} stroke={INK} />
+          </svg>
+          This run
+        </li>
+        {expectedNmPerV ? (
+          <li className="flex items-center gap-1">
+            <svg width="16" height="10" aria-hidden="true">
+              <path d="M1 5h14" stroke={INK} strokeDasharray="4 3" />
+            </svg>
+            Expected from geometry
+          </li>
+        ) : null}
       </ul>
     </div>
   );

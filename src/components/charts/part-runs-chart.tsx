@@ -1,4 +1,16 @@
-import { CartesianGrid, ReferenceArea, ReferenceLine, ResponsiveContainer, Scatter, ScatterChart, Tooltip, XAxis, YAxis, type TooltipContentProps, type TooltipValueType } from 'recharts';
+import {
+  CartesianGrid,
+  ReferenceArea,
+  ReferenceLine,
+  ResponsiveContainer,
+  Scatter,
+  ScatterChart,
+  Tooltip,
+  XAxis,
+  YAxis,
+  type TooltipContentProps,
+  type TooltipValueType,
+} from 'recharts';
 
 /** One accepted run as the strip plot shows it. */
 export interface PartRunsChartRun {
@@ -24,7 +36,8 @@ const jitter = (i: number) => 0.25 + ((i * 0.618034) % 1) * 0.5;
 
 function logTicks(lo: number, hi: number): number[] {
   const ticks: number[] = [];
-  for (let e = Math.floor(Math.log10(lo)); e <= Math.ceil(Math.log10(hi)); e++) for (const m of [1, 2, 5]) if (m * 10 ** e >= lo && m * 10 ** e <= hi) ticks.push(m * 10 ** e);
+  for (let e = Math.floor(Math.log10(lo)); e <= Math.ceil(Math.log10(hi)); e++)
+    for (const m of [1, 2, 5]) if (m * 10 ** e >= lo && m * 10 ** e <= hi) ticks.push(m * 10 ** e);
   return ticks;
 }
 
@@ -49,7 +62,9 @@ function RunTooltip({ active, payload }: TooltipContentProps<TooltipValueType, s
     <div className="max-w-64 rounded-md border border-rule bg-white px-3 py-2 text-xs shadow">
       <p className="num text-sm font-semibold">{fmt(dot.gainNmPerV)} nm/V</p>
       <p className="mt-1 font-medium">{dot.buildTitle}</p>
-      <p className="text-ink-soft">by {dot.maker} · {dot.method}</p>
+      <p className="text-ink-soft">
+        by {dot.maker} · {dot.method}
+      </p>
     </div>
   );
 }
@@ -59,7 +74,14 @@ function RunTooltip({ active, payload }: TooltipContentProps<TooltipValueType, s
  * over the interquartile box with the median, and the expected gain from geometry as a dashed line in
  * an amber band. Hover or focus a dot for its build, maker and method. Import lazily: recharts is large.
  */
-export function PartRunsChart({ runs, median, p25, p75, expected, height = 170 }: {
+export function PartRunsChart({
+  runs,
+  median,
+  p25,
+  p75,
+  expected,
+  height = 170,
+}: {
   runs: PartRunsChartRun[];
   median: number | null;
   p25: number | null;
@@ -67,7 +89,9 @@ export function PartRunsChart({ runs, median, p25, p75, expected, height = 170 }
   expected: { gainNmPerV: number; lowNmPerV: number; highNmPerV: number } | null;
   height?: number;
 }) {
-  const values = [...runs.map((r) => r.gainNmPerV), ...(expected ? [expected.lowNmPerV, expected.highNmPerV] : [])].filter((v) => Number.isFinite(v) && v > 0);
+  const values = [...runs.map((r) => r.gainNmPerV), ...(expected ? [expected.lowNmPerV, expected.highNmPerV] : [])].filter(
+    (v) => Number.isFinite(v) && v > 0,
+  );
   const lo = Math.min(...values);
   const hi = Math.max(...values);
   const log = hi / lo > 20;
@@ -80,15 +104,43 @@ export function PartRunsChart({ runs, median, p25, p75, expected, height = 170 }
       <ScatterChart margin={{ top: 8, right: 18, bottom: 24, left: 18 }} accessibilityLayer>
         <CartesianGrid stroke={RULE} strokeDasharray="3 3" vertical horizontal={false} />
         <XAxis
-          type="number" dataKey="gainNmPerV" name="Gain" scale={log ? 'log' : 'auto'} domain={domain} allowDataOverflow
-          ticks={log ? logTicks(domain[0], domain[1]) : linear.ticks} tick={tick} tickFormatter={fmt}
+          type="number"
+          dataKey="gainNmPerV"
+          name="Gain"
+          scale={log ? 'log' : 'auto'}
+          domain={domain}
+          allowDataOverflow
+          ticks={log ? logTicks(domain[0], domain[1]) : linear.ticks}
+          tick={tick}
+          tickFormatter={fmt}
           label={{ value: `Gain (nm/V)${log ? ', log scale' : ''}`, position: 'bottom', offset: 6, fill: SOFT, fontSize: 12 }}
         />
         <YAxis type="number" dataKey="y" domain={[0, 1]} hide />
-        {expected && <ReferenceArea x1={expected.lowNmPerV} x2={expected.highNmPerV} y1={0} y2={1} fill={AMBER} fillOpacity={0.1} ifOverflow="hidden" />}
+        {expected && (
+          <ReferenceArea
+            x1={expected.lowNmPerV}
+            x2={expected.highNmPerV}
+            y1={0}
+            y2={1}
+            fill={AMBER}
+            fillOpacity={0.1}
+            ifOverflow="hidden"
+          />
+        )}
         {expected && <ReferenceLine x={expected.gainNmPerV} stroke={AMBER} strokeWidth={1.5} strokeDasharray="6 4" ifOverflow="hidden" />}
-        {p25 !== null && p75 !== null && runs.length > 1 && <ReferenceArea x1={p25} x2={p75} y1={0.15} y2={0.85} fill={TEAL} fillOpacity={0.12} stroke={TEAL} strokeOpacity={0.6} />}
-        {median !== null && <ReferenceLine segment={[{ x: median, y: 0.08 }, { x: median, y: 0.92 }]} stroke={TEAL_DARK} strokeWidth={2.5} />}
+        {p25 !== null && p75 !== null && runs.length > 1 && (
+          <ReferenceArea x1={p25} x2={p75} y1={0.15} y2={0.85} fill={TEAL} fillOpacity={0.12} stroke={TEAL} strokeOpacity={0.6} />
+        )}
+        {median !== null && (
+          <ReferenceLine
+            segment={[
+              { x: median, y: 0.08 },
+              { x: median, y: 0.92 },
+            ]}
+            stroke={TEAL_DARK}
+            strokeWidth={2.5}
+          />
+        )}
         <Tooltip content={RunTooltip} cursor={false} isAnimationActive={false} />
         <Scatter name="Accepted runs" data={dots} fill={COPPER} fillOpacity={0.85} stroke="#fff" shape="circle" isAnimationActive={false} />
       </ScatterChart>

@@ -6,7 +6,14 @@ import { PhotoAltEditor } from './photo-alt-editor.tsx';
 import { requestErrorMessage } from './photo-errors.ts';
 
 /** One stored photo in the manager: small thumbnail, its alt text (editable), Earlier/Later, and Delete behind a second click. */
-export function ManagedPhoto({ photo, index, count, onMove, onSaveAlt, onDelete }: {
+export function ManagedPhoto({
+  photo,
+  index,
+  count,
+  onMove,
+  onSaveAlt,
+  onDelete,
+}: {
   photo: AttachedPhotoDto;
   index: number;
   count: number;
@@ -20,10 +27,13 @@ export function ManagedPhoto({ photo, index, count, onMove, onSaveAlt, onDelete 
   const run = (what: 'saving' | 'deleting', action: () => Promise<unknown>) => {
     setBusy(what);
     setError(undefined);
-    action().then(() => setBusy(null), (err: unknown) => {
-      setError(requestErrorMessage(err));
-      setBusy(null);
-    });
+    action().then(
+      () => setBusy(null),
+      (err: unknown) => {
+        setError(requestErrorMessage(err));
+        setBusy(null);
+      },
+    );
   };
   return (
     <li className="grid grid-cols-[4rem_1fr] gap-3 rounded-md border border-rule bg-white p-2 sm:grid-cols-[5rem_1fr]">
@@ -32,19 +42,55 @@ export function ManagedPhoto({ photo, index, count, onMove, onSaveAlt, onDelete 
         <span className="num absolute left-1 top-1 rounded bg-ink/80 px-1 text-xs text-paper">{n}</span>
       </div>
       <div className="flex min-w-0 flex-col gap-2">
-        <PhotoAltEditor key={photo.alt} photoId={photo.id} alt={photo.alt} pending={busy === 'saving'} onSave={(alt) => run('saving', () => onSaveAlt(alt))} />
+        <PhotoAltEditor
+          key={photo.alt}
+          photoId={photo.id}
+          alt={photo.alt}
+          pending={busy === 'saving'}
+          onSave={(alt) => run('saving', () => onSaveAlt(alt))}
+        />
         <div className="flex flex-wrap items-center gap-2" aria-live="polite">
           {count > 1 && (
             <>
-              <Button id={`photo-${photo.id}-up`} variant="ghost" className="px-2" disabled={index === 0} onClick={() => onMove(-1)} aria-label={`Move photo ${n} earlier`}>↑ Earlier</Button>
-              <Button id={`photo-${photo.id}-down`} variant="ghost" className="px-2" disabled={index === count - 1} onClick={() => onMove(1)} aria-label={`Move photo ${n} later`}>↓ Later</Button>
+              <Button
+                id={`photo-${photo.id}-up`}
+                variant="ghost"
+                className="px-2"
+                disabled={index === 0}
+                onClick={() => onMove(-1)}
+                aria-label={`Move photo ${n} earlier`}
+              >
+                ↑ Earlier
+              </Button>
+              <Button
+                id={`photo-${photo.id}-down`}
+                variant="ghost"
+                className="px-2"
+                disabled={index === count - 1}
+                onClick={() => onMove(1)}
+                aria-label={`Move photo ${n} later`}
+              >
+                ↓ Later
+              </Button>
             </>
           )}
-          {busy === 'deleting' ? <p className="text-sm text-ink-soft">Deleting…</p> : (
-            <ConfirmButton label="Delete" ariaLabel={`Delete photo ${n}: ${photo.alt}`} question="Delete this photo?" confirmLabel="Yes, delete" onConfirm={() => run('deleting', onDelete)} />
+          {busy === 'deleting' ? (
+            <p className="text-sm text-ink-soft">Deleting…</p>
+          ) : (
+            <ConfirmButton
+              label="Delete"
+              ariaLabel={`Delete photo ${n}: ${photo.alt}`}
+              question="Delete this photo?"
+              confirmLabel="Yes, delete"
+              onConfirm={() => run('deleting', onDelete)}
+            />
           )}
         </div>
-        {error && <p role="alert" className="text-sm text-danger">{error}</p>}
+        {error && (
+          <p role="alert" className="text-sm text-danger">
+            {error}
+          </p>
+        )}
       </div>
     </li>
   );

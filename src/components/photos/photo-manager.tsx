@@ -13,7 +13,13 @@ const NOTHING_EXTRA = {};
  * alt text, order and Delete, then the uploader. `upload` and `edits` are the place's mutations;
  * they refresh the page's data.
  */
-export function PhotoManager({ photos, upload, edits, label, empty }: {
+export function PhotoManager({
+  photos,
+  upload,
+  edits,
+  label,
+  empty,
+}: {
   photos: AttachedPhotoDto[];
   upload: SendPhoto<object>;
   edits: ReturnType<typeof useAttachedPhotoMutations>;
@@ -30,13 +36,26 @@ export function PhotoManager({ photos, upload, edits, label, empty }: {
       ) : (
         <ul className="space-y-2" aria-label={label}>
           {ordered.map((p, i) => (
-            <ManagedPhoto key={p.id} photo={p} index={i} count={ordered.length} onMove={(dir) => move(i, dir)}
-              onSaveAlt={(alt) => edits.update.mutateAsync({ photoId: p.id, alt })} onDelete={() => edits.remove.mutateAsync(p.id)} />
+            <ManagedPhoto
+              key={p.id}
+              photo={p}
+              index={i}
+              count={ordered.length}
+              onMove={(dir) => move(i, dir)}
+              onSaveAlt={(alt) => edits.update.mutateAsync({ photoId: p.id, alt })}
+              onDelete={() => edits.remove.mutateAsync(p.id)}
+            />
           ))}
         </ul>
       )}
-      {edits.reorder.error && <p role="alert" className="text-sm text-danger">The new order was not saved: {requestErrorMessage(edits.reorder.error)}</p>}
-      <p className="text-sm text-ink-soft">Each photo needs a short description (alt text): say what it shows, for people who cannot see it.</p>
+      {edits.reorder.error && (
+        <p role="alert" className="text-sm text-danger">
+          The new order was not saved: {requestErrorMessage(edits.reorder.error)}
+        </p>
+      )}
+      <p className="text-sm text-ink-soft">
+        Each photo needs a short description (alt text): say what it shows, for people who cannot see it.
+      </p>
       <PhotoUploader send={upload} extra={NOTHING_EXTRA} />
     </div>
   );

@@ -25,12 +25,18 @@ export function PhotoUploader<E extends object>({ send, extra, controls }: { sen
       {queue.items.length > 0 && (
         <>
           <ul className="space-y-2" aria-label="Photos to upload">
-            {queue.items.map((i) => <UploadQueueItem key={i.key} item={i} onAlt={(alt) => queue.setAlt(i.key, alt)} onRemove={() => queue.remove(i.key)} />)}
+            {queue.items.map((i) => (
+              <UploadQueueItem key={i.key} item={i} onAlt={(alt) => queue.setAlt(i.key, alt)} onRemove={() => queue.remove(i.key)} />
+            ))}
           </ul>
           <div className="flex flex-wrap items-end gap-3">
             {controls}
             {pending > 0 && <Button onClick={handleUpload}>Upload {pending === 1 ? '1 photo' : `${pending} photos`}</Button>}
-            {done && <Button variant="ghost" onClick={queue.clearDone}>Clear uploaded</Button>}
+            {done && (
+              <Button variant="ghost" onClick={queue.clearDone}>
+                Clear uploaded
+              </Button>
+            )}
           </div>
         </>
       )}

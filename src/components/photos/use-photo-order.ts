@@ -1,6 +1,9 @@
 import { useEffect, useMemo, useState } from 'react';
 
-interface Ordered { id: number; position: number }
+interface Ordered {
+  id: number;
+  position: number;
+}
 
 /**
  * Photos in display order, and `move(index, ±1)` that sends the new id order to `reorder`. After the

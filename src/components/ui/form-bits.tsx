@@ -3,16 +3,41 @@ import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
 import { ApiError } from '@/lib/api-client.ts';
 
 /** Text inputs, selects and text areas of the app's forms (16 px text so phones do not zoom). */
-export const inputClass = 'w-full rounded-md border border-rule bg-white px-2.5 py-1.5 text-base text-ink aria-[invalid=true]:border-danger';
+export const inputClass =
+  'w-full rounded-md border border-rule bg-white px-2.5 py-1.5 text-base text-ink aria-[invalid=true]:border-danger';
 
 /** A labelled control with an optional hint and its error; the control carries `id={id}` and `{...describe(id, error, !!hint)}`. */
-export function Field({ id, label, hint, error, children, className = '' }: { id: string; label: ReactNode; hint?: ReactNode; error?: string; children: ReactNode; className?: string }) {
+export function Field({
+  id,
+  label,
+  hint,
+  error,
+  children,
+  className = '',
+}: {
+  id: string;
+  label: ReactNode;
+  hint?: ReactNode;
+  error?: string;
+  children: ReactNode;
+  className?: string;
+}) {
   return (
     <div className={`min-w-0 ${className}`}>
-      <label htmlFor={id} className="mb-1 block text-sm font-medium">{label}</label>
+      <label htmlFor={id} className="mb-1 block text-sm font-medium">
+        {label}
+      </label>
       {children}
-      {hint && !error && <p id={`${id}-hint`} className="mt-1 text-xs text-ink-soft">{hint}</p>}
-      {error && <p id={`${id}-error`} className="mt-1 text-sm text-danger">{error}</p>}
+      {hint && !error && (
+        <p id={`${id}-hint`} className="mt-1 text-xs text-ink-soft">
+          {hint}
+        </p>
+      )}
+      {error && (
+        <p id={`${id}-error`} className="mt-1 text-sm text-danger">
+          {error}
+        </p>
+      )}
     </div>
   );
 }
@@ -24,7 +49,11 @@ export const describe = (id: string, error?: string, hint?: boolean) =>
 /** A form-level error: what the server said that belongs to no single field. */
 export function FormError({ message }: { message?: string }) {
   if (!message) return null;
-  return <p role="alert" className="rounded-md border border-danger bg-danger/5 px-3 py-2 text-sm text-danger">{message}</p>;
+  return (
+    <p role="alert" className="rounded-md border border-danger bg-danger/5 px-3 py-2 text-sm text-danger">
+      {message}
+    </p>
+  );
 }
 
 const isIssues = (d: unknown): d is { path: string; message: string }[] =>
@@ -36,7 +65,11 @@ export function applyServerErrors<T extends FieldValues>(error: unknown, setErro
   const rest = issues.filter((i) => !fields.includes(i.path.split('.')[0]!));
   for (const i of issues) if (!rest.includes(i)) setError(i.path as Path<T>, { type: 'server', message: i.message });
   if (issues.length === 0 || rest.length > 0) {
-    const message = rest.length ? rest.map((i) => i.message).join(' ') : error instanceof Error ? error.message : 'That did not work; try again.';
+    const message = rest.length
+      ? rest.map((i) => i.message).join(' ')
+      : error instanceof Error
+        ? error.message
+        : 'That did not work; try again.';
     setError('root.server' as Path<T>, { type: 'server', message });
   }
 }

@@ -16,7 +16,13 @@ const control = 'rounded-md border border-white/40 px-3 py-1.5 text-sm font-medi
  * A modal dialog showing one picture large with its description as the caption. Esc closes,
  * ←/→ move, Tab stays inside, and focus goes back to whatever opened it.
  */
-export function Lightbox({ images, index, onIndexChange, onClose, label = 'Photo' }: {
+export function Lightbox({
+  images,
+  index,
+  onIndexChange,
+  onClose,
+  label = 'Photo',
+}: {
   images: LightboxImage[];
   index: number;
   onIndexChange: (index: number) => void;
@@ -40,15 +46,24 @@ export function Lightbox({ images, index, onIndexChange, onClose, label = 'Photo
   const move = (delta: number) => onIndexChange((index + delta + count) % count);
 
   const handleKeyDown = (e: KeyboardEvent<HTMLDialogElement>) => {
-    if (e.key === 'ArrowLeft' && count > 1) { e.preventDefault(); move(-1); }
-    else if (e.key === 'ArrowRight' && count > 1) { e.preventDefault(); move(1); }
-    else if (e.key === 'Tab') {
+    if (e.key === 'ArrowLeft' && count > 1) {
+      e.preventDefault();
+      move(-1);
+    } else if (e.key === 'ArrowRight' && count > 1) {
+      e.preventDefault();
+      move(1);
+    } else if (e.key === 'Tab') {
       const items = Array.from(dialog.current?.querySelectorAll<HTMLElement>(FOCUSABLE) ?? []);
       if (items.length === 0) return;
       const first = items[0]!;
       const last = items[items.length - 1]!;
-      if (e.shiftKey && document.activeElement === first) { e.preventDefault(); last.focus(); }
-      else if (!e.shiftKey && document.activeElement === last) { e.preventDefault(); first.focus(); }
+      if (e.shiftKey && document.activeElement === first) {
+        e.preventDefault();
+        last.focus();
+      } else if (!e.shiftKey && document.activeElement === last) {
+        e.preventDefault();
+        first.focus();
+      }
     }
   };
 
@@ -58,14 +73,23 @@ export function Lightbox({ images, index, onIndexChange, onClose, label = 'Photo
       ref={dialog}
       aria-label={`${label} ${index + 1} of ${count}`}
       className="m-auto max-h-none max-w-none rounded-lg bg-ink p-0 shadow-2xl backdrop:bg-ink/90"
-      onCancel={(e) => { e.preventDefault(); onClose(); }}
+      onCancel={(e) => {
+        e.preventDefault();
+        onClose();
+      }}
       onKeyDown={handleKeyDown}
-      onClick={(e) => { if (e.target === e.currentTarget) onClose(); }}
+      onClick={(e) => {
+        if (e.target === e.currentTarget) onClose();
+      }}
     >
       <figure className="flex max-h-[calc(100dvh-2rem)] w-[min(96vw,72rem)] flex-col items-center gap-3 p-3 text-white sm:p-4">
         <div className="flex w-full items-center justify-between gap-2">
-          <p className="num text-sm text-white/80">{index + 1} / {count}</p>
-          <button type="button" className={control} onClick={onClose} autoFocus>Close</button>
+          <p className="num text-sm text-white/80">
+            {index + 1} / {count}
+          </p>
+          <button type="button" className={control} onClick={onClose} autoFocus>
+            Close
+          </button>
         </div>
         <img
           key={image.id}
@@ -78,8 +102,12 @@ export function Lightbox({ images, index, onIndexChange, onClose, label = 'Photo
         <figcaption className="max-w-3xl text-center text-sm">{image.alt}</figcaption>
         {count > 1 && (
           <div className="flex gap-2">
-            <button type="button" className={control} onClick={() => move(-1)} aria-label="Previous photo">← Previous</button>
-            <button type="button" className={control} onClick={() => move(1)} aria-label="Next photo">Next →</button>
+            <button type="button" className={control} onClick={() => move(-1)} aria-label="Previous photo">
+              ← Previous
+            </button>
+            <button type="button" className={control} onClick={() => move(1)} aria-label="Next photo">
+              Next →
+            </button>
           </div>
         )}
       </figure>

@@ -16,7 +16,11 @@ export function LoadError({ what, error, onRetry }: { what: string; error: Error
   return (
     <Notice tone="danger" title={`Could not load ${what}`}>
       <p>{error.message}</p>
-      <p><Button variant="secondary" onClick={onRetry}>Try again</Button></p>
+      <p>
+        <Button variant="secondary" onClick={onRetry}>
+          Try again
+        </Button>
+      </p>
     </Notice>
   );
 }

@@ -14,8 +14,12 @@ export function RouteError() {
       <h1 className="text-xl font-semibold">Something went wrong</h1>
       <p className="mt-2 text-ink-soft">{message}</p>
       <p className="mt-6 flex justify-center gap-4">
-        <button type="button" className="text-copper underline" onClick={() => window.location.reload()}>Reload</button>
-        <Link className="text-copper underline" to={paths.home}>Back to the start page</Link>
+        <button type="button" className="text-copper underline" onClick={() => window.location.reload()}>
+          Reload
+        </button>
+        <Link className="text-copper underline" to={paths.home}>
+          Back to the start page
+        </Link>
       </p>
     </div>
   );

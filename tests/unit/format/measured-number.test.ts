@@ -27,7 +27,12 @@ describe('formatPlusMinus', () => {
 });
 
 describe('formatShort', () => {
-  it.each([[104, '104'], [23.46, '23.5'], [0.012345, '0.0123'], [-5.8, '\u22125.8']])('when %d, then %s', (v, s) => {
+  it.each([
+    [104, '104'],
+    [23.46, '23.5'],
+    [0.012345, '0.0123'],
+    [-5.8, '\u22125.8'],
+  ])('when %d, then %s', (v, s) => {
     expect(formatShort(v)).toBe(s);
   });
 });

@@ -53,7 +53,9 @@ describe('peak-to-peak calculator', () => {
   });
 
   it('when the drive swings 50 V peak-to-peak, then the cautions show (the peak may reach the swing on an offset) [S: IEC 61010-1 — memory for the clause]', () => {
-    expect(peakToPeakCalculator.compute({ displacementPpNm: 5000, voltsPpV: 50, displacementResolutionNm: 10 }).cautions[0].id).toBe('levels');
+    expect(peakToPeakCalculator.compute({ displacementPpNm: 5000, voltsPpV: 50, displacementResolutionNm: 10 }).cautions[0].id).toBe(
+      'levels',
+    );
     expect(peakToPeakCalculator.compute({ displacementPpNm: 5000, voltsPpV: 20, displacementResolutionNm: 10 }).cautions).toEqual([]);
   });
 });
@@ -104,7 +106,10 @@ describe('expected-gain tolerance [S: GUM, JCGM 100:2008, 4.3.7 and 5.1.2]', () 
     const a = 1e-3;
     for (const field of ['lengthMm', 'outerDiameterMm', 'wallMm'] as const) {
       const h = 1e-6;
-      const dlng = (Math.log(expectedGain({ ...tube, [field]: tube[field] + h }).gainNmPerV) - Math.log(expectedGain({ ...tube, [field]: tube[field] - h }).gainNmPerV)) / (2 * h);
+      const dlng =
+        (Math.log(expectedGain({ ...tube, [field]: tube[field] + h }).gainNmPerV) -
+          Math.log(expectedGain({ ...tube, [field]: tube[field] - h }).gainNmPerV)) /
+        (2 * h);
       const t = expectedGainTolerance(tube, { [field]: a });
       expect(t.relStdUnc).toBeCloseTo(Math.abs(dlng) * (a / Math.sqrt(3)), 8);
     }

@@ -77,7 +77,10 @@ describe('fitCalibration against simple-statistics (npm) on seeded random data [
     const reference = linearRegression(pairs);
     const line = linearRegressionLine(reference);
     const sse = pairs.reduce((sum, [v, x]) => sum + (x - line(v)) ** 2, 0);
-    const fit = fitCalibration(pairs.map(([volts, displacementNm]) => ({ volts, displacementNm })), 'intercept');
+    const fit = fitCalibration(
+      pairs.map(([volts, displacementNm]) => ({ volts, displacementNm })),
+      'intercept',
+    );
     expectRelative(fit.gainNmPerV, reference.m, 1e-9);
     expectRelative(fit.interceptNm, reference.b, 1e-9);
     expectRelative(fit.r2, rSquared(pairs, line), 1e-9);
@@ -133,7 +136,7 @@ describe('fitCalibration worked examples [calc]', () => {
     expect(fit.gainCi95NmPerV[1]).toBeCloseTo(1.5 + half, 12);
     expect(fit.r2).toBeCloseTo(27 / 28, 14);
     expect(fit.spanNm).toBeCloseTo(3, 14);
-    expect(fit.nonlinearityPctFs).toBeCloseTo(((1 / 3) / 3) * 100, 12);
+    expect(fit.nonlinearityPctFs).toBeCloseTo((1 / 3 / 3) * 100, 12);
     expect(fit.residualsNm?.map((r) => Number(r.toFixed(12)))).toEqual([0.166666666667, -0.333333333333, 0.166666666667]);
     expect(fit.hysteresisPctFs).toBeNull();
     expect(fit.lineNm[0]).toBeCloseTo(-1 / 6, 14);
@@ -229,9 +232,7 @@ describe('fitCalibrationInUnits and columns', () => {
       { volts: 500, displacement: 0.065, sweep: 'down' as const },
     ];
     const inUnits = fitCalibrationInUnits({ points: recorded, voltageUnit: 'mV', displacementUnit: 'um', model: 'intercept' });
-    const direct = fitCalibration(
-      recorded.map((p) => ({ volts: p.volts / 1000, displacementNm: p.displacement * 1000, sweep: p.sweep })),
-    );
+    const direct = fitCalibration(recorded.map((p) => ({ volts: p.volts / 1000, displacementNm: p.displacement * 1000, sweep: p.sweep })));
     expect(inUnits).toEqual(direct);
     expect(inUnits.gainNmPerV).toBeCloseTo(95, 10);
   });
@@ -266,7 +267,18 @@ describe('fitCalibrationInUnits and columns', () => {
   it('when mapped to the DTO, then only the API fields remain', () => {
     const dto = toFitResultDto(fitCalibration([0, 1, 2].map((v) => ({ volts: v, displacementNm: 2 * v + (v === 1 ? 0.1 : 0) }))));
     expect(Object.keys(dto).sort()).toEqual(
-      ['gainCi95NmPerV', 'gainNmPerV', 'gainStdErrNmPerV', 'hysteresisPctFs', 'interceptNm', 'n', 'nonlinearityPctFs', 'r2', 'residualStdNm', 'spanNm'].sort(),
+      [
+        'gainCi95NmPerV',
+        'gainNmPerV',
+        'gainStdErrNmPerV',
+        'hysteresisPctFs',
+        'interceptNm',
+        'n',
+        'nonlinearityPctFs',
+        'r2',
+        'residualStdNm',
+        'spanNm',
+      ].sort(),
     );
   });
 });
@@ -293,7 +305,11 @@ describe('FitInputError', () => {
     expect(codeOf(() => fitCalibration([p(0, 0), p(1, Infinity), p(2, 2)]))).toBe('non_finite_value');
     const error = caught(() =>
       fitCalibrationInUnits({
-        points: [{ volts: 0, displacement: 0 }, { volts: 1, displacement: 1 }, { volts: 2, displacement: -Infinity }],
+        points: [
+          { volts: 0, displacement: 0 },
+          { volts: 1, displacement: 1 },
+          { volts: 2, displacement: -Infinity },
+        ],
         displacementUnit: 'nm',
       }),
     );
@@ -315,7 +331,14 @@ describe('FitInputError', () => {
   it('when a converted value overflows, then numeric_overflow', () => {
     expect(
       codeOf(() =>
-        fitCalibrationInUnits({ points: [{ volts: 0, displacement: 0 }, { volts: 1, displacement: 1e305 }, { volts: 2, displacement: 0 }], displacementUnit: 'mil' }),
+        fitCalibrationInUnits({
+          points: [
+            { volts: 0, displacement: 0 },
+            { volts: 1, displacement: 1e305 },
+            { volts: 2, displacement: 0 },
+          ],
+          displacementUnit: 'mil',
+        }),
       ),
     ).toBe('numeric_overflow');
     expect(codeOf(() => fitCalibration([p(0, 1e200), p(1, -1e200), p(2, 1e200)]))).toBe('numeric_overflow');

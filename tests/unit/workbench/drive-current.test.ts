@@ -50,7 +50,10 @@ describe('safety levels [S: IEC 61010-1 (2nd ed., 2001), clause 6.3.1 — memory
 
   it('when 1 µF sits at 150 V (150 µC), then stored charge is flagged; 3.4 nF at 100 V (0.34 µC) is high voltage only [calc]', () => {
     expect(assessSafety({ peakV: 150, chargeC: 150e-6 })).toMatchObject({ highVoltage: true, storedCharge: true });
-    expect(assessSafety({ peakV: 100, chargeC: storedCharge(3.4e-9, 100).chargeC })).toMatchObject({ highVoltage: true, storedCharge: false });
+    expect(assessSafety({ peakV: 100, chargeC: storedCharge(3.4e-9, 100).chargeC })).toMatchObject({
+      highVoltage: true,
+      storedCharge: false,
+    });
   });
 
   it('when a µF stack sits at 40 V (40 µC), then nothing is flagged; 5 µF at 10 V (50 µC) flags the charge alone', () => {

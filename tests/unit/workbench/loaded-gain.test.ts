@@ -106,7 +106,9 @@ describe('loaded-gain calculator', () => {
   });
 
   it('when the body has an unknown field or a negative spring rate, then the schema refuses it', () => {
-    expect(loadedGainInput.safeParse({ freeGainNmPerV: 100, actuatorStiffnessNPerM: 1000, springRateNPerM: 10, extra: 1 }).success).toBe(false);
+    expect(loadedGainInput.safeParse({ freeGainNmPerV: 100, actuatorStiffnessNPerM: 1000, springRateNPerM: 10, extra: 1 }).success).toBe(
+      false,
+    );
     expect(loadedGainInput.safeParse({ freeGainNmPerV: 100, actuatorStiffnessNPerM: 1000, springRateNPerM: -1 }).success).toBe(false);
   });
 });

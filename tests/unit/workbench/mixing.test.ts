@@ -60,12 +60,25 @@ describe('two-axis mixing [practice; small-angle, linear]', () => {
   });
 
   it('when the two directions are parallel, then inverting throws SingularMatrixError', () => {
-    expect(() => invertGain([[1, 2], [2, 4]])).toThrow(SingularMatrixError);
-    expect(() => invertGain([[0, 1], [0, 1]])).toThrow(SingularMatrixError);
+    expect(() =>
+      invertGain([
+        [1, 2],
+        [2, 4],
+      ]),
+    ).toThrow(SingularMatrixError);
+    expect(() =>
+      invertGain([
+        [0, 1],
+        [0, 1],
+      ]),
+    ).toThrow(SingularMatrixError);
   });
 
   it('when a noise-free grid is fitted, then G comes back with zero residuals [calc]', () => {
-    const g: GainMatrix = [[70, -65], [72, 68]];
+    const g: GainMatrix = [
+      [70, -65],
+      [72, 68],
+    ];
     const samples = [];
     for (const vaV of [-10, 0, 10, 20]) {
       for (const vbV of [-10, 0, 10]) samples.push({ vaV, vbV, ...applyGain(g, vaV, vbV) });
@@ -84,7 +97,10 @@ describe('two-axis mixing [practice; small-angle, linear]', () => {
   });
 
   it('when the indicator zero is offset, then the affine fit returns G and the offsets exactly, and the through-origin fit is biased [calc]', () => {
-    const g: GainMatrix = [[70, -65], [72, 68]];
+    const g: GainMatrix = [
+      [70, -65],
+      [72, 68],
+    ];
     const samples = [];
     for (const vaV of [0, 5, 10, 15]) {
       for (const vbV of [0, 5, 10]) {
@@ -108,7 +124,8 @@ describe('two-axis mixing [practice; small-angle, linear]', () => {
     const samples = [];
     const noise = [0.3, -0.2, 0.1, -0.4, 0.25, 0.05];
     for (const [k, vaV] of [0, 4, 8, 12, 16, 20].entries()) {
-      for (const vbV of [0, 10]) samples.push({ vaV, vbV, xNm: 12 + 95 * vaV + 3 * vbV + noise[k], yNm: -7 + 2 * vaV + 90 * vbV + noise[5 - k] });
+      for (const vbV of [0, 10])
+        samples.push({ vaV, vbV, xNm: 12 + 95 * vaV + 3 * vbV + noise[k], yNm: -7 + 2 * vaV + 90 * vbV + noise[5 - k] });
     }
     const fit = fitGainMatrix(samples);
     const level0 = samples.filter((s) => s.vbV === 0);
@@ -118,9 +135,16 @@ describe('two-axis mixing [practice; small-angle, linear]', () => {
   });
 
   it('when the values are extreme, then underflow, overflow and degeneracy are told apart', () => {
-    const base = [[0, 0], [1, 0], [0, 1], [1, 1]].map(([a, b]) => ({ vaV: a, vbV: b, xNm: a + b, yNm: a - b }));
+    const base = [
+      [0, 0],
+      [1, 0],
+      [0, 1],
+      [1, 1],
+    ].map(([a, b]) => ({ vaV: a, vbV: b, xNm: a + b, yNm: a - b }));
     expect(() => fitGainMatrix(base.map((s) => ({ ...s, vaV: s.vaV * 1e-200, vbV: s.vbV * 1e-200 })))).toThrow(/underflow/);
-    expect(() => fitGainMatrix(base.map((s) => ({ ...s, xNm: s.xNm * 1e300, vaV: s.vaV * 1e-10, vbV: s.vbV * 1e-10 })))).toThrow(/overflow/);
+    expect(() => fitGainMatrix(base.map((s) => ({ ...s, xNm: s.xNm * 1e300, vaV: s.vaV * 1e-10, vbV: s.vbV * 1e-10 })))).toThrow(
+      /overflow/,
+    );
     expect(() => fitGainMatrix(base.map((s) => ({ ...s, vbV: 0 })))).toThrow(/Vb is zero in every sample/);
   });
 

@@ -25,7 +25,10 @@ describe('thermal noise √(k_B·T/k) [S: equipartition theorem]', () => {
 
 describe('amplifier noise e_n·√B·G·g [calc; white noise]', () => {
   it('when 1 µV/√Hz over 10 kHz goes through ×30 and 100 nm/V, then 100 µV → 3 mV → 0.3 nm [calc]', () => {
-    expect(amplifierNoiseNm({ noiseDensityVPerRtHz: 1e-6, bandwidthHz: 1e4, ampGainVPerV: 30, actuatorGainNmPerV: 100 })).toBeCloseTo(0.3, 12);
+    expect(amplifierNoiseNm({ noiseDensityVPerRtHz: 1e-6, bandwidthHz: 1e4, ampGainVPerV: 30, actuatorGainNmPerV: 100 })).toBeCloseTo(
+      0.3,
+      12,
+    );
   });
 });
 

@@ -1,11 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import {
-  bitsNeeded,
-  dacResolution,
-  frameTiming,
-  lineRateCeilings,
-  quasiStaticGainError,
-} from '@shared/workbench/scan-planner.ts';
+import { bitsNeeded, dacResolution, frameTiming, lineRateCeilings, quasiStaticGainError } from '@shared/workbench/scan-planner.ts';
 
 describe('scan planner', () => {
   it('when 102.6 nm/V spans 300 V at 16 bit, then the step is 0.47 nm [calc] (LSB formula [practice])', () => {

@@ -59,17 +59,30 @@ describe('fitInput', () => {
 
 describe('other calculator inputs', () => {
   it('when an expected-gain body is parsed, then it is a valid ExpectedGainSpec for the dispatcher', () => {
-    const parsed: ExpectedGainInput = expectedGainInput.parse({ actuator: 'tube-quadrant', material: 'PZT-5H', lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.508 });
+    const parsed: ExpectedGainInput = expectedGainInput.parse({
+      actuator: 'tube-quadrant',
+      material: 'PZT-5H',
+      lengthMm: 12.7,
+      outerDiameterMm: 6.35,
+      wallMm: 0.508,
+    });
     const spec: ExpectedGainSpec = parsed;
-    expect(expectedGain(spec).gainNmPerV).toBeCloseTo(6.70, 2); // one quadrant [S: C. J. Chen, APL 60, 132 (1992); FIELD check value]
-    expect(expectedGainInput.safeParse({ actuator: 'bimorph-series', material: { d31PmPerV: -190 }, lengthMm: 10, thicknessMm: 0.5 }).success).toBe(true);
-    expect(expectedGainInput.safeParse({ actuator: 'bimorph-series', material: 'PZT-9', lengthMm: 10, thicknessMm: 0.5 }).success).toBe(false);
+    expect(expectedGain(spec).gainNmPerV).toBeCloseTo(6.7, 2); // one quadrant [S: C. J. Chen, APL 60, 132 (1992); FIELD check value]
+    expect(
+      expectedGainInput.safeParse({ actuator: 'bimorph-series', material: { d31PmPerV: -190 }, lengthMm: 10, thicknessMm: 0.5 }).success,
+    ).toBe(true);
+    expect(expectedGainInput.safeParse({ actuator: 'bimorph-series', material: 'PZT-9', lengthMm: 10, thicknessMm: 0.5 }).success).toBe(
+      false,
+    );
     expect(expectedGainInput.safeParse({ actuator: 'stack', material: 'PZT-5A', layers: 2.5 }).success).toBe(false);
     expect(expectedGainInput.safeParse({ actuator: 'tube-axial', material: 'PZT-5A', lengthMm: 10 }).success).toBe(false);
   });
 
   it('when mixing limits are inverted, then they are rejected', () => {
-    const gain = [[70, -70], [70, 70]];
+    const gain = [
+      [70, -70],
+      [70, 70],
+    ];
     expect(mixingInput.safeParse({ gain, limits: { vaMinV: 0, vaMaxV: 150, vbMinV: 0, vbMaxV: 150 } }).success).toBe(true);
     expect(mixingInput.safeParse({ gain, limits: { vaMinV: 150, vaMaxV: 0, vbMinV: 0, vbMaxV: 150 } }).success).toBe(false);
     expect(mixingInput.safeParse({ gain: [[1, 2]], limits: { vaMinV: 0, vaMaxV: 1, vbMinV: 0, vbMaxV: 1 } }).success).toBe(false);

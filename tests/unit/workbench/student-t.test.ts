@@ -1,12 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import {
-  lnGamma,
-  normalQuantile,
-  studentTQuantile,
-  studentTTwoSidedTail,
-  tCritical95,
-} from '@shared/workbench/student-t.ts';
+import { lnGamma, normalQuantile, studentTQuantile, studentTTwoSidedTail, tCritical95 } from '@shared/workbench/student-t.ts';
 
 // Composite Simpson rule, independent of the incomplete-beta code under test.
 function simpson(f: (x: number) => number, a: number, b: number, intervals: number): number {

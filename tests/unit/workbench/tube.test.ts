@@ -87,13 +87,18 @@ describe('tube bending mode [S: Rao, Mechanical Vibrations; Timoshenko]', () => 
   });
 
   it('when I/A = (OD²+ID²)/16 is put into f₁ = (1.8751²/2π)·√(EI/ρAL⁴) by hand, then it agrees [calc]', () => {
-    const hand = ((1.8751 ** 2) / (2 * Math.PI)) * Math.sqrt((60.6e9 * (OD ** 2 + ID ** 2)) / (16 * 7500)) / L ** 2;
+    const hand = ((1.8751 ** 2 / (2 * Math.PI)) * Math.sqrt((60.6e9 * (OD ** 2 + ID ** 2)) / (16 * 7500))) / L ** 2;
     expect(tubeBendingModeHz(fieldTube) / hand).toBeCloseTo(1, 4);
   });
 
   it('when the section is replaced by a rectangle of the same I/A (t = √(12·I/A)), then the bar shortcut gives the same f₁ [calc: independent route]', () => {
     const { areaM2, secondMomentM4 } = annulusSection(OD, ID);
-    const bar = rectangularCantileverHz({ lengthM: L, thicknessM: Math.sqrt((12 * secondMomentM4) / areaM2), youngsModulusPa: 60.6e9, densityKgPerM3: 7500 });
+    const bar = rectangularCantileverHz({
+      lengthM: L,
+      thicknessM: Math.sqrt((12 * secondMomentM4) / areaM2),
+      youngsModulusPa: 60.6e9,
+      densityKgPerM3: 7500,
+    });
     expect(tubeBendingModeHz(fieldTube) / bar).toBeCloseTo(1, 12);
   });
 

@@ -43,7 +43,12 @@ describe('creep [S: PI catalogue 1998–2006]', () => {
   });
 
   it('when the record is too short or has one time only, then it throws', () => {
-    expect(() => fitCreep([{ timeS: 1, displacementNm: 1 }, { timeS: 2, displacementNm: 2 }])).toThrow(RangeError);
+    expect(() =>
+      fitCreep([
+        { timeS: 1, displacementNm: 1 },
+        { timeS: 2, displacementNm: 2 },
+      ]),
+    ).toThrow(RangeError);
     expect(() => fitCreep([1, 2, 3].map((d) => ({ timeS: 5, displacementNm: d })))).toThrow(RangeError);
     expect(() => fitCreep([0, 1, 2].map((t) => ({ timeS: t, displacementNm: 1 })))).toThrow(RangeError);
   });

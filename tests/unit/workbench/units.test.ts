@@ -51,9 +51,7 @@ describe('units', () => {
         (value, from, to) => {
           const tolerance = 4 * Number.EPSILON * Math.abs(value);
           expect(Math.abs(fromNm(toNm(value, from), from) - value)).toBeLessThanOrEqual(tolerance);
-          expect(Math.abs(convertDisplacement(convertDisplacement(value, from, to), to, from) - value)).toBeLessThanOrEqual(
-            tolerance,
-          );
+          expect(Math.abs(convertDisplacement(convertDisplacement(value, from, to), to, from) - value)).toBeLessThanOrEqual(tolerance);
           expect(fromVolts(toVolts(value, 'mV'), 'mV')).toBeCloseTo(value, 0);
         },
       ),

@@ -15,14 +15,23 @@ export function AccountSettingsPage() {
         <PageHeader title={TITLE} />
         <div className="max-w-xl rounded-lg border border-rule bg-white p-5">
           <p>Sign in to choose which e-mail Scanwright sends you.</p>
-          <p className="mt-4"><AnchorButton href={paths.signIn(paths.account)}>Sign in</AnchorButton></p>
+          <p className="mt-4">
+            <AnchorButton href={paths.signIn(paths.account)}>Sign in</AnchorButton>
+          </p>
         </div>
       </div>
     );
   }
   return (
     <div>
-      <PageHeader title={TITLE} lead={<>Signed in as <span className="font-medium text-ink">{session.user.login}</span>.</>} />
+      <PageHeader
+        title={TITLE}
+        lead={
+          <>
+            Signed in as <span className="font-medium text-ink">{session.user.login}</span>.
+          </>
+        }
+      />
       <MailSettings />
     </div>
   );

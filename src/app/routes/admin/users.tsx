@@ -27,7 +27,10 @@ export function AdminUsersPage() {
   const pages = Math.max(1, Math.ceil(total / (users.data?.pageSize ?? 25)));
   return (
     <div>
-      <PageHeader title="Accounts" lead="Grant or revoke the moderator role, and suspend accounts. A suspended person is signed out and cannot write." />
+      <PageHeader
+        title="Accounts"
+        lead="Grant or revoke the moderator role, and suspend accounts. A suspended person is signed out and cannot write."
+      />
       <form
         role="search"
         className="mb-4 flex gap-2"
@@ -37,24 +40,57 @@ export function AdminUsersPage() {
           setParams(value ? { q: value } : {});
         }}
       >
-        <label htmlFor="user-search" className="sr-only">Search by handle or name</label>
-        <input id="user-search" name="q" defaultValue={q} placeholder="Handle or name" className="w-64 max-w-full rounded border border-rule bg-white px-2 py-1" />
-        <Button type="submit" variant="secondary">Search</Button>
+        <label htmlFor="user-search" className="sr-only">
+          Search by handle or name
+        </label>
+        <input
+          id="user-search"
+          name="q"
+          defaultValue={q}
+          placeholder="Handle or name"
+          className="w-64 max-w-full rounded border border-rule bg-white px-2 py-1"
+        />
+        <Button type="submit" variant="secondary">
+          Search
+        </Button>
       </form>
-      {users.isError && <p role="alert" className="text-danger">{users.error.message}</p>}
+      {users.isError && (
+        <p role="alert" className="text-danger">
+          {users.error.message}
+        </p>
+      )}
       <div className="overflow-x-auto rounded-lg border border-rule bg-white p-3">
         <table className="w-full min-w-[40rem] text-left">
           <thead className="text-xs uppercase tracking-wide text-ink-soft">
-            <tr><th className="pb-2">Account</th><th className="pb-2">Role</th><th className="pb-2">Joined</th><th className="pb-2">Last sign-in</th><th className="pb-2">State</th><th className="pb-2" /></tr>
+            <tr>
+              <th className="pb-2">Account</th>
+              <th className="pb-2">Role</th>
+              <th className="pb-2">Joined</th>
+              <th className="pb-2">Last sign-in</th>
+              <th className="pb-2">State</th>
+              <th className="pb-2" />
+            </tr>
           </thead>
-          <tbody>{users.data?.items.map((u) => <UserRow key={u.id} user={u} isSelf={u.id === session?.user?.id} />)}</tbody>
+          <tbody>
+            {users.data?.items.map((u) => (
+              <UserRow key={u.id} user={u} isSelf={u.id === session?.user?.id} />
+            ))}
+          </tbody>
         </table>
         {users.isPending && <p className="p-3 text-ink-soft">Loading…</p>}
       </div>
       <p className="mt-3 flex items-center gap-3 text-sm">
         <span className="num">{total} accounts</span>
-        {page > 1 && <Button variant="ghost" onClick={() => setParams({ ...(q ? { q } : {}), page: String(page - 1) })}>Previous</Button>}
-        {page < pages && <Button variant="ghost" onClick={() => setParams({ ...(q ? { q } : {}), page: String(page + 1) })}>Next</Button>}
+        {page > 1 && (
+          <Button variant="ghost" onClick={() => setParams({ ...(q ? { q } : {}), page: String(page - 1) })}>
+            Previous
+          </Button>
+        )}
+        {page < pages && (
+          <Button variant="ghost" onClick={() => setParams({ ...(q ? { q } : {}), page: String(page + 1) })}>
+            Next
+          </Button>
+        )}
       </p>
     </div>
   );

@@ -23,7 +23,9 @@ export function BuildEditPage() {
     return (
       <div className="mx-auto max-w-3xl">
         <PageHeader title="Edit build" />
-        <p role="alert" className="text-danger">{build.error.message}</p>
+        <p role="alert" className="text-danger">
+          {build.error.message}
+        </p>
       </div>
     );
   }
@@ -35,8 +37,20 @@ export function BuildEditPage() {
     <div className="mx-auto max-w-4xl">
       <PageHeader
         title={b.title}
-        lead={<>{b.abilities.edit && 'Editing · '}<span className="font-medium text-ink">{buildStatusLabels[b.status]}</span></>}
-        actions={<Link to={paths.build(b.id)} className="rounded-md border border-teal px-3 py-1.5 text-sm font-medium text-teal-dark hover:bg-teal/10">View build page</Link>}
+        lead={
+          <>
+            {b.abilities.edit && 'Editing · '}
+            <span className="font-medium text-ink">{buildStatusLabels[b.status]}</span>
+          </>
+        }
+        actions={
+          <Link
+            to={paths.build(b.id)}
+            className="rounded-md border border-teal px-3 py-1.5 text-sm font-medium text-teal-dark hover:bg-teal/10"
+          >
+            View build page
+          </Link>
+        }
       />
       <BuildEditor build={b} />
     </div>

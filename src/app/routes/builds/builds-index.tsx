@@ -19,7 +19,9 @@ export function BuildsIndexPage() {
   const action = session?.user ? (
     <LinkButton to={paths.newBuild}>Write a build</LinkButton>
   ) : (
-    <AnchorButton variant="secondary" href={paths.signIn(location.pathname + location.search)}>Sign in to write a build</AnchorButton>
+    <AnchorButton variant="secondary" href={paths.signIn(location.pathname + location.search)}>
+      Sign in to write a build
+    </AnchorButton>
   );
   return (
     <div>

@@ -22,7 +22,9 @@ export function MyBuildsPage() {
         <PageHeader title="My builds" lead={lead} />
         <div className="max-w-xl rounded-lg border border-rule bg-white p-5">
           <p>Sign in to see your builds, write new ones and read the review desk’s notes on them.</p>
-          <p className="mt-4"><AnchorButton href={paths.signIn(paths.myBuilds)}>Sign in</AnchorButton></p>
+          <p className="mt-4">
+            <AnchorButton href={paths.signIn(paths.myBuilds)}>Sign in</AnchorButton>
+          </p>
         </div>
       </div>
     );
@@ -40,8 +42,14 @@ export function MyBuildsPage() {
         </p>
       ) : (
         <>
-          <p role="status" className="mb-3 text-sm text-ink-soft"><span className="num">{mine.data.total}</span> {mine.data.total === 1 ? 'build' : 'builds'}</p>
-          <ul className="space-y-3">{mine.data.items.map((b) => <MyBuildRow key={b.id} build={b} />)}</ul>
+          <p role="status" className="mb-3 text-sm text-ink-soft">
+            <span className="num">{mine.data.total}</span> {mine.data.total === 1 ? 'build' : 'builds'}
+          </p>
+          <ul className="space-y-3">
+            {mine.data.items.map((b) => (
+              <MyBuildRow key={b.id} build={b} />
+            ))}
+          </ul>
         </>
       )}
     </div>

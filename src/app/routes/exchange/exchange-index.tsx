@@ -29,7 +29,14 @@ export function ExchangeIndexPage() {
       ) : listings.data.items.length === 0 ? (
         <div className="rounded-lg border border-dashed border-rule bg-white p-6 text-center">
           <p className="font-medium">{search.filtered ? 'No listing matches these filters.' : 'Nothing is offered or sought yet.'}</p>
-          {search.filtered && <p className="mt-1 text-sm text-ink-soft"><Link to={search.clearHref} className="text-copper-dark underline">Clear the filters</Link> to see every listing.</p>}
+          {search.filtered && (
+            <p className="mt-1 text-sm text-ink-soft">
+              <Link to={search.clearHref} className="text-copper-dark underline">
+                Clear the filters
+              </Link>{' '}
+              to see every listing.
+            </p>
+          )}
         </div>
       ) : (
         <>
@@ -37,7 +44,11 @@ export function ExchangeIndexPage() {
             <span className="num font-semibold text-ink">{listings.data.total}</span> {listings.data.total === 1 ? 'listing' : 'listings'}
           </p>
           <ul className={`grid gap-4 sm:grid-cols-2 lg:grid-cols-3 ${listings.isPlaceholderData ? 'opacity-60' : ''}`}>
-            {listings.data.items.map((l) => <li key={l.id} className="flex"><ListingCard listing={l} /></li>)}
+            {listings.data.items.map((l) => (
+              <li key={l.id} className="flex">
+                <ListingCard listing={l} />
+              </li>
+            ))}
           </ul>
           <Pager page={search.page} pageCount={pageCount} hrefFor={search.hrefFor} label="Exchange pages" />
         </>

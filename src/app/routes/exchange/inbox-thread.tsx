@@ -25,7 +25,14 @@ export function InboxThreadPage() {
   }, [loaded, qc]);
 
   const notFound = <ExchangeNotFound what="conversation" back={paths.inbox} backLabel="Back to the inbox" />;
-  if (!signedIn) return <Notice title="Sign in to read this conversation"><p><AnchorButton href={paths.signIn(location.pathname)}>Sign in</AnchorButton></p></Notice>;
+  if (!signedIn)
+    return (
+      <Notice title="Sign in to read this conversation">
+        <p>
+          <AnchorButton href={paths.signIn(location.pathname)}>Sign in</AnchorButton>
+        </p>
+      </Notice>
+    );
   if (id === null) return notFound;
   if (thread.isPending) return <Loading>Loading the conversation…</Loading>;
   if (thread.isError) {
@@ -34,7 +41,11 @@ export function InboxThreadPage() {
   }
   return (
     <div className="mx-auto max-w-3xl">
-      <nav aria-label="Breadcrumb" className="mb-3 text-sm"><Link to={paths.inbox} className="text-copper-dark underline">Inbox</Link></nav>
+      <nav aria-label="Breadcrumb" className="mb-3 text-sm">
+        <Link to={paths.inbox} className="text-copper-dark underline">
+          Inbox
+        </Link>
+      </nav>
       <h1 className="mb-4 border-b border-rule pb-3 text-2xl font-semibold tracking-tight">Conversation with {thread.data.other.login}</h1>
       <ThreadView thread={thread.data} />
     </div>

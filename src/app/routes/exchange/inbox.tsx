@@ -15,9 +15,28 @@ export function InboxPage() {
   const location = useLocation();
   const signedIn = Boolean(session?.user);
   const threads = useQuery({ ...inboxQueries.threads(), enabled: signedIn });
-  const header = <PageHeader title="Inbox" lead="Messages about exchange listings. Nobody here sees anyone's e-mail address." actions={<LinkButton variant="secondary" to={paths.exchange}>Exchange</LinkButton>} />;
+  const header = (
+    <PageHeader
+      title="Inbox"
+      lead="Messages about exchange listings. Nobody here sees anyone's e-mail address."
+      actions={
+        <LinkButton variant="secondary" to={paths.exchange}>
+          Exchange
+        </LinkButton>
+      }
+    />
+  );
   if (!signedIn) {
-    return <div>{header}<Notice title="Sign in to read your messages"><p><AnchorButton href={paths.signIn(location.pathname)}>Sign in</AnchorButton></p></Notice></div>;
+    return (
+      <div>
+        {header}
+        <Notice title="Sign in to read your messages">
+          <p>
+            <AnchorButton href={paths.signIn(location.pathname)}>Sign in</AnchorButton>
+          </p>
+        </Notice>
+      </div>
+    );
   }
   return (
     <div>
@@ -29,7 +48,9 @@ export function InboxPage() {
       ) : threads.data.length === 0 ? (
         <div className="rounded-lg border border-dashed border-rule bg-white p-6 text-center">
           <p className="font-medium">No messages yet.</p>
-          <p className="mt-1 text-sm text-ink-soft">When you write to a listing's owner, or someone writes about yours, the conversation shows here.</p>
+          <p className="mt-1 text-sm text-ink-soft">
+            When you write to a listing's owner, or someone writes about yours, the conversation shows here.
+          </p>
         </div>
       ) : (
         <ThreadList threads={threads.data} />

@@ -24,17 +24,47 @@ export function ListingEditPage() {
     return <LoadError what="this listing" error={listing.error} onRetry={() => void listing.refetch()} />;
   }
   const l = listing.data;
-  const header = <PageHeader title="Edit listing" lead={<Link to={paths.listing(l.id)} className="text-copper-dark underline">Back to the listing</Link>} />;
+  const header = (
+    <PageHeader
+      title="Edit listing"
+      lead={
+        <Link to={paths.listing(l.id)} className="text-copper-dark underline">
+          Back to the listing
+        </Link>
+      }
+    />
+  );
   if (!l.abilities.edit || l.status === 'closed') {
-    return <div>{header}<Notice tone="caution" title="You cannot edit this listing">{l.status === 'closed' ? 'It is closed.' : 'Only its owner can change it.'}</Notice></div>;
+    return (
+      <div>
+        {header}
+        <Notice tone="caution" title="You cannot edit this listing">
+          {l.status === 'closed' ? 'It is closed.' : 'Only its owner can change it.'}
+        </Notice>
+      </div>
+    );
   }
   return (
     <div>
       {header}
       <ListingForm
-        defaults={{ partId: l.part.id, kind: l.kind, quantity: l.quantity, condition: l.condition, priceKind: l.priceKind, priceAmount: l.priceAmount, currency: l.currency ?? 'EUR', region: l.region, shipsTo: l.shipsTo ?? '', notes: l.notes ?? '' }}
+        defaults={{
+          partId: l.part.id,
+          kind: l.kind,
+          quantity: l.quantity,
+          condition: l.condition,
+          priceKind: l.priceKind,
+          priceAmount: l.priceAmount,
+          currency: l.currency ?? 'EUR',
+          region: l.region,
+          shipsTo: l.shipsTo ?? '',
+          notes: l.notes ?? '',
+        }}
         submitLabel="Save changes"
-        onSave={async (input) => { await update.mutateAsync(input); navigate(paths.listing(l.id)); }}
+        onSave={async (input) => {
+          await update.mutateAsync(input);
+          navigate(paths.listing(l.id));
+        }}
       />
     </div>
   );

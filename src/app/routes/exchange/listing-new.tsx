@@ -18,13 +18,17 @@ export function ListingNewPage() {
   const [params] = useSearchParams();
   const create = useCreateListing();
   const partId = parseId(params.get('partId') ?? undefined) ?? undefined;
-  const header = <PageHeader title="New listing" lead="Offer spare parts or say what you are looking for. Others write to you through Scanwright." />;
+  const header = (
+    <PageHeader title="New listing" lead="Offer spare parts or say what you are looking for. Others write to you through Scanwright." />
+  );
   if (!can(toActor(session?.user ?? null), 'content.create')) {
     return (
       <div>
         {header}
         <Notice title="Sign in to post a listing">
-          <p><AnchorButton href={paths.signIn(location.pathname + location.search)}>Sign in</AnchorButton></p>
+          <p>
+            <AnchorButton href={paths.signIn(location.pathname + location.search)}>Sign in</AnchorButton>
+          </p>
         </Notice>
       </div>
     );
@@ -35,7 +39,10 @@ export function ListingNewPage() {
       <ListingForm
         defaults={{ partId }}
         submitLabel="Post listing"
-        onSave={async (input) => { const l = await create.mutateAsync(input); navigate(paths.listing(l.id)); }}
+        onSave={async (input) => {
+          const l = await create.mutateAsync(input);
+          navigate(paths.listing(l.id));
+        }}
       />
     </div>
   );

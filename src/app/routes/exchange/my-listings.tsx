@@ -16,9 +16,24 @@ export function MyListingsPage() {
   const location = useLocation();
   const signedIn = Boolean(session?.user);
   const mine = useQuery({ ...listingQueries.mine(), enabled: signedIn });
-  const header = <PageHeader title="My listings" lead="Open, reserved and closed. Reserve a listing when you have promised the parts; close it when they are gone." actions={signedIn ? <ExchangeActions except="mine" /> : undefined} />;
+  const header = (
+    <PageHeader
+      title="My listings"
+      lead="Open, reserved and closed. Reserve a listing when you have promised the parts; close it when they are gone."
+      actions={signedIn ? <ExchangeActions except="mine" /> : undefined}
+    />
+  );
   if (!signedIn) {
-    return <div>{header}<Notice title="Sign in to see your listings"><p><AnchorButton href={paths.signIn(location.pathname)}>Sign in</AnchorButton></p></Notice></div>;
+    return (
+      <div>
+        {header}
+        <Notice title="Sign in to see your listings">
+          <p>
+            <AnchorButton href={paths.signIn(location.pathname)}>Sign in</AnchorButton>
+          </p>
+        </Notice>
+      </div>
+    );
   }
   return (
     <div>
@@ -30,10 +45,16 @@ export function MyListingsPage() {
       ) : mine.data.items.length === 0 ? (
         <div className="rounded-lg border border-dashed border-rule bg-white p-6 text-center">
           <p className="font-medium">You have no listings yet.</p>
-          <p className="mt-3"><LinkButton to={paths.newListing}>Post your first listing</LinkButton></p>
+          <p className="mt-3">
+            <LinkButton to={paths.newListing}>Post your first listing</LinkButton>
+          </p>
         </div>
       ) : (
-        <ul className="space-y-3">{mine.data.items.map((l) => <MyListingRow key={l.id} listing={l} />)}</ul>
+        <ul className="space-y-3">
+          {mine.data.items.map((l) => (
+            <MyListingRow key={l.id} listing={l} />
+          ))}
+        </ul>
       )}
     </div>
   );

@@ -14,7 +14,11 @@ function PartNotFound() {
     <div className="mx-auto max-w-xl py-12 text-center">
       <h1 className="text-xl font-semibold">No such part in the registry</h1>
       <p className="mt-2 text-ink-soft">It may have been merged into another entry, or it has not been accepted yet.</p>
-      <p className="mt-4"><Link to={paths.parts} className="text-copper-dark underline">Search the parts registry</Link></p>
+      <p className="mt-4">
+        <Link to={paths.parts} className="text-copper-dark underline">
+          Search the parts registry
+        </Link>
+      </p>
     </div>
   );
 }

@@ -23,7 +23,9 @@ export function PartsIndexPage() {
   const action = can(toActor(session?.user ?? null), 'content.create') ? (
     <LinkButton to={paths.proposePart}>Propose a part</LinkButton>
   ) : session?.user ? null : (
-    <AnchorButton variant="secondary" href={paths.signIn(location.pathname + location.search)}>Sign in to propose a part</AnchorButton>
+    <AnchorButton variant="secondary" href={paths.signIn(location.pathname + location.search)}>
+      Sign in to propose a part
+    </AnchorButton>
   );
   const pageCount = parts.data ? Math.max(1, Math.ceil(parts.data.total / parts.data.pageSize)) : 1;
   return (
@@ -42,7 +44,15 @@ export function PartsIndexPage() {
       ) : parts.data.items.length === 0 ? (
         <div className="rounded-lg border border-dashed border-rule bg-white p-6 text-center">
           <p className="font-medium">{search.filtered ? 'No listed part matches these filters.' : 'No parts are listed yet.'}</p>
-          {search.filtered && <p className="mt-1 text-sm text-ink-soft">Try a wider gain range, or <Link to={search.clearHref} className="text-copper-dark underline">clear the filters</Link>.</p>}
+          {search.filtered && (
+            <p className="mt-1 text-sm text-ink-soft">
+              Try a wider gain range, or{' '}
+              <Link to={search.clearHref} className="text-copper-dark underline">
+                clear the filters
+              </Link>
+              .
+            </p>
+          )}
         </div>
       ) : (
         <>

@@ -16,7 +16,9 @@ export function ProposePartPage() {
   const location = useLocation();
   const propose = useProposePart();
   const [proposed, setProposed] = useState<{ id: number; name: string } | null>(null);
-  const header = <PageHeader title="Propose a part" lead="Add a salvaged transducer to the registry so its calibration runs can be pooled." />;
+  const header = (
+    <PageHeader title="Propose a part" lead="Add a salvaged transducer to the registry so its calibration runs can be pooled." />
+  );
 
   if (!can(toActor(session?.user ?? null), 'content.create')) {
     return (
@@ -24,7 +26,9 @@ export function ProposePartPage() {
         {header}
         <Notice title="Sign in to propose a part">
           <p>Proposals carry your name so a moderator can ask about them.</p>
-          <p><AnchorButton href={paths.signIn(location.pathname)}>Sign in</AnchorButton></p>
+          <p>
+            <AnchorButton href={paths.signIn(location.pathname)}>Sign in</AnchorButton>
+          </p>
         </Notice>
       </div>
     );
@@ -36,14 +40,30 @@ export function ProposePartPage() {
         <div role="status" className="max-w-2xl rounded-lg border border-teal bg-white p-5">
           <p className="text-lg font-semibold">Proposed: waiting for a moderator</p>
           <p className="mt-2">
-            “{proposed.name}” is saved, but it is <strong>not in the registry yet</strong>. A moderator checks each proposal; once they accept it,
-            it is listed and calibration runs can count towards it. Until then only you and the moderators can open its page.
+            “{proposed.name}” is saved, but it is <strong>not in the registry yet</strong>. A moderator checks each proposal; once they
+            accept it, it is listed and calibration runs can count towards it. Until then only you and the moderators can open its page.
           </p>
-          <p className="mt-2">Photos help the moderator and later readers recognise the part: add them on its page (markings, size against a rule, where it sat in the donor device).</p>
+          <p className="mt-2">
+            Photos help the moderator and later readers recognise the part: add them on its page (markings, size against a rule, where it
+            sat in the donor device).
+          </p>
           <div className="mt-4 flex flex-wrap gap-3">
-            <LinkButton to={paths.part(proposed.id)} variant="secondary">Open its page and add photos</LinkButton>
-            <LinkButton to={paths.parts} variant="ghost">Back to the registry</LinkButton>
-            <button type="button" className="text-sm text-copper-dark underline" onClick={() => { propose.reset(); setProposed(null); }}>Propose another part</button>
+            <LinkButton to={paths.part(proposed.id)} variant="secondary">
+              Open its page and add photos
+            </LinkButton>
+            <LinkButton to={paths.parts} variant="ghost">
+              Back to the registry
+            </LinkButton>
+            <button
+              type="button"
+              className="text-sm text-copper-dark underline"
+              onClick={() => {
+                propose.reset();
+                setProposed(null);
+              }}
+            >
+              Propose another part
+            </button>
           </div>
         </div>
       </div>
@@ -53,9 +73,18 @@ export function ProposePartPage() {
     <div>
       {header}
       <p className="mb-4 text-sm text-ink-soft">
-        Check the <Link to={paths.parts} className="text-copper-dark underline">registry</Link> first: a part already listed under another name is better reported as a duplicate than proposed again.
+        Check the{' '}
+        <Link to={paths.parts} className="text-copper-dark underline">
+          registry
+        </Link>{' '}
+        first: a part already listed under another name is better reported as a duplicate than proposed again.
       </p>
-      <ProposePartForm onPropose={async (input) => { const r = await propose.mutateAsync(input); setProposed({ id: r.id, name: input.name }); }} />
+      <ProposePartForm
+        onPropose={async (input) => {
+          const r = await propose.mutateAsync(input);
+          setProposed({ id: r.id, name: input.name });
+        }}
+      />
     </div>
   );
 }

@@ -30,7 +30,8 @@ export function ReviewAuditPage() {
 
   const actors = new Map<number, ReviewAuthorDto>();
   for (const e of [...(everyone.data?.items ?? []), ...(trail.data?.items ?? [])]) actors.set(e.actor.id, e.actor);
-  if (filters.actorId && !actors.has(filters.actorId)) actors.set(filters.actorId, { id: filters.actorId, login: `moderator #${filters.actorId}` });
+  if (filters.actorId && !actors.has(filters.actorId))
+    actors.set(filters.actorId, { id: filters.actorId, login: `moderator #${filters.actorId}` });
   const pageCount = trail.data ? Math.max(1, Math.ceil(trail.data.total / trail.data.pageSize)) : 1;
 
   return (
@@ -38,22 +39,48 @@ export function ReviewAuditPage() {
       <PageHeader
         title={TITLE}
         lead="Who decided what on the review desk, when, and with which note. Newest first; dates in UTC."
-        actions={<LinkButton variant="secondary" to={paths.review}>Back to the desk</LinkButton>}
+        actions={
+          <LinkButton variant="secondary" to={paths.review}>
+            Back to the desk
+          </LinkButton>
+        }
       />
-      <AuditFiltersForm filters={filters} actors={[...actors.values()].sort((a, b) => a.login.localeCompare(b.login))} onApply={(f) => setParams(paramsFromFilters(f))} />
-      <AuditFilterSummary filters={filters} total={trail.data?.total} onClearThing={() => setParams(paramsFromFilters({ ...filters, targetId: undefined, page: undefined }))} />
-      {trail.isPending && <p role="status" className="text-ink-soft">Loading the audit trail…</p>}
-      {trail.isError && <p role="alert" className="text-danger">The audit trail did not load: {trail.error.message}</p>}
-      {trail.data && (
-        trail.data.items.length === 0 ? (
-          <p className="rounded-lg border border-dashed border-rule bg-white p-6 text-center text-ink-soft">No entries match these filters.</p>
+      <AuditFiltersForm
+        filters={filters}
+        actors={[...actors.values()].sort((a, b) => a.login.localeCompare(b.login))}
+        onApply={(f) => setParams(paramsFromFilters(f))}
+      />
+      <AuditFilterSummary
+        filters={filters}
+        total={trail.data?.total}
+        onClearThing={() => setParams(paramsFromFilters({ ...filters, targetId: undefined, page: undefined }))}
+      />
+      {trail.isPending && (
+        <p role="status" className="text-ink-soft">
+          Loading the audit trail…
+        </p>
+      )}
+      {trail.isError && (
+        <p role="alert" className="text-danger">
+          The audit trail did not load: {trail.error.message}
+        </p>
+      )}
+      {trail.data &&
+        (trail.data.items.length === 0 ? (
+          <p className="rounded-lg border border-dashed border-rule bg-white p-6 text-center text-ink-soft">
+            No entries match these filters.
+          </p>
         ) : (
           <div className="rounded-lg border border-rule bg-white px-3 py-1 sm:px-1">
             <AuditTable items={trail.data.items} />
           </div>
-        )
-      )}
-      <Pager page={filters.page ?? 1} pageCount={pageCount} label="Audit trail pages" hrefFor={(p) => `${paths.reviewAudit}${toQuery(paramsFromFilters({ ...filters, page: p }))}`} />
+        ))}
+      <Pager
+        page={filters.page ?? 1}
+        pageCount={pageCount}
+        label="Audit trail pages"
+        hrefFor={(p) => `${paths.reviewAudit}${toQuery(paramsFromFilters({ ...filters, page: p }))}`}
+      />
     </div>
   );
 }

@@ -11,7 +11,8 @@ import { ReviewDesk } from '@/features/review/components/desk/review-desk.tsx';
 import { firstBusyKind, isQueueKind, type QueueKind } from '@/features/review/components/desk/queue-model.ts';
 
 const TITLE = 'Review desk';
-const lead = 'Builds, calibration runs, proposed parts and reports waiting for a moderator, oldest first. Nothing counts until it is decided here.';
+const lead =
+  'Builds, calibration runs, proposed parts and reports waiting for a moderator, oldest first. Nothing counts until it is decided here.';
 
 /** /review?queue=runs&item=12: the queue and the selected item live in the URL, so a link opens the same item. */
 export function ReviewDeskPage() {
@@ -22,13 +23,33 @@ export function ReviewDeskPage() {
 
   if (!allowed) return <ModeratorsOnly title={TITLE} signedIn={Boolean(session?.user)} returnTo={paths.review} />;
 
-  const header = <PageHeader title={TITLE} lead={lead} actions={<LinkButton variant="secondary" to={paths.reviewAudit}>Audit trail</LinkButton>} />;
-  if (queue.isPending) return <div>{header}<p role="status" className="text-ink-soft">Loading the queues…</p></div>;
+  const header = (
+    <PageHeader
+      title={TITLE}
+      lead={lead}
+      actions={
+        <LinkButton variant="secondary" to={paths.reviewAudit}>
+          Audit trail
+        </LinkButton>
+      }
+    />
+  );
+  if (queue.isPending)
+    return (
+      <div>
+        {header}
+        <p role="status" className="text-ink-soft">
+          Loading the queues…
+        </p>
+      </div>
+    );
   if (queue.isError) {
     return (
       <div>
         {header}
-        <p role="alert" className="text-danger">The queues did not load: {queue.error.message}</p>
+        <p role="alert" className="text-danger">
+          The queues did not load: {queue.error.message}
+        </p>
       </div>
     );
   }

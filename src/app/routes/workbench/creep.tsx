@@ -22,23 +22,43 @@ export function CreepPage() {
   const deferredText = useDeferredValue(text);
   const r = useMemo(() => previewCreep(deferredText ?? '', unit, projectToS), [deferredText, unit, projectToS]);
   return (
-    <ToolPage slug="creep" lead="After a voltage step a piezo keeps moving for minutes. Fit the logarithmic creep law to a step-and-hold record.">
+    <ToolPage
+      slug="creep"
+      lead="After a voltage step a piezo keeps moving for minutes. Fit the logarithmic creep law to a step-and-hold record."
+    >
       <ToolColumns
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
             <FieldGroup legend="Step-and-hold record">
               <div className="space-y-1 sm:col-span-2">
-                <label htmlFor={textId} className="block text-sm font-medium">Samples (CSV: time in s, displacement)</label>
-                <textarea id={textId} rows={9} spellCheck={false} aria-describedby={`${textId}-hint`} className="num w-full rounded-md border border-rule bg-white px-2 py-1.5 text-sm" {...form.register('text')} />
-                <p id={`${textId}-hint`} className="text-xs text-ink-soft">Time since the step, then the reading; header optional. The example is illustrative — replace it with yours.</p>
+                <label htmlFor={textId} className="block text-sm font-medium">
+                  Samples (CSV: time in s, displacement)
+                </label>
+                <textarea
+                  id={textId}
+                  rows={9}
+                  spellCheck={false}
+                  aria-describedby={`${textId}-hint`}
+                  className="num w-full rounded-md border border-rule bg-white px-2 py-1.5 text-sm"
+                  {...form.register('text')}
+                />
+                <p id={`${textId}-hint`} className="text-xs text-ink-soft">
+                  Time since the step, then the reading; header optional. The example is illustrative — replace it with yours.
+                </p>
                 <div className="flex gap-2">
-                  <Button variant="ghost" onClick={() => form.setValue('text', '')}>Clear</Button>
-                  <Button variant="ghost" onClick={() => form.setValue('text', exampleRecord)}>Load the example</Button>
+                  <Button variant="ghost" onClick={() => form.setValue('text', '')}>
+                    Clear
+                  </Button>
+                  <Button variant="ghost" onClick={() => form.setValue('text', exampleRecord)}>
+                    Load the example
+                  </Button>
                 </div>
               </div>
               <FormSelect form={form} name="unit" label="Displacement unit" options={displacementOptions} />
               <FormNumber form={form} name="projectToS" label="Project to" unit="s" optional />
-              <div className="sm:col-span-2"><RowProblems used={r.used} problems={r.problems} what="Line" noun="sample" /></div>
+              <div className="sm:col-span-2">
+                <RowProblems used={r.used} problems={r.problems} what="Line" noun="sample" />
+              </div>
             </FieldGroup>
           </form>
         }

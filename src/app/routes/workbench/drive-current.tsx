@@ -14,14 +14,24 @@ export function DriveCurrentPage() {
   const { form, live } = useLiveForm(driveCurrentForm, defaults, driveCurrentCalculator.compute);
   const r = live.ok ? live.result : null;
   return (
-    <ToolPage slug="drive-current" lead="A piezo is a capacitor: what a sine drive asks of the amplifier, and what the element keeps when it stops.">
+    <ToolPage
+      slug="drive-current"
+      lead="A piezo is a capacitor: what a sine drive asks of the amplifier, and what the element keeps when it stops."
+    >
       <ToolColumns
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
             <FieldGroup legend="Load and drive" note="Capacitance: measure it, or take it from the part's registry entry.">
               <FormQuantity form={form} name="capacitance" unitName="capacitanceUnit" label="Capacitance C" units={capacitanceUnits} />
               <FormNumber form={form} name="amplitudeV" label="Amplitude (peak)" unit="V" />
-              <FormQuantity form={form} name="frequency" unitName="frequencyUnit" label="Frequency f" units={frequencyUnits} hint="0 for a DC hold." />
+              <FormQuantity
+                form={form}
+                name="frequency"
+                unitName="frequencyUnit"
+                label="Frequency f"
+                units={frequencyUnits}
+                hint="0 for a DC hold."
+              />
             </FieldGroup>
           </form>
         }
@@ -30,16 +40,28 @@ export function DriveCurrentPage() {
             <>
               <SafetyNotice cautions={r.cautions} crossed={r.levelsCrossed} />
               <ResultPanel
-                headline={<Headline label="Peak current"><Quantity q={formatSi(r.peakCurrentA, 'A')} /></Headline>}
+                headline={
+                  <Headline label="Peak current">
+                    <Quantity q={formatSi(r.peakCurrentA, 'A')} />
+                  </Headline>
+                }
                 basis="A sine of peak V at f into a capacitance C: I_pk = 2π·f·C·V, I_rms = I_pk/√2, reactive power V_rms·I_rms; charge Q = C·V and energy ½CV² (calculated from the formula). Cautions at the IEC 61010-1 levels: 30 V rms, 42.4 V peak, 60 V DC, 45 µC."
               >
-                <ResultRow label="RMS current"><Quantity q={formatSi(r.rmsCurrentA, 'A')} /></ResultRow>
-                <ResultRow label="RMS voltage"><Quantity q={formatSi(r.rmsVoltageV, 'V')} /></ResultRow>
+                <ResultRow label="RMS current">
+                  <Quantity q={formatSi(r.rmsCurrentA, 'A')} />
+                </ResultRow>
+                <ResultRow label="RMS voltage">
+                  <Quantity q={formatSi(r.rmsVoltageV, 'V')} />
+                </ResultRow>
                 <ResultRow label="Reactive power" note="Circulates between amplifier and load; the amplifier must source and sink it.">
                   <Quantity q={formatSi(r.reactivePowerVar, 'var')} />
                 </ResultRow>
-                <ResultRow label="Stored charge at the amplitude"><Quantity q={formatSi(r.storedChargeC, 'C')} /></ResultRow>
-                <ResultRow label="Stored energy at the amplitude"><Quantity q={formatSi(r.storedEnergyJ, 'J')} /></ResultRow>
+                <ResultRow label="Stored charge at the amplitude">
+                  <Quantity q={formatSi(r.storedChargeC, 'C')} />
+                </ResultRow>
+                <ResultRow label="Stored energy at the amplitude">
+                  <Quantity q={formatSi(r.storedEnergyJ, 'J')} />
+                </ResultRow>
               </ResultPanel>
             </>
           ) : (

@@ -23,7 +23,10 @@ export function ExpectedGainPage() {
   const materialKey = form.watch('materialKey');
   const source = materialKey === 'custom' ? 'your own constants' : sourceInWords(materials[materialKey as MaterialKey].source);
   return (
-    <ToolPage slug="expected-gain" lead="What a bender, tube, stack or shear plate should give per volt, from its geometry and material: a sanity check for a measured gain.">
+    <ToolPage
+      slug="expected-gain"
+      lead="What a bender, tube, stack or shear plate should give per volt, from its geometry and material: a sanity check for a measured gain."
+    >
       <ToolColumns
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
@@ -32,20 +35,49 @@ export function ExpectedGainPage() {
                 <FormSelect form={form} name="spec.actuator" label="Kind" options={actuatorKinds} />
               </div>
               {kind.fields.map((f) => (
-                <FormNumber key={`${kind.value}-${f.name}`} form={form} name={`spec.${f.name}`} label={f.label} unit={f.unit} optional={f.optional} step={f.unit ? 'any' : '1'} />
+                <FormNumber
+                  key={`${kind.value}-${f.name}`}
+                  form={form}
+                  name={`spec.${f.name}`}
+                  label={f.label}
+                  unit={f.unit}
+                  optional={f.optional}
+                  step={f.unit ? 'any' : '1'}
+                />
               ))}
-              {kind.fields.length === 0 && <p className="text-sm text-ink-soft sm:col-span-2">No geometry needed: the gain is the same for any thickness.</p>}
+              {kind.fields.length === 0 && (
+                <p className="text-sm text-ink-soft sm:col-span-2">No geometry needed: the gain is the same for any thickness.</p>
+              )}
             </FieldGroup>
             {kind.fields.some((f) => f.unit === 'mm') && (
-              <FieldGroup legend="Geometry tolerances" note="± how far each dimension may be off (a caliper reading, a datasheet tolerance); read as a rectangular spread and combined to first order (Source: GUM, JCGM 100:2008, 4.3.7 and 5.1.2).">
-                {kind.fields.filter((f) => f.unit === 'mm').map((f) => (
-                  <FormNumber key={`${kind.value}-tol-${f.name}`} form={form} name={`tolerances.${f.name}` as 'tolerances.lengthMm'} label={`± ${f.label}`} unit="mm" optional />
-                ))}
+              <FieldGroup
+                legend="Geometry tolerances"
+                note="± how far each dimension may be off (a caliper reading, a datasheet tolerance); read as a rectangular spread and combined to first order (Source: GUM, JCGM 100:2008, 4.3.7 and 5.1.2)."
+              >
+                {kind.fields
+                  .filter((f) => f.unit === 'mm')
+                  .map((f) => (
+                    <FormNumber
+                      key={`${kind.value}-tol-${f.name}`}
+                      form={form}
+                      name={`tolerances.${f.name}` as 'tolerances.lengthMm'}
+                      label={`± ${f.label}`}
+                      unit="mm"
+                      optional
+                    />
+                  ))}
               </FieldGroup>
             )}
             <MaterialFields form={form} needed={kind.constant} />
             <FieldGroup legend="Your measurement">
-              <FormNumber form={form} name="measuredNmPerV" label="Measured gain" unit="nm/V" optional hint="From a gain fit; compares it with the expectation." />
+              <FormNumber
+                form={form}
+                name="measuredNmPerV"
+                label="Measured gain"
+                unit="nm/V"
+                optional
+                hint="From a gain fit; compares it with the expectation."
+              />
             </FieldGroup>
           </form>
         }

@@ -21,9 +21,22 @@ import { Button } from '@/components/ui/button.tsx';
 import { friendlyError } from '@/features/workbench/form/error-map.ts';
 import { displacementOptions, voltageOptions } from '@/features/workbench/unit-options.ts';
 
-const defaults: FitFormValues = { source: 'grid', rows: exampleRows, csvText: '', voltageUnit: 'V', displacementUnit: 'nm', model: 'intercept' };
-const sources = [{ value: 'grid', label: 'Type points' }, { value: 'csv', label: 'Paste or load a CSV' }];
-const models = [{ value: 'intercept', label: 'With intercept' }, { value: 'origin', label: 'Through the origin' }];
+const defaults: FitFormValues = {
+  source: 'grid',
+  rows: exampleRows,
+  csvText: '',
+  voltageUnit: 'V',
+  displacementUnit: 'nm',
+  model: 'intercept',
+};
+const sources = [
+  { value: 'grid', label: 'Type points' },
+  { value: 'csv', label: 'Paste or load a CSV' },
+];
+const models = [
+  { value: 'intercept', label: 'With intercept' },
+  { value: 'origin', label: 'Through the origin' },
+];
 
 export function FitPage() {
   const form = useForm({ resolver: zodResolver(fitForm, { error: friendlyError }), mode: 'onChange', defaultValues: defaults });
@@ -41,20 +54,40 @@ export function FitPage() {
               <FormSelect form={form} name="displacementUnit" label="Displacement unit" options={displacementOptions} />
               {unitChange.pending && (
                 <div role="alert" className="rounded-md border border-l-4 border-amber bg-amber/10 p-3 text-sm sm:col-span-2">
-                  <p>The pasted numbers were not changed: they are now read as {unitChange.pending.field === 'displacementUnit' ? lengthUnit : voltsUnit}. Is that what they are?</p>
+                  <p>
+                    The pasted numbers were not changed: they are now read as{' '}
+                    {unitChange.pending.field === 'displacementUnit' ? lengthUnit : voltsUnit}. Is that what they are?
+                  </p>
                   <div className="mt-2 flex flex-wrap gap-2">
-                    <Button variant="secondary" onClick={unitChange.keep}>Yes, they are in {unitChange.pending.field === 'displacementUnit' ? lengthUnit : voltsUnit}</Button>
-                    <Button variant="ghost" onClick={unitChange.undo}>No, put the unit back</Button>
+                    <Button variant="secondary" onClick={unitChange.keep}>
+                      Yes, they are in {unitChange.pending.field === 'displacementUnit' ? lengthUnit : voltsUnit}
+                    </Button>
+                    <Button variant="ghost" onClick={unitChange.undo}>
+                      No, put the unit back
+                    </Button>
                   </div>
                 </div>
               )}
-              <p className="text-xs text-ink-soft sm:col-span-2">Changing a unit converts the typed points; pasted CSV text is asked about.</p>
-              <div className="sm:col-span-2"><FormRadios form={form} name="model" legend="Fit line" options={models} /></div>
+              <p className="text-xs text-ink-soft sm:col-span-2">
+                Changing a unit converts the typed points; pasted CSV text is asked about.
+              </p>
+              <div className="sm:col-span-2">
+                <FormRadios form={form} name="model" legend="Fit line" options={models} />
+              </div>
             </section>
             <section aria-label="Calibration points" className="space-y-3 rounded-lg border border-rule bg-white p-4">
               <FormRadios form={form} name="source" legend="Points from" options={sources} />
-              {source === 'csv' ? <CsvSource form={form} /> : <PointsGrid form={form} voltsUnit={voltsUnit} lengthUnit={lengthUnit} problems={checked.problems} />}
-              <RowProblems used={checked.points.length} problems={checked.problems} note={checked.note} what={source === 'csv' ? 'Line' : 'Row'} />
+              {source === 'csv' ? (
+                <CsvSource form={form} />
+              ) : (
+                <PointsGrid form={form} voltsUnit={voltsUnit} lengthUnit={lengthUnit} problems={checked.problems} />
+              )}
+              <RowProblems
+                used={checked.points.length}
+                problems={checked.problems}
+                note={checked.note}
+                what={source === 'csv' ? 'Line' : 'Row'}
+              />
               {source === 'csv' && <RowsPreview rows={rows} problems={checked.problems} voltsUnit={voltsUnit} lengthUnit={lengthUnit} />}
             </section>
           </form>
@@ -64,12 +97,22 @@ export function FitPage() {
             <>
               <SafetyNotice cautions={result.preview.fit.cautions} crossed={result.preview.fit.levelsCrossed} />
               <FitResults fit={result.preview.fit} />
-              <ChartFrame label="Calibration plot" caption="Up sweep: copper circles; down sweep: teal triangles; the line is the least-squares fit. Long runs are thinned for drawing only.">
+              <ChartFrame
+                label="Calibration plot"
+                caption="Up sweep: copper circles; down sweep: teal triangles; the line is the least-squares fit. Long runs are thinned for drawing only."
+              >
                 <LazyCalibrationChart points={result.preview.plotPoints} fit={result.preview.fit} />
               </ChartFrame>
               <p className="text-sm text-ink-soft">
-                Sine drive instead? Use the <Link className="text-teal-dark underline" to={paths.workbenchTool('peak-to-peak')}>peak-to-peak gain</Link>. A step-and-hold record?{' '}
-                <Link className="text-teal-dark underline" to={paths.workbenchTool('creep')}>Fit its creep</Link>.
+                Sine drive instead? Use the{' '}
+                <Link className="text-teal-dark underline" to={paths.workbenchTool('peak-to-peak')}>
+                  peak-to-peak gain
+                </Link>
+                . A step-and-hold record?{' '}
+                <Link className="text-teal-dark underline" to={paths.workbenchTool('creep')}>
+                  Fit its creep
+                </Link>
+                .
               </p>
             </>
           ) : (

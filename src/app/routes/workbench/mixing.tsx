@@ -12,7 +12,10 @@ import { MixingResults } from '@/features/workbench/mixing/mixing-results.tsx';
 import { PairPreset } from '@/features/workbench/mixing/pair-preset.tsx';
 
 const defaults: MixingFormValues = {
-  gain: [[70.7107, -70.7107], [70.7107, 70.7107]],
+  gain: [
+    [70.7107, -70.7107],
+    [70.7107, 70.7107],
+  ],
   limits: { vaMinV: -15, vaMaxV: 15, vbMinV: -15, vbMaxV: 15 },
   targetXNm: 500,
   targetYNm: 1200,
@@ -22,7 +25,10 @@ export function MixingPage() {
   const { form, live } = useLiveForm(mixingForm, defaults, mixingCalculator.compute);
   const limitsError = errorOf(form, 'limits');
   return (
-    <ToolPage slug="mixing" lead="Two benders meeting at one tip: the drive matrix, the volts for a wanted x, y, and the region the limits allow.">
+    <ToolPage
+      slug="mixing"
+      lead="Two benders meeting at one tip: the drive matrix, the volts for a wanted x, y, and the region the limits allow."
+    >
       <ToolColumns
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
@@ -32,7 +38,13 @@ export function MixingPage() {
               <PairPreset form={form} />
               <GridFitPanel form={form} />
             </fieldset>
-            <FieldGroup legend="Drive limits" pairs note={limitsError ? <span className="font-medium text-danger">{limitsError}</span> : 'What the amplifier may put on each bender.'}>
+            <FieldGroup
+              legend="Drive limits"
+              pairs
+              note={
+                limitsError ? <span className="font-medium text-danger">{limitsError}</span> : 'What the amplifier may put on each bender.'
+              }
+            >
               <FormNumber form={form} name="limits.vaMinV" label="Va minimum" unit="V" />
               <FormNumber form={form} name="limits.vaMaxV" label="Va maximum" unit="V" />
               <FormNumber form={form} name="limits.vbMinV" label="Vb minimum" unit="V" />
@@ -49,7 +61,10 @@ export function MixingPage() {
             <>
               <ResultNotesBlock r={live.result} />
               <MixingResults r={live.result} />
-              <ChartFrame label="Reachable region" caption="Teal: every tip position the drive limits allow. The wanted point is a copper dot when reachable, a red cross when not; the black dot is the origin.">
+              <ChartFrame
+                label="Reachable region"
+                caption="Teal: every tip position the drive limits allow. The wanted point is a copper dot when reachable, a red cross when not; the black dot is the origin."
+              >
                 <LazyMixerChart region={live.result.regionNm} target={live.result.target} />
               </ChartFrame>
             </>

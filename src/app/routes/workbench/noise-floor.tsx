@@ -29,14 +29,31 @@ export function NoiseFloorPage() {
   const { form, live } = useLiveForm(noiseFloorForm, defaults, noiseFloorCalculator.compute);
   const r = live.ok ? live.result : null;
   return (
-    <ToolPage slug="noise-floor" lead="How much the tip moves, or seems to, with nothing commanded: amplifier noise, DAC steps and the lever's thermal motion, added up.">
+    <ToolPage
+      slug="noise-floor"
+      lead="How much the tip moves, or seems to, with nothing commanded: amplifier noise, DAC steps and the lever's thermal motion, added up."
+    >
       <ToolColumns
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
             <FieldGroup legend="Actuator and amplifier">
               <FormNumber form={form} name="actuatorGainNmPerV" label="Actuator gain" unit="nm/V" hint="From a calibration run." />
-              <FormNumber form={form} name="ampGainVPerV" label="Amplifier gain" unit="V/V" optional hint="1 if the DAC drives the actuator directly." />
-              <FormNumber form={form} name="noiseDensityNvPerRtHz" label="Input noise density e_n" unit="nV/√Hz" optional hint="Referred to the amplifier's input." />
+              <FormNumber
+                form={form}
+                name="ampGainVPerV"
+                label="Amplifier gain"
+                unit="V/V"
+                optional
+                hint="1 if the DAC drives the actuator directly."
+              />
+              <FormNumber
+                form={form}
+                name="noiseDensityNvPerRtHz"
+                label="Input noise density e_n"
+                unit="nV/√Hz"
+                optional
+                hint="Referred to the amplifier's input."
+              />
               <FormQuantity
                 form={form}
                 name="bandwidth"
@@ -63,14 +80,21 @@ export function NoiseFloorPage() {
               <ResultNotesBlock r={r} />
               <ResultPanel
                 headline={
-                  <Headline label="Noise at the tip (rms)" sub={`${sourceLabels[r.dominant].label} dominates: ${formatFixed(r.dominantPowerSharePct, 0)} % of the noise power.`}>
+                  <Headline
+                    label="Noise at the tip (rms)"
+                    sub={`${sourceLabels[r.dominant].label} dominates: ${formatFixed(r.dominantPowerSharePct, 0)} % of the noise power.`}
+                  >
                     <Quantity q={formatLengthNm(r.totalNoiseNm)} />
                   </Headline>
                 }
                 basis="Independent sources add in power: total = √(Σ xᵢ²) (calculated)."
               >
                 {r.terms.map((t) => (
-                  <ResultRow key={t.source} label={sourceLabels[t.source].label} note={`${sourceLabels[t.source].note} ${formatFixed(t.powerSharePct, 1)} % of the noise power.`}>
+                  <ResultRow
+                    key={t.source}
+                    label={sourceLabels[t.source].label}
+                    note={`${sourceLabels[t.source].note} ${formatFixed(t.powerSharePct, 1)} % of the noise power.`}
+                  >
                     <Quantity q={formatLengthNm(t.noiseNm)} />
                   </ResultRow>
                 ))}

@@ -17,14 +17,29 @@ export function PeakToPeakPage() {
   const unit = displacementUnitLabels[form.watch('unit') ?? 'nm'];
   const r = live.ok ? live.result : null;
   return (
-    <ToolPage slug="peak-to-peak" lead="Drive the actuator with a slow sine and read the swing at its peaks: one gain, good to the reading resolution.">
+    <ToolPage
+      slug="peak-to-peak"
+      lead="Drive the actuator with a slow sine and read the swing at its peaks: one gain, good to the reading resolution."
+    >
       <ToolColumns
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
             <FieldGroup legend="Displacement reading">
-              <FormSelect form={form} name="unit" label="Indicator reads in" options={displacementOptions} hint="Changing it converts the numbers below." />
+              <FormSelect
+                form={form}
+                name="unit"
+                label="Indicator reads in"
+                options={displacementOptions}
+                hint="Changing it converts the numbers below."
+              />
               <FormNumber form={form} name="displacementPp" label="Peak-to-peak swing Δx" unit={unit} />
-              <FormNumber form={form} name="displacementResolution" label="Reading resolution" unit={unit} hint="Smallest division you can read." />
+              <FormNumber
+                form={form}
+                name="displacementResolution"
+                label="Reading resolution"
+                unit={unit}
+                hint="Smallest division you can read."
+              />
             </FieldGroup>
             <FieldGroup legend="Drive">
               <FormNumber form={form} name="voltsPpV" label="Peak-to-peak voltage ΔV" unit="V" />
@@ -35,16 +50,30 @@ export function PeakToPeakPage() {
         results={
           r ? (
             <>
-            <ResultNotesBlock r={r} />
-            <ResultPanel
-              headline={<Headline label="Gain" sub="± standard uncertainty (k = 1, GUM) from the reading resolution."><Gain value={r.gainNmPerV} plusMinus={r.gainStdUncNmPerV} kind="std" /></Headline>}
-              basis="gain = Δx_pp / ΔV_pp (common practice); each reading rectangular within ± half a division, so the difference of two readings has u = r/√6, relative uncertainties in quadrature (Source: GUM, JCGM 100:2008, 4.3.7 and 5.1.2)."
-            >
-              <ResultRow label="Relative uncertainty"><Quantity q={{ value: formatSig(r.gainRelStdUnc * 100, 3), unit: '%' }} /></ResultRow>
-              <ResultRow label="Worst-case bounds" note="Each reading off by half a division in the unlucky direction, so each swing off by one division.">
-                <span className="whitespace-nowrap"><span className="num">{formatSig(r.gainBoundsNmPerV[0])} – {formatSig(r.gainBoundsNmPerV[1])}</span> nm/V</span>
-              </ResultRow>
-            </ResultPanel>
+              <ResultNotesBlock r={r} />
+              <ResultPanel
+                headline={
+                  <Headline label="Gain" sub="± standard uncertainty (k = 1, GUM) from the reading resolution.">
+                    <Gain value={r.gainNmPerV} plusMinus={r.gainStdUncNmPerV} kind="std" />
+                  </Headline>
+                }
+                basis="gain = Δx_pp / ΔV_pp (common practice); each reading rectangular within ± half a division, so the difference of two readings has u = r/√6, relative uncertainties in quadrature (Source: GUM, JCGM 100:2008, 4.3.7 and 5.1.2)."
+              >
+                <ResultRow label="Relative uncertainty">
+                  <Quantity q={{ value: formatSig(r.gainRelStdUnc * 100, 3), unit: '%' }} />
+                </ResultRow>
+                <ResultRow
+                  label="Worst-case bounds"
+                  note="Each reading off by half a division in the unlucky direction, so each swing off by one division."
+                >
+                  <span className="whitespace-nowrap">
+                    <span className="num">
+                      {formatSig(r.gainBoundsNmPerV[0])} – {formatSig(r.gainBoundsNmPerV[1])}
+                    </span>{' '}
+                    nm/V
+                  </span>
+                </ResultRow>
+              </ResultPanel>
             </>
           ) : (
             <NoResult message={live.ok ? '' : live.message} />

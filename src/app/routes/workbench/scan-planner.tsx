@@ -10,8 +10,15 @@ import { scanPlanCalculator } from '@shared/workbench/calculators/scan-plan-calc
 import { ScanResults } from '@/features/workbench/scan/scan-results.tsx';
 
 const defaults = {
-  dacBits: 16, dacSpanV: 10, ampGainVPerV: 30, actuatorGainNmPerV: 102.6,
-  pixelsPerLine: 256, lines: 256, lineRateHz: 1, scanSizeNm: 5000, resonanceKhz: 1.89,
+  dacBits: 16,
+  dacSpanV: 10,
+  ampGainVPerV: 30,
+  actuatorGainNmPerV: 102.6,
+  pixelsPerLine: 256,
+  lines: 256,
+  lineRateHz: 1,
+  scanSizeNm: 5000,
+  resonanceKhz: 1.89,
 };
 
 /** The shared calculator's result, with the parsed plan the chart marks. */
@@ -26,7 +33,13 @@ export function ScanPlannerPage() {
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
             <FieldGroup legend="Drive chain">
               <FormNumber form={form} name="dacBits" label="DAC resolution" unit="bit" step="1" />
-              <FormNumber form={form} name="dacSpanV" label="DAC output span" unit="V" hint="Full swing, e.g. 10 for 0–10 V or 20 for ±10 V." />
+              <FormNumber
+                form={form}
+                name="dacSpanV"
+                label="DAC output span"
+                unit="V"
+                hint="Full swing, e.g. 10 for 0–10 V or 20 for ±10 V."
+              />
               <FormNumber form={form} name="ampGainVPerV" label="Amplifier gain" unit="V/V" />
               <FormNumber form={form} name="actuatorGainNmPerV" label="Actuator gain" unit="nm/V" hint="Measured, from a gain fit." />
             </FieldGroup>
@@ -37,7 +50,14 @@ export function ScanPlannerPage() {
               <FormNumber form={form} name="scanSizeNm" label="Scan size" unit="nm" optional />
             </FieldGroup>
             <FieldGroup legend="Limits">
-              <FormNumber form={form} name="resonanceKhz" label="First resonance f₀" unit="kHz" optional hint="From the resonance page or a measurement." />
+              <FormNumber
+                form={form}
+                name="resonanceKhz"
+                label="First resonance f₀"
+                unit="kHz"
+                optional
+                hint="From the resonance page or a measurement."
+              />
               <FormNumber form={form} name="wantedStepNm" label="Wanted step" unit="nm" optional />
             </FieldGroup>
           </form>
@@ -47,8 +67,16 @@ export function ScanPlannerPage() {
             <>
               <SafetyNotice cautions={live.result.r.cautions} crossed={live.result.r.levelsCrossed} />
               <ScanResults r={live.result.r} plan={live.result.plan} />
-              <ChartFrame label="Step against DAC bits" caption="Copper dot: your DAC. Each extra bit halves the step; the range stays the same.">
-                <LazyScanChart steps={live.result.r.steps} bits={live.result.plan.dacBits} wantedStepNm={live.result.plan.wantedStepNm} pixelNm={live.result.r.pixelNm ?? undefined} />
+              <ChartFrame
+                label="Step against DAC bits"
+                caption="Copper dot: your DAC. Each extra bit halves the step; the range stays the same."
+              >
+                <LazyScanChart
+                  steps={live.result.r.steps}
+                  bits={live.result.plan.dacBits}
+                  wantedStepNm={live.result.plan.wantedStepNm}
+                  pixelNm={live.result.r.pixelNm ?? undefined}
+                />
               </ChartFrame>
             </>
           ) : (

@@ -9,14 +9,29 @@ import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { usePresetField } from '@/features/workbench/form/use-preset.ts';
 import { tubeCalculator } from '@shared/workbench/calculators/tube-calculator.ts';
 
-const defaults = { preset: 'PZT-5H', lengthMm: 12.7, outerDiameterMm: 6.35, wallMm: 0.508, relPermittivity: 3400, youngsModulusGpa: 60.6, densityKgPerM3: 7500 } as const;
+const defaults = {
+  preset: 'PZT-5H',
+  lengthMm: 12.7,
+  outerDiameterMm: 6.35,
+  wallMm: 0.508,
+  relPermittivity: 3400,
+  youngsModulusGpa: 60.6,
+  densityKgPerM3: 7500,
+} as const;
 
 export function TubePage() {
   const { form, live } = useLiveForm(tubeForm, defaults, tubeCalculator.compute);
-  const { registration: presetField, preset } = usePresetField(form, tubePresets, (p) => ({ relPermittivity: p.relPermittivity, youngsModulusGpa: p.eGpa, densityKgPerM3: p.rho }));
+  const { registration: presetField, preset } = usePresetField(form, tubePresets, (p) => ({
+    relPermittivity: p.relPermittivity,
+    youngsModulusGpa: p.eGpa,
+    densityKgPerM3: p.rho,
+  }));
   const r = live.ok ? live.result : null;
   return (
-    <ToolPage slug="tube" lead="A quartered piezo tube: the capacitance each quadrant puts on the amplifier, and the first bending and axial resonances of the tube clamped at one end.">
+    <ToolPage
+      slug="tube"
+      lead="A quartered piezo tube: the capacitance each quadrant puts on the amplifier, and the first bending and axial resonances of the tube clamped at one end."
+    >
       <ToolColumns
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
@@ -40,11 +55,19 @@ export function TubePage() {
             <>
               <ResultWarnings warnings={r.warnings} />
               <ResultPanel
-                headline={<Headline label="Capacitance of one quadrant"><Quantity q={formatSi(r.quadrantCapacitanceF, 'F')} /></Headline>}
+                headline={
+                  <Headline label="Capacitance of one quadrant">
+                    <Quantity q={formatSi(r.quadrantCapacitanceF, 'F')} />
+                  </Headline>
+                }
                 basis="Coaxial capacitance C = 2π·ε0·εr·L/ln(OD/ID): recalled formula, not yet checked against a source; a quadrant is a quarter of it, the gaps between electrodes neglected (calculated). Bending: Euler–Bernoulli cantilever f₁ = (1.8751²/2π)·√(EI/ρAL⁴) with I = π(OD⁴−ID⁴)/64, A = π(OD²−ID²)/4 (Source: Rao, Mechanical Vibrations; Timoshenko). Axial: f = (1/4L)·√(E/ρ) for a rod clamped at one end (Source: Rao, Mechanical Vibrations; equation number recalled, not yet checked)."
               >
-                <ResultRow label="Whole tube (all quadrants together)"><Quantity q={formatSi(r.tubeCapacitanceF, 'F')} /></ResultRow>
-                <ResultRow label="Inner diameter"><Quantity q={{ value: formatSig(r.innerDiameterMm), unit: 'mm' }} /></ResultRow>
+                <ResultRow label="Whole tube (all quadrants together)">
+                  <Quantity q={formatSi(r.tubeCapacitanceF, 'F')} />
+                </ResultRow>
+                <ResultRow label="Inner diameter">
+                  <Quantity q={{ value: formatSig(r.innerDiameterMm), unit: 'mm' }} />
+                </ResultRow>
                 <ResultRow label="First bending resonance" note="Sets the lateral scan speed.">
                   <Quantity q={formatSi(r.bendingModeHz, 'Hz')} />
                 </ResultRow>
@@ -56,7 +79,11 @@ export function TubePage() {
                 </ResultRow>
               </ResultPanel>
               <p className="text-sm text-ink-soft">
-                Take the quadrant capacitance to <Link className="text-teal-dark underline" to={paths.workbenchTool('drive-limits')}>drive limits</Link> for what the amplifier must deliver.
+                Take the quadrant capacitance to{' '}
+                <Link className="text-teal-dark underline" to={paths.workbenchTool('drive-limits')}>
+                  drive limits
+                </Link>{' '}
+                for what the amplifier must deliver.
               </p>
             </>
           ) : (

@@ -15,23 +15,44 @@ export function TunnellingPage() {
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
             <FieldGroup legend="Barrier">
-              <FormNumber form={form} name="workFunctionEv" label="Work function φ" unit="eV" hint="Effective barrier height of the junction." />
-              <FormNumber form={form} name="wantedRatio" label="Wanted current ratio per Å" unit="×" optional hint="Finds the barrier that gives it." />
+              <FormNumber
+                form={form}
+                name="workFunctionEv"
+                label="Work function φ"
+                unit="eV"
+                hint="Effective barrier height of the junction."
+              />
+              <FormNumber
+                form={form}
+                name="wantedRatio"
+                label="Wanted current ratio per Å"
+                unit="×"
+                optional
+                hint="Finds the barrier that gives it."
+              />
             </FieldGroup>
           </form>
         }
         results={
           r ? (
             <ResultPanel
-              headline={<Headline label="Current change per ångström of gap"><span className="num">×{formatSig(r.currentRatioPerAngstrom, 3)}</span></Headline>}
+              headline={
+                <Headline label="Current change per ångström of gap">
+                  <span className="num">×{formatSig(r.currentRatioPerAngstrom, 3)}</span>
+                </Headline>
+              }
               basis="I ∝ exp(−2κd), κ = √(2·mₑ·φ)/ħ ≈ 0.5123·√(φ/eV) Å⁻¹ — one-dimensional WKB, constants CODATA 2018 (recalled formula, not yet checked against a source)."
             >
-              <ResultRow label="Decay constant κ"><Quantity q={{ value: formatSig(r.decayConstantPerAngstrom), unit: 'Å⁻¹' }} /></ResultRow>
+              <ResultRow label="Decay constant κ">
+                <Quantity q={{ value: formatSig(r.decayConstantPerAngstrom), unit: 'Å⁻¹' }} />
+              </ResultRow>
               <ResultRow label="Gap change per decade of current" note="ln 10 / 2κ: a tenfold current change.">
                 <Quantity q={{ value: formatSig(r.gapChangePerDecadeAngstrom), unit: 'Å' }} />
               </ResultRow>
               {r.workFunctionForWantedRatioEv !== null && (
-                <ResultRow label="Barrier for the wanted ratio"><Quantity q={{ value: formatSig(r.workFunctionForWantedRatioEv, 3), unit: 'eV' }} /></ResultRow>
+                <ResultRow label="Barrier for the wanted ratio">
+                  <Quantity q={{ value: formatSig(r.workFunctionForWantedRatioEv, 3), unit: 'eV' }} />
+                </ResultRow>
               )}
             </ResultPanel>
           ) : (

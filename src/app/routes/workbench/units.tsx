@@ -7,9 +7,16 @@ import { computeUnits, unitsForm } from '@/features/workbench/simple/units-form.
 import { displacementOptions, gainOptions, voltageOptions } from '@/features/workbench/unit-options.ts';
 
 export function UnitsPage() {
-  const { form, live } = useLiveForm(unitsForm, { length: { value: 1, from: 'mil' }, voltage: { value: 250, from: 'mV' }, gain: { value: 1, from: 'uin/V' } }, computeUnits);
+  const { form, live } = useLiveForm(
+    unitsForm,
+    { length: { value: 1, from: 'mil' }, voltage: { value: 250, from: 'mV' }, gain: { value: 1, from: 'uin/V' } },
+    computeUnits,
+  );
   return (
-    <ToolPage slug="units" lead="Dial indicators read in µm or mil, datasheets in µin, lattices in Å: convert displacements, voltages and gains.">
+    <ToolPage
+      slug="units"
+      lead="Dial indicators read in µm or mil, datasheets in µin, lattices in Å: convert displacements, voltages and gains."
+    >
       <ToolColumns
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
@@ -30,19 +37,31 @@ export function UnitsPage() {
         results={
           live.ok ? (
             <>
-              <ResultPanel title="Displacement" basis="1 in = 25.4 mm exactly (Source: NBS Circular 572 addendum, 1960), so 1 µin = 25.4 nm and 1 mil = 25.4 µm; 1 Å = 0.1 nm.">
+              <ResultPanel
+                title="Displacement"
+                basis="1 in = 25.4 mm exactly (Source: NBS Circular 572 addendum, 1960), so 1 µin = 25.4 nm and 1 mil = 25.4 µm; 1 Å = 0.1 nm."
+              >
                 {live.result.lengths.map((l) => (
-                  <ResultRow key={l.unit} label={`in ${l.label}`}><Quantity q={{ value: formatSig(l.value, 6), unit: l.label }} /></ResultRow>
+                  <ResultRow key={l.unit} label={`in ${l.label}`}>
+                    <Quantity q={{ value: formatSig(l.value, 6), unit: l.label }} />
+                  </ResultRow>
                 ))}
               </ResultPanel>
               <ResultPanel title="Voltage">
                 {live.result.voltages.map((v) => (
-                  <ResultRow key={v.unit} label={`in ${v.label}`}><Quantity q={{ value: formatSig(v.value, 6), unit: v.label }} /></ResultRow>
+                  <ResultRow key={v.unit} label={`in ${v.label}`}>
+                    <Quantity q={{ value: formatSig(v.value, 6), unit: v.label }} />
+                  </ResultRow>
                 ))}
               </ResultPanel>
-              <ResultPanel title="Gain" basis="The volt is common to every gain unit, so a gain converts as its length does: 1 µin/V = 25.4 nm/V, 1 Å/V = 0.1 nm/V.">
+              <ResultPanel
+                title="Gain"
+                basis="The volt is common to every gain unit, so a gain converts as its length does: 1 µin/V = 25.4 nm/V, 1 Å/V = 0.1 nm/V."
+              >
                 {live.result.gains.map((g) => (
-                  <ResultRow key={g.unit} label={`in ${g.label}`}><Quantity q={{ value: formatSig(g.value, 6), unit: g.label }} /></ResultRow>
+                  <ResultRow key={g.unit} label={`in ${g.label}`}>
+                    <Quantity q={{ value: formatSig(g.value, 6), unit: g.label }} />
+                  </ResultRow>
                 ))}
               </ResultPanel>
             </>

@@ -13,7 +13,10 @@ export function WorkbenchIndexPage() {
       <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
         {workbenchTools.map((tool) => (
           <li key={tool.slug}>
-            <Link to={paths.workbenchTool(tool.slug)} className="block h-full rounded-lg border border-rule bg-white p-4 hover:border-copper">
+            <Link
+              to={paths.workbenchTool(tool.slug)}
+              className="block h-full rounded-lg border border-rule bg-white p-4 hover:border-copper"
+            >
               <h2 className="font-semibold">{tool.title}</h2>
               <p className="mt-1 text-sm text-ink-soft">{tool.line}</p>
             </Link>

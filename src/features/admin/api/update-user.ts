@@ -7,7 +7,8 @@ import { adminUserQueries } from './list-users.ts';
 export function useSetUserRole() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ userId, role }: { userId: number } & SetRoleInput) => api.patch<AdminUserDto>(`/api/admin/users/${userId}/role`, { role }),
+    mutationFn: ({ userId, role }: { userId: number } & SetRoleInput) =>
+      api.patch<AdminUserDto>(`/api/admin/users/${userId}/role`, { role }),
     onSuccess: () => qc.invalidateQueries({ queryKey: adminUserQueries.all }),
   });
 }

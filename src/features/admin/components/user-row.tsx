@@ -23,7 +23,9 @@ export function UserRow({ user, isSelf }: { user: AdminUserDto; isSelf: boolean 
         </div>
       </td>
       <td className="py-2 pr-3">
-        <label className="sr-only" htmlFor={`role-${user.id}`}>Role of {user.login}</label>
+        <label className="sr-only" htmlFor={`role-${user.id}`}>
+          Role of {user.login}
+        </label>
         <select
           id={`role-${user.id}`}
           className="rounded border border-rule bg-white px-2 py-1 text-sm"
@@ -31,7 +33,11 @@ export function UserRow({ user, isSelf }: { user: AdminUserDto; isSelf: boolean 
           disabled={isSelf || setRole.isPending}
           onChange={(e) => setRole.mutate({ userId: user.id, role: e.target.value as Role })}
         >
-          {ROLES.map((r) => <option key={r} value={r}>{r}</option>)}
+          {ROLES.map((r) => (
+            <option key={r} value={r}>
+              {r}
+            </option>
+          ))}
         </select>
       </td>
       <td className="num py-2 pr-3 text-sm">{day(user.createdAt)}</td>
@@ -48,7 +54,11 @@ export function UserRow({ user, isSelf }: { user: AdminUserDto; isSelf: boolean 
             {user.suspended ? 'Reinstate' : 'Suspend'}
           </Button>
         )}
-        {error && <p role="alert" className="mt-1 text-xs text-danger">{error.message}</p>}
+        {error && (
+          <p role="alert" className="mt-1 text-xs text-danger">
+            {error.message}
+          </p>
+        )}
       </td>
     </tr>
   );

@@ -16,7 +16,8 @@ export function useCreateActuator(buildId: number) {
 export function useUpdateActuator() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ actuatorId, ...input }: UpdateActuatorInput & { actuatorId: number }) => api.patch<ActuatorDto>(`/api/actuators/${actuatorId}`, input),
+    mutationFn: ({ actuatorId, ...input }: UpdateActuatorInput & { actuatorId: number }) =>
+      api.patch<ActuatorDto>(`/api/actuators/${actuatorId}`, input),
     onSuccess: () => qc.invalidateQueries({ queryKey: buildQueries.all }),
   });
 }

@@ -12,5 +12,6 @@ export const buildQueries = {
       placeholderData: keepPreviousData,
     }),
   mine: () => queryOptions({ queryKey: ['builds', 'mine'] as const, queryFn: () => api.get<BuildListDto>('/api/builds/mine') }),
-  detail: (id: number) => queryOptions({ queryKey: ['builds', 'detail', id] as const, queryFn: () => api.get<BuildDto>(`/api/builds/${id}`) }),
+  detail: (id: number) =>
+    queryOptions({ queryKey: ['builds', 'detail', id] as const, queryFn: () => api.get<BuildDto>(`/api/builds/${id}`) }),
 };

@@ -16,7 +16,8 @@ export function useCreateEntry(buildId: number) {
 export function useUpdateEntry(buildId: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ entryId, ...input }: UpdateEntryInput & { entryId: number }) => api.patch<LogEntryDto>(`/api/builds/${buildId}/entries/${entryId}`, input),
+    mutationFn: ({ entryId, ...input }: UpdateEntryInput & { entryId: number }) =>
+      api.patch<LogEntryDto>(`/api/builds/${buildId}/entries/${entryId}`, input),
     onSuccess: () => qc.invalidateQueries({ queryKey: buildQueries.all }),
   });
 }

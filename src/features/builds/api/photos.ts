@@ -7,7 +7,8 @@ import { buildQueries } from './build-queries.ts';
 export function useUpdatePhoto(buildId: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ photoId, ...input }: UpdatePhotoInput & { photoId: number }) => api.patch<PhotoDto>(`/api/builds/${buildId}/photos/${photoId}`, input),
+    mutationFn: ({ photoId, ...input }: UpdatePhotoInput & { photoId: number }) =>
+      api.patch<PhotoDto>(`/api/builds/${buildId}/photos/${photoId}`, input),
     onSuccess: () => qc.invalidateQueries({ queryKey: buildQueries.all }),
   });
 }

@@ -11,5 +11,6 @@ export const inboxQueries = {
       queryFn: async () => (await api.get<{ threads: ThreadSummaryDto[] }>('/api/inbox')).threads,
       staleTime: 10_000,
     }),
-  thread: (id: number) => queryOptions({ queryKey: ['inbox', 'thread', id] as const, queryFn: () => api.get<ThreadDto>(`/api/inbox/${id}`), staleTime: 0 }),
+  thread: (id: number) =>
+    queryOptions({ queryKey: ['inbox', 'thread', id] as const, queryFn: () => api.get<ThreadDto>(`/api/inbox/${id}`), staleTime: 0 }),
 };

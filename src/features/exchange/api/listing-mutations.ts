@@ -19,7 +19,9 @@ function useListingWrite<V>(send: (v: V) => Promise<ListingDto>) {
 export const useCreateListing = () => useListingWrite((input: CreateListingInput) => api.post<ListingDto>('/api/listings', input));
 
 /** The owner edits a listing or moves it open → reserved → closed. */
-export const useUpdateListing = (id: number) => useListingWrite((input: UpdateListingInput) => api.patch<ListingDto>(`/api/listings/${id}`, input));
+export const useUpdateListing = (id: number) =>
+  useListingWrite((input: UpdateListingInput) => api.patch<ListingDto>(`/api/listings/${id}`, input));
 
 /** A moderator hides a listing (or shows it again), with a note for the audit trail. */
-export const useHideListing = (id: number) => useListingWrite((input: HideListingInput) => api.post<ListingDto>(`/api/listings/${id}/visibility`, input));
+export const useHideListing = (id: number) =>
+  useListingWrite((input: HideListingInput) => api.post<ListingDto>(`/api/listings/${id}/visibility`, input));

@@ -12,5 +12,6 @@ export const listingQueries = {
       placeholderData: keepPreviousData,
     }),
   mine: () => queryOptions({ queryKey: ['listings', 'mine'] as const, queryFn: () => api.get<ListingListDto>('/api/listings/mine') }),
-  detail: (id: number) => queryOptions({ queryKey: ['listings', 'detail', id] as const, queryFn: () => api.get<ListingDto>(`/api/listings/${id}`) }),
+  detail: (id: number) =>
+    queryOptions({ queryKey: ['listings', 'detail', id] as const, queryFn: () => api.get<ListingDto>(`/api/listings/${id}`) }),
 };

@@ -24,12 +24,22 @@ export function ListingCard({ listing: l }: { listing: ListingDto }) {
           </Link>
         </h2>
         <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-sm">
-          <dt className="text-ink-soft">Condition</dt><dd>{listingConditionLabels[l.condition]}</dd>
-          <dt className="text-ink-soft">Price</dt><dd className={l.priceKind === 'price' ? 'num' : 'font-medium text-teal-dark'}>{l.priceLabel}</dd>
-          <dt className="text-ink-soft">Region</dt><dd>{l.region}</dd>
-          {l.shipsTo && <><dt className="text-ink-soft">Ships to</dt><dd>{l.shipsTo}</dd></>}
+          <dt className="text-ink-soft">Condition</dt>
+          <dd>{listingConditionLabels[l.condition]}</dd>
+          <dt className="text-ink-soft">Price</dt>
+          <dd className={l.priceKind === 'price' ? 'num' : 'font-medium text-teal-dark'}>{l.priceLabel}</dd>
+          <dt className="text-ink-soft">Region</dt>
+          <dd>{l.region}</dd>
+          {l.shipsTo && (
+            <>
+              <dt className="text-ink-soft">Ships to</dt>
+              <dd>{l.shipsTo}</dd>
+            </>
+          )}
         </dl>
-        <p className="mt-auto pt-1 text-xs text-ink-soft">by <span className="font-medium text-ink">{l.owner.login}</span></p>
+        <p className="mt-auto pt-1 text-xs text-ink-soft">
+          by <span className="font-medium text-ink">{l.owner.login}</span>
+        </p>
       </div>
     </article>
   );

@@ -24,17 +24,29 @@ export function ListingDetails({ listing: l }: { listing: ListingDto }) {
       <ListingPhotos listing={l} />
       <dl className="rounded-lg border border-rule bg-white px-3 py-1">
         <Row label="Part">
-          <Link to={paths.part(l.part.id)} className="text-copper-dark underline decoration-copper/40 underline-offset-2">{l.part.name}</Link>
+          <Link to={paths.part(l.part.id)} className="text-copper-dark underline decoration-copper/40 underline-offset-2">
+            {l.part.name}
+          </Link>
           <span className="text-ink-soft"> · {partCategoryLabels[l.part.category]}</span>
-          {l.part.gainMedianNmPerV !== null && <span className="block text-xs text-ink-soft">registry median <span className="num text-ink">{formatShort(l.part.gainMedianNmPerV)} nm/V</span></span>}
+          {l.part.gainMedianNmPerV !== null && (
+            <span className="block text-xs text-ink-soft">
+              registry median <span className="num text-ink">{formatShort(l.part.gainMedianNmPerV)} nm/V</span>
+            </span>
+          )}
         </Row>
-        <Row label="Quantity"><span className="num">{l.quantity}</span></Row>
+        <Row label="Quantity">
+          <span className="num">{l.quantity}</span>
+        </Row>
         <Row label="Condition">{listingConditionLabels[l.condition]}</Row>
-        <Row label="Price"><span className={l.priceKind === 'price' ? 'num' : 'font-medium text-teal-dark'}>{l.priceLabel}</span></Row>
+        <Row label="Price">
+          <span className={l.priceKind === 'price' ? 'num' : 'font-medium text-teal-dark'}>{l.priceLabel}</span>
+        </Row>
         <Row label="Region">{l.region}</Row>
         <Row label="Ships to">{l.shipsTo ?? <span className="text-ink-soft">not stated</span>}</Row>
         <Row label="Posted by">{l.owner.login}</Row>
-        <Row label="Posted"><span className="num">{formatDay(l.createdAt)}</span></Row>
+        <Row label="Posted">
+          <span className="num">{formatDay(l.createdAt)}</span>
+        </Row>
       </dl>
       {l.notes && (
         <div className="rounded-lg border border-rule bg-white p-3">

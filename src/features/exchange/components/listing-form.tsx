@@ -1,7 +1,13 @@
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { createListingInput, LISTING_CONDITIONS, LISTING_KINDS, listingConditionLabels, type CreateListingInput } from '@shared/schemas/listing.ts';
+import {
+  createListingInput,
+  LISTING_CONDITIONS,
+  LISTING_KINDS,
+  listingConditionLabels,
+  type CreateListingInput,
+} from '@shared/schemas/listing.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { applyServerErrors, describe, Field, FormError, inputClass, textOrUndefined } from '@/components/ui/form-bits.tsx';
 import { PartPicker } from './part-picker.tsx';
@@ -11,10 +17,35 @@ type Values = z.input<typeof createListingInput>;
 const FIELDS = ['partId', 'kind', 'quantity', 'condition', 'priceKind', 'priceAmount', 'currency', 'region', 'shipsTo', 'notes'] as const;
 
 /** The listing form, for a new listing and for the owner's edits: part, kind, quantity, condition, price, where, notes. */
-export function ListingForm({ defaults, submitLabel, onSave }: { defaults?: Partial<Values>; submitLabel: string; onSave: (input: CreateListingInput) => Promise<unknown> }) {
-  const { register, handleSubmit, setError, control, formState: { errors, isSubmitting } } = useForm<Values, unknown, CreateListingInput>({
+export function ListingForm({
+  defaults,
+  submitLabel,
+  onSave,
+}: {
+  defaults?: Partial<Values>;
+  submitLabel: string;
+  onSave: (input: CreateListingInput) => Promise<unknown>;
+}) {
+  const {
+    register,
+    handleSubmit,
+    setError,
+    control,
+    formState: { errors, isSubmitting },
+  } = useForm<Values, unknown, CreateListingInput>({
     resolver: zodResolver(createListingInput),
-    defaultValues: { kind: 'offering', quantity: 1, condition: 'salvaged-tested', priceKind: 'free', priceAmount: null, currency: 'EUR', region: '', shipsTo: '', notes: '', ...defaults },
+    defaultValues: {
+      kind: 'offering',
+      quantity: 1,
+      condition: 'salvaged-tested',
+      priceKind: 'free',
+      priceAmount: null,
+      currency: 'EUR',
+      region: '',
+      shipsTo: '',
+      notes: '',
+      ...defaults,
+    },
   });
   const priceKind = useWatch({ control, name: 'priceKind' });
   const text = { setValueAs: textOrUndefined };
@@ -30,7 +61,17 @@ export function ListingForm({ defaults, submitLabel, onSave }: { defaults?: Part
 
   return (
     <form onSubmit={submit} noValidate className="max-w-3xl space-y-5">
-      <Controller control={control} name="partId" render={({ field }) => <PartPicker value={field.value} onChange={field.onChange} error={errors.partId && (errors.partId.type === 'server' ? errors.partId.message : 'Choose a part from the registry.')} />} />
+      <Controller
+        control={control}
+        name="partId"
+        render={({ field }) => (
+          <PartPicker
+            value={field.value}
+            onChange={field.onChange}
+            error={errors.partId && (errors.partId.type === 'server' ? errors.partId.message : 'Choose a part from the registry.')}
+          />
+        )}
+      />
       <fieldset>
         <legend className="mb-1 text-sm font-medium">Offering or seeking</legend>
         <div className="flex flex-wrap gap-4">
@@ -44,28 +85,70 @@ export function ListingForm({ defaults, submitLabel, onSave }: { defaults?: Part
       </fieldset>
       <div className="grid gap-4 sm:grid-cols-[8rem_1fr]">
         <Field id="listing-quantity" label="Quantity" error={errors.quantity && 'A whole number from 1 to 10 000.'}>
-          <input id="listing-quantity" type="number" inputMode="numeric" min={1} step={1} className={`${inputClass} num`} {...describe('listing-quantity', errors.quantity?.message)} {...register('quantity', { valueAsNumber: true })} />
+          <input
+            id="listing-quantity"
+            type="number"
+            inputMode="numeric"
+            min={1}
+            step={1}
+            className={`${inputClass} num`}
+            {...describe('listing-quantity', errors.quantity?.message)}
+            {...register('quantity', { valueAsNumber: true })}
+          />
         </Field>
         <Field id="listing-condition" label="Condition" error={errors.condition?.message}>
           <select id="listing-condition" className={inputClass} {...register('condition')}>
-            {LISTING_CONDITIONS.map((c) => <option key={c} value={c}>{listingConditionLabels[c]}</option>)}
+            {LISTING_CONDITIONS.map((c) => (
+              <option key={c} value={c}>
+                {listingConditionLabels[c]}
+              </option>
+            ))}
           </select>
         </Field>
       </div>
       <PriceFields register={register} errors={errors} priceKind={priceKind} />
       <div className="grid gap-4 sm:grid-cols-2">
-        <Field id="listing-region" label="Region" hint="Town or area, so people can judge shipping." error={errors.region && 'Give a region of 2 to 80 characters.'}>
-          <input id="listing-region" className={inputClass} autoComplete="address-level2" {...describe('listing-region', errors.region?.message, true)} {...register('region')} />
+        <Field
+          id="listing-region"
+          label="Region"
+          hint="Town or area, so people can judge shipping."
+          error={errors.region && 'Give a region of 2 to 80 characters.'}
+        >
+          <input
+            id="listing-region"
+            className={inputClass}
+            autoComplete="address-level2"
+            {...describe('listing-region', errors.region?.message, true)}
+            {...register('region')}
+          />
         </Field>
         <Field id="listing-ships" label="Ships to" hint="e.g. EU, UK only, worldwide, collection only." error={errors.shipsTo?.message}>
-          <input id="listing-ships" className={inputClass} {...describe('listing-ships', errors.shipsTo?.message, true)} {...register('shipsTo', text)} />
+          <input
+            id="listing-ships"
+            className={inputClass}
+            {...describe('listing-ships', errors.shipsTo?.message, true)}
+            {...register('shipsTo', text)}
+          />
         </Field>
       </div>
-      <Field id="listing-notes" label="Notes" hint="Tested how, what's wrong with them, what you'd swap for. Markdown works." error={errors.notes?.message}>
-        <textarea id="listing-notes" rows={5} className={inputClass} {...describe('listing-notes', errors.notes?.message, true)} {...register('notes', text)} />
+      <Field
+        id="listing-notes"
+        label="Notes"
+        hint="Tested how, what's wrong with them, what you'd swap for. Markdown works."
+        error={errors.notes?.message}
+      >
+        <textarea
+          id="listing-notes"
+          rows={5}
+          className={inputClass}
+          {...describe('listing-notes', errors.notes?.message, true)}
+          {...register('notes', text)}
+        />
       </Field>
       <FormError message={errors.root?.server?.message} />
-      <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : submitLabel}</Button>
+      <Button type="submit" disabled={isSubmitting}>
+        {isSubmitting ? 'Saving…' : submitLabel}
+      </Button>
     </form>
   );
 }

@@ -9,9 +9,16 @@ export function ListingPhotoManager({ listing }: { listing: ListingDto }) {
   const edits = useListingPhotoEdits(listing.id);
   return (
     <section aria-labelledby="listing-photo-manager-title" className="space-y-3 rounded-lg border border-rule bg-white p-4">
-      <h2 id="listing-photo-manager-title" className="text-lg font-semibold">Your photos</h2>
-      <PhotoManager photos={listing.photos} upload={upload.mutateAsync} edits={edits} label="Photos you can change"
-        empty="No photos yet. Photos of the actual parts, with their markings readable, answer most questions before anyone writes." />
+      <h2 id="listing-photo-manager-title" className="text-lg font-semibold">
+        Your photos
+      </h2>
+      <PhotoManager
+        photos={listing.photos}
+        upload={upload.mutateAsync}
+        edits={edits}
+        label="Photos you can change"
+        empty="No photos yet. Photos of the actual parts, with their markings readable, answer most questions before anyone writes."
+      />
     </section>
   );
 }

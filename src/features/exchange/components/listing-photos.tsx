@@ -9,7 +9,9 @@ export function ListingPhotos({ listing: l }: { listing: ListingDto }) {
   return (
     <figure className="overflow-hidden rounded-lg border border-rule">
       <ListingTile category={l.part.category} seed={l.id} className="aspect-[21/9]" />
-      <figcaption className="bg-white px-3 py-1.5 text-xs text-ink-soft">No photos yet: a drawing of a {partCategoryLabels[l.part.category].toLowerCase()}.</figcaption>
+      <figcaption className="bg-white px-3 py-1.5 text-xs text-ink-soft">
+        No photos yet: a drawing of a {partCategoryLabels[l.part.category].toLowerCase()}.
+      </figcaption>
     </figure>
   );
 }

@@ -18,13 +18,19 @@ export function ListingView({ listing: l, signedIn }: { listing: ListingDto; sig
   const badge = statusBadge[l.status];
   return (
     <article className="space-y-5">
-      <nav aria-label="Breadcrumb" className="text-sm"><Link to={paths.exchange} className="text-copper-dark underline">Exchange</Link></nav>
+      <nav aria-label="Breadcrumb" className="text-sm">
+        <Link to={paths.exchange} className="text-copper-dark underline">
+          Exchange
+        </Link>
+      </nav>
       <header className="border-b border-rule pb-4">
         <div className="flex flex-wrap items-center gap-2">
           <KindBadge kind={l.kind} />
           <StatusBadge tone={badge.tone}>{badge.label}</StatusBadge>
         </div>
-        <h1 className="mt-2 text-2xl font-semibold tracking-tight"><span className="num">{l.quantity}</span> × {l.part.name}</h1>
+        <h1 className="mt-2 text-2xl font-semibold tracking-tight">
+          <span className="num">{l.quantity}</span> × {l.part.name}
+        </h1>
       </header>
       {l.hidden && (
         <Notice tone="danger" title="Hidden by a moderator">
@@ -32,7 +38,9 @@ export function ListingView({ listing: l, signedIn }: { listing: ListingDto; sig
           {l.hiddenNote && <p>Note: {l.hiddenNote}</p>}
         </Notice>
       )}
-      {l.status === 'reserved' && !l.abilities.edit && <Notice>Reserved: the owner has promised these to someone, but you may still write in case it falls through.</Notice>}
+      {l.status === 'reserved' && !l.abilities.edit && (
+        <Notice>Reserved: the owner has promised these to someone, but you may still write in case it falls through.</Notice>
+      )}
       <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <ListingDetails listing={l} />
         <div className="space-y-4">
@@ -42,7 +50,9 @@ export function ListingView({ listing: l, signedIn }: { listing: ListingDto; sig
             <ContactForm listingId={l.id} owner={l.owner.login} />
           ) : !signedIn ? (
             <div className="space-y-2 rounded-lg border border-rule bg-white p-4">
-              <p className="text-sm">Sign in to write to {l.owner.login}. Messages go through Scanwright; neither of you sees the other's e-mail address.</p>
+              <p className="text-sm">
+                Sign in to write to {l.owner.login}. Messages go through Scanwright; neither of you sees the other's e-mail address.
+              </p>
               <AnchorButton href={paths.signIn(location.pathname)}>Sign in to write</AnchorButton>
             </div>
           ) : !l.abilities.edit && l.status === 'closed' ? (

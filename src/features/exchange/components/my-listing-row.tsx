@@ -19,14 +19,27 @@ export function MyListingRow({ listing: l }: { listing: ListingDto }) {
           <StatusBadge tone={badge.tone}>{badge.label}</StatusBadge>
           {l.hidden && <StatusBadge tone="danger">Hidden by a moderator</StatusBadge>}
         </div>
-        <h2 className="font-semibold"><Link to={paths.listing(l.id)} className="text-copper-dark underline decoration-copper/40 underline-offset-2"><span className="num">{l.quantity}</span> × {l.part.name}</Link></h2>
+        <h2 className="font-semibold">
+          <Link to={paths.listing(l.id)} className="text-copper-dark underline decoration-copper/40 underline-offset-2">
+            <span className="num">{l.quantity}</span> × {l.part.name}
+          </Link>
+        </h2>
         <p className="text-sm text-ink-soft">
-          <span className={l.priceKind === 'price' ? 'num text-ink' : 'text-ink'}>{l.priceLabel}</span> · {l.region} · changed <span className="num">{formatDay(l.updatedAt)}</span>
+          <span className={l.priceKind === 'price' ? 'num text-ink' : 'text-ink'}>{l.priceLabel}</span> · {l.region} · changed{' '}
+          <span className="num">{formatDay(l.updatedAt)}</span>
         </p>
         {l.hidden && l.hiddenNote && <p className="text-sm text-danger">Moderator's note: {l.hiddenNote}</p>}
       </div>
       <div className="flex flex-wrap items-start gap-2 sm:justify-end">
-        {l.status !== 'closed' && <Link to={paths.editListing(l.id)} className="rounded-md border border-transparent px-3 py-1.5 text-sm font-medium text-copper-dark underline hover:bg-paper-deep" aria-label={`Edit listing: ${l.quantity} × ${l.part.name}`}>Edit</Link>}
+        {l.status !== 'closed' && (
+          <Link
+            to={paths.editListing(l.id)}
+            className="rounded-md border border-transparent px-3 py-1.5 text-sm font-medium text-copper-dark underline hover:bg-paper-deep"
+            aria-label={`Edit listing: ${l.quantity} × ${l.part.name}`}
+          >
+            Edit
+          </Link>
+        )}
         <StatusButtons listing={l} compact />
       </div>
     </li>

@@ -7,7 +7,15 @@ import { describe, Field, inputClass } from '@/components/ui/form-bits.tsx';
  * Pick a listed part: type to narrow the list, then choose it in the select below (both labelled,
  * both keyboard-native). The chosen part stays in the list while the search changes.
  */
-export function PartPicker({ value, onChange, error }: { value: number | undefined; onChange: (id: number | undefined) => void; error?: string }) {
+export function PartPicker({
+  value,
+  onChange,
+  error,
+}: {
+  value: number | undefined;
+  onChange: (id: number | undefined) => void;
+  error?: string;
+}) {
   const [q, setQ] = useState('');
   const options = usePartOptions(q);
   const picked = usePickedPart(value);
@@ -16,16 +24,32 @@ export function PartPicker({ value, onChange, error }: { value: number | undefin
   return (
     <div className="grid gap-3 sm:grid-cols-2">
       <Field id="part-search" label="Find a part" hint="Name or salvage source; only parts in the registry can be listed.">
-        <input id="part-search" type="search" className={inputClass} value={q} maxLength={100} autoComplete="off" {...describe('part-search', undefined, true)} onChange={(e) => setQ(e.target.value)} />
+        <input
+          id="part-search"
+          type="search"
+          className={inputClass}
+          value={q}
+          maxLength={100}
+          autoComplete="off"
+          {...describe('part-search', undefined, true)}
+          onChange={(e) => setQ(e.target.value)}
+        />
       </Field>
       <Field id="listing-part" label="Part" error={error}>
         <select
-          id="listing-part" className={inputClass} value={value ?? ''} {...describe('listing-part', error)}
+          id="listing-part"
+          className={inputClass}
+          value={value ?? ''}
+          {...describe('listing-part', error)}
           onChange={(e) => onChange(e.target.value ? Number(e.target.value) : undefined)}
         >
           <option value="">{options.isPending ? 'Loading parts…' : items.length ? 'Choose a part…' : 'No part matches'}</option>
           {pickedMissing && <option value={value}>{picked.data?.name ?? `Part ${value}`}</option>}
-          {items.map((p) => <option key={p.id} value={p.id}>{p.name} ({partCategoryLabels[p.category]})</option>)}
+          {items.map((p) => (
+            <option key={p.id} value={p.id}>
+              {p.name} ({partCategoryLabels[p.category]})
+            </option>
+          ))}
         </select>
       </Field>
     </div>

@@ -7,8 +7,18 @@ type Values = z.input<typeof createListingInput>;
 const priceKindLabels: Record<PriceKind, string> = { price: 'For a price', free: 'Free', swap: 'Swap' };
 
 /** Price, free or swap; a price asks for an amount and a three-letter currency. */
-export function PriceFields({ register, errors, priceKind }: { register: UseFormRegister<Values>; errors: FieldErrors<Values>; priceKind: PriceKind | undefined }) {
-  const amountError = errors.priceAmount && (errors.priceAmount.type === 'custom' || errors.priceAmount.type === 'server' ? errors.priceAmount.message : 'An amount such as 4.50.');
+export function PriceFields({
+  register,
+  errors,
+  priceKind,
+}: {
+  register: UseFormRegister<Values>;
+  errors: FieldErrors<Values>;
+  priceKind: PriceKind | undefined;
+}) {
+  const amountError =
+    errors.priceAmount &&
+    (errors.priceAmount.type === 'custom' || errors.priceAmount.type === 'server' ? errors.priceAmount.message : 'An amount such as 4.50.');
   const currencyError = errors.currency && 'Three capital letters, such as EUR.';
   return (
     <fieldset className="space-y-3">
@@ -24,10 +34,26 @@ export function PriceFields({ register, errors, priceKind }: { register: UseForm
       {priceKind === 'price' && (
         <div className="grid max-w-md grid-cols-[1fr_7rem] gap-3">
           <Field id="listing-amount" label="Amount" error={amountError}>
-            <input id="listing-amount" type="number" inputMode="decimal" min={0} step="0.01" className={`${inputClass} num`} {...describe('listing-amount', amountError)} {...register('priceAmount', { setValueAs: numberOrNull })} />
+            <input
+              id="listing-amount"
+              type="number"
+              inputMode="decimal"
+              min={0}
+              step="0.01"
+              className={`${inputClass} num`}
+              {...describe('listing-amount', amountError)}
+              {...register('priceAmount', { setValueAs: numberOrNull })}
+            />
           </Field>
           <Field id="listing-currency" label="Currency" error={currencyError}>
-            <input id="listing-currency" maxLength={3} autoCapitalize="characters" className={`${inputClass} num uppercase`} {...describe('listing-currency', currencyError)} {...register('currency', { setValueAs: (v: string) => (v ? v.trim().toUpperCase() : null) })} />
+            <input
+              id="listing-currency"
+              maxLength={3}
+              autoCapitalize="characters"
+              className={`${inputClass} num uppercase`}
+              {...describe('listing-currency', currencyError)}
+              {...register('currency', { setValueAs: (v: string) => (v ? v.trim().toUpperCase() : null) })}
+            />
           </Field>
         </div>
       )}

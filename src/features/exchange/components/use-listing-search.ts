@@ -1,5 +1,11 @@
 import { useSearchParams } from 'react-router-dom';
-import { LISTING_CONDITIONS, LISTING_KINDS, type ListingCondition, type ListingKind, type ListListingsQuery } from '@shared/schemas/listing.ts';
+import {
+  LISTING_CONDITIONS,
+  LISTING_KINDS,
+  type ListingCondition,
+  type ListingKind,
+  type ListListingsQuery,
+} from '@shared/schemas/listing.ts';
 import { PART_CATEGORIES, type PartCategory } from '@shared/schemas/part.ts';
 import { paths } from '@/config/paths.ts';
 

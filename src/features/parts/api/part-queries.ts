@@ -17,7 +17,8 @@ export const partQueries = {
       queryFn: () => api.get<GainHistogramDto>('/api/parts/histogram'),
       staleTime: 5 * 60_000,
     }),
-  detail: (id: number) => queryOptions({ queryKey: ['parts', 'detail', id] as const, queryFn: () => api.get<PartDetailDto>(`/api/parts/${id}`) }),
+  detail: (id: number) =>
+    queryOptions({ queryKey: ['parts', 'detail', id] as const, queryFn: () => api.get<PartDetailDto>(`/api/parts/${id}`) }),
 };
 
 /** Address of a download of the whole current search (all pages) as CSV or JSON; the server names the file. */

@@ -16,7 +16,13 @@ const parse = (text: string) => (text.trim() === '' || !Number.isFinite(Number(t
  * The median-gain range: two number fields (nm/V) and, over the histogram of every accepted median,
  * two sliders on a log scale. A slider at its far end means "no limit". `onCommit` runs when a slider is let go.
  */
-export function GainRangeField({ histogram, minText, maxText, onChange, onCommit }: {
+export function GainRangeField({
+  histogram,
+  minText,
+  maxText,
+  onChange,
+  onCommit,
+}: {
   histogram: GainHistogramDto | undefined;
   minText: string;
   maxText: string;
@@ -28,32 +34,61 @@ export function GainRangeField({ histogram, minText, maxText, onChange, onCommit
   const max = parse(maxText);
   const minPos = min === undefined ? 0 : scale.positionOf(min);
   const maxPos = max === undefined ? scale.steps : scale.positionOf(max);
-  const release = { onPointerUp: onCommit, onKeyUp: (e: { key: string }) => { if (e.key.startsWith('Arrow') || e.key === 'Home' || e.key === 'End' || e.key.startsWith('Page')) onCommit(); } };
+  const release = {
+    onPointerUp: onCommit,
+    onKeyUp: (e: { key: string }) => {
+      if (e.key.startsWith('Arrow') || e.key === 'Home' || e.key === 'End' || e.key.startsWith('Page')) onCommit();
+    },
+  };
   return (
     <fieldset className="min-w-0 sm:col-span-2">
       <legend className={labelClass}>Median gain (nm/V)</legend>
       <div className="rounded-md border border-rule bg-paper px-3 pt-2 pb-1">
-        <div className="mx-2.5">{histogram ? <GainHistogram histogram={histogram} scale={scale} min={min} max={max} /> : <div className="h-16" aria-hidden="true" />}</div>
+        <div className="mx-2.5">
+          {histogram ? (
+            <GainHistogram histogram={histogram} scale={scale} min={min} max={max} />
+          ) : (
+            <div className="h-16" aria-hidden="true" />
+          )}
+        </div>
         <div className="relative h-6">
           <div aria-hidden="true" className="absolute inset-x-2.5 top-[11px] h-0.5 rounded bg-rule" />
           <input
-            type="range" min={0} max={scale.steps} value={minPos} className={`${thumb} ${minPos === maxPos && minPos > scale.steps / 2 ? 'z-10' : ''}`}
+            type="range"
+            min={0}
+            max={scale.steps}
+            value={minPos}
+            className={`${thumb} ${minPos === maxPos && minPos > scale.steps / 2 ? 'z-10' : ''}`}
             aria-label="Lower end of the gain range"
             aria-valuetext={min === undefined ? 'no lower limit' : `${formatShort(min)} nm/V`}
-            onChange={(e) => { const p = Math.min(Number(e.target.value), maxPos); onChange(p === 0 ? '' : String(scale.gainAt(p)), maxText); }}
+            onChange={(e) => {
+              const p = Math.min(Number(e.target.value), maxPos);
+              onChange(p === 0 ? '' : String(scale.gainAt(p)), maxText);
+            }}
             {...release}
           />
           <input
-            type="range" min={0} max={scale.steps} value={maxPos} className={thumb}
+            type="range"
+            min={0}
+            max={scale.steps}
+            value={maxPos}
+            className={thumb}
             aria-label="Upper end of the gain range"
             aria-valuetext={max === undefined ? 'no upper limit' : `${formatShort(max)} nm/V`}
-            onChange={(e) => { const p = Math.max(Number(e.target.value), minPos); onChange(minText, p === scale.steps ? '' : String(scale.gainAt(p))); }}
+            onChange={(e) => {
+              const p = Math.max(Number(e.target.value), minPos);
+              onChange(minText, p === scale.steps ? '' : String(scale.gainAt(p)));
+            }}
             {...release}
           />
         </div>
         <div aria-hidden="true" className="relative mx-2.5 h-4 text-[11px] text-ink-soft">
           {scale.decades.map((d, i) => (
-            <span key={d} className={`num absolute ${i === 0 ? '' : i === scale.decades.length - 1 ? '-translate-x-full' : '-translate-x-1/2'}`} style={{ left: `${scale.fraction(d) * 100}%` }}>
+            <span
+              key={d}
+              className={`num absolute ${i === 0 ? '' : i === scale.decades.length - 1 ? '-translate-x-full' : '-translate-x-1/2'}`}
+              style={{ left: `${scale.fraction(d) * 100}%` }}
+            >
               {formatShort(d)}
             </span>
           ))}
@@ -61,12 +96,36 @@ export function GainRangeField({ histogram, minText, maxText, onChange, onCommit
       </div>
       <div className="mt-2 grid grid-cols-2 gap-2">
         <div>
-          <label htmlFor="gain-min" className={labelClass}>Gain from (nm/V)</label>
-          <input id="gain-min" type="number" inputMode="decimal" min={0} step="any" value={minText} placeholder="any" className={`${fieldClass} num`} onChange={(e) => onChange(e.target.value, maxText)} />
+          <label htmlFor="gain-min" className={labelClass}>
+            Gain from (nm/V)
+          </label>
+          <input
+            id="gain-min"
+            type="number"
+            inputMode="decimal"
+            min={0}
+            step="any"
+            value={minText}
+            placeholder="any"
+            className={`${fieldClass} num`}
+            onChange={(e) => onChange(e.target.value, maxText)}
+          />
         </div>
         <div>
-          <label htmlFor="gain-max" className={labelClass}>Gain to (nm/V)</label>
-          <input id="gain-max" type="number" inputMode="decimal" min={0} step="any" value={maxText} placeholder="any" className={`${fieldClass} num`} onChange={(e) => onChange(minText, e.target.value)} />
+          <label htmlFor="gain-max" className={labelClass}>
+            Gain to (nm/V)
+          </label>
+          <input
+            id="gain-max"
+            type="number"
+            inputMode="decimal"
+            min={0}
+            step="any"
+            value={maxText}
+            placeholder="any"
+            className={`${fieldClass} num`}
+            onChange={(e) => onChange(minText, e.target.value)}
+          />
         </div>
       </div>
     </fieldset>

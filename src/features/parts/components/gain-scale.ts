@@ -24,7 +24,10 @@ export function gainScale(histogram: GainHistogramDto | undefined): GainScale {
   const bins = histogram?.bins ?? [];
   let lo = bins.length ? Math.floor(Math.log10(Math.min(...bins.map((b) => b.fromNmPerV))) + 1e-9) : 0;
   let hi = bins.length ? Math.ceil(Math.log10(Math.max(...bins.map((b) => b.toNmPerV))) - 1e-9) : 4;
-  if (hi - lo < 2) { lo -= 1; hi = Math.max(hi, lo + 2); }
+  if (hi - lo < 2) {
+    lo -= 1;
+    hi = Math.max(hi, lo + 2);
+  }
   const steps = (hi - lo) * STEPS_PER_DECADE;
   return {
     lo,

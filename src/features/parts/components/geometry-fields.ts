@@ -16,7 +16,12 @@ const width: GeometryField = { key: 'widthMm', label: 'Width', unit: 'mm' };
 const thickness = (label = 'Thickness', hint?: string): GeometryField => ({ key: 'thicknessMm', label, unit: 'mm', hint });
 const diameter: GeometryField = { key: 'outerDiameterMm', label: 'Outer diameter', unit: 'mm' };
 const wall: GeometryField = { key: 'wallMm', label: 'Wall thickness', unit: 'mm' };
-const layers: GeometryField = { key: 'layers', label: 'Number of layers', unit: 'layers', hint: 'An estimate is fine; say how you counted in the notes.' };
+const layers: GeometryField = {
+  key: 'layers',
+  label: 'Number of layers',
+  unit: 'layers',
+  hint: 'An estimate is fine; say how you counted in the notes.',
+};
 
 /** The geometry that matters for each category (what the expected-gain formulas use, and what helps identify the part). */
 export const geometryFor: Record<PartCategory, GeometryField[]> = {

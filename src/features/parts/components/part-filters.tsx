@@ -25,7 +25,14 @@ function toFilters(d: Draft): Partial<Filters> {
   let gainMax = toNumber(d.gainMax);
   if (gainMin !== undefined && gainMax !== undefined && gainMin > gainMax) [gainMin, gainMax] = [gainMax, gainMin];
   const minRuns = toNumber(d.minRuns);
-  return { q: d.q.trim().slice(0, 100), category: d.category, gainMin, gainMax, minRuns: minRuns === undefined ? undefined : Math.floor(minRuns), maxVolts: toNumber(d.maxVolts) };
+  return {
+    q: d.q.trim().slice(0, 100),
+    category: d.category,
+    gainMin,
+    gainMax,
+    minRuns: minRuns === undefined ? undefined : Math.floor(minRuns),
+    maxVolts: toNumber(d.maxVolts),
+  };
 }
 
 /**
@@ -35,7 +42,14 @@ function toFilters(d: Draft): Partial<Filters> {
 export function PartFilters({ search }: { search: PartSearch }) {
   const f = search.filters;
   const histogram = useQuery(partQueries.histogram());
-  const fromUrl = (): Draft => ({ q: f.q, category: f.category, gainMin: text(f.gainMin), gainMax: text(f.gainMax), minRuns: text(f.minRuns), maxVolts: text(f.maxVolts) });
+  const fromUrl = (): Draft => ({
+    q: f.q,
+    category: f.category,
+    gainMin: text(f.gainMin),
+    gainMax: text(f.gainMax),
+    minRuns: text(f.minRuns),
+    maxVolts: text(f.maxVolts),
+  });
   const [draft, setDraft] = useState<Draft>(fromUrl);
   const [seen, setSeen] = useState(search.key);
   if (seen !== search.key) {
@@ -53,17 +67,41 @@ export function PartFilters({ search }: { search: PartSearch }) {
       role="search"
       aria-label="Search the parts registry"
       className="mb-5 grid gap-x-6 gap-y-4 rounded-lg border border-rule bg-white p-3 sm:grid-cols-2 sm:p-4 lg:grid-cols-4"
-      onSubmit={(e) => { e.preventDefault(); apply(); }}
+      onSubmit={(e) => {
+        e.preventDefault();
+        apply();
+      }}
     >
       <div className="sm:col-span-2">
-        <label htmlFor="part-q" className={labelClass}>Words in name or salvage source</label>
-        <input id="part-q" type="search" maxLength={100} value={draft.q} placeholder="e.g. cartridge, buzzer, stack" className={fieldClass} onChange={(e) => setDraft({ ...draft, q: e.target.value })} />
+        <label htmlFor="part-q" className={labelClass}>
+          Words in name or salvage source
+        </label>
+        <input
+          id="part-q"
+          type="search"
+          maxLength={100}
+          value={draft.q}
+          placeholder="e.g. cartridge, buzzer, stack"
+          className={fieldClass}
+          onChange={(e) => setDraft({ ...draft, q: e.target.value })}
+        />
       </div>
       <div className="sm:col-span-2">
-        <label htmlFor="part-category" className={labelClass}>Category</label>
-        <select id="part-category" className={fieldClass} value={draft.category ?? ''} onChange={(e) => apply({ category: (e.target.value || undefined) as PartCategory | undefined })}>
+        <label htmlFor="part-category" className={labelClass}>
+          Category
+        </label>
+        <select
+          id="part-category"
+          className={fieldClass}
+          value={draft.category ?? ''}
+          onChange={(e) => apply({ category: (e.target.value || undefined) as PartCategory | undefined })}
+        >
           <option value="">All categories</option>
-          {PART_CATEGORIES.map((c) => <option key={c} value={c}>{partCategoryLabels[c]}</option>)}
+          {PART_CATEGORIES.map((c) => (
+            <option key={c} value={c}>
+              {partCategoryLabels[c]}
+            </option>
+          ))}
         </select>
       </div>
       <GainRangeField
@@ -75,20 +113,48 @@ export function PartFilters({ search }: { search: PartSearch }) {
       />
       <div className="grid content-start gap-4 sm:col-span-2 sm:grid-cols-2">
         <div>
-          <label htmlFor="part-min-runs" className={labelClass}>At least this many accepted runs</label>
-          <input id="part-min-runs" type="number" inputMode="numeric" min={0} step={1} value={draft.minRuns} placeholder="any" className={`${fieldClass} num`} onChange={(e) => setDraft({ ...draft, minRuns: e.target.value })} />
+          <label htmlFor="part-min-runs" className={labelClass}>
+            At least this many accepted runs
+          </label>
+          <input
+            id="part-min-runs"
+            type="number"
+            inputMode="numeric"
+            min={0}
+            step={1}
+            value={draft.minRuns}
+            placeholder="any"
+            className={`${fieldClass} num`}
+            onChange={(e) => setDraft({ ...draft, minRuns: e.target.value })}
+          />
         </div>
         <div>
-          <label htmlFor="part-max-volts" className={labelClass}>Safe voltage at most (V)</label>
-          <input id="part-max-volts" type="number" inputMode="decimal" min={0} step="any" value={draft.maxVolts} placeholder="any" className={`${fieldClass} num`} onChange={(e) => setDraft({ ...draft, maxVolts: e.target.value })} />
+          <label htmlFor="part-max-volts" className={labelClass}>
+            Safe voltage at most (V)
+          </label>
+          <input
+            id="part-max-volts"
+            type="number"
+            inputMode="decimal"
+            min={0}
+            step="any"
+            value={draft.maxVolts}
+            placeholder="any"
+            className={`${fieldClass} num`}
+            onChange={(e) => setDraft({ ...draft, maxVolts: e.target.value })}
+          />
         </div>
         <p className="text-xs text-ink-soft sm:col-span-2">
-          A part matches a gain range when its median over accepted runs lies inside it; parts without accepted runs drop out.
-          The bars show how many listed parts have their median in each band; drag the copper handles or type the numbers.
+          A part matches a gain range when its median over accepted runs lies inside it; parts without accepted runs drop out. The bars show
+          how many listed parts have their median in each band; drag the copper handles or type the numbers.
         </p>
         <div className="flex items-center gap-3 sm:col-span-2">
           <Button type="submit">Apply filters</Button>
-          {search.filtered && <Link to={search.clearHref} className="text-sm text-copper-dark underline">Clear filters</Link>}
+          {search.filtered && (
+            <Link to={search.clearHref} className="text-sm text-copper-dark underline">
+              Clear filters
+            </Link>
+          )}
         </div>
       </div>
     </form>

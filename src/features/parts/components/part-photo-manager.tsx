@@ -9,7 +9,9 @@ export function PartPhotoManager({ part }: { part: PartDetailDto }) {
   const edits = usePartPhotoEdits(part.id);
   return (
     <section aria-labelledby="part-photo-manager-title" className="space-y-3 rounded-lg border border-rule bg-white p-4">
-      <h3 id="part-photo-manager-title" className="font-semibold">Add, describe or remove photos</h3>
+      <h3 id="part-photo-manager-title" className="font-semibold">
+        Add, describe or remove photos
+      </h3>
       <PhotoManager photos={part.photos} upload={upload.mutateAsync} edits={edits} label="Photos you can change" />
     </section>
   );

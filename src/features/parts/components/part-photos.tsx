@@ -8,11 +8,15 @@ export function PartPhotos({ part }: { part: PartDetailDto }) {
   if (!canEdit && part.photos.length === 0) return null;
   return (
     <section aria-labelledby="part-photos-title" className="space-y-3">
-      <h2 id="part-photos-title" className="text-lg font-semibold">Photos</h2>
+      <h2 id="part-photos-title" className="text-lg font-semibold">
+        Photos
+      </h2>
       {part.photos.length > 0 ? (
         <PhotoGrid photos={part.photos} label="Photos of this part" columns="grid-cols-2 sm:grid-cols-3" />
       ) : (
-        <p className="rounded-lg border border-dashed border-rule bg-white p-3 text-sm text-ink-soft">No photos of this part yet. A clear one of the bare part helps others recognise it.</p>
+        <p className="rounded-lg border border-dashed border-rule bg-white p-3 text-sm text-ink-soft">
+          No photos of this part yet. A clear one of the bare part helps others recognise it.
+        </p>
       )}
       {canEdit && <PartPhotoManager part={part} />}
     </section>

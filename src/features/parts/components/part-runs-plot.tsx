@@ -10,29 +10,73 @@ const methodLabel = (m: string) => runMethodLabels[m as RunMethod] ?? m;
 /** The strip plot of every accepted run (lazily loaded), its legend, and the same story in one sentence. */
 export function PartRunsPlot({ part }: { part: PartDetailDto }) {
   const s = part.stats;
-  const runs = part.runs.map((r) => ({ id: r.id, gainNmPerV: r.gainNmPerV, buildTitle: r.buildTitle, maker: r.maker, method: methodLabel(r.method) }));
+  const runs = part.runs.map((r) => ({
+    id: r.id,
+    gainNmPerV: r.gainNmPerV,
+    buildTitle: r.buildTitle,
+    maker: r.maker,
+    method: methodLabel(r.method),
+  }));
   const e = part.expectedGain;
   return (
     <section aria-labelledby="part-plot-title" className="rounded-lg border border-rule bg-white p-3 sm:p-4">
-      <h2 id="part-plot-title" className="text-lg font-semibold">Every accepted run</h2>
+      <h2 id="part-plot-title" className="text-lg font-semibold">
+        Every accepted run
+      </h2>
       {runs.length === 0 ? (
-        <p className="mt-2 text-sm text-ink-soft">No accepted calibration runs yet. Figures appear here once a moderator accepts the first run.</p>
+        <p className="mt-2 text-sm text-ink-soft">
+          No accepted calibration runs yet. Figures appear here once a moderator accepts the first run.
+        </p>
       ) : (
         <>
           <p className="mt-1 text-sm text-ink-soft">
-            <span className="num">{runs.length}</span> run{runs.length === 1 ? '' : 's'}, median <span className="num text-ink">{formatShort(s.gainMedianNmPerV)} nm/V</span>
-            {e && <>; expected from geometry <span className="num text-ink">{formatShort(e.gainNmPerV)} nm/V</span> (<span className="num">{formatShort(e.lowNmPerV)}–{formatShort(e.highNmPerV)}</span>)</>}.
-            {' '}Point at or tap a dot for its build, maker and method.
+            <span className="num">{runs.length}</span> run{runs.length === 1 ? '' : 's'}, median{' '}
+            <span className="num text-ink">{formatShort(s.gainMedianNmPerV)} nm/V</span>
+            {e && (
+              <>
+                ; expected from geometry <span className="num text-ink">{formatShort(e.gainNmPerV)} nm/V</span> (
+                <span className="num">
+                  {formatShort(e.lowNmPerV)}–{formatShort(e.highNmPerV)}
+                </span>
+                )
+              </>
+            )}
+            . Point at or tap a dot for its build, maker and method.
           </p>
           <div className="mt-2" data-testid="part-runs-plot">
-            <Suspense fallback={<p role="status" className="flex h-[170px] items-center justify-center text-sm text-ink-soft">Loading the plot…</p>}>
+            <Suspense
+              fallback={
+                <p role="status" className="flex h-[170px] items-center justify-center text-sm text-ink-soft">
+                  Loading the plot…
+                </p>
+              }
+            >
               <PartRunsChart runs={runs} median={s.gainMedianNmPerV} p25={s.gainP25NmPerV} p75={s.gainP75NmPerV} expected={e} />
             </Suspense>
           </div>
           <ul aria-label="Legend" className="mt-1 flex flex-wrap justify-center gap-x-4 gap-y-1 text-xs text-ink-soft">
-            <li className="flex items-center gap-1"><svg width="10" height="10" aria-hidden="true"><circle cx="5" cy="5" r="4" fill="#B5532A" /></svg>Accepted run</li>
-            <li className="flex items-center gap-1"><svg width="18" height="10" aria-hidden="true"><rect x="1" y="1" width="16" height="8" fill="#2F6F73" fillOpacity="0.12" stroke="#2F6F73" /><path d="M9 0v10" stroke="#23575A" strokeWidth="2" /></svg>Median and middle half (IQR)</li>
-            {e && <li className="flex items-center gap-1"><svg width="18" height="10" aria-hidden="true"><rect width="18" height="10" fill="#C98A00" fillOpacity="0.12" /><path d="M9 0v10" stroke="#C98A00" strokeDasharray="3 2" strokeWidth="1.5" /></svg>Expected from geometry, with its material band</li>}
+            <li className="flex items-center gap-1">
+              <svg width="10" height="10" aria-hidden="true">
+                <circle cx="5" cy="5" r="4" fill="#B5532A" />
+              </svg>
+              Accepted run
+            </li>
+            <li className="flex items-center gap-1">
+              <svg width="18" height="10" aria-hidden="true">
+                <rect x="1" y="1" width="16" height="8" fill="#2F6F73" fillOpacity="0.12" stroke="#2F6F73" />
+                <path d="M9 0v10" stroke="#23575A" strokeWidth="2" />
+              </svg>
+              Median and middle half (IQR)
+            </li>
+            {e && (
+              <li className="flex items-center gap-1">
+                <svg width="18" height="10" aria-hidden="true">
+                  <rect width="18" height="10" fill="#C98A00" fillOpacity="0.12" />
+                  <path d="M9 0v10" stroke="#C98A00" strokeDasharray="3 2" strokeWidth="1.5" />
+                </svg>
+                Expected from geometry, with its material band
+              </li>
+            )}
           </ul>
         </>
       )}

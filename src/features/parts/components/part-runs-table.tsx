@@ -6,13 +6,30 @@ import { formatShort, formatWithUncertainty } from '@shared/format/measured-numb
 
 const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
 /** "22 Sep 2026": three-letter months ("Sept" is en-GB's own). */
-const formatDay = (iso: string) => dateFormat.formatToParts(new Date(iso)).map((p) => (p.type === 'month' ? p.value.slice(0, 3) : p.value)).join('');
+const formatDay = (iso: string) =>
+  dateFormat
+    .formatToParts(new Date(iso))
+    .map((p) => (p.type === 'month' ? p.value.slice(0, 3) : p.value))
+    .join('');
 
 function Gain({ run }: { run: PartRunDto }) {
   const [lo, hi] = run.gainCi95NmPerV;
   if (lo === null || hi === null) return <>{formatShort(run.gainNmPerV)}</>;
-  const f = formatWithUncertainty(run.gainNmPerV, (Math.abs(hi - lo)) / 2);
-  return <>{f.value}{f.uncertainty && <span className="text-ink-soft"> ± {f.uncertainty} <abbr title="half-width of the 95 % interval (Student t)" className="no-underline">(95 %)</abbr></span>}</>;
+  const f = formatWithUncertainty(run.gainNmPerV, Math.abs(hi - lo) / 2);
+  return (
+    <>
+      {f.value}
+      {f.uncertainty && (
+        <span className="text-ink-soft">
+          {' '}
+          ± {f.uncertainty}{' '}
+          <abbr title="half-width of the 95 % interval (Student t)" className="no-underline">
+            (95 %)
+          </abbr>
+        </span>
+      )}
+    </>
+  );
 }
 
 /** The accepted runs behind the figures, each linking to the build it was measured in. */
@@ -20,27 +37,54 @@ export function PartRunsTable({ runs }: { runs: PartRunDto[] }) {
   if (runs.length === 0) return null;
   return (
     <section aria-labelledby="part-runs-title">
-      <h2 id="part-runs-title" className="mb-2 text-lg font-semibold">Accepted runs</h2>
-      <div className="overflow-x-auto rounded-lg border border-rule bg-white" tabIndex={0} role="region" aria-label="Accepted runs, scrolls sideways on narrow screens">
+      <h2 id="part-runs-title" className="mb-2 text-lg font-semibold">
+        Accepted runs
+      </h2>
+      <div
+        className="overflow-x-auto rounded-lg border border-rule bg-white"
+        tabIndex={0}
+        role="region"
+        aria-label="Accepted runs, scrolls sideways on narrow screens"
+      >
         <table className="w-full min-w-[42rem] border-collapse text-sm">
           <thead className="bg-paper-deep/60 text-left text-xs uppercase tracking-wide text-ink-soft">
             <tr>
-              <th scope="col" className="px-3 py-2">Build</th>
-              <th scope="col" className="px-3 py-2">Maker</th>
-              <th scope="col" className="px-3 py-2">Method</th>
-              <th scope="col" className="px-3 py-2 text-right">Gain (nm/V, 95 %)</th>
-              <th scope="col" className="px-3 py-2 text-right">Hysteresis</th>
-              <th scope="col" className="px-3 py-2 text-right">Date</th>
+              <th scope="col" className="px-3 py-2">
+                Build
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Maker
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Method
+              </th>
+              <th scope="col" className="px-3 py-2 text-right">
+                Gain (nm/V, 95 %)
+              </th>
+              <th scope="col" className="px-3 py-2 text-right">
+                Hysteresis
+              </th>
+              <th scope="col" className="px-3 py-2 text-right">
+                Date
+              </th>
             </tr>
           </thead>
           <tbody>
             {runs.map((r) => (
               <tr key={r.id} className="border-t border-rule">
-                <td className="min-w-44 px-3 py-1.5"><Link to={paths.build(r.buildId)} className="text-copper-dark underline decoration-copper/40 underline-offset-2">{r.buildTitle || `Build ${r.buildId}`}</Link></td>
+                <td className="min-w-44 px-3 py-1.5">
+                  <Link to={paths.build(r.buildId)} className="text-copper-dark underline decoration-copper/40 underline-offset-2">
+                    {r.buildTitle || `Build ${r.buildId}`}
+                  </Link>
+                </td>
                 <td className="whitespace-nowrap px-3 py-1.5">{r.maker}</td>
                 <td className="px-3 py-1.5">{runMethodLabels[r.method as RunMethod] ?? r.method}</td>
-                <td className="num whitespace-nowrap px-3 py-1.5 text-right"><Gain run={r} /></td>
-                <td className="num whitespace-nowrap px-3 py-1.5 text-right">{r.hysteresisPctFs === null ? '—' : `${formatShort(r.hysteresisPctFs, 2)} %`}</td>
+                <td className="num whitespace-nowrap px-3 py-1.5 text-right">
+                  <Gain run={r} />
+                </td>
+                <td className="num whitespace-nowrap px-3 py-1.5 text-right">
+                  {r.hysteresisPctFs === null ? '—' : `${formatShort(r.hysteresisPctFs, 2)} %`}
+                </td>
                 <td className="num whitespace-nowrap px-3 py-1.5 text-right">{formatDay(r.createdAt)}</td>
               </tr>
             ))}

@@ -14,7 +14,12 @@ import { ReportPartButton } from './report-part-button.tsx';
 export function PartView({ part, signedIn }: { part: PartDetailDto; signedIn: boolean }) {
   return (
     <article className="space-y-6">
-      <nav aria-label="Breadcrumb" className="text-sm"><Link to={paths.parts} className="text-copper-dark underline">Parts registry</Link> <span aria-hidden="true">›</span> {partCategoryLabels[part.category]}</nav>
+      <nav aria-label="Breadcrumb" className="text-sm">
+        <Link to={paths.parts} className="text-copper-dark underline">
+          Parts registry
+        </Link>{' '}
+        <span aria-hidden="true">›</span> {partCategoryLabels[part.category]}
+      </nav>
       <header className="flex flex-wrap items-start justify-between gap-3 border-b border-rule pb-4">
         <div className="min-w-0">
           <p className="text-xs font-medium uppercase tracking-wide text-teal-dark">{partCategoryLabels[part.category]}</p>
@@ -22,9 +27,25 @@ export function PartView({ part, signedIn }: { part: PartDetailDto; signedIn: bo
         </div>
         {signedIn && part.status === 'accepted' && <ReportPartButton partId={part.id} partName={part.name} />}
       </header>
-      {part.status === 'proposed' && <Notice title="Proposed: waiting for a moderator">This part is not listed yet. Only its proposer and the moderators can see this page until a moderator accepts it.</Notice>}
-      {part.status === 'rejected' && <Notice tone="danger" title="Not accepted">A moderator did not accept this part into the registry.</Notice>}
-      {part.mergedIntoId !== null && <Notice title="Merged">This part was merged into <Link className="underline" to={paths.part(part.mergedIntoId)}>another entry</Link>; its runs count there.</Notice>}
+      {part.status === 'proposed' && (
+        <Notice title="Proposed: waiting for a moderator">
+          This part is not listed yet. Only its proposer and the moderators can see this page until a moderator accepts it.
+        </Notice>
+      )}
+      {part.status === 'rejected' && (
+        <Notice tone="danger" title="Not accepted">
+          A moderator did not accept this part into the registry.
+        </Notice>
+      )}
+      {part.mergedIntoId !== null && (
+        <Notice title="Merged">
+          This part was merged into{' '}
+          <Link className="underline" to={paths.part(part.mergedIntoId)}>
+            another entry
+          </Link>
+          ; its runs count there.
+        </Notice>
+      )}
       <PartFigures stats={part.stats} />
       <PartRunsPlot part={part} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,4fr)]">

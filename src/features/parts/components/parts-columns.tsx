@@ -42,12 +42,22 @@ export const partColumns = [
     sortDescFirst: false,
     cell: (c) => (
       <div className="w-40 sm:w-auto sm:min-w-48">
-        <Link to={paths.part(c.row.original.id)} className="font-medium text-copper-dark underline decoration-copper/40 underline-offset-2 hover:decoration-copper">{c.getValue()}</Link>
+        <Link
+          to={paths.part(c.row.original.id)}
+          className="font-medium text-copper-dark underline decoration-copper/40 underline-offset-2 hover:decoration-copper"
+        >
+          {c.getValue()}
+        </Link>
         {c.row.original.salvageSource && <p className="mt-0.5 line-clamp-1 text-xs text-ink-soft">from {c.row.original.salvageSource}</p>}
       </div>
     ),
   }),
-  col.accessor('category', { id: 'category', header: 'Category', enableSorting: false, cell: (c) => <span className="whitespace-nowrap">{partCategoryLabels[c.getValue()]}</span> }),
+  col.accessor('category', {
+    id: 'category',
+    header: 'Category',
+    enableSorting: false,
+    cell: (c) => <span className="whitespace-nowrap">{partCategoryLabels[c.getValue()]}</span>,
+  }),
   col.accessor('gainMedianNmPerV', {
     id: 'gain',
     header: 'Median gain',
@@ -60,19 +70,38 @@ export const partColumns = [
         <span className="num whitespace-nowrap">
           <span className="font-semibold">{formatShort(p.gainMedianNmPerV)}</span> nm/V
           {p.gainP25NmPerV !== null && p.gainP75NmPerV !== null && p.acceptedRunCount > 1 && (
-            <span className="block text-xs text-ink-soft" title="Interquartile range: the middle half of the accepted runs">IQR {formatShort(p.gainP25NmPerV)}–{formatShort(p.gainP75NmPerV)}</span>
+            <span className="block text-xs text-ink-soft" title="Interquartile range: the middle half of the accepted runs">
+              IQR {formatShort(p.gainP25NmPerV)}–{formatShort(p.gainP75NmPerV)}
+            </span>
           )}
         </span>
       );
     },
   }),
-  col.accessor('acceptedRunCount', { id: 'runs', header: 'Accepted runs', sortDescFirst: true, meta: { numeric: true }, cell: (c) => <span className="num">{c.getValue()}</span> }),
-  col.accessor('buildCount', { id: 'builds', header: 'Builds', enableSorting: false, meta: { numeric: true }, cell: (c) => <span className="num">{c.getValue()}</span> }),
+  col.accessor('acceptedRunCount', {
+    id: 'runs',
+    header: 'Accepted runs',
+    sortDescFirst: true,
+    meta: { numeric: true },
+    cell: (c) => <span className="num">{c.getValue()}</span>,
+  }),
+  col.accessor('buildCount', {
+    id: 'builds',
+    header: 'Builds',
+    enableSorting: false,
+    meta: { numeric: true },
+    cell: (c) => <span className="num">{c.getValue()}</span>,
+  }),
   col.accessor('safeVolts', {
     id: 'volts',
     header: 'Safe voltage',
     enableSorting: false,
     meta: { numeric: true },
-    cell: (c) => (c.getValue() === null ? <span className="text-ink-soft">unknown</span> : <span className="num whitespace-nowrap">{formatShort(c.getValue())} V</span>),
+    cell: (c) =>
+      c.getValue() === null ? (
+        <span className="text-ink-soft">unknown</span>
+      ) : (
+        <span className="num whitespace-nowrap">{formatShort(c.getValue())} V</span>
+      ),
   }),
 ];

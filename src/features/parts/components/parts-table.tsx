@@ -16,13 +16,25 @@ function HeaderCell({ header }: { header: Header<PartListItemDto, unknown> }) {
   const label = flexRender(header.column.columnDef.header, header.getContext());
   const sorted = header.column.getIsSorted();
   return (
-    <th scope="col" aria-sort={ariaSort(header)} className={`whitespace-nowrap border-b-2 border-ink/70 bg-paper-deep px-3 py-2 text-xs font-semibold uppercase tracking-wide text-ink-soft ${numeric ? 'text-right' : 'text-left'} ${header.column.id === 'name' ? STICKY : ''}`}>
+    <th
+      scope="col"
+      aria-sort={ariaSort(header)}
+      className={`whitespace-nowrap border-b-2 border-ink/70 bg-paper-deep px-3 py-2 text-xs font-semibold uppercase tracking-wide text-ink-soft ${numeric ? 'text-right' : 'text-left'} ${header.column.id === 'name' ? STICKY : ''}`}
+    >
       {header.column.getCanSort() ? (
-        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 uppercase hover:text-copper-dark">
+        <button
+          type="button"
+          onClick={header.column.getToggleSortingHandler()}
+          className="inline-flex items-center gap-1 uppercase hover:text-copper-dark"
+        >
           {label}
-          <span aria-hidden="true" className={sorted ? 'text-copper' : 'text-rule'}>{sorted === 'desc' ? '▼' : sorted === 'asc' ? '▲' : '◆'}</span>
+          <span aria-hidden="true" className={sorted ? 'text-copper' : 'text-rule'}>
+            {sorted === 'desc' ? '▼' : sorted === 'asc' ? '▲' : '◆'}
+          </span>
         </button>
-      ) : label}
+      ) : (
+        label
+      )}
     </th>
   );
 }
@@ -50,19 +62,31 @@ export function PartsTable({ data, search, stale }: { data: PartListDto; search:
   return (
     <div>
       <p className="mb-1 text-xs text-ink-soft md:hidden">Swipe the table sideways for gains, runs and voltages.</p>
-      <div className={`overflow-x-auto rounded-lg border border-rule bg-white transition-opacity ${stale ? 'opacity-60' : ''}`} tabIndex={0} role="region" aria-label="Parts, scrolls sideways on narrow screens">
+      <div
+        className={`overflow-x-auto rounded-lg border border-rule bg-white transition-opacity ${stale ? 'opacity-60' : ''}`}
+        tabIndex={0}
+        role="region"
+        aria-label="Parts, scrolls sideways on narrow screens"
+      >
         <table className="w-full min-w-[44rem] border-collapse text-sm">
           <caption className="sr-only">Listed parts with pooled figures from accepted calibration runs</caption>
           <thead>
             {table.getHeaderGroups().map((g) => (
-              <tr key={g.id}>{g.headers.map((h) => <HeaderCell key={h.id} header={h} />)}</tr>
+              <tr key={g.id}>
+                {g.headers.map((h) => (
+                  <HeaderCell key={h.id} header={h} />
+                ))}
+              </tr>
             ))}
           </thead>
           <tbody>
             {table.getRowModel().rows.map((row) => (
               <tr key={row.id} className="border-b border-rule last:border-b-0">
                 {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className={`px-3 py-2 align-top ${cell.column.columnDef.meta?.numeric ? 'text-right' : ''} ${cell.column.id === 'name' ? `${STICKY} bg-white` : ''}`}>
+                  <td
+                    key={cell.id}
+                    className={`px-3 py-2 align-top ${cell.column.columnDef.meta?.numeric ? 'text-right' : ''} ${cell.column.id === 'name' ? `${STICKY} bg-white` : ''}`}
+                  >
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>
                 ))}

@@ -12,24 +12,42 @@ const sortLabels: Record<PartSort, string> = {
   newest: 'Newest listed first',
 };
 
-const link = 'inline-flex items-center gap-1 rounded-md border border-teal bg-white px-2.5 py-1 text-sm font-medium text-teal-dark hover:bg-teal/10';
+const link =
+  'inline-flex items-center gap-1 rounded-md border border-teal bg-white px-2.5 py-1 text-sm font-medium text-teal-dark hover:bg-teal/10';
 
 /** How many parts match, the sort (also set by the table headers), and downloads of the whole search. */
 export function ResultsBar({ search, total }: { search: PartSearch; total: number | undefined }) {
   return (
     <div className="mb-3 flex flex-wrap items-end justify-between gap-3">
       <p className="text-sm text-ink-soft" aria-live="polite">
-        {total === undefined ? 'Searching…' : <><span className="num font-semibold text-ink">{total}</span> {total === 1 ? 'part matches' : 'parts match'}{search.filtered ? ' these filters' : ''}</>}
+        {total === undefined ? (
+          'Searching…'
+        ) : (
+          <>
+            <span className="num font-semibold text-ink">{total}</span> {total === 1 ? 'part matches' : 'parts match'}
+            {search.filtered ? ' these filters' : ''}
+          </>
+        )}
       </p>
       <div className="flex flex-wrap items-end gap-3">
         <div>
-          <label htmlFor="part-sort" className={labelClass}>Sort</label>
+          <label htmlFor="part-sort" className={labelClass}>
+            Sort
+          </label>
           <select id="part-sort" className={fieldClass} value={search.sort} onChange={(e) => search.setSort(e.target.value as PartSort)}>
-            {PART_SORTS.map((s) => <option key={s} value={s}>{sortLabels[s]}</option>)}
+            {PART_SORTS.map((s) => (
+              <option key={s} value={s}>
+                {sortLabels[s]}
+              </option>
+            ))}
           </select>
         </div>
-        <a className={link} href={partsExportHref(search.query, 'csv')} download>Download CSV</a>
-        <a className={link} href={partsExportHref(search.query, 'json')} download>Download JSON</a>
+        <a className={link} href={partsExportHref(search.query, 'csv')} download>
+          Download CSV
+        </a>
+        <a className={link} href={partsExportHref(search.query, 'json')} download>
+          Download JSON
+        </a>
       </div>
     </div>
   );

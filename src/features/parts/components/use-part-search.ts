@@ -68,7 +68,8 @@ export function usePartSearch() {
     page,
     pageSize: PARTS_PAGE_SIZE,
   };
-  const filtered = Boolean(filters.q || filters.category) || [gainMin, gainMax, filters.minRuns, filters.maxVolts].some((v) => v !== undefined);
+  const filtered =
+    Boolean(filters.q || filters.category) || [gainMin, gainMax, filters.minRuns, filters.maxVolts].some((v) => v !== undefined);
   return {
     filters,
     sort,

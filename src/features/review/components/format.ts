@@ -15,7 +15,14 @@ export function age(iso: string | null | undefined, now = Date.now()): string {
   return plural(Math.floor(ms / DAY), 'day');
 }
 
-const dateTime = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZone: 'UTC' });
+const dateTime = new Intl.DateTimeFormat('en-GB', {
+  day: 'numeric',
+  month: 'short',
+  year: 'numeric',
+  hour: '2-digit',
+  minute: '2-digit',
+  timeZone: 'UTC',
+});
 const dateOnly = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
 
 /** "12 Mar 2025, 14:05 UTC". */
@@ -47,4 +54,11 @@ export const count = (n: number, one: string, many = `${one}s`) => `${n} ${n ===
 export const sentenceCase = (s: string) => (s ? s[0].toUpperCase() + s.slice(1) : s);
 
 /** Report and audit target types in words. */
-export const targetTypeWords: Record<string, string> = { build: 'build', run: 'calibration run', part: 'part', listing: 'listing', report: 'report', user: 'account' };
+export const targetTypeWords: Record<string, string> = {
+  build: 'build',
+  run: 'calibration run',
+  part: 'part',
+  listing: 'listing',
+  report: 'report',
+  user: 'account',
+};

@@ -17,7 +17,15 @@ interface Chrome {
 }
 
 /** Label, control, hint and error, wired with htmlFor and aria-describedby. */
-export function FieldShell({ id, label, unit, hint, optional, error, children }: Chrome & { id: string; error?: string; children: ReactNode }) {
+export function FieldShell({
+  id,
+  label,
+  unit,
+  hint,
+  optional,
+  error,
+  children,
+}: Chrome & { id: string; error?: string; children: ReactNode }) {
   return (
     <div className="min-w-0">
       <label htmlFor={id} className="block text-sm font-medium">
@@ -26,8 +34,16 @@ export function FieldShell({ id, label, unit, hint, optional, error, children }:
         {optional && <span className="font-normal text-ink-soft"> · optional</span>}
       </label>
       {children}
-      {hint && !error && <p id={`${id}-hint`} className="mt-1 text-xs text-ink-soft">{hint}</p>}
-      {error && <p id={`${id}-error`} className="mt-1 text-xs font-medium text-danger">{error}</p>}
+      {hint && !error && (
+        <p id={`${id}-hint`} className="mt-1 text-xs text-ink-soft">
+          {hint}
+        </p>
+      )}
+      {error && (
+        <p id={`${id}-error`} className="mt-1 text-xs font-medium text-danger">
+          {error}
+        </p>
+      )}
     </div>
   );
 }
@@ -35,7 +51,12 @@ export function FieldShell({ id, label, unit, hint, optional, error, children }:
 const describedBy = (id: string, error?: string, hint?: ReactNode) => (error ? `${id}-error` : hint ? `${id}-hint` : undefined);
 
 /** A numeric input: decimal keypad on phones, monospace digits, the unit in its label. */
-export function NumberInput({ registration, error, step = 'any', ...chrome }: Chrome & { registration: UseFormRegisterReturn; error?: string; step?: string }) {
+export function NumberInput({
+  registration,
+  error,
+  step = 'any',
+  ...chrome
+}: Chrome & { registration: UseFormRegisterReturn; error?: string; step?: string }) {
   const id = useId();
   return (
     <FieldShell id={id} error={error} {...chrome}>
@@ -54,12 +75,27 @@ export function NumberInput({ registration, error, step = 'any', ...chrome }: Ch
 }
 
 /** A select with its label; options as value/label pairs. */
-export function SelectInput({ registration, error, options, ...chrome }: Chrome & { registration: UseFormRegisterReturn; error?: string; options: readonly { value: string; label: string }[] }) {
+export function SelectInput({
+  registration,
+  error,
+  options,
+  ...chrome
+}: Chrome & { registration: UseFormRegisterReturn; error?: string; options: readonly { value: string; label: string }[] }) {
   const id = useId();
   return (
     <FieldShell id={id} error={error} {...chrome}>
-      <select id={id} aria-invalid={error ? true : undefined} aria-describedby={describedBy(id, error, chrome.hint)} className={inputClass} {...registration}>
-        {options.map((o) => <option key={o.value} value={o.value}>{o.label}</option>)}
+      <select
+        id={id}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={describedBy(id, error, chrome.hint)}
+        className={inputClass}
+        {...registration}
+      >
+        {options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
       </select>
     </FieldShell>
   );
@@ -71,12 +107,20 @@ export function errorOf<T extends FieldValues, O>(form: UseFormReturn<T, unknown
 }
 
 /** A NumberInput bound to one field of a form: registers it as a number and shows its error. */
-export function FormNumber<T extends FieldValues, O>({ form, name, ...chrome }: Chrome & { form: UseFormReturn<T, unknown, O>; name: Path<T>; step?: string }) {
+export function FormNumber<T extends FieldValues, O>({
+  form,
+  name,
+  ...chrome
+}: Chrome & { form: UseFormReturn<T, unknown, O>; name: Path<T>; step?: string }) {
   return <NumberInput registration={form.register(name, asNumber)} error={errorOf(form, name)} {...chrome} />;
 }
 
 /** A SelectInput bound to one field of a form. */
-export function FormSelect<T extends FieldValues, O>({ form, name, ...rest }: Chrome & { form: UseFormReturn<T, unknown, O>; name: Path<T>; options: readonly { value: string; label: string }[] }) {
+export function FormSelect<T extends FieldValues, O>({
+  form,
+  name,
+  ...rest
+}: Chrome & { form: UseFormReturn<T, unknown, O>; name: Path<T>; options: readonly { value: string; label: string }[] }) {
   return <SelectInput registration={form.register(name)} error={errorOf(form, name)} {...rest} />;
 }
 
@@ -92,7 +136,17 @@ export function FieldGroup({ legend, children, note, pairs }: { legend: string; 
 }
 
 /** A small set of exclusive choices as labelled radio buttons, drawn as a segmented control. */
-export function FormRadios<T extends FieldValues, O>({ form, name, legend, options }: { form: UseFormReturn<T, unknown, O>; name: Path<T>; legend: string; options: readonly { value: string; label: string }[] }) {
+export function FormRadios<T extends FieldValues, O>({
+  form,
+  name,
+  legend,
+  options,
+}: {
+  form: UseFormReturn<T, unknown, O>;
+  name: Path<T>;
+  legend: string;
+  options: readonly { value: string; label: string }[];
+}) {
   const id = useId();
   return (
     <fieldset className="min-w-0">
@@ -100,7 +154,13 @@ export function FormRadios<T extends FieldValues, O>({ form, name, legend, optio
       <div className="mt-1 inline-flex flex-wrap rounded-md border border-rule bg-white p-0.5">
         {options.map((o) => (
           <label key={o.value} htmlFor={`${id}-${o.value}`} className="relative cursor-pointer">
-            <input id={`${id}-${o.value}`} type="radio" value={o.value} className="peer absolute inset-0 h-full w-full cursor-pointer opacity-0" {...form.register(name)} />
+            <input
+              id={`${id}-${o.value}`}
+              type="radio"
+              value={o.value}
+              className="peer absolute inset-0 h-full w-full cursor-pointer opacity-0"
+              {...form.register(name)}
+            />
             <span className="block rounded px-3 py-1 text-sm peer-checked:bg-ink peer-checked:text-paper peer-focus-visible:outline-2 peer-focus-visible:outline-offset-1 peer-focus-visible:outline-copper">
               {o.label}
             </span>

@@ -35,8 +35,16 @@ export function FormQuantity<T extends FieldValues, O>({
           className="num min-w-0 flex-1 rounded-md border border-rule bg-white px-2 py-1.5 aria-[invalid=true]:border-danger aria-[invalid=true]:bg-danger/5"
           {...form.register(name, asNumber)}
         />
-        <select aria-label={`${label}: unit`} className="w-24 shrink-0 rounded-md border border-rule bg-white px-2 py-1.5" {...form.register(unitName)}>
-          {units.map((u) => <option key={u.value} value={u.value}>{u.label}</option>)}
+        <select
+          aria-label={`${label}: unit`}
+          className="w-24 shrink-0 rounded-md border border-rule bg-white px-2 py-1.5"
+          {...form.register(unitName)}
+        >
+          {units.map((u) => (
+            <option key={u.value} value={u.value}>
+              {u.label}
+            </option>
+          ))}
         </select>
       </div>
     </FieldShell>

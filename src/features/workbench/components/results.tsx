@@ -18,7 +18,17 @@ export function Quantity({ q, className = '' }: { q: Formatted; className?: stri
  * A gain in nm/V with its ± where known, saying which ± it is: "102.6 ± 1.3 nm/V (95 %)" or
  * "(u, k = 1)"; the full meaning is in the title for a pointer and a screen reader.
  */
-export function Gain({ value, plusMinus, kind, className = '' }: { value: number; plusMinus?: number | null; kind?: PlusMinusKind; className?: string }) {
+export function Gain({
+  value,
+  plusMinus,
+  kind,
+  className = '',
+}: {
+  value: number;
+  plusMinus?: number | null;
+  kind?: PlusMinusKind;
+  className?: string;
+}) {
   const f = formatWithUncertainty(value, plusMinus);
   const label = kind ? plusMinusLabels[kind] : null;
   return (
@@ -27,7 +37,9 @@ export function Gain({ value, plusMinus, kind, className = '' }: { value: number
       {f.uncertainty && <span className="num"> ± {f.uncertainty}</span>}
       <span> nm/V</span>
       {f.uncertainty && label && (
-        <abbr title={label.long} className="ml-1 align-middle text-[0.6em] font-normal text-ink-soft no-underline">({label.short})</abbr>
+        <abbr title={label.long} className="ml-1 align-middle text-[0.6em] font-normal text-ink-soft no-underline">
+          ({label.short})
+        </abbr>
       )}
     </span>
   );
@@ -40,21 +52,40 @@ export function ResultWarnings({ warnings }: { warnings: readonly ResultWarning[
     <div role="status" className="rounded-md border border-l-4 border-amber bg-amber/10 p-3 text-sm">
       <p className="font-semibold">Read this figure with care</p>
       <ul className="mt-1 list-disc space-y-1 pl-5">
-        {warnings.map((w) => <li key={w.code}>{w.message}</li>)}
+        {warnings.map((w) => (
+          <li key={w.code}>{w.message}</li>
+        ))}
       </ul>
     </div>
   );
 }
 
 /** The results card: a heading, the headline, rows, and the basis of the numbers. */
-export function ResultPanel({ title = 'Results', headline, children, basis }: { title?: string; headline?: ReactNode; children?: ReactNode; basis?: ReactNode }) {
+export function ResultPanel({
+  title = 'Results',
+  headline,
+  children,
+  basis,
+}: {
+  title?: string;
+  headline?: ReactNode;
+  children?: ReactNode;
+  basis?: ReactNode;
+}) {
   const id = useId();
   return (
     <section aria-labelledby={id} className="rounded-lg border border-rule bg-white p-4">
-      <h2 id={id} className="text-sm font-semibold uppercase tracking-wide text-ink-soft">{title}</h2>
+      <h2 id={id} className="text-sm font-semibold uppercase tracking-wide text-ink-soft">
+        {title}
+      </h2>
       {headline && <div className="mt-2">{headline}</div>}
       {children && <dl className="mt-3 divide-y divide-rule border-t border-rule">{children}</dl>}
-      {basis && <p className="mt-3 text-xs text-ink-soft"><span className="font-semibold">Basis: </span>{basis}</p>}
+      {basis && (
+        <p className="mt-3 text-xs text-ink-soft">
+          <span className="font-semibold">Basis: </span>
+          {basis}
+        </p>
+      )}
     </section>
   );
 }
@@ -64,8 +95,12 @@ export function Headline({ label, children, sub }: { label: string; children: Re
   const id = useId();
   return (
     <div>
-      <p id={id} className="text-sm text-ink-soft">{label}</p>
-      <output aria-labelledby={id} className="block text-2xl font-semibold text-ink sm:text-3xl">{children}</output>
+      <p id={id} className="text-sm text-ink-soft">
+        {label}
+      </p>
+      <output aria-labelledby={id} className="block text-2xl font-semibold text-ink sm:text-3xl">
+        {children}
+      </output>
       {sub && <p className="mt-1 text-sm text-ink-soft">{sub}</p>}
     </div>
   );
@@ -93,7 +128,11 @@ export function NoResult({ message }: { message: string }) {
 }
 
 /** A calculator's cautions (with the levels crossed) and warnings, above its results; nothing when it has none. */
-export function ResultNotesBlock({ r }: { r: { warnings: readonly ResultWarning[]; cautions: readonly Caution[]; levelsCrossed?: readonly string[] } }) {
+export function ResultNotesBlock({
+  r,
+}: {
+  r: { warnings: readonly ResultWarning[]; cautions: readonly Caution[]; levelsCrossed?: readonly string[] };
+}) {
   return (
     <>
       <SafetyNotice cautions={r.cautions} crossed={r.levelsCrossed} />

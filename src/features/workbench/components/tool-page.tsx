@@ -11,9 +11,15 @@ export function ToolPage({ slug, lead, children }: { slug: WorkbenchSlug; lead: 
     <div>
       <nav aria-label="Breadcrumb" className="mb-2 text-sm">
         <ol className="flex flex-wrap gap-1 text-ink-soft">
-          <li><Link to={paths.workbench} className="text-teal-dark underline-offset-2 hover:underline">Workbench</Link></li>
+          <li>
+            <Link to={paths.workbench} className="text-teal-dark underline-offset-2 hover:underline">
+              Workbench
+            </Link>
+          </li>
           <li aria-hidden="true">›</li>
-          <li aria-current="page" className="text-ink">{title}</li>
+          <li aria-current="page" className="text-ink">
+            {title}
+          </li>
         </ol>
       </nav>
       <PageHeader title={title} lead={lead} />

@@ -30,7 +30,10 @@ export function previewCreep(text: string, unit: CreepFormValues['unit'], projec
   const base = { used: samples.length, problems: problems as RowProblem[] };
   if (!parsed.success) {
     const issue = parsed.error.issues[0];
-    const message = issue.path.length > 2 ? `Line ${rows[Number(issue.path[1])]?.line}: time must be more than 0.` : 'A creep fit needs at least 3 good samples.';
+    const message =
+      issue.path.length > 2
+        ? `Line ${rows[Number(issue.path[1])]?.line}: time must be more than 0.`
+        : 'A creep fit needs at least 3 good samples.';
     return { ...base, ok: false as const, message };
   }
   try {

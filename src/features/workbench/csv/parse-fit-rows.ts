@@ -64,7 +64,12 @@ export function rowsFromCsv(text: string): { rows: RawFitRow[]; note: string | n
   const cols = columnsOf(header);
   const body = header ? lines.slice(1) : lines;
   return {
-    rows: body.map(({ line, cells }) => ({ line, volts: cells[cols.v] ?? '', displacement: cells[cols.x] ?? '', sweep: cols.s >= 0 ? (cells[cols.s] ?? '') : '' })),
+    rows: body.map(({ line, cells }) => ({
+      line,
+      volts: cells[cols.v] ?? '',
+      displacement: cells[cols.x] ?? '',
+      sweep: cols.s >= 0 ? (cells[cols.s] ?? '') : '',
+    })),
     note: cols.note,
   };
 }

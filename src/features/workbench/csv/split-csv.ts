@@ -41,14 +41,19 @@ export function looksLikeHeader(line: CsvLine | undefined): boolean {
  * Reads fixed numeric columns (in the given order; a header line is skipped). Bad lines are left
  * out with a message each; good ones come back as numbers with their line numbers.
  */
-export function readNumericColumns(text: string, names: readonly string[]): { rows: { line: number; values: number[] }[]; problems: RowProblem[] } {
+export function readNumericColumns(
+  text: string,
+  names: readonly string[],
+): { rows: { line: number; values: number[] }[]; problems: RowProblem[] } {
   const lines = splitCsv(text);
   const body = looksLikeHeader(lines[0]) ? lines.slice(1) : lines;
   const rows: { line: number; values: number[] }[] = [];
   const problems: RowProblem[] = [];
   for (const { line, cells } of body) {
     const values: number[] = [];
-    const wrong = names.map((name, i) => readNumber(cells[i], name)).flatMap((r) => ('value' in r ? (values.push(r.value), []) : [r.problem]));
+    const wrong = names
+      .map((name, i) => readNumber(cells[i], name))
+      .flatMap((r) => ('value' in r ? (values.push(r.value), []) : [r.problem]));
     if (wrong.length > 0) problems.push({ line, message: `${wrong.join('; ')}.` });
     else rows.push({ line, values });
   }

@@ -9,13 +9,25 @@ export type GeometryField = 'lengthMm' | 'thicknessMm' | 'outerDiameterMm' | 'wa
 export type Constant = 'd31PmPerV' | 'd33PmPerV' | 'd15PmPerV';
 
 interface Kind {
-  value: 'plate-thickness' | 'plate-length' | 'stack' | 'shear-plate' | 'bimorph-series' | 'bimorph-parallel' | 'tube-quadrant' | 'tube-opposite-pair' | 'tube-axial';
+  value:
+    | 'plate-thickness'
+    | 'plate-length'
+    | 'stack'
+    | 'shear-plate'
+    | 'bimorph-series'
+    | 'bimorph-parallel'
+    | 'tube-quadrant'
+    | 'tube-opposite-pair'
+    | 'tube-axial';
   label: string;
   constant: Constant;
   fields: readonly { name: GeometryField; label: string; unit?: string; optional?: boolean }[];
 }
 
-const bar = [{ name: 'lengthMm', label: 'Free length L', unit: 'mm' }, { name: 'thicknessMm', label: 'Total thickness h', unit: 'mm' }] as const;
+const bar = [
+  { name: 'lengthMm', label: 'Free length L', unit: 'mm' },
+  { name: 'thicknessMm', label: 'Total thickness h', unit: 'mm' },
+] as const;
 const tube = [
   { name: 'lengthMm', label: 'Length L', unit: 'mm' },
   { name: 'outerDiameterMm', label: 'Outer diameter', unit: 'mm' },
@@ -30,9 +42,22 @@ export const actuatorKinds: readonly Kind[] = [
   { value: 'tube-opposite-pair', label: 'Quartered tube, ±V on opposite quadrants', constant: 'd31PmPerV', fields: tube },
   { value: 'tube-axial', label: 'Tube, axial (all quadrants together)', constant: 'd31PmPerV', fields: tube },
   { value: 'stack', label: 'Multilayer stack', constant: 'd33PmPerV', fields: [{ name: 'layers', label: 'Layers n' }] },
-  { value: 'shear-plate', label: 'Shear plate', constant: 'd15PmPerV', fields: [{ name: 'plates', label: 'Plates stacked', optional: true }] },
+  {
+    value: 'shear-plate',
+    label: 'Shear plate',
+    constant: 'd15PmPerV',
+    fields: [{ name: 'plates', label: 'Plates stacked', optional: true }],
+  },
   { value: 'plate-thickness', label: 'Plate, thickness mode', constant: 'd33PmPerV', fields: [] },
-  { value: 'plate-length', label: 'Plate, length mode', constant: 'd31PmPerV', fields: [{ name: 'lengthMm', label: 'Length L', unit: 'mm' }, { name: 'thicknessMm', label: 'Thickness t', unit: 'mm' }] },
+  {
+    value: 'plate-length',
+    label: 'Plate, length mode',
+    constant: 'd31PmPerV',
+    fields: [
+      { name: 'lengthMm', label: 'Length L', unit: 'mm' },
+      { name: 'thicknessMm', label: 'Thickness t', unit: 'mm' },
+    ],
+  },
 ];
 
 /** The presentation of one actuator kind, with its formula and source from shared/workbench/expected-gain.ts. */

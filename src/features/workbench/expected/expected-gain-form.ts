@@ -29,14 +29,21 @@ export const expectedGainForm = z
   .superRefine((v, ctx) => {
     const needed = kindOf(v.spec.actuator).constant;
     if (v.materialKey === 'custom' && !v.custom[needed]) {
-      ctx.addIssue({ code: 'custom', path: ['custom', needed], message: `Enter ${constantLabels[needed]}: this actuator's formula uses it.` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['custom', needed],
+        message: `Enter ${constantLabels[needed]}: this actuator's formula uses it.`,
+      });
     }
   })
   .transform((v): unknown => {
     const kind = kindOf(v.spec.actuator);
     const geometry = Object.fromEntries(kind.fields.map((f) => [f.name, v.spec[f.name]]).filter(([, x]) => x !== undefined));
     const tolerances = Object.fromEntries(
-      kind.fields.filter((f) => f.unit === 'mm').map((f) => [f.name, v.tolerances[f.name as keyof typeof v.tolerances]]).filter(([, x]) => x !== undefined),
+      kind.fields
+        .filter((f) => f.unit === 'mm')
+        .map((f) => [f.name, v.tolerances[f.name as keyof typeof v.tolerances]])
+        .filter(([, x]) => x !== undefined),
     );
     return {
       actuator: kind.value,

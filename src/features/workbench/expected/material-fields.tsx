@@ -17,12 +17,16 @@ export function MaterialFields({ form, needed }: { form: Form; needed: Constant 
   const key = form.watch('materialKey');
   const material = key === 'custom' ? null : materials[key as MaterialKey];
   return (
-    <FieldGroup legend="Material" note="Families, not grades: real parts vary by about ±20 %, and a salvaged element may be another ceramic entirely.">
+    <FieldGroup
+      legend="Material"
+      note="Families, not grades: real parts vary by about ±20 %, and a salvaged element may be another ceramic entirely."
+    >
       <FormSelect form={form} name="materialKey" label="Piezoceramic" options={options} />
       {material ? (
         <div className="text-sm" aria-live="polite">
           <p className="num">
-            d31 {pm(material.d31PmPerV)} · d33 {pm(material.d33PmPerV)} · d15 {pm(material.d15PmPerV)} <span className="font-sans">pm/V</span>
+            d31 {pm(material.d31PmPerV)} · d33 {pm(material.d33PmPerV)} · d15 {pm(material.d15PmPerV)}{' '}
+            <span className="font-sans">pm/V</span>
           </p>
           <p className="mt-1 text-xs text-ink-soft">{sourceInWords(material.source)}</p>
         </div>

@@ -19,7 +19,9 @@ export function CsvSource({ form }: { form: FitFormApi }) {
   return (
     <div className="space-y-3">
       <div>
-        <label htmlFor={textId} className="block text-sm font-medium">CSV text</label>
+        <label htmlFor={textId} className="block text-sm font-medium">
+          CSV text
+        </label>
         <textarea
           id={textId}
           rows={8}
@@ -34,7 +36,9 @@ export function CsvSource({ form }: { form: FitFormApi }) {
         </p>
       </div>
       <div>
-        <label htmlFor={fileId} className="block text-sm font-medium">Or load a CSV file</label>
+        <label htmlFor={fileId} className="block text-sm font-medium">
+          Or load a CSV file
+        </label>
         <input
           id={fileId}
           type="file"
@@ -42,7 +46,11 @@ export function CsvSource({ form }: { form: FitFormApi }) {
           className="mt-1 block w-full text-sm file:mr-3 file:rounded-md file:border file:border-teal file:bg-white file:px-3 file:py-1 file:text-teal-dark"
           onChange={(e) => void handleFile(e.target.files?.[0])}
         />
-        {fileNote && <p role="status" className="mt-1 text-xs text-ink-soft">{fileNote}</p>}
+        {fileNote && (
+          <p role="status" className="mt-1 text-xs text-ink-soft">
+            {fileNote}
+          </p>
+        )}
       </div>
     </div>
   );

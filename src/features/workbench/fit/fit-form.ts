@@ -27,12 +27,30 @@ export type FitFormApi = UseFormReturn<FitFormValues, unknown, z.output<typeof f
 /** One grid row as typed. */
 export type GridRow = z.infer<typeof gridRow>;
 
-const row = (volts: number, displacement: number, sweep: GridRow['sweep']): GridRow => ({ volts: String(volts), displacement: String(displacement), sweep });
+const row = (volts: number, displacement: number, sweep: GridRow['sweep']): GridRow => ({
+  volts: String(volts),
+  displacement: String(displacement),
+  sweep,
+});
 
 /** Illustrative up and down sweeps of a bender (made-up numbers, about 100 nm/V) to show the page working. */
 export const exampleRows: GridRow[] = [
-  ...[[0, 0], [2, 170], [4, 368], [6, 578], [8, 789], [10, 1004]].map(([v, x]) => row(v, x, 'up')),
-  ...[[10, 1004], [8, 838], [6, 636], [4, 421], [2, 214], [0, 12]].map(([v, x]) => row(v, x, 'down')),
+  ...[
+    [0, 0],
+    [2, 170],
+    [4, 368],
+    [6, 578],
+    [8, 789],
+    [10, 1004],
+  ].map(([v, x]) => row(v, x, 'up')),
+  ...[
+    [10, 1004],
+    [8, 838],
+    [6, 636],
+    [4, 421],
+    [2, 214],
+    [0, 12],
+  ].map(([v, x]) => row(v, x, 'down')),
 ];
 
 /** Empty rows for a fresh grid. */
@@ -48,16 +66,28 @@ export interface FitPreview {
 }
 
 /** Runs the shared schema and fit on the good rows; a sentence instead when it cannot. */
-export function previewFit(checked: CheckedRows, settings: Pick<FitFormValues, 'voltageUnit' | 'displacementUnit' | 'model'>): { ok: true; preview: FitPreview } | { ok: false; message: string } {
+export function previewFit(
+  checked: CheckedRows,
+  settings: Pick<FitFormValues, 'voltageUnit' | 'displacementUnit' | 'model'>,
+): { ok: true; preview: FitPreview } | { ok: false; message: string } {
   const parsed = fitInput.safeParse({ ...settings, points: checked.points }, { error: friendlyError });
   if (!parsed.success) {
     const tooFew = parsed.error.issues.some((i) => i.path[0] === 'points' && i.code === 'too_small');
-    return { ok: false, message: tooFew ? `A fit needs at least 3 good points; there ${checked.points.length === 1 ? 'is' : 'are'} ${checked.points.length}.` : parsed.error.issues[0].message };
+    return {
+      ok: false,
+      message: tooFew
+        ? `A fit needs at least 3 good points; there ${checked.points.length === 1 ? 'is' : 'are'} ${checked.points.length}.`
+        : parsed.error.issues[0].message,
+    };
   }
   try {
     const fit = fitCalculator.compute(parsed.data);
     const { voltageUnit, displacementUnit } = parsed.data;
-    const plotPoints = parsed.data.points.map((p) => ({ volts: toVolts(p.volts, voltageUnit), displacementNm: toNm(p.displacement, displacementUnit), sweep: p.sweep }));
+    const plotPoints = parsed.data.points.map((p) => ({
+      volts: toVolts(p.volts, voltageUnit),
+      displacementNm: toNm(p.displacement, displacementUnit),
+      sweep: p.sweep,
+    }));
     return { ok: true, preview: { fit, plotPoints } };
   } catch (err) {
     return { ok: false, message: refusalMessage(err) };

@@ -4,7 +4,17 @@ import type { RowProblem } from '../csv/split-csv.ts';
 const SHOWN_ROWS = 50;
 
 /** The first rows of a pasted or loaded CSV as they were read, each marked used or left out. */
-export function RowsPreview({ rows, problems, voltsUnit, lengthUnit }: { rows: readonly RawFitRow[]; problems: readonly RowProblem[]; voltsUnit: string; lengthUnit: string }) {
+export function RowsPreview({
+  rows,
+  problems,
+  voltsUnit,
+  lengthUnit,
+}: {
+  rows: readonly RawFitRow[];
+  problems: readonly RowProblem[];
+  voltsUnit: string;
+  lengthUnit: string;
+}) {
   if (rows.length === 0) return null;
   const bad = new Map(problems.map((p) => [p.line, p.message]));
   return (
@@ -15,11 +25,21 @@ export function RowsPreview({ rows, problems, voltsUnit, lengthUnit }: { rows: r
         </caption>
         <thead className="bg-paper text-xs text-ink-soft">
           <tr>
-            <th scope="col" className="px-2 py-1 font-medium">Line</th>
-            <th scope="col" className="px-2 py-1 font-medium">Volts ({voltsUnit})</th>
-            <th scope="col" className="px-2 py-1 font-medium">Displacement ({lengthUnit})</th>
-            <th scope="col" className="px-2 py-1 font-medium">Sweep</th>
-            <th scope="col" className="px-2 py-1 font-medium">Status</th>
+            <th scope="col" className="px-2 py-1 font-medium">
+              Line
+            </th>
+            <th scope="col" className="px-2 py-1 font-medium">
+              Volts ({voltsUnit})
+            </th>
+            <th scope="col" className="px-2 py-1 font-medium">
+              Displacement ({lengthUnit})
+            </th>
+            <th scope="col" className="px-2 py-1 font-medium">
+              Sweep
+            </th>
+            <th scope="col" className="px-2 py-1 font-medium">
+              Status
+            </th>
           </tr>
         </thead>
         <tbody className="divide-y divide-rule">
@@ -29,7 +49,9 @@ export function RowsPreview({ rows, problems, voltsUnit, lengthUnit }: { rows: r
               <td className="num px-2 py-0.5">{r.volts}</td>
               <td className="num px-2 py-0.5">{r.displacement}</td>
               <td className="px-2 py-0.5">{r.sweep || '—'}</td>
-              <td className={`px-2 py-0.5 ${bad.has(r.line) ? 'text-danger' : 'text-teal-dark'}`}>{bad.has(r.line) ? 'left out' : 'used'}</td>
+              <td className={`px-2 py-0.5 ${bad.has(r.line) ? 'text-danger' : 'text-teal-dark'}`}>
+                {bad.has(r.line) ? 'left out' : 'used'}
+              </td>
             </tr>
           ))}
         </tbody>

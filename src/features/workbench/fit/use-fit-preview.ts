@@ -15,7 +15,12 @@ export function useFitPreview(form: FitFormApi) {
       const read = rowsFromCsv(deferredCsv ?? '');
       return { rows: read.rows, checked: checkFitRows(read.rows, read.note) };
     }
-    const typed = (rows ?? []).map((r, i) => ({ line: i + 1, volts: r?.volts ?? '', displacement: r?.displacement ?? '', sweep: r?.sweep ?? '' }));
+    const typed = (rows ?? []).map((r, i) => ({
+      line: i + 1,
+      volts: r?.volts ?? '',
+      displacement: r?.displacement ?? '',
+      sweep: r?.sweep ?? '',
+    }));
     return { rows: typed, checked: checkFitRows(typed) };
   }, [source, rows, deferredCsv]);
   const result = useMemo(

@@ -19,13 +19,21 @@ export function useFitUnitConversion(form: FitFormApi) {
     const voltsChanged = before.voltageUnit !== voltageUnit && before.voltageUnit && voltageUnit;
     if (!lengthChanged && !voltsChanged) return;
     if (source === 'csv') {
-      setPending(lengthChanged ? { field: 'displacementUnit', from: before.displacementUnit! } : { field: 'voltageUnit', from: before.voltageUnit! });
+      setPending(
+        lengthChanged ? { field: 'displacementUnit', from: before.displacementUnit! } : { field: 'voltageUnit', from: before.voltageUnit! },
+      );
       return;
     }
     const rows = form.getValues('rows').map((r) => ({
       ...r,
-      displacement: lengthChanged ? convertText(r.displacement, (v) => convertDisplacement(v, before.displacementUnit as DisplacementUnit, displacementUnit as DisplacementUnit)) : r.displacement,
-      volts: voltsChanged ? convertText(r.volts, (v) => fromVolts(toVolts(v, before.voltageUnit as VoltageUnit), voltageUnit as VoltageUnit)) : r.volts,
+      displacement: lengthChanged
+        ? convertText(r.displacement, (v) =>
+            convertDisplacement(v, before.displacementUnit as DisplacementUnit, displacementUnit as DisplacementUnit),
+          )
+        : r.displacement,
+      volts: voltsChanged
+        ? convertText(r.volts, (v) => fromVolts(toVolts(v, before.voltageUnit as VoltageUnit), voltageUnit as VoltageUnit))
+        : r.volts,
     }));
     form.setValue('rows', rows, { shouldValidate: true });
   }, [source, voltageUnit, displacementUnit, form]);

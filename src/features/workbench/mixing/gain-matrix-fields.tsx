@@ -27,11 +27,31 @@ export function GainMatrixFields({ form }: { form: MixingFormApi }) {
       <table className="w-full table-fixed text-sm">
         <caption className="mb-1 text-left text-sm text-ink-soft">Tip motion per volt on each bender, G (nm/V)</caption>
         <thead className="text-xs text-ink-soft">
-          <tr><th scope="col" className="w-16" /><th scope="col" className="pb-1 font-medium">Va</th><th scope="col" className="pb-1 font-medium">Vb</th></tr>
+          <tr>
+            <th scope="col" className="w-16" />
+            <th scope="col" className="pb-1 font-medium">
+              Va
+            </th>
+            <th scope="col" className="pb-1 font-medium">
+              Vb
+            </th>
+          </tr>
         </thead>
         <tbody>
-          <tr><th scope="row" className="pr-2 text-left font-medium">x</th><td className="pr-2 pb-1">{input(0)}</td><td className="pb-1">{input(1)}</td></tr>
-          <tr><th scope="row" className="pr-2 text-left font-medium">y</th><td className="pr-2">{input(2)}</td><td>{input(3)}</td></tr>
+          <tr>
+            <th scope="row" className="pr-2 text-left font-medium">
+              x
+            </th>
+            <td className="pr-2 pb-1">{input(0)}</td>
+            <td className="pb-1">{input(1)}</td>
+          </tr>
+          <tr>
+            <th scope="row" className="pr-2 text-left font-medium">
+              y
+            </th>
+            <td className="pr-2">{input(2)}</td>
+            <td>{input(3)}</td>
+          </tr>
         </tbody>
       </table>
       {errors.length > 0 && <p className="mt-1 text-xs font-medium text-danger">{errors[0]}</p>}

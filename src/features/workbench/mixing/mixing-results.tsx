@@ -24,10 +24,17 @@ export function MixingResults({ r }: { r: MixingResult }) {
     <ResultPanel
       headline={
         t ? (
-          <Headline label="Drive for the wanted point" sub={t.reachable ? 'Reachable within the drive limits.' : `Out of reach: ${reasons.join('; ')}.`}>
+          <Headline
+            label="Drive for the wanted point"
+            sub={t.reachable ? 'Reachable within the drive limits.' : `Out of reach: ${reasons.join('; ')}.`}
+          >
             <span className="flex flex-wrap gap-x-4">
-              <span>Va <Quantity q={volts(t.vaV)} /></span>
-              <span>Vb <Quantity q={volts(t.vbV)} /></span>
+              <span>
+                Va <Quantity q={volts(t.vaV)} />
+              </span>
+              <span>
+                Vb <Quantity q={volts(t.vbV)} />
+              </span>
             </span>
           </Headline>
         ) : (
@@ -36,12 +43,23 @@ export function MixingResults({ r }: { r: MixingResult }) {
       }
       basis="r = G·[Va, Vb]ᵀ and [Va, Vb]ᵀ = G⁻¹·r; the reachable region is the drive-limit rectangle mapped through G (common practice; small-angle, linear)."
     >
-      {t && <ResultRow label="Reachable"><span className={t.reachable ? 'font-semibold text-teal-dark' : 'font-semibold text-danger'}>{t.reachable ? 'yes' : 'no'}</span></ResultRow>}
+      {t && (
+        <ResultRow label="Reachable">
+          <span className={t.reachable ? 'font-semibold text-teal-dark' : 'font-semibold text-danger'}>{t.reachable ? 'yes' : 'no'}</span>
+        </ResultRow>
+      )}
       <ResultRow label="G⁻¹, row Va" note="Volts per nm of x and of y.">
         <Quantity q={{ value: `${formatSig(r.inverseVPerNm[0][0] * 1000)}, ${formatSig(r.inverseVPerNm[0][1] * 1000)}`, unit: 'mV/nm' }} />
       </ResultRow>
-      <ResultRow label="G⁻¹, row Vb"><Quantity q={{ value: `${formatSig(r.inverseVPerNm[1][0] * 1000)}, ${formatSig(r.inverseVPerNm[1][1] * 1000)}`, unit: 'mV/nm' }} /></ResultRow>
-      <ResultRow label="|sin θ| between the actuators" note={r.sinAngle < 0.5 ? 'Nearly parallel: small moves across need large, opposing voltages.' : '1 at right angles, 0 when parallel.'}>
+      <ResultRow label="G⁻¹, row Vb">
+        <Quantity q={{ value: `${formatSig(r.inverseVPerNm[1][0] * 1000)}, ${formatSig(r.inverseVPerNm[1][1] * 1000)}`, unit: 'mV/nm' }} />
+      </ResultRow>
+      <ResultRow
+        label="|sin θ| between the actuators"
+        note={
+          r.sinAngle < 0.5 ? 'Nearly parallel: small moves across need large, opposing voltages.' : '1 at right angles, 0 when parallel.'
+        }
+      >
         <Quantity q={{ value: formatSig(r.sinAngle, 3), unit: '' }} />
       </ResultRow>
     </ResultPanel>

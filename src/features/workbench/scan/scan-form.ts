@@ -17,7 +17,10 @@ export const scanForm = z
     resonanceKhz: s.resonanceHz,
     wantedStepNm: s.wantedStepNm,
   })
-  .transform(({ resonanceKhz, ...rest }): z.input<typeof scanPlanInput> => ({ ...rest, resonanceHz: resonanceKhz === undefined ? undefined : resonanceKhz * 1000 }))
+  .transform(({ resonanceKhz, ...rest }): z.input<typeof scanPlanInput> => ({
+    ...rest,
+    resonanceHz: resonanceKhz === undefined ? undefined : resonanceKhz * 1000,
+  }))
   .pipe(scanPlanInput);
 
 /** Parsed scan plan in the shared schema's units. */

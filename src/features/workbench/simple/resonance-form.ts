@@ -5,7 +5,13 @@ import { sourceInWords } from '@shared/workbench/source-words.ts';
 
 /** Material presets: the built-in PZT families and a silicon lever (FIELD notes: E 169 GPa, ρ 2329 kg/m³ [memory]). */
 export const resonancePresets = [
-  ...materialKeys.map((k) => ({ value: k, label: k, source: sourceInWords(materials[k].source), eGpa: materials[k].youngsModulusGpa, rho: materials[k].densityKgPerM3 })),
+  ...materialKeys.map((k) => ({
+    value: k,
+    label: k,
+    source: sourceInWords(materials[k].source),
+    eGpa: materials[k].youngsModulusGpa,
+    rho: materials[k].densityKgPerM3,
+  })),
   { value: 'silicon', label: 'Silicon (lever)', source: sourceInWords('[memory]'), eGpa: 169, rho: 2329 },
   { value: 'custom', label: 'Custom', source: 'your own values', eGpa: undefined, rho: undefined },
 ] as const;

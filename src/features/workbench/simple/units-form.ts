@@ -13,7 +13,9 @@ export const unitsForm = z.object({
 
 /** Each quantity in every unit of its kind: three calls of the shared converter, as the API answers each. */
 export function computeUnits(input: z.output<typeof unitsForm>) {
-  const all = (q: { value: number; from: (typeof displacementUnits)[number] | (typeof voltageUnits)[number] | (typeof gainUnits)[number] }) =>
-    convertCalculator.compute({ value: q.value, from: q.from, to: q.from }).inEveryUnit;
+  const all = (q: {
+    value: number;
+    from: (typeof displacementUnits)[number] | (typeof voltageUnits)[number] | (typeof gainUnits)[number];
+  }) => convertCalculator.compute({ value: q.value, from: q.from, to: q.from }).inEveryUnit;
   return { lengths: all(input.length), voltages: all(input.voltage), gains: all(input.gain) };
 }

@@ -19,44 +19,81 @@ export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
   const remove = useDeleteActuator();
   const a = actuator;
   const name = a.label || a.part.name;
-  const facts = [`Axis ${a.axis}`, actuatorDriveLabels[a.drive], a.amplifier, a.maxVolts !== null ? `max ${sig(a.maxVolts)} V` : null].filter(Boolean).join(' · ');
+  const facts = [`Axis ${a.axis}`, actuatorDriveLabels[a.drive], a.amplifier, a.maxVolts !== null ? `max ${sig(a.maxVolts)} V` : null]
+    .filter(Boolean)
+    .join(' · ');
 
   return (
     <li className="rounded-md border border-rule bg-paper/40 p-2 sm:p-3" aria-labelledby={`actuator-${a.id}-name`}>
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div className="min-w-0">
-          <h3 id={`actuator-${a.id}-name`} className="font-semibold">{name}</h3>
-          <p className="text-sm text-ink-soft">{a.label && <>{a.part.name} · </>}{partCategoryLabels[a.part.category]}</p>
+          <h3 id={`actuator-${a.id}-name`} className="font-semibold">
+            {name}
+          </h3>
+          <p className="text-sm text-ink-soft">
+            {a.label && <>{a.part.name} · </>}
+            {partCategoryLabels[a.part.category]}
+          </p>
           <p className="text-sm">{facts}</p>
           {a.expectedGain && (
             <p className="text-xs text-ink-soft">
-              Expected from geometry: <span className="num">{sig(a.expectedGain.lowNmPerV)}–{sig(a.expectedGain.highNmPerV)} nm/V</span> ({a.expectedGain.basis})
+              Expected from geometry:{' '}
+              <span className="num">
+                {sig(a.expectedGain.lowNmPerV)}–{sig(a.expectedGain.highNmPerV)} nm/V
+              </span>{' '}
+              ({a.expectedGain.basis})
             </p>
           )}
         </div>
         {!editing && (
           <div className="flex flex-wrap gap-2">
-            <Button variant="secondary" onClick={() => setEditing(true)} aria-label={`Edit actuator ${name}`}>Edit</Button>
-            <ConfirmButton label="Delete" ariaLabel={`Delete actuator ${name}`} question="Delete this actuator and its runs?" confirmLabel="Yes, delete"
-              disabled={remove.isPending} onConfirm={() => remove.mutate(a.id)} />
+            <Button variant="secondary" onClick={() => setEditing(true)} aria-label={`Edit actuator ${name}`}>
+              Edit
+            </Button>
+            <ConfirmButton
+              label="Delete"
+              ariaLabel={`Delete actuator ${name}`}
+              question="Delete this actuator and its runs?"
+              confirmLabel="Yes, delete"
+              disabled={remove.isPending}
+              onConfirm={() => remove.mutate(a.id)}
+            />
           </div>
         )}
       </div>
-      {remove.error && <p role="alert" className="mt-2 text-sm text-danger">{errorMessage(remove.error)}</p>}
+      {remove.error && (
+        <p role="alert" className="mt-2 text-sm text-danger">
+          {errorMessage(remove.error)}
+        </p>
+      )}
       {editing && (
         <div className="mt-3">
-          <ActuatorForm idPrefix={`actuator-${a.id}`} actuator={a} submitLabel="Save actuator" onCancel={() => setEditing(false)}
-            onSave={async (values) => { await update.mutateAsync({ actuatorId: a.id, ...values }); setEditing(false); }} />
+          <ActuatorForm
+            idPrefix={`actuator-${a.id}`}
+            actuator={a}
+            submitLabel="Save actuator"
+            onCancel={() => setEditing(false)}
+            onSave={async (values) => {
+              await update.mutateAsync({ actuatorId: a.id, ...values });
+              setEditing(false);
+            }}
+          />
         </div>
       )}
       <h4 className="mb-2 mt-4 text-sm font-semibold">Calibration runs</h4>
       {a.runs.length === 0 && !addingRun && <p className="mb-2 text-sm text-ink-soft">No calibration runs yet.</p>}
-      <ul className="space-y-2">{a.runs.map((r) => <StoredRun key={r.id} run={r} />)}</ul>
+      <ul className="space-y-2">
+        {a.runs.map((r) => (
+          <StoredRun key={r.id} run={r} />
+        ))}
+      </ul>
       <div className="mt-3">
         {addingRun ? (
           <RunForm actuatorId={a.id} maxVolts={a.maxVolts} onSaved={() => setAddingRun(false)} onCancel={() => setAddingRun(false)} />
         ) : (
-          <Button variant="secondary" onClick={() => setAddingRun(true)} aria-label={`Add a calibration run to ${name}`}>Add a calibration run</Button>
+          <Button variant="secondary" onClick={() => setAddingRun(true)} aria-label={`Add a calibration run to ${name}`}>
+            Add a calibration run
+          </Button>
         )}
       </div>
     </li>

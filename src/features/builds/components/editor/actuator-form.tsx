@@ -2,7 +2,14 @@ import { useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
-import { ACTUATOR_AXES, ACTUATOR_DRIVES, actuatorDriveLabels, createActuatorInput, type ActuatorDto, type CreateActuatorInput } from '@shared/schemas/actuator.ts';
+import {
+  ACTUATOR_AXES,
+  ACTUATOR_DRIVES,
+  actuatorDriveLabels,
+  createActuatorInput,
+  type ActuatorDto,
+  type CreateActuatorInput,
+} from '@shared/schemas/actuator.ts';
 import type { PartChoiceDto } from '@shared/schemas/part.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { describedBy, Field, fieldMessage, FormError, inputClass } from './field.tsx';
@@ -15,7 +22,13 @@ const FIELDS = ['partId', 'label', 'axis', 'drive', 'amplifier', 'maxVolts', 'no
 const AXIS_LABELS = { X: 'X', Y: 'Y', Z: 'Z', XY: 'XY pair' } as const;
 
 /** Which part, on which axis, driven how, through which amplifier, up to how many volts. */
-export function ActuatorForm({ idPrefix, actuator, submitLabel, onSave, onCancel }: {
+export function ActuatorForm({
+  idPrefix,
+  actuator,
+  submitLabel,
+  onSave,
+  onCancel,
+}: {
   idPrefix: string;
   actuator?: ActuatorDto;
   submitLabel: string;
@@ -23,11 +36,22 @@ export function ActuatorForm({ idPrefix, actuator, submitLabel, onSave, onCancel
   onCancel?: () => void;
 }) {
   const [part, setPart] = useState<PartChoiceDto | undefined>(actuator?.part);
-  const { register, handleSubmit, control, setError, formState: { errors, isSubmitting } } = useForm<z.input<typeof createActuatorInput>, unknown, CreateActuatorInput>({
+  const {
+    register,
+    handleSubmit,
+    control,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm<z.input<typeof createActuatorInput>, unknown, CreateActuatorInput>({
     resolver: zodResolver(createActuatorInput),
     defaultValues: {
-      partId: actuator?.part.id, label: actuator?.label ?? '', axis: actuator?.axis ?? 'Z', drive: actuator?.drive ?? 'single',
-      amplifier: actuator?.amplifier ?? '', maxVolts: actuator?.maxVolts ?? undefined, notes: actuator?.notes ?? '',
+      partId: actuator?.part.id,
+      label: actuator?.label ?? '',
+      axis: actuator?.axis ?? 'Z',
+      drive: actuator?.drive ?? 'single',
+      amplifier: actuator?.amplifier ?? '',
+      maxVolts: actuator?.maxVolts ?? undefined,
+      notes: actuator?.notes ?? '',
     },
   });
   const maxVolts = useWatch({ control, name: 'maxVolts' });
@@ -44,22 +68,42 @@ export function ActuatorForm({ idPrefix, actuator, submitLabel, onSave, onCancel
 
   return (
     <form onSubmit={submit} noValidate className="space-y-3 rounded-md border border-rule bg-white p-3">
-      <Controller control={control} name="partId" render={({ field, fieldState }) => (
-        <PartPicker idPrefix={idPrefix} value={field.value} current={actuator?.part} error={fieldMessage(fieldState.error, 'Pick the part this actuator is made from.')}
-          onChange={(p) => { field.onChange(p.id); setPart(p); }} />
-      )} />
+      <Controller
+        control={control}
+        name="partId"
+        render={({ field, fieldState }) => (
+          <PartPicker
+            idPrefix={idPrefix}
+            value={field.value}
+            current={actuator?.part}
+            error={fieldMessage(fieldState.error, 'Pick the part this actuator is made from.')}
+            onChange={(p) => {
+              field.onChange(p.id);
+              setPart(p);
+            }}
+          />
+        )}
+      />
       <div className="grid gap-3 sm:grid-cols-3">
         <Field label="Label (optional)" htmlFor={id('label')} error={errors.label?.message} className="sm:col-span-3">
           <input id={id('label')} className={inputClass} placeholder="e.g. Z bender, X stack" {...register('label')} />
         </Field>
         <Field label="Axis" htmlFor={id('axis')} error={errors.axis?.message}>
           <select id={id('axis')} className={inputClass} {...register('axis')}>
-            {ACTUATOR_AXES.map((a) => <option key={a} value={a}>{AXIS_LABELS[a]}</option>)}
+            {ACTUATOR_AXES.map((a) => (
+              <option key={a} value={a}>
+                {AXIS_LABELS[a]}
+              </option>
+            ))}
           </select>
         </Field>
         <Field label="Drive" htmlFor={id('drive')} error={errors.drive?.message} className="sm:col-span-2">
           <select id={id('drive')} className={inputClass} {...register('drive')}>
-            {ACTUATOR_DRIVES.map((d) => <option key={d} value={d}>{actuatorDriveLabels[d]}</option>)}
+            {ACTUATOR_DRIVES.map((d) => (
+              <option key={d} value={d}>
+                {actuatorDriveLabels[d]}
+              </option>
+            ))}
           </select>
         </Field>
         <Field label="Amplifier (optional)" htmlFor={id('amp')} error={errors.amplifier?.message} className="sm:col-span-2">
@@ -67,8 +111,15 @@ export function ActuatorForm({ idPrefix, actuator, submitLabel, onSave, onCancel
         </Field>
         <Field label="Max volts (optional)" htmlFor={id('volts')} error={voltsError}>
           <div className="flex items-center gap-2">
-            <input id={id('volts')} inputMode="decimal" className={`${inputClass} num`} {...describedBy(id('volts'), voltsError)}
-              {...register('maxVolts', { setValueAs: (v: unknown) => (typeof v === 'number' ? v : parseOptionalNumber(v as string | undefined)) })} />
+            <input
+              id={id('volts')}
+              inputMode="decimal"
+              className={`${inputClass} num`}
+              {...describedBy(id('volts'), voltsError)}
+              {...register('maxVolts', {
+                setValueAs: (v: unknown) => (typeof v === 'number' ? v : parseOptionalNumber(v as string | undefined)),
+              })}
+            />
             <span className="text-sm text-ink-soft">V</span>
           </div>
         </Field>
@@ -79,8 +130,14 @@ export function ActuatorForm({ idPrefix, actuator, submitLabel, onSave, onCancel
       </Field>
       <FormError message={errors.root?.server?.message} />
       <div className="flex gap-2">
-        <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : submitLabel}</Button>
-        {onCancel && <Button variant="ghost" onClick={onCancel}>Cancel</Button>}
+        <Button type="submit" disabled={isSubmitting}>
+          {isSubmitting ? 'Saving…' : submitLabel}
+        </Button>
+        {onCancel && (
+          <Button variant="ghost" onClick={onCancel}>
+            Cancel
+          </Button>
+        )}
       </div>
     </form>
   );

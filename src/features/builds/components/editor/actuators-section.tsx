@@ -11,16 +11,32 @@ export function ActuatorsSection({ build }: { build: BuildDto }) {
   const [adding, setAdding] = useState(false);
   const create = useCreateActuator(build.id);
   return (
-    <EditorSection id="actuators" title="Actuators and calibration runs"
-      lead="Each actuator is a part from the parts registry on an axis. Add calibration runs to record its measured gain in nm/V.">
+    <EditorSection
+      id="actuators"
+      title="Actuators and calibration runs"
+      lead="Each actuator is a part from the parts registry on an axis. Add calibration runs to record its measured gain in nm/V."
+    >
       {build.actuators.length === 0 && !adding && <p className="mb-3 text-sm text-ink-soft">No actuators yet.</p>}
-      <ul className="space-y-4">{build.actuators.map((a) => <ActuatorCard key={a.id} actuator={a} />)}</ul>
+      <ul className="space-y-4">
+        {build.actuators.map((a) => (
+          <ActuatorCard key={a.id} actuator={a} />
+        ))}
+      </ul>
       <div className="mt-4">
         {adding ? (
-          <ActuatorForm idPrefix="new-actuator" submitLabel="Add actuator" onCancel={() => setAdding(false)}
-            onSave={async (values) => { await create.mutateAsync(values); setAdding(false); }} />
+          <ActuatorForm
+            idPrefix="new-actuator"
+            submitLabel="Add actuator"
+            onCancel={() => setAdding(false)}
+            onSave={async (values) => {
+              await create.mutateAsync(values);
+              setAdding(false);
+            }}
+          />
         ) : (
-          <Button variant="secondary" onClick={() => setAdding(true)}>Add an actuator</Button>
+          <Button variant="secondary" onClick={() => setAdding(true)}>
+            Add an actuator
+          </Button>
         )}
       </div>
     </EditorSection>

@@ -11,7 +11,12 @@ export type BuildDetailsValues = z.output<typeof createBuildInput>;
 const FIELDS = ['title', 'instrumentKind', 'summary', 'body', 'stage'] as const;
 
 /** Title, instrument kind, stage, summary and write-up: the new-build form and the editor's Details section. */
-export function BuildDetailsForm({ defaults, submitLabel, savedMessage, onSave }: {
+export function BuildDetailsForm({
+  defaults,
+  submitLabel,
+  savedMessage,
+  onSave,
+}: {
   defaults?: Partial<BuildDetailsValues>;
   submitLabel: string;
   savedMessage?: string;
@@ -37,29 +42,60 @@ export function BuildDetailsForm({ defaults, submitLabel, savedMessage, onSave }
   return (
     <form onSubmit={submit} noValidate className="space-y-4">
       <Field label="Title" htmlFor="build-title" error={errors.title?.message}>
-        <input id="build-title" className={inputClass} autoComplete="off" {...describedBy('build-title', errors.title?.message)} {...register('title')} />
+        <input
+          id="build-title"
+          className={inputClass}
+          autoComplete="off"
+          {...describedBy('build-title', errors.title?.message)}
+          {...register('title')}
+        />
       </Field>
       <div className="grid gap-4 sm:grid-cols-2">
         <Field label="Instrument kind" htmlFor="build-kind" error={errors.instrumentKind && 'Pick the kind of instrument.'}>
-          <select id="build-kind" className={inputClass} {...describedBy('build-kind', errors.instrumentKind?.message)} {...register('instrumentKind')}>
+          <select
+            id="build-kind"
+            className={inputClass}
+            {...describedBy('build-kind', errors.instrumentKind?.message)}
+            {...register('instrumentKind')}
+          >
             <option value="">Choose…</option>
-            {INSTRUMENT_KINDS.map((k) => <option key={k} value={k}>{instrumentKindLabels[k]}</option>)}
+            {INSTRUMENT_KINDS.map((k) => (
+              <option key={k} value={k}>
+                {instrumentKindLabels[k]}
+              </option>
+            ))}
           </select>
         </Field>
         <Field label="Stage" htmlFor="build-stage" error={errors.stage?.message}>
           <select id="build-stage" className={inputClass} {...register('stage')}>
-            {BUILD_STAGES.map((s) => <option key={s} value={s}>{buildStageLabels[s]}</option>)}
+            {BUILD_STAGES.map((s) => (
+              <option key={s} value={s}>
+                {buildStageLabels[s]}
+              </option>
+            ))}
           </select>
         </Field>
       </div>
       <Field label="Summary" htmlFor="build-summary" error={errors.summary?.message} hint="One or two sentences for the builds list.">
-        <textarea id="build-summary" rows={2} className={inputClass} {...describedBy('build-summary', errors.summary?.message, true)} {...register('summary')} />
+        <textarea
+          id="build-summary"
+          rows={2}
+          className={inputClass}
+          {...describedBy('build-summary', errors.summary?.message, true)}
+          {...register('summary')}
+        />
       </Field>
       <MarkdownField id="build-body" label="Write-up" value={body} error={errors.body?.message} rows={12} textarea={register('body')} />
       <FormError message={errors.root?.server?.message} />
       <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : submitLabel}</Button>
-        {savedMessage && isSubmitSuccessful && !isDirty && <p role="status" className="text-sm text-teal-dark">{savedMessage}</p>}
+        <Button type="submit" disabled={isSubmitting}>
+          {isSubmitting ? 'Saving…' : submitLabel}
+        </Button>
+        {savedMessage && isSubmitSuccessful && !isDirty && (
+          <p role="status" className="text-sm text-teal-dark">
+            {savedMessage}
+          </p>
+        )}
       </div>
     </form>
   );

@@ -20,7 +20,13 @@ export function BuildEditor({ build }: { build: BuildDto }) {
         <StatusNotice build={build} />
         <EditorSection id="details" title="Details">
           <BuildDetailsForm
-            defaults={{ title: build.title, instrumentKind: build.instrumentKind, stage: build.stage, summary: build.summary, body: build.body }}
+            defaults={{
+              title: build.title,
+              instrumentKind: build.instrumentKind,
+              stage: build.stage,
+              summary: build.summary,
+              body: build.body,
+            }}
             submitLabel="Save details"
             savedMessage="Details saved."
             onSave={(values) => update.mutateAsync(values)}

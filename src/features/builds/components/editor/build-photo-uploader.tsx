@@ -10,10 +10,16 @@ export function BuildPhotoUploader({ buildId, entries }: { buildId: number; entr
   const [entryId, setEntryId] = useState('');
   const entryPicker = entries.length > 0 && (
     <div>
-      <label htmlFor="upload-entry" className="mb-1 block text-sm font-medium">Attach to log entry</label>
+      <label htmlFor="upload-entry" className="mb-1 block text-sm font-medium">
+        Attach to log entry
+      </label>
       <select id="upload-entry" className={inputClass} value={entryId} onChange={(e) => setEntryId(e.target.value)}>
         <option value="">None (build gallery)</option>
-        {entries.map((e) => <option key={e.id} value={e.id}>{e.entryDate} · {e.title}</option>)}
+        {entries.map((e) => (
+          <option key={e.id} value={e.id}>
+            {e.entryDate} · {e.title}
+          </option>
+        ))}
       </select>
     </div>
   );

@@ -10,7 +10,12 @@ export function SignInToEdit({ title, returnTo }: { title: string; returnTo: str
       <PageHeader title={title} />
       <Notice title="Sign in to write builds">
         <p>Build logs are written by signed-in makers.</p>
-        <p><a className="font-medium text-copper underline" href={paths.signIn(returnTo)}>Sign in</a> and you will come back here.</p>
+        <p>
+          <a className="font-medium text-copper underline" href={paths.signIn(returnTo)}>
+            Sign in
+          </a>{' '}
+          and you will come back here.
+        </p>
       </Notice>
     </div>
   );
@@ -28,9 +33,17 @@ export function CannotEdit({ reason, buildId }: { reason: 'not-owner' | 'missing
           <p>There is no build at this address that you can edit. It may have been deleted, or it is another maker's draft.</p>
         )}
         <p className="flex flex-wrap gap-4">
-          {reason === 'not-owner' && <Link className="font-medium text-copper underline" to={paths.build(buildId)}>Read the build</Link>}
-          <Link className="font-medium text-copper underline" to={paths.myBuilds}>My builds</Link>
-          <Link className="font-medium text-copper underline" to={paths.newBuild}>Start a new build</Link>
+          {reason === 'not-owner' && (
+            <Link className="font-medium text-copper underline" to={paths.build(buildId)}>
+              Read the build
+            </Link>
+          )}
+          <Link className="font-medium text-copper underline" to={paths.myBuilds}>
+            My builds
+          </Link>
+          <Link className="font-medium text-copper underline" to={paths.newBuild}>
+            Start a new build
+          </Link>
         </p>
       </Notice>
     </div>

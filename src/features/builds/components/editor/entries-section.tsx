@@ -14,7 +14,9 @@ export function EntriesSection({ build }: { build: BuildDto }) {
     <EditorSection id="entries" title="Log entries" lead="Dated notes on what you tried, what broke and what worked.">
       {build.entries.length === 0 && !adding && <p className="mb-3 text-sm text-ink-soft">No log entries yet.</p>}
       <ul className="space-y-3">
-        {build.entries.map((e) => <EntryItem key={e.id} buildId={build.id} entry={e} />)}
+        {build.entries.map((e) => (
+          <EntryItem key={e.id} buildId={build.id} entry={e} />
+        ))}
       </ul>
       <div className="mt-3">
         {adding ? (
@@ -28,7 +30,9 @@ export function EntriesSection({ build }: { build: BuildDto }) {
             onCancel={() => setAdding(false)}
           />
         ) : (
-          <Button variant="secondary" onClick={() => setAdding(true)}>Add a log entry</Button>
+          <Button variant="secondary" onClick={() => setAdding(true)}>
+            Add a log entry
+          </Button>
         )}
       </div>
     </EditorSection>

@@ -9,14 +9,26 @@ import { applyServerErrors, fieldsOf } from './server-errors.ts';
 const today = () => new Date().toISOString().slice(0, 10);
 
 /** Date, title and Markdown text of one log entry (new or edited). */
-export function EntryForm({ idPrefix, defaults, submitLabel, onSave, onCancel }: {
+export function EntryForm({
+  idPrefix,
+  defaults,
+  submitLabel,
+  onSave,
+  onCancel,
+}: {
   idPrefix: string;
   defaults?: CreateEntryInput;
   submitLabel: string;
   onSave: (values: CreateEntryInput) => Promise<unknown>;
   onCancel: () => void;
 }) {
-  const { register, handleSubmit, setError, control, formState: { errors, isSubmitting } } = useForm<CreateEntryInput>({
+  const {
+    register,
+    handleSubmit,
+    setError,
+    control,
+    formState: { errors, isSubmitting },
+  } = useForm<CreateEntryInput>({
     resolver: zodResolver(createEntryInput),
     defaultValues: defaults ?? { entryDate: today(), title: '', body: '' },
   });
@@ -35,17 +47,33 @@ export function EntryForm({ idPrefix, defaults, submitLabel, onSave, onCancel }:
     <form onSubmit={submit} noValidate className="space-y-3 rounded-md border border-rule bg-white p-3">
       <div className="grid gap-3 sm:grid-cols-[12rem_1fr]">
         <Field label="Date" htmlFor={id('date')} error={errors.entryDate && 'Give the date as a calendar date.'}>
-          <input id={id('date')} type="date" className={inputClass} {...describedBy(id('date'), errors.entryDate?.message)} {...register('entryDate')} />
+          <input
+            id={id('date')}
+            type="date"
+            className={inputClass}
+            {...describedBy(id('date'), errors.entryDate?.message)}
+            {...register('entryDate')}
+          />
         </Field>
         <Field label="Entry title" htmlFor={id('title')} error={errors.title?.message}>
-          <input id={id('title')} className={inputClass} autoComplete="off" {...describedBy(id('title'), errors.title?.message)} {...register('title')} />
+          <input
+            id={id('title')}
+            className={inputClass}
+            autoComplete="off"
+            {...describedBy(id('title'), errors.title?.message)}
+            {...register('title')}
+          />
         </Field>
       </div>
       <MarkdownField id={id('body')} label="Entry text" value={body} error={errors.body?.message} rows={6} textarea={register('body')} />
       <FormError message={errors.root?.server?.message} />
       <div className="flex gap-2">
-        <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : submitLabel}</Button>
-        <Button variant="ghost" onClick={onCancel}>Cancel</Button>
+        <Button type="submit" disabled={isSubmitting}>
+          {isSubmitting ? 'Saving…' : submitLabel}
+        </Button>
+        <Button variant="ghost" onClick={onCancel}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

@@ -32,9 +32,13 @@ export function EntryItem({ buildId, entry }: { buildId: number; entry: LogEntry
   return (
     <li className="rounded-md border border-rule bg-white p-3">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
-        <h3 className="font-semibold"><span className="num mr-1 text-sm font-normal text-ink-soft">{entry.entryDate}</span> {entry.title}</h3>
+        <h3 className="font-semibold">
+          <span className="num mr-1 text-sm font-normal text-ink-soft">{entry.entryDate}</span> {entry.title}
+        </h3>
         <div className="flex flex-wrap gap-2">
-          <Button variant="secondary" onClick={() => setEditing(true)} aria-label={`Edit entry “${entry.title}”`}>Edit</Button>
+          <Button variant="secondary" onClick={() => setEditing(true)} aria-label={`Edit entry “${entry.title}”`}>
+            Edit
+          </Button>
           <ConfirmButton
             label="Delete"
             ariaLabel={`Delete entry “${entry.title}”`}
@@ -46,8 +50,16 @@ export function EntryItem({ buildId, entry }: { buildId: number; entry: LogEntry
         </div>
       </div>
       <Markdown className="mt-2 text-sm">{entry.body}</Markdown>
-      {entry.photos.length > 0 && <p className="mt-2 text-xs text-ink-soft">{entry.photos.length} photo{entry.photos.length === 1 ? '' : 's'} attached (see Photos).</p>}
-      {remove.error && <p role="alert" className="mt-2 text-sm text-danger">{errorMessage(remove.error)}</p>}
+      {entry.photos.length > 0 && (
+        <p className="mt-2 text-xs text-ink-soft">
+          {entry.photos.length} photo{entry.photos.length === 1 ? '' : 's'} attached (see Photos).
+        </p>
+      )}
+      {remove.error && (
+        <p role="alert" className="mt-2 text-sm text-danger">
+          {errorMessage(remove.error)}
+        </p>
+      )}
     </li>
   );
 }

@@ -5,7 +5,14 @@ export const inputClass =
   'w-full rounded-md border border-rule bg-white px-2 py-1.5 text-base text-ink aria-[invalid=true]:border-danger disabled:bg-paper-deep';
 
 /** A labelled control with an optional hint and its error; the control must carry `id={htmlFor}`. */
-export function Field({ label, htmlFor, hint, error, children, className = '' }: {
+export function Field({
+  label,
+  htmlFor,
+  hint,
+  error,
+  children,
+  className = '',
+}: {
   label: ReactNode;
   htmlFor: string;
   hint?: ReactNode;
@@ -15,10 +22,20 @@ export function Field({ label, htmlFor, hint, error, children, className = '' }:
 }) {
   return (
     <div className={`min-w-0 ${className}`}>
-      <label htmlFor={htmlFor} className="mb-1 block text-sm font-medium">{label}</label>
+      <label htmlFor={htmlFor} className="mb-1 block text-sm font-medium">
+        {label}
+      </label>
       {children}
-      {hint && !error && <p id={`${htmlFor}-hint`} className="mt-1 text-xs text-ink-soft">{hint}</p>}
-      {error && <p id={`${htmlFor}-error`} className="mt-1 text-sm text-danger">{error}</p>}
+      {hint && !error && (
+        <p id={`${htmlFor}-hint`} className="mt-1 text-xs text-ink-soft">
+          {hint}
+        </p>
+      )}
+      {error && (
+        <p id={`${htmlFor}-error`} className="mt-1 text-sm text-danger">
+          {error}
+        </p>
+      )}
     </div>
   );
 }
@@ -34,7 +51,11 @@ export function describedBy(id: string, error?: string, hint?: boolean) {
 /** A form-level error (what the server said that belongs to no single field). */
 export function FormError({ message }: { message?: string }) {
   if (!message) return null;
-  return <p role="alert" className="rounded-md border border-danger bg-danger/5 px-3 py-2 text-sm text-danger">{message}</p>;
+  return (
+    <p role="alert" className="rounded-md border border-danger bg-danger/5 px-3 py-2 text-sm text-danger">
+      {message}
+    </p>
+  );
 }
 
 /** The message to show for a field: our own words for schema refusals, the server's or a parse message as they are. */

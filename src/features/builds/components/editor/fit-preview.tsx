@@ -37,22 +37,42 @@ export function FitPreview({ maxVolts }: { maxVolts: number | null }) {
       <h4 className="font-semibold">Live preview</h4>
       {result.aboveLimit.length > 0 && (
         <p role="alert" className="mt-1 rounded-md border border-l-4 border-amber bg-amber/10 px-3 py-1.5 text-sm">
-          {result.aboveLimit.length === 1 ? 'One point is' : `${result.aboveLimit.length} points are`} above this actuator's stated maximum of <span className="num">{maxVolts} V</span> (row{result.aboveLimit.length === 1 ? '' : 's'} {result.aboveLimit.slice(0, 5).map((i) => i + 1).join(', ')}{result.aboveLimit.length > 5 ? ', …' : ''}): either the points or the stated limit is wrong.
+          {result.aboveLimit.length === 1 ? 'One point is' : `${result.aboveLimit.length} points are`} above this actuator's stated maximum
+          of <span className="num">{maxVolts} V</span> (row{result.aboveLimit.length === 1 ? '' : 's'}{' '}
+          {result.aboveLimit
+            .slice(0, 5)
+            .map((i) => i + 1)
+            .join(', ')}
+          {result.aboveLimit.length > 5 ? ', …' : ''}): either the points or the stated limit is wrong.
         </p>
       )}
-      {result.fit && <div className="mt-2"><SafetyNotice cautions={result.fit.cautions} crossed={result.fit.levelsCrossed} /></div>}
+      {result.fit && (
+        <div className="mt-2">
+          <SafetyNotice cautions={result.fit.cautions} crossed={result.fit.levelsCrossed} />
+        </div>
+      )}
       <div aria-live="polite" className="mt-1">
         {result.fit ? <FitSummary fit={result.fit} label="Gain (preview)" /> : <p className="text-sm text-ink-soft">{result.problem}</p>}
-        {result.skipped > 0 && <p className="mt-1 text-sm text-danger">{result.skipped} row{result.skipped === 1 ? '' : 's'} with unreadable numbers left out of the preview.</p>}
+        {result.skipped > 0 && (
+          <p className="mt-1 text-sm text-danger">
+            {result.skipped} row{result.skipped === 1 ? '' : 's'} with unreadable numbers left out of the preview.
+          </p>
+        )}
       </div>
       {result.chartPoints.length > 0 && (
         <Suspense fallback={<p className="mt-2 text-sm text-ink-soft">Loading the plot…</p>}>
           <div className="mt-3 rounded bg-white p-1">
-            <CalibrationChart points={result.chartPoints} fit={result.fit && { interceptNm: result.fit.interceptNm, gainNmPerV: result.fit.gainNmPerV }} height={260} />
+            <CalibrationChart
+              points={result.chartPoints}
+              fit={result.fit && { interceptNm: result.fit.interceptNm, gainNmPerV: result.fit.gainNmPerV }}
+              height={260}
+            />
           </div>
         </Suspense>
       )}
-      <p className="mt-2 text-xs text-ink-soft">This preview is computed in your browser. The stored fit is computed by Scanwright from your points when you save the run.</p>
+      <p className="mt-2 text-xs text-ink-soft">
+        This preview is computed in your browser. The stored fit is computed by Scanwright from your points when you save the run.
+      </p>
     </section>
   );
 }

@@ -14,7 +14,12 @@ export function FitSummary({ fit, label }: { fit: FitResultDto; label: string })
   return (
     <div>
       <p className="text-sm text-ink-soft">{label}</p>
-      <p className="num text-xl font-semibold">{withUncertainty(fit.gainNmPerV, half)} <span className="text-base font-normal">nm/V</span> <abbr title="half-width of the 95 % interval (Student t)" className="text-sm font-normal text-ink-soft no-underline">(95 %)</abbr></p>
+      <p className="num text-xl font-semibold">
+        {withUncertainty(fit.gainNmPerV, half)} <span className="text-base font-normal">nm/V</span>{' '}
+        <abbr title="half-width of the 95 % interval (Student t)" className="text-sm font-normal text-ink-soft no-underline">
+          (95 %)
+        </abbr>
+      </p>
       <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
         {rows.map(([k, v]) => (
           <div key={k} className="contents">

@@ -3,7 +3,15 @@ import { Markdown } from '@/components/ui/markdown.tsx';
 import { describedBy, Field, inputClass } from './field.tsx';
 
 /** A Markdown text area with a Write / Preview switch; the text area stays mounted so the form keeps its value. */
-export function MarkdownField({ id, label, value, error, hint, rows = 10, textarea }: {
+export function MarkdownField({
+  id,
+  label,
+  value,
+  error,
+  hint,
+  rows = 10,
+  textarea,
+}: {
   id: string;
   label: string;
   value: string;
@@ -18,10 +26,21 @@ export function MarkdownField({ id, label, value, error, hint, rows = 10, textar
   return (
     <Field label={label} htmlFor={id} error={error} hint={hint ?? 'Markdown: # headings, **bold**, lists, links, tables.'}>
       <div role="group" aria-label={`${label}: write or preview`} className="flex gap-1">
-        <button type="button" className={tab(!preview)} aria-pressed={!preview} onClick={() => setPreview(false)}>Write</button>
-        <button type="button" className={tab(preview)} aria-pressed={preview} onClick={() => setPreview(true)}>Preview</button>
+        <button type="button" className={tab(!preview)} aria-pressed={!preview} onClick={() => setPreview(false)}>
+          Write
+        </button>
+        <button type="button" className={tab(preview)} aria-pressed={preview} onClick={() => setPreview(true)}>
+          Preview
+        </button>
       </div>
-      <textarea id={id} rows={rows} hidden={preview} className={`${inputClass} font-mono text-sm`} {...describedBy(id, error, true)} {...textarea} />
+      <textarea
+        id={id}
+        rows={rows}
+        hidden={preview}
+        className={`${inputClass} font-mono text-sm`}
+        {...describedBy(id, error, true)}
+        {...textarea}
+      />
       {preview && (
         <div className="min-h-24 rounded-md border border-rule bg-white p-3" aria-live="polite">
           {value.trim() ? <Markdown>{value}</Markdown> : <p className="text-ink-soft">Nothing to preview yet.</p>}

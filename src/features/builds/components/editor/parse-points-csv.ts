@@ -20,17 +20,37 @@ interface Columns {
   sweep: number | null;
 }
 
-const SWEEPS: Record<string, GridPoint['sweep']> = { up: 'up', u: 'up', '+': 'up', rising: 'up', down: 'down', d: 'down', '-': 'down', falling: 'down', '': '', none: '' };
+const SWEEPS: Record<string, GridPoint['sweep']> = {
+  up: 'up',
+  u: 'up',
+  '+': 'up',
+  rising: 'up',
+  down: 'down',
+  d: 'down',
+  '-': 'down',
+  falling: 'down',
+  '': '',
+  none: '',
+};
 
 /** Where volts, displacement and sweep are, from a header row; falls back to that order. */
 function columnsFrom(header: string[] | null): Columns {
   if (!header) return { volts: 0, displacement: 1, sweep: 2 };
-  const names = header.map((h) => h.toLowerCase().replace(/\(.*?\)|\[.*?\]/g, '').trim());
+  const names = header.map((h) =>
+    h
+      .toLowerCase()
+      .replace(/\(.*?\)|\[.*?\]/g, '')
+      .trim(),
+  );
   const find = (re: RegExp) => names.findIndex((n) => re.test(n));
   const volts = find(/volt|^v$|^u$|drive|bias/);
   const displacement = find(/disp|defl|pos|height|^x$|^z$|^d$|travel|nm|um|µm/);
   const sweep = find(/sweep|dir/);
-  return { volts: volts >= 0 ? volts : 0, displacement: displacement >= 0 ? displacement : 1, sweep: sweep >= 0 ? sweep : header.length > 2 ? 2 : null };
+  return {
+    volts: volts >= 0 ? volts : 0,
+    displacement: displacement >= 0 ? displacement : 1,
+    sweep: sweep >= 0 ? sweep : header.length > 2 ? 2 : null,
+  };
 }
 
 /**

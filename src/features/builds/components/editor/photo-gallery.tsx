@@ -14,11 +14,23 @@ export function PhotoGallery({ build }: { build: BuildDto }) {
     <div>
       <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3" aria-label="Photos of this build">
         {photos.map((p, i) => (
-          <GalleryPhoto key={p.id} buildId={build.id} photo={p} index={i} count={photos.length} isCover={build.cover?.id === p.id}
-            entries={build.entries} onMove={(dir) => move(i, dir)} />
+          <GalleryPhoto
+            key={p.id}
+            buildId={build.id}
+            photo={p}
+            index={i}
+            count={photos.length}
+            isCover={build.cover?.id === p.id}
+            entries={build.entries}
+            onMove={(dir) => move(i, dir)}
+          />
         ))}
       </ul>
-      {reorder.error && <p role="alert" className="mt-2 text-sm text-danger">{errorMessage(reorder.error)}</p>}
+      {reorder.error && (
+        <p role="alert" className="mt-2 text-sm text-danger">
+          {errorMessage(reorder.error)}
+        </p>
+      )}
     </div>
   );
 }

@@ -22,11 +22,23 @@ export function ReviewSection({ build }: { build: BuildDto }) {
   const noRuns = build.actuators.every((a) => a.runs.length === 0);
 
   return (
-    <EditorSection id="review" title="Review" lead={<>Status: <strong className="text-ink">{buildStatusLabels[build.status]}</strong></>}>
+    <EditorSection
+      id="review"
+      title="Review"
+      lead={
+        <>
+          Status: <strong className="text-ink">{buildStatusLabels[build.status]}</strong>
+        </>
+      }
+    >
       {abilities.submit ? (
         <div className="space-y-3">
           <p className="max-w-prose text-sm">{WHAT_HAPPENS_NEXT}</p>
-          {noRuns && <p className="max-w-prose text-sm text-ink-soft">This build has no calibration run yet. You can submit it anyway; runs help other builders most.</p>}
+          {noRuns && (
+            <p className="max-w-prose text-sm text-ink-soft">
+              This build has no calibration run yet. You can submit it anyway; runs help other builders most.
+            </p>
+          )}
           <Button onClick={() => submit.mutate()} disabled={submit.isPending}>
             {submit.isPending ? 'Submitting…' : build.status === 'returned' ? 'Submit again for review' : 'Submit for review'}
           </Button>
@@ -38,7 +50,9 @@ export function ReviewSection({ build }: { build: BuildDto }) {
       )}
       {abilities.delete && (
         <div className="mt-6 border-t border-rule pt-4">
-          <p className="mb-2 text-sm text-ink-soft">Deleting a draft removes it with its entries, photos, actuators and runs. This cannot be undone.</p>
+          <p className="mb-2 text-sm text-ink-soft">
+            Deleting a draft removes it with its entries, photos, actuators and runs. This cannot be undone.
+          </p>
           <ConfirmButton
             label="Delete draft"
             question="Delete this draft for good?"
@@ -48,7 +62,11 @@ export function ReviewSection({ build }: { build: BuildDto }) {
           />
         </div>
       )}
-      {error && <p role="alert" className="mt-3 text-sm text-danger">{errorMessage(error)}</p>}
+      {error && (
+        <p role="alert" className="mt-3 text-sm text-danger">
+          {errorMessage(error)}
+        </p>
+      )}
     </EditorSection>
   );
 }

@@ -5,20 +5,39 @@ import type { RunFormValues } from './run-form-schema.ts';
 
 /** Preload, temperature and notes: what a reader needs to compare this run with others. */
 export function RunConditionsFields({ idPrefix }: { idPrefix: string }) {
-  const { register, formState: { errors } } = useFormContext<RunFormValues, unknown, CreateRunInput>();
+  const {
+    register,
+    formState: { errors },
+  } = useFormContext<RunFormValues, unknown, CreateRunInput>();
   const id = (f: string) => `${idPrefix}-${f}`;
   const tempError = fieldMessage(errors.conditions?.temperatureC, 'Enter a temperature in °C.');
   return (
     <fieldset className="grid gap-3 sm:grid-cols-[2fr_1fr]">
       <legend className="mb-2 text-sm font-semibold">Conditions (optional)</legend>
       <Field label="Preload" htmlFor={id('preload')} error={errors.conditions?.preload?.message}>
-        <input id={id('preload')} className={inputClass} placeholder="e.g. 20 N spring, clamped at 2 mm" {...register('conditions.preload')} />
+        <input
+          id={id('preload')}
+          className={inputClass}
+          placeholder="e.g. 20 N spring, clamped at 2 mm"
+          {...register('conditions.preload')}
+        />
       </Field>
       <Field label="Temperature (°C)" htmlFor={id('temp')} error={tempError}>
-        <input id={id('temp')} inputMode="decimal" className={`${inputClass} num`} {...describedBy(id('temp'), tempError)} {...register('conditions.temperatureC')} />
+        <input
+          id={id('temp')}
+          inputMode="decimal"
+          className={`${inputClass} num`}
+          {...describedBy(id('temp'), tempError)}
+          {...register('conditions.temperatureC')}
+        />
       </Field>
       <Field label="Condition notes" htmlFor={id('cnotes')} error={errors.conditions?.notes?.message} className="sm:col-span-2">
-        <input id={id('cnotes')} className={inputClass} placeholder="e.g. after 10 min warm-up, lid closed" {...register('conditions.notes')} />
+        <input
+          id={id('cnotes')}
+          className={inputClass}
+          placeholder="e.g. after 10 min warm-up, lid closed"
+          {...register('conditions.notes')}
+        />
       </Field>
       <Field label="Notes on this run" htmlFor={id('notes')} error={errors.notes?.message} className="sm:col-span-2">
         <textarea id={id('notes')} rows={2} className={inputClass} {...register('notes')} />

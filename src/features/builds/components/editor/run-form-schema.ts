@@ -63,7 +63,9 @@ export const runForm = formShape
       voltageUnit: v.voltageUnit as CreateRunInput['voltageUnit'],
       displacementUnit: v.displacementUnit as CreateRunInput['displacementUnit'],
       model: v.model as CreateRunInput['model'],
-      drive: sine ? { kind: 'sine', frequencyHz: parseNumber(v.drive.frequencyHz), amplitudeV: parseNumber(v.drive.amplitudeV) } : { kind: 'dc-steps' },
+      drive: sine
+        ? { kind: 'sine', frequencyHz: parseNumber(v.drive.frequencyHz), amplitudeV: parseNumber(v.drive.amplitudeV) }
+        : { kind: 'dc-steps' },
       conditions: Object.values(conditions).some((c) => c !== undefined) ? conditions : undefined,
       notes: text(v.notes),
       points,
@@ -79,7 +81,8 @@ export function previewPoints(rows: readonly GridPoint[]): { points: RecordedCal
     if (isBlank(p)) continue;
     const volts = parseNumber(p.volts);
     const displacement = parseNumber(p.displacement);
-    if (Number.isFinite(volts) && Number.isFinite(displacement)) points.push({ volts, displacement, ...(p.sweep ? { sweep: p.sweep } : {}) });
+    if (Number.isFinite(volts) && Number.isFinite(displacement))
+      points.push({ volts, displacement, ...(p.sweep ? { sweep: p.sweep } : {}) });
     else skipped++;
   }
   return { points, skipped };

@@ -16,14 +16,27 @@ import { usePointsUnitConversion } from './use-points-unit-conversion.ts';
 const FIELDS = ['method', 'voltageUnit', 'displacementUnit', 'model', 'drive', 'conditions', 'notes', 'points'] as const;
 
 /** A new calibration run for one actuator: setup, conditions, points (typed or from CSV) and the live fit. */
-export function RunForm({ actuatorId, maxVolts, onSaved, onCancel }: { actuatorId: number; maxVolts: number | null; onSaved: (run: RunDto) => void; onCancel: () => void }) {
+export function RunForm({
+  actuatorId,
+  maxVolts,
+  onSaved,
+  onCancel,
+}: {
+  actuatorId: number;
+  maxVolts: number | null;
+  onSaved: (run: RunDto) => void;
+  onCancel: () => void;
+}) {
   const create = useCreateRun(actuatorId);
   const form = useForm<RunFormValues, unknown, CreateRunInput>({ resolver: zodResolver(runForm), defaultValues: runFormDefaults() });
   const points = useFieldArray({ control: form.control, name: 'points' });
   usePointsUnitConversion(form, points);
   const { errors, isSubmitting } = form.formState;
   const idPrefix = `run-${actuatorId}`;
-  const pointsError = fieldMessage(errors.points?.root ?? (errors.points?.message ? errors.points : undefined), 'A calibration run needs at least 3 points.');
+  const pointsError = fieldMessage(
+    errors.points?.root ?? (errors.points?.message ? errors.points : undefined),
+    'A calibration run needs at least 3 points.',
+  );
 
   const submit = form.handleSubmit(async (values) => {
     try {
@@ -35,7 +48,12 @@ export function RunForm({ actuatorId, maxVolts, onSaved, onCancel }: { actuatorI
 
   return (
     <FormProvider {...form}>
-      <form onSubmit={submit} noValidate aria-label="New calibration run" className="space-y-4 rounded-md border border-copper/40 bg-white p-2 sm:p-3">
+      <form
+        onSubmit={submit}
+        noValidate
+        aria-label="New calibration run"
+        className="space-y-4 rounded-md border border-copper/40 bg-white p-2 sm:p-3"
+      >
         <h4 className="font-semibold">New calibration run</h4>
         <RunSetupFields idPrefix={idPrefix} />
         <fieldset className="space-y-3">
@@ -47,10 +65,17 @@ export function RunForm({ actuatorId, maxVolts, onSaved, onCancel }: { actuatorI
         <FitPreview maxVolts={maxVolts} />
         <RunConditionsFields idPrefix={idPrefix} />
         <FormError message={errors.root?.server?.message} />
-        <p className="text-sm text-ink-soft">The stored fit is computed by Scanwright from your points; the run then waits for a moderator to accept it before it counts in the parts registry.</p>
+        <p className="text-sm text-ink-soft">
+          The stored fit is computed by Scanwright from your points; the run then waits for a moderator to accept it before it counts in the
+          parts registry.
+        </p>
         <div className="flex flex-wrap gap-2">
-          <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Save calibration run'}</Button>
-          <Button variant="ghost" onClick={onCancel}>Cancel</Button>
+          <Button type="submit" disabled={isSubmitting}>
+            {isSubmitting ? 'Saving…' : 'Save calibration run'}
+          </Button>
+          <Button variant="ghost" onClick={onCancel}>
+            Cancel
+          </Button>
         </div>
       </form>
     </FormProvider>

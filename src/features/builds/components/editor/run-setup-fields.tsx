@@ -7,7 +7,11 @@ import type { RunFormValues } from './run-form-schema.ts';
 
 /** How the run was measured and driven, the units the points are in, and the fit model. */
 export function RunSetupFields({ idPrefix }: { idPrefix: string }) {
-  const { register, control, formState: { errors } } = useFormContext<RunFormValues, unknown, CreateRunInput>();
+  const {
+    register,
+    control,
+    formState: { errors },
+  } = useFormContext<RunFormValues, unknown, CreateRunInput>();
   const driveKind = useWatch({ control, name: 'drive.kind' });
   const id = (f: string) => `${idPrefix}-${f}`;
   const methodError = fieldMessage(errors.method, 'Pick how you measured the displacement.');
@@ -19,7 +23,11 @@ export function RunSetupFields({ idPrefix }: { idPrefix: string }) {
       <Field label="Method" htmlFor={id('method')} error={methodError}>
         <select id={id('method')} className={inputClass} {...describedBy(id('method'), methodError)} {...register('method')}>
           <option value="">Choose…</option>
-          {RUN_METHODS.map((m) => <option key={m} value={m}>{runMethodLabels[m]}</option>)}
+          {RUN_METHODS.map((m) => (
+            <option key={m} value={m}>
+              {runMethodLabels[m]}
+            </option>
+          ))}
         </select>
       </Field>
       <Field label="Drive signal" htmlFor={id('drive')}>
@@ -31,22 +39,42 @@ export function RunSetupFields({ idPrefix }: { idPrefix: string }) {
       {driveKind === 'sine' && (
         <>
           <Field label="Frequency (Hz)" htmlFor={id('freq')} error={freqError}>
-            <input id={id('freq')} inputMode="decimal" className={`${inputClass} num`} {...describedBy(id('freq'), freqError)} {...register('drive.frequencyHz')} />
+            <input
+              id={id('freq')}
+              inputMode="decimal"
+              className={`${inputClass} num`}
+              {...describedBy(id('freq'), freqError)}
+              {...register('drive.frequencyHz')}
+            />
           </Field>
           <Field label="Amplitude (V)" htmlFor={id('amp')} error={ampError}>
-            <input id={id('amp')} inputMode="decimal" className={`${inputClass} num`} {...describedBy(id('amp'), ampError)} {...register('drive.amplitudeV')} />
+            <input
+              id={id('amp')}
+              inputMode="decimal"
+              className={`${inputClass} num`}
+              {...describedBy(id('amp'), ampError)}
+              {...register('drive.amplitudeV')}
+            />
           </Field>
         </>
       )}
       <div className="grid grid-cols-2 gap-3">
         <Field label="Drive unit" htmlFor={id('vunit')}>
           <select id={id('vunit')} className={inputClass} {...register('voltageUnit')}>
-            {voltageUnits.map((u) => <option key={u} value={u}>{voltageUnitLabels[u]}</option>)}
+            {voltageUnits.map((u) => (
+              <option key={u} value={u}>
+                {voltageUnitLabels[u]}
+              </option>
+            ))}
           </select>
         </Field>
         <Field label="Displacement unit" htmlFor={id('dunit')}>
           <select id={id('dunit')} className={inputClass} {...register('displacementUnit')}>
-            {displacementUnits.map((u) => <option key={u} value={u}>{displacementUnitLabels[u]}</option>)}
+            {displacementUnits.map((u) => (
+              <option key={u} value={u}>
+                {displacementUnitLabels[u]}
+              </option>
+            ))}
           </select>
         </Field>
       </div>

@@ -7,7 +7,8 @@ interface FieldIssue {
 }
 
 const isIssueList = (d: unknown): d is FieldIssue[] =>
-  Array.isArray(d) && d.every((i) => i && typeof i === 'object' && typeof (i as FieldIssue).path === 'string' && typeof (i as FieldIssue).message === 'string');
+  Array.isArray(d) &&
+  d.every((i) => i && typeof i === 'object' && typeof (i as FieldIssue).path === 'string' && typeof (i as FieldIssue).message === 'string');
 
 /** What to tell a person about a failed request, in one sentence. */
 export function errorMessage(error: unknown): string {
@@ -23,7 +24,11 @@ export function errorMessage(error: unknown): string {
  * Put the server's `details` on the form fields they name (`points.3.volts` works too); whatever
  * names no field of this form, or a failure without details, lands on `root.server`.
  */
-export function applyServerErrors<T extends FieldValues>(error: unknown, setError: UseFormSetError<T>, isField: (path: string) => boolean): void {
+export function applyServerErrors<T extends FieldValues>(
+  error: unknown,
+  setError: UseFormSetError<T>,
+  isField: (path: string) => boolean,
+): void {
   const details = error instanceof ApiError && isIssueList(error.details) ? error.details : [];
   const unplaced: string[] = [];
   for (const issue of details) {

@@ -15,14 +15,18 @@ export function StatusNotice({ build }: { build: BuildDto }) {
       return (
         <Notice tone="caution" title="Returned with notes">
           <p>A moderator sent this build back. Make the changes, then submit it again.</p>
-          {build.reviewNote && <blockquote className="mt-2 whitespace-pre-line border-l-4 border-amber bg-white/70 px-3 py-2">{build.reviewNote}</blockquote>}
+          {build.reviewNote && (
+            <blockquote className="mt-2 whitespace-pre-line border-l-4 border-amber bg-white/70 px-3 py-2">{build.reviewNote}</blockquote>
+          )}
         </Notice>
       );
     case 'declined':
       return (
         <Notice tone="danger" title="Declined">
           <p>This build was declined and can no longer be edited.</p>
-          {build.reviewNote && <blockquote className="mt-2 whitespace-pre-line border-l-4 border-danger bg-white/70 px-3 py-2">{build.reviewNote}</blockquote>}
+          {build.reviewNote && (
+            <blockquote className="mt-2 whitespace-pre-line border-l-4 border-danger bg-white/70 px-3 py-2">{build.reviewNote}</blockquote>
+          )}
         </Notice>
       );
     case 'published':

@@ -22,38 +22,71 @@ export function StoredRun({ run }: { run: RunDto }) {
   const remove = useDeleteRun();
   const [plot, setPlot] = useState(false);
   const [tone, statusText] = STATUS[run.status];
-  const drive = run.drive?.kind === 'sine' ? `sine, ${sig(run.drive.frequencyHz)} Hz, ${sig(run.drive.amplitudeV)} V amplitude` : run.drive ? 'DC steps' : null;
+  const drive =
+    run.drive?.kind === 'sine'
+      ? `sine, ${sig(run.drive.frequencyHz)} Hz, ${sig(run.drive.amplitudeV)} V amplitude`
+      : run.drive
+        ? 'DC steps'
+        : null;
   const c = run.conditions;
-  const conditions = [c?.preload && `preload ${c.preload}`, c?.temperatureC !== undefined && c?.temperatureC !== null && `${sig(c.temperatureC)} °C`, c?.notes].filter(Boolean).join(' · ');
-  const points = run.points.map((p) => ({ volts: toVolts(p.volts, run.voltageUnit), displacementNm: toNm(p.displacement, run.displacementUnit), sweep: p.sweep }));
+  const conditions = [
+    c?.preload && `preload ${c.preload}`,
+    c?.temperatureC !== undefined && c?.temperatureC !== null && `${sig(c.temperatureC)} °C`,
+    c?.notes,
+  ]
+    .filter(Boolean)
+    .join(' · ');
+  const points = run.points.map((p) => ({
+    volts: toVolts(p.volts, run.voltageUnit),
+    displacementNm: toNm(p.displacement, run.displacementUnit),
+    sweep: p.sweep,
+  }));
 
   return (
     <li className="rounded-md border border-rule bg-white p-2 sm:p-3" aria-label={`Calibration run of ${run.createdAt.slice(0, 10)}`}>
       <div className="flex flex-wrap items-center justify-between gap-2">
-        <p className="text-sm"><span className="num">{run.createdAt.slice(0, 10)}</span> · {runMethodLabels[run.method]}</p>
+        <p className="text-sm">
+          <span className="num">{run.createdAt.slice(0, 10)}</span> · {runMethodLabels[run.method]}
+        </p>
         <StatusBadge tone={tone}>{statusText}</StatusBadge>
       </div>
       <div className="mt-2">
         <FitSummary fit={run.fit} label="Stored fit, computed by Scanwright" />
       </div>
       <p className="mt-2 text-xs text-ink-soft">
-        Recorded in {voltageUnitLabels[run.voltageUnit]} and {displacementUnitLabels[run.displacementUnit]}; {run.model === 'origin' ? 'line through the origin' : 'line with intercept'}
-        {drive && `; ${drive}`}{conditions && `; ${conditions}`}
+        Recorded in {voltageUnitLabels[run.voltageUnit]} and {displacementUnitLabels[run.displacementUnit]};{' '}
+        {run.model === 'origin' ? 'line through the origin' : 'line with intercept'}
+        {drive && `; ${drive}`}
+        {conditions && `; ${conditions}`}
       </p>
       {run.notes && <p className="mt-1 whitespace-pre-line text-sm">{run.notes}</p>}
       {run.reviewNote && <p className="mt-2 rounded border-l-4 border-amber bg-amber/10 px-2 py-1 text-sm">Moderator: {run.reviewNote}</p>}
       {plot && (
         <Suspense fallback={<p className="mt-2 text-sm text-ink-soft">Loading the plot…</p>}>
-          <div className="mt-2"><CalibrationChart points={points} fit={{ interceptNm: run.fit.interceptNm, gainNmPerV: run.fit.gainNmPerV }} height={240} /></div>
+          <div className="mt-2">
+            <CalibrationChart points={points} fit={{ interceptNm: run.fit.interceptNm, gainNmPerV: run.fit.gainNmPerV }} height={240} />
+          </div>
         </Suspense>
       )}
       <div className="mt-2 flex flex-wrap gap-2">
-        <Button variant="ghost" className="border-rule" aria-expanded={plot} onClick={() => setPlot((p) => !p)}>{plot ? 'Hide plot' : 'Show plot'}</Button>
+        <Button variant="ghost" className="border-rule" aria-expanded={plot} onClick={() => setPlot((p) => !p)}>
+          {plot ? 'Hide plot' : 'Show plot'}
+        </Button>
         {run.status !== 'accepted' && (
-          <ConfirmButton label="Delete run" question="Delete this calibration run?" confirmLabel="Yes, delete" disabled={remove.isPending} onConfirm={() => remove.mutate(run.id)} />
+          <ConfirmButton
+            label="Delete run"
+            question="Delete this calibration run?"
+            confirmLabel="Yes, delete"
+            disabled={remove.isPending}
+            onConfirm={() => remove.mutate(run.id)}
+          />
         )}
       </div>
-      {remove.error && <p role="alert" className="mt-2 text-sm text-danger">{errorMessage(remove.error)}</p>}
+      {remove.error && (
+        <p role="alert" className="mt-2 text-sm text-danger">
+          {errorMessage(remove.error)}
+        </p>
+      )}
     </li>
   );
 }

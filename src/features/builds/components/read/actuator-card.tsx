@@ -27,7 +27,13 @@ export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
         {selected ? (
           <>
             <div className="hidden sm:block">
-              <RunTable runs={actuator.runs} actuatorName={name} groupId={`runs-${actuator.id}`} selectedId={selected.id} onSelect={setChosen} />
+              <RunTable
+                runs={actuator.runs}
+                actuatorName={name}
+                groupId={`runs-${actuator.id}`}
+                selectedId={selected.id}
+                onSelect={setChosen}
+              />
             </div>
             <div className="sm:hidden">
               <RunCards runs={actuator.runs} group={`runs-phone-${actuator.id}`} selectedId={selected.id} onSelect={setChosen} />

@@ -22,9 +22,14 @@ export function ActuatorFacts({ actuator }: { actuator: ActuatorDto }) {
     <dl className="grid grid-cols-2 gap-x-4 gap-y-3 sm:grid-cols-3">
       <Fact term="Part">
         <span className="font-medium">{part.name}</span>
-        <span className="block text-xs text-ink-soft">{partCategoryLabels[part.category]}{part.material ? ` · ${part.material}` : ''}</span>
+        <span className="block text-xs text-ink-soft">
+          {partCategoryLabels[part.category]}
+          {part.material ? ` · ${part.material}` : ''}
+        </span>
       </Fact>
-      <Fact term="Axis"><span className="num">{actuator.axis}</span></Fact>
+      <Fact term="Axis">
+        <span className="num">{actuator.axis}</span>
+      </Fact>
       <Fact term="Drive">{actuatorDriveLabels[actuator.drive]}</Fact>
       <Fact term="Amplifier">{actuator.amplifier || notStated}</Fact>
       <Fact term="Max drive">{actuator.maxVolts !== null ? <span className="num">{actuator.maxVolts} V</span> : notStated}</Fact>
@@ -33,7 +38,11 @@ export function ActuatorFacts({ actuator }: { actuator: ActuatorDto }) {
           <>
             <span className="num">{formatShort(expectedGain.gainNmPerV, 3)} nm/V</span>
             <span className="block text-xs text-ink-soft">
-              band <span className="num">{formatShort(expectedGain.lowNmPerV, 2)}–{formatShort(expectedGain.highNmPerV, 2)} nm/V</span> · {describeBasis(expectedGain.basis)}
+              band{' '}
+              <span className="num">
+                {formatShort(expectedGain.lowNmPerV, 2)}–{formatShort(expectedGain.highNmPerV, 2)} nm/V
+              </span>{' '}
+              · {describeBasis(expectedGain.basis)}
             </span>
           </>
         ) : (

@@ -8,7 +8,9 @@ export function ActuatorList({ actuators }: { actuators: ActuatorDto[] }) {
   return (
     <div className="space-y-4">
       {actuators.some((a) => isHighVoltage(a)) && <HighVoltageCautions />}
-      {actuators.map((a) => <ActuatorCard key={a.id} actuator={a} />)}
+      {actuators.map((a) => (
+        <ActuatorCard key={a.id} actuator={a} />
+      ))}
     </div>
   );
 }

@@ -18,7 +18,9 @@ export function BuildCard({ build }: { build: BuildSummaryDto }) {
         </h2>
         <p className="line-clamp-2 text-sm text-ink-soft">{build.summary}</p>
         <p className="mt-auto flex flex-wrap items-center gap-x-2 text-xs text-ink-soft">
-          <span>by <span className="font-medium text-ink">{build.owner.login}</span></span>
+          <span>
+            by <span className="font-medium text-ink">{build.owner.login}</span>
+          </span>
           <span aria-hidden="true">·</span>
           <span>{buildStageLabels[build.stage]}</span>
         </p>

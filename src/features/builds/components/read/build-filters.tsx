@@ -18,11 +18,24 @@ export function BuildFilters({ search }: { search: ReturnType<typeof useBuildSea
       }}
     >
       <div>
-        <label htmlFor="build-q" className="mb-1 block text-xs font-medium text-ink-soft">Words in title, summary or write-up</label>
-        <input id="build-q" key={search.q} name="q" type="search" defaultValue={search.q} maxLength={100} placeholder="e.g. bimorph, graphite, flexure" className={field} />
+        <label htmlFor="build-q" className="mb-1 block text-xs font-medium text-ink-soft">
+          Words in title, summary or write-up
+        </label>
+        <input
+          id="build-q"
+          key={search.q}
+          name="q"
+          type="search"
+          defaultValue={search.q}
+          maxLength={100}
+          placeholder="e.g. bimorph, graphite, flexure"
+          className={field}
+        />
       </div>
       <div>
-        <label htmlFor="build-kind" className="mb-1 block text-xs font-medium text-ink-soft">Instrument kind</label>
+        <label htmlFor="build-kind" className="mb-1 block text-xs font-medium text-ink-soft">
+          Instrument kind
+        </label>
         <select
           id="build-kind"
           className={field}
@@ -30,12 +43,22 @@ export function BuildFilters({ search }: { search: ReturnType<typeof useBuildSea
           onChange={(e) => search.setFilters({ kind: (e.target.value || undefined) as InstrumentKind | undefined })}
         >
           <option value="">All kinds</option>
-          {INSTRUMENT_KINDS.map((k) => <option key={k} value={k}>{instrumentKindLabels[k]}</option>)}
+          {INSTRUMENT_KINDS.map((k) => (
+            <option key={k} value={k}>
+              {instrumentKindLabels[k]}
+            </option>
+          ))}
         </select>
       </div>
       <div className="flex items-center gap-3">
-        <Button type="submit" variant="secondary">Search</Button>
-        {search.filtered && <Link to={search.clearHref} className="text-sm text-copper underline">Clear</Link>}
+        <Button type="submit" variant="secondary">
+          Search
+        </Button>
+        {search.filtered && (
+          <Link to={search.clearHref} className="text-sm text-copper underline">
+            Clear
+          </Link>
+        )}
       </div>
     </form>
   );

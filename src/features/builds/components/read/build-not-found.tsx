@@ -11,8 +11,14 @@ export function BuildNotFound({ signedIn }: { signedIn: boolean }) {
         {signedIn ? '' : ' If this is your build, sign in to see it.'}
       </p>
       <p className="mt-6 flex justify-center gap-4">
-        <Link className="text-copper underline" to={paths.builds}>All published builds</Link>
-        {signedIn && <Link className="text-copper underline" to={paths.myBuilds}>My builds</Link>}
+        <Link className="text-copper underline" to={paths.builds}>
+          All published builds
+        </Link>
+        {signedIn && (
+          <Link className="text-copper underline" to={paths.myBuilds}>
+            My builds
+          </Link>
+        )}
       </p>
     </div>
   );

@@ -18,20 +18,36 @@ export function BuildResults({ data, search, stale }: { data: BuildListDto; sear
   const anyPending = data.items.some((b) => b.gains.some((g) => g.runStatus === 'pending'));
   return (
     <div aria-busy={stale}>
-      <p role="status" className="mb-3 text-sm text-ink-soft">{describe(data.total, search)}</p>
+      <p role="status" className="mb-3 text-sm text-ink-soft">
+        {describe(data.total, search)}
+      </p>
       {data.items.length === 0 ? (
         <div className="rounded-lg border border-dashed border-rule bg-white p-6 text-center">
           {data.total > 0 ? (
-            <p>There is no page <span className="num">{search.page}</span>; this search has <span className="num">{pageCount}</span>. <Link className="text-copper underline" to={search.hrefFor(1)}>Go to page 1</Link></p>
+            <p>
+              There is no page <span className="num">{search.page}</span>; this search has <span className="num">{pageCount}</span>.{' '}
+              <Link className="text-copper underline" to={search.hrefFor(1)}>
+                Go to page 1
+              </Link>
+            </p>
           ) : search.filtered ? (
-            <p>No published build matches this search. <Link className="text-copper underline" to={search.clearHref}>Show all builds</Link></p>
+            <p>
+              No published build matches this search.{' '}
+              <Link className="text-copper underline" to={search.clearHref}>
+                Show all builds
+              </Link>
+            </p>
           ) : (
             <p>No builds have been published yet. The first one could be yours.</p>
           )}
         </div>
       ) : (
         <ul className={`grid gap-4 sm:grid-cols-2 lg:grid-cols-3 ${stale ? 'opacity-60' : ''}`}>
-          {data.items.map((b) => <li key={b.id} className="flex"><BuildCard build={b} /></li>)}
+          {data.items.map((b) => (
+            <li key={b.id} className="flex">
+              <BuildCard build={b} />
+            </li>
+          ))}
         </ul>
       )}
       {anyPending && (

@@ -14,11 +14,15 @@ function DrawnCover({ seed }: { seed: number }) {
     <svg viewBox="0 0 160 100" preserveAspectRatio="xMidYMid slice" className="h-full w-full" aria-hidden="true" focusable="false">
       <rect width="160" height="100" fill="#ECE8DF" />
       <g stroke="#D8D3C8" strokeWidth="0.5">
-        {[25, 50, 75].map((y) => <line key={y} x1="0" x2="160" y1={y} y2={y} />)}
+        {[25, 50, 75].map((y) => (
+          <line key={y} x1="0" x2="160" y1={y} y2={y} />
+        ))}
       </g>
       <path d={trace} fill="none" stroke="#B5532A" strokeWidth="1.6" />
       <g fill="#2F6F73" opacity="0.75">
-        {atoms.map((x) => <circle key={x} cx={x} cy="84" r="4.5" />)}
+        {atoms.map((x) => (
+          <circle key={x} cx={x} cy="84" r="4.5" />
+        ))}
       </g>
       <rect x={tipX - 60} y="30" width="14" height="10" rx="1" fill="#2F6F73" />
       <rect x={tipX - 46} y="34" width="46" height="3" fill="#1D232B" />

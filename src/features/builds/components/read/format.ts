@@ -11,7 +11,10 @@ export function formatDate(iso: string | null | undefined): string {
   if (!iso) return '—';
   const d = new Date(iso.length === 10 ? `${iso}T00:00:00Z` : iso);
   if (Number.isNaN(d.getTime())) return iso;
-  return dateFormat.formatToParts(d).map((p) => (p.type === 'month' ? p.value.slice(0, 3) : p.value)).join('');
+  return dateFormat
+    .formatToParts(d)
+    .map((p) => (p.type === 'month' ? p.value.slice(0, 3) : p.value))
+    .join('');
 }
 
 /** Badge colour of each build review state. */
@@ -45,6 +48,7 @@ const basisWords: Record<string, string> = {
 /** "series bimorph, PZT-5A · Source: Smits, Dalke & Cooney 1991" from the API's "bimorph-series, PZT-5A". */
 export function describeBasis(basis: string): string {
   const [formula, ...rest] = basis.split(', ');
-  const source = formula && formula in EXPECTED_GAIN_SOURCE ? ` · ${EXPECTED_GAIN_SOURCE[formula as keyof typeof EXPECTED_GAIN_SOURCE]}` : '';
+  const source =
+    formula && formula in EXPECTED_GAIN_SOURCE ? ` · ${EXPECTED_GAIN_SOURCE[formula as keyof typeof EXPECTED_GAIN_SOURCE]}` : '';
   return `${[basisWords[formula ?? ''] ?? formula, ...rest].join(', ')}${source}`;
 }

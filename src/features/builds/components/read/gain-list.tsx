@@ -17,7 +17,11 @@ export function GainList({ gains }: { gains: BuildGainDto[] }) {
   return (
     <ul aria-label="Measured gains" className="flex flex-wrap gap-1.5">
       {gains.map((g) => (
-        <li key={g.actuatorId} title={g.partName} className="inline-flex items-center rounded border border-rule bg-paper px-1.5 py-0.5 text-xs">
+        <li
+          key={g.actuatorId}
+          title={g.partName}
+          className="inline-flex items-center rounded border border-rule bg-paper px-1.5 py-0.5 text-xs"
+        >
           <span className="mr-1 font-semibold text-teal-dark">{g.axis}</span>
           <span className="num">{formatShort(g.gainNmPerV, 3)} nm/V</span>
           {g.runStatus === 'pending' && <PendingMarker />}

@@ -24,9 +24,13 @@ export function HighVoltageMarker({ actuator }: { actuator: ActuatorForSafety })
   const safety = assessActuator(actuator);
   return (
     <p className="flex flex-wrap items-center gap-x-2 rounded-md border border-amber bg-amber/10 px-3 py-1.5 text-sm">
-      <span aria-hidden="true" className="font-bold text-amber">⚠</span>
+      <span aria-hidden="true" className="font-bold text-amber">
+        ⚠
+      </span>
       <span>Hazardous voltage: {safety.crossed.join('; ')}.</span>
-      <a href={`#${HV_CAUTIONS_ID}`} className="text-copper-dark underline">Read the cautions</a>
+      <a href={`#${HV_CAUTIONS_ID}`} className="text-copper-dark underline">
+        Read the cautions
+      </a>
     </p>
   );
 }

@@ -25,11 +25,17 @@ export function MyBuildRow({ build }: { build: BuildSummaryDto }) {
         <div className="min-w-0">
           <p className="text-xs font-medium uppercase tracking-wide text-teal-dark">{instrumentKindLabels[build.instrumentKind]}</p>
           <h2 className="text-lg font-semibold leading-snug">
-            <Link to={paths.build(build.id)} className="hover:text-copper hover:underline">{build.title}</Link>
+            <Link to={paths.build(build.id)} className="hover:text-copper hover:underline">
+              {build.title}
+            </Link>
           </h2>
         </div>
         {editable(build.status) && (
-          <Link to={paths.editBuild(build.id)} className="rounded-md border border-teal bg-white px-3 py-1 text-sm font-medium text-teal-dark hover:bg-teal/10" aria-label={`Edit ${build.title}`}>
+          <Link
+            to={paths.editBuild(build.id)}
+            className="rounded-md border border-teal bg-white px-3 py-1 text-sm font-medium text-teal-dark hover:bg-teal/10"
+            aria-label={`Edit ${build.title}`}
+          >
             Edit
           </Link>
         )}
@@ -37,8 +43,12 @@ export function MyBuildRow({ build }: { build: BuildSummaryDto }) {
       <div className="mt-2 flex flex-wrap items-center gap-x-3 gap-y-1 text-sm">
         <BuildStatusBadge status={build.status} />
         {build.status === 'published' && build.editedSinceReview && <span className="text-xs text-ink-soft">edited since review</span>}
-        <span className="text-ink-soft">Stage: <span className="text-ink">{buildStageLabels[build.stage]}</span></span>
-        <span className="text-ink-soft">Last changed <span className="num text-ink">{formatDate(build.updatedAt)}</span></span>
+        <span className="text-ink-soft">
+          Stage: <span className="text-ink">{buildStageLabels[build.stage]}</span>
+        </span>
+        <span className="text-ink-soft">
+          Last changed <span className="num text-ink">{formatDate(build.updatedAt)}</span>
+        </span>
       </div>
       <p className="mt-1 text-sm text-ink-soft">{whatNext[build.status]}</p>
       {note && (
@@ -48,7 +58,11 @@ export function MyBuildRow({ build }: { build: BuildSummaryDto }) {
           </Notice>
         </div>
       )}
-      {build.gains.length > 0 && <div className="mt-3"><GainList gains={build.gains} /></div>}
+      {build.gains.length > 0 && (
+        <div className="mt-3">
+          <GainList gains={build.gains} />
+        </div>
+      )}
     </li>
   );
 }

@@ -12,19 +12,30 @@ export function RunDetails({ run, expected }: { run: RunDto; expected: ActuatorD
   if (ratio !== null) {
     items.push({
       term: 'Measured ÷ expected',
-      value: <><span className="num font-medium">{formatFixed(ratio, 2)} ×</span> expected ({describeBasis(expected!.basis)})</>,
+      value: (
+        <>
+          <span className="num font-medium">{formatFixed(ratio, 2)} ×</span> expected ({describeBasis(expected!.basis)})
+        </>
+      ),
     });
   }
   if (drive) {
     items.push({
       term: 'Drive',
-      value: drive.kind === 'sine'
-        ? <>sine, <span className="num">{formatShort(drive.frequencyHz, 3)} Hz</span>, <span className="num">{formatShort(drive.amplitudeV, 3)} V</span> amplitude</>
-        : 'DC steps',
+      value:
+        drive.kind === 'sine' ? (
+          <>
+            sine, <span className="num">{formatShort(drive.frequencyHz, 3)} Hz</span>,{' '}
+            <span className="num">{formatShort(drive.amplitudeV, 3)} V</span> amplitude
+          </>
+        ) : (
+          'DC steps'
+        ),
     });
   }
   if (conditions?.preload) items.push({ term: 'Preload', value: conditions.preload });
-  if (conditions?.temperatureC !== undefined) items.push({ term: 'Temperature', value: <span className="num">{conditions.temperatureC} °C</span> });
+  if (conditions?.temperatureC !== undefined)
+    items.push({ term: 'Temperature', value: <span className="num">{conditions.temperatureC} °C</span> });
   if (conditions?.notes) items.push({ term: 'Conditions', value: conditions.notes });
   if (run.notes) items.push({ term: 'Notes', value: <span className="whitespace-pre-line">{run.notes}</span> });
   if (items.length === 0) return null;

@@ -16,14 +16,30 @@ export function RunPlot({ run, actuatorName }: { run: RunDto; actuatorName: stri
   const recordedIn = `${displacementUnitLabels[run.displacementUnit]} and ${voltageUnitLabels[run.voltageUnit]}`;
   const converted = run.displacementUnit !== 'nm' || run.voltageUnit !== 'V';
   return (
-    <section aria-label={`Calibration plot: ${actuatorName}, run of ${formatDate(run.createdAt)}`} className="rounded-md border border-rule bg-white p-2 sm:p-3">
-      <ErrorBoundary fallback={<p role="alert" className="flex h-[300px] items-center justify-center text-center text-sm text-danger">The plot could not be loaded. Reload the page to try again; the figures above are complete.</p>}>
-        <Suspense fallback={<p role="status" className="flex h-[300px] items-center justify-center text-sm text-ink-soft">Loading the plot…</p>}>
+    <section
+      aria-label={`Calibration plot: ${actuatorName}, run of ${formatDate(run.createdAt)}`}
+      className="rounded-md border border-rule bg-white p-2 sm:p-3"
+    >
+      <ErrorBoundary
+        fallback={
+          <p role="alert" className="flex h-[300px] items-center justify-center text-center text-sm text-danger">
+            The plot could not be loaded. Reload the page to try again; the figures above are complete.
+          </p>
+        }
+      >
+        <Suspense
+          fallback={
+            <p role="status" className="flex h-[300px] items-center justify-center text-sm text-ink-soft">
+              Loading the plot…
+            </p>
+          }
+        >
           <CalibrationChart points={points} fit={{ interceptNm: run.fit.interceptNm, gainNmPerV: run.fit.gainNmPerV }} />
         </Suspense>
       </ErrorBoundary>
       <p className="mt-2 text-xs text-ink-soft">
-        Run of <span className="num">{formatDate(run.createdAt)}</span>: <span className="num">{run.points.length}</span> points recorded in {recordedIn}
+        Run of <span className="num">{formatDate(run.createdAt)}</span>: <span className="num">{run.points.length}</span> points recorded in{' '}
+        {recordedIn}
         {converted ? ', plotted in nm and V' : ''}; line fitted {run.model === 'origin' ? 'through the origin' : 'with an intercept'}.
       </p>
     </section>

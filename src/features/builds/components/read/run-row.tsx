@@ -11,11 +11,19 @@ export function RunRow({ run, group, selected, onSelect }: { run: RunDto; group:
     <>
       <tr className={`border-t border-rule ${selected ? 'bg-copper/5' : ''}`}>
         <td className={cell}>
-          <input type="radio" name={group} checked={selected} onChange={onSelect} aria-label={`Plot the run of ${f.date}`} className="h-4 w-4 accent-copper" />
+          <input
+            type="radio"
+            name={group}
+            checked={selected}
+            onChange={onSelect}
+            aria-label={`Plot the run of ${f.date}`}
+            className="h-4 w-4 accent-copper"
+          />
         </td>
         <td className={`${cell} num whitespace-nowrap`}>{f.date}</td>
         <td className={`${cell} num whitespace-nowrap text-right font-medium`}>
-          {f.gain.value}{f.gain.uncertainty && <span className="font-normal text-ink-soft"> ± {f.gain.uncertainty}</span>}
+          {f.gain.value}
+          {f.gain.uncertainty && <span className="font-normal text-ink-soft"> ± {f.gain.uncertainty}</span>}
         </td>
         <td className={`${cell} num text-right`}>{f.r2}</td>
         <td className={`${cell} num text-right`}>{f.residualNm}</td>
@@ -23,7 +31,9 @@ export function RunRow({ run, group, selected, onSelect }: { run: RunDto; group:
         <td className={`${cell} num text-right`}>{f.hysteresisPct}</td>
         <td className={`${cell} num text-right`}>{f.n}</td>
         <td className={`${cell} min-w-[9rem]`}>{f.method}</td>
-        <td className={cell}><StatusBadge tone={f.badge.tone}>{f.badge.label}</StatusBadge></td>
+        <td className={cell}>
+          <StatusBadge tone={f.badge.tone}>{f.badge.label}</StatusBadge>
+        </td>
       </tr>
       {run.reviewNote && (
         <tr className={selected ? 'bg-copper/5' : ''}>

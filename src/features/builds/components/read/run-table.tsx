@@ -4,7 +4,13 @@ import { RunRow } from './run-row.tsx';
 const head = 'px-2 pb-2 font-medium';
 
 /** The fit figures of every calibration run of one actuator, newest first. */
-export function RunTable({ runs, actuatorName, groupId, selectedId, onSelect }: {
+export function RunTable({
+  runs,
+  actuatorName,
+  groupId,
+  selectedId,
+  onSelect,
+}: {
   runs: RunDto[];
   actuatorName: string;
   groupId: string;
@@ -12,12 +18,19 @@ export function RunTable({ runs, actuatorName, groupId, selectedId, onSelect }: 
   onSelect: (id: number) => void;
 }) {
   return (
-    <div className="overflow-x-auto rounded-md border border-rule" tabIndex={0} role="group" aria-label={`Calibration runs of ${actuatorName}`}>
+    <div
+      className="overflow-x-auto rounded-md border border-rule"
+      tabIndex={0}
+      role="group"
+      aria-label={`Calibration runs of ${actuatorName}`}
+    >
       <table className="w-full min-w-[46rem] text-left text-sm">
         <caption className="sr-only">Calibration runs of {actuatorName}: gain with its 95 % interval and the fit figures</caption>
         <thead className="bg-paper-deep text-xs text-ink-soft">
           <tr className="[&>th]:pt-2">
-            <th className={head}><span className="sr-only">Plot</span></th>
+            <th className={head}>
+              <span className="sr-only">Plot</span>
+            </th>
             <th className={head}>Recorded</th>
             <th className={`${head} text-right`}>Gain ± 95 % (nm/V)</th>
             <th className={`${head} text-right`}>R²</th>
@@ -30,7 +43,9 @@ export function RunTable({ runs, actuatorName, groupId, selectedId, onSelect }: 
           </tr>
         </thead>
         <tbody>
-          {runs.map((r) => <RunRow key={r.id} run={r} group={groupId} selected={r.id === selectedId} onSelect={() => onSelect(r.id)} />)}
+          {runs.map((r) => (
+            <RunRow key={r.id} run={r} group={groupId} selected={r.id === selectedId} onSelect={() => onSelect(r.id)} />
+          ))}
         </tbody>
       </table>
     </div>

@@ -36,6 +36,7 @@ export function useBuildSearch() {
     filtered: Boolean(q || kind),
     hrefFor: (p: number) => `${paths.builds}${toSearch({ q, kind }, p)}`,
     clearHref: paths.builds,
-    setFilters: (next: Partial<Filters>) => setParams(toSearch({ q, kind, ...next, ...(next.q !== undefined ? { q: next.q.trim().slice(0, MAX_Q) } : {}) })),
+    setFilters: (next: Partial<Filters>) =>
+      setParams(toSearch({ q, kind, ...next, ...(next.q !== undefined ? { q: next.q.trim().slice(0, MAX_Q) } : {}) })),
   };
 }

@@ -15,27 +15,49 @@ export function AuditTable({ items }: { items: AuditEntryDto[] }) {
       <caption className="sr-only">Audit trail entries, newest first</caption>
       <thead className="hidden text-left text-xs uppercase tracking-wide text-ink-soft sm:table-header-group">
         <tr className="border-b border-rule">
-          <th scope="col" className="px-2 py-2">When</th>
-          <th scope="col" className="px-2 py-2">Moderator</th>
-          <th scope="col" className="px-2 py-2">Action</th>
-          <th scope="col" className="px-2 py-2">Thing</th>
-          <th scope="col" className="px-2 py-2">Note</th>
+          <th scope="col" className="px-2 py-2">
+            When
+          </th>
+          <th scope="col" className="px-2 py-2">
+            Moderator
+          </th>
+          <th scope="col" className="px-2 py-2">
+            Action
+          </th>
+          <th scope="col" className="px-2 py-2">
+            Thing
+          </th>
+          <th scope="col" className="px-2 py-2">
+            Note
+          </th>
         </tr>
       </thead>
       <tbody>
         {items.map((e) => (
           <tr key={e.id} className="block border-b border-rule py-2 last:border-0 sm:table-row sm:py-0">
-            <td data-label="When" className={cell}><span className="num whitespace-nowrap">{formatDateTime(e.createdAt)}</span></td>
+            <td data-label="When" className={cell}>
+              <span className="num whitespace-nowrap">{formatDateTime(e.createdAt)}</span>
+            </td>
             <td data-label="Moderator" className={`${cell} sm:whitespace-nowrap`}>
-              <Link className="underline decoration-rule hover:text-copper" to={`${paths.reviewAudit}?actorId=${e.actor.id}`} title={`Only ${e.actor.login}’s entries`}>
+              <Link
+                className="underline decoration-rule hover:text-copper"
+                to={`${paths.reviewAudit}?actorId=${e.actor.id}`}
+                title={`Only ${e.actor.login}’s entries`}
+              >
                 {e.actor.login}
               </Link>
             </td>
-            <td data-label="Action" className={cell}>{actionLabel(e.action)}</td>
-            <td data-label="Thing" className={`${cell} sm:whitespace-nowrap`}>
-              <TargetLink type={e.targetType} id={e.targetId}>{targetTypeLabels[e.targetType] ?? e.targetType} <span className="num">#{e.targetId}</span></TargetLink>
+            <td data-label="Action" className={cell}>
+              {actionLabel(e.action)}
             </td>
-            <td data-label="Note" className={cell}><span className="min-w-0 whitespace-pre-line break-words">{e.note || <span className="text-ink-soft">—</span>}</span></td>
+            <td data-label="Thing" className={`${cell} sm:whitespace-nowrap`}>
+              <TargetLink type={e.targetType} id={e.targetId}>
+                {targetTypeLabels[e.targetType] ?? e.targetType} <span className="num">#{e.targetId}</span>
+              </TargetLink>
+            </td>
+            <td data-label="Note" className={cell}>
+              <span className="min-w-0 whitespace-pre-line break-words">{e.note || <span className="text-ink-soft">—</span>}</span>
+            </td>
           </tr>
         ))}
       </tbody>

@@ -22,7 +22,14 @@ interface Values<D extends string> {
  * The note box and the decision buttons of one desk item, validated with the shared zod schema
  * (which says which decisions need a note); the server's refusal shows under the buttons.
  */
-export function DecisionForm<D extends string>({ id, schema, choices, noteLabel, noteHint, onDecide }: {
+export function DecisionForm<D extends string>({
+  id,
+  schema,
+  choices,
+  noteLabel,
+  noteHint,
+  onDecide,
+}: {
   id: string;
   schema: z.ZodType<Values<D>, Values<string>>;
   choices: DecisionChoice<D>[];
@@ -56,9 +63,16 @@ export function DecisionForm<D extends string>({ id, schema, choices, noteLabel,
   };
 
   return (
-    <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-3 rounded-lg border border-rule bg-paper-deep/60 p-3" aria-label="Decision">
+    <form
+      noValidate
+      onSubmit={(e) => e.preventDefault()}
+      className="space-y-3 rounded-lg border border-rule bg-paper-deep/60 p-3"
+      aria-label="Decision"
+    >
       <div>
-        <label htmlFor={noteId} className="mb-1 block text-sm font-medium">{noteLabel}</label>
+        <label htmlFor={noteId} className="mb-1 block text-sm font-medium">
+          {noteLabel}
+        </label>
         <textarea
           id={noteId}
           rows={3}
@@ -68,9 +82,13 @@ export function DecisionForm<D extends string>({ id, schema, choices, noteLabel,
           {...register('note')}
         />
         {noteError ? (
-          <p id={`${noteId}-error`} className="mt-1 text-sm text-danger">{noteError}</p>
+          <p id={`${noteId}-error`} className="mt-1 text-sm text-danger">
+            {noteError}
+          </p>
         ) : (
-          <p id={`${noteId}-hint`} className="mt-1 text-xs text-ink-soft">{noteHint}</p>
+          <p id={`${noteId}-hint`} className="mt-1 text-xs text-ink-soft">
+            {noteHint}
+          </p>
         )}
       </div>
       <div className="flex flex-wrap gap-2">
@@ -80,7 +98,11 @@ export function DecisionForm<D extends string>({ id, schema, choices, noteLabel,
           </Button>
         ))}
       </div>
-      {serverError && <p role="alert" className="rounded-md border border-danger bg-danger/5 px-3 py-2 text-sm text-danger">{serverError}</p>}
+      {serverError && (
+        <p role="alert" className="rounded-md border border-danger bg-danger/5 px-3 py-2 text-sm text-danger">
+          {serverError}
+        </p>
+      )}
     </form>
   );
 }

@@ -8,7 +8,13 @@ const MOVES: Record<string, number> = { j: 1, ArrowDown: 1, k: -1, ArrowUp: -1 }
  * One queue as a list of buttons, oldest first. While focus is in the list, j/k or ↓/↑ move to
  * the next or previous row and select it; Home/End jump to the ends.
  */
-export function QueueList({ kind, entries, selectedId, onSelect, id }: {
+export function QueueList({
+  kind,
+  entries,
+  selectedId,
+  onSelect,
+  id,
+}: {
   kind: QueueKind;
   entries: QueueEntry[];
   selectedId: number | null;
@@ -37,7 +43,9 @@ export function QueueList({ kind, entries, selectedId, onSelect, id }: {
         <p className="rounded-lg border border-dashed border-rule bg-white p-5 text-center text-ink-soft">{emptyQueueText[kind]}</p>
       ) : (
         <>
-          <p id={`${id}-hint`} className="mb-2 text-xs text-ink-soft">Oldest first. In the list, j / k or ↓ / ↑ move between items.</p>
+          <p id={`${id}-hint`} className="mb-2 text-xs text-ink-soft">
+            Oldest first. In the list, j / k or ↓ / ↑ move between items.
+          </p>
           <ul className="space-y-2" aria-describedby={`${id}-hint`} onKeyDown={handleKeyDown}>
             {entries.map((entry) => (
               <li key={entry.item.id}>

@@ -47,7 +47,14 @@ function RowBody({ entry }: { entry: QueueEntry }) {
     case 'parts': {
       const p = entry.item;
       return (
-        <Line title={p.name} meta={<>{categoryLabel(p.category)} · by {p.author?.login ?? 'unknown'} · {age(p.createdAt)} waiting</>}>
+        <Line
+          title={p.name}
+          meta={
+            <>
+              {categoryLabel(p.category)} · by {p.author?.login ?? 'unknown'} · {age(p.createdAt)} waiting
+            </>
+          }
+        >
           {p.salvageSource && <span className="text-ink-soft">Salvaged from {p.salvageSource}</span>}
         </Line>
       );
@@ -55,7 +62,14 @@ function RowBody({ entry }: { entry: QueueEntry }) {
     case 'reports': {
       const r = entry.item;
       return (
-        <Line title={sentenceCase(r.targetLabel)} meta={<>Report on a {targetTypeWords[r.targetType]} · by {r.reporter.login} · {age(r.createdAt)} waiting</>}>
+        <Line
+          title={sentenceCase(r.targetLabel)}
+          meta={
+            <>
+              Report on a {targetTypeWords[r.targetType]} · by {r.reporter.login} · {age(r.createdAt)} waiting
+            </>
+          }
+        >
           <span className="font-medium">{reportReasonLabels[r.reason]}</span>
           {r.note && <span className="text-ink-soft">: {r.note.length > 90 ? `${r.note.slice(0, 90)}…` : r.note}</span>}
         </Line>
@@ -66,9 +80,17 @@ function RowBody({ entry }: { entry: QueueEntry }) {
 
 function BuildFacts({ build: b, when }: { build: QueueBuildDto; when: string }) {
   return (
-    <Line title={b.title} meta={<>{kindLabel(b.instrumentKind)} · by {b.author.login} · {when}</>}>
+    <Line
+      title={b.title}
+      meta={
+        <>
+          {kindLabel(b.instrumentKind)} · by {b.author.login} · {when}
+        </>
+      }
+    >
       <span className="text-xs text-ink-soft">
-        {count(b.photoCount, 'photo')} · {count(b.entryCount, 'entry', 'entries')} · {count(b.actuatorCount, 'actuator')} · {count(b.pendingRunCount, 'pending run')}
+        {count(b.photoCount, 'photo')} · {count(b.entryCount, 'entry', 'entries')} · {count(b.actuatorCount, 'actuator')} ·{' '}
+        {count(b.pendingRunCount, 'pending run')}
       </span>
     </Line>
   );
@@ -76,13 +98,31 @@ function BuildFacts({ build: b, when }: { build: QueueBuildDto; when: string }) 
 
 function RunFacts({ run: r }: { run: QueueRunDto }) {
   return (
-    <Line title={r.part.name} meta={<>{r.actuatorLabel ?? `${r.axis} axis`} in “{r.buildTitle}” · by {r.author.login} · {age(r.createdAt)} waiting</>}>
+    <Line
+      title={r.part.name}
+      meta={
+        <>
+          {r.actuatorLabel ?? `${r.axis} axis`} in “{r.buildTitle}” · by {r.author.login} · {age(r.createdAt)} waiting
+        </>
+      }
+    >
       <span className="flex flex-wrap gap-x-3 gap-y-0.5">
-        <span><span className="num font-medium">{withUncertainty(r.fit.gainNmPerV, halfWidth(r.fit.gainCi95NmPerV))}</span> nm/V <span className="text-xs text-ink-soft">(95 %)</span></span>
-        <span>R² <span className="num">{r.fit.r2 === null ? '—' : r.fit.r2.toFixed(4)}</span></span>
-        <span>hysteresis <span className="num">{r.fit.hysteresisPctFs === null ? '—' : `${sig(r.fit.hysteresisPctFs, 2)} %`}</span></span>
+        <span>
+          <span className="num font-medium">{withUncertainty(r.fit.gainNmPerV, halfWidth(r.fit.gainCi95NmPerV))}</span> nm/V{' '}
+          <span className="text-xs text-ink-soft">(95 %)</span>
+        </span>
+        <span>
+          R² <span className="num">{r.fit.r2 === null ? '—' : r.fit.r2.toFixed(4)}</span>
+        </span>
+        <span>
+          hysteresis <span className="num">{r.fit.hysteresisPctFs === null ? '—' : `${sig(r.fit.hysteresisPctFs, 2)} %`}</span>
+        </span>
       </span>
-      {r.flags.length > 0 && <span className="mt-1.5 block"><FlagChips flags={r.flags} inline /></span>}
+      {r.flags.length > 0 && (
+        <span className="mt-1.5 block">
+          <FlagChips flags={r.flags} inline />
+        </span>
+      )}
     </Line>
   );
 }

@@ -2,7 +2,12 @@ import { useRef, type KeyboardEvent } from 'react';
 import { QUEUE_KINDS, queueLabels, type QueueKind } from './queue-model.ts';
 
 /** The five queues as tabs with their counts; ←/→ move between tabs (the tablist pattern). */
-export function QueueTabs({ kind, counts, onSelect, panelId }: {
+export function QueueTabs({
+  kind,
+  counts,
+  onSelect,
+  panelId,
+}: {
   kind: QueueKind;
   counts: Record<QueueKind, number>;
   onSelect: (kind: QueueKind) => void;

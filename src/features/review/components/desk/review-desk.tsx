@@ -20,7 +20,12 @@ function revealPanel(el: HTMLElement | null) {
  * side panel (stacked below on narrow screens). After a decision the next item opens and focus
  * moves to the panel, so a moderator can work through a queue from the keyboard.
  */
-export function ReviewDesk({ queue, kind, requestedId, onChange }: {
+export function ReviewDesk({
+  queue,
+  kind,
+  requestedId,
+  onChange,
+}: {
   queue: ReviewQueueDto;
   kind: QueueKind;
   requestedId: number | null;
@@ -51,8 +56,18 @@ export function ReviewDesk({ queue, kind, requestedId, onChange }: {
 
   return (
     <div className="space-y-4">
-      <QueueTabs kind={kind} counts={counts} panelId={LIST_ID} onSelect={(k) => { setMessage(''); onChange({ kind: k, id: null }); }} />
-      <p role="status" className={message ? 'rounded-md border border-teal/40 bg-teal/5 px-3 py-2 text-sm' : 'sr-only'}>{message}</p>
+      <QueueTabs
+        kind={kind}
+        counts={counts}
+        panelId={LIST_ID}
+        onSelect={(k) => {
+          setMessage('');
+          onChange({ kind: k, id: null });
+        }}
+      />
+      <p role="status" className={message ? 'rounded-md border border-teal/40 bg-teal/5 px-3 py-2 text-sm' : 'sr-only'}>
+        {message}
+      </p>
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
         <QueueList id={LIST_ID} kind={kind} entries={entries} selectedId={selected?.item.id ?? null} onSelect={handleSelect} />
         <section

@@ -15,12 +15,21 @@ import { Facts, PanelFrame, PanelSection } from './panel-frame.tsx';
 export function BuildPanel({ build, edited, onDecided }: { build: QueueBuildDto; edited: boolean; onDecided: (decision: string) => void }) {
   const full = useReviewBuild(build.id);
   const decide = useDecideBuild();
-  const when = edited ? `edited ${age(build.updatedAt)} ago` : `submitted ${formatDate(build.submittedAt)}, ${age(build.submittedAt ?? build.updatedAt)} waiting`;
+  const when = edited
+    ? `edited ${age(build.updatedAt)} ago`
+    : `submitted ${formatDate(build.submittedAt)}, ${age(build.submittedAt ?? build.updatedAt)} waiting`;
   return (
     <PanelFrame
       eyebrow={edited ? 'Published build, edited since review' : 'Build submitted for review'}
       title={build.title}
-      meta={<>by {build.author.login} · {when} · <Link className="text-copper underline" to={paths.build(build.id)}>Open the build page</Link></>}
+      meta={
+        <>
+          by {build.author.login} · {when} ·{' '}
+          <Link className="text-copper underline" to={paths.build(build.id)}>
+            Open the build page
+          </Link>
+        </>
+      }
       decision={
         <DecisionForm
           id={`build-${build.id}`}
@@ -28,16 +37,28 @@ export function BuildPanel({ build, edited, onDecided }: { build: QueueBuildDto;
           choices={edited ? editedChoices : buildChoices}
           noteLabel="Note to the maker"
           noteHint="Required to return or decline: say what to change or why. The maker sees it on the build and by e-mail."
-          onDecide={async (v) => { await decide.mutateAsync({ id: build.id, ...v }); onDecided(v.decision); }}
+          onDecide={async (v) => {
+            await decide.mutateAsync({ id: build.id, ...v });
+            onDecided(v.decision);
+          }}
         />
       }
     >
       <p>{build.summary}</p>
       <p className="text-sm text-ink-soft">
-        {count(build.photoCount, 'photo')} · {count(build.entryCount, 'log entry', 'log entries')} · {count(build.actuatorCount, 'actuator')} · {count(build.pendingRunCount, 'pending run')}
+        {count(build.photoCount, 'photo')} · {count(build.entryCount, 'log entry', 'log entries')} ·{' '}
+        {count(build.actuatorCount, 'actuator')} · {count(build.pendingRunCount, 'pending run')}
       </p>
-      {full.isPending && <p role="status" className="text-sm text-ink-soft">Loading the build…</p>}
-      {full.isError && <p role="alert" className="text-sm text-danger">The build did not load: {full.error.message}</p>}
+      {full.isPending && (
+        <p role="status" className="text-sm text-ink-soft">
+          Loading the build…
+        </p>
+      )}
+      {full.isError && (
+        <p role="alert" className="text-sm text-danger">
+          The build did not load: {full.error.message}
+        </p>
+      )}
       {full.data && <BuildDetails build={full.data} />}
     </PanelFrame>
   );
@@ -46,7 +67,13 @@ export function BuildPanel({ build, edited, onDecided }: { build: QueueBuildDto;
 function BuildDetails({ build }: { build: BuildDto }) {
   return (
     <>
-      <Facts items={[['Instrument', instrumentKindLabels[build.instrumentKind]], ['Stage', buildStageLabels[build.stage]], ['Started', formatDate(build.createdAt)]]} />
+      <Facts
+        items={[
+          ['Instrument', instrumentKindLabels[build.instrumentKind]],
+          ['Stage', buildStageLabels[build.stage]],
+          ['Started', formatDate(build.createdAt)],
+        ]}
+      />
       <PanelSection title="Photos">
         <BuildPhotos photos={build.photos} />
       </PanelSection>
@@ -64,8 +91,8 @@ function BuildDetails({ build }: { build: BuildDto }) {
           <ul className="space-y-1 text-sm">
             {build.actuators.map((a) => (
               <li key={a.id}>
-                <span className="font-medium">{a.label ?? `${a.axis} axis`}</span>: {a.part.name} ·{' '}
-                {count(a.runs.length, 'run')}, {a.runs.filter((r) => r.status === 'pending').length} pending
+                <span className="font-medium">{a.label ?? `${a.axis} axis`}</span>: {a.part.name} · {count(a.runs.length, 'run')},{' '}
+                {a.runs.filter((r) => r.status === 'pending').length} pending
               </li>
             ))}
           </ul>
@@ -74,7 +101,11 @@ function BuildDetails({ build }: { build: BuildDto }) {
       {build.entries.length > 0 && (
         <PanelSection title="Log entries">
           <ul className="list-disc space-y-0.5 pl-5 text-sm">
-            {build.entries.map((e) => <li key={e.id}><span className="text-ink-soft">{formatDate(e.entryDate)}</span> {e.title}</li>)}
+            {build.entries.map((e) => (
+              <li key={e.id}>
+                <span className="text-ink-soft">{formatDate(e.entryDate)}</span> {e.title}
+              </li>
+            ))}
           </ul>
         </PanelSection>
       )}

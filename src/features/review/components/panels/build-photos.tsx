@@ -11,7 +11,12 @@ export function BuildPhotos({ photos }: { photos: PhotoDto[] }) {
       <ul className="grid grid-cols-3 gap-2 sm:grid-cols-4">
         {photos.map((p, i) => (
           <li key={p.id}>
-            <button type="button" onClick={() => setOpen(i)} className="block w-full overflow-hidden rounded border border-rule bg-paper-deep hover:border-copper" aria-label={`Open photo: ${p.alt}`}>
+            <button
+              type="button"
+              onClick={() => setOpen(i)}
+              className="block w-full overflow-hidden rounded border border-rule bg-paper-deep hover:border-copper"
+              aria-label={`Open photo: ${p.alt}`}
+            >
               <img src={p.thumbUrl} alt="" width={p.width} height={p.height} loading="lazy" className="aspect-square w-full object-cover" />
             </button>
           </li>

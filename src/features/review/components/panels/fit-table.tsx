@@ -23,7 +23,9 @@ export function FitTable({ fit }: { fit: FitResultDto }) {
       <tbody>
         {rows.map(([k, v]) => (
           <tr key={k} className="border-b border-rule last:border-0">
-            <th scope="row" className="py-1 pr-3 text-left font-normal text-ink-soft">{k}</th>
+            <th scope="row" className="py-1 pr-3 text-left font-normal text-ink-soft">
+              {k}
+            </th>
             <td className="num py-1 text-right">{v}</td>
           </tr>
         ))}

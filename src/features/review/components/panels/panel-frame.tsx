@@ -1,7 +1,13 @@
 import type { ReactNode } from 'react';
 
 /** The side panel's frame: what the item is, one line about it, its details, then the decision. */
-export function PanelFrame({ eyebrow, title, meta, children, decision }: {
+export function PanelFrame({
+  eyebrow,
+  title,
+  meta,
+  children,
+  decision,
+}: {
   eyebrow: string;
   title: ReactNode;
   meta: ReactNode;

@@ -13,7 +13,11 @@ export function PartPanel({ part, onDecided }: { part: QueuePartDto; onDecided: 
     <PanelFrame
       eyebrow="Part proposed for the parts registry"
       title={part.name}
-      meta={<>proposed by {part.author?.login ?? 'unknown'} · {formatDate(part.createdAt)} · {age(part.createdAt)} waiting</>}
+      meta={
+        <>
+          proposed by {part.author?.login ?? 'unknown'} · {formatDate(part.createdAt)} · {age(part.createdAt)} waiting
+        </>
+      }
       decision={
         <DecisionForm
           id={`part-${part.id}`}
@@ -21,7 +25,10 @@ export function PartPanel({ part, onDecided }: { part: QueuePartDto; onDecided: 
           choices={acceptChoices}
           noteLabel="Note to the proposer"
           noteHint="Required to reject, e.g. “duplicate of an existing part”. Accepting lists the part in the parts registry."
-          onDecide={async (v) => { await decide.mutateAsync({ id: part.id, ...v }); onDecided(v.decision); }}
+          onDecide={async (v) => {
+            await decide.mutateAsync({ id: part.id, ...v });
+            onDecided(v.decision);
+          }}
         />
       }
     >

@@ -13,7 +13,11 @@ export function ReportPanel({ report, onDecided }: { report: QueueReportDto; onD
     <PanelFrame
       eyebrow={`Report on a ${targetTypeWords[report.targetType]}`}
       title={sentenceCase(report.targetLabel)}
-      meta={<>reported by {report.reporter.login} · {formatDate(report.createdAt)} · {age(report.createdAt)} waiting</>}
+      meta={
+        <>
+          reported by {report.reporter.login} · {formatDate(report.createdAt)} · {age(report.createdAt)} waiting
+        </>
+      }
       decision={
         <DecisionForm
           id={`report-${report.id}`}
@@ -21,15 +25,27 @@ export function ReportPanel({ report, onDecided }: { report: QueueReportDto; onD
           choices={reportChoices}
           noteLabel="What you did"
           noteHint="Required for both: the reporter is told the outcome with this note."
-          onDecide={async (v) => { await decide.mutateAsync({ id: report.id, decision: v.decision, note: v.note ?? '' }); onDecided(v.decision); }}
+          onDecide={async (v) => {
+            await decide.mutateAsync({ id: report.id, decision: v.decision, note: v.note ?? '' });
+            onDecided(v.decision);
+          }}
         />
       }
     >
       <Facts
         items={[
-          ['Reported', <TargetLink key="t" type={report.targetType} id={report.targetId}>{sentenceCase(report.targetLabel)}{report.targetType === 'run' ? ' (its build)' : ''}</TargetLink>],
+          [
+            'Reported',
+            <TargetLink key="t" type={report.targetType} id={report.targetId}>
+              {sentenceCase(report.targetLabel)}
+              {report.targetType === 'run' ? ' (its build)' : ''}
+            </TargetLink>,
+          ],
           ['Reason', reportReasonLabels[report.reason]],
-          ['Note', report.note ? <span className="whitespace-pre-line">{report.note}</span> : <span className="text-ink-soft">No note.</span>],
+          [
+            'Note',
+            report.note ? <span className="whitespace-pre-line">{report.note}</span> : <span className="text-ink-soft">No note.</span>,
+          ],
         ]}
       />
     </PanelFrame>

@@ -24,8 +24,11 @@ export function RunPanel({ run, onDecided }: { run: QueueRunDto; onDecided: (dec
       title={run.part.name}
       meta={
         <>
-          {run.actuatorLabel ?? `${run.axis} axis`} in <Link className="text-copper underline" to={paths.build(run.buildId)}>{run.buildTitle}</Link> · by {run.author.login} · {method} ·{' '}
-          {age(run.createdAt)} waiting
+          {run.actuatorLabel ?? `${run.axis} axis`} in{' '}
+          <Link className="text-copper underline" to={paths.build(run.buildId)}>
+            {run.buildTitle}
+          </Link>{' '}
+          · by {run.author.login} · {method} · {age(run.createdAt)} waiting
         </>
       }
       decision={
@@ -35,7 +38,10 @@ export function RunPanel({ run, onDecided }: { run: QueueRunDto; onDecided: (dec
           choices={acceptChoices}
           noteLabel="Note to the maker"
           noteHint="Required to reject: say what looks wrong. Only accepted runs count in the part’s statistics."
-          onDecide={async (v) => { await decide.mutateAsync({ id: run.id, ...v }); onDecided(v.decision); }}
+          onDecide={async (v) => {
+            await decide.mutateAsync({ id: run.id, ...v });
+            onDecided(v.decision);
+          }}
         />
       }
     >
@@ -44,7 +50,13 @@ export function RunPanel({ run, onDecided }: { run: QueueRunDto; onDecided: (dec
       </PanelSection>
       <PanelSection title="Calibration plot">
         <div className="rounded-md border border-rule bg-white p-2 sm:p-3">
-          <Suspense fallback={<p role="status" className="flex h-[260px] items-center justify-center text-sm text-ink-soft">Loading the plot…</p>}>
+          <Suspense
+            fallback={
+              <p role="status" className="flex h-[260px] items-center justify-center text-sm text-ink-soft">
+                Loading the plot…
+              </p>
+            }
+          >
             <CalibrationChart points={run.points} fit={{ interceptNm: run.fit.interceptNm, gainNmPerV: run.fit.gainNmPerV }} height={260} />
           </Suspense>
         </div>

@@ -10,7 +10,11 @@ export const chartColors = {
 } as const;
 
 /** Axis tick text in the monospace figures used for every number. */
-export const tickStyle = { fontFamily: '"JetBrains Mono Variable", ui-monospace, monospace', fontSize: 11, fill: chartColors.inkSoft } as const;
+export const tickStyle = {
+  fontFamily: '"JetBrains Mono Variable", ui-monospace, monospace',
+  fontSize: 11,
+  fill: chartColors.inkSoft,
+} as const;
 
 /** Axis label text. */
 export const axisLabelStyle = { fontSize: 12, fill: chartColors.inkSoft } as const;

@@ -19,11 +19,42 @@ export function CreepChart({ samples, curve }: { samples: readonly CreepPoint[];
     <ResponsiveContainer width="100%" height={280}>
       <ScatterChart margin={{ top: 4, right: 24, bottom: 24, left: 8 }}>
         <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
-        <XAxis type="number" dataKey="timeS" scale="log" domain={[ticks[0], ticks[ticks.length - 1]]} ticks={ticks} tick={tickStyle} tickFormatter={formatTick} label={{ value: 'Time since the step (s)', position: 'insideBottom', offset: -14, style: axisLabelStyle }} />
-        <YAxis type="number" dataKey="displacementNm" domain={['auto', 'auto']} width={72} tick={tickStyle} tickFormatter={formatTick} label={{ value: 'Displacement (nm)', angle: -90, position: 'insideLeft', offset: 4, style: { ...axisLabelStyle, textAnchor: 'middle' } }} />
+        <XAxis
+          type="number"
+          dataKey="timeS"
+          scale="log"
+          domain={[ticks[0], ticks[ticks.length - 1]]}
+          ticks={ticks}
+          tick={tickStyle}
+          tickFormatter={formatTick}
+          label={{ value: 'Time since the step (s)', position: 'insideBottom', offset: -14, style: axisLabelStyle }}
+        />
+        <YAxis
+          type="number"
+          dataKey="displacementNm"
+          domain={['auto', 'auto']}
+          width={72}
+          tick={tickStyle}
+          tickFormatter={formatTick}
+          label={{
+            value: 'Displacement (nm)',
+            angle: -90,
+            position: 'insideLeft',
+            offset: 4,
+            style: { ...axisLabelStyle, textAnchor: 'middle' },
+          }}
+        />
         <Legend verticalAlign="top" itemSorter={null} />
         <Scatter name="Samples" data={[...samples]} fill={chartColors.copper} isAnimationActive={false} />
-        <Scatter name="Fitted creep law" data={[...curve]} line={{ stroke: chartColors.ink, strokeWidth: 1.5 }} shape={noMarker} legendType="line" fill={chartColors.ink} isAnimationActive={false} />
+        <Scatter
+          name="Fitted creep law"
+          data={[...curve]}
+          line={{ stroke: chartColors.ink, strokeWidth: 1.5 }}
+          shape={noMarker}
+          legendType="line"
+          fill={chartColors.ink}
+          isAnimationActive={false}
+        />
       </ScatterChart>
     </ResponsiveContainer>
   );

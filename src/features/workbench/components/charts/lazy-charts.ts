@@ -2,7 +2,9 @@
 import { lazy } from 'react';
 
 /** Calibration scatter with the fit line (the app-wide chart in components/charts). */
-export const LazyCalibrationChart = lazy(() => import('@/components/charts/calibration-chart.tsx').then((m) => ({ default: m.CalibrationChart })));
+export const LazyCalibrationChart = lazy(() =>
+  import('@/components/charts/calibration-chart.tsx').then((m) => ({ default: m.CalibrationChart })),
+);
 
 /** Reachable parallelogram of a two-axis mixer (charts/mixer-chart.tsx). */
 export const LazyMixerChart = lazy(() => import('./mixer-chart.tsx').then((m) => ({ default: m.MixerChart })));

@@ -1,4 +1,15 @@
-import { CartesianGrid, Legend, ReferenceDot, ResponsiveContainer, Scatter, ScatterChart, XAxis, YAxis, useXAxisScale, useYAxisScale } from 'recharts';
+import {
+  CartesianGrid,
+  Legend,
+  ReferenceDot,
+  ResponsiveContainer,
+  Scatter,
+  ScatterChart,
+  XAxis,
+  YAxis,
+  useXAxisScale,
+  useYAxisScale,
+} from 'recharts';
 import { formatTick } from '@shared/format/measured-number.ts';
 import { niceStep, stepTicks } from './axis-ticks.ts';
 import { axisLabelStyle, chartColors, tickStyle } from './chart-style.ts';
@@ -42,11 +53,37 @@ export function MixerChart({ region, target }: { region: readonly PlanePoint[]; 
     <ResponsiveContainer width="100%" aspect={1} maxHeight={420}>
       <ScatterChart margin={{ top: 4, right: 12, bottom: 24, left: 8 }}>
         <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
-        <XAxis type="number" dataKey="xNm" domain={domain.x} ticks={axes.x} allowDataOverflow tick={tickStyle} tickFormatter={formatTick} label={{ value: 'x (nm)', position: 'insideBottom', offset: -14, style: axisLabelStyle }} />
-        <YAxis type="number" dataKey="yNm" domain={domain.y} ticks={axes.y} allowDataOverflow width={72} tick={tickStyle} tickFormatter={formatTick} label={{ value: 'y (nm)', angle: -90, position: 'insideLeft', offset: 4, style: { ...axisLabelStyle, textAnchor: 'middle' } }} />
+        <XAxis
+          type="number"
+          dataKey="xNm"
+          domain={domain.x}
+          ticks={axes.x}
+          allowDataOverflow
+          tick={tickStyle}
+          tickFormatter={formatTick}
+          label={{ value: 'x (nm)', position: 'insideBottom', offset: -14, style: axisLabelStyle }}
+        />
+        <YAxis
+          type="number"
+          dataKey="yNm"
+          domain={domain.y}
+          ticks={axes.y}
+          allowDataOverflow
+          width={72}
+          tick={tickStyle}
+          tickFormatter={formatTick}
+          label={{ value: 'y (nm)', angle: -90, position: 'insideLeft', offset: 4, style: { ...axisLabelStyle, textAnchor: 'middle' } }}
+        />
         <Legend verticalAlign="top" itemSorter={null} />
         <RegionPolygon corners={region} />
-        <Scatter name="Reachable region" data={[...region]} fill={chartColors.teal} shape={noMarker} legendType="square" isAnimationActive={false} />
+        <Scatter
+          name="Reachable region"
+          data={[...region]}
+          fill={chartColors.teal}
+          shape={noMarker}
+          legendType="square"
+          isAnimationActive={false}
+        />
         <ReferenceDot x={0} y={0} r={3} fill={chartColors.ink} stroke="none" />
         {target && (
           <Scatter

@@ -10,7 +10,17 @@ export interface StepAtBits {
 }
 
 /** LSB step (log scale) against DAC bits, the chosen DAC marked; wanted step and pixel size as lines. */
-export function ScanChart({ steps, bits, wantedStepNm, pixelNm }: { steps: readonly StepAtBits[]; bits: number; wantedStepNm?: number; pixelNm?: number }) {
+export function ScanChart({
+  steps,
+  bits,
+  wantedStepNm,
+  pixelNm,
+}: {
+  steps: readonly StepAtBits[];
+  bits: number;
+  wantedStepNm?: number;
+  pixelNm?: number;
+}) {
   const current = steps.find((s) => s.bits === bits);
   const ys = [...steps.map((s) => s.lsbNm), ...(wantedStepNm ? [wantedStepNm] : []), ...(pixelNm ? [pixelNm] : [])];
   const ticks = decadeTicks(Math.min(...ys), Math.max(...ys));
@@ -18,12 +28,43 @@ export function ScanChart({ steps, bits, wantedStepNm, pixelNm }: { steps: reado
     <ResponsiveContainer width="100%" height={280}>
       <LineChart data={[...steps]} margin={{ top: 4, right: 24, bottom: 24, left: 8 }}>
         <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
-        <XAxis type="number" dataKey="bits" domain={['dataMin', 'dataMax']} allowDecimals={false} tick={tickStyle} label={{ value: 'DAC bits', position: 'insideBottom', offset: -14, style: axisLabelStyle }} />
-        <YAxis type="number" scale="log" domain={[ticks[0], ticks[ticks.length - 1]]} ticks={ticks} allowDataOverflow width={72} tick={tickStyle} tickFormatter={formatTick} label={{ value: 'Step (nm)', angle: -90, position: 'insideLeft', offset: 4, style: { ...axisLabelStyle, textAnchor: 'middle' } }} />
+        <XAxis
+          type="number"
+          dataKey="bits"
+          domain={['dataMin', 'dataMax']}
+          allowDecimals={false}
+          tick={tickStyle}
+          label={{ value: 'DAC bits', position: 'insideBottom', offset: -14, style: axisLabelStyle }}
+        />
+        <YAxis
+          type="number"
+          scale="log"
+          domain={[ticks[0], ticks[ticks.length - 1]]}
+          ticks={ticks}
+          allowDataOverflow
+          width={72}
+          tick={tickStyle}
+          tickFormatter={formatTick}
+          label={{ value: 'Step (nm)', angle: -90, position: 'insideLeft', offset: 4, style: { ...axisLabelStyle, textAnchor: 'middle' } }}
+        />
         <Legend verticalAlign="top" />
         <Line name="LSB step" dataKey="lsbNm" stroke={chartColors.teal} strokeWidth={2} dot={{ r: 2 }} isAnimationActive={false} />
-        {wantedStepNm !== undefined && <ReferenceLine y={wantedStepNm} stroke={chartColors.amber} strokeDasharray="5 4" label={{ value: 'wanted step', position: 'insideTopRight', fontSize: 11, fill: chartColors.inkSoft }} />}
-        {pixelNm !== undefined && <ReferenceLine y={pixelNm} stroke={chartColors.inkSoft} strokeDasharray="2 3" label={{ value: 'pixel size', position: 'insideBottomRight', fontSize: 11, fill: chartColors.inkSoft }} />}
+        {wantedStepNm !== undefined && (
+          <ReferenceLine
+            y={wantedStepNm}
+            stroke={chartColors.amber}
+            strokeDasharray="5 4"
+            label={{ value: 'wanted step', position: 'insideTopRight', fontSize: 11, fill: chartColors.inkSoft }}
+          />
+        )}
+        {pixelNm !== undefined && (
+          <ReferenceLine
+            y={pixelNm}
+            stroke={chartColors.inkSoft}
+            strokeDasharray="2 3"
+            label={{ value: 'pixel size', position: 'insideBottomRight', fontSize: 11, fill: chartColors.inkSoft }}
+          />
+        )}
         {current && <ReferenceDot x={current.bits} y={current.lsbNm} r={6} fill={chartColors.copper} stroke="white" strokeWidth={2} />}
       </LineChart>
     </ResponsiveContainer>
