@@ -346,7 +346,9 @@ try {
     totalErrors += f.errors + f.non2xx;
     totalLost += lost + unexplained;
     lines.push(
-      `${f.route.name.padEnd(32)} ${pad(f.route.connections, 5)} ${pad(f.requests, 9)} ${pad(f.rps.toFixed(0), 7)} ${pad(f.p50.toFixed(1), 8)} ${pad(f.p95.toFixed(1), 8)} ${pad(f.p99.toFixed(1), 8)} ${pad(f.max.toFixed(0), 8)} ${pad(f.errors, 7)} ${pad(f.non2xx, 8)}` +
+      `${f.route.name.padEnd(32)} ${pad(f.route.connections, 5)} ${pad(f.requests, 9)} ${pad(f.rps.toFixed(0), 7)} ` +
+        `${pad(f.p50.toFixed(1), 8)} ${pad(f.p95.toFixed(1), 8)} ${pad(f.p99.toFixed(1), 8)} ` +
+        `${pad(f.max.toFixed(0), 8)} ${pad(f.errors, 7)} ${pad(f.non2xx, 8)}` +
         (f.route.rows ? ` ${pad(created, 6)} ${pad(added, 6)} ${pad(unanswered, 11)} ${pad(lost, 5)}` : ''),
     );
     if (f.non2xx) lines.push(`  statuses: ${[...f.statuses].map(([s, n]) => `${s}×${n}`).join(' ')}`);

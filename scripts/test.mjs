@@ -31,7 +31,7 @@ try {
 }
 const dir = mkdtempSync(join(base, 'scanwright-test-'));
 let mariadb = null;
-let status = 1;
+let status;
 let cleaning = false;
 
 async function cleanup() {
@@ -82,18 +82,29 @@ try {
     if (build.status !== 0) throw new Error('client build failed');
   }
   mkdirSync('test-output', { recursive: true });
-  // A full run also type-checks client, server, shared code and tests (about 20 s); a failure fails the run.
-  let typesOk = true;
+  // A full run also checks the conventions (about 45 s): the lint rules with the import boundaries and
+  // cycles, the formatting, dead code (knip) and the types of client, server, shared code and tests.
+  // Any failure fails the run.
+  let checksOk = true;
   if (extra.length === 0) {
-    typesOk = spawnSync('npx', ['tsc', '--noEmit', '-p', 'tsconfig.json'], { stdio: 'inherit', env }).status === 0;
-    console.log(`typecheck: ${typesOk ? 'ok' : 'FAILED'}`);
+    const checks = [
+      ['lint', ['eslint', '.']],
+      ['format', ['prettier', '--check', '.', '--log-level', 'warn']],
+      ['dead code', ['knip', '--no-progress']],
+      ['typecheck', ['tsc', '--noEmit', '-p', 'tsconfig.json']],
+    ];
+    for (const [name, args] of checks) {
+      const ok = spawnSync('npx', args, { stdio: 'inherit', env }).status === 0;
+      console.log(`${name}: ${ok ? 'ok' : 'FAILED'}`);
+      checksOk = checksOk && ok;
+    }
   }
   status = await runAsync(
     'npx',
     ['vitest', 'run', '--reporter=default', '--reporter=json', '--outputFile.json=test-output/vitest.json', ...extra],
     env,
   );
-  if (!typesOk) status = status || 1;
+  if (!checksOk) status = status || 1;
   if (existsSync('test-output/vitest.json')) {
     const r = JSON.parse(readFileSync('test-output/vitest.json', 'utf8'));
     console.log(`\ntests: ${r.numPassedTests} passed, ${r.numFailedTests} failed`);

@@ -34,8 +34,3 @@ export class ConflictError extends AppError {
     super(409, code, message);
   }
 }
-export class ServiceUnavailableError extends AppError {
-  constructor(message = 'The database is not reachable; try again shortly.') {
-    super(503, 'db_unavailable', message);
-  }
-}

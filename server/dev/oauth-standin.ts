@@ -20,7 +20,8 @@ function pickerPage(query: URLSearchParams, error?: string): string {
 body{font-family:system-ui,sans-serif;background:#F6F4EF;color:#1D232B;margin:0;padding:2rem 1rem}
 main{max-width:28rem;margin:auto;background:#fff;border:1px solid #d8d3c8;border-radius:10px;padding:1.5rem}
 h1{font-size:1.2rem;margin:0 0 .25rem}p{color:#4a525c;font-size:.9rem}
-.grid{display:grid;gap:.5rem;margin:1rem 0}button{display:flex;justify-content:space-between;padding:.6rem .8rem;border:1px solid #c9c2b4;background:#fff;border-radius:6px;font-size:.95rem;cursor:pointer}
+.grid{display:grid;gap:.5rem;margin:1rem 0}
+button{display:flex;justify-content:space-between;padding:.6rem .8rem;border:1px solid #c9c2b4;background:#fff;border-radius:6px;font-size:.95rem;cursor:pointer}
 button:hover,button:focus{border-color:#B5532A;outline:2px solid #B5532A33}button span{color:#2F6F73}
 label{display:block;font-size:.9rem;margin-top:1rem}input[type=text]{width:100%;box-sizing:border-box;padding:.5rem;border:1px solid #c9c2b4;border-radius:6px;font-size:1rem;margin:.25rem 0}
 .go{background:#B5532A;color:#fff;border-color:#B5532A;justify-content:center;width:100%}.err{color:#B42318}</style></head>

@@ -1,13 +1,12 @@
 import { Router } from 'express';
 import type { SessionDto } from '@shared/schemas/user.ts';
-import type { User } from '../models/user.model.ts';
 import { presentSessionUser } from '../presenters/user.presenter.ts';
 import { csrfTokenFor } from '../middleware/csrf.ts';
 
 export function sessionRoutes(): Router {
   const r = Router();
   r.get('/api/session', async (req, res) => {
-    const user = req.user as User | undefined;
+    const user = req.user as Parameters<typeof presentSessionUser>[0] | undefined;
     const fresh = !req.session.csrfToken;
     const dto: SessionDto = { user: user ? presentSessionUser(user) : null, csrfToken: csrfTokenFor(req) };
     // Store a new token before handing it out: express-session would save only after the response

@@ -11,7 +11,7 @@ import { authorize } from '../policies/authorize.ts';
 import { ConflictError, NotFoundError, ValidationError } from '../errors.ts';
 import { presentAttachedPhoto } from '../presenters/photo.presenter.ts';
 import { altsFor, processAll, pruneAfterRemoval, storeThenRecord, storedColumns } from './photo-files.ts';
-import { loadListingForView } from './listing.service.ts';
+import { loadListingForView } from './listing-access.ts';
 
 /** Most photos one part or one listing carries (common practice for listings, no source). */
 export const MAX_ATTACHED_PHOTOS = 12;

@@ -1,4 +1,4 @@
-import { Op, type Transaction, type WhereOptions } from 'sequelize';
+import { Op, type WhereOptions } from 'sequelize';
 import { can, type Actor } from '@shared/policies.ts';
 import {
   priceLabel,
@@ -17,6 +17,7 @@ import { NotFoundError, ValidationError } from '../errors.ts';
 import { recordAudit } from './audit.service.ts';
 import { containsPattern } from '../db/like-pattern.ts';
 import { photosBySubject } from './attached-photos.service.ts';
+import { loadListingForView } from './listing-access.ts';
 
 /** Listings with their parts, owners and photos in a fixed number of queries. */
 async function presentListings(actor: Actor | null, rows: Listing[]): Promise<ListingDto[]> {
@@ -90,14 +91,6 @@ export async function listListings(actor: Actor | null, q: ListListingsQuery): P
     offset: (q.page - 1) * q.pageSize,
   });
   return { items: await presentListings(actor, rows), total: count, page: q.page, pageSize: q.pageSize };
-}
-
-/** A listing the actor may see: hidden ones only for the owner and moderators. */
-export async function loadListingForView(actor: Actor | null, listingId: number, transaction?: Transaction): Promise<Listing> {
-  const listing = await Listing.findByPk(listingId, transaction ? { transaction, lock: transaction.LOCK.UPDATE } : {});
-  if (!listing || (listing.hiddenAt && !can(actor, 'listing.view-hidden', { ownerId: listing.ownerId })))
-    throw new NotFoundError('No such listing.');
-  return listing;
 }
 
 export async function getListing(actor: Actor | null, listingId: number): Promise<ListingDto> {

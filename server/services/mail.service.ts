@@ -46,6 +46,11 @@ export function welcomeMail(login: string, appUrl: string): Omit<OutgoingMail, '
     'Piezo drivers run at tens to hundreds of volts and piezo elements hold charge: follow local',
     'electrical codes and qualified practice whenever you build or measure.',
   ].join('\n');
-  const html = `<p>Hello ${escapeHtml(login)},</p><p>Welcome to Scanwright. You can now write build logs, record calibration runs for your actuators, propose parts for the registry and post listings on the exchange.</p><p><a href="${escapeHtml(appUrl)}">Open Scanwright</a></p><p style="color:#8a5a00">Piezo drivers run at tens to hundreds of volts and piezo elements hold charge: follow local electrical codes and qualified practice whenever you build or measure.</p>`;
+  const html =
+    `<p>Hello ${escapeHtml(login)},</p><p>Welcome to Scanwright. You can now write build logs, record calibration ` +
+    `runs for your actuators, propose parts for the registry and post listings on the exchange.</p><p><a ` +
+    `href="${escapeHtml(appUrl)}">Open Scanwright</a></p><p style="color:#8a5a00">Piezo drivers run at tens to ` +
+    `hundreds of volts and piezo elements hold charge: follow local electrical codes and qualified practice ` +
+    `whenever you build or measure.</p>`;
   return { subject: 'Welcome to Scanwright', text, html };
 }

@@ -7,7 +7,7 @@ import { User } from '../models/user.model.ts';
 import { Message, MessageThread } from '../models/message.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { ConflictError, NotFoundError } from '../errors.ts';
-import { loadListingForView } from './listing.service.ts';
+import { loadListingForView } from './listing-access.ts';
 import { enqueueMail, kickOutbox } from './outbox.service.ts';
 import { decisionMail } from './review-mails.ts';
 

@@ -8,7 +8,7 @@ import { authorize } from '../policies/authorize.ts';
 import { getRun } from './run.service.ts';
 import { getPart } from './part.service.ts';
 import { loadBuildForView } from './build-access.ts';
-import { loadListingForView } from './listing.service.ts';
+import { loadListingForView } from './listing-access.ts';
 
 /** Each kind of target must exist and be visible to the reporter (404 otherwise). */
 const visibleTarget: Record<ReportTargetType, (actor: Actor, id: number) => Promise<unknown>> = {

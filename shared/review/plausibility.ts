@@ -24,8 +24,6 @@ export const UNIT_SLIPS = [
   { factor: 2, label: '2', cause: 'peak amplitude against peak-to-peak' },
   { factor: 2 * Math.SQRT2, label: '2√2', cause: 'rms against peak-to-peak of a sine' },
 ] as const;
-/** Every slip factor and its inverse. */
-export const UNIT_SLIP_FACTORS = UNIT_SLIPS.flatMap((s) => [s.factor, 1 / s.factor]);
 /** How close (relative) the ratio must be to a factor; ±12 % keeps the bands of 2 and 2√2 apart [practice]. */
 export const UNIT_SLIP_TOLERANCE = 0.12;
 

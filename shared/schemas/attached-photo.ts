@@ -31,4 +31,3 @@ export type UpdateAttachedPhotoInput = z.infer<typeof updateAttachedPhotoInput>;
 
 /** `PUT …/photos/order`: every photo id of the part or listing, once each, in the new order. */
 export const reorderAttachedPhotosInput = z.strictObject({ photoIds: z.array(z.number().int().positive()).min(1).max(100) });
-export type ReorderAttachedPhotosInput = z.infer<typeof reorderAttachedPhotosInput>;

@@ -14,8 +14,6 @@ export const benderStiffnessInput = z.strictObject({
   thicknessM: positive,
   youngsModulusPa: positive,
 });
-/** Parsed BenderStiffnessInput as the calculator receives it. */
-export type BenderStiffnessInput = z.infer<typeof benderStiffnessInput>;
 
 /** Actuator against a spring: free gain, the actuator's stiffness (entered or from a bender), the spring's rate and preload. */
 export const loadedGainInput = z.strictObject({
@@ -25,8 +23,6 @@ export const loadedGainInput = z.strictObject({
   springRateNPerM: nonNegative,
   preloadForceN: nonNegative.optional(),
 });
-/** Parsed LoadedGainInput as the calculator receives it. */
-export type LoadedGainInput = z.infer<typeof loadedGainInput>;
 
 /** Quartered piezo tube: geometry in mm, relative permittivity, Young's modulus and density (SI). */
 export const tubeInput = z.strictObject({
@@ -37,8 +33,6 @@ export const tubeInput = z.strictObject({
   youngsModulusPa: positive,
   densityKgPerM3: positive,
 });
-/** Parsed TubeInput as the calculator receives it. */
-export type TubeInput = z.infer<typeof tubeInput>;
 
 /** A sine drive into a piezo, an optional triangle raster, and the amplifier's limits (SI). */
 export const driveLimitsInput = z.strictObject({
@@ -51,8 +45,6 @@ export const driveLimitsInput = z.strictObject({
   slewRateVPerS: positive.optional(),
   outputResistanceOhm: positive.optional(),
 });
-/** Parsed DriveLimitsInput as the calculator receives it. */
-export type DriveLimitsInput = z.infer<typeof driveLimitsInput>;
 
 /** Noise at the tip: actuator gain, and any of amplifier noise, DAC quantisation and cantilever thermal motion (SI). */
 export const noiseFloorInput = z.strictObject({
@@ -65,5 +57,3 @@ export const noiseFloorInput = z.strictObject({
   cantileverStiffnessNPerM: positive.optional(),
   temperatureK: positive.optional(),
 });
-/** Parsed NoiseFloorInput as the calculator receives it. */
-export type NoiseFloorInput = z.infer<typeof noiseFloorInput>;

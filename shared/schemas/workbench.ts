@@ -29,8 +29,6 @@ export const fitInput = z.strictObject({
   displacementUnit: z.enum(displacementUnits),
   model: z.enum(['intercept', 'origin']).default('intercept'),
 });
-/** Parsed (defaults applied) FitInput as the service and the form receive it. */
-export type FitInput = z.infer<typeof fitInput>;
 
 /** What the fit API returns (a subset of CalibrationFit; r2 and the %FS figures may be null). */
 export interface FitResultDto {
@@ -53,8 +51,6 @@ export const peakToPeakInput = z.strictObject({
   displacementResolutionNm: nonNegative,
   voltsResolutionV: nonNegative.optional(),
 });
-/** Parsed (defaults applied) PeakToPeakInput as the service and the form receive it. */
-export type PeakToPeakInput = z.infer<typeof peakToPeakInput>;
 
 /** Step-and-hold record for the creep fit. */
 export const creepInput = z.strictObject({
@@ -65,8 +61,6 @@ export const creepInput = z.strictObject({
   /** A later time (s) to project the creep to, besides 10, 100 and 1000 s. */
   projectToS: positive.optional(),
 });
-/** Parsed (defaults applied) CreepInput as the service and the form receive it. */
-export type CreepInput = z.infer<typeof creepInput>;
 
 /** A built-in material key or the user's own d constants (pm/V). */
 export const materialInput = z.union([
@@ -125,8 +119,6 @@ export const mixingInput = z.strictObject({
   limits: driveLimits,
   target: z.strictObject({ xNm: z.number(), yNm: z.number() }).optional(),
 });
-/** Parsed (defaults applied) MixingInput as the service and the form receive it. */
-export type MixingInput = z.infer<typeof mixingInput>;
 
 /** Grid of drive pairs and measured tip positions for fitting G. */
 export const gainMatrixFitInput = z.strictObject({
@@ -140,8 +132,6 @@ export const gainMatrixFitInput = z.strictObject({
     .default('affine')
     .transform((m) => (m === 'origin' ? 'origin' : 'affine') as 'affine' | 'origin'),
 });
-/** Parsed (defaults applied) GainMatrixFitInput as the service and the form receive it. */
-export type GainMatrixFitInput = z.infer<typeof gainMatrixFitInput>;
 
 /** Scan planner: drive chain, raster, and optional resonance and wanted step. */
 export const scanPlanInput = z.strictObject({
@@ -156,8 +146,6 @@ export const scanPlanInput = z.strictObject({
   resonanceHz: positive.optional(),
   wantedStepNm: positive.optional(),
 });
-/** Parsed (defaults applied) ScanPlanInput as the service and the form receive it. */
-export type ScanPlanInput = z.infer<typeof scanPlanInput>;
 
 /** Cantilever resonance (SI units) with an optional tip mass. */
 export const resonanceInput = z.strictObject({
@@ -168,8 +156,6 @@ export const resonanceInput = z.strictObject({
   densityKgPerM3: positive,
   tipMassKg: nonNegative.optional(),
 });
-/** Parsed (defaults applied) ResonanceInput as the service and the form receive it. */
-export type ResonanceInput = z.infer<typeof resonanceInput>;
 
 /** Sine drive into a capacitive load (SI units). */
 export const driveCurrentInput = z.strictObject({
@@ -177,16 +163,12 @@ export const driveCurrentInput = z.strictObject({
   amplitudeV: positive,
   frequencyHz: nonNegative,
 });
-/** Parsed (defaults applied) DriveCurrentInput as the service and the form receive it. */
-export type DriveCurrentInput = z.infer<typeof driveCurrentInput>;
 
 /** Tunnelling sensitivity from a barrier height in eV, and optionally the barrier for a wanted ratio per Å. */
 export const tunnellingInput = z.strictObject({
   workFunctionEv: positive.max(20),
   wantedRatio: z.number().gt(1, 'Must be more than 1.').optional(),
 });
-/** Parsed (defaults applied) TunnellingInput as the service and the form receive it. */
-export type TunnellingInput = z.infer<typeof tunnellingInput>;
 
 /** Unit converter: displacements, voltages or gains, within one kind. */
 export const unitConversionInput = z
@@ -199,5 +181,3 @@ export const unitConversionInput = z
     message: 'Both units must measure the same thing (a displacement, a voltage or a gain).',
     path: ['to'],
   });
-/** Parsed (defaults applied) UnitConversionInput as the service and the form receive it. */
-export type UnitConversionInput = z.infer<typeof unitConversionInput>;

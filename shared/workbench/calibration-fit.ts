@@ -33,9 +33,6 @@ export interface RecordedCalibrationPoint {
   sweep?: Sweep;
 }
 
-/** Sweep codes in column form (0 none, 1 up, 2 down), for callers that hold typed arrays. */
-export const sweepCodes = { none: 0, up: 1, down: 2 } as const;
-
 /** Column form of a run, the zero-copy input for large records (e.g. parsed CSV). */
 export interface CalibrationColumns {
   voltsV: Float64Array;

@@ -35,7 +35,8 @@ const servers: RunningServer[] = [];
 async function startServer(): Promise<RunningServer> {
   const [port, oauth, smtp, inbox] = [await freePort(), await freePort(), await freePort(), await freePort()];
   // Real GitHub, a real mail relay and admin handles stay out: the stand-ins are part of the test.
-  const { GITHUB_CLIENT_ID, GITHUB_CLIENT_SECRET, SMTP_URL, ADMIN_LOGINS, ...inherited } = process.env;
+  const kept = ['GITHUB_CLIENT_ID', 'GITHUB_CLIENT_SECRET', 'SMTP_URL', 'ADMIN_LOGINS'];
+  const inherited = Object.fromEntries(Object.entries(process.env).filter(([k]) => !kept.includes(k)));
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     cwd: process.cwd(),
     stdio: ['ignore', 'pipe', 'pipe'],

@@ -194,8 +194,10 @@ function apply(body: Json, muts: Mutation[]): string {
     const obj = node as Record<string | number, Json>;
     const last = m.path[m.path.length - 1]!;
     if (m.kind === 'replace') obj[last] = m.value;
-    else if (m.kind === 'delete') Array.isArray(obj) ? obj.splice(Number(last), 1) : delete obj[last];
-    else if (!Array.isArray(obj))
+    else if (m.kind === 'delete') {
+      if (Array.isArray(obj)) obj.splice(Number(last), 1);
+      else delete obj[last];
+    } else if (!Array.isArray(obj))
       Object.defineProperty(obj, m.key, { value: m.value, enumerable: true, writable: true, configurable: true });
     if (m.kind === 'replace' && m.path.length === 0) root = m.value;
   }

@@ -40,7 +40,6 @@ describe('journey: hostile Markdown renders inert under the Content-Security-Pol
     });
     const { page } = browser;
     const dialogs: string[] = [];
-    const violations: string[] = [];
     page.on('dialog', async (d) => {
       dialogs.push(d.message());
       await d.dismiss();

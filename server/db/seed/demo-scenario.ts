@@ -176,7 +176,12 @@ export const DEMO_BUILDS: DemoBuild[] = [
     status: 'published',
     daysAgo: 60,
     summary: 'Optical-lever force microscope with two cartridge bimorphs as the XY scanner and a quartered tube for Z.',
-    body: '## Why\n\nI wanted to see the grooves of a blank CD without borrowing lab time.\n\n## Mechanics\n\n- Base: a 20 mm slate offcut on squash balls\n- Scanner: two **cartridge bimorph bars** meeting at 90°, driven as an anti-phase pair\n- Z: a quartered tube, all quadrants together\n\n| part | role |\n|---|---|\n| cartridge bar × 2 | XY |\n| quartered tube | Z |\n\n## Status\n\n- [x] optical lever aligned\n- [x] first force curve\n- [ ] first image that is not drift\n',
+    body:
+      '## Why\n\nI wanted to see the grooves of a blank CD without borrowing lab time.\n\n## Mechanics\n\n- Base: a ' +
+      '20 mm slate offcut on squash balls\n- Scanner: two **cartridge bimorph bars** meeting at 90°, driven as an ' +
+      'anti-phase pair\n- Z: a quartered tube, all quadrants together\n\n| part | role |\n|---|---|\n| cartridge bar ' +
+      '× 2 | XY |\n| quartered tube | Z |\n\n## Status\n\n- [x] optical lever aligned\n- [x] first force curve\n- [ ] ' +
+      'first image that is not drift\n',
     entries: [
       {
         daysAgo: 55,
@@ -232,7 +237,10 @@ export const DEMO_BUILDS: DemoBuild[] = [
     status: 'published',
     daysAgo: 120,
     summary: 'A classic tube-scanner STM with a buzzer-disc coarse approach, imaging graphite steps.',
-    body: '## Head\n\nQuartered tube for XY, inner electrode for Z. Coarse approach with a **buzzer disc** pushing a fine screw.\n\n## Electronics\n\nTransimpedance 100 MΩ, 16-bit DACs, HV stage for the tube.\n\n> High voltage on the tube electrodes: the whole head sits in an earthed tin and the amplifier has bleeder resistors.\n',
+    body:
+      '## Head\n\nQuartered tube for XY, inner electrode for Z. Coarse approach with a **buzzer disc** pushing a fine ' +
+      'screw.\n\n## Electronics\n\nTransimpedance 100 MΩ, 16-bit DACs, HV stage for the tube.\n\n> High voltage on ' +
+      'the tube electrodes: the whole head sits in an earthed tin and the amplifier has bleeder resistors.\n',
     entries: [
       { daysAgo: 110, title: 'Tube quadrants tested', body: 'All four quadrants within 3 % capacitance of each other.' },
       {

@@ -27,7 +27,10 @@ function gammaWarnings(gamma: number): ResultWarning[] {
     return [
       {
         code: 'gamma_negative',
-        message: `γ = ${g} is negative: the reading falls after the step. Creep of a piezo adds to the step; check the sign of the readings, drift of the indicator, or whether the record starts after the step settled. The projections below are not meaningful.`,
+        message:
+          `γ = ${g} is negative: the reading falls after the step. Creep of a piezo adds to the step; check the sign of ` +
+          `the readings, drift of the indicator, or whether the record starts after the step settled. The projections ` +
+          `below are not meaningful.`,
       },
     ];
   }
@@ -35,7 +38,9 @@ function gammaWarnings(gamma: number): ResultWarning[] {
     return [
       {
         code: 'gamma_atypical',
-        message: `γ = ${g} is far outside the 0.01–0.02 typical of open-loop PZT (vendor catalogues, recalled value, not yet checked against a source): check the record before trusting the projections.`,
+        message:
+          `γ = ${g} is far outside the 0.01–0.02 typical of open-loop PZT (vendor catalogues, recalled value, not yet ` +
+          `checked against a source): check the record before trusting the projections.`,
       },
     ];
   }

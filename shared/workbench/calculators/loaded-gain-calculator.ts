@@ -24,7 +24,9 @@ export const loadedGainCalculator = defineCalculator({
     if (gainLossPct > STIFF_SPRING_LOSS_PCT) {
       warnings.push({
         code: 'spring_stiffer_than_actuator',
-        message: `The spring is stiffer than the actuator: it takes ${Number(gainLossPct.toPrecision(2))} % of the free gain. Use a lighter indicator or a stiffer actuator; small errors in either stiffness now move the result a lot.`,
+        message:
+          `The spring is stiffer than the actuator: it takes ${Number(gainLossPct.toPrecision(2))} % of the free gain. ` +
+          `Use a lighter indicator or a stiffer actuator; small errors in either stiffness now move the result a lot.`,
       });
     }
     return {

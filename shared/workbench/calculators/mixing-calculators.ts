@@ -20,7 +20,9 @@ export const mixingCalculator = defineCalculator({
     if (sinAngle < POORLY_CONDITIONED_SIN) {
       warnings.push({
         code: 'nearly_parallel',
-        message: `The two actuators move nearly along one line (|sin| of the angle ${Number(sinAngle.toPrecision(2))}): small gain errors become large position errors, and the region is a thin sliver.`,
+        message:
+          `The two actuators move nearly along one line (|sin| of the angle ${Number(sinAngle.toPrecision(2))}): small ` +
+          `gain errors become large position errors, and the region is a thin sliver.`,
       });
     }
     // A drive limit bounds whatever waveform is sent: judged as a peak.

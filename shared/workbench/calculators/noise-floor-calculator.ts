@@ -71,7 +71,9 @@ export const noiseFloorCalculator = defineCalculator({
       // Bennett's Δ/√12 assumes the signal crosses many steps; a held code is a fixed error instead.
       warnings.push({
         code: 'quantisation_at_rest',
-        message: `The DAC sets the floor. LSB/√12 holds while the drive crosses many codes; a tip held at one code does not jitter but sits up to half a step (${Number((dac.lsbNm / 2).toPrecision(2))} nm) off.`,
+        message:
+          `The DAC sets the floor. LSB/√12 holds while the drive crosses many codes; a tip held at one code does not ` +
+          `jitter but sits up to half a step (${Number((dac.lsbNm / 2).toPrecision(2))} nm) off.`,
       });
     }
     // The DAC span through the amplifier is the largest voltage the actuator can be driven to.

@@ -22,7 +22,9 @@ export const peakToPeakCalculator = defineCalculator({
     if (rx > 0 && input.displacementPpNm < FEW_DIVISIONS * rx) {
       warnings.push({
         code: 'few_divisions',
-        message: `The swing is only ${divisions(input.displacementPpNm / rx)} divisions of the indicator: below about two divisions the figure carries little information. Drive harder or read a finer indicator.`,
+        message:
+          `The swing is only ${divisions(input.displacementPpNm / rx)} divisions of the indicator: below about two ` +
+          `divisions the figure carries little information. Drive harder or read a finer indicator.`,
       });
     }
     if (rv > 0 && input.voltsPpV < FEW_DIVISIONS * rv) {

@@ -20,7 +20,13 @@ export function PhotoDropZone({ onFiles }: { onFiles: (files: FileList) => void 
       className={`flex flex-col items-center gap-2 rounded-lg border-2 border-dashed p-6 text-center ${over ? 'border-copper bg-copper/5' : 'border-rule bg-white'}`}
     >
       <p className="text-sm text-ink-soft">Drag photos here, or</p>
-      <label className="cursor-pointer rounded-md border border-teal bg-white px-3 py-1.5 text-sm font-medium text-teal-dark hover:bg-teal/10 has-[input:focus-visible]:outline-2 has-[input:focus-visible]:outline-offset-2 has-[input:focus-visible]:outline-copper">
+      <label
+        className={
+          'cursor-pointer rounded-md border border-teal bg-white px-3 py-1.5 text-sm font-medium text-teal-dark ' +
+          'hover:bg-teal/10 has-[input:focus-visible]:outline-2 has-[input:focus-visible]:outline-offset-2 ' +
+          'has-[input:focus-visible]:outline-copper'
+        }
+      >
         Choose photos
         <input
           type="file"

@@ -15,7 +15,10 @@ export function Button({ variant = 'primary', className = '', ...props }: Button
     <button
       type="button"
       {...props}
-      className={`inline-flex items-center justify-center gap-2 rounded-md border px-3 py-1.5 text-sm font-medium transition-colors disabled:cursor-not-allowed disabled:opacity-50 ${styles[variant]} ${className}`}
+      className={
+        `inline-flex items-center justify-center gap-2 rounded-md border px-3 py-1.5 text-sm font-medium ` +
+        `transition-colors disabled:cursor-not-allowed disabled:opacity-50 ${styles[variant]} ${className}`
+      }
     />
   );
 }

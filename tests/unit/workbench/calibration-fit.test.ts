@@ -125,23 +125,27 @@ describe('fitCalibration worked examples [calc]', () => {
     { volts: 2, displacementNm: 3 },
   ];
 
-  it('when three points are fitted, then gain, SE, CI, R², span and nonlinearity match hand values (one sweep: nonlinearity is max |residual| ÷ span [S: ISA-51.1 terms — memory for the clause])', () => {
-    const fit = fitCalibration(points, 'intercept', { includeResiduals: true });
-    expect(fit.gainNmPerV).toBeCloseTo(1.5, 14);
-    expect(fit.interceptNm).toBeCloseTo(-1 / 6, 14);
-    expect(fit.residualStdNm).toBeCloseTo(Math.sqrt(1 / 6), 14);
-    expect(fit.gainStdErrNmPerV).toBeCloseTo(Math.sqrt(1 / 6) / Math.SQRT2, 14);
-    const half = tCritical95(1) * (Math.sqrt(1 / 6) / Math.SQRT2);
-    expect(fit.gainCi95NmPerV[0]).toBeCloseTo(1.5 - half, 12);
-    expect(fit.gainCi95NmPerV[1]).toBeCloseTo(1.5 + half, 12);
-    expect(fit.r2).toBeCloseTo(27 / 28, 14);
-    expect(fit.spanNm).toBeCloseTo(3, 14);
-    expect(fit.nonlinearityPctFs).toBeCloseTo((1 / 3 / 3) * 100, 12);
-    expect(fit.residualsNm?.map((r) => Number(r.toFixed(12)))).toEqual([0.166666666667, -0.333333333333, 0.166666666667]);
-    expect(fit.hysteresisPctFs).toBeNull();
-    expect(fit.lineNm[0]).toBeCloseTo(-1 / 6, 14);
-    expect(fit.lineNm[1]).toBeCloseTo(3 - 1 / 6, 14);
-  });
+  it(
+    'when three points are fitted, then gain, SE, CI, R², span and nonlinearity match hand values (one sweep: ' +
+      'nonlinearity is max |residual| ÷ span [S: ISA-51.1 terms — memory for the clause])',
+    () => {
+      const fit = fitCalibration(points, 'intercept', { includeResiduals: true });
+      expect(fit.gainNmPerV).toBeCloseTo(1.5, 14);
+      expect(fit.interceptNm).toBeCloseTo(-1 / 6, 14);
+      expect(fit.residualStdNm).toBeCloseTo(Math.sqrt(1 / 6), 14);
+      expect(fit.gainStdErrNmPerV).toBeCloseTo(Math.sqrt(1 / 6) / Math.SQRT2, 14);
+      const half = tCritical95(1) * (Math.sqrt(1 / 6) / Math.SQRT2);
+      expect(fit.gainCi95NmPerV[0]).toBeCloseTo(1.5 - half, 12);
+      expect(fit.gainCi95NmPerV[1]).toBeCloseTo(1.5 + half, 12);
+      expect(fit.r2).toBeCloseTo(27 / 28, 14);
+      expect(fit.spanNm).toBeCloseTo(3, 14);
+      expect(fit.nonlinearityPctFs).toBeCloseTo((1 / 3 / 3) * 100, 12);
+      expect(fit.residualsNm?.map((r) => Number(r.toFixed(12)))).toEqual([0.166666666667, -0.333333333333, 0.166666666667]);
+      expect(fit.hysteresisPctFs).toBeNull();
+      expect(fit.lineNm[0]).toBeCloseTo(-1 / 6, 14);
+      expect(fit.lineNm[1]).toBeCloseTo(3 - 1 / 6, 14);
+    },
+  );
 
   it('when up and down sweeps share voltages, then hysteresis is the largest gap of sweep means over the span [practice]', () => {
     // up: (0,0) (1,10) (1,12) (2,20) (3,30 up only); down: (2,20) (1,15) (0,2)
@@ -161,16 +165,20 @@ describe('fitCalibration worked examples [calc]', () => {
     expect(fit.spanNm).toBeCloseTo(Math.abs(fit.gainNmPerV) * 3, 12);
   });
 
-  it('when a perfectly linear part shows a symmetric loop, then nonlinearity is 0 while hysteresis is the loop width [S: ISA-51.1 independent linearity on the calibration curve — memory for the clause]', () => {
-    // Up reads 10·V + 2·sin(π·V/4) on 0…4 V, down 10·V − 2·sin(π·V/4): the average is exactly 10·V.
-    const loop: CalibrationPoint[] = [];
-    for (const v of [0, 1, 2, 3, 4]) loop.push({ volts: v, displacementNm: 10 * v + 2 * Math.sin((Math.PI * v) / 4), sweep: 'up' });
-    for (const v of [4, 3, 2, 1, 0]) loop.push({ volts: v, displacementNm: 10 * v - 2 * Math.sin((Math.PI * v) / 4), sweep: 'down' });
-    const fit = fitCalibration(loop, 'intercept');
-    expect(fit.gainNmPerV).toBeCloseTo(10, 12);
-    expect(fit.nonlinearityPctFs).toBeCloseTo(0, 10);
-    expect(fit.hysteresisPctFs).toBeCloseTo((4 / 40) * 100, 10); // widest gap 2·2 at 2 V over a 40 nm span [calc]
-  });
+  it(
+    'when a perfectly linear part shows a symmetric loop, then nonlinearity is 0 while hysteresis is the loop width ' +
+      '[S: ISA-51.1 independent linearity on the calibration curve — memory for the clause]',
+    () => {
+      // Up reads 10·V + 2·sin(π·V/4) on 0…4 V, down 10·V − 2·sin(π·V/4): the average is exactly 10·V.
+      const loop: CalibrationPoint[] = [];
+      for (const v of [0, 1, 2, 3, 4]) loop.push({ volts: v, displacementNm: 10 * v + 2 * Math.sin((Math.PI * v) / 4), sweep: 'up' });
+      for (const v of [4, 3, 2, 1, 0]) loop.push({ volts: v, displacementNm: 10 * v - 2 * Math.sin((Math.PI * v) / 4), sweep: 'down' });
+      const fit = fitCalibration(loop, 'intercept');
+      expect(fit.gainNmPerV).toBeCloseTo(10, 12);
+      expect(fit.nonlinearityPctFs).toBeCloseTo(0, 10);
+      expect(fit.hysteresisPctFs).toBeCloseTo((4 / 40) * 100, 10); // widest gap 2·2 at 2 V over a 40 nm span [calc]
+    },
+  );
 
   it('when the calibration curve bows, then nonlinearity is the largest gap between the sweep-averaged curve and the line over the span [calc]', () => {
     // Up (0,0) (1,12) (2,20); down (2,20) (1,8) (0,0): the curve is (0,0) (1,10) (2,20), the line through all

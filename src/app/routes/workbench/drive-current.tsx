@@ -45,7 +45,11 @@ export function DriveCurrentPage() {
                     <Quantity q={formatSi(r.peakCurrentA, 'A')} />
                   </Headline>
                 }
-                basis="A sine of peak V at f into a capacitance C: I_pk = 2π·f·C·V, I_rms = I_pk/√2, reactive power V_rms·I_rms; charge Q = C·V and energy ½CV² (calculated from the formula). Cautions at the IEC 61010-1 levels: 30 V rms, 42.4 V peak, 60 V DC, 45 µC."
+                basis={
+                  'A sine of peak V at f into a capacitance C: I_pk = 2π·f·C·V, I_rms = I_pk/√2, reactive power V_rms·I_rms; ' +
+                  'charge Q = C·V and energy ½CV² (calculated from the formula). Cautions at the IEC 61010-1 levels: 30 V rms, ' +
+                  '42.4 V peak, 60 V DC, 45 µC.'
+                }
               >
                 <ResultRow label="RMS current">
                   <Quantity q={formatSi(r.rmsCurrentA, 'A')} />

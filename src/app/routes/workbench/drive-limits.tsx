@@ -56,7 +56,10 @@ export function DriveLimitsPage() {
                     <Quantity q={formatSi(r.sinePeakCurrentA, 'A')} />
                   </Headline>
                 }
-                basis="Sine slew 2π·f·V, triangle slew 2·V_pp·f, current C·dV/dt, the ceilings those solved for f, and the corner 1/(2π·R·C) of a first-order low-pass: all calculated from the formulas."
+                basis={
+                  'Sine slew 2π·f·V, triangle slew 2·V_pp·f, current C·dV/dt, the ceilings those solved for f, and the corner ' +
+                  '1/(2π·R·C) of a first-order low-pass: all calculated from the formulas.'
+                }
               >
                 {r.rasterSlewRateVPerS !== null && (
                   <>

@@ -52,7 +52,10 @@ export function ExpectedGainPage() {
             {kind.fields.some((f) => f.unit === 'mm') && (
               <FieldGroup
                 legend="Geometry tolerances"
-                note="± how far each dimension may be off (a caliper reading, a datasheet tolerance); read as a rectangular spread and combined to first order (Source: GUM, JCGM 100:2008, 4.3.7 and 5.1.2)."
+                note={
+                  '± how far each dimension may be off (a caliper reading, a datasheet tolerance); read as a rectangular spread ' +
+                  'and combined to first order (Source: GUM, JCGM 100:2008, 4.3.7 and 5.1.2).'
+                }
               >
                 {kind.fields
                   .filter((f) => f.unit === 'mm')

@@ -109,7 +109,12 @@ export function LoadedGainPage() {
                     <span className="num">{formatSig(r.loadedGainNmPerV)}</span> nm/V
                   </Headline>
                 }
-                basis="ΔL ≈ ΔL₀·kₐ/(kₐ + kₛ): recalled formula, not yet checked against a source; it follows from the force balance kₐ(δ₀ − δ) = kₛ·δ of two springs in series (calculated). Bender stiffness k = E·w·t³/4L³ (Source: Timoshenko, Vibration Problems in Engineering), the layers taken as one material (common practice). Preload deflection F/kₐ (calculated)."
+                basis={
+                  'ΔL ≈ ΔL₀·kₐ/(kₐ + kₛ): recalled formula, not yet checked against a source; it follows from the force balance ' +
+                  'kₐ(δ₀ − δ) = kₛ·δ of two springs in series (calculated). Bender stiffness k = E·w·t³/4L³ (Source: Timoshenko, ' +
+                  'Vibration Problems in Engineering), the layers taken as one material (common practice). Preload deflection ' +
+                  'F/kₐ (calculated).'
+                }
               >
                 <ResultRow label="Free gain">
                   <Quantity q={{ value: formatSig(r.freeGainNmPerV), unit: 'nm/V' }} />

@@ -57,7 +57,11 @@ export function PeakToPeakPage() {
                     <Gain value={r.gainNmPerV} plusMinus={r.gainStdUncNmPerV} kind="std" />
                   </Headline>
                 }
-                basis="gain = Δx_pp / ΔV_pp (common practice); each reading rectangular within ± half a division, so the difference of two readings has u = r/√6, relative uncertainties in quadrature (Source: GUM, JCGM 100:2008, 4.3.7 and 5.1.2)."
+                basis={
+                  'gain = Δx_pp / ΔV_pp (common practice); each reading rectangular within ± half a division, so the difference ' +
+                  'of two readings has u = r/√6, relative uncertainties in quadrature (Source: GUM, JCGM 100:2008, 4.3.7 and ' +
+                  '5.1.2).'
+                }
               >
                 <ResultRow label="Relative uncertainty">
                   <Quantity q={{ value: formatSig(r.gainRelStdUnc * 100, 3), unit: '%' }} />

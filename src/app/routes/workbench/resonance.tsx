@@ -69,7 +69,12 @@ export function ResonancePage() {
                     <Quantity q={formatSi(r.movingModeHz, 'Hz')} />
                   </Headline>
                 }
-                basis="Euler–Bernoulli cantilever, f₁ = (1.8751²/2π)·(t/L²)·√(E/12ρ) ≈ 0.1615·(t/L²)·√(E/ρ) (Source: Rao, Mechanical Vibrations; Timoshenko, Vibration Problems in Engineering); k = E·w·t³/4L³; a tip mass through the effective mass 0.2427·m (calculated from the formula). The line-rate ceilings follow the mode that moves: with the tip mass when one is given."
+                basis={
+                  'Euler–Bernoulli cantilever, f₁ = (1.8751²/2π)·(t/L²)·√(E/12ρ) ≈ 0.1615·(t/L²)·√(E/ρ) (Source: Rao, Mechanical ' +
+                  'Vibrations; Timoshenko, Vibration Problems in Engineering); k = E·w·t³/4L³; a tip mass through the effective ' +
+                  'mass 0.2427·m (calculated from the formula). The line-rate ceilings follow the mode that moves: with the tip ' +
+                  'mass when one is given.'
+                }
               >
                 {r.withTipMassHz !== null && (
                   <ResultRow label="Bare beam, without the tip mass">

@@ -60,7 +60,13 @@ export function TubePage() {
                     <Quantity q={formatSi(r.quadrantCapacitanceF, 'F')} />
                   </Headline>
                 }
-                basis="Coaxial capacitance C = 2π·ε0·εr·L/ln(OD/ID): recalled formula, not yet checked against a source; a quadrant is a quarter of it, the gaps between electrodes neglected (calculated). Bending: Euler–Bernoulli cantilever f₁ = (1.8751²/2π)·√(EI/ρAL⁴) with I = π(OD⁴−ID⁴)/64, A = π(OD²−ID²)/4 (Source: Rao, Mechanical Vibrations; Timoshenko). Axial: f = (1/4L)·√(E/ρ) for a rod clamped at one end (Source: Rao, Mechanical Vibrations; equation number recalled, not yet checked)."
+                basis={
+                  'Coaxial capacitance C = 2π·ε0·εr·L/ln(OD/ID): recalled formula, not yet checked against a source; a quadrant ' +
+                  'is a quarter of it, the gaps between electrodes neglected (calculated). Bending: Euler–Bernoulli cantilever f₁ ' +
+                  '= (1.8751²/2π)·√(EI/ρAL⁴) with I = π(OD⁴−ID⁴)/64, A = π(OD²−ID²)/4 (Source: Rao, Mechanical Vibrations; ' +
+                  'Timoshenko). Axial: f = (1/4L)·√(E/ρ) for a rod clamped at one end (Source: Rao, Mechanical Vibrations; ' +
+                  'equation number recalled, not yet checked).'
+                }
               >
                 <ResultRow label="Whole tube (all quadrants together)">
                   <Quantity q={formatSi(r.tubeCapacitanceF, 'F')} />

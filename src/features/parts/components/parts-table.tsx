@@ -19,7 +19,11 @@ function HeaderCell({ header }: { header: Header<PartListItemDto, unknown> }) {
     <th
       scope="col"
       aria-sort={ariaSort(header)}
-      className={`whitespace-nowrap border-b-2 border-ink/70 bg-paper-deep px-3 py-2 text-xs font-semibold uppercase tracking-wide text-ink-soft ${numeric ? 'text-right' : 'text-left'} ${header.column.id === 'name' ? STICKY : ''}`}
+      className={
+        `whitespace-nowrap border-b-2 border-ink/70 bg-paper-deep px-3 py-2 text-xs font-semibold uppercase ` +
+        `tracking-wide text-ink-soft ${numeric ? 'text-right' : 'text-left'} ` +
+        `${header.column.id === 'name' ? STICKY : ''}`
+      }
     >
       {header.column.getCanSort() ? (
         <button

@@ -161,7 +161,12 @@ export function FormRadios<T extends FieldValues, O>({
               className="peer absolute inset-0 h-full w-full cursor-pointer opacity-0"
               {...form.register(name)}
             />
-            <span className="block rounded px-3 py-1 text-sm peer-checked:bg-ink peer-checked:text-paper peer-focus-visible:outline-2 peer-focus-visible:outline-offset-1 peer-focus-visible:outline-copper">
+            <span
+              className={
+                'block rounded px-3 py-1 text-sm peer-checked:bg-ink peer-checked:text-paper peer-focus-visible:outline-2 ' +
+                'peer-focus-visible:outline-offset-1 peer-focus-visible:outline-copper'
+              }
+            >
               {o.label}
             </span>
           </label>

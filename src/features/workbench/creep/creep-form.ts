@@ -1,4 +1,3 @@
-import type { UseFormReturn } from 'react-hook-form';
 import { z } from 'zod';
 import { creepInput } from '@shared/schemas/workbench.ts';
 import { creepCalculator } from '@shared/workbench/calculators/creep-calculator.ts';
@@ -15,9 +14,6 @@ export const creepForm = z.object({
 
 /** Field values of the creep form. */
 export type CreepFormValues = z.input<typeof creepForm>;
-
-/** The creep page's react-hook-form handle. */
-export type CreepFormApi = UseFormReturn<CreepFormValues, unknown, z.output<typeof creepForm>>;
 
 /** An illustrative step-and-hold record (made-up numbers, γ about 0.015). */
 export const exampleRecord = 'time_s,displacement\n0.1,1000\n0.3,1007\n1,1015\n3,1022\n10,1031\n30,1037\n100,1046\n300,1052\n';

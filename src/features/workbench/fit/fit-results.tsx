@@ -23,7 +23,12 @@ export function FitResults({ fit }: { fit: FitCalculation }) {
           <Gain value={fit.gainNmPerV} plusMinus={half} kind="ci95" />
         </Headline>
       }
-      basis="Least squares with NIST StRD conventions (R² uncentred through the origin). Nonlinearity: independent linearity on the calibration curve, the largest gap between the up-and-down average at a voltage and the line, ÷ span (Source: ISA-51.1 terms, recalled clause). Hysteresis: widest gap between the up and down sweeps at shared voltages ÷ span (common practice)."
+      basis={
+        'Least squares with NIST StRD conventions (R² uncentred through the origin). Nonlinearity: independent ' +
+        'linearity on the calibration curve, the largest gap between the up-and-down average at a voltage and the line, ' +
+        '÷ span (Source: ISA-51.1 terms, recalled clause). Hysteresis: widest gap between the up and down sweeps at ' +
+        'shared voltages ÷ span (common practice).'
+      }
     >
       <ResultRow label="95 % interval">
         <span className="whitespace-nowrap">

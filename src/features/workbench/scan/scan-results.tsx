@@ -18,7 +18,11 @@ export function ScanResults({ r, plan }: { r: ScanResult; plan: ScanPlan }) {
             <Quantity q={formatLengthNm(r.lsbNm)} />
           </Headline>
         }
-        basis="LSB = actuator gain × amplifier gain × DAC span / 2ᴺ, bits N ≥ log₂(range/step) (common practice); ceilings f₀/10 for sine-like scans (common practice) and f₀/100 for sharp triangles (Source: Bae & Granick, Rev. Sci. Instrum. 71, 3955, 2000)."
+        basis={
+          'LSB = actuator gain × amplifier gain × DAC span / 2ᴺ, bits N ≥ log₂(range/step) (common practice); ceilings ' +
+          'f₀/10 for sine-like scans (common practice) and f₀/100 for sharp triangles (Source: Bae & Granick, Rev. Sci. ' +
+          'Instrum. 71, 3955, 2000).'
+        }
       >
         <ResultRow label="Amplifier output span">
           <Quantity q={formatSi(r.outputSpanV, 'V', 4, ['m', 'k'])} />

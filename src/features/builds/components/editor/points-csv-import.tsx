@@ -38,7 +38,13 @@ export function PointsCsvImport({ idPrefix, onPoints }: { idPrefix: string; onPo
         <Button variant="secondary" disabled={!text.trim()} onClick={() => use(text, 'pasted CSV')}>
           Use pasted points
         </Button>
-        <label className="cursor-pointer rounded-md border border-teal bg-white px-3 py-1.5 text-sm font-medium text-teal-dark hover:bg-teal/10 has-[input:focus-visible]:outline-2 has-[input:focus-visible]:outline-offset-2 has-[input:focus-visible]:outline-copper">
+        <label
+          className={
+            'cursor-pointer rounded-md border border-teal bg-white px-3 py-1.5 text-sm font-medium text-teal-dark ' +
+            'hover:bg-teal/10 has-[input:focus-visible]:outline-2 has-[input:focus-visible]:outline-offset-2 ' +
+            'has-[input:focus-visible]:outline-copper'
+          }
+        >
           Upload a CSV file
           <input
             type="file"

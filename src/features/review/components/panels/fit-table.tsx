@@ -1,6 +1,6 @@
 import { formatPlusMinus } from '@shared/format/measured-number.ts';
 import type { FitResultDto } from '@shared/schemas/workbench.ts';
-import { halfWidth, sig, withUncertainty } from '../format.ts';
+import { halfWidth, sig } from '../format.ts';
 
 /** The server's fit of a run as a table of measured numbers with units. */
 export function FitTable({ fit }: { fit: FitResultDto }) {

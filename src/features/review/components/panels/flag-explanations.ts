@@ -23,6 +23,9 @@ export const flagExplanations: Record<FlagCode, string> = {
   'large-hysteresis': `Open-loop piezo ceramic shows about 10–15 % of span at full drive; above ${LARGE_HYSTERESIS_PCT} % a loose mount, indicator backlash or creep between readings is likely.`,
   outlier: `The gain’s modified z-score against this part’s accepted runs is beyond ${ROBUST_Z_LIMIT} (Iglewicz–Hoaglin). Check that the part is the one named and how it is driven.`,
   'unit-slip':
-    'The ratio to the part median is close to 25.4, 1000, 10, 2 or 2√2 (or their inverses): readings in µm, mil, Å or mV entered as nm or V, a peak amplitude taken for peak-to-peak, or an rms reading for peak-to-peak.',
-  'expected-mismatch': `Measured ÷ expected from geometry lies outside ${EXPECTED_RATIO_BAND[0]}–${EXPECTED_RATIO_BAND[1]}. Free-gain formulas overestimate clamped parts, but rarely by more than ×4; check geometry, material and drive.`,
+    'The ratio to the part median is close to 25.4, 1000, 10, 2 or 2√2 (or their inverses): readings in µm, mil, Å ' +
+    'or mV entered as nm or V, a peak amplitude taken for peak-to-peak, or an rms reading for peak-to-peak.',
+  'expected-mismatch':
+    `Measured ÷ expected from geometry lies outside ${EXPECTED_RATIO_BAND[0]}–${EXPECTED_RATIO_BAND[1]}. Free-gain ` +
+    `formulas overestimate clamped parts, but rarely by more than ×4; check geometry, material and drive.`,
 };
