@@ -4,7 +4,8 @@ import { spawn, spawnSync } from 'node:child_process';
 import { join } from 'node:path';
 import { ensureDebianPackages, ensureNodeModules } from './lib/setup.mjs';
 import { initDataDir, startServer, ensureDatabase, stopServer } from './lib/mariadb.mjs';
-import { DATA_DIR, localSecrets, clientBuildIsStale } from './lib/paths.mjs';
+import { DATA_DIR, localSecrets, clientBuildIsStale, serverBuildIsStale } from './lib/paths.mjs';
+import { buildServer } from './build-server.mjs';
 
 ensureDebianPackages();
 ensureNodeModules();
@@ -55,7 +56,12 @@ try {
   });
   ensureDatabase(dbDir, { database: env.DB_NAME, user: env.DB_USER, password: env.DB_PASSWORD });
 
-  const prepare = spawnSync(process.execPath, ['--import', 'tsx', 'server/cli/prepare.ts'], { stdio: 'inherit', env });
+  // Production runs the compiled server (dist/server, esbuild); tsx is for development and tests.
+  if (serverBuildIsStale()) {
+    console.log('Building the server …');
+    await buildServer();
+  }
+  const prepare = spawnSync(process.execPath, ['--enable-source-maps', 'dist/server/prepare.mjs'], { stdio: 'inherit', env });
   if (prepare.status !== 0) throw new Error('migrations or seeding failed');
 
   if (clientBuildIsStale()) {
@@ -64,7 +70,7 @@ try {
     if (b.status !== 0) throw new Error('client build failed');
   }
 
-  app = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], { stdio: 'inherit', env });
+  app = spawn(process.execPath, ['--enable-source-maps', 'dist/server/index.mjs'], { stdio: 'inherit', env });
   app.on('exit', (code) => {
     if (!stopping) shutdown(code ?? 1);
   });

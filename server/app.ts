@@ -30,8 +30,10 @@ import { workbenchRoutes } from './routes/workbench.routes.ts';
 import { photoRoutes } from './routes/photo.routes.ts';
 import { buildRoutes } from './routes/build.routes.ts';
 import { actuatorRoutes } from './routes/actuator.routes.ts';
+import { runRoutes } from './routes/run.routes.ts';
 import { partRoutes } from './routes/part.routes.ts';
 import { reviewRoutes } from './routes/review.routes.ts';
+import { accountRoutes } from './routes/account.routes.ts';
 import { exchangeRoutes } from './routes/exchange.routes.ts';
 
 export interface AppHandle {
@@ -159,7 +161,9 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(photoRoutes(config));
   app.use(buildRoutes(config));
   app.use(actuatorRoutes());
+  app.use(runRoutes());
   app.use(reviewRoutes(config));
+  app.use(accountRoutes());
   app.use(exchangeRoutes(config));
   app.use(['/api', '/auth'], apiNotFound);
 

@@ -2,31 +2,39 @@ import { z } from 'zod';
 
 const bool = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
 
-const envSchema = z.object({
-  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
-  HOST: z.string().default('127.0.0.1'),
-  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
-  PUBLIC_URL: z.string().url().optional(),
-  DB_HOST: z.string().default('127.0.0.1'),
-  DB_PORT: z.coerce.number().int().default(3307),
-  DB_NAME: z.string().default('scanwright'),
-  DB_USER: z.string().default('scanwright'),
-  DB_PASSWORD: z.string().default(''),
-  DB_POOL_MAX: z.coerce.number().int().min(1).default(10),
-  SESSION_SECRET: z.string().min(16).default('dev-only-session-secret-change-me'),
-  GITHUB_CLIENT_ID: z.string().optional(),
-  GITHUB_CLIENT_SECRET: z.string().optional(),
-  OAUTH_STANDIN_PORT: z.coerce.number().int().default(3001),
-  ADMIN_LOGINS: z.string().default(''),
-  SMTP_URL: z.string().optional(),
-  SMTP_CATCHER_PORT: z.coerce.number().int().default(2525),
-  INBOX_PORT: z.coerce.number().int().default(3025),
-  MAIL_FROM: z.string().default('Scanwright <no-reply@scanwright.local>'),
-  UPLOADS_DIR: z.string().default('uploads'),
-  CLIENT_DIST: z.string().default('dist/client'),
-  RATE_LIMITS: bool.default(true),
-  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
-});
+/** The development default; production refuses it (npm start generates a real one in .data/secrets.json). */
+export const DEFAULT_SESSION_SECRET = 'dev-only-session-secret-change-me';
+
+const envSchema = z
+  .object({
+    NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+    HOST: z.string().default('127.0.0.1'),
+    PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+    PUBLIC_URL: z.string().url().optional(),
+    DB_HOST: z.string().default('127.0.0.1'),
+    DB_PORT: z.coerce.number().int().default(3307),
+    DB_NAME: z.string().default('scanwright'),
+    DB_USER: z.string().default('scanwright'),
+    DB_PASSWORD: z.string().default(''),
+    DB_POOL_MAX: z.coerce.number().int().min(1).default(10),
+    SESSION_SECRET: z.string().min(16).default(DEFAULT_SESSION_SECRET),
+    GITHUB_CLIENT_ID: z.string().optional(),
+    GITHUB_CLIENT_SECRET: z.string().optional(),
+    OAUTH_STANDIN_PORT: z.coerce.number().int().default(3001),
+    ADMIN_LOGINS: z.string().default(''),
+    SMTP_URL: z.string().optional(),
+    SMTP_CATCHER_PORT: z.coerce.number().int().default(2525),
+    INBOX_PORT: z.coerce.number().int().default(3025),
+    MAIL_FROM: z.string().default('Scanwright <no-reply@scanwright.local>'),
+    UPLOADS_DIR: z.string().default('uploads'),
+    CLIENT_DIST: z.string().default('dist/client'),
+    RATE_LIMITS: bool.default(true),
+    LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
+  })
+  .refine((e) => e.NODE_ENV !== 'production' || e.SESSION_SECRET !== DEFAULT_SESSION_SECRET, {
+    path: ['SESSION_SECRET'],
+    message: 'SESSION_SECRET must be set in production: the development default would let anyone forge a session cookie.',
+  });
 
 export type Env = z.infer<typeof envSchema>;
 

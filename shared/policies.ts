@@ -15,6 +15,8 @@ export interface Actor {
 export interface Resource {
   ownerId?: number | null;
   userId?: number;
+  /** The other party of a two-sided resource (a message thread's enquirer). */
+  participantId?: number;
 }
 
 type Rule = (actor: Actor, resource?: Resource) => boolean;
@@ -28,6 +30,8 @@ export const hasRole =
     RANK[actor.role] >= RANK[role];
 /** The actor owns the resource. */
 export const isOwner: Rule = (actor, resource) => resource?.ownerId != null && resource.ownerId === actor.id;
+/** The actor is the resource's other party. */
+export const isParticipant: Rule = (actor, resource) => resource?.participantId != null && resource.participantId === actor.id;
 /** The resource is the actor's own account. */
 export const isSelf: Rule = (actor, resource) => resource?.userId === actor.id;
 export const and =
@@ -63,6 +67,8 @@ const rules = {
   'listing.view-hidden': or(isOwner, hasRole('moderator')),
   /** Anyone signed in may write to a listing's owner, except the owner themself. */
   'listing.message': and(active, not(isOwner)),
+  /** A conversation about a listing is seen by its two parties only: the listing's owner and the maker who wrote first. */
+  'message.thread.view': or(isOwner, isParticipant),
   'user.list': and(active, hasRole('admin')),
   /** Admins change others' roles, never their own (so the last admin cannot lock everyone out). */
   'user.set-role': and(active, hasRole('admin'), not(isSelf)),

@@ -22,6 +22,7 @@ export function benchConfig(database: string): Config {
   return loadConfig({
     ...process.env,
     NODE_ENV: 'production',
+    SESSION_SECRET: process.env.SESSION_SECRET ?? 'bench-only-session-secret-0123456789',
     LOG_LEVEL: 'silent',
     RATE_LIMITS: 'false',
     DB_HOST: '127.0.0.1',

@@ -31,3 +31,11 @@ export function clientBuildIsStale() {
   const sources = ['src', 'shared', 'index.html', 'vite.config.ts', 'package-lock.json'].filter((p) => existsSync(p));
   return Math.max(...sources.map(newestMtime)) > statSync(built).mtimeMs;
 }
+
+/** True when dist/server is missing or older than any server or shared source. */
+export function serverBuildIsStale() {
+  const built = join(ROOT, 'dist/server/index.mjs');
+  if (!existsSync(built)) return true;
+  const sources = ['server', 'shared', 'package-lock.json', 'tsconfig.json'].filter((p) => existsSync(p));
+  return Math.max(...sources.map(newestMtime)) > statSync(built).mtimeMs;
+}

@@ -3,12 +3,12 @@
 import type { Request, RequestHandler } from 'express';
 import multer from 'multer';
 import { z } from 'zod';
+import { altText } from '@shared/schemas/alt-text.ts';
 import { AppError, ValidationError } from '../errors.ts';
 import { MAX_FILE_BYTES, MAX_FILES_PER_UPLOAD } from '../services/photo-storage.ts';
 
 const FIELD = 'photos';
 
-const altText = z.string().trim().min(1, 'Describe the photo for people who cannot see it.').max(300);
 /** The `alt` field: once per file (in order) or once for all. */
 export const altTexts = z.preprocess(
   (v) => (typeof v === 'string' ? [v] : v),

@@ -1,13 +1,10 @@
-import type { RequestHandler } from 'express';
+import type { Request } from 'express';
 import type { z } from 'zod';
 
-type Part = 'body' | 'query' | 'params';
+/** The parts of a request a shared schema can describe. */
+export type RequestPart = 'body' | 'query' | 'params';
 
-/** Parse one part of the request with a shared zod schema; the parsed value lands in res.locals[part]. */
-export function validate<S extends z.ZodType>(schema: S, part: Part = 'body'): RequestHandler {
-  return (req, res, next) => {
-    const source = part === 'body' ? (req.body ?? {}) : req[part];
-    res.locals[part] = schema.parse(source);
-    next();
-  };
+/** Parse one part of the request with a shared zod schema; the ZodError it throws becomes 400 `validation_failed`. */
+export function parseRequestPart<S extends z.ZodType>(schema: S, req: Request, part: RequestPart): z.output<S> {
+  return schema.parse(part === 'body' ? (req.body ?? {}) : req[part]);
 }

@@ -1,4 +1,7 @@
-import type { PartChoiceDto, PartSummaryDto } from '@shared/schemas/part.ts';
+import type { PartChoiceDto, PartDetailDto, PartSummaryDto } from '@shared/schemas/part.ts';
+import type { AttachedPhotoDto } from '@shared/schemas/attached-photo.ts';
+import { priceLabel, type PriceKind } from '@shared/schemas/listing.ts';
+import { expectedGainForPart } from '@shared/workbench/part-expected-gain.ts';
 import type { Part } from '../models/part.model.ts';
 
 /** The columns a part summary needs: a Part instance or a plain row from the registry search. */
@@ -65,5 +68,75 @@ export function presentPartSummary(p: PartRow): PartSummaryDto {
       wallMm: p.wallMm,
       layers: p.layers,
     },
+  };
+}
+
+/** An accepted run of a part with its build's title and maker, as the part page lists it. */
+export interface PartRunRow {
+  id: number;
+  buildId: number;
+  buildTitle: string | null;
+  maker: string | null;
+  method: string;
+  gainNmPerV: number;
+  gainCi95LoNmPerV: number | null;
+  gainCi95HiNmPerV: number | null;
+  hysteresisPctFs: number | null;
+  createdAt: string;
+}
+
+/** An open or reserved, unhidden listing of a part with its owner's login. */
+export interface PartListingRow {
+  id: number;
+  kind: 'offering' | 'seeking';
+  quantity: number;
+  condition: string;
+  priceKind: string;
+  priceAmount: number | null;
+  currency: string | null;
+  region: string;
+  owner: string | null;
+}
+
+/** What a part page shows beside the part's own row, loaded by the part service. */
+export interface PartPageRows {
+  proposedBy: string | null;
+  runs: PartRunRow[];
+  listings: PartListingRow[];
+  photos: AttachedPhotoDto[];
+}
+
+/** The part page; `editPhotos` is the caller's authorization answer for this actor. */
+export function presentPartDetail(part: Part, rows: PartPageRows, editPhotos: boolean): PartDetailDto {
+  return {
+    ...presentPartSummary(part),
+    notes: part.notes,
+    proposedBy: rows.proposedBy,
+    mergedIntoId: part.mergedIntoId,
+    createdAt: part.createdAt.toISOString(),
+    expectedGain: expectedGainForPart(part, 'single'),
+    runs: rows.runs.map((r) => ({
+      id: r.id,
+      buildId: r.buildId,
+      buildTitle: r.buildTitle ?? '',
+      maker: r.maker ?? 'unknown',
+      method: r.method,
+      gainNmPerV: Math.abs(r.gainNmPerV),
+      gainCi95NmPerV: [r.gainCi95LoNmPerV, r.gainCi95HiNmPerV],
+      hysteresisPctFs: r.hysteresisPctFs,
+      createdAt: r.createdAt,
+    })),
+    listings: rows.listings.map((l) => ({
+      id: l.id,
+      kind: l.kind,
+      title: `${l.kind === 'offering' ? 'Offering' : 'Seeking'} ${l.quantity} × ${part.name}`,
+      quantity: l.quantity,
+      condition: l.condition,
+      priceLabel: priceLabel(l.priceKind as PriceKind, l.priceAmount, l.currency),
+      region: l.region,
+      owner: l.owner ?? 'unknown',
+    })),
+    photos: rows.photos,
+    abilities: { editPhotos },
   };
 }

@@ -1,43 +1,34 @@
 import { Router } from 'express';
 import { buildIdParams } from '@shared/schemas/build.ts';
 import { actuatorIdParams, createActuatorInput, updateActuatorInput } from '@shared/schemas/actuator.ts';
-import { createRunInput, runIdParams } from '@shared/schemas/run.ts';
-import { validate } from '../middleware/validate.ts';
 import { requireUser } from '../middleware/auth.ts';
-import { actorOf } from '../middleware/actor.ts';
 import { createActuator, deleteActuator, updateActuator } from '../services/actuator.service.ts';
-import { createRun, deleteRun, getRun } from '../services/run.service.ts';
+import { route } from './route.ts';
 
-/** Actuators of a build and their calibration runs. */
+/** The actuators of a build (their calibration runs are in run.routes.ts). */
 export function actuatorRoutes(): Router {
   const r = Router();
-  const actuator = validate(actuatorIdParams, 'params');
-  const run = validate(runIdParams, 'params');
   r.post(
     '/api/builds/:buildId/actuators',
     requireUser,
-    validate(buildIdParams, 'params'),
-    validate(createActuatorInput),
-    async (req, res) => {
-      res.status(201).json(await createActuator(actorOf(req), res.locals.params.buildId, res.locals.body));
-    },
+    route({ params: buildIdParams, body: createActuatorInput }, async ({ actor, params, body, res }) => {
+      res.status(201).json(await createActuator(actor, params.buildId, body));
+    }),
   );
-  r.patch('/api/actuators/:actuatorId', requireUser, actuator, validate(updateActuatorInput), async (req, res) => {
-    res.json(await updateActuator(actorOf(req), res.locals.params.actuatorId, res.locals.body));
-  });
-  r.delete('/api/actuators/:actuatorId', requireUser, actuator, async (req, res) => {
-    await deleteActuator(actorOf(req), res.locals.params.actuatorId);
-    res.status(204).end();
-  });
-  r.post('/api/actuators/:actuatorId/runs', requireUser, actuator, validate(createRunInput), async (req, res) => {
-    res.status(201).json(await createRun(actorOf(req), res.locals.params.actuatorId, res.locals.body));
-  });
-  r.get('/api/runs/:runId', run, async (req, res) => {
-    res.json(await getRun(actorOf(req), res.locals.params.runId));
-  });
-  r.delete('/api/runs/:runId', requireUser, run, async (req, res) => {
-    await deleteRun(actorOf(req), res.locals.params.runId);
-    res.status(204).end();
-  });
+  r.patch(
+    '/api/actuators/:actuatorId',
+    requireUser,
+    route({ params: actuatorIdParams, body: updateActuatorInput }, async ({ actor, params, body, res }) => {
+      res.json(await updateActuator(actor, params.actuatorId, body));
+    }),
+  );
+  r.delete(
+    '/api/actuators/:actuatorId',
+    requireUser,
+    route({ params: actuatorIdParams }, async ({ actor, params, res }) => {
+      await deleteActuator(actor, params.actuatorId);
+      res.status(204).end();
+    }),
+  );
   return r;
 }

@@ -8,9 +8,7 @@ import {
   updateAttachedPhotoInput,
 } from '@shared/schemas/attached-photo.ts';
 import { partIdParams } from '@shared/schemas/part.ts';
-import { validate } from '../middleware/validate.ts';
 import { requireUser } from '../middleware/auth.ts';
-import { actorOf } from '../middleware/actor.ts';
 import { attachPhotosFields, receivePhotos, uploadedBuffers } from '../middleware/receive-photos.ts';
 import {
   assertCanEditPhotos,
@@ -20,62 +18,60 @@ import {
   updateAttachedPhoto,
   type PhotoSubject,
 } from '../services/attached-photos.service.ts';
+import { guard, route } from './route.ts';
 
-const ROUTES = {
+// Each subject's params, renamed to one shape so the handlers below serve parts and listings alike.
+const SUBJECTS: Record<
+  PhotoSubject,
+  { base: string; idParams: z.ZodType<{ subjectId: number }>; photoParams: z.ZodType<{ subjectId: number; photoId: number }> }
+> = {
   part: {
     base: '/api/parts/:partId/photos',
-    idParams: partIdParams,
-    photoParams: partPhotoParams,
-    id: (p: Record<string, number>) => p.partId!,
+    idParams: partIdParams.transform((p) => ({ subjectId: p.partId })),
+    photoParams: partPhotoParams.transform((p) => ({ subjectId: p.partId, photoId: p.photoId })),
   },
   listing: {
     base: '/api/listings/:listingId/photos',
-    idParams: listingIdParams,
-    photoParams: listingPhotoParams,
-    id: (p: Record<string, number>) => p.listingId!,
+    idParams: listingIdParams.transform((p) => ({ subjectId: p.listingId })),
+    photoParams: listingPhotoParams.transform((p) => ({ subjectId: p.listingId, photoId: p.photoId })),
   },
-} satisfies Record<PhotoSubject, { base: string; idParams: z.ZodType; photoParams: z.ZodType; id: (p: Record<string, number>) => number }>;
+};
 
 /** `POST …/photos` (multipart), `PUT …/photos/order`, `PATCH` and `DELETE …/photos/:photoId` for parts or listings. */
 export function photoRoutesFor(subject: PhotoSubject, uploadsDir: string): Router {
   const r = Router();
-  const route = ROUTES[subject];
+  const { base, idParams, photoParams } = SUBJECTS[subject];
   r.post(
-    route.base,
+    base,
     requireUser,
-    validate(route.idParams, 'params'),
-    async (req, res, next) => {
-      await assertCanEditPhotos(actorOf(req), subject, route.id(res.locals.params));
-      next();
-    },
+    guard({ params: idParams }, ({ actor, params }) => assertCanEditPhotos(actor, subject, params.subjectId)),
     receivePhotos(),
-    validate(attachPhotosFields),
-    async (req, res) => {
-      const photos = await attachPhotos(
-        actorOf(req),
-        subject,
-        route.id(res.locals.params),
-        { alt: res.locals.body.alt, files: uploadedBuffers(req) },
-        uploadsDir,
-      );
+    route({ params: idParams, body: attachPhotosFields }, async ({ actor, params, body, req, res }) => {
+      const photos = await attachPhotos(actor, subject, params.subjectId, { alt: body.alt, files: uploadedBuffers(req) }, uploadsDir);
       res.status(201).json({ photos });
-    },
+    }),
   );
-  r.put(`${route.base}/order`, requireUser, validate(route.idParams, 'params'), validate(reorderAttachedPhotosInput), async (req, res) => {
-    res.json({ photos: await reorderAttachedPhotos(actorOf(req), subject, route.id(res.locals.params), res.locals.body.photoIds) });
-  });
-  r.patch(
-    `${route.base}/:photoId`,
+  r.put(
+    `${base}/order`,
     requireUser,
-    validate(route.photoParams, 'params'),
-    validate(updateAttachedPhotoInput),
-    async (req, res) => {
-      res.json(await updateAttachedPhoto(actorOf(req), subject, route.id(res.locals.params), res.locals.params.photoId, res.locals.body));
-    },
+    route({ params: idParams, body: reorderAttachedPhotosInput }, async ({ actor, params, body, res }) => {
+      res.json({ photos: await reorderAttachedPhotos(actor, subject, params.subjectId, body.photoIds) });
+    }),
   );
-  r.delete(`${route.base}/:photoId`, requireUser, validate(route.photoParams, 'params'), async (req, res) => {
-    await removeAttachedPhoto(actorOf(req), subject, route.id(res.locals.params), res.locals.params.photoId, uploadsDir);
-    res.status(204).end();
-  });
+  r.patch(
+    `${base}/:photoId`,
+    requireUser,
+    route({ params: photoParams, body: updateAttachedPhotoInput }, async ({ actor, params, body, res }) => {
+      res.json(await updateAttachedPhoto(actor, subject, params.subjectId, params.photoId, body));
+    }),
+  );
+  r.delete(
+    `${base}/:photoId`,
+    requireUser,
+    route({ params: photoParams }, async ({ actor, params, res }) => {
+      await removeAttachedPhoto(actor, subject, params.subjectId, params.photoId, uploadsDir);
+      res.status(204).end();
+    }),
+  );
   return r;
 }

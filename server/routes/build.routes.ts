@@ -9,9 +9,7 @@ import {
   updateEntryInput,
 } from '@shared/schemas/build.ts';
 import type { Config } from '../config.ts';
-import { validate } from '../middleware/validate.ts';
 import { requireUser } from '../middleware/auth.ts';
-import { actorOf } from '../middleware/actor.ts';
 import {
   createBuild,
   deleteBuild,
@@ -22,44 +20,81 @@ import {
   updateBuild,
 } from '../services/build.service.ts';
 import { createEntry, deleteEntry, updateEntry } from '../services/entry.service.ts';
+import { route } from './route.ts';
 
 /** Builds and their log entries. */
 export function buildRoutes(config: Config): Router {
   const r = Router();
-  const id = validate(buildIdParams, 'params');
-  r.get('/api/builds', validate(listBuildsQuery, 'query'), async (_req, res) => {
-    res.json(await listPublishedBuilds(res.locals.query));
-  });
-  r.get('/api/builds/mine', requireUser, async (req, res) => {
-    res.json(await listMyBuilds(actorOf(req)));
-  });
-  r.post('/api/builds', requireUser, validate(createBuildInput), async (req, res) => {
-    res.status(201).json(await createBuild(actorOf(req), res.locals.body));
-  });
-  r.get('/api/builds/:buildId', id, async (req, res) => {
-    res.json(await getBuild(actorOf(req), res.locals.params.buildId));
-  });
-  r.patch('/api/builds/:buildId', requireUser, id, validate(updateBuildInput), async (req, res) => {
-    res.json(await updateBuild(actorOf(req), res.locals.params.buildId, res.locals.body));
-  });
-  r.delete('/api/builds/:buildId', requireUser, id, async (req, res) => {
-    await deleteBuild(actorOf(req), res.locals.params.buildId, config.uploadsDir);
-    res.status(204).end();
-  });
-  r.post('/api/builds/:buildId/submit', requireUser, id, async (req, res) => {
-    res.json(await submitBuild(actorOf(req), res.locals.params.buildId));
-  });
+  r.get(
+    '/api/builds',
+    route({ query: listBuildsQuery }, async ({ query, res }) => {
+      res.json(await listPublishedBuilds(query));
+    }),
+  );
+  r.get(
+    '/api/builds/mine',
+    requireUser,
+    route({}, async ({ actor, res }) => {
+      res.json(await listMyBuilds(actor));
+    }),
+  );
+  r.post(
+    '/api/builds',
+    requireUser,
+    route({ body: createBuildInput }, async ({ actor, body, res }) => {
+      res.status(201).json(await createBuild(actor, body));
+    }),
+  );
+  r.get(
+    '/api/builds/:buildId',
+    route({ params: buildIdParams }, async ({ actor, params, res }) => {
+      res.json(await getBuild(actor, params.buildId));
+    }),
+  );
+  r.patch(
+    '/api/builds/:buildId',
+    requireUser,
+    route({ params: buildIdParams, body: updateBuildInput }, async ({ actor, params, body, res }) => {
+      res.json(await updateBuild(actor, params.buildId, body));
+    }),
+  );
+  r.delete(
+    '/api/builds/:buildId',
+    requireUser,
+    route({ params: buildIdParams }, async ({ actor, params, res }) => {
+      await deleteBuild(actor, params.buildId, config.uploadsDir);
+      res.status(204).end();
+    }),
+  );
+  r.post(
+    '/api/builds/:buildId/submit',
+    requireUser,
+    route({ params: buildIdParams }, async ({ actor, params, res }) => {
+      res.json(await submitBuild(actor, params.buildId));
+    }),
+  );
 
-  r.post('/api/builds/:buildId/entries', requireUser, id, validate(createEntryInput), async (req, res) => {
-    res.status(201).json(await createEntry(actorOf(req), res.locals.params.buildId, res.locals.body));
-  });
-  const entry = validate(entryParams, 'params');
-  r.patch('/api/builds/:buildId/entries/:entryId', requireUser, entry, validate(updateEntryInput), async (req, res) => {
-    res.json(await updateEntry(actorOf(req), res.locals.params.buildId, res.locals.params.entryId, res.locals.body));
-  });
-  r.delete('/api/builds/:buildId/entries/:entryId', requireUser, entry, async (req, res) => {
-    await deleteEntry(actorOf(req), res.locals.params.buildId, res.locals.params.entryId);
-    res.status(204).end();
-  });
+  r.post(
+    '/api/builds/:buildId/entries',
+    requireUser,
+    route({ params: buildIdParams, body: createEntryInput }, async ({ actor, params, body, res }) => {
+      res.status(201).json(await createEntry(actor, params.buildId, body));
+    }),
+  );
+  r.patch(
+    '/api/builds/:buildId/entries/:entryId',
+    requireUser,
+    route({ params: entryParams, body: updateEntryInput }, async ({ actor, params, body, res }) => {
+      res.json(await updateEntry(actor, params.buildId, params.entryId, body));
+    }),
+  );
+  r.delete(
+    '/api/builds/:buildId/entries/:entryId',
+    requireUser,
+    route({ params: entryParams }, async ({ actor, params, res }) => {
+      await deleteEntry(actor, params.buildId, params.entryId);
+      res.status(204).end();
+    }),
+  );
   return r;
 }

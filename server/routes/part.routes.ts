@@ -2,12 +2,11 @@ import { Router } from 'express';
 import type { Config } from '../config.ts';
 import Papa from 'papaparse';
 import { listPartsQuery, mergePartInput, partIdParams, proposePartInput, type PartListItemDto } from '@shared/schemas/part.ts';
-import { validate } from '../middleware/validate.ts';
 import { requireUser } from '../middleware/auth.ts';
-import { actorOf } from '../middleware/actor.ts';
 import { exportParts, gainHistogram, getPart, listParts, proposePart } from '../services/part.service.ts';
 import { mergeParts } from '../services/part-merge.service.ts';
 import { photoRoutesFor } from './attached-photo.routes.ts';
+import { route } from './route.ts';
 
 const CSV_COLUMNS: Array<keyof PartListItemDto> = [
   'id',
@@ -43,33 +42,50 @@ const CSV_HEADERS = [
 /** The parts registry: search (paged, or exported as CSV/JSON), histogram, detail, proposals, photos and merges. */
 export function partRoutes(config: Config): Router {
   const r = Router();
-  r.get('/api/parts', validate(listPartsQuery, 'query'), async (req, res) => {
-    const q = res.locals.query;
-    const format =
-      q.format ?? (req.accepts(['application/json', 'text/csv']) === 'text/csv' && !req.accepts('application/json') ? 'csv' : undefined);
-    if (!format) return void res.json(await listParts(q));
-    const rows = await exportParts(q);
-    const stamp = new Date().toISOString().slice(0, 10);
-    res.attachment(`scanwright-parts-${stamp}.${format}`);
-    if (format === 'json') return void res.json(rows);
-    const csv = Papa.unparse(
-      { fields: CSV_HEADERS, data: rows.map((p) => CSV_COLUMNS.map((c) => p[c] as unknown)) },
-      { escapeFormulae: true },
-    );
-    res.type('text/csv').send(csv);
-  });
-  r.get('/api/parts/histogram', async (_req, res) => {
-    res.json(await gainHistogram());
-  });
-  r.post('/api/parts', requireUser, validate(proposePartInput), async (req, res) => {
-    res.status(201).json(await proposePart(actorOf(req), res.locals.body));
-  });
-  r.get('/api/parts/:partId', validate(partIdParams, 'params'), async (req, res) => {
-    res.json(await getPart(actorOf(req), res.locals.params.partId));
-  });
-  r.post('/api/parts/:partId/merge', requireUser, validate(partIdParams, 'params'), validate(mergePartInput), async (req, res) => {
-    res.json(await mergeParts(actorOf(req), res.locals.params.partId, res.locals.body));
-  });
+  r.get(
+    '/api/parts',
+    route({ query: listPartsQuery }, async ({ query, req, res }) => {
+      const format =
+        query.format ??
+        (req.accepts(['application/json', 'text/csv']) === 'text/csv' && !req.accepts('application/json') ? 'csv' : undefined);
+      if (!format) return void res.json(await listParts(query));
+      const rows = await exportParts(query);
+      const stamp = new Date().toISOString().slice(0, 10);
+      res.attachment(`scanwright-parts-${stamp}.${format}`);
+      if (format === 'json') return void res.json(rows);
+      const csv = Papa.unparse(
+        { fields: CSV_HEADERS, data: rows.map((p) => CSV_COLUMNS.map((c) => p[c] as unknown)) },
+        { escapeFormulae: true },
+      );
+      res.type('text/csv').send(csv);
+    }),
+  );
+  r.get(
+    '/api/parts/histogram',
+    route({}, async ({ res }) => {
+      res.json(await gainHistogram());
+    }),
+  );
+  r.post(
+    '/api/parts',
+    requireUser,
+    route({ body: proposePartInput }, async ({ actor, body, res }) => {
+      res.status(201).json(await proposePart(actor, body));
+    }),
+  );
+  r.get(
+    '/api/parts/:partId',
+    route({ params: partIdParams }, async ({ actor, params, res }) => {
+      res.json(await getPart(actor, params.partId));
+    }),
+  );
+  r.post(
+    '/api/parts/:partId/merge',
+    requireUser,
+    route({ params: partIdParams, body: mergePartInput }, async ({ actor, params, body, res }) => {
+      res.json(await mergeParts(actor, params.partId, body));
+    }),
+  );
   r.use(photoRoutesFor('part', config.uploadsDir));
   return r;
 }

@@ -1,8 +1,7 @@
 import { Op } from 'sequelize';
 import { can, type Actor } from '@shared/policies.ts';
-import type { BuildDto, BuildGainDto, BuildSummaryDto, LogEntryDto } from '@shared/schemas/build.ts';
+import type { BuildDto, BuildOwnerDto, BuildSummaryDto, PhotoDto } from '@shared/schemas/build.ts';
 import type { ActuatorDto } from '@shared/schemas/actuator.ts';
-import { expectedGainForPart } from '@shared/workbench/part-expected-gain.ts';
 import { Build } from '../models/build.model.ts';
 import { User } from '../models/user.model.ts';
 import { Photo } from '../models/photo.model.ts';
@@ -11,143 +10,116 @@ import { Actuator } from '../models/actuator.model.ts';
 import { Part } from '../models/part.model.ts';
 import { CalibrationRun } from '../models/calibration-run.model.ts';
 import { presentPhoto } from '../presenters/photo.presenter.ts';
-import { presentPartSummary } from '../presenters/part.presenter.ts';
-import { presentRun } from '../presenters/run.presenter.ts';
+import {
+  coverOf,
+  presentActuator,
+  presentBuildPage,
+  presentBuildSummary,
+  presentEntries,
+  presentGains,
+  type BuildCardExtras,
+  type BuildPageContent,
+} from '../presenters/build.presenter.ts';
+import { cachedPublicRead } from './public-read-cache.ts';
 
-const byId = <T extends { id: number }>(rows: T[]) => new Map(rows.map((r) => [r.id, r]));
+const PHOTO_COLUMNS = ['id', 'buildId', 'entryId', 'displayFile', 'thumbFile', 'width', 'height', 'alt', 'position'] as const;
+const photoOrder: Array<[string, 'ASC']> = [
+  ['position', 'ASC'],
+  ['id', 'ASC'],
+];
+const newestFirst: Array<[string, 'DESC']> = [
+  ['createdAt', 'DESC'],
+  ['id', 'DESC'],
+];
 
-/** The run a card shows for an actuator: its newest accepted run, else its newest run. */
-function headlineRun(runs: CalibrationRun[]): CalibrationRun | undefined {
-  return runs.find((r) => r.status === 'accepted') ?? runs[0];
+async function ownersById(ids: number[]): Promise<(id: number) => BuildOwnerDto> {
+  const users = await User.findAll({ where: { id: [...new Set(ids)] }, attributes: ['id', 'login', 'name'] });
+  const map = new Map(users.map((u) => [u.id, u]));
+  return (id) => ({ id, login: map.get(id)?.login ?? 'unknown', name: map.get(id)?.name ?? null });
 }
 
-/** Summaries for a page of builds in a fixed number of queries (no N+1). */
-export async function summarizeBuilds(builds: Build[]): Promise<BuildSummaryDto[]> {
-  if (builds.length === 0) return [];
+/** Owners, covers and headline gains of several builds: four queries whatever the number of builds. */
+async function loadCardExtras(builds: Build[]): Promise<Map<number, BuildCardExtras>> {
   const ids = builds.map((b) => b.id);
-  const [owners, photos, actuators, runs] = await Promise.all([
-    User.findAll({ where: { id: [...new Set(builds.map((b) => b.ownerId))] }, attributes: ['id', 'login', 'name'] }),
-    Photo.findAll({
-      where: { buildId: ids },
-      order: [
-        ['position', 'ASC'],
-        ['id', 'ASC'],
-      ],
-    }),
+  const [owner, photos, actuators, runs] = await Promise.all([
+    ownersById(builds.map((b) => b.ownerId)),
+    Photo.findAll({ where: { buildId: ids }, attributes: [...PHOTO_COLUMNS], order: photoOrder }),
     Actuator.findAll({
       where: { buildId: ids },
+      attributes: ['id', 'buildId', 'axis'],
       include: [{ model: Part, as: 'part', attributes: ['id', 'name'] }],
       order: [['id', 'ASC']],
     }),
     CalibrationRun.findAll({
       where: { buildId: ids, status: { [Op.ne]: 'rejected' } },
-      attributes: ['id', 'actuatorId', 'status', 'gainNmPerV', 'createdAt'],
-      order: [
-        ['createdAt', 'DESC'],
-        ['id', 'DESC'],
-      ],
+      attributes: ['id', 'actuatorId', 'buildId', 'status', 'gainNmPerV', 'createdAt'],
+      order: newestFirst,
     }),
   ]);
-  const ownerMap = byId(owners);
-  return builds.map((b) => {
-    const own = photos.filter((p) => p.buildId === b.id);
-    const cover = own.find((p) => p.id === b.coverPhotoId) ?? own[0] ?? null;
-    const gains: BuildGainDto[] = [];
-    for (const a of actuators.filter((x) => x.buildId === b.id)) {
-      const run = headlineRun(runs.filter((r) => r.actuatorId === a.id));
-      if (run)
-        gains.push({ actuatorId: a.id, axis: a.axis, partName: a.part?.name ?? '', gainNmPerV: run.gainNmPerV, runStatus: run.status });
-    }
-    const owner = ownerMap.get(b.ownerId);
-    return {
-      id: b.id,
-      title: b.title,
-      instrumentKind: b.instrumentKind,
-      summary: b.summary,
-      stage: b.stage,
-      status: b.status,
-      owner: { id: b.ownerId, login: owner?.login ?? 'unknown', name: owner?.name ?? null },
-      cover: cover ? presentPhoto(cover) : null,
-      gains,
-      editedSinceReview: b.editedSinceReview,
-      reviewNote: b.reviewNote,
-      createdAt: b.createdAt.toISOString(),
-      updatedAt: b.updatedAt.toISOString(),
-      publishedAt: b.publishedAt?.toISOString() ?? null,
-    };
-  });
+  return new Map(
+    builds.map((b) => [
+      b.id,
+      {
+        owner: owner(b.ownerId),
+        cover: coverOf(b, photos.filter((p) => p.buildId === b.id).map(presentPhoto)),
+        gains: presentGains(
+          actuators.filter((a) => a.buildId === b.id),
+          runs.filter((r) => r.buildId === b.id),
+        ),
+      },
+    ]),
+  );
+}
+
+/** Summaries for a page of builds in a fixed number of queries (no N+1), cached briefly (see public-read-cache). */
+export async function summarizeBuilds(builds: Build[]): Promise<BuildSummaryDto[]> {
+  if (builds.length === 0) return [];
+  const key = `build-cards:${builds.map((b) => `${b.id}.${b.ownerId}.${b.coverPhotoId ?? ''}`).join(',')}`;
+  const extras = await cachedPublicRead(Build.sequelize!, key, () => loadCardExtras(builds));
+  return builds.map((b) => presentBuildSummary(b, extras.get(b.id)!));
 }
 
 /** Actuators of a build with their parts, runs and expected gain. Rejected runs show only to those who may see unpublished work. */
 export async function loadActuators(buildId: number, includeRejected: boolean): Promise<ActuatorDto[]> {
-  const actuators = await Actuator.findAll({ where: { buildId }, include: [{ model: Part, as: 'part' }], order: [['id', 'ASC']] });
-  const runs = await CalibrationRun.findAll({
-    where: { buildId, ...(includeRejected ? {} : { status: { [Op.ne]: 'rejected' } }) },
-    order: [
-      ['createdAt', 'DESC'],
-      ['id', 'DESC'],
-    ],
-  });
-  return actuators.map((a) => {
-    const part = a.part!;
-    const expected = expectedGainForPart(part, a.drive, a.axis);
-    return {
-      id: a.id,
-      buildId: a.buildId,
-      label: a.label,
-      axis: a.axis,
-      drive: a.drive,
-      amplifier: a.amplifier,
-      maxVolts: a.maxVolts,
-      notes: a.notes,
-      part: presentPartSummary(part),
-      expectedGain: expected
-        ? { gainNmPerV: expected.gainNmPerV, lowNmPerV: expected.lowNmPerV, highNmPerV: expected.highNmPerV, basis: expected.basis }
-        : null,
-      runs: runs.filter((r) => r.actuatorId === a.id).map((r) => presentRun(r)),
-    };
-  });
+  const [actuators, runs] = await Promise.all([
+    Actuator.findAll({ where: { buildId }, include: [{ model: Part, as: 'part' }], order: [['id', 'ASC']] }),
+    CalibrationRun.findAll({ where: { buildId, ...(includeRejected ? {} : { status: { [Op.ne]: 'rejected' } }) }, order: newestFirst }),
+  ]);
+  return actuators.map((a) => presentActuator(a, a.part!, runs));
 }
 
-/** The whole build page: write-up, photos, entries with their photos, actuators with runs, and what the viewer may do. */
-export async function presentBuildDetail(actor: Actor | null, build: Build): Promise<BuildDto> {
-  const [summary] = await summarizeBuilds([build]);
-  const mayEdit = can(actor, 'build.edit', { ownerId: build.ownerId });
-  const [photos, entries, actuators] = await Promise.all([
-    Photo.findAll({
-      where: { buildId: build.id },
-      order: [
-        ['position', 'ASC'],
-        ['id', 'ASC'],
-      ],
-    }),
+/** Everything on a build page that does not depend on the viewer: five queries, however many actuators, runs or entries. */
+async function loadBuildPage(build: Build, includeRejected: boolean): Promise<BuildPageContent> {
+  const [owner, photoRows, entries, actuatorRows, runs] = await Promise.all([
+    ownersById([build.ownerId]),
+    Photo.findAll({ where: { buildId: build.id }, attributes: [...PHOTO_COLUMNS], order: photoOrder }),
     LogEntry.findAll({
       where: { buildId: build.id },
+      attributes: ['id', 'entryDate', 'title', 'body'],
       order: [
         ['entryDate', 'ASC'],
         ['id', 'ASC'],
       ],
     }),
-    loadActuators(build.id, can(actor, 'build.view-unpublished', { ownerId: build.ownerId })),
+    Actuator.findAll({ where: { buildId: build.id }, include: [{ model: Part, as: 'part' }], order: [['id', 'ASC']] }),
+    CalibrationRun.findAll({
+      where: { buildId: build.id, ...(includeRejected ? {} : { status: { [Op.ne]: 'rejected' } }) },
+      order: newestFirst,
+    }),
   ]);
-  const entryDtos: LogEntryDto[] = entries.map((e) => ({
-    id: e.id,
-    entryDate: e.entryDate,
-    title: e.title,
-    body: e.body,
-    photos: photos.filter((p) => p.entryId === e.id).map(presentPhoto),
-  }));
-  const editable = build.status === 'draft' || build.status === 'returned' || build.status === 'published';
+  const photos: PhotoDto[] = photoRows.map(presentPhoto);
   return {
-    ...summary!,
-    body: build.body,
-    photos: photos.map(presentPhoto),
-    entries: entryDtos,
-    actuators,
-    abilities: {
-      edit: mayEdit && editable,
-      submit: mayEdit && (build.status === 'draft' || build.status === 'returned'),
-      delete: mayEdit && build.status === 'draft',
-    },
+    extras: { owner: owner(build.ownerId), cover: coverOf(build, photos), gains: presentGains(actuatorRows, runs) },
+    photos,
+    entries: presentEntries(entries, photos),
+    actuators: actuatorRows.map((a) => presentActuator(a, a.part!, runs)),
   };
+}
+
+/** The whole build page: write-up, photos, entries with their photos, actuators with runs, and what the viewer may do. */
+export async function presentBuildDetail(actor: Actor | null, build: Build): Promise<BuildDto> {
+  const includeRejected = can(actor, 'build.view-unpublished', { ownerId: build.ownerId });
+  const key = `build-page:${build.id}:${build.coverPhotoId ?? ''}:${includeRejected}`;
+  const content = await cachedPublicRead(Build.sequelize!, key, () => loadBuildPage(build, includeRejected));
+  return presentBuildPage(build, content, can(actor, 'build.edit', { ownerId: build.ownerId }));
 }

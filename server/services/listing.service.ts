@@ -1,7 +1,6 @@
 import { Op, type WhereOptions } from 'sequelize';
-import { can, type Actor } from '@shared/policies.ts';
+import type { Actor } from '@shared/policies.ts';
 import {
-  priceLabel,
   type CreateListingInput,
   type HideListingInput,
   type ListListingsQuery,
@@ -18,10 +17,11 @@ import { recordAudit } from './audit.service.ts';
 import { containsPattern } from '../db/like-pattern.ts';
 import { photosBySubject } from './attached-photos.service.ts';
 import { loadListingForView } from './listing-access.ts';
+import { cachedPublicRead } from './public-read-cache.ts';
+import { presentListing, type ListingExtras } from '../presenters/listing.presenter.ts';
 
-/** Listings with their parts, owners and photos in a fixed number of queries. */
-async function presentListings(actor: Actor | null, rows: Listing[]): Promise<ListingDto[]> {
-  if (rows.length === 0) return [];
+/** Parts, owner logins and photos of several listings: three queries whatever the number of listings. */
+async function loadListingExtras(rows: Listing[]): Promise<Map<number, ListingExtras>> {
   const [parts, owners, photos] = await Promise.all([
     Part.findAll({ where: { id: [...new Set(rows.map((r) => r.partId))] }, attributes: ['id', 'name', 'category', 'gainMedianNmPerV'] }),
     User.findAll({ where: { id: [...new Set(rows.map((r) => r.ownerId))] }, attributes: ['id', 'login'] }),
@@ -31,40 +31,25 @@ async function presentListings(actor: Actor | null, rows: Listing[]): Promise<Li
     ),
   ]);
   const partMap = new Map(parts.map((p) => [p.id, p]));
-  const ownerMap = new Map(owners.map((u) => [u.id, u]));
-  return rows.map((l) => {
-    const part = partMap.get(l.partId)!;
-    return {
-      id: l.id,
-      kind: l.kind,
-      part: { id: part.id, name: part.name, category: part.category, gainMedianNmPerV: part.gainMedianNmPerV },
-      quantity: l.quantity,
-      condition: l.condition,
-      priceKind: l.priceKind,
-      priceAmount: l.priceAmount,
-      currency: l.currency,
-      priceLabel: priceLabel(l.priceKind, l.priceAmount, l.currency),
-      region: l.region,
-      shipsTo: l.shipsTo,
-      notes: l.notes,
-      status: l.status,
-      hidden: l.hiddenAt !== null,
-      hiddenNote: can(actor, 'listing.view-hidden', { ownerId: l.ownerId }) ? l.hiddenNote : null,
-      owner: { id: l.ownerId, login: ownerMap.get(l.ownerId)?.login ?? 'unknown' },
-      photos: photos.get(l.id) ?? [],
-      createdAt: l.createdAt.toISOString(),
-      updatedAt: l.updatedAt.toISOString(),
-      abilities: {
-        edit: can(actor, 'listing.edit', { ownerId: l.ownerId }),
-        message: can(actor, 'listing.message', { ownerId: l.ownerId }) && l.status !== 'closed' && l.hiddenAt === null,
-        hide: can(actor, 'listing.hide'),
-      },
-    };
-  });
+  const ownerMap = new Map(owners.map((u) => [u.id, u.login]));
+  return new Map(
+    rows.map((l) => [
+      l.id,
+      { part: partMap.get(l.partId)!, ownerLogin: ownerMap.get(l.ownerId) ?? 'unknown', photos: photos.get(l.id) ?? [] },
+    ]),
+  );
 }
 
-/** Open and reserved listings that are not hidden, newest first, with the exchange's filters. */
-export async function listListings(actor: Actor | null, q: ListListingsQuery): Promise<ListingListDto> {
+/** Listings with their parts, owners and photos in a fixed number of queries, the extras cached briefly (see public-read-cache). */
+async function presentListings(actor: Actor | null, rows: Listing[]): Promise<ListingDto[]> {
+  if (rows.length === 0) return [];
+  const key = `listing-extras:${rows.map((r) => `${r.id}.${r.partId}.${r.ownerId}`).join(',')}`;
+  const extras = await cachedPublicRead(Listing.sequelize!, key, () => loadListingExtras(rows));
+  return rows.map((l) => presentListing(actor, l, extras.get(l.id)!));
+}
+
+/** One page of open, unhidden listings matching the exchange's filters, with the total. */
+async function findListings(q: ListListingsQuery): Promise<{ rows: Listing[]; count: number }> {
   const where: Record<string | symbol, unknown> = { status: { [Op.ne]: 'closed' }, hiddenAt: null };
   if (q.kind) where.kind = q.kind;
   if (q.condition) where.condition = q.condition;
@@ -90,6 +75,12 @@ export async function listListings(actor: Actor | null, q: ListListingsQuery): P
     limit: q.pageSize,
     offset: (q.page - 1) * q.pageSize,
   });
+  return { rows, count };
+}
+
+/** Open and reserved listings that are not hidden, newest first, with the exchange's filters (the page cached briefly, see public-read-cache). */
+export async function listListings(actor: Actor | null, q: ListListingsQuery): Promise<ListingListDto> {
+  const { rows, count } = await cachedPublicRead(Listing.sequelize!, `listings:${JSON.stringify(q)}`, () => findListings(q));
   return { items: await presentListings(actor, rows), total: count, page: q.page, pageSize: q.pageSize };
 }
 

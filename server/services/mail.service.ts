@@ -8,9 +8,12 @@ export interface OutgoingMail {
   html: string;
 }
 
+/** What one send came to; a failure carries its error so the outbox can log it and retry. */
+export type SendResult = { ok: true } | { ok: false; error: unknown };
+
 export interface Mailer {
-  /** Send without ever throwing into the caller: a failed send is logged, not fatal. */
-  send(mail: OutgoingMail): Promise<boolean>;
+  /** Send without ever throwing into the caller: a failed send comes back as the result, not as an exception. */
+  send(mail: OutgoingMail): Promise<SendResult>;
   close(): void;
 }
 
@@ -20,11 +23,11 @@ export function createMailer(smtpUrl: string, from: string, log: Logger): Mailer
   return {
     async send(mail) {
       try {
-        await transport.sendMail({ from, ...mail });
-        return true;
-      } catch (err) {
-        log.warn({ err, to: mail.to, subject: mail.subject }, 'mail send failed');
-        return false;
+        const info = await transport.sendMail({ from, ...mail });
+        log.debug({ messageId: info.messageId }, 'mail handed to SMTP');
+        return { ok: true };
+      } catch (error) {
+        return { ok: false, error };
       }
     },
     close: () => transport.close(),

@@ -1,15 +1,16 @@
 import { Op, type Transaction } from 'sequelize';
-import type { Actor } from '@shared/policies.ts';
+import { can, type Actor } from '@shared/policies.ts';
 import type { SendMessageInput, ThreadDto, ThreadSummaryDto } from '@shared/schemas/listing.ts';
 import { Listing } from '../models/listing.model.ts';
 import { Part } from '../models/part.model.ts';
 import { User } from '../models/user.model.ts';
 import { Message, MessageThread } from '../models/message.model.ts';
 import { authorize } from '../policies/authorize.ts';
+import { presentThread, presentThreadSummary } from '../presenters/message.presenter.ts';
 import { ConflictError, NotFoundError } from '../errors.ts';
 import { loadListingForView } from './listing-access.ts';
 import { enqueueMail, kickOutbox } from './outbox.service.ts';
-import { decisionMail } from './review-mails.ts';
+import { noticeMail } from './review-mails.ts';
 
 /** Mail the other party that a message waits on the site; the text never carries anyone's address. */
 async function notify(
@@ -18,14 +19,14 @@ async function notify(
   listingTitle: string,
   body: string,
   threadId: number,
-  transaction: import('sequelize').Transaction,
+  transaction: Transaction,
 ) {
   const recipient = await User.findByPk(recipientId, { transaction, attributes: ['id', 'login', 'email', 'mailOptOut'] });
   if (!recipient) return;
   const excerpt = body.length > 600 ? `${body.slice(0, 600)}…` : body;
   await enqueueMail(
     recipient,
-    decisionMail({
+    noticeMail({
       subject: `Message from ${senderLogin} about ${listingTitle}`,
       greeting: recipient.login,
       lines: [`${senderLogin} wrote about ${listingTitle}:`, excerpt, 'Reply on Scanwright; your e-mail address is not shown to them.'],
@@ -77,10 +78,12 @@ export async function sendListingMessage(
   return result;
 }
 
+/** A conversation of the actor's; to anyone else it does not exist (404, so thread ids reveal nothing). */
 async function loadThread(actor: Actor | null, threadId: number): Promise<MessageThread> {
   authorize(actor, 'content.create');
   const thread = await MessageThread.findByPk(threadId);
-  if (!thread || (thread.ownerId !== actor.id && thread.starterId !== actor.id)) throw new NotFoundError('No such conversation.');
+  if (!thread || !can(actor, 'message.thread.view', { ownerId: thread.ownerId, participantId: thread.starterId }))
+    throw new NotFoundError('No such conversation.');
   return thread;
 }
 
@@ -109,16 +112,12 @@ async function summarize(actor: Actor, threads: MessageThread[]): Promise<Thread
   return threads.map((t) => {
     const listing = listingMap.get(t.listingId)!;
     const otherId = t.ownerId === actor.id ? t.starterId : t.ownerId;
-    const own = messages.filter((m) => m.threadId === t.id);
-    return {
-      id: t.id,
-      listing: { id: listing.id, kind: listing.kind, partName: parts.get(listing.partId) ?? '', status: listing.status },
-      other: { id: otherId, login: userMap.get(otherId) ?? 'unknown' },
-      role: t.ownerId === actor.id ? 'owner' : 'enquirer',
-      lastMessageAt: t.lastMessageAt.toISOString(),
-      lastMessage: own[0]?.body.slice(0, 200) ?? '',
-      unread: own.filter((m) => m.senderId !== actor.id && m.readAt === null).length,
-    };
+    return presentThreadSummary(t, actor.id, {
+      listing,
+      partName: parts.get(listing.partId) ?? '',
+      otherLogin: userMap.get(otherId) ?? 'unknown',
+      newestFirst: messages.filter((m) => m.threadId === t.id),
+    });
   });
 }
 
@@ -148,16 +147,7 @@ export async function getThread(actor: Actor | null, threadId: number): Promise<
   const logins = new Map(
     (await User.findAll({ where: { id: [thread.ownerId, thread.starterId] }, attributes: ['id', 'login'] })).map((u) => [u.id, u.login]),
   );
-  return {
-    ...summary!,
-    messages: messages.map((m) => ({
-      id: m.id,
-      fromMe: m.senderId === actor!.id,
-      sender: logins.get(m.senderId) ?? 'unknown',
-      body: m.body,
-      createdAt: m.createdAt.toISOString(),
-    })),
-  };
+  return presentThread(summary!, messages, actor!.id, logins);
 }
 
 /** Reply inside a conversation; the other party gets a mail with a link, never an address. */

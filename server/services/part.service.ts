@@ -8,19 +8,16 @@ import type {
   ProposePartInput,
   GainHistogramDto,
 } from '@shared/schemas/part.ts';
-import { priceLabel } from '@shared/schemas/listing.ts';
-import { expectedGainForPart } from '@shared/workbench/part-expected-gain.ts';
 import { Part } from '../models/part.model.ts';
-import { CalibrationRun } from '../models/calibration-run.model.ts';
-import { Build } from '../models/build.model.ts';
 import { User } from '../models/user.model.ts';
-import { Listing } from '../models/listing.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { NotFoundError } from '../errors.ts';
-import { presentPartSummary } from '../presenters/part.presenter.ts';
+import { presentPartDetail, type PartPageRows } from '../presenters/part.presenter.ts';
 import { countParts, selectParts } from './part-search.sql.ts';
 import { cachedRegistryCount } from './registry-count-cache.ts';
 import { canEditPartPhotos, photosBySubject } from './attached-photos.service.ts';
+import { cachedPublicRead } from './public-read-cache.ts';
+import { selectPartListings, selectPartRuns } from './part-page.sql.ts';
 
 /** Most rows one export returns. */
 export const EXPORT_LIMIT = 10_000;
@@ -63,65 +60,28 @@ export async function gainHistogram(): Promise<GainHistogramDto> {
   };
 }
 
-/** One part: listed ones for everyone; a proposed or rejected one only for its proposer and moderators. */
-export async function getPart(actor: Actor | null, partId: number): Promise<PartDetailDto> {
+/** A part with everything its page lists, whoever looks: five queries however many runs or listings, cached briefly. */
+async function loadPartPage(partId: number): Promise<{ part: Part; rows: PartPageRows } | null> {
+  const sequelize = Part.sequelize!;
   const part = await Part.findByPk(partId);
-  if (!part || (part.status !== 'accepted' && !can(actor, 'part.view-unlisted', { ownerId: part.proposedById }))) {
-    throw new NotFoundError('No such part.');
-  }
+  if (!part) return null;
   const [runs, listings, proposer, photos] = await Promise.all([
-    CalibrationRun.findAll({
-      where: { partId, status: 'accepted' },
-      order: [
-        ['createdAt', 'ASC'],
-        ['id', 'ASC'],
-      ],
-      limit: 2000,
-    }),
-    Listing.findAll({ where: { partId, status: { [Op.ne]: 'closed' }, hiddenAt: null }, order: [['createdAt', 'DESC']], limit: 50 }),
+    selectPartRuns(sequelize, partId, 2000),
+    selectPartListings(sequelize, partId, 50),
     part.proposedById ? User.findByPk(part.proposedById, { attributes: ['login'] }) : null,
     photosBySubject('part', [part.id]),
   ]);
-  const builds = new Map(
-    (await Build.findAll({ where: { id: [...new Set(runs.map((r) => r.buildId))] }, attributes: ['id', 'title', 'ownerId'] })).map((b) => [
-      b.id,
-      b,
-    ]),
-  );
-  const userIds = [...new Set([...[...builds.values()].map((b) => b.ownerId), ...listings.map((l) => l.ownerId)])];
-  const users = new Map((await User.findAll({ where: { id: userIds }, attributes: ['id', 'login'] })).map((u) => [u.id, u.login]));
-  const expected = expectedGainForPart(part, 'single');
-  return {
-    ...presentPartSummary(part),
-    notes: part.notes,
-    proposedBy: proposer?.login ?? null,
-    mergedIntoId: part.mergedIntoId,
-    createdAt: part.createdAt.toISOString(),
-    expectedGain: expected,
-    runs: runs.map((r) => ({
-      id: r.id,
-      buildId: r.buildId,
-      buildTitle: builds.get(r.buildId)?.title ?? '',
-      maker: users.get(builds.get(r.buildId)?.ownerId ?? 0) ?? 'unknown',
-      method: r.method,
-      gainNmPerV: Math.abs(r.gainNmPerV),
-      gainCi95NmPerV: [r.gainCi95LoNmPerV, r.gainCi95HiNmPerV],
-      hysteresisPctFs: r.hysteresisPctFs,
-      createdAt: r.createdAt.toISOString(),
-    })),
-    listings: listings.map((l) => ({
-      id: l.id,
-      kind: l.kind,
-      title: `${l.kind === 'offering' ? 'Offering' : 'Seeking'} ${l.quantity} × ${part.name}`,
-      quantity: l.quantity,
-      condition: l.condition,
-      priceLabel: priceLabel(l.priceKind, l.priceAmount, l.currency),
-      region: l.region,
-      owner: users.get(l.ownerId) ?? 'unknown',
-    })),
-    photos: photos.get(part.id) ?? [],
-    abilities: { editPhotos: canEditPartPhotos(actor, part) },
-  };
+  return { part, rows: { proposedBy: proposer?.login ?? null, runs, listings, photos: photos.get(part.id) ?? [] } };
+}
+
+/** One part: listed ones for everyone; a proposed or rejected one only for its proposer and moderators. */
+export async function getPart(actor: Actor | null, partId: number): Promise<PartDetailDto> {
+  const page = await cachedPublicRead(Part.sequelize!, `part-page:${partId}`, () => loadPartPage(partId));
+  const part = page?.part;
+  if (!page || !part || (part.status !== 'accepted' && !can(actor, 'part.view-unlisted', { ownerId: part.proposedById }))) {
+    throw new NotFoundError('No such part.');
+  }
+  return presentPartDetail(part, page.rows, canEditPartPhotos(actor, part));
 }
 
 /** A maker proposes a part; it waits on the review desk until a moderator accepts it. */

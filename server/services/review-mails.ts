@@ -3,8 +3,8 @@ import { APP_URL } from './outbox.service.ts';
 
 const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
-/** One notice: a headline, what happened, the moderator's note and a link. */
-export function decisionMail(opts: {
+/** A notice mail (review decisions, new messages): what happened, the moderator's note if any, and a link to the page on the site. */
+export function noticeMail(opts: {
   subject: string;
   greeting: string;
   lines: string[];

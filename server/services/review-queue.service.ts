@@ -1,10 +1,6 @@
-import { Op } from 'sequelize';
+import { Op, col, fn, type Model, type ModelStatic } from 'sequelize';
 import type { Actor } from '@shared/policies.ts';
-import type { QueueBuildDto, QueueReportDto, QueueRunDto, ReviewQueueDto } from '@shared/schemas/review.ts';
-import type { FitPoint } from '@shared/schemas/workbench.ts';
-import { plausibilityFlags } from '@shared/review/plausibility.ts';
-import { expectedGainForPart } from '@shared/workbench/part-expected-gain.ts';
-import { toNm, toVolts } from '@shared/units.ts';
+import type { QueueBuildDto, QueueRunDto, ReportTargetType, ReviewAuthorDto, ReviewQueueDto } from '@shared/schemas/review.ts';
 import { Build } from '../models/build.model.ts';
 import { CalibrationRun } from '../models/calibration-run.model.ts';
 import { Actuator } from '../models/actuator.model.ts';
@@ -14,105 +10,100 @@ import { LogEntry } from '../models/log-entry.model.ts';
 import { Report } from '../models/report.model.ts';
 import { User } from '../models/user.model.ts';
 import { authorize } from '../policies/authorize.ts';
-import { presentRun } from '../presenters/run.presenter.ts';
-import { presentPartSummary } from '../presenters/part.presenter.ts';
-import { describeTarget } from './report.service.ts';
+import { presentQueueBuild, presentQueuePart, presentQueueReport, presentQueueRun } from '../presenters/review-queue.presenter.ts';
 
 const LIMIT = 100;
-const countBy = (rows: { buildId: number }[], id: number) => rows.filter((r) => r.buildId === id).length;
 
-async function authors(ids: (number | null)[]) {
-  const users = await User.findAll({
-    where: { id: [...new Set(ids.filter((i): i is number => i !== null))] },
-    attributes: ['id', 'login'],
-  });
+type AuthorOf = (id: number | null) => ReviewAuthorDto | null;
+
+/** Logins of every author on the desk in one query. */
+async function authors(ids: (number | null)[]): Promise<AuthorOf> {
+  const wanted = [...new Set(ids.filter((i): i is number => i !== null))];
+  const users = wanted.length ? await User.findAll({ where: { id: wanted }, attributes: ['id', 'login'] }) : [];
   const map = new Map(users.map((u) => [u.id, { id: u.id, login: u.login }]));
-  return (id: number | null) => (id === null ? null : (map.get(id) ?? { id, login: 'unknown' }));
+  return (id) => (id === null ? null : (map.get(id) ?? { id, login: 'unknown' }));
 }
 
-async function queueBuilds(builds: Build[]): Promise<QueueBuildDto[]> {
-  const ids = builds.map((b) => b.id);
-  const [author, photos, entries, actuators, pending] = await Promise.all([
-    authors(builds.map((b) => b.ownerId)),
-    Photo.findAll({ where: { buildId: ids }, attributes: ['buildId'] }),
-    LogEntry.findAll({ where: { buildId: ids }, attributes: ['buildId'] }),
-    Actuator.findAll({ where: { buildId: ids }, attributes: ['buildId'] }),
-    CalibrationRun.findAll({ where: { buildId: ids, status: 'pending' }, attributes: ['buildId'] }),
+/** Rows per build of one table, counted by the database: `SELECT build_id, COUNT(*) … GROUP BY build_id`. */
+async function countPerBuild(model: ModelStatic<Model>, ids: number[], where: Record<string, unknown> = {}): Promise<Map<number, number>> {
+  const rows = (await model.findAll({
+    where: { buildId: ids, ...where },
+    attributes: ['buildId', [fn('COUNT', col('id')), 'n']],
+    group: ['buildId'],
+    raw: true,
+  })) as unknown as Array<{ buildId: number; n: number | string }>;
+  return new Map(rows.map((r) => [r.buildId, Number(r.n)]));
+}
+
+/** Build cards for the desk (submitted and edited together): four grouped counts whatever the number of builds. */
+async function queueBuilds(builds: Build[], author: AuthorOf): Promise<Map<number, QueueBuildDto>> {
+  const ids = [...new Set(builds.map((b) => b.id))];
+  if (ids.length === 0) return new Map();
+  const [photos, entries, actuators, pending] = await Promise.all([
+    countPerBuild(Photo as unknown as ModelStatic<Model>, ids),
+    countPerBuild(LogEntry as unknown as ModelStatic<Model>, ids),
+    countPerBuild(Actuator as unknown as ModelStatic<Model>, ids),
+    countPerBuild(CalibrationRun as unknown as ModelStatic<Model>, ids, { status: 'pending' }),
   ]);
-  return builds.map((b) => ({
-    id: b.id,
-    title: b.title,
-    instrumentKind: b.instrumentKind,
-    summary: b.summary,
-    author: author(b.ownerId)!,
-    submittedAt: b.submittedAt?.toISOString() ?? null,
-    updatedAt: b.updatedAt.toISOString(),
-    photoCount: countBy(photos, b.id),
-    entryCount: countBy(entries, b.id),
-    actuatorCount: countBy(actuators, b.id),
-    pendingRunCount: countBy(pending, b.id),
-  }));
+  return new Map(
+    builds.map((b) => [
+      b.id,
+      presentQueueBuild(b, author(b.ownerId)!, {
+        photoCount: photos.get(b.id) ?? 0,
+        entryCount: entries.get(b.id) ?? 0,
+        actuatorCount: actuators.get(b.id) ?? 0,
+        pendingRunCount: pending.get(b.id) ?? 0,
+      }),
+    ]),
+  );
 }
 
-async function queueRuns(runs: CalibrationRun[]): Promise<QueueRunDto[]> {
+/** Pending runs with their parts, actuators, builds and the parts' accepted gains: four queries whatever the number of runs. */
+async function queueRuns(runs: CalibrationRun[], author: AuthorOf): Promise<QueueRunDto[]> {
+  if (runs.length === 0) return [];
   const partIds = [...new Set(runs.map((r) => r.partId))];
-  const [author, parts, accepted, actuators, builds] = await Promise.all([
-    authors(runs.map((r) => r.ownerId)),
+  const [parts, accepted, actuators, builds] = await Promise.all([
     Part.findAll({ where: { id: partIds } }),
     CalibrationRun.findAll({ where: { partId: partIds, status: 'accepted' }, attributes: ['partId', 'gainNmPerV'] }),
-    Actuator.findAll({ where: { id: [...new Set(runs.map((r) => r.actuatorId))] } }),
+    Actuator.findAll({ where: { id: [...new Set(runs.map((r) => r.actuatorId))] }, attributes: ['id', 'label', 'axis', 'drive'] }),
     Build.findAll({ where: { id: [...new Set(runs.map((r) => r.buildId))] }, attributes: ['id', 'title'] }),
   ]);
   const partMap = new Map(parts.map((p) => [p.id, p]));
   const actuatorMap = new Map(actuators.map((a) => [a.id, a]));
   const buildMap = new Map(builds.map((b) => [b.id, b]));
-  return runs.map((r) => {
-    const part = partMap.get(r.partId)!;
-    const actuator = actuatorMap.get(r.actuatorId);
-    const gains = accepted.filter((a) => a.partId === r.partId).map((a) => Math.abs(a.gainNmPerV));
-    const expected = actuator ? expectedGainForPart(part, actuator.drive, actuator.axis) : null;
-    const dto = presentRun(r);
-    const points = (JSON.parse(r.pointsJson) as FitPoint[]).map((p) => ({
-      volts: toVolts(p.volts, r.voltageUnit),
-      displacementNm: toNm(p.displacement, r.displacementUnit),
-      ...(p.sweep ? { sweep: p.sweep } : {}),
-    }));
-    return {
-      id: r.id,
-      buildId: r.buildId,
-      buildTitle: buildMap.get(r.buildId)?.title ?? '',
-      actuatorLabel: actuator?.label ?? null,
-      axis: actuator?.axis ?? '',
+  const gainsByPart = new Map<number, number[]>();
+  for (const a of accepted) gainsByPart.set(a.partId, [...(gainsByPart.get(a.partId) ?? []), Math.abs(a.gainNmPerV)]);
+  return runs.map((r) =>
+    presentQueueRun(r, {
       author: author(r.ownerId)!,
-      part: { id: part.id, name: part.name, category: part.category, stats: presentPartSummary(part).stats, acceptedGainsNmPerV: gains },
-      method: r.method,
-      fit: dto.fit,
-      points,
-      expectedGainNmPerV: expected?.gainNmPerV ?? null,
-      flags: plausibilityFlags(
-        { n: r.pointCount, gainNmPerV: r.gainNmPerV, r2: r.r2, hysteresisPctFs: r.hysteresisPctFs },
-        gains,
-        expected?.gainNmPerV ?? null,
-      ),
-      createdAt: r.createdAt.toISOString(),
-    };
-  });
+      part: partMap.get(r.partId)!,
+      actuator: actuatorMap.get(r.actuatorId),
+      buildTitle: buildMap.get(r.buildId)?.title ?? '',
+      acceptedGains: gainsByPart.get(r.partId) ?? [],
+    }),
+  );
 }
 
-async function queueReports(reports: Report[]): Promise<QueueReportDto[]> {
-  const author = await authors(reports.map((r) => r.reporterId));
-  return Promise.all(
-    reports.map(async (r) => ({
-      id: r.id,
-      targetType: r.targetType,
-      targetId: r.targetId,
-      targetLabel: await describeTarget(r.targetType, r.targetId),
-      reason: r.reason,
-      note: r.note,
-      reporter: author(r.reporterId)!,
-      createdAt: r.createdAt.toISOString(),
-    })),
-  );
+/** Labels for what reports point at: one `IN (…)` query per target type, with the wording of describeTarget. */
+async function targetLabels(reports: Report[]): Promise<(r: Report) => string> {
+  const idsOf = (type: ReportTargetType) => [...new Set(reports.filter((r) => r.targetType === type).map((r) => r.targetId))];
+  const [builds, parts, runs] = await Promise.all([
+    idsOf('build').length ? Build.findAll({ where: { id: idsOf('build') }, attributes: ['id', 'title'] }) : [],
+    idsOf('part').length ? Part.findAll({ where: { id: idsOf('part') }, attributes: ['id', 'name'] }) : [],
+    idsOf('run').length ? CalibrationRun.findAll({ where: { id: idsOf('run') }, attributes: ['id', 'gainNmPerV'] }) : [],
+  ]);
+  const title = new Map(builds.map((b) => [b.id, b.title]));
+  const name = new Map(parts.map((p) => [p.id, p.name]));
+  const gain = new Map(runs.map((r) => [r.id, r.gainNmPerV]));
+  return ({ targetType: type, targetId: id }) => {
+    if (type === 'build') return title.get(id) ?? `build ${id} (gone)`;
+    if (type === 'part') return name.get(id) ?? `part ${id} (gone)`;
+    if (type === 'run') {
+      const g = gain.get(id);
+      return g !== undefined ? `calibration run ${id} (${Number(g.toPrecision(4))} nm/V)` : `run ${id} (gone)`;
+    }
+    return `listing ${id}`;
+  };
 }
 
 /** Everything waiting for a moderator, oldest first, with what is needed to decide without clicking through. */
@@ -160,22 +151,24 @@ export async function getReviewQueue(actor: Actor | null): Promise<ReviewQueueDt
       limit: LIMIT,
     }),
   ]);
-  const partAuthor = await authors(parts.rows.map((p) => p.proposedById));
+  const author = await authors([
+    ...builds.rows.map((b) => b.ownerId),
+    ...edited.rows.map((b) => b.ownerId),
+    ...runs.rows.map((r) => r.ownerId),
+    ...parts.rows.map((p) => p.proposedById),
+    ...reports.rows.map((r) => r.reporterId),
+  ]);
+  const [buildCards, runCards, labelOf] = await Promise.all([
+    queueBuilds([...builds.rows, ...edited.rows], author),
+    queueRuns(runs.rows, author),
+    targetLabels(reports.rows),
+  ]);
   return {
     counts: { builds: builds.count, runs: runs.count, parts: parts.count, reports: reports.count, edited: edited.count },
-    builds: await queueBuilds(builds.rows),
-    edited: await queueBuilds(edited.rows),
-    runs: await queueRuns(runs.rows),
-    parts: parts.rows.map((p) => ({
-      id: p.id,
-      name: p.name,
-      category: p.category,
-      salvageSource: p.salvageSource,
-      material: p.material,
-      notes: p.notes,
-      author: partAuthor(p.proposedById),
-      createdAt: p.createdAt.toISOString(),
-    })),
-    reports: await queueReports(reports.rows),
+    builds: builds.rows.map((b) => buildCards.get(b.id)!),
+    edited: edited.rows.map((b) => buildCards.get(b.id)!),
+    runs: runCards,
+    parts: parts.rows.map((p) => presentQueuePart(p, author(p.proposedById))),
+    reports: reports.rows.map((r) => presentQueueReport(r, author(r.reporterId)!, labelOf(r))),
   };
 }

@@ -11,7 +11,7 @@ import { ConflictError, NotFoundError } from '../errors.ts';
 import { recordAudit } from './audit.service.ts';
 import { recomputePartStats } from './part-stats.service.ts';
 import { enqueueMail, kickOutbox } from './outbox.service.ts';
-import { decisionMail } from './review-mails.ts';
+import { noticeMail } from './review-mails.ts';
 import { invalidateRegistryCounts } from './registry-count-cache.ts';
 
 const notWaiting = (what: string) => new ConflictError(`This ${what} is not waiting for a decision.`, 'not_waiting');
@@ -58,7 +58,7 @@ export async function decideBuild(actor: Actor | null, buildId: number, input: B
       const subject = { publish: 'published', return: 'returned with notes', decline: 'declined' }[input.decision];
       await enqueueMail(
         owner,
-        decisionMail({
+        noticeMail({
           subject: `Build ${subject}: ${build.title}`,
           greeting: owner.login,
           lines,
@@ -91,7 +91,7 @@ export async function decideRun(actor: Actor | null, runId: number, input: Accep
       const gain = `${Number(run.gainNmPerV.toPrecision(4))} nm/V`;
       await enqueueMail(
         owner,
-        decisionMail({
+        noticeMail({
           subject: `Calibration run ${status}: ${gain}`,
           greeting: owner.login,
           lines: [
@@ -124,7 +124,7 @@ export async function decidePart(actor: Actor | null, partId: number, input: Acc
     if (proposer) {
       await enqueueMail(
         proposer,
-        decisionMail({
+        noticeMail({
           subject: `Part ${status}: ${part.name}`,
           greeting: proposer.login,
           lines: [
@@ -156,7 +156,7 @@ export async function decideReport(actor: Actor | null, reportId: number, input:
     if (reporter) {
       await enqueueMail(
         reporter,
-        decisionMail({
+        noticeMail({
           subject: `Your report was ${status}`,
           greeting: reporter.login,
           lines: [`Thank you for your report about a ${report.targetType}. A moderator ${status} it.`],

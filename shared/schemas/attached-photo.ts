@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { altText } from './alt-text.ts';
 
 /**
  * A photo attached to a part (registry entry) or an exchange listing. Uploaded as multipart form
@@ -24,9 +25,7 @@ export const listingPhotoParams = z.strictObject({
 });
 
 /** `PATCH …/photos/:photoId`: a better description for one photo. */
-export const updateAttachedPhotoInput = z.strictObject({
-  alt: z.string().trim().min(1, 'Describe the photo for people who cannot see it.').max(300),
-});
+export const updateAttachedPhotoInput = z.strictObject({ alt: altText });
 export type UpdateAttachedPhotoInput = z.infer<typeof updateAttachedPhotoInput>;
 
 /** `PUT …/photos/order`: every photo id of the part or listing, once each, in the new order. */

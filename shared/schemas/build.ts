@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { altText } from './alt-text.ts';
 import type { ActuatorDto } from './actuator.ts';
 
 export const INSTRUMENT_KINDS = [
@@ -150,7 +151,7 @@ export interface BuildListDto {
 
 export const updatePhotoInput = z
   .strictObject({
-    alt: z.string().trim().min(1).max(300).optional(),
+    alt: altText.optional(),
     entryId: z.number().int().positive().nullable().optional(),
     position: z.number().int().min(0).max(10_000).optional(),
   })

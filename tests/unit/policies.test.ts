@@ -18,6 +18,7 @@ const table: Record<Action, Row> = {
   'listing.hide': [false, false, false, false, true, true],
   'listing.view-hidden': [false, true, false, true, true, true],
   'listing.message': [false, false, true, false, true, true],
+  'message.thread.view': [false, true, false, true, false, false],
   'user.list': [false, false, false, false, false, true],
   'user.set-role': [false, false, false, false, false, true],
   'user.suspend': [false, false, false, false, false, true],
@@ -49,6 +50,12 @@ describe('can()', () => {
     expect(can(admin, 'user.set-role', { userId: 9 })).toBe(false);
     expect(can(admin, 'user.suspend', { userId: 9 })).toBe(false);
     expect(can(admin, 'user.set-role', { userId: 10 })).toBe(true);
+  });
+
+  test('when the maker who started a thread asks to see it, then they may; a third maker may not', () => {
+    const starter: Actor = { id: 5, role: 'maker', suspended: false };
+    expect(can(starter, 'message.thread.view', { ownerId: OWNER, participantId: 5 })).toBe(true);
+    expect(can({ ...starter, id: 6 }, 'message.thread.view', { ownerId: OWNER, participantId: 5 })).toBe(false);
   });
 
   test('when a resource has no owner, then nobody owns it', () => {

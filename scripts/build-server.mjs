@@ -1,0 +1,23 @@
+// Bundles the server for `npm start`: server/index.ts and the CLI (migrate, prepare) become plain
+// ESM in dist/server/, so production runs compiled code with Node alone (tsx stays for development
+// and tests). npm packages stay external and load from node_modules; `@shared/` comes from tsconfig paths.
+import { build } from 'esbuild';
+
+/** Builds dist/server/{index,migrate,prepare}.mjs from the TypeScript sources. */
+export async function buildServer() {
+  await build({
+    entryPoints: { index: 'server/index.ts', migrate: 'server/cli/migrate.ts', prepare: 'server/cli/prepare.ts' },
+    outdir: 'dist/server',
+    outExtension: { '.js': '.mjs' },
+    bundle: true,
+    platform: 'node',
+    target: 'node20',
+    format: 'esm',
+    packages: 'external',
+    sourcemap: 'linked',
+    tsconfig: 'tsconfig.json',
+    logLevel: 'warning',
+  });
+}
+
+if (import.meta.url === `file://${process.argv[1]}`) await buildServer();
