@@ -25,6 +25,19 @@ export default defineConfig({
       },
       {
         resolve: { alias },
+        // Database and process faults (killed servers, a MariaDB that goes away): slow, and each file
+        // owns its processes, so they run one file at a time in their own project.
+        test: {
+          name: 'faults',
+          include: ['tests/faults/**/*.test.ts'],
+          environment: 'node',
+          testTimeout: 60000,
+          hookTimeout: 60000,
+          fileParallelism: false,
+        },
+      },
+      {
+        resolve: { alias },
         test: {
           name: 'browser',
           include: ['tests/browser/**/*.test.ts'],

@@ -1,3 +1,4 @@
+import { parseId } from '@/utils/parse-id.ts';
 import { useQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
 import { ApiError } from '@/lib/api-client.ts';
@@ -6,8 +7,6 @@ import { buildQueries } from '@/features/builds/api/build-queries.ts';
 import { BuildNotFound } from '@/features/builds/components/read/build-not-found.tsx';
 import { BuildView } from '@/features/builds/components/read/build-view.tsx';
 import { LoadError, Loading } from '@/components/ui/load-states.tsx';
-
-const parseId = (raw: string | undefined) => (raw && /^\d{1,10}$/.test(raw) ? Number(raw) : null);
 
 /** /builds/:buildId: one build with its write-up, photos, log entries, actuators and calibration runs. */
 export function BuildPage() {

@@ -9,7 +9,8 @@ import { useSession } from '@/features/session/api/get-session.ts';
 import { inboxQueries } from '@/features/exchange/api/inbox-queries.ts';
 import { LoadError, Loading } from '@/components/ui/load-states.tsx';
 import { ThreadView } from '@/features/exchange/components/thread-view.tsx';
-import { ExchangeNotFound, parseId } from './not-found.tsx';
+import { ExchangeNotFound } from './not-found.tsx';
+import { parseId } from '@/utils/parse-id.ts';
 
 /** /inbox/:threadId: one conversation; opening it marks it read, so the thread list is refetched. */
 export function InboxThreadPage() {

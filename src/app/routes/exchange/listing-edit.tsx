@@ -8,7 +8,8 @@ import { listingQueries } from '@/features/exchange/api/listing-queries.ts';
 import { useUpdateListing } from '@/features/exchange/api/listing-mutations.ts';
 import { ListingForm } from '@/features/exchange/components/listing-form.tsx';
 import { LoadError, Loading } from '@/components/ui/load-states.tsx';
-import { ExchangeNotFound, parseId } from './not-found.tsx';
+import { ExchangeNotFound } from './not-found.tsx';
+import { parseId } from '@/utils/parse-id.ts';
 
 /** /exchange/:listingId/edit: the owner changes their listing. */
 export function ListingEditPage() {

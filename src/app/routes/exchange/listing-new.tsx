@@ -8,7 +8,7 @@ import { useSession } from '@/features/session/api/get-session.ts';
 import { toActor } from '@/features/session/to-actor.ts';
 import { useCreateListing } from '@/features/exchange/api/listing-mutations.ts';
 import { ListingForm } from '@/features/exchange/components/listing-form.tsx';
-import { parseId } from './not-found.tsx';
+import { parseId } from '@/utils/parse-id.ts';
 
 /** /exchange/new (?partId= to start from a part): offer or seek a listed part. */
 export function ListingNewPage() {

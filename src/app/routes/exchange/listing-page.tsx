@@ -6,7 +6,8 @@ import { useSession } from '@/features/session/api/get-session.ts';
 import { listingQueries } from '@/features/exchange/api/listing-queries.ts';
 import { ListingView } from '@/features/exchange/components/listing-view.tsx';
 import { LoadError, Loading } from '@/components/ui/load-states.tsx';
-import { ExchangeNotFound, parseId } from './not-found.tsx';
+import { ExchangeNotFound } from './not-found.tsx';
+import { parseId } from '@/utils/parse-id.ts';
 
 /** /exchange/:listingId: a listing's details, the contact form, and the owner's and moderators' controls. */
 export function ListingPage() {

@@ -14,6 +14,3 @@ export function ExchangeNotFound({ what, back, backLabel }: { what: string; back
     </div>
   );
 }
-
-/** A positive id from a route parameter, or null. */
-export const parseId = (raw: string | undefined) => (raw && /^\d{1,10}$/.test(raw) && Number(raw) > 0 ? Number(raw) : null);

@@ -1,3 +1,4 @@
+import { parseId } from '@/utils/parse-id.ts';
 import { useQuery } from '@tanstack/react-query';
 import { Link, useParams } from 'react-router-dom';
 import { ApiError } from '@/lib/api-client.ts';
@@ -6,8 +7,6 @@ import { useSession } from '@/features/session/api/get-session.ts';
 import { partQueries } from '@/features/parts/api/part-queries.ts';
 import { LoadError, Loading } from '@/components/ui/load-states.tsx';
 import { PartView } from '@/features/parts/components/part-view.tsx';
-
-const parseId = (raw: string | undefined) => (raw && /^\d{1,10}$/.test(raw) && Number(raw) > 0 ? Number(raw) : null);
 
 function PartNotFound() {
   return (

@@ -1,4 +1,4 @@
-import type { RowProblem } from '../csv/split-csv.ts';
+import type { RowProblem } from '@/lib/csv/split-csv.ts';
 
 const SHOWN_PROBLEMS = 20;
 

@@ -3,7 +3,7 @@ import { creepInput } from '@shared/schemas/workbench.ts';
 import { creepCalculator } from '@shared/workbench/calculators/creep-calculator.ts';
 import { displacementUnits, toNm } from '@shared/units.ts';
 import { friendlyError, refusalMessage } from '../form/error-map.ts';
-import { readNumericColumns, type RowProblem } from '../csv/split-csv.ts';
+import { readNumericColumns, type RowProblem } from '@/lib/csv/split-csv.ts';
 
 /** The creep form: the record as CSV text, its displacement unit, and a time to project to. */
 export const creepForm = z.object({

@@ -6,7 +6,7 @@ import { fitCalculator } from '@shared/workbench/calculators/fit-calculator.ts';
 import { toNm, toVolts } from '@shared/units.ts';
 import { friendlyError, refusalMessage } from '../form/error-map.ts';
 import type { CalibrationChartPoint } from '@/components/charts/calibration-chart.tsx';
-import type { CheckedRows } from '../csv/parse-fit-rows.ts';
+import type { CheckedRows } from '@/lib/csv/points-csv.ts';
 
 const gridRow = z.object({ volts: z.string(), displacement: z.string(), sweep: z.enum(['', 'up', 'down']) });
 

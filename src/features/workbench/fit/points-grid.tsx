@@ -1,6 +1,6 @@
 import { useFieldArray } from 'react-hook-form';
 import { Button } from '@/components/ui/button.tsx';
-import type { RowProblem } from '../csv/split-csv.ts';
+import type { RowProblem } from '@/lib/csv/split-csv.ts';
 import { blankRows, exampleRows, type FitFormApi } from './fit-form.ts';
 
 const cell =

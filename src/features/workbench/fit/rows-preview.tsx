@@ -1,5 +1,5 @@
-import type { RawFitRow } from '../csv/parse-fit-rows.ts';
-import type { RowProblem } from '../csv/split-csv.ts';
+import type { RawFitRow } from '@/lib/csv/points-csv.ts';
+import type { RowProblem } from '@/lib/csv/split-csv.ts';
 
 const SHOWN_ROWS = 50;
 

@@ -1,6 +1,6 @@
 import { useDeferredValue, useMemo } from 'react';
 import { useWatch } from 'react-hook-form';
-import { checkFitRows, rowsFromCsv, type CheckedRows, type RawFitRow } from '../csv/parse-fit-rows.ts';
+import { checkFitRows, rowsFromCsv, type CheckedRows, type RawFitRow } from '@/lib/csv/points-csv.ts';
 import { previewFit, type FitFormApi } from './fit-form.ts';
 
 /** The rows of the chosen source, checked, and the fit of the good ones — recomputed as the user types. */

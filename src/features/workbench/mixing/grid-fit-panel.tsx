@@ -3,7 +3,7 @@ import { gainMatrixFitInput } from '@shared/schemas/workbench.ts';
 import { mixingFitCalculator } from '@shared/workbench/calculators/mixing-calculators.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { RowProblems } from '../components/row-problems.tsx';
-import { readNumericColumns } from '../csv/split-csv.ts';
+import { readNumericColumns } from '@/lib/csv/split-csv.ts';
 import { formatLengthNm, formatSig } from '@shared/format/measured-number.ts';
 import { friendlyError, refusalMessage } from '../form/error-map.ts';
 import { roundMatrix, type MixingFormApi } from './mixing-form.ts';

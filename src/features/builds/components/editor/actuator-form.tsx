@@ -14,7 +14,7 @@ import type { PartChoiceDto } from '@shared/schemas/part.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { describedBy, Field, fieldMessage, FormError, inputClass } from './field.tsx';
 import { HighVoltageCaution } from './high-voltage-caution.tsx';
-import { parseOptionalNumber } from './parse-number.ts';
+import { parseOptionalNumber } from '@/lib/csv/number-text.ts';
 import { PartPicker } from './part-picker.tsx';
 import { applyServerErrors, fieldsOf } from './server-errors.ts';
 

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { createRunInput, type CreateRunInput } from '@shared/schemas/run.ts';
 import type { RecordedCalibrationPoint } from '@shared/workbench/calibration-fit.ts';
-import { parseNumber, parseOptionalNumber } from './parse-number.ts';
+import { parseNumber, parseOptionalNumber } from '@/lib/csv/number-text.ts';
 
 /** One row of the points grid as typed (text, so half-typed numbers survive). */
 export interface GridPoint {

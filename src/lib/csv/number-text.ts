@@ -1,3 +1,4 @@
+// The one way typed or pasted numbers are read on every page: a decimal point or comma, a true minus sign, e notation.
 const NUMBER = /^[+-]?(\d+([.,]\d*)?|[.,]\d+)([eE][+-]?\d+)?$/;
 
 /** A number as makers type or paste it ("1.5", "-2", "3e-2", "1,5"); NaN when it is not one. */

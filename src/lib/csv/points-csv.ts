@@ -1,4 +1,5 @@
-// Calibration points from CSV text or the points grid: columns volts, displacement, optional sweep.
+// The one reader of calibration points from CSV text or a points grid (workbench and run form alike):
+// columns volts, displacement, optional sweep, a header optional and in any order.
 import type { FitPoint } from '@shared/schemas/workbench.ts';
 import { looksLikeHeader, readNumber, splitCsv, type CsvLine, type RowProblem } from './split-csv.ts';
 
@@ -18,7 +19,21 @@ export interface CheckedRows {
   note: string | null;
 }
 
-const SWEEPS: Record<string, FitPoint['sweep']> = { '': undefined, up: 'up', u: 'up', down: 'down', d: 'down', dn: 'down' };
+/** Every spelling of a sweep direction people use in their files. */
+export const SWEEP_ALIASES: Readonly<Record<string, FitPoint['sweep']>> = {
+  '': undefined,
+  none: undefined,
+  up: 'up',
+  u: 'up',
+  '+': 'up',
+  rising: 'up',
+  down: 'down',
+  d: 'down',
+  dn: 'down',
+  '-': 'down',
+  falling: 'down',
+};
+const SWEEPS = SWEEP_ALIASES;
 
 /** Checks one row: both numbers present and finite, sweep up, down or empty. */
 export function checkFitRow(row: RawFitRow): { point: FitPoint } | { problem: string } {
@@ -48,17 +63,22 @@ export function checkFitRows(rows: readonly RawFitRow[], note: string | null = n
 
 function columnsOf(header: CsvLine | undefined): { v: number; x: number; s: number; note: string | null } {
   if (!header) return { v: 0, x: 1, s: 2, note: null };
-  const names = header.cells.map((c) => c.toLowerCase());
+  const names = header.cells.map((c) =>
+    c
+      .toLowerCase()
+      .replace(/\(.*?\)|\[.*?\]/g, '')
+      .trim(),
+  );
   const find = (re: RegExp) => names.findIndex((n) => re.test(n));
-  const v = find(/^(v|volts?|voltage|drive|u)\b/);
-  const x = find(/^((x|z|d)\b|disp|position|deflection|reading)/);
+  const v = find(/^(v|volts?|voltage|drive|bias|u)\b/);
+  const x = find(/^((x|z|d)\b|disp|pos|deflection|height|travel|reading)/);
   const s = find(/^(sweep|dir|direction)/);
   if (v < 0 || x < 0) return { v: 0, x: 1, s: 2, note: 'Header not recognised: reading columns 1–3 as volts, displacement, sweep.' };
   return { v, x, s, note: null };
 }
 
 /** Rows of a pasted or uploaded CSV: header optional (volts, displacement, sweep in any order). */
-export function rowsFromCsv(text: string): { rows: RawFitRow[]; note: string | null } {
+export function rowsFromCsv(text: string): { rows: RawFitRow[]; note: string | null; hadHeader: boolean } {
   const lines = splitCsv(text);
   const header = looksLikeHeader(lines[0]) ? lines[0] : undefined;
   const cols = columnsOf(header);
@@ -71,5 +91,6 @@ export function rowsFromCsv(text: string): { rows: RawFitRow[]; note: string | n
       sweep: cols.s >= 0 ? (cells[cols.s] ?? '') : '',
     })),
     note: cols.note,
+    hadHeader: header !== undefined,
   };
 }

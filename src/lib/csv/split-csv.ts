@@ -1,4 +1,5 @@
 import Papa from 'papaparse';
+import { parseNumber } from './number-text.ts';
 
 /** One non-blank line of a CSV with its 1-based line number, for messages people can find. */
 export interface CsvLine {
@@ -27,14 +28,14 @@ export function splitCsv(text: string): CsvLine[] {
 /** A cell as a finite number, or what is wrong with it in words. */
 export function readNumber(cell: string | undefined, name: string): { value: number } | { problem: string } {
   if (cell === undefined || cell === '') return { problem: `${name} is missing` };
-  const value = Number(cell);
+  const value = parseNumber(cell);
   if (!Number.isFinite(value)) return { problem: `${name} “${cell.length > 20 ? `${cell.slice(0, 20)}…` : cell}” is not a number` };
   return { value };
 }
 
 /** True when the first line looks like column names rather than numbers. */
 export function looksLikeHeader(line: CsvLine | undefined): boolean {
-  return line !== undefined && line.cells.some((c) => c !== '' && !Number.isFinite(Number(c)));
+  return line !== undefined && line.cells.some((c) => c !== '' && !Number.isFinite(parseNumber(c)));
 }
 
 /**
