@@ -1,9 +1,6 @@
 import type { Actor } from '@shared/policies.ts';
 import type { CreateReportInput, ReportTargetType } from '@shared/schemas/review.ts';
 import { Report } from '../models/report.model.ts';
-import { Build } from '../models/build.model.ts';
-import { Part } from '../models/part.model.ts';
-import { CalibrationRun } from '../models/calibration-run.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { getRun } from './run.service.ts';
 import { getPart } from './part.service.ts';
@@ -30,15 +27,4 @@ export async function createReport(actor: Actor | null, input: CreateReportInput
     note: input.note ?? null,
   });
   return { id: report.id, status: report.status, targetType: report.targetType, targetId: report.targetId, reason: report.reason };
-}
-
-/** A short human label of a report's target for the desk. */
-export async function describeTarget(type: ReportTargetType, id: number): Promise<string> {
-  if (type === 'build') return (await Build.findByPk(id, { attributes: ['title'] }))?.title ?? `build ${id} (gone)`;
-  if (type === 'part') return (await Part.findByPk(id, { attributes: ['name'] }))?.name ?? `part ${id} (gone)`;
-  if (type === 'run') {
-    const run = await CalibrationRun.findByPk(id, { attributes: ['gainNmPerV'] });
-    return run ? `calibration run ${id} (${Number(run.gainNmPerV.toPrecision(4))} nm/V)` : `run ${id} (gone)`;
-  }
-  return `listing ${id}`;
 }

@@ -84,7 +84,7 @@ async function queueRuns(runs: CalibrationRun[], author: AuthorOf): Promise<Queu
   );
 }
 
-/** Labels for what reports point at: one `IN (…)` query per target type, with the wording of describeTarget. */
+/** Labels for what reports point at: one `IN (…)` query per target type. */
 async function targetLabels(reports: Report[]): Promise<(r: Report) => string> {
   const idsOf = (type: ReportTargetType) => [...new Set(reports.filter((r) => r.targetType === type).map((r) => r.targetId))];
   const [builds, parts, runs] = await Promise.all([

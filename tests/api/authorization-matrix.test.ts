@@ -1,5 +1,8 @@
 // Every state-changing route × every kind of actor, generated from the app's own router stack.
 // A route without a row below fails, and so does a row whose route is gone.
+// Also per route: a visitor gets 401 (the table's first column), and a signed-in actor who may act
+// gets 403 csrf_failed without the session's CSRF token (the last describe). Per-resource tests
+// leave both cases to this file.
 import { afterAll, describe, expect, test } from 'vitest';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -8,7 +11,7 @@ import { startTestApp } from '../support/test-app.ts';
 import { signIn, visitor } from '../support/login.ts';
 import { createUser } from '../support/factories.ts';
 import { isWorkbench, stateChangingRoutes, type RouteEntry } from '../support/route-table.ts';
-import { fixtures, send, type Acting } from '../support/matrix-fixtures.ts';
+import { actorPool, armed, fixtures, send, type Acting } from '../support/matrix-fixtures.ts';
 import { setUserSuspended, toActor } from '../../server/services/user.service.ts';
 
 const uploadsDir = mkdtempSync(join(tmpdir(), 'scanwright-matrix-'));
@@ -176,4 +179,24 @@ describe.concurrent.each(routes.filter((r) => r.key in expected && r.key in fixt
   test.each(ACTORS.map((kind, i) => [kind, expected[route.key]![i]] as const))('when a %s sends it, then %i', async (kind, status) => {
     await runCase(route, kind, status);
   });
+});
+
+// The workbench calculations store nothing and take no token (see the table above: anyone gets 200 without one).
+const pool = actorPool(t);
+describe("without the session's CSRF token", () => {
+  test.concurrent.each(routes.filter((r) => !isWorkbench(r.key) && r.key in fixtures))(
+    "when $key is sent by an actor who may, but without a token, with a wrong one, a cut one or another session's, then 403 csrf_failed and nothing changes",
+    async (route) => {
+      const { target, actor } = await armed(t, pool, route);
+      const before = await target.state();
+      const stranger = await visitor(t);
+      const token = actor.agent.csrf;
+      for (const csrf of [null, '', 'x'.repeat(token.length), token.slice(0, -1), stranger.csrf]) {
+        const res = await send(route, target, actor.agent, { csrf });
+        expect(res.status, `${route.key} with ${JSON.stringify(csrf)}: ${res.text}`).toBe(403);
+        expect(res.body).toEqual({ error: { code: 'csrf_failed', message: expect.any(String) } });
+      }
+      expect(await target.state()).toEqual(before);
+    },
+  );
 });

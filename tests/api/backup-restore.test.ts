@@ -9,6 +9,7 @@ import { startTestApp, type TestApp } from '../support/test-app.ts';
 import { signIn } from '../support/login.ts';
 import { createBuildRow, createPart, createRunRow, createUser } from '../support/factories.ts';
 import { startPrivateMariaDb, type PrivateMariaDb } from '../support/private-mariadb.ts';
+import { expectError } from '../support/expect-error.ts';
 import { seedDemoOnce } from '../../server/db/seed/demo.ts';
 
 let db: PrivateMariaDb;
@@ -87,7 +88,7 @@ describe('npm run db:backup, then npm run db:restore FILE', () => {
     await t.handle.sequelize.query(`DELETE FROM builds WHERE id = ${build.id}`);
     await t.handle.sequelize.query('DELETE FROM listings');
     await createPart({ name: 'Added after backup' });
-    await request(t.app).get(`/api/builds/${build.id}`).expect(404);
+    expectError(await request(t.app).get(`/api/builds/${build.id}`), 404, 'not_found');
     expect(await snapshot()).not.toEqual(before);
 
     const restored = await script('db-restore', [file, '--yes']);

@@ -3,6 +3,7 @@ import request from 'supertest';
 import { startTestApp, type TestApp } from '../support/test-app.ts';
 import { signIn, type Agent } from '../support/login.ts';
 import { createPart, createUser } from '../support/factories.ts';
+import { expectError } from '../support/expect-error.ts';
 import { standInEmail } from '../../server/dev/demo-accounts.ts';
 import { Message } from '../../server/models/message.model.ts';
 
@@ -59,13 +60,13 @@ describe('listings', () => {
     ).toContain(listing.id);
   });
 
-  test.each<[object, string]>([
-    [{ priceKind: 'price', priceAmount: null }, 'a price without amount'],
-    [{ currency: 'euro' }, 'a bad currency'],
-    [{ quantity: 0 }, 'zero quantity'],
-    [{ kind: 'lending' }, 'an unknown kind'],
-    [{ partId: 999999999 }, 'an unknown part'],
-  ])('when the listing has %o (%s), then 400', async (over) => {
+  test.each<[object, string, string]>([
+    [{ priceKind: 'price', priceAmount: null }, 'a price without amount', 'priceAmount'],
+    [{ currency: 'euro' }, 'a bad currency', 'currency'],
+    [{ quantity: 0 }, 'zero quantity', 'quantity'],
+    [{ kind: 'lending' }, 'an unknown kind', 'kind'],
+    [{ partId: 999999999 }, 'an unknown part', 'partId'],
+  ])('when the listing has %o (%s), then 400 on %s', async (over, _what, field) => {
     const owner = await createUser();
     const part = await createPart();
     const a = await signIn(t, owner.login);
@@ -80,25 +81,25 @@ describe('listings', () => {
       region: 'Here',
       ...over,
     });
-    expect(res.status).toBe(400);
+    expectError(res, 400, 'validation_failed', field);
   });
 
   test('when the owner moves open → reserved → closed, then it leaves the exchange and cannot reopen; others get 403', async () => {
     const { a, listing, part } = await ownerWithListing({ priceKind: 'free', priceAmount: undefined, currency: undefined });
     const other = await signIn(t, (await createUser()).login);
-    expect((await send(other, 'patch', `/api/listings/${listing.id}`, { status: 'closed' })).status).toBe(403);
+    expectError(await send(other, 'patch', `/api/listings/${listing.id}`, { status: 'closed' }), 403, 'forbidden');
     expect((await send(a, 'patch', `/api/listings/${listing.id}`, { status: 'reserved' })).body.status).toBe('reserved');
     expect((await request(t.app).get(`/api/listings?partId=${part.id}`)).body.total).toBe(1);
     expect((await send(a, 'patch', `/api/listings/${listing.id}`, { status: 'closed' })).body.status).toBe('closed');
     expect((await request(t.app).get(`/api/listings?partId=${part.id}`)).body.total).toBe(0);
-    expect((await send(a, 'patch', `/api/listings/${listing.id}`, { status: 'open' })).status).toBe(400);
+    expectError(await send(a, 'patch', `/api/listings/${listing.id}`, { status: 'open' }), 400, 'validation_failed', 'status');
     expect((await a.get('/api/listings/mine')).body.items.map((l: { id: number }) => l.id)).toContain(listing.id);
   });
 
   test('when a moderator hides a listing with a note, then visitors get 404, the owner sees the note, and the trail records it', async () => {
     const { a, listing } = await ownerWithListing();
     const mod = await signIn(t, (await createUser({ role: 'moderator' })).login);
-    expect((await send(mod, 'post', `/api/listings/${listing.id}/visibility`, { hidden: true })).status).toBe(400);
+    expectError(await send(mod, 'post', `/api/listings/${listing.id}/visibility`, { hidden: true }), 400, 'validation_failed', 'note');
     const res = await send(mod, 'post', `/api/listings/${listing.id}/visibility`, {
       hidden: true,
       note: 'Selling mains-powered gear without cautions.',
@@ -112,7 +113,7 @@ describe('listings', () => {
     const audit = await mod.get(`/api/review/audit?targetType=listing&targetId=${listing.id}`);
     expect(audit.body.items[0]).toMatchObject({ action: 'listing.hide' });
     const maker = await signIn(t, (await createUser()).login);
-    expect((await send(maker, 'post', `/api/listings/${listing.id}/visibility`, { hidden: false, note: 'x' })).status).toBe(403);
+    expectError(await send(maker, 'post', `/api/listings/${listing.id}/visibility`, { hidden: false, note: 'x' }), 403, 'forbidden');
   });
 });
 
@@ -146,13 +147,13 @@ describe('messages', () => {
 
   test('when the owner writes to their own listing, an outsider reads a thread, or the body is empty, then 403 / 404 / 400', async () => {
     const { a, listing } = await ownerWithListing();
-    expect((await send(a, 'post', `/api/listings/${listing.id}/messages`, { body: 'me' })).status).toBe(403);
+    expectError(await send(a, 'post', `/api/listings/${listing.id}/messages`, { body: 'me' }), 403, 'forbidden');
     const b = await signIn(t, (await createUser()).login);
     const sent = await send(b, 'post', `/api/listings/${listing.id}/messages`, { body: 'hello' });
     const outsider = await signIn(t, (await createUser()).login);
-    expect((await outsider.get(`/api/inbox/${sent.body.threadId}`)).status).toBe(404);
-    expect((await send(b, 'post', `/api/listings/${listing.id}/messages`, { body: '   ' })).status).toBe(400);
-    expect((await request(t.app).get('/api/inbox')).status).toBe(401);
+    expectError(await outsider.get(`/api/inbox/${sent.body.threadId}`), 404, 'not_found');
+    expectError(await send(b, 'post', `/api/listings/${listing.id}/messages`, { body: '   ' }), 400, 'validation_failed', 'body');
+    expectError(await request(t.app).get('/api/inbox'), 401, 'unauthorized');
   });
 
   test('when a sender exceeds the message limit, then 429 in the error shape and nothing more is stored', async () => {

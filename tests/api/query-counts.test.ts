@@ -25,8 +25,11 @@ const BOUNDS = {
   partPage: 5, // the part, then runs with builds and makers, listings with owners, proposer, photos
   exchangeIndex: 5, // count + page, then parts, owners, photos
   listingPage: 4, // the listing, then its part, owner, photos
-  reviewQueue: 26, // session + user (3), five lists with counts (10), authors, four grouped counts, four run lookups, three report targets
+  reviewQueue: 25, // session + user (3), five lists with counts (10), authors, four grouped counts, four run lookups, three report targets
 };
+
+/** The mail outbox worker polls on its own timer; its statements belong to no request. */
+const OUTBOX_POLL = /\bmail_outbox\b/;
 
 let t: TestApp;
 let statements: string[] = [];
@@ -59,7 +62,9 @@ async function countGet(path: string, agent?: Agent): Promise<number> {
   invalidatePublicReads();
   statements = [];
   await (agent ?? request(t.app)).get(path).expect(200);
-  return statements.length;
+  const n = statements.filter((sql) => !OUTBOX_POLL.test(sql)).length;
+  if (process.env.SHOW_QUERY_COUNTS) process.stdout.write(`${n} statements: GET ${path}\n`);
+  return n;
 }
 
 /** A published build with `actuators` actuators × `runs` runs each, `extras` photos and entries, tagged for search. */
@@ -69,7 +74,13 @@ async function buildOfSize(tag: string, actuators: number, runs: number, extras:
   for (let a = 0; a < actuators; a++) {
     const first = await createRunRow({ buildId: build.id, partId: part.id, ownerId, gainNmPerV: 100 + a, status: 'accepted' });
     for (let r = 1; r < runs; r++) {
-      const run = await createRunRow({ buildId: build.id, partId: part.id, ownerId, gainNmPerV: 100 + r, status: r % 2 ? 'pending' : 'accepted' });
+      const run = await createRunRow({
+        buildId: build.id,
+        partId: part.id,
+        ownerId,
+        gainNmPerV: 100 + r,
+        status: r % 2 ? 'pending' : 'accepted',
+      });
       await CalibrationRun.update({ actuatorId: first.actuatorId }, { where: { id: run.id } });
       await Actuator.destroy({ where: { id: run.actuatorId } });
     }
@@ -188,7 +199,7 @@ describe('queries per public page', () => {
     const cold = await countGet(`/api/parts/${large.part.id}`);
     statements = [];
     await request(t.app).get(`/api/parts/${large.part.id}`).expect(200);
-    expect(statements.length).toBeLessThan(cold);
+    expect(statements.filter((sql) => !OUTBOX_POLL.test(sql)).length).toBeLessThan(cold);
   });
 });
 
@@ -210,7 +221,8 @@ describe('queries for the review queue', () => {
       ['run', run.id],
       ['listing', listing!.id],
     ];
-    for (const [targetType, targetId] of targets) await Report.create({ reporterId: ownerId, targetType, targetId, reason: 'spam', note: null });
+    for (const [targetType, targetId] of targets)
+      await Report.create({ reporterId: ownerId, targetType, targetId, reason: 'spam', note: null });
   }
 
   test('when more builds, runs, parts and reports wait, then the queue issues the same statements as before', async () => {

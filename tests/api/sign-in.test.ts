@@ -3,7 +3,9 @@ import request from 'supertest';
 import { startTestApp, type TestApp } from '../support/test-app.ts';
 import { signIn } from '../support/login.ts';
 import { createUser, uniqueLogin } from '../support/factories.ts';
+import { waitFor } from '../support/wait-for.ts';
 import { User } from '../../server/models/user.model.ts';
+import { OutboxMail } from '../../server/models/outbox-mail.model.ts';
 import { standInEmail } from '../../server/dev/demo-accounts.ts';
 
 describe('sign-in through the OAuth stand-in', () => {
@@ -37,8 +39,11 @@ describe('sign-in through the OAuth stand-in', () => {
     await signIn(t, login);
     await t.mail.waitFor((m) => m.to.includes(standInEmail(login)));
     await signIn(t, login);
-    await new Promise((r) => setTimeout(r, 300));
-    expect(t.mail.messages.filter((m) => m.to.includes(standInEmail(login)))).toHaveLength(1);
+    // A welcome mail is queued inside the sign-in request, so a second one would be in the outbox by now.
+    const to = standInEmail(login);
+    expect(await OutboxMail.count({ where: { toAddress: to } })).toBe(1);
+    await waitFor(async () => (await OutboxMail.count({ where: { toAddress: to, sentAt: null } })) === 0, { what: 'the outbox to drain' });
+    expect(t.mail.messages.filter((m) => m.to.includes(to))).toHaveLength(1);
   });
 
   test('when a handle is in ADMIN_LOGINS, then it becomes admin at sign-in', async () => {

@@ -14,6 +14,7 @@ import { startTestApp, type TestApp } from '../support/test-app.ts';
 import { signIn, type Agent } from '../support/login.ts';
 import { createBuildRow, createUser } from '../support/factories.ts';
 import { jpeg, png } from '../support/images.ts';
+import { expectError } from '../support/expect-error.ts';
 import { Photo } from '../../server/models/photo.model.ts';
 
 let t: TestApp;
@@ -259,6 +260,6 @@ describe('POST /api/builds/:buildId/photos with multipart tricks', () => {
     const res = await expectNothingStored(buildId, async () =>
       upload(buildId, [{ name: 'alt', value: 'x'.repeat(5000) }, photo(await jpeg(32, 24))]),
     );
-    expect(res.status).toBe(400);
+    expectError(res, 400, 'validation_failed');
   });
 });

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import request from 'supertest';
 import { startTestApp, type TestApp } from '../support/test-app.ts';
 import { readStrdFile } from '../support/nist-strd.ts';
+import { expectError } from '../support/expect-error.ts';
 
 const readStrd = (name: string) => readStrdFile(new URL(`../fixtures/${name}`, import.meta.url));
 
@@ -144,13 +145,13 @@ describe('POST /api/workbench/fit', () => {
       .send(
         '{"points":[{"volts":1e999,"displacement":0},{"volts":1,"displacement":1},{"volts":2,"displacement":2}],"displacementUnit":"nm"}',
       );
-    expect(res.status).toBe(400);
+    expectError(res, 400, 'validation_failed', 'points.0.volts');
   });
 
   test('when more than 100 000 points are sent, then 400', async () => {
     const points = Array.from({ length: 100_001 }, (_, i) => ({ volts: i, displacement: i }));
     const res = await post({ points, displacementUnit: 'nm' });
-    expect(res.status).toBe(400);
+    expectError(res, 400, 'validation_failed', 'points');
   });
 
   test('when exactly 100 000 points are sent, then 200', async () => {

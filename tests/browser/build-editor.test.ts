@@ -142,7 +142,7 @@ describe('journey: a maker writes a build and submits it for review', () => {
     await run.getByLabel('CSV text').fill(CSV);
     await run.getByRole('button', { name: 'Use pasted points' }).click();
     await run.getByText('14 points from pasted CSV are now in the grid.').waitFor();
-    await run.getByText('Row 9: displacement "abc" is not a number').waitFor();
+    await run.getByText('Row 9: displacement “abc” is not a number').waitFor();
     const preview = run.getByRole('region', { name: 'Live fit preview' });
     await preview.getByText('Gain (preview)').waitFor();
     expect(await preview.textContent()).toMatch(/9[56]\.\d+ ± \d+\.\d+\s*nm\/V/);

@@ -1,7 +1,7 @@
 // Process faults: the real server process (`node --import tsx server/index.ts`) against a private
 // MariaDB. SIGTERM with a request in flight, and two instances sharing one database and sessions.
 import { spawn, type ChildProcess } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { request as httpRequest, type ClientRequest, type IncomingMessage } from 'node:http';
 import { connect } from 'node:net';
 import { tmpdir } from 'node:os';
@@ -12,6 +12,7 @@ import { createSequelize } from '../../server/db/sequelize.ts';
 import { initModels } from '../../server/models/index.ts';
 import { createUser, uniqueLogin } from '../support/factories.ts';
 import { freePort, startPrivateMariaDb, type PrivateMariaDb } from '../support/private-mariadb.ts';
+import { waitFor } from '../support/wait-for.ts';
 
 const SESSION_SECRET = 'process-faults-session-secret-0123456789';
 const START_TIMEOUT_MS = 45_000;
@@ -150,6 +151,25 @@ async function api(b: Browser | { base: string }, method: string, path: string, 
   return { status: res.status, body: await res.json().catch(() => null) };
 }
 
+/**
+ * The kernel's view of the server end of a loopback connection (Linux /proc/net/tcp{,6}): established,
+ * and nothing we sent is left unread in either socket's queue, so the server process has read it all.
+ */
+function serverHasRead(serverPort: number, clientPort: number): boolean {
+  const hex = (port: number) => port.toString(16).toUpperCase().padStart(4, '0');
+  const rows = ['/proc/net/tcp', '/proc/net/tcp6']
+    .flatMap((file) => readFileSync(file, 'utf8').split('\n').slice(1))
+    .map((line) => line.trim().split(/\s+/))
+    .filter((cols) => cols.length > 4);
+  const end = (local: number, remote: number) => rows.find(([, l, r]) => l?.endsWith(`:${hex(local)}`) && r?.endsWith(`:${hex(remote)}`));
+  const server = end(serverPort, clientPort);
+  const client = end(clientPort, serverPort);
+  if (!server || !client) return false;
+  const [, serverUnread] = server[4]!.split(':').map((q) => parseInt(q, 16));
+  const [clientUnsent] = client[4]!.split(':').map((q) => parseInt(q, 16));
+  return server[3] === '01' && serverUnread === 0 && clientUnsent === 0;
+}
+
 const globalStatus = (name: string) => Number(db.sql(`SHOW GLOBAL STATUS LIKE '${name}'`).trim().split(/\s+/).pop());
 const appConnections = () =>
   Number(db.sql(`SELECT COUNT(*) FROM information_schema.PROCESSLIST WHERE USER = '${db.db.user}'`).trim().split(/\s+/).pop());
@@ -205,7 +225,8 @@ describe('SIGTERM with a request in flight', () => {
     });
     const half = Math.floor(payload.length / 2);
     await new Promise<void>((r) => req.write(payload.subarray(0, half), () => r()));
-    await new Promise((r) => setTimeout(r, 300));
+    // In flight means the server process has accepted the connection and read all of the first half.
+    await waitFor(() => serverHasRead(server.port, req.socket!.localPort!), { what: 'the server to read the first half' });
 
     const signalledAt = Date.now();
     server.child.kill('SIGTERM');
@@ -235,7 +256,7 @@ describe('SIGTERM with a request in flight', () => {
     expect(Date.now() - signalledAt).toBeLessThan(10_000);
     expect(server.output()).not.toMatch(/forced exit/);
     // The pool said goodbye (COM_QUIT) instead of dropping its connections.
-    for (let i = 0; i < 40 && appConnections() > 0; i++) await new Promise((r) => setTimeout(r, 50));
+    await waitFor(() => appConnections() === 0, { timeoutMs: 2000, what: 'the pool to close its connections' });
     expect(appConnections()).toBe(0);
     expect(globalStatus('Aborted_clients')).toBe(abortedBefore);
   }, 90_000);

@@ -1,10 +1,12 @@
+// The one form kit of the app: the input look, a labelled field with hint and error, the aria wiring,
+// form-level errors, and how the server's field issues land on a react-hook-form form.
 import type { ReactNode } from 'react';
 import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
 import { ApiError } from '@/lib/api-client.ts';
 
 /** Text inputs, selects and text areas of the app's forms (16 px text so phones do not zoom). */
 export const inputClass =
-  'w-full rounded-md border border-rule bg-white px-2.5 py-1.5 text-base text-ink aria-[invalid=true]:border-danger';
+  'w-full rounded-md border border-rule bg-white px-2.5 py-1.5 text-base text-ink aria-[invalid=true]:border-danger disabled:bg-paper-deep';
 
 /** A labelled control with an optional hint and its error; the control carries `id={id}` and `{...describe(id, error, !!hint)}`. */
 export function Field({
@@ -56,21 +58,35 @@ export function FormError({ message }: { message?: string }) {
   );
 }
 
+/** The message to show for a field: our own words for schema refusals, the server's or a parse message as they are. */
+export function fieldMessage(error: { type?: string | number; message?: string } | undefined, fallback: string): string | undefined {
+  if (!error) return undefined;
+  return error.type === 'server' || error.type === 'custom' ? (error.message ?? fallback) : fallback;
+}
+
+/** What to tell a person about a failed request, in one sentence. */
+export function errorMessage(error: unknown): string {
+  if (error instanceof ApiError) return error.message || 'That did not work; try again.';
+  return error instanceof Error ? error.message : 'That did not work; try again.';
+}
+
 const isIssues = (d: unknown): d is { path: string; message: string }[] =>
   Array.isArray(d) && d.every((i) => i && typeof i === 'object' && typeof i.path === 'string' && typeof i.message === 'string');
 
-/** Put the server's field issues on the fields they name; the rest (or a plain failure) on `root.server`. */
+/**
+ * Put the server's field issues on the fields they name (`points.3.volts` too: a nested path matches
+ * its first segment); whatever names no field of this form, or a failure without details, lands on
+ * `root.server`.
+ */
 export function applyServerErrors<T extends FieldValues>(error: unknown, setError: UseFormSetError<T>, fields: readonly string[]): void {
   const issues = error instanceof ApiError && isIssues(error.details) ? error.details : [];
-  const rest = issues.filter((i) => !fields.includes(i.path.split('.')[0]!));
+  const rest = issues.filter((i) => !i.path || !fields.includes(i.path.split('.')[0]!));
   for (const i of issues) if (!rest.includes(i)) setError(i.path as Path<T>, { type: 'server', message: i.message });
   if (issues.length === 0 || rest.length > 0) {
-    const message = rest.length
-      ? rest.map((i) => i.message).join(' ')
-      : error instanceof Error
-        ? error.message
-        : 'That did not work; try again.';
-    setError('root.server' as Path<T>, { type: 'server', message });
+    setError('root.server' as Path<T>, {
+      type: 'server',
+      message: rest.length ? rest.map((i) => i.message).join(' ') : errorMessage(error),
+    });
   }
 }
 

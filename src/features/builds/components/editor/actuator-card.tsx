@@ -8,7 +8,7 @@ import { ActuatorForm } from './actuator-form.tsx';
 import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { sig } from './format.ts';
 import { RunForm } from './run-form.tsx';
-import { errorMessage } from './server-errors.ts';
+import { errorMessage } from '@/components/ui/form-bits.tsx';
 import { StoredRun } from './stored-run.tsx';
 
 /** One actuator: what it is and how it is driven, its calibration runs, and a form for the next run. */

@@ -12,11 +12,11 @@ import {
 } from '@shared/schemas/actuator.ts';
 import type { PartChoiceDto } from '@shared/schemas/part.ts';
 import { Button } from '@/components/ui/button.tsx';
-import { describedBy, Field, fieldMessage, FormError, inputClass } from './field.tsx';
+import { describe, Field, fieldMessage, FormError, inputClass } from '@/components/ui/form-bits.tsx';
 import { HighVoltageCaution } from './high-voltage-caution.tsx';
 import { parseOptionalNumber } from '@/lib/csv/number-text.ts';
 import { PartPicker } from './part-picker.tsx';
-import { applyServerErrors, fieldsOf } from './server-errors.ts';
+import { applyServerErrors } from '@/components/ui/form-bits.tsx';
 
 const FIELDS = ['partId', 'label', 'axis', 'drive', 'amplifier', 'maxVolts', 'notes'] as const;
 const AXIS_LABELS = { X: 'X', Y: 'Y', Z: 'Z', XY: 'XY pair' } as const;
@@ -62,7 +62,7 @@ export function ActuatorForm({
     try {
       await onSave(values);
     } catch (err) {
-      applyServerErrors(err, setError, fieldsOf(FIELDS));
+      applyServerErrors(err, setError, FIELDS);
     }
   });
 
@@ -85,10 +85,10 @@ export function ActuatorForm({
         )}
       />
       <div className="grid gap-3 sm:grid-cols-3">
-        <Field label="Label (optional)" htmlFor={id('label')} error={errors.label?.message} className="sm:col-span-3">
+        <Field label="Label (optional)" id={id('label')} error={errors.label?.message} className="sm:col-span-3">
           <input id={id('label')} className={inputClass} placeholder="e.g. Z bender, X stack" {...register('label')} />
         </Field>
-        <Field label="Axis" htmlFor={id('axis')} error={errors.axis?.message}>
+        <Field label="Axis" id={id('axis')} error={errors.axis?.message}>
           <select id={id('axis')} className={inputClass} {...register('axis')}>
             {ACTUATOR_AXES.map((a) => (
               <option key={a} value={a}>
@@ -97,7 +97,7 @@ export function ActuatorForm({
             ))}
           </select>
         </Field>
-        <Field label="Drive" htmlFor={id('drive')} error={errors.drive?.message} className="sm:col-span-2">
+        <Field label="Drive" id={id('drive')} error={errors.drive?.message} className="sm:col-span-2">
           <select id={id('drive')} className={inputClass} {...register('drive')}>
             {ACTUATOR_DRIVES.map((d) => (
               <option key={d} value={d}>
@@ -106,16 +106,16 @@ export function ActuatorForm({
             ))}
           </select>
         </Field>
-        <Field label="Amplifier (optional)" htmlFor={id('amp')} error={errors.amplifier?.message} className="sm:col-span-2">
+        <Field label="Amplifier (optional)" id={id('amp')} error={errors.amplifier?.message} className="sm:col-span-2">
           <input id={id('amp')} className={inputClass} placeholder="e.g. 0–150 V op-amp stage" {...register('amplifier')} />
         </Field>
-        <Field label="Max volts (optional)" htmlFor={id('volts')} error={voltsError}>
+        <Field label="Max volts (optional)" id={id('volts')} error={voltsError}>
           <div className="flex items-center gap-2">
             <input
               id={id('volts')}
               inputMode="decimal"
               className={`${inputClass} num`}
-              {...describedBy(id('volts'), voltsError)}
+              {...describe(id('volts'), voltsError)}
               {...register('maxVolts', {
                 setValueAs: (v: unknown) => (typeof v === 'number' ? v : parseOptionalNumber(v as string | undefined)),
               })}
@@ -125,7 +125,7 @@ export function ActuatorForm({
         </Field>
       </div>
       <HighVoltageCaution maxVolts={typeof maxVolts === 'number' ? maxVolts : undefined} capacitanceNf={part?.capacitanceNf} />
-      <Field label="Notes (optional)" htmlFor={id('notes')} error={errors.notes?.message}>
+      <Field label="Notes (optional)" id={id('notes')} error={errors.notes?.message}>
         <textarea id={id('notes')} rows={2} className={inputClass} {...register('notes')} />
       </Field>
       <FormError message={errors.root?.server?.message} />

@@ -3,9 +3,9 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
 import { BUILD_STAGES, buildStageLabels, createBuildInput, INSTRUMENT_KINDS, instrumentKindLabels } from '@shared/schemas/build.ts';
 import { Button } from '@/components/ui/button.tsx';
-import { describedBy, Field, FormError, inputClass } from './field.tsx';
+import { describe, Field, FormError, inputClass } from '@/components/ui/form-bits.tsx';
 import { MarkdownField } from './markdown-field.tsx';
-import { applyServerErrors, fieldsOf } from './server-errors.ts';
+import { applyServerErrors } from '@/components/ui/form-bits.tsx';
 
 export type BuildDetailsValues = z.output<typeof createBuildInput>;
 const FIELDS = ['title', 'instrumentKind', 'summary', 'body', 'stage'] as const;
@@ -35,27 +35,27 @@ export function BuildDetailsForm({
       await onSave(values);
       reset(values, { keepIsSubmitSuccessful: true });
     } catch (err) {
-      applyServerErrors(err, setError, fieldsOf(FIELDS));
+      applyServerErrors(err, setError, FIELDS);
     }
   });
 
   return (
     <form onSubmit={submit} noValidate className="space-y-4">
-      <Field label="Title" htmlFor="build-title" error={errors.title?.message}>
+      <Field label="Title" id="build-title" error={errors.title?.message}>
         <input
           id="build-title"
           className={inputClass}
           autoComplete="off"
-          {...describedBy('build-title', errors.title?.message)}
+          {...describe('build-title', errors.title?.message)}
           {...register('title')}
         />
       </Field>
       <div className="grid gap-4 sm:grid-cols-2">
-        <Field label="Instrument kind" htmlFor="build-kind" error={errors.instrumentKind && 'Pick the kind of instrument.'}>
+        <Field label="Instrument kind" id="build-kind" error={errors.instrumentKind && 'Pick the kind of instrument.'}>
           <select
             id="build-kind"
             className={inputClass}
-            {...describedBy('build-kind', errors.instrumentKind?.message)}
+            {...describe('build-kind', errors.instrumentKind?.message)}
             {...register('instrumentKind')}
           >
             <option value="">Choose…</option>
@@ -66,7 +66,7 @@ export function BuildDetailsForm({
             ))}
           </select>
         </Field>
-        <Field label="Stage" htmlFor="build-stage" error={errors.stage?.message}>
+        <Field label="Stage" id="build-stage" error={errors.stage?.message}>
           <select id="build-stage" className={inputClass} {...register('stage')}>
             {BUILD_STAGES.map((s) => (
               <option key={s} value={s}>
@@ -76,12 +76,12 @@ export function BuildDetailsForm({
           </select>
         </Field>
       </div>
-      <Field label="Summary" htmlFor="build-summary" error={errors.summary?.message} hint="One or two sentences for the builds list.">
+      <Field label="Summary" id="build-summary" error={errors.summary?.message} hint="One or two sentences for the builds list.">
         <textarea
           id="build-summary"
           rows={2}
           className={inputClass}
-          {...describedBy('build-summary', errors.summary?.message, true)}
+          {...describe('build-summary', errors.summary?.message, true)}
           {...register('summary')}
         />
       </Field>

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import type { LogEntryDto } from '@shared/schemas/build.ts';
 import { PhotoUploader } from '@/components/photos/photo-uploader.tsx';
 import { useUploadPhoto } from '../../api/upload-photos.ts';
-import { inputClass } from './field.tsx';
+import { inputClass } from '@/components/ui/form-bits.tsx';
 
 /** The shared uploader, sending to this build; new photos go to the gallery or to the log entry picked beside Upload. */
 export function BuildPhotoUploader({ buildId, entries }: { buildId: number; entries: LogEntryDto[] }) {

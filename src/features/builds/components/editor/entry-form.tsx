@@ -2,9 +2,9 @@ import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { createEntryInput, type CreateEntryInput } from '@shared/schemas/build.ts';
 import { Button } from '@/components/ui/button.tsx';
-import { describedBy, Field, FormError, inputClass } from './field.tsx';
+import { describe, Field, FormError, inputClass } from '@/components/ui/form-bits.tsx';
 import { MarkdownField } from './markdown-field.tsx';
-import { applyServerErrors, fieldsOf } from './server-errors.ts';
+import { applyServerErrors } from '@/components/ui/form-bits.tsx';
 
 const today = () => new Date().toISOString().slice(0, 10);
 
@@ -39,28 +39,28 @@ export function EntryForm({
     try {
       await onSave(values);
     } catch (err) {
-      applyServerErrors(err, setError, fieldsOf(['entryDate', 'title', 'body']));
+      applyServerErrors(err, setError, ['entryDate', 'title', 'body']);
     }
   });
 
   return (
     <form onSubmit={submit} noValidate className="space-y-3 rounded-md border border-rule bg-white p-3">
       <div className="grid gap-3 sm:grid-cols-[12rem_1fr]">
-        <Field label="Date" htmlFor={id('date')} error={errors.entryDate && 'Give the date as a calendar date.'}>
+        <Field label="Date" id={id('date')} error={errors.entryDate && 'Give the date as a calendar date.'}>
           <input
             id={id('date')}
             type="date"
             className={inputClass}
-            {...describedBy(id('date'), errors.entryDate?.message)}
+            {...describe(id('date'), errors.entryDate?.message)}
             {...register('entryDate')}
           />
         </Field>
-        <Field label="Entry title" htmlFor={id('title')} error={errors.title?.message}>
+        <Field label="Entry title" id={id('title')} error={errors.title?.message}>
           <input
             id={id('title')}
             className={inputClass}
             autoComplete="off"
-            {...describedBy(id('title'), errors.title?.message)}
+            {...describe(id('title'), errors.title?.message)}
             {...register('title')}
           />
         </Field>

@@ -5,7 +5,7 @@ import { Markdown } from '@/components/ui/markdown.tsx';
 import { useDeleteEntry, useUpdateEntry } from '../../api/entries.ts';
 import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { EntryForm } from './entry-form.tsx';
-import { errorMessage } from './server-errors.ts';
+import { errorMessage } from '@/components/ui/form-bits.tsx';
 
 /** One log entry: read it, edit it in place, or delete it. */
 export function EntryItem({ buildId, entry }: { buildId: number; entry: LogEntryDto }) {

@@ -2,9 +2,9 @@ import type { LogEntryDto, PhotoDto } from '@shared/schemas/build.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { useDeletePhoto, useSetCoverPhoto, useUpdatePhoto } from '../../api/photos.ts';
 import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
-import { inputClass } from './field.tsx';
+import { inputClass } from '@/components/ui/form-bits.tsx';
 import { PhotoAltEditor } from '@/components/photos/photo-alt-editor.tsx';
-import { errorMessage } from './server-errors.ts';
+import { errorMessage } from '@/components/ui/form-bits.tsx';
 
 /** One stored photo with its upkeep: cover, order, alt text, log entry, delete. */
 export function GalleryPhoto({

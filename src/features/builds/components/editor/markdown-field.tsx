@@ -1,6 +1,6 @@
 import { useState, type TextareaHTMLAttributes } from 'react';
 import { Markdown } from '@/components/ui/markdown.tsx';
-import { describedBy, Field, inputClass } from './field.tsx';
+import { describe, Field, inputClass } from '@/components/ui/form-bits.tsx';
 
 /** A Markdown text area with a Write / Preview switch; the text area stays mounted so the form keeps its value. */
 export function MarkdownField({
@@ -24,7 +24,7 @@ export function MarkdownField({
   const tab = (on: boolean) =>
     `rounded-t-md border border-b-0 px-3 py-1 text-sm ${on ? 'border-rule bg-white font-medium text-ink' : 'border-transparent text-ink-soft hover:text-ink'}`;
   return (
-    <Field label={label} htmlFor={id} error={error} hint={hint ?? 'Markdown: # headings, **bold**, lists, links, tables.'}>
+    <Field label={label} id={id} error={error} hint={hint ?? 'Markdown: # headings, **bold**, lists, links, tables.'}>
       <div role="group" aria-label={`${label}: write or preview`} className="flex gap-1">
         <button type="button" className={tab(!preview)} aria-pressed={!preview} onClick={() => setPreview(false)}>
           Write
@@ -38,7 +38,7 @@ export function MarkdownField({
         rows={rows}
         hidden={preview}
         className={`${inputClass} font-mono text-sm`}
-        {...describedBy(id, error, true)}
+        {...describe(id, error, true)}
         {...textarea}
       />
       {preview && (

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { PART_CATEGORIES, choiceFromListItem, partCategoryLabels, type PartCategory, type PartChoiceDto } from '@shared/schemas/part.ts';
 import { usePartSearch } from '../../api/search-parts.ts';
-import { inputClass } from './field.tsx';
+import { inputClass } from '@/components/ui/form-bits.tsx';
 import { sig } from './format.ts';
 import { useDebouncedValue } from './use-debounced-value.ts';
 

@@ -2,7 +2,7 @@ import type { BuildDto } from '@shared/schemas/build.ts';
 import { usePhotoOrder } from '@/components/photos/use-photo-order.ts';
 import { useReorderPhotos } from '../../api/photos.ts';
 import { GalleryPhoto } from './gallery-photo.tsx';
-import { errorMessage } from './server-errors.ts';
+import { errorMessage } from '@/components/ui/form-bits.tsx';
 
 /** The build's stored photos in order; moving one keeps the keyboard focus on the moved photo's button. */
 export function PhotoGallery({ build }: { build: BuildDto }) {

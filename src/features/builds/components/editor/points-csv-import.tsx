@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Button } from '@/components/ui/button.tsx';
-import { inputClass } from './field.tsx';
+import { inputClass } from '@/components/ui/form-bits.tsx';
 import { parsePointsCsv, type ParsedPointsCsv } from './parse-points-csv.ts';
 import type { GridPoint } from './run-form-schema.ts';
 

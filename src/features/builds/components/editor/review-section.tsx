@@ -7,7 +7,7 @@ import { useSubmitBuild } from '../../api/submit-build.ts';
 import { useDeleteBuild } from '../../api/delete-build.ts';
 import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { EditorSection } from './editor-section.tsx';
-import { errorMessage } from './server-errors.ts';
+import { errorMessage } from '@/components/ui/form-bits.tsx';
 
 export const WHAT_HAPPENS_NEXT =
   "A moderator checks the write-up and runs. While it waits you can't edit it; you'll get an e-mail when it is published or returned with notes.";

@@ -1,6 +1,6 @@
 import { useFormContext } from 'react-hook-form';
 import type { CreateRunInput } from '@shared/schemas/run.ts';
-import { describedBy, Field, fieldMessage, inputClass } from './field.tsx';
+import { describe, Field, fieldMessage, inputClass } from '@/components/ui/form-bits.tsx';
 import type { RunFormValues } from './run-form-schema.ts';
 
 /** Preload, temperature and notes: what a reader needs to compare this run with others. */
@@ -14,7 +14,7 @@ export function RunConditionsFields({ idPrefix }: { idPrefix: string }) {
   return (
     <fieldset className="grid gap-3 sm:grid-cols-[2fr_1fr]">
       <legend className="mb-2 text-sm font-semibold">Conditions (optional)</legend>
-      <Field label="Preload" htmlFor={id('preload')} error={errors.conditions?.preload?.message}>
+      <Field label="Preload" id={id('preload')} error={errors.conditions?.preload?.message}>
         <input
           id={id('preload')}
           className={inputClass}
@@ -22,16 +22,16 @@ export function RunConditionsFields({ idPrefix }: { idPrefix: string }) {
           {...register('conditions.preload')}
         />
       </Field>
-      <Field label="Temperature (°C)" htmlFor={id('temp')} error={tempError}>
+      <Field label="Temperature (°C)" id={id('temp')} error={tempError}>
         <input
           id={id('temp')}
           inputMode="decimal"
           className={`${inputClass} num`}
-          {...describedBy(id('temp'), tempError)}
+          {...describe(id('temp'), tempError)}
           {...register('conditions.temperatureC')}
         />
       </Field>
-      <Field label="Condition notes" htmlFor={id('cnotes')} error={errors.conditions?.notes?.message} className="sm:col-span-2">
+      <Field label="Condition notes" id={id('cnotes')} error={errors.conditions?.notes?.message} className="sm:col-span-2">
         <input
           id={id('cnotes')}
           className={inputClass}
@@ -39,7 +39,7 @@ export function RunConditionsFields({ idPrefix }: { idPrefix: string }) {
           {...register('conditions.notes')}
         />
       </Field>
-      <Field label="Notes on this run" htmlFor={id('notes')} error={errors.notes?.message} className="sm:col-span-2">
+      <Field label="Notes on this run" id={id('notes')} error={errors.notes?.message} className="sm:col-span-2">
         <textarea id={id('notes')} rows={2} className={inputClass} {...register('notes')} />
       </Field>
     </fieldset>

@@ -3,14 +3,14 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import type { CreateRunInput, RunDto } from '@shared/schemas/run.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { useCreateRun } from '../../api/create-run.ts';
-import { fieldMessage, FormError } from './field.tsx';
+import { fieldMessage, FormError } from '@/components/ui/form-bits.tsx';
 import { FitPreview } from './fit-preview.tsx';
 import { PointsCsvImport } from './points-csv-import.tsx';
 import { PointsGrid } from './points-grid.tsx';
 import { RunConditionsFields } from './run-conditions-fields.tsx';
 import { runForm, runFormDefaults, type RunFormValues } from './run-form-schema.ts';
 import { RunSetupFields } from './run-setup-fields.tsx';
-import { applyServerErrors, fieldsOf } from './server-errors.ts';
+import { applyServerErrors } from '@/components/ui/form-bits.tsx';
 import { usePointsUnitConversion } from './use-points-unit-conversion.ts';
 
 const FIELDS = ['method', 'voltageUnit', 'displacementUnit', 'model', 'drive', 'conditions', 'notes', 'points'] as const;
@@ -42,7 +42,7 @@ export function RunForm({
     try {
       onSaved(await create.mutateAsync(values));
     } catch (err) {
-      applyServerErrors(err, form.setError, fieldsOf(FIELDS));
+      applyServerErrors(err, form.setError, FIELDS);
     }
   });
 

@@ -2,7 +2,7 @@ import { useFormContext, useWatch } from 'react-hook-form';
 import type { CreateRunInput } from '@shared/schemas/run.ts';
 import { RUN_METHODS, runMethodLabels } from '@shared/schemas/run.ts';
 import { displacementUnitLabels, displacementUnits, voltageUnitLabels, voltageUnits } from '@shared/units.ts';
-import { describedBy, Field, fieldMessage, inputClass } from './field.tsx';
+import { describe, Field, fieldMessage, inputClass } from '@/components/ui/form-bits.tsx';
 import type { RunFormValues } from './run-form-schema.ts';
 
 /** How the run was measured and driven, the units the points are in, and the fit model. */
@@ -20,8 +20,8 @@ export function RunSetupFields({ idPrefix }: { idPrefix: string }) {
 
   return (
     <div className="grid gap-3 sm:grid-cols-2">
-      <Field label="Method" htmlFor={id('method')} error={methodError}>
-        <select id={id('method')} className={inputClass} {...describedBy(id('method'), methodError)} {...register('method')}>
+      <Field label="Method" id={id('method')} error={methodError}>
+        <select id={id('method')} className={inputClass} {...describe(id('method'), methodError)} {...register('method')}>
           <option value="">Choose…</option>
           {RUN_METHODS.map((m) => (
             <option key={m} value={m}>
@@ -30,7 +30,7 @@ export function RunSetupFields({ idPrefix }: { idPrefix: string }) {
           ))}
         </select>
       </Field>
-      <Field label="Drive signal" htmlFor={id('drive')}>
+      <Field label="Drive signal" id={id('drive')}>
         <select id={id('drive')} className={inputClass} {...register('drive.kind')}>
           <option value="dc-steps">DC steps</option>
           <option value="sine">Sine</option>
@@ -38,28 +38,28 @@ export function RunSetupFields({ idPrefix }: { idPrefix: string }) {
       </Field>
       {driveKind === 'sine' && (
         <>
-          <Field label="Frequency (Hz)" htmlFor={id('freq')} error={freqError}>
+          <Field label="Frequency (Hz)" id={id('freq')} error={freqError}>
             <input
               id={id('freq')}
               inputMode="decimal"
               className={`${inputClass} num`}
-              {...describedBy(id('freq'), freqError)}
+              {...describe(id('freq'), freqError)}
               {...register('drive.frequencyHz')}
             />
           </Field>
-          <Field label="Amplitude (V)" htmlFor={id('amp')} error={ampError}>
+          <Field label="Amplitude (V)" id={id('amp')} error={ampError}>
             <input
               id={id('amp')}
               inputMode="decimal"
               className={`${inputClass} num`}
-              {...describedBy(id('amp'), ampError)}
+              {...describe(id('amp'), ampError)}
               {...register('drive.amplitudeV')}
             />
           </Field>
         </>
       )}
       <div className="grid grid-cols-2 gap-3">
-        <Field label="Drive unit" htmlFor={id('vunit')}>
+        <Field label="Drive unit" id={id('vunit')}>
           <select id={id('vunit')} className={inputClass} {...register('voltageUnit')}>
             {voltageUnits.map((u) => (
               <option key={u} value={u}>
@@ -68,7 +68,7 @@ export function RunSetupFields({ idPrefix }: { idPrefix: string }) {
             ))}
           </select>
         </Field>
-        <Field label="Displacement unit" htmlFor={id('dunit')}>
+        <Field label="Displacement unit" id={id('dunit')}>
           <select id={id('dunit')} className={inputClass} {...register('displacementUnit')}>
             {displacementUnits.map((u) => (
               <option key={u} value={u}>
@@ -78,7 +78,7 @@ export function RunSetupFields({ idPrefix }: { idPrefix: string }) {
           </select>
         </Field>
       </div>
-      <Field label="Fit model" htmlFor={id('model')}>
+      <Field label="Fit model" id={id('model')}>
         <select id={id('model')} className={inputClass} {...register('model')}>
           <option value="intercept">Line with intercept</option>
           <option value="origin">Line through the origin</option>

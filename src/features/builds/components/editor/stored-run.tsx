@@ -8,7 +8,7 @@ import { useDeleteRun } from '../../api/delete-run.ts';
 import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { FitSummary } from './fit-summary.tsx';
 import { sig } from './format.ts';
-import { errorMessage } from './server-errors.ts';
+import { errorMessage } from '@/components/ui/form-bits.tsx';
 
 const CalibrationChart = lazy(async () => ({ default: (await import('@/components/charts/calibration-chart.tsx')).CalibrationChart }));
 const STATUS: Record<RunDto['status'], [BadgeTone, string]> = {
