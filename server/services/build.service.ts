@@ -9,6 +9,7 @@ import { loadBuildForEdit, loadBuildForView, markEdited } from './build-access.t
 import { presentBuildDetail, summarizeBuilds } from './build-read.service.ts';
 import { pruneAfterRemoval } from './photo-files.ts';
 import { containsPattern } from '../db/like-pattern.ts';
+import { cachedPublicRead } from './public-read-cache.ts';
 
 /** Start a build as a draft owned by the actor. */
 export async function createBuild(actor: Actor | null, input: CreateBuildInput): Promise<BuildDto> {
@@ -17,8 +18,15 @@ export async function createBuild(actor: Actor | null, input: CreateBuildInput):
   return presentBuildDetail(actor, build);
 }
 
-/** Published builds, newest first, filtered by instrument kind and text. */
+/**
+ * Published builds, newest first, filtered by instrument kind and text. The same for every viewer, so
+ * a page is cached briefly (public-read-cache.ts, dropped on any write); cards never need the write-up.
+ */
 export async function listPublishedBuilds(query: ListBuildsQuery): Promise<BuildListDto> {
+  return cachedPublicRead(Build.sequelize!, `builds-index:${JSON.stringify(query)}`, () => loadPublishedBuilds(query));
+}
+
+async function loadPublishedBuilds(query: ListBuildsQuery): Promise<BuildListDto> {
   const where: WhereOptions<Build> = { status: 'published' };
   if (query.kind) Object.assign(where, { instrumentKind: query.kind });
   if (query.q) {
@@ -27,6 +35,7 @@ export async function listPublishedBuilds(query: ListBuildsQuery): Promise<Build
   }
   const { rows, count } = await Build.findAndCountAll({
     where,
+    attributes: { exclude: ['body'] },
     order: [
       ['publishedAt', 'DESC'],
       ['id', 'DESC'],
