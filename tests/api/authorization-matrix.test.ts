@@ -181,7 +181,7 @@ describe.concurrent.each(routes.filter((r) => r.key in expected && r.key in fixt
   });
 });
 
-// The workbench calculations store nothing and take no token (see the table above: anyone gets 200 without one).
+// The workbench calculations store nothing and need no token (tests/api/workbench-calculators.test.ts sends them without one).
 const pool = actorPool(t);
 describe("without the session's CSRF token", () => {
   test.concurrent.each(routes.filter((r) => !isWorkbench(r.key) && r.key in fixtures))(

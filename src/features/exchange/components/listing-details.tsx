@@ -5,7 +5,7 @@ import { partCategoryLabels } from '@shared/schemas/part.ts';
 import { Markdown } from '@/components/ui/markdown.tsx';
 import { paths } from '@/config/paths.ts';
 import { formatShort } from '@shared/format/measured-number.ts';
-import { formatDay } from './labels.ts';
+import { formatDate } from '@shared/format/dates.ts';
 import { ListingPhotos } from './listing-photos.tsx';
 
 function Row({ label, children }: { label: string; children: ReactNode }) {
@@ -45,7 +45,7 @@ export function ListingDetails({ listing: l }: { listing: ListingDto }) {
         <Row label="Ships to">{l.shipsTo ?? <span className="text-ink-soft">not stated</span>}</Row>
         <Row label="Posted by">{l.owner.login}</Row>
         <Row label="Posted">
-          <span className="num">{formatDay(l.createdAt)}</span>
+          <span className="num">{formatDate(l.createdAt)}</span>
         </Row>
       </dl>
       {l.notes && (

@@ -3,7 +3,8 @@ import type { ListingDto } from '@shared/schemas/listing.ts';
 import { StatusBadge } from '@/components/ui/status-badge.tsx';
 import { paths } from '@/config/paths.ts';
 import { KindBadge } from './kind-badge.tsx';
-import { formatDay, statusBadge } from './labels.ts';
+import { statusBadge } from './labels.ts';
+import { formatDate } from '@shared/format/dates.ts';
 import { ListingThumb } from './listing-thumb.tsx';
 import { StatusButtons } from './owner-controls.tsx';
 
@@ -26,7 +27,7 @@ export function MyListingRow({ listing: l }: { listing: ListingDto }) {
         </h2>
         <p className="text-sm text-ink-soft">
           <span className={l.priceKind === 'price' ? 'num text-ink' : 'text-ink'}>{l.priceLabel}</span> · {l.region} · changed{' '}
-          <span className="num">{formatDay(l.updatedAt)}</span>
+          <span className="num">{formatDate(l.updatedAt)}</span>
         </p>
         {l.hidden && l.hiddenNote && <p className="text-sm text-danger">Moderator's note: {l.hiddenNote}</p>}
       </div>

@@ -2,7 +2,8 @@ import { Link } from 'react-router-dom';
 import type { ThreadSummaryDto } from '@shared/schemas/listing.ts';
 import { UserBadge } from '@/components/ui/user-badge.tsx';
 import { paths } from '@/config/paths.ts';
-import { formatMoment, kindLabels } from './labels.ts';
+import { kindLabels } from './labels.ts';
+import { formatMoment } from '@shared/format/dates.ts';
 
 /** My conversations, latest first: who, about which listing, the last message and how many I have not read. */
 export function ThreadList({ threads }: { threads: ThreadSummaryDto[] }) {

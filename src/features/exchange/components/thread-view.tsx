@@ -6,7 +6,8 @@ import { paths } from '@/config/paths.ts';
 import { useReplyInThread } from '../api/message-mutations.ts';
 import { sendFailure } from './contact-form.tsx';
 import { FormError, inputClass } from '@/components/ui/form-bits.tsx';
-import { formatMoment, kindLabels } from './labels.ts';
+import { kindLabels } from './labels.ts';
+import { formatMoment } from '@shared/format/dates.ts';
 
 function ReplyBox({ thread }: { thread: ThreadDto }) {
   const reply = useReplyInThread(thread.id);

@@ -1,16 +1,9 @@
+import { formatDate } from '@shared/format/dates.ts';
 import { Link } from 'react-router-dom';
 import type { PartRunDto } from '@shared/schemas/part.ts';
 import { runMethodLabels, type RunMethod } from '@shared/schemas/run.ts';
 import { paths } from '@/config/paths.ts';
 import { formatShort, formatWithUncertainty } from '@shared/format/measured-number.ts';
-
-const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
-/** "22 Sep 2026": three-letter months ("Sept" is en-GB's own). */
-const formatDay = (iso: string) =>
-  dateFormat
-    .formatToParts(new Date(iso))
-    .map((p) => (p.type === 'month' ? p.value.slice(0, 3) : p.value))
-    .join('');
 
 function Gain({ run }: { run: PartRunDto }) {
   const [lo, hi] = run.gainCi95NmPerV;
@@ -85,7 +78,7 @@ export function PartRunsTable({ runs }: { runs: PartRunDto[] }) {
                 <td className="num whitespace-nowrap px-3 py-1.5 text-right">
                   {r.hysteresisPctFs === null ? '—' : `${formatShort(r.hysteresisPctFs, 2)} %`}
                 </td>
-                <td className="num whitespace-nowrap px-3 py-1.5 text-right">{formatDay(r.createdAt)}</td>
+                <td className="num whitespace-nowrap px-3 py-1.5 text-right">{formatDate(r.createdAt)}</td>
               </tr>
             ))}
           </tbody>

@@ -15,21 +15,6 @@ export function age(iso: string | null | undefined, now = Date.now()): string {
   return plural(Math.floor(ms / DAY), 'day');
 }
 
-const dateTime = new Intl.DateTimeFormat('en-GB', {
-  day: 'numeric',
-  month: 'short',
-  year: 'numeric',
-  hour: '2-digit',
-  minute: '2-digit',
-  timeZone: 'UTC',
-});
-const dateOnly = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
-
-/** "12 Mar 2025, 14:05 UTC". */
-export const formatDateTime = (iso: string) => `${dateTime.format(new Date(iso))} UTC`;
-/** "12 Mar 2025". */
-export const formatDate = (iso: string | null | undefined) => (iso ? dateOnly.format(new Date(iso)) : '—');
-
 /** A number to `digits` significant figures without trailing zeros or exponent noise. */
 export function sig(x: number | null | undefined, digits = 3): string {
   if (x === null || x === undefined || !Number.isFinite(x)) return '—';

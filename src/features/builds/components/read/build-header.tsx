@@ -3,7 +3,7 @@ import { LinkButton } from '@/components/ui/link-button.tsx';
 import { UserBadge } from '@/components/ui/user-badge.tsx';
 import { paths } from '@/config/paths.ts';
 import { BuildStatusBadge } from './build-status-badge.tsx';
-import { formatDate } from './format.ts';
+import { formatDate } from '@shared/format/dates.ts';
 
 /** Kind, title, review state, stage, maker, dates and what the viewer may do (links into the editor). */
 export function BuildHeader({ build }: { build: BuildDto }) {

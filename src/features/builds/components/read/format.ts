@@ -4,19 +4,6 @@ import type { BuildStatus } from '@shared/schemas/build.ts';
 import type { RunStatus } from '@shared/schemas/run.ts';
 import type { BadgeTone } from '@/components/ui/status-badge.tsx';
 
-const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
-
-/** "12 Mar 2025" from an ISO timestamp or a plain YYYY-MM-DD date (read as UTC, so no day shifts). */
-export function formatDate(iso: string | null | undefined): string {
-  if (!iso) return '—';
-  const d = new Date(iso.length === 10 ? `${iso}T00:00:00Z` : iso);
-  if (Number.isNaN(d.getTime())) return iso;
-  return dateFormat
-    .formatToParts(d)
-    .map((p) => (p.type === 'month' ? p.value.slice(0, 3) : p.value))
-    .join('');
-}
-
 /** Badge colour of each build review state. */
 export const buildStatusTone: Record<BuildStatus, BadgeTone> = {
   draft: 'neutral',

@@ -1,6 +1,6 @@
 import type { LogEntryDto } from '@shared/schemas/build.ts';
 import { Markdown } from '@/components/ui/markdown.tsx';
-import { formatDate } from './format.ts';
+import { formatDate } from '@shared/format/dates.ts';
 import { PhotoGrid } from '@/components/photos/photo-grid.tsx';
 
 /** The build's log entries in date order, each with its own photos. */

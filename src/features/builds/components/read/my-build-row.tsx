@@ -3,7 +3,7 @@ import { buildStageLabels, instrumentKindLabels, type BuildSummaryDto } from '@s
 import { Notice } from '@/components/ui/notice.tsx';
 import { paths } from '@/config/paths.ts';
 import { BuildStatusBadge } from './build-status-badge.tsx';
-import { formatDate } from './format.ts';
+import { formatDate } from '@shared/format/dates.ts';
 import { GainList } from './gain-list.tsx';
 
 const whatNext: Record<BuildSummaryDto['status'], string> = {

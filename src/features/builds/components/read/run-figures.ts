@@ -1,6 +1,7 @@
 import { runMethodLabels, type RunDto } from '@shared/schemas/run.ts';
 import { formatFixed, formatShort, formatWithUncertainty } from '@shared/format/measured-number.ts';
-import { formatDate, runStatusBadge } from './format.ts';
+import { runStatusBadge } from './format.ts';
+import { formatDate } from '@shared/format/dates.ts';
 
 /** A run's figures as the table and the phone cards print them: gain ± half the 95 % interval, R² to 4 places, %FS to 1. */
 export function runFigures(run: RunDto) {

@@ -2,7 +2,7 @@ import { lazy, Suspense } from 'react';
 import type { RunDto } from '@shared/schemas/run.ts';
 import { displacementUnitLabels, toNm, toVolts, voltageUnitLabels } from '@shared/units.ts';
 import { ErrorBoundary } from '@/components/ui/error-boundary.tsx';
-import { formatDate } from './format.ts';
+import { formatDate } from '@shared/format/dates.ts';
 
 const CalibrationChart = lazy(() => import('@/components/charts/calibration-chart.tsx').then((m) => ({ default: m.CalibrationChart })));
 

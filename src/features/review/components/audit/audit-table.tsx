@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import type { AuditEntryDto } from '@shared/schemas/review.ts';
 import { paths } from '@/config/paths.ts';
 import { TargetLink } from '../target-link.tsx';
-import { formatDateTime } from '../format.ts';
+import { formatDateTime } from '@shared/format/dates.ts';
 import { actionLabel, targetTypeLabels } from './audit-labels.ts';
 
 const cell =

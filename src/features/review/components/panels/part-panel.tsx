@@ -2,7 +2,8 @@ import { acceptRejectInput, type QueuePartDto } from '@shared/schemas/review.ts'
 import { partCategoryLabels, type PartCategory } from '@shared/schemas/part.ts';
 import { useDecidePart } from '@/features/review/api/decide-part.ts';
 import { DecisionForm } from '../decision/decision-form.tsx';
-import { age, formatDate } from '../format.ts';
+import { age } from '../format.ts';
+import { formatDate } from '@shared/format/dates.ts';
 import { acceptChoices } from './decision-choices.ts';
 import { Facts, PanelFrame } from './panel-frame.tsx';
 

@@ -1,7 +1,8 @@
 import { reportDecisionInput, reportReasonLabels, type QueueReportDto } from '@shared/schemas/review.ts';
 import { useDecideReport } from '@/features/review/api/decide-report.ts';
 import { DecisionForm } from '../decision/decision-form.tsx';
-import { age, formatDate, sentenceCase, targetTypeWords } from '../format.ts';
+import { age, sentenceCase, targetTypeWords } from '../format.ts';
+import { formatDate } from '@shared/format/dates.ts';
 import { reportChoices } from './decision-choices.ts';
 import { Facts, PanelFrame } from './panel-frame.tsx';
 import { TargetLink } from '../target-link.tsx';
