@@ -82,9 +82,14 @@ describe('PATCH /api/admin/users/:userId/role', () => {
     const admin = await createUser({ role: 'admin' });
     const target = await createUser();
     const agent = await signIn(t, admin.login);
-    for (const body of [{ role: 'overlord' }, { role: 'maker', extra: 1 }, {}]) {
+    // An unknown key is an issue of the whole body (path '').
+    for (const [body, field] of [
+      [{ role: 'overlord' }, 'role'],
+      [{ role: 'maker', extra: 1 }, ''],
+      [{}, 'role'],
+    ] as const) {
       const res = await agent.patch(`/api/admin/users/${target.id}/role`).set('X-CSRF-Token', agent.csrf).send(body);
-      expectError(res, 400, 'validation_failed');
+      expectError(res, 400, 'validation_failed', field);
     }
   });
 

@@ -386,9 +386,14 @@ describe('PATCH /api/builds/:buildId/photos/:photoId', () => {
   test('when the body is empty or has unknown fields, then 400', async () => {
     const { agent, build } = await makerWithBuild();
     const photo = await uploadOne(agent, build.id);
-    for (const body of [{}, { alt: '' }, { url: '/uploads/x.webp' }]) {
+    // An empty or unknown-keyed body is an issue of the whole body (path '').
+    for (const [body, field] of [
+      [{}, ''],
+      [{ alt: '' }, 'alt'],
+      [{ url: '/uploads/x.webp' }, ''],
+    ] as const) {
       const res = await agent.patch(`/api/builds/${build.id}/photos/${photo.id}`).set('X-CSRF-Token', agent.csrf).send(body);
-      expectError(res, 400, 'validation_failed');
+      expectError(res, 400, 'validation_failed', field);
     }
   });
 });

@@ -4,7 +4,7 @@ import { Link, useParams } from 'react-router-dom';
 import { ApiError } from '@/lib/api-client.ts';
 import { paths } from '@/config/paths.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
-import { partQueries } from '@/features/parts/api/part-queries.ts';
+import { partQueries } from '@/lib/part-queries.ts';
 import { LoadError, Loading } from '@/components/ui/load-states.tsx';
 import { PartView } from '@/features/parts/components/part-view.tsx';
 

@@ -7,7 +7,7 @@ import { Pager } from '@/components/ui/pager.tsx';
 import { paths } from '@/config/paths.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
 import { toActor } from '@/features/session/to-actor.ts';
-import { partQueries } from '@/features/parts/api/part-queries.ts';
+import { partQueries } from '@/lib/part-queries.ts';
 import { LoadError, Loading } from '@/components/ui/load-states.tsx';
 import { PartFilters } from '@/features/parts/components/part-filters.tsx';
 import { PartsTable } from '@/features/parts/components/parts-table.tsx';

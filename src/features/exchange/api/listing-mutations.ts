@@ -1,3 +1,4 @@
+import { partQueries } from '@/lib/part-queries.ts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { CreateListingInput, HideListingInput, ListingDto, UpdateListingInput } from '@shared/schemas/listing.ts';
 import { api } from '@/lib/api-client.ts';
@@ -10,7 +11,7 @@ function useListingWrite<V>(send: (v: V) => Promise<ListingDto>) {
     onSuccess: async (listing) => {
       qc.setQueryData(listingQueries.detail(listing.id).queryKey, listing);
       await qc.invalidateQueries({ queryKey: listingQueries.all });
-      await qc.invalidateQueries({ queryKey: ['parts', 'detail', listing.part.id] });
+      await qc.invalidateQueries({ queryKey: partQueries.detail(listing.part.id).queryKey });
     },
   });
 }

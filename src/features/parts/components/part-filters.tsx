@@ -3,7 +3,7 @@ import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { PART_CATEGORIES, partCategoryLabels, type PartCategory } from '@shared/schemas/part.ts';
 import { Button } from '@/components/ui/button.tsx';
-import { partQueries } from '../api/part-queries.ts';
+import { partQueries } from '@/lib/part-queries.ts';
 import { fieldClass, labelClass } from './filter-styles.ts';
 import { GainRangeField } from './gain-range-field.tsx';
 import type { PartFilters as Filters, PartSearch } from './use-part-search.ts';

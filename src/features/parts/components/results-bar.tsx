@@ -1,5 +1,5 @@
 import { PART_SORTS, type PartSort } from '@shared/schemas/part.ts';
-import { partsExportHref } from '../api/part-queries.ts';
+import { partsExportHref } from '@/lib/part-queries.ts';
 import { fieldClass, labelClass } from './filter-styles.ts';
 import type { PartSearch } from './use-part-search.ts';
 

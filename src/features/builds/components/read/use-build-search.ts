@@ -1,5 +1,6 @@
 import { useSearchParams } from 'react-router-dom';
-import { INSTRUMENT_KINDS, type InstrumentKind, type ListBuildsQuery } from '@shared/schemas/build.ts';
+import { listBuildsQuery, type InstrumentKind, type ListBuildsQuery } from '@shared/schemas/build.ts';
+import { readSearch, writeSearch } from '@/lib/url-search.ts';
 import { paths } from '@/config/paths.ts';
 
 /** Cards per page of the builds index. */
@@ -11,22 +12,18 @@ interface Filters {
   kind: InstrumentKind | undefined;
 }
 
-function toSearch({ q, kind }: Filters, page = 1): string {
-  const s = new URLSearchParams();
-  if (q) s.set('q', q);
-  if (kind) s.set('kind', kind);
-  if (page > 1) s.set('page', String(page));
-  const text = s.toString();
-  return text ? `?${text}` : '';
-}
+const toSearch = ({ q, kind }: Filters, page = 1) => writeSearch({ q, kind, page }, { page: 1 });
 
-/** The index's search lives in the URL (?q=&kind=&page=) so a search can be shared; odd values fall back to defaults. */
+/**
+ * The index's search lives in the URL (?q=&kind=&page=) so a search can be shared; it is read with the
+ * API's own query schema, and odd values fall back to defaults.
+ */
 export function useBuildSearch() {
   const [params, setParams] = useSearchParams();
-  const q = (params.get('q') ?? '').trim().slice(0, MAX_Q);
-  const rawKind = params.get('kind');
-  const kind = INSTRUMENT_KINDS.find((k) => k === rawKind);
-  const page = Math.min(10_000, Math.max(1, Math.floor(Number(params.get('page'))) || 1));
+  const read = readSearch(listBuildsQuery, params, ['pageSize']);
+  const q = read.q ?? '';
+  const kind = read.kind;
+  const page = read.page ?? 1;
   const query: Partial<ListBuildsQuery> = { q: q || undefined, kind, page, pageSize: BUILDS_PAGE_SIZE };
   return {
     q,

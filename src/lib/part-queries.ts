@@ -2,7 +2,10 @@ import { keepPreviousData, queryOptions } from '@tanstack/react-query';
 import type { GainHistogramDto, ListPartsQuery, PartDetailDto, PartListDto } from '@shared/schemas/part.ts';
 import { api, toQuery } from '@/lib/api-client.ts';
 
-/** One key tree for the parts registry; proposals invalidate `partQueries.all`. */
+/**
+ * The one query-key tree for parts, used by the registry, the build editor's part picker and the exchange:
+ * proposals and listings invalidate `partQueries.all` or a detail.
+ */
 export const partQueries = {
   all: ['parts'] as const,
   list: (p: Partial<ListPartsQuery>) =>
