@@ -1,4 +1,5 @@
 import { CartesianGrid, ReferenceLine, ResponsiveContainer, Scatter, ScatterChart, Tooltip, XAxis, YAxis } from 'recharts';
+import { chartColors, tickStyle } from './chart-theme.ts';
 
 /** One calibration point already in volts and nanometres. */
 export interface CalibrationChartPoint {
@@ -6,13 +7,6 @@ export interface CalibrationChartPoint {
   displacementNm: number;
   sweep?: 'up' | 'down';
 }
-
-const COPPER = '#B5532A';
-const TEAL = '#2F6F73';
-const INK = '#1D232B';
-const SOFT = '#4A525C';
-const RULE = '#D8D3C8';
-const tick = { fill: SOFT, fontSize: 11, fontFamily: '"JetBrains Mono Variable", ui-monospace, monospace' };
 
 const number = (v: number) => (Math.abs(v) >= 1000 ? v.toFixed(0) : String(Number(v.toPrecision(4))));
 
@@ -79,16 +73,16 @@ export function CalibrationChart({
     <div>
       <ResponsiveContainer width="100%" height={height}>
         <ScatterChart margin={{ top: 10, right: 14, bottom: 26, left: 4 }}>
-          <CartesianGrid stroke={RULE} strokeDasharray="3 3" />
+          <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
           <XAxis
             type="number"
             dataKey="volts"
             name="Drive"
             domain={x.domain}
             ticks={x.ticks}
-            tick={tick}
+            tick={tickStyle}
             tickFormatter={number}
-            label={{ value: 'Drive (V)', position: 'bottom', offset: 10, fill: SOFT, fontSize: 12 }}
+            label={{ value: 'Drive (V)', position: 'bottom', offset: 10, fill: chartColors.inkSoft, fontSize: 12 }}
           />
           <YAxis
             type="number"
@@ -96,7 +90,7 @@ export function CalibrationChart({
             name="Displacement"
             domain={y.domain}
             ticks={y.ticks}
-            tick={tick}
+            tick={tickStyle}
             tickFormatter={number}
             width={52}
             label={{
@@ -104,7 +98,7 @@ export function CalibrationChart({
               angle: -90,
               position: 'insideLeft',
               offset: 0,
-              fill: SOFT,
+              fill: chartColors.inkSoft,
               fontSize: 12,
               style: { textAnchor: 'middle' },
             }}
@@ -112,16 +106,16 @@ export function CalibrationChart({
           <Tooltip
             cursor={{ strokeDasharray: '3 3' }}
             formatter={(v, name) => [`${typeof v === 'number' ? number(v) : String(v)} ${unitOf[String(name)] ?? ''}`, name]}
-            contentStyle={{ fontFamily: tick.fontFamily, fontSize: 12, borderColor: RULE }}
+            contentStyle={{ fontFamily: tickStyle.fontFamily, fontSize: 12, borderColor: chartColors.rule }}
           />
-          {line && <ReferenceLine segment={[line[0], line[1]]} stroke={INK} strokeWidth={1.5} ifOverflow="hidden" />}
+          {line && <ReferenceLine segment={[line[0], line[1]]} stroke={chartColors.ink} strokeWidth={1.5} ifOverflow="hidden" />}
           {up.length > 0 && (
             <Scatter
               name="Up sweep"
               data={up}
-              fill={COPPER}
+              fill={chartColors.copper}
               shape="circle"
-              line={{ stroke: COPPER, strokeOpacity: 0.35 }}
+              line={{ stroke: chartColors.copper, strokeOpacity: 0.35 }}
               isAnimationActive={false}
             />
           )}
@@ -129,20 +123,20 @@ export function CalibrationChart({
             <Scatter
               name="Down sweep"
               data={down}
-              fill={TEAL}
+              fill={chartColors.teal}
               shape="triangle"
-              line={{ stroke: TEAL, strokeOpacity: 0.35 }}
+              line={{ stroke: chartColors.teal, strokeOpacity: 0.35 }}
               isAnimationActive={false}
             />
           )}
-          {plain.length > 0 && <Scatter name="Points" data={plain} fill={INK} shape="circle" isAnimationActive={false} />}
+          {plain.length > 0 && <Scatter name="Points" data={plain} fill={chartColors.ink} shape="circle" isAnimationActive={false} />}
         </ScatterChart>
       </ResponsiveContainer>
       <ul className="mt-1 flex flex-wrap justify-center gap-x-4 gap-y-1 text-xs text-ink-soft" aria-label="Legend">
         {up.length > 0 && (
           <li className="flex items-center gap-1">
             <svg width="10" height="10" aria-hidden="true">
-              <circle cx="5" cy="5" r="4" fill={COPPER} />
+              <circle cx="5" cy="5" r="4" fill={chartColors.copper} />
             </svg>
             Up sweep
           </li>
@@ -150,7 +144,7 @@ export function CalibrationChart({
         {down.length > 0 && (
           <li className="flex items-center gap-1">
             <svg width="10" height="10" aria-hidden="true">
-              <path d="M5 1 9 9H1z" fill={TEAL} />
+              <path d="M5 1 9 9H1z" fill={chartColors.teal} />
             </svg>
             Down sweep
           </li>
@@ -158,7 +152,7 @@ export function CalibrationChart({
         {plain.length > 0 && (
           <li className="flex items-center gap-1">
             <svg width="10" height="10" aria-hidden="true">
-              <circle cx="5" cy="5" r="4" fill={INK} />
+              <circle cx="5" cy="5" r="4" fill={chartColors.ink} />
             </svg>
             Points
           </li>
@@ -166,7 +160,7 @@ export function CalibrationChart({
         {line && (
           <li className="flex items-center gap-1">
             <svg width="16" height="10" aria-hidden="true">
-              <path d="M1 5h14" stroke={INK} strokeWidth="1.5" />
+              <path d="M1 5h14" stroke={chartColors.ink} strokeWidth="1.5" />
             </svg>
             Fitted line
           </li>

@@ -1,13 +1,6 @@
 import { CartesianGrid, ReferenceArea, ReferenceLine, ResponsiveContainer, Scatter, ScatterChart, XAxis, YAxis } from 'recharts';
 import { summarize } from '@shared/stats/quantiles.ts';
-
-const COPPER = '#B5532A';
-const TEAL = '#2F6F73';
-const TEAL_DARK = '#23575A';
-const INK = '#1D232B';
-const SOFT = '#4A525C';
-const RULE = '#D8D3C8';
-const tick = { fill: SOFT, fontSize: 11, fontFamily: '"JetBrains Mono Variable", ui-monospace, monospace' };
+import { chartColors, tickStyle } from './chart-theme.ts';
 
 const number = (v: number) => (Math.abs(v) >= 1000 ? v.toFixed(0) : String(Number(v.toPrecision(3))));
 /** Spread the dots vertically in a fixed pattern (golden-ratio steps) so equal gains stay visible. */
@@ -69,7 +62,7 @@ export function GainDistributionChart({
     <div>
       <ResponsiveContainer width="100%" height={height}>
         <ScatterChart margin={{ top: 10, right: 18, bottom: 24, left: 18 }}>
-          <CartesianGrid stroke={RULE} strokeDasharray="3 3" vertical horizontal={false} />
+          <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" vertical horizontal={false} />
           <XAxis
             type="number"
             dataKey="gain"
@@ -77,13 +70,28 @@ export function GainDistributionChart({
             domain={domain}
             ticks={ticks}
             allowDataOverflow
-            tick={tick}
+            tick={tickStyle}
             tickFormatter={number}
-            label={{ value: `Gain (nm/V)${log ? ', log scale' : ''}`, position: 'bottom', offset: 6, fill: SOFT, fontSize: 12 }}
+            label={{
+              value: `Gain (nm/V)${log ? ', log scale' : ''}`,
+              position: 'bottom',
+              offset: 6,
+              fill: chartColors.inkSoft,
+              fontSize: 12,
+            }}
           />
           <YAxis type="number" dataKey="y" domain={[0, 1]} hide />
           {s.p25 !== null && s.p75 !== null && (
-            <ReferenceArea x1={s.p25} x2={s.p75} y1={0.22} y2={0.78} fill={TEAL} fillOpacity={0.14} stroke={TEAL} strokeOpacity={0.6} />
+            <ReferenceArea
+              x1={s.p25}
+              x2={s.p75}
+              y1={0.22}
+              y2={0.78}
+              fill={chartColors.teal}
+              fillOpacity={0.14}
+              stroke={chartColors.teal}
+              strokeOpacity={0.6}
+            />
           )}
           {s.min !== null && s.p25 !== null && (
             <ReferenceLine
@@ -91,7 +99,7 @@ export function GainDistributionChart({
                 { x: s.min, y: 0.5 },
                 { x: s.p25, y: 0.5 },
               ]}
-              stroke={TEAL}
+              stroke={chartColors.teal}
             />
           )}
           {s.max !== null && s.p75 !== null && (
@@ -100,7 +108,7 @@ export function GainDistributionChart({
                 { x: s.p75, y: 0.5 },
                 { x: s.max, y: 0.5 },
               ]}
-              stroke={TEAL}
+              stroke={chartColors.teal}
             />
           )}
           {s.median !== null && (
@@ -109,19 +117,21 @@ export function GainDistributionChart({
                 { x: s.median, y: 0.16 },
                 { x: s.median, y: 0.84 },
               ]}
-              stroke={TEAL_DARK}
+              stroke={chartColors.tealDark}
               strokeWidth={2.5}
             />
           )}
-          {expectedNmPerV ? <ReferenceLine x={expectedNmPerV} stroke={INK} strokeDasharray="5 4" ifOverflow="extendDomain" /> : null}
+          {expectedNmPerV ? (
+            <ReferenceLine x={expectedNmPerV} stroke={chartColors.ink} strokeDasharray="5 4" ifOverflow="extendDomain" />
+          ) : null}
           {dots.length > 0 && (
-            <Scatter name="Accepted runs" data={dots} fill={TEAL} fillOpacity={0.75} shape="circle" isAnimationActive={false} />
+            <Scatter name="Accepted runs" data={dots} fill={chartColors.teal} fillOpacity={0.75} shape="circle" isAnimationActive={false} />
           )}
           <Scatter
             name="This run"
             data={[{ gain: candidate, y: 0.5 }]}
-            fill={COPPER}
-            stroke={INK}
+            fill={chartColors.copper}
+            stroke={chartColors.ink}
             shape="diamond"
             legendType="diamond"
             isAnimationActive={false}
@@ -132,7 +142,7 @@ export function GainDistributionChart({
         {dots.length > 0 && (
           <li className="flex items-center gap-1">
             <svg width="10" height="10" aria-hidden="true">
-              <circle cx="5" cy="5" r="4" fill={TEAL} />
+              <circle cx="5" cy="5" r="4" fill={chartColors.teal} />
             </svg>
             Accepted runs
           </li>
@@ -140,22 +150,22 @@ export function GainDistributionChart({
         {s.n > 1 && (
           <li className="flex items-center gap-1">
             <svg width="16" height="10" aria-hidden="true">
-              <rect x="1" y="1" width="14" height="8" fill={TEAL} fillOpacity="0.14" stroke={TEAL} />
-              <path d="M8 0v10" stroke={TEAL_DARK} strokeWidth="2" />
+              <rect x="1" y="1" width="14" height="8" fill={chartColors.teal} fillOpacity="0.14" stroke={chartColors.teal} />
+              <path d="M8 0v10" stroke={chartColors.tealDark} strokeWidth="2" />
             </svg>
             Quartiles and median
           </li>
         )}
         <li className="flex items-center gap-1">
           <svg width="12" height="12" aria-hidden="true">
-            <path d="M6 0.5 11.5 6 6 11.5 0.5 6z" fill={COPPER} stroke={INK} />
+            <path d="M6 0.5 11.5 6 6 11.5 0.5 6z" fill={chartColors.copper} stroke={chartColors.ink} />
           </svg>
           This run
         </li>
         {expectedNmPerV ? (
           <li className="flex items-center gap-1">
             <svg width="16" height="10" aria-hidden="true">
-              <path d="M1 5h14" stroke={INK} strokeDasharray="4 3" />
+              <path d="M1 5h14" stroke={chartColors.ink} strokeDasharray="4 3" />
             </svg>
             Expected from geometry
           </li>

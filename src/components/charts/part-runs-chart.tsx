@@ -11,6 +11,7 @@ import {
   type TooltipContentProps,
   type TooltipValueType,
 } from 'recharts';
+import { chartColors, tickStyle } from './chart-theme.ts';
 
 /** One accepted run as the strip plot shows it. */
 export interface PartRunsChartRun {
@@ -20,15 +21,6 @@ export interface PartRunsChartRun {
   maker: string;
   method: string;
 }
-
-const TEAL = '#2F6F73';
-const TEAL_DARK = '#23575A';
-const COPPER = '#B5532A';
-const AMBER = '#C98A00';
-const SOFT = '#4A525C';
-const RULE = '#D8D3C8';
-const MONO = '"JetBrains Mono Variable", ui-monospace, monospace';
-const tick = { fill: SOFT, fontSize: 11, fontFamily: MONO };
 
 const fmt = (v: number) => (Math.abs(v) >= 1000 ? v.toFixed(0) : String(Number(v.toPrecision(3))));
 /** Fixed vertical spread (golden-ratio steps) so runs of equal gain stay visible side by side. */
@@ -102,7 +94,7 @@ export function PartRunsChart({
   return (
     <ResponsiveContainer width="100%" height={height}>
       <ScatterChart margin={{ top: 8, right: 18, bottom: 24, left: 18 }} accessibilityLayer>
-        <CartesianGrid stroke={RULE} strokeDasharray="3 3" vertical horizontal={false} />
+        <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" vertical horizontal={false} />
         <XAxis
           type="number"
           dataKey="gainNmPerV"
@@ -111,9 +103,15 @@ export function PartRunsChart({
           domain={domain}
           allowDataOverflow
           ticks={log ? logTicks(domain[0], domain[1]) : linear.ticks}
-          tick={tick}
+          tick={tickStyle}
           tickFormatter={fmt}
-          label={{ value: `Gain (nm/V)${log ? ', log scale' : ''}`, position: 'bottom', offset: 6, fill: SOFT, fontSize: 12 }}
+          label={{
+            value: `Gain (nm/V)${log ? ', log scale' : ''}`,
+            position: 'bottom',
+            offset: 6,
+            fill: chartColors.inkSoft,
+            fontSize: 12,
+          }}
         />
         <YAxis type="number" dataKey="y" domain={[0, 1]} hide />
         {expected && (
@@ -122,14 +120,25 @@ export function PartRunsChart({
             x2={expected.highNmPerV}
             y1={0}
             y2={1}
-            fill={AMBER}
+            fill={chartColors.amber}
             fillOpacity={0.1}
             ifOverflow="hidden"
           />
         )}
-        {expected && <ReferenceLine x={expected.gainNmPerV} stroke={AMBER} strokeWidth={1.5} strokeDasharray="6 4" ifOverflow="hidden" />}
+        {expected && (
+          <ReferenceLine x={expected.gainNmPerV} stroke={chartColors.amber} strokeWidth={1.5} strokeDasharray="6 4" ifOverflow="hidden" />
+        )}
         {p25 !== null && p75 !== null && runs.length > 1 && (
-          <ReferenceArea x1={p25} x2={p75} y1={0.15} y2={0.85} fill={TEAL} fillOpacity={0.12} stroke={TEAL} strokeOpacity={0.6} />
+          <ReferenceArea
+            x1={p25}
+            x2={p75}
+            y1={0.15}
+            y2={0.85}
+            fill={chartColors.teal}
+            fillOpacity={0.12}
+            stroke={chartColors.teal}
+            strokeOpacity={0.6}
+          />
         )}
         {median !== null && (
           <ReferenceLine
@@ -137,12 +146,20 @@ export function PartRunsChart({
               { x: median, y: 0.08 },
               { x: median, y: 0.92 },
             ]}
-            stroke={TEAL_DARK}
+            stroke={chartColors.tealDark}
             strokeWidth={2.5}
           />
         )}
         <Tooltip content={RunTooltip} cursor={false} isAnimationActive={false} />
-        <Scatter name="Accepted runs" data={dots} fill={COPPER} fillOpacity={0.85} stroke="#fff" shape="circle" isAnimationActive={false} />
+        <Scatter
+          name="Accepted runs"
+          data={dots}
+          fill={chartColors.copper}
+          fillOpacity={0.85}
+          stroke="#fff"
+          shape="circle"
+          isAnimationActive={false}
+        />
       </ScatterChart>
     </ResponsiveContainer>
   );

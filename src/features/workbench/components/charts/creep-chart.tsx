@@ -1,7 +1,7 @@
 import { CartesianGrid, Legend, ResponsiveContainer, Scatter, ScatterChart, XAxis, YAxis } from 'recharts';
 import { formatTick } from '@shared/format/measured-number.ts';
 import { decadeTicks } from './axis-ticks.ts';
-import { axisLabelStyle, chartColors, tickStyle } from './chart-style.ts';
+import { axisLabelStyle, chartColors, tickStyle } from '@/components/charts/chart-theme.ts';
 
 /** A sample or a point of the fitted law: time since the step (s) and displacement (nm). */
 export interface CreepPoint {

@@ -12,7 +12,7 @@ import {
 } from 'recharts';
 import { formatTick } from '@shared/format/measured-number.ts';
 import { niceStep, stepTicks } from './axis-ticks.ts';
-import { axisLabelStyle, chartColors, tickStyle } from './chart-style.ts';
+import { axisLabelStyle, chartColors, tickStyle } from '@/components/charts/chart-theme.ts';
 
 /** A point of the tip plane in nm. */
 export interface PlanePoint {

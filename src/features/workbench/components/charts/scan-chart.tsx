@@ -1,7 +1,7 @@
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, XAxis, YAxis } from 'recharts';
 import { formatTick } from '@shared/format/measured-number.ts';
 import { decadeTicks } from './axis-ticks.ts';
-import { axisLabelStyle, chartColors, tickStyle } from './chart-style.ts';
+import { axisLabelStyle, chartColors, tickStyle } from '@/components/charts/chart-theme.ts';
 
 /** Smallest step at one DAC resolution. */
 export interface StepAtBits {

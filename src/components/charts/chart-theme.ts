@@ -1,10 +1,12 @@
-// Theme colours for SVG attributes (the same values as the tokens in src/index.css).
+// The one chart theme: colours for SVG attributes (the same values as the tokens in src/index.css) and
+// the text styles of ticks and axis labels, for every plot in the app.
 export const chartColors = {
   ink: '#1D232B',
   inkSoft: '#4A525C',
   rule: '#D8D3C8',
   copper: '#B5532A',
   teal: '#2F6F73',
+  tealDark: '#23575A',
   amber: '#C98A00',
   danger: '#B42318',
 } as const;
@@ -18,3 +20,6 @@ export const tickStyle = {
 
 /** Axis label text. */
 export const axisLabelStyle = { fontSize: 12, fill: chartColors.inkSoft } as const;
+
+/** Tooltip box: monospace figures, the rule colour for its border. */
+export const tooltipStyle = { fontFamily: tickStyle.fontFamily, fontSize: 12, borderColor: chartColors.rule } as const;
