@@ -1,3 +1,5 @@
+import type { ReactNode } from 'react';
+import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 
@@ -22,5 +24,22 @@ export function LoadError({ what, error, onRetry }: { what: string; error: Error
         </Button>
       </p>
     </Notice>
+  );
+}
+
+/** The page for a thing that is gone, hidden or never was: a title, why that may be, and ways back. */
+export function NotFound({ title, reason, links }: { title: string; reason: ReactNode; links: readonly { to: string; label: string }[] }) {
+  return (
+    <div className="mx-auto max-w-xl py-12 text-center">
+      <h1 className="text-xl font-semibold">{title}</h1>
+      <p className="mt-2 text-ink-soft">{reason}</p>
+      <p className="mt-6 flex justify-center gap-4">
+        {links.map((l) => (
+          <Link key={l.to} className="text-copper-dark underline" to={l.to}>
+            {l.label}
+          </Link>
+        ))}
+      </p>
+    </div>
   );
 }

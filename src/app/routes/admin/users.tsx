@@ -1,3 +1,4 @@
+import { Loading } from '@/components/ui/load-states.tsx';
 import { useSearchParams } from 'react-router-dom';
 import { can } from '@shared/policies.ts';
 import { PageHeader } from '@/components/ui/page-header.tsx';
@@ -77,7 +78,7 @@ export function AdminUsersPage() {
             ))}
           </tbody>
         </table>
-        {users.isPending && <p className="p-3 text-ink-soft">Loading…</p>}
+        {users.isPending && <Loading>Loading the accounts…</Loading>}
       </div>
       <p className="mt-3 flex items-center gap-3 text-sm">
         <span className="num">{total} accounts</span>

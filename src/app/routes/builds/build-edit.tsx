@@ -1,3 +1,4 @@
+import { Loading } from '@/components/ui/load-states.tsx';
 import { useQuery } from '@tanstack/react-query';
 import { Link, useParams } from 'react-router-dom';
 import { buildStatusLabels } from '@shared/schemas/build.ts';
@@ -29,7 +30,7 @@ export function BuildEditPage() {
       </div>
     );
   }
-  if (!build.data || !session?.user) return <p className="text-ink-soft">Loading the build…</p>;
+  if (!build.data || !session?.user) return <Loading>Loading the build…</Loading>;
   if (build.data.owner.id !== session.user.id) return <CannotEdit reason="not-owner" buildId={buildId} />;
 
   const b = build.data;

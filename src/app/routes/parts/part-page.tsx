@@ -1,24 +1,20 @@
 import { parseId } from '@/utils/parse-id.ts';
 import { useQuery } from '@tanstack/react-query';
-import { Link, useParams } from 'react-router-dom';
+import { useParams } from 'react-router-dom';
 import { ApiError } from '@/lib/api-client.ts';
 import { paths } from '@/config/paths.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
 import { partQueries } from '@/lib/part-queries.ts';
-import { LoadError, Loading } from '@/components/ui/load-states.tsx';
+import { LoadError, Loading, NotFound } from '@/components/ui/load-states.tsx';
 import { PartView } from '@/features/parts/components/part-view.tsx';
 
 function PartNotFound() {
   return (
-    <div className="mx-auto max-w-xl py-12 text-center">
-      <h1 className="text-xl font-semibold">No such part in the registry</h1>
-      <p className="mt-2 text-ink-soft">It may have been merged into another entry, or it has not been accepted yet.</p>
-      <p className="mt-4">
-        <Link to={paths.parts} className="text-copper-dark underline">
-          Search the parts registry
-        </Link>
-      </p>
-    </div>
+    <NotFound
+      title="No such part in the registry"
+      reason="It may have been merged into another entry, or it has not been accepted yet."
+      links={[{ to: paths.parts, label: 'Search the parts registry' }]}
+    />
   );
 }
 

@@ -1,3 +1,4 @@
+import { Loading } from '@/components/ui/load-states.tsx';
 import { useSearchParams } from 'react-router-dom';
 import { can } from '@shared/policies.ts';
 import type { ReviewAuthorDto } from '@shared/schemas/review.ts';
@@ -55,11 +56,7 @@ export function ReviewAuditPage() {
         total={trail.data?.total}
         onClearThing={() => setParams(paramsFromFilters({ ...filters, targetId: undefined, page: undefined }))}
       />
-      {trail.isPending && (
-        <p role="status" className="text-ink-soft">
-          Loading the audit trail…
-        </p>
-      )}
+      {trail.isPending && <Loading>Loading the audit trail…</Loading>}
       {trail.isError && (
         <p role="alert" className="text-danger">
           The audit trail did not load: {trail.error.message}

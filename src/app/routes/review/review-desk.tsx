@@ -1,3 +1,4 @@
+import { Loading } from '@/components/ui/load-states.tsx';
 import { useSearchParams } from 'react-router-dom';
 import { can } from '@shared/policies.ts';
 import { PageHeader } from '@/components/ui/page-header.tsx';
@@ -38,9 +39,7 @@ export function ReviewDeskPage() {
     return (
       <div>
         {header}
-        <p role="status" className="text-ink-soft">
-          Loading the queues…
-        </p>
+        <Loading>Loading the queues…</Loading>
       </div>
     );
   if (queue.isError) {
