@@ -1,12 +1,9 @@
 // `npm run bench:reads`: autocannon against /api/health and every public read (as a visitor, no cookie) in the same
 // run, on a bench database holding the demo scenario copied to a few hundred builds and listings. Loopback only.
 // Target: each read's throughput ≥ 1/3 of health's.
-import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
-import { createServer, type AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { setTimeout as sleep } from 'node:timers/promises';
 import autocannon from 'autocannon';
 import type { Sequelize } from 'sequelize';
 import { createSequelize } from '../server/db/sequelize.ts';
@@ -16,6 +13,7 @@ import { seedDemoOnce } from '../server/db/seed/demo.ts';
 import { demoPictureAttacher } from '../server/db/seed/demo-pictures.ts';
 import { quantileSorted } from '../shared/stats/quantiles.ts';
 import { benchConfig, startBenchDb } from './lib/bench-db.ts';
+import { startServerProcess } from './lib/bench-server.ts';
 
 const DATABASE = 'scanwright_reads';
 const COPIES = 20; // the demo's builds and listings, copied this many times over
@@ -77,62 +75,6 @@ async function pickIds(sq: Sequelize) {
     part: await one("SELECT id FROM parts WHERE status = 'accepted' ORDER BY accepted_run_count DESC, id LIMIT 1"),
     listing: await one("SELECT id FROM listings WHERE status <> 'closed' AND hidden_at IS NULL ORDER BY id DESC LIMIT 1"),
   };
-}
-
-const freePort = () =>
-  new Promise<number>((resolve) => {
-    const srv = createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as AddressInfo;
-      srv.close(() => resolve(port));
-    });
-  });
-
-/** The real server in its own process (as in production), so the load generator does not share its event loop. */
-async function startServerProcess(database: string) {
-  const config = benchConfig(database);
-  const port = await freePort();
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-    stdio: ['ignore', 'ignore', 'inherit'],
-    env: {
-      ...process.env,
-      NODE_ENV: 'production',
-      LOG_LEVEL: 'silent',
-      RATE_LIMITS: 'false',
-      PORT: String(port),
-      HOST: '127.0.0.1',
-      DB_HOST: config.db.host,
-      DB_PORT: String(config.db.port),
-      DB_NAME: config.db.name,
-      DB_USER: config.db.user,
-      DB_PASSWORD: config.db.password,
-      DB_POOL_MAX: '20',
-      GITHUB_CLIENT_ID: 'bench',
-      GITHUB_CLIENT_SECRET: 'bench',
-      SMTP_URL: 'smtp://127.0.0.1:9',
-      SESSION_SECRET: 'bench-session-secret-bench-session-secret',
-    },
-  });
-  const base = `http://127.0.0.1:${port}`;
-  for (let i = 0; i < 200; i++) {
-    if (
-      await fetch(`${base}/api/health`).then(
-        (r) => r.ok,
-        () => false,
-      )
-    )
-      return {
-        base,
-        stop: () =>
-          new Promise((r) => {
-            child.once('exit', r);
-            child.kill('SIGTERM');
-          }),
-      };
-    await sleep(100);
-  }
-  child.kill('SIGKILL');
-  throw new Error('server did not start');
 }
 
 interface Figures {

@@ -1,9 +1,6 @@
 // `npm run bench:search`: autocannon against the nm/V search and /api/health in the same run, at
 // 10 k and 100 k parts (seeded on first use by seed-scale). Loopback only, bounded in time.
 // Targets: search throughput ≥ 1/3 of health's; p95 at 100 k ≤ 1.5 × p95 at 10 k.
-import { spawn } from 'node:child_process';
-import { createServer, type AddressInfo } from 'node:net';
-import { setTimeout as sleep } from 'node:timers/promises';
 import autocannon from 'autocannon';
 import { createSequelize } from '../server/db/sequelize.ts';
 import { countPartsSql, selectPartsSql } from '../server/services/part-search.sql.ts';
@@ -11,6 +8,7 @@ import { listPartsQuery } from '../shared/schemas/part.ts';
 import { quantileSorted } from '../shared/stats/quantiles.ts';
 import { benchConfig, scaleDbName, startBenchDb } from './lib/bench-db.ts';
 import { seedScale } from './seed-scale.ts';
+import { startServerProcess } from './lib/bench-server.ts';
 
 const SIZES = [
   { parts: 10_000, runs: 100_000 },
@@ -18,62 +16,6 @@ const SIZES = [
 ];
 const SEARCH = '/api/parts?gainMin=80&gainMax=150&sort=-gain&pageSize=25';
 const DURATION_S = Number(process.env.BENCH_SECONDS ?? 10);
-
-const freePort = () =>
-  new Promise<number>((resolve) => {
-    const srv = createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as AddressInfo;
-      srv.close(() => resolve(port));
-    });
-  });
-
-/** The real server in its own process (as in production), so the load generator does not share its event loop. */
-async function startServerProcess(database: string) {
-  const config = benchConfig(database);
-  const port = await freePort();
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-    stdio: ['ignore', 'ignore', 'inherit'],
-    env: {
-      ...process.env,
-      NODE_ENV: 'production',
-      LOG_LEVEL: 'silent',
-      RATE_LIMITS: 'false',
-      PORT: String(port),
-      HOST: '127.0.0.1',
-      DB_HOST: config.db.host,
-      DB_PORT: String(config.db.port),
-      DB_NAME: config.db.name,
-      DB_USER: config.db.user,
-      DB_PASSWORD: config.db.password,
-      DB_POOL_MAX: '20',
-      GITHUB_CLIENT_ID: 'bench',
-      GITHUB_CLIENT_SECRET: 'bench',
-      SMTP_URL: 'smtp://127.0.0.1:9',
-      SESSION_SECRET: 'bench-session-secret-bench-session-secret',
-    },
-  });
-  const base = `http://127.0.0.1:${port}`;
-  for (let i = 0; i < 200; i++) {
-    if (
-      await fetch(`${base}/api/health`).then(
-        (r) => r.ok,
-        () => false,
-      )
-    )
-      return {
-        base,
-        stop: () =>
-          new Promise((r) => {
-            child.once('exit', r);
-            child.kill('SIGTERM');
-          }),
-      };
-    await sleep(100);
-  }
-  child.kill('SIGKILL');
-  throw new Error('server did not start');
-}
 
 interface Figures {
   rps: number;

@@ -1,5 +1,5 @@
 import { CartesianGrid, ReferenceLine, ResponsiveContainer, Scatter, ScatterChart, Tooltip, XAxis, YAxis } from 'recharts';
-import { chartColors, tickStyle } from './chart-theme.ts';
+import { chartColors, tickStyle, tooltipStyle } from './chart-theme.ts';
 
 /** One calibration point already in volts and nanometres. */
 export interface CalibrationChartPoint {
@@ -106,7 +106,7 @@ export function CalibrationChart({
           <Tooltip
             cursor={{ strokeDasharray: '3 3' }}
             formatter={(v, name) => [`${typeof v === 'number' ? number(v) : String(v)} ${unitOf[String(name)] ?? ''}`, name]}
-            contentStyle={{ fontFamily: tickStyle.fontFamily, fontSize: 12, borderColor: chartColors.rule }}
+            contentStyle={tooltipStyle}
           />
           {line && <ReferenceLine segment={[line[0], line[1]]} stroke={chartColors.ink} strokeWidth={1.5} ifOverflow="hidden" />}
           {up.length > 0 && (
