@@ -11,7 +11,8 @@ export default defineConfig({
     projects: [
       {
         resolve: { alias },
-        test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node' },
+        // Pure code: files share one module cache per worker (no per-file re-import).
+        test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node', isolate: false },
       },
       {
         resolve: { alias },
@@ -19,6 +20,9 @@ export default defineConfig({
           name: 'api',
           include: ['tests/api/**/*.test.ts'],
           environment: 'node',
+          // Each file builds its own app and rows (tests/support/test-app.ts), so files can share one module
+          // cache per worker instead of importing the whole server again for every file.
+          isolate: false,
           testTimeout: 20000,
           hookTimeout: 30000,
         },
