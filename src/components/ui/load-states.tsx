@@ -1,5 +1,7 @@
 import type { ReactNode } from 'react';
-import { Link } from 'react-router-dom';
+import { Link, useLocation } from 'react-router-dom';
+import { AnchorButton } from '@/components/ui/link-button.tsx';
+import { paths } from '@/config/paths.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 
@@ -42,4 +44,44 @@ export function NotFound({ title, reason, links }: { title: string; reason: Reac
       </p>
     </div>
   );
+}
+
+/** What a page shows a visitor where it needs a signed-in maker: why, and a sign-in button that comes back here. */
+export function SignInFirst({ title }: { title: string }) {
+  const location = useLocation();
+  return (
+    <Notice title={title}>
+      <p>
+        <AnchorButton href={paths.signIn(location.pathname)}>Sign in</AnchorButton>
+      </p>
+    </Notice>
+  );
+}
+
+/** A dashed box for an empty list: what is missing, and what to do about it. */
+export function EmptyState({ title, children }: { title: string; children?: ReactNode }) {
+  return (
+    <div className="rounded-lg border border-dashed border-rule bg-white p-6 text-center">
+      <p className="font-medium">{title}</p>
+      {children}
+    </div>
+  );
+}
+
+/** A query's three states on a page: loading, failed (with retry) or its data, handed to `children`. */
+export function QueryBlock<T>({
+  query,
+  loading,
+  what,
+  children,
+}: {
+  query: { isPending: boolean; isError: boolean; error: Error | null; data: T | undefined; refetch: () => unknown };
+  loading: string;
+  what: string;
+  children: (data: T) => ReactNode;
+}) {
+  if (query.isPending) return <Loading>{loading}</Loading>;
+  if (query.isError || query.data === undefined)
+    return <LoadError what={what} error={query.error ?? new Error('No data.')} onRetry={() => void query.refetch()} />;
+  return <>{children(query.data)}</>;
 }
