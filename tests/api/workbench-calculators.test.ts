@@ -1,27 +1,11 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import request from 'supertest';
-import { startTestApp, type TestApp } from '../support/test-app.ts';
+import { workbenchClient } from '../support/workbench-client.ts';
 import { calculators } from '../../shared/workbench/calculators/all-calculators.ts';
 
-let t: TestApp;
-let agent: ReturnType<typeof request.agent>;
-let csrf = '';
-beforeAll(async () => {
-  t = await startTestApp();
-  agent = request.agent(t.app);
-  csrf = (await agent.get('/api/session')).body.csrfToken;
-});
-afterAll(async () => {
-  await t.close();
-});
+const client = workbenchClient();
 
-// The calculations carry a session token like any page would, so their checks do not hinge on the
-// CSRF exemption; the exemption itself is checked on its own below.
-const post = (slug: string, body: unknown) =>
-  agent
-    .post(`/api/workbench/${slug}`)
-    .set('X-CSRF-Token', csrf)
-    .send(body as object);
+const { post } = client;
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 const errorShape = { error: { code: expect.any(String), message: expect.any(String) } };
 const cautionIds = (body: { cautions: { id: string }[] }) => body.cautions.map((c) => c.id);
@@ -30,7 +14,7 @@ const slugs = calculators.map((c) => c.slug);
 
 describe('POST /api/workbench/<slug> without a session or CSRF token', () => {
   test.each(slugs)('when a visitor with no cookie posts an empty body to %s, then 400 validation_failed, not 403', async (slug) => {
-    const res = await request(t.app).post(`/api/workbench/${slug}`).send({});
+    const res = await request(client.app()).post(`/api/workbench/${slug}`).send({});
     expect(res.body.error?.code).not.toBe('csrf_failed');
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('validation_failed');

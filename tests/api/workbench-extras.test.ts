@@ -1,24 +1,9 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import request from 'supertest';
-import { startTestApp, type TestApp } from '../support/test-app.ts';
+import { describe, expect, test } from 'vitest';
+import { workbenchClient } from '../support/workbench-client.ts';
 
-let t: TestApp;
-let agent: ReturnType<typeof request.agent>;
-let csrf = '';
-beforeAll(async () => {
-  t = await startTestApp();
-  agent = request.agent(t.app);
-  csrf = (await agent.get('/api/session')).body.csrfToken;
-});
-afterAll(async () => {
-  await t.close();
-});
+const client = workbenchClient();
 
-const post = (slug: string, body: unknown) =>
-  agent
-    .post(`/api/workbench/${slug}`)
-    .set('X-CSRF-Token', csrf)
-    .send(body as object);
+const { post } = client;
 const errorShape = (code: string) => ({ error: { code, message: expect.any(String) } });
 
 describe('POST /api/workbench/loaded-gain', () => {
