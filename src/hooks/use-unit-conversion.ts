@@ -1,4 +1,4 @@
-import { useEffect, useRef } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { useWatch, type FieldValues, type Path, type PathValue, type UseFormReturn } from 'react-hook-form';
 
 /** Ten significant figures: enough to keep a reading exact, few enough to read (0.1 µm → 100 nm, not 100.00000000001). */
@@ -36,3 +36,28 @@ export const convertTyped = (text: string, convert: (v: number) => number) => {
   const t = text.trim();
   return t !== '' && Number.isFinite(Number(t)) ? String(tidy(convert(Number(t)))) : text;
 };
+
+/**
+ * For numbers that are not rewritten (pasted text): when the unit picker `unitName` changes, ask
+ * whether the numbers really are in the new unit. `pending` holds the old unit until answered;
+ * `undo` puts it back.
+ */
+export function useUnitChangeQuestion<T extends FieldValues>(form: UseFormReturn<T, unknown, unknown>, unitName: Path<T>, enabled = true) {
+  const unit = useWatch({ control: form.control, name: unitName }) as string | undefined;
+  const previous = useRef(unit);
+  const [pending, setPending] = useState<string | null>(null);
+  useEffect(() => {
+    const from = previous.current;
+    previous.current = unit;
+    if (enabled && from && unit && from !== unit) setPending(from);
+  }, [unit, enabled]);
+  return {
+    pending,
+    keep: () => setPending(null),
+    undo: () => {
+      if (pending === null) return;
+      form.setValue(unitName, pending as PathValue<T, Path<T>>, { shouldValidate: true });
+      setPending(null);
+    },
+  };
+}

@@ -2,6 +2,9 @@ import { useDeferredValue, useId, useMemo } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button } from '@/components/ui/button.tsx';
+import { UnitChangeQuestion } from '@/components/ui/unit-change-question.tsx';
+import { useUnitChangeQuestion } from '@/hooks/use-unit-conversion.ts';
+import { displacementUnitLabels } from '@shared/units.ts';
 import { ChartFrame } from '@/features/workbench/components/chart-frame.tsx';
 import { LazyCreepChart } from '@/features/workbench/components/charts/lazy-charts.ts';
 import { FieldGroup, FormNumber, FormSelect } from '@/features/workbench/components/fields.tsx';
@@ -20,6 +23,7 @@ export function CreepPage() {
   const form = useForm({ resolver: zodResolver(creepForm, { error: friendlyError }), mode: 'onChange', defaultValues: defaults });
   const [text, unit, projectToS] = useWatch({ control: form.control, name: ['text', 'unit', 'projectToS'] });
   const deferredText = useDeferredValue(text);
+  const unitChange = useUnitChangeQuestion(form, 'unit');
   const r = useMemo(() => previewCreep(deferredText ?? '', unit, projectToS), [deferredText, unit, projectToS]);
   return (
     <ToolPage
@@ -55,6 +59,11 @@ export function CreepPage() {
                 </div>
               </div>
               <FormSelect form={form} name="unit" label="Displacement unit" options={displacementOptions} />
+              {unitChange.pending && (
+                <div className="sm:col-span-2">
+                  <UnitChangeQuestion unit={displacementUnitLabels[unit ?? 'nm']} onKeep={unitChange.keep} onUndo={unitChange.undo} />
+                </div>
+              )}
               <FormNumber form={form} name="projectToS" label="Project to" unit="s" optional />
               <div className="sm:col-span-2">
                 <RowProblems used={r.used} problems={r.problems} what="Line" noun="sample" />

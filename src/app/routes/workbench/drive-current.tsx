@@ -5,7 +5,8 @@ import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { formatSi } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
-import { capacitanceUnits, driveCurrentForm, frequencyUnits } from '@/features/workbench/simple/drive-current-form.ts';
+import { capacitanceUnits, frequencyUnits } from '@/features/workbench/quantity-units.ts';
+import { driveCurrentForm } from '@/features/workbench/simple/drive-current-form.ts';
 import { driveCurrentCalculator } from '@shared/workbench/calculators/simple-calculators.ts';
 
 const defaults = { capacitance: 3.4, capacitanceUnit: 'nF', amplitudeV: 100, frequency: 1, frequencyUnit: 'kHz' } as const;

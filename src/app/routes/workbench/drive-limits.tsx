@@ -4,7 +4,8 @@ import { Headline, NoResult, Quantity, ResultPanel, ResultRow, ResultNotesBlock 
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { formatFixed, formatSi, formatSig, type Formatted } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
-import { driveLimitsForm, limitCapacitanceUnits, limitFrequencyUnits } from '@/features/workbench/simple/drive-limits-form.ts';
+import { capacitanceUnits, frequencyUnits } from '@/features/workbench/quantity-units.ts';
+import { driveLimitsForm } from '@/features/workbench/simple/drive-limits-form.ts';
 import { driveLimitsCalculator } from '@shared/workbench/calculators/drive-limits-calculator.ts';
 
 const defaults = { capacitance: 3.4, capacitanceUnit: 'nF', amplitudeV: 100, frequency: 1, frequencyUnit: 'kHz' } as const;
@@ -24,9 +25,9 @@ export function DriveLimitsPage() {
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
             <FieldGroup legend="Load and sine drive" note="Capacitance: measure it, or take one quadrant from the piezo tube page.">
-              <FormQuantity form={form} name="capacitance" unitName="capacitanceUnit" label="Capacitance C" units={limitCapacitanceUnits} />
+              <FormQuantity form={form} name="capacitance" unitName="capacitanceUnit" label="Capacitance C" units={capacitanceUnits} />
               <FormNumber form={form} name="amplitudeV" label="Amplitude (peak)" unit="V" />
-              <FormQuantity form={form} name="frequency" unitName="frequencyUnit" label="Frequency f" units={limitFrequencyUnits} />
+              <FormQuantity form={form} name="frequency" unitName="frequencyUnit" label="Frequency f" units={frequencyUnits} />
             </FieldGroup>
             <FieldGroup legend="Triangle raster" note="Enter both or neither. One line period covers trace and retrace.">
               <FormNumber form={form} name="rasterSwingPpV" label="Swing" unit="V p-p" optional />

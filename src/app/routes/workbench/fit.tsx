@@ -17,7 +17,7 @@ import { RowProblems } from '@/features/workbench/components/row-problems.tsx';
 import { RowsPreview } from '@/features/workbench/fit/rows-preview.tsx';
 import { useFitPreview } from '@/features/workbench/fit/use-fit-preview.ts';
 import { useFitUnitConversion } from '@/features/workbench/fit/use-fit-unit-conversion.ts';
-import { Button } from '@/components/ui/button.tsx';
+import { UnitChangeQuestion } from '@/components/ui/unit-change-question.tsx';
 import { friendlyError } from '@/features/workbench/form/error-map.ts';
 import { displacementOptions, voltageOptions } from '@/features/workbench/unit-options.ts';
 
@@ -53,19 +53,12 @@ export function FitPage() {
               <FormSelect form={form} name="voltageUnit" label="Voltage unit" options={voltageOptions} />
               <FormSelect form={form} name="displacementUnit" label="Displacement unit" options={displacementOptions} />
               {unitChange.pending && (
-                <div role="alert" className="rounded-md border border-l-4 border-amber bg-amber/10 p-3 text-sm sm:col-span-2">
-                  <p>
-                    The pasted numbers were not changed: they are now read as{' '}
-                    {unitChange.pending.field === 'displacementUnit' ? lengthUnit : voltsUnit}. Is that what they are?
-                  </p>
-                  <div className="mt-2 flex flex-wrap gap-2">
-                    <Button variant="secondary" onClick={unitChange.keep}>
-                      Yes, they are in {unitChange.pending.field === 'displacementUnit' ? lengthUnit : voltsUnit}
-                    </Button>
-                    <Button variant="ghost" onClick={unitChange.undo}>
-                      No, put the unit back
-                    </Button>
-                  </div>
+                <div className="sm:col-span-2">
+                  <UnitChangeQuestion
+                    unit={unitChange.pending.field === 'displacementUnit' ? lengthUnit : voltsUnit}
+                    onKeep={unitChange.keep}
+                    onUndo={unitChange.undo}
+                  />
                 </div>
               )}
               <p className="text-xs text-ink-soft sm:col-span-2">

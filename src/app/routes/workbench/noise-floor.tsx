@@ -4,7 +4,8 @@ import { Headline, NoResult, Quantity, ResultPanel, ResultRow, ResultNotesBlock 
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { formatFixed, formatLengthNm } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
-import { bandwidthUnits, noiseFloorForm } from '@/features/workbench/scan/noise-floor-form.ts';
+import { frequencyUnits } from '@/features/workbench/quantity-units.ts';
+import { noiseFloorForm } from '@/features/workbench/scan/noise-floor-form.ts';
 import { noiseFloorCalculator, type NoiseSource } from '@shared/workbench/calculators/noise-floor-calculator.ts';
 
 const defaults = {
@@ -59,7 +60,7 @@ export function NoiseFloorPage() {
                 name="bandwidth"
                 unitName="bandwidthUnit"
                 label="Noise bandwidth B"
-                units={bandwidthUnits}
+                units={frequencyUnits}
                 optional
                 hint="For a single-pole roll-off about 1.57 × its corner (recalled value, not yet checked against a source)."
               />

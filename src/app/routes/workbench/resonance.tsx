@@ -6,10 +6,15 @@ import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page
 import { formatSi, formatSig } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { usePresetField } from '@/features/workbench/form/use-preset.ts';
+import { useUnitConversion } from '@/hooks/use-unit-conversion.ts';
 import { resonanceForm, resonancePresets } from '@/features/workbench/simple/resonance-form.ts';
 import { resonanceCalculator } from '@shared/workbench/calculators/resonance-calculator.ts';
 
 const defaults = { preset: 'PZT-5A', dimensionUnit: 'mm', length: 12, thickness: 0.6, youngsModulusGpa: 61, densityKgPerM3: 7750 } as const;
+/** Fields in the chosen dimension unit, converted when it changes (1 mm = 1000 µm). */
+const lengthFields = ['length', 'thickness', 'width'] as const;
+const convertDimension = (v: number, from: string, to: string) => (from === to ? v : from === 'mm' ? v * 1000 : v / 1000);
+
 const units = [
   { value: 'mm', label: 'mm' },
   { value: 'um', label: 'µm' },
@@ -18,6 +23,7 @@ const units = [
 export function ResonancePage() {
   const { form, live } = useLiveForm(resonanceForm, defaults, resonanceCalculator.compute);
   const unit = form.watch('dimensionUnit') === 'um' ? 'µm' : 'mm';
+  useUnitConversion(form, 'dimensionUnit', lengthFields, convertDimension);
   const { registration: presetField, preset } = usePresetField(form, resonancePresets, (p) => ({
     youngsModulusGpa: p.eGpa,
     densityKgPerM3: p.rho,
@@ -44,7 +50,13 @@ export function ResonancePage() {
               <FormNumber form={form} name="densityKgPerM3" label="Density ρ" unit="kg/m³" />
             </FieldGroup>
             <FieldGroup legend="Beam (clamped at one end)">
-              <FormSelect form={form} name="dimensionUnit" label="Dimensions in" options={units} />
+              <FormSelect
+                form={form}
+                name="dimensionUnit"
+                label="Dimensions in"
+                options={units}
+                hint="Changing it converts the dimensions."
+              />
               <FormNumber form={form} name="length" label="Free length L" unit={unit} />
               <FormNumber form={form} name="thickness" label="Thickness t" unit={unit} />
               <FormNumber form={form} name="width" label="Width w" unit={unit} optional hint="For the spring constant and a tip mass." />

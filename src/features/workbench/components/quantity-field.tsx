@@ -1,8 +1,12 @@
-import { useId, type ReactNode } from 'react';
+import { useCallback, useId, useMemo, type ReactNode } from 'react';
+import { useUnitConversion } from '@/hooks/use-unit-conversion.ts';
 import type { FieldValues, Path, UseFormReturn } from 'react-hook-form';
 import { asNumber, errorOf, FieldShell } from './fields.tsx';
 
-/** A number with its own unit picker beside it (e.g. capacitance in nF or µF); both controls labelled. */
+/**
+ * A number with its own unit picker beside it (e.g. capacitance in nF or µF); both controls labelled.
+ * Units with a `factor` (to the SI unit) convert the typed number when the unit changes.
+ */
 export function FormQuantity<T extends FieldValues, O>({
   form,
   name,
@@ -16,12 +20,23 @@ export function FormQuantity<T extends FieldValues, O>({
   name: Path<T>;
   unitName: Path<T>;
   label: string;
-  units: readonly { value: string; label: string }[];
+  units: readonly { value: string; label: string; factor?: number }[];
   hint?: ReactNode;
   optional?: boolean;
 }) {
   const id = useId();
   const error = errorOf(form, name);
+  const factors = useMemo(() => new Map(units.map((u) => [u.value, u.factor])), [units]);
+  const convert = useCallback(
+    (v: number, from: string, to: string) => {
+      const a = factors.get(from);
+      const b = factors.get(to);
+      return a !== undefined && b !== undefined ? (v * a) / b : v;
+    },
+    [factors],
+  );
+  const fields = useMemo(() => [name], [name]);
+  useUnitConversion(form as unknown as UseFormReturn<T, unknown, unknown>, unitName, fields, convert);
   return (
     <FieldShell id={id} label={label} hint={hint} optional={optional} error={error}>
       <div className="mt-1 flex gap-2">

@@ -1,14 +1,8 @@
 import { z } from 'zod';
 import { noiseFloorInput } from '@shared/schemas/workbench-extras.ts';
+import { hertzPer } from '../quantity-units.ts';
 
 const s = noiseFloorInput.shape;
-const hertzPer = { Hz: 1, kHz: 1e3 } as const;
-
-/** Bandwidth picker. */
-export const bandwidthUnits = [
-  { value: 'Hz', label: 'Hz' },
-  { value: 'kHz', label: 'kHz' },
-] as const;
 
 /** Noise density in nV/√Hz and bandwidth in Hz/kHz, converted to the shared schema's SI input. */
 export const noiseFloorForm = z

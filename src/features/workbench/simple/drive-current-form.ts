@@ -1,18 +1,6 @@
 import { z } from 'zod';
 import { driveCurrentInput } from '@shared/schemas/workbench.ts';
-
-const faradsPer = { nF: 1e-9, uF: 1e-6 } as const;
-const hertzPer = { Hz: 1, kHz: 1e3 } as const;
-
-/** Capacitance and frequency pickers for the form. */
-export const capacitanceUnits = [
-  { value: 'nF', label: 'nF' },
-  { value: 'uF', label: 'µF' },
-] as const;
-export const frequencyUnits = [
-  { value: 'Hz', label: 'Hz' },
-  { value: 'kHz', label: 'kHz' },
-] as const;
+import { faradsPer, hertzPer } from '../quantity-units.ts';
 
 /** Values in nF/µF and Hz/kHz as people write them, converted to the shared schema's SI units. */
 export const driveCurrentForm = z

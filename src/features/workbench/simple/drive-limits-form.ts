@@ -1,18 +1,6 @@
 import { z } from 'zod';
 import { driveLimitsInput } from '@shared/schemas/workbench-extras.ts';
-
-const faradsPer = { nF: 1e-9, uF: 1e-6 } as const;
-const hertzPer = { Hz: 1, kHz: 1e3 } as const;
-
-/** Capacitance and frequency pickers. */
-export const limitCapacitanceUnits = [
-  { value: 'nF', label: 'nF' },
-  { value: 'uF', label: 'µF' },
-] as const;
-export const limitFrequencyUnits = [
-  { value: 'Hz', label: 'Hz' },
-  { value: 'kHz', label: 'kHz' },
-] as const;
+import { faradsPer, hertzPer } from '../quantity-units.ts';
 
 const s = driveLimitsInput.shape;
 const scaled = (v: number | undefined, by: number) => (v === undefined ? undefined : v * by);
