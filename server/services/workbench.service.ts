@@ -1,6 +1,7 @@
 // Runs a shared workbench calculator for the API: the calculator composes the whole result (see
 // shared/workbench/calculators/); this turns its input refusals into 400s. Nothing is stored.
 import { FitInputError } from '@shared/workbench/fit-input-error.ts';
+import { asSentence } from '@shared/format/sentence.ts';
 import { AppError } from '../errors.ts';
 
 /** Some number inside is NaN or ±Infinity, which JSON would silently turn into null. */
@@ -25,16 +26,10 @@ export function asBadRequest<T>(compute: () => T): T {
     result = compute();
   } catch (err) {
     if (err instanceof FitInputError) throw new AppError(400, err.code, err.message, err.details);
-    if (err instanceof RangeError) throw new AppError(400, errorCode(err), sentence(err.message));
+    if (err instanceof RangeError) throw new AppError(400, errorCode(err), asSentence(err.message));
     throw err;
   }
   if (hasNonFinite(result))
     throw new AppError(400, 'out_of_range', 'These values are too large or too small to calculate with; try other units.');
   return result;
-}
-
-/** A refusal as a sentence: capital first letter, closing full stop. */
-function sentence(text: string): string {
-  const t = text.trim();
-  return `${t.charAt(0).toUpperCase()}${t.slice(1)}${/[.!?]$/.test(t) ? '' : '.'}`;
 }

@@ -22,7 +22,6 @@ export interface LineFit {
   residualSumSquares: number;
   residualStd: number;
   r2: number | null;
-  maxAbsResidual: number;
   xMin: number;
   xMax: number;
 }
@@ -81,12 +80,9 @@ function fitWithIntercept(
   const cy = meanY + sdy / n;
   const intercept = cy - slope * cx;
   let sse = 0;
-  let maxAbs = 0;
   for (let i = 0; i < n; i++) {
     const r = y[i] - cy - slope * (x[i] - cx);
     sse += r * r;
-    const a = r < 0 ? -r : r;
-    if (a > maxAbs) maxAbs = a;
     if (residualsOut) residualsOut[i] = r;
   }
   const df = n - 2;
@@ -101,7 +97,6 @@ function fitWithIntercept(
     residualSumSquares: sse,
     residualStd: s,
     r2: syy > 0 ? 1 - sse / syy : null,
-    maxAbsResidual: maxAbs,
     xMin,
     xMax,
   };
@@ -120,12 +115,9 @@ function fitThroughOrigin(x: Float64Array, y: Float64Array, n: number, xMin: num
   }
   const slope = sxy / sxx;
   let sse = 0;
-  let maxAbs = 0;
   for (let i = 0; i < n; i++) {
     const r = y[i] - slope * x[i];
     sse += r * r;
-    const a = r < 0 ? -r : r;
-    if (a > maxAbs) maxAbs = a;
     if (residualsOut) residualsOut[i] = r;
   }
   const df = n - 1;
@@ -140,7 +132,6 @@ function fitThroughOrigin(x: Float64Array, y: Float64Array, n: number, xMin: num
     residualSumSquares: sse,
     residualStd: s,
     r2: syy > 0 ? 1 - sse / syy : null,
-    maxAbsResidual: maxAbs,
     xMin,
     xMax,
   };

@@ -1,4 +1,5 @@
 import { useEffect, useRef, useState } from 'react';
+import { convertDisplacement, fromVolts, toVolts, type DisplacementUnit, type VoltageUnit } from '@shared/units.ts';
 import { useWatch, type FieldValues, type Path, type PathValue, type UseFormReturn } from 'react-hook-form';
 
 /** Ten significant figures: enough to keep a reading exact, few enough to read (0.1 µm → 100 nm, not 100.00000000001). */
@@ -60,4 +61,21 @@ export function useUnitChangeQuestion<T extends FieldValues>(form: UseFormReturn
       setPending(null);
     },
   };
+}
+
+/** Typed calibration points (text cells) converted from one pair of units to another; unreadable cells stay as typed. */
+export function convertTypedPoints<R extends { volts: string; displacement: string }>(
+  rows: readonly R[],
+  from: { voltageUnit: VoltageUnit; displacementUnit: DisplacementUnit },
+  to: { voltageUnit: VoltageUnit; displacementUnit: DisplacementUnit },
+): R[] {
+  return rows.map((r) => ({
+    ...r,
+    displacement:
+      from.displacementUnit === to.displacementUnit
+        ? r.displacement
+        : convertTyped(r.displacement, (v) => convertDisplacement(v, from.displacementUnit, to.displacementUnit)),
+    volts:
+      from.voltageUnit === to.voltageUnit ? r.volts : convertTyped(r.volts, (v) => fromVolts(toVolts(v, from.voltageUnit), to.voltageUnit)),
+  }));
 }

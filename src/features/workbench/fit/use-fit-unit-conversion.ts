@@ -1,8 +1,8 @@
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useRef } from 'react';
 import { useWatch } from 'react-hook-form';
-import { convertDisplacement, fromVolts, toVolts, type DisplacementUnit, type VoltageUnit } from '@shared/units.ts';
-import { convertTyped as convertText } from '@/hooks/use-unit-conversion.ts';
-import type { FitFormApi } from './fit-form.ts';
+import type { DisplacementUnit, VoltageUnit } from '@shared/units.ts';
+import { convertTypedPoints, useUnitChangeQuestion } from '@/hooks/use-unit-conversion.ts';
+import type { FitFormApi, FitFormValues } from './fit-form.ts';
 
 /**
  * Changing a unit picker converts the typed grid's numbers, so a reading keeps its physical value.
@@ -11,39 +11,26 @@ import type { FitFormApi } from './fit-form.ts';
 export function useFitUnitConversion(form: FitFormApi) {
   const [source, voltageUnit, displacementUnit] = useWatch({ control: form.control, name: ['source', 'voltageUnit', 'displacementUnit'] });
   const previous = useRef({ voltageUnit, displacementUnit });
-  const [pending, setPending] = useState<{ field: 'voltageUnit' | 'displacementUnit'; from: string } | null>(null);
+  const asForm = form as unknown as Parameters<typeof useUnitChangeQuestion<FitFormValues>>[0];
+  const lengthQuestion = useUnitChangeQuestion(asForm, 'displacementUnit', source === 'csv');
+  const voltsQuestion = useUnitChangeQuestion(asForm, 'voltageUnit', source === 'csv');
   useEffect(() => {
     const before = previous.current;
     previous.current = { voltageUnit, displacementUnit };
-    const lengthChanged = before.displacementUnit !== displacementUnit && before.displacementUnit && displacementUnit;
-    const voltsChanged = before.voltageUnit !== voltageUnit && before.voltageUnit && voltageUnit;
-    if (!lengthChanged && !voltsChanged) return;
-    if (source === 'csv') {
-      setPending(
-        lengthChanged ? { field: 'displacementUnit', from: before.displacementUnit! } : { field: 'voltageUnit', from: before.voltageUnit! },
-      );
-      return;
-    }
-    const rows = form.getValues('rows').map((r) => ({
-      ...r,
-      displacement: lengthChanged
-        ? convertText(r.displacement, (v) =>
-            convertDisplacement(v, before.displacementUnit as DisplacementUnit, displacementUnit as DisplacementUnit),
-          )
-        : r.displacement,
-      volts: voltsChanged
-        ? convertText(r.volts, (v) => fromVolts(toVolts(v, before.voltageUnit as VoltageUnit), voltageUnit as VoltageUnit))
-        : r.volts,
-    }));
-    form.setValue('rows', rows, { shouldValidate: true });
+    if (source === 'csv' || !before.voltageUnit || !before.displacementUnit || !voltageUnit || !displacementUnit) return;
+    if (before.voltageUnit === voltageUnit && before.displacementUnit === displacementUnit) return;
+    const units = (u: typeof before) => ({
+      voltageUnit: u.voltageUnit as VoltageUnit,
+      displacementUnit: u.displacementUnit as DisplacementUnit,
+    });
+    form.setValue('rows', convertTypedPoints(form.getValues('rows'), units(before), units({ voltageUnit, displacementUnit })), {
+      shouldValidate: true,
+    });
   }, [source, voltageUnit, displacementUnit, form]);
+  const question = lengthQuestion.pending !== null ? lengthQuestion : voltsQuestion.pending !== null ? voltsQuestion : null;
   return {
-    pending,
-    keep: () => setPending(null),
-    undo: () => {
-      if (!pending) return;
-      form.setValue(pending.field, pending.from as never);
-      setPending(null);
-    },
+    pending: question ? { field: question === lengthQuestion ? ('displacementUnit' as const) : ('voltageUnit' as const) } : null,
+    keep: () => question?.keep(),
+    undo: () => question?.undo(),
   };
 }

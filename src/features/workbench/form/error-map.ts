@@ -2,6 +2,7 @@
 // be below its maximum.") keep precedence over this map.
 import type { z } from 'zod';
 import { FitInputError } from '@shared/workbench/fit-input-error.ts';
+import { asSentence } from '@shared/format/sentence.ts';
 
 type Issue = Parameters<z.core.$ZodErrorMap>[0];
 
@@ -29,8 +30,7 @@ export function friendlyError(issue: Issue): string | undefined {
 /** A refusal from a shared calculation as a sentence the page can show; other errors rethrow. */
 export function refusalMessage(err: unknown): string {
   if (err instanceof FitInputError || err instanceof RangeError) {
-    const text = err.message.trim();
-    return `${text.charAt(0).toUpperCase()}${text.slice(1)}${/[.!?]$/.test(text) ? '' : '.'}`;
+    return asSentence(err.message);
   }
   throw err;
 }
