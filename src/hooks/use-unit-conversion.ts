@@ -46,17 +46,26 @@ export const convertTyped = (text: string, convert: (v: number) => number) => {
 export function useUnitChangeQuestion<T extends FieldValues>(form: UseFormReturn<T, unknown, unknown>, unitName: Path<T>, enabled = true) {
   const unit = useWatch({ control: form.control, name: unitName }) as string | undefined;
   const previous = useRef(unit);
+  const reverting = useRef<string | null>(null);
   const [pending, setPending] = useState<string | null>(null);
   useEffect(() => {
     const from = previous.current;
     previous.current = unit;
+    if (reverting.current !== null && unit === reverting.current) {
+      reverting.current = null; // our own undo, not a new change to ask about
+      return;
+    }
     if (enabled && from && unit && from !== unit) setPending(from);
   }, [unit, enabled]);
+  useEffect(() => {
+    if (!enabled) setPending(null);
+  }, [enabled]);
   return {
     pending,
     keep: () => setPending(null),
     undo: () => {
       if (pending === null) return;
+      reverting.current = pending;
       form.setValue(unitName, pending as PathValue<T, Path<T>>, { shouldValidate: true });
       setPending(null);
     },
