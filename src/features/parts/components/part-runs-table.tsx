@@ -4,6 +4,7 @@ import type { PartRunDto } from '@shared/schemas/part.ts';
 import { runMethodLabels, type RunMethod } from '@shared/schemas/run.ts';
 import { paths } from '@/config/paths.ts';
 import { formatShort, formatWithUncertainty } from '@shared/format/measured-number.ts';
+import { PlusMinusLabel } from '@/components/ui/plus-minus-label.tsx';
 
 function Gain({ run }: { run: PartRunDto }) {
   const [lo, hi] = run.gainCi95NmPerV;
@@ -15,10 +16,7 @@ function Gain({ run }: { run: PartRunDto }) {
       {f.uncertainty && (
         <span className="text-ink-soft">
           {' '}
-          ± {f.uncertainty}{' '}
-          <abbr title="half-width of the 95 % interval (Student t)" className="no-underline">
-            (95 %)
-          </abbr>
+          ± {f.uncertainty} <PlusMinusLabel kind="ci95" />
         </span>
       )}
     </>

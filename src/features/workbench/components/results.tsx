@@ -1,8 +1,9 @@
 import { useId, type ReactNode } from 'react';
-import { formatWithUncertainty, plusMinusLabels, type Formatted, type PlusMinusKind } from '@shared/format/measured-number.ts';
+import { formatWithUncertainty, type Formatted, type PlusMinusKind } from '@shared/format/measured-number.ts';
 import type { ResultWarning } from '@shared/workbench/calculators/calculator.ts';
 import type { Caution } from '@shared/workbench/safety.ts';
 import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
+import { PlusMinusLabel } from '@/components/ui/plus-minus-label.tsx';
 
 /** A formatted number in monospace tabular figures, with its unit after it. */
 export function Quantity({ q, className = '' }: { q: Formatted; className?: string }) {
@@ -30,17 +31,12 @@ export function Gain({
   className?: string;
 }) {
   const f = formatWithUncertainty(value, plusMinus);
-  const label = kind ? plusMinusLabels[kind] : null;
   return (
     <span className={`whitespace-nowrap ${className}`}>
       <span className="num">{f.value}</span>
       {f.uncertainty && <span className="num"> ± {f.uncertainty}</span>}
       <span> nm/V</span>
-      {f.uncertainty && label && (
-        <abbr title={label.long} className="ml-1 align-middle text-[0.6em] font-normal text-ink-soft no-underline">
-          ({label.short})
-        </abbr>
-      )}
+      {f.uncertainty && kind && <PlusMinusLabel kind={kind} className="ml-1 align-middle text-[0.6em]" />}
     </span>
   );
 }

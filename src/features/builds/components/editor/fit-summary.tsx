@@ -1,5 +1,6 @@
 import type { FitResultDto } from '@shared/schemas/workbench.ts';
 import { interval, pct, r2, withUncertainty } from './format.ts';
+import { PlusMinusLabel } from '@/components/ui/plus-minus-label.tsx';
 
 /** Gain ± 95 % half-width, interval, R², hysteresis, nonlinearity and n, as the preview and stored runs show them. */
 export function FitSummary({ fit, label }: { fit: FitResultDto; label: string }) {
@@ -16,9 +17,7 @@ export function FitSummary({ fit, label }: { fit: FitResultDto; label: string })
       <p className="text-sm text-ink-soft">{label}</p>
       <p className="num text-xl font-semibold">
         {withUncertainty(fit.gainNmPerV, half)} <span className="text-base font-normal">nm/V</span>{' '}
-        <abbr title="half-width of the 95 % interval (Student t)" className="text-sm font-normal text-ink-soft no-underline">
-          (95 %)
-        </abbr>
+        <PlusMinusLabel kind="ci95" className="text-sm" />
       </p>
       <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
         {rows.map(([k, v]) => (

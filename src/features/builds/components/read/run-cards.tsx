@@ -1,6 +1,7 @@
 import type { RunDto } from '@shared/schemas/run.ts';
 import { StatusBadge } from '@/components/ui/status-badge.tsx';
 import { runFigures } from './run-figures.ts';
+import { PlusMinusLabel } from '@/components/ui/plus-minus-label.tsx';
 
 /** The runs at phone width: one box per run with the same figures as the table, units beside each. */
 export function RunCards({
@@ -38,12 +39,7 @@ export function RunCards({
             <p className="num mt-2 text-base font-medium">
               {f.gain.value}
               {f.gain.uncertainty && <span className="font-normal text-ink-soft"> ± {f.gain.uncertainty}</span>} nm/V
-              {f.gain.uncertainty && (
-                <abbr title="half-width of the 95 % interval (Student t)" className="ml-1 text-xs font-normal text-ink-soft no-underline">
-                  (95 %)
-                </abbr>
-              )}
-              <span className="ml-1 font-sans text-xs font-normal text-ink-soft">(95 %)</span>
+              {f.gain.uncertainty && <PlusMinusLabel kind="ci95" className="ml-1 font-sans text-xs" />}
             </p>
             <dl className="mt-1 grid grid-cols-2 gap-x-3 text-xs">
               <dt className="text-ink-soft">R²</dt>
