@@ -22,6 +22,8 @@ import { sessionUser } from './middleware/session-user.ts';
 import { outsideApi, unlessAnonymousRead } from './middleware/anonymous-reads.ts';
 import { errorHandler, apiNotFound } from './middleware/error-handler.ts';
 import { limiter } from './middleware/rate-limit.ts';
+import { bearerToken, unlessBearer } from './middleware/bearer-token.ts';
+import { idempotency } from './middleware/idempotency.ts';
 import { healthRoutes } from './routes/health.routes.ts';
 import { sessionRoutes } from './routes/session.routes.ts';
 import { authRoutes } from './routes/auth.routes.ts';
@@ -35,6 +37,7 @@ import { partRoutes } from './routes/part.routes.ts';
 import { reviewRoutes } from './routes/review.routes.ts';
 import { accountRoutes } from './routes/account.routes.ts';
 import { exchangeRoutes } from './routes/exchange.routes.ts';
+import { apiTokenRoutes } from './routes/api-token.routes.ts';
 
 export interface AppHandle {
   app: Express;
@@ -126,6 +129,8 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   }
   app.use('/uploads', express.static(resolve(config.uploadsDir), { index: false, immutable: true, maxAge: '30d', fallthrough: false }));
   app.use(healthRoutes(sequelize));
+  // A rig's personal API token: checked (401/403/429) before any body is read; such requests skip sessions and CSRF.
+  app.use(...bearerToken(config.rateLimits));
 
   // Workbench calculations are open to visitors, and reading a body of up to 12 MB of points costs
   // seconds of CPU: large ones are limited per client before the body is read (normal use sends kilobytes).
@@ -138,7 +143,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
       skip: (req) => req.method !== 'POST' || Number(req.headers['content-length'] ?? Infinity) <= 1_000_000,
     }),
   );
-  app.use(['/api/workbench', '/api/actuators'], jsonBody('12mb'));
+  app.use(['/api/workbench', '/api/actuators', '/api/runs'], jsonBody('12mb'));
   app.use(jsonBody('1mb'));
   const sessions = session({
     name: 'scanwright.sid',
@@ -149,8 +154,9 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
     rolling: false,
     cookie: { httpOnly: true, sameSite: 'lax', secure: https, maxAge: 30 * 24 * 60 * 60 * 1000, path: '/' },
   });
-  app.use(...unlessAnonymousRead('scanwright.sid', sessions, passport.initialize(), sessionUser(passport.session())));
-  app.use(['/api', '/auth/logout'], requireCsrf);
+  app.use(...unlessAnonymousRead('scanwright.sid', sessions, passport.initialize(), sessionUser(passport.session())).map(unlessBearer));
+  app.use(['/api', '/auth/logout'], unlessBearer(requireCsrf));
+  app.use(idempotency);
 
   // The registry search is the hottest route: first in line.
   app.use(partRoutes(config));
@@ -161,9 +167,10 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(photoRoutes(config));
   app.use(buildRoutes(config));
   app.use(actuatorRoutes());
-  app.use(runRoutes());
+  app.use(runRoutes(config));
   app.use(reviewRoutes(config));
   app.use(accountRoutes());
+  app.use(apiTokenRoutes());
   app.use(exchangeRoutes(config));
   app.use(['/api', '/auth'], apiNotFound);
 

@@ -12,6 +12,9 @@ import * as addPartSearchIndexes from './migrations/20261201003100-add-part-sear
 import * as addPartDescIndexes from './migrations/20261201003200-add-part-desc-indexes.ts';
 import * as createPartPhotos from './migrations/20261202000100-create-part-photos.ts';
 import * as recomputeRunFits from './migrations/20261202100000-recompute-run-fits.ts';
+import * as addRunKinds from './migrations/20261203120000-add-run-kinds.ts';
+import * as createApiTokens from './migrations/20261203100000-create-api-tokens.ts';
+import * as createIdempotencyKeys from './migrations/20261203100100-create-idempotency-keys.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -29,6 +32,9 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261201003200-add-part-desc-indexes', addPartDescIndexes],
   ['20261202000100-create-part-photos', createPartPhotos],
   ['20261202100000-recompute-run-fits', recomputeRunFits],
+  ['20261203100000-create-api-tokens', createApiTokens],
+  ['20261203100100-create-idempotency-keys', createIdempotencyKeys],
+  ['20261203120000-add-run-kinds', addRunKinds],
 ];
 
 /** Umzug over our migration list; the only source of the schema, in tests too. */

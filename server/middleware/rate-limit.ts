@@ -4,7 +4,15 @@ import type { Request, RequestHandler } from 'express';
 /** A per-client limiter answering 429 in the error shape; a no-op when limits are switched off (benchmarks, most tests). */
 export function limiter(
   enabled: boolean,
-  opts: { windowMs: number; limit: number; what: string; perUser?: boolean; skip?: (req: Request) => boolean },
+  opts: {
+    windowMs: number;
+    limit: number;
+    what: string;
+    perUser?: boolean;
+    /** Count per this key instead of per address (an API token's id). */
+    keyOf?: (req: Request) => string;
+    skip?: (req: Request) => boolean;
+  },
 ): RequestHandler {
   if (!enabled) return (_req, _res, next) => next();
   return rateLimit({
@@ -14,6 +22,7 @@ export function limiter(
     legacyHeaders: false,
     ...(opts.skip ? { skip: opts.skip } : {}),
     ...(opts.perUser ? { keyGenerator: (req: Request) => `user:${(req.user as { id?: number } | undefined)?.id ?? 'anon'}` } : {}),
+    ...(opts.keyOf ? { keyGenerator: opts.keyOf } : {}),
     handler: (_req, res) => {
       res.status(429).json({ error: { code: 'rate_limited', message: `Too many ${opts.what}; wait a little and try again.` } });
     },

@@ -14,6 +14,8 @@ import { Listing } from './listing.model.ts';
 import { ListingPhoto } from './listing-photo.model.ts';
 import { PartPhoto } from './part-photo.model.ts';
 import { Message, MessageThread } from './message.model.ts';
+import { ApiToken } from './api-token.model.ts';
+import { IdempotencyKey } from './idempotency-key.model.ts';
 
 /** Bind every model to this process's Sequelize instance and declare associations. */
 export function initModels(sequelize: Sequelize) {
@@ -33,6 +35,8 @@ export function initModels(sequelize: Sequelize) {
   PartPhoto.initModel(sequelize);
   MessageThread.initModel(sequelize);
   Message.initModel(sequelize);
+  ApiToken.initModel(sequelize);
+  IdempotencyKey.initModel(sequelize);
   Build.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
   Actuator.belongsTo(Part, { as: 'part', foreignKey: 'partId' });
   // The session store's model; its table comes from a migration, never from sync().
@@ -63,5 +67,7 @@ export function initModels(sequelize: Sequelize) {
     PartPhoto,
     MessageThread,
     Message,
+    ApiToken,
+    IdempotencyKey,
   };
 }
