@@ -132,7 +132,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   // A rig's personal API token: checked (401/403/429) before any body is read; such requests skip sessions and CSRF.
   app.use(...bearerToken(config.rateLimits));
 
-  // Workbench calculations are open to visitors, and reading a body of up to 12 MB of points costs
+  // Workbench calculations are open to visitors, and reading a body of up to 32 MB (a 200 000-sample sine record) costs
   // seconds of CPU: large ones are limited per client before the body is read (normal use sends kilobytes).
   app.use(
     '/api/workbench',
@@ -143,7 +143,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
       skip: (req) => req.method !== 'POST' || Number(req.headers['content-length'] ?? Infinity) <= 1_000_000,
     }),
   );
-  app.use(['/api/workbench', '/api/actuators', '/api/runs'], jsonBody('12mb'));
+  app.use(['/api/workbench', '/api/actuators', '/api/runs'], jsonBody('32mb'));
   app.use(jsonBody('1mb'));
   const sessions = session({
     name: 'scanwright.sid',

@@ -1,6 +1,7 @@
 // Runs a shared workbench calculator for the API: the calculator composes the whole result (see
 // shared/workbench/calculators/); this turns its input refusals into 400s. Nothing is stored.
 import { FitInputError } from '@shared/workbench/fit-input-error.ts';
+import { SineFitError } from '@shared/workbench/sine-fit-error.ts';
 import { asSentence } from '@shared/format/sentence.ts';
 import { AppError } from '../errors.ts';
 
@@ -26,6 +27,7 @@ export function asBadRequest<T>(compute: () => T): T {
     result = compute();
   } catch (err) {
     if (err instanceof FitInputError) throw new AppError(400, err.code, err.message, err.details);
+    if (err instanceof SineFitError) throw new AppError(400, err.code, err.message, err.details);
     if (err instanceof RangeError) throw new AppError(400, errorCode(err), asSentence(err.message));
     throw err;
   }

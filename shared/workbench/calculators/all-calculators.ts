@@ -12,6 +12,7 @@ import { loadedGainCalculator } from './loaded-gain-calculator.ts';
 import { tubeCalculator } from './tube-calculator.ts';
 import { driveLimitsCalculator } from './drive-limits-calculator.ts';
 import { noiseFloorCalculator } from './noise-floor-calculator.ts';
+import { sineFitCalculator } from './sine-fit-calculator.ts';
 
 /** All calculators; add a new one here and it gets its route. */
 export const calculators = [
@@ -30,4 +31,5 @@ export const calculators = [
   tubeCalculator,
   driveLimitsCalculator,
   noiseFloorCalculator,
+  sineFitCalculator,
 ] as const;
