@@ -31,7 +31,8 @@ export async function createApiToken(actor: Actor | null, input: CreateApiTokenI
   }
   const secret = `${TOKEN_PREFIX}${randomBytes(32).toString('base64url')}`;
   const row = await ApiToken.create({ userId: actor.id, name: input.name, scopes: input.scopes, tokenHash: hashOf(secret) });
-  const { id, name, scopes, createdAt } = presentApiToken(row);
+  // Read back so createdAt is what the list will show (the column keeps whole seconds).
+  const { id, name, scopes, createdAt } = presentApiToken(await row.reload());
   return { id, name, scopes, token: secret, createdAt };
 }
 
