@@ -295,13 +295,20 @@ function fourParameterSystem(
 }
 
 /** Gauss–Newton refinement of ω from a three-parameter start; each step's size limited to a quarter period over the half-record. */
-function refineFrequency(rec: Record, mean: number, omega0: number, start: ChannelFit): { omega: number; iterations: number } {
+function refineFrequency(
+  t: Float64Array,
+  y: Float64Array,
+  halfSpanS: number,
+  mean: number,
+  omega0: number,
+  start: ChannelFit,
+): { omega: number; iterations: number } {
   let omega = omega0;
   let a = start.a;
   let b = start.b;
-  const maxStep = Math.PI / 2 / rec.halfSpanS;
+  const maxStep = Math.PI / 2 / halfSpanS;
   for (let it = 1; it <= MAX_ITERATIONS; it++) {
-    const { m, r } = fourParameterSystem(rec.t, rec.v, mean, omega, a, b);
+    const { m, r } = fourParameterSystem(t, y, mean, omega, a, b);
     const solved = solveNormal(m, r, 4);
     if (!solved) throw aliasing();
     a = solved.x[0];
@@ -309,7 +316,7 @@ function refineFrequency(rec: Record, mean: number, omega0: number, start: Chann
     const step = Math.max(-maxStep, Math.min(maxStep, solved.x[3]));
     omega += step;
     if (!(omega > 0) || !Number.isFinite(omega)) break;
-    if (Math.abs(step) * rec.halfSpanS < PHASE_TOLERANCE_RAD) return { omega, iterations: it };
+    if (Math.abs(step) * halfSpanS < PHASE_TOLERANCE_RAD) return { omega, iterations: it };
   }
   throw new SineFitError(
     'no_clear_sine',
@@ -378,7 +385,7 @@ export function fitSineRecord(input: SineFitInput, options?: SineFitOptions): Si
     if (f0 * rec.durationS < MIN_RECORD_PERIODS) throw tooShort(f0 * rec.durationS);
     fillTrig(rec.t, TWO_PI * f0, c, s);
     const start = threeParameterFit(c, s, rec.v, vMean);
-    ({ omega, iterations } = refineFrequency(rec, vMean, TWO_PI * f0, start));
+    ({ omega, iterations } = refineFrequency(rec.t, rec.v, rec.halfSpanS, vMean, TWO_PI * f0, start));
   }
 
   const frequencyHz = omega / TWO_PI;
@@ -442,6 +449,32 @@ export function fitSineRecord(input: SineFitInput, options?: SineFitOptions): Si
     phaseLagDeg: wrapDegrees((dv.phase - dx.phase) * DEG),
     phaseLagStdUncDeg: Math.hypot(dv.phaseStdUnc, dx.phaseStdUnc) * DEG,
   };
+}
+
+/**
+ * The four-parameter fit of one channel from a given start frequency (the IEEE 1057 iteration on its
+ * own, for checks and for callers with a start of their own): frequency, amplitude, offset, and the
+ * phase φ at t = 0 of `timeS`, in y = R·sin(2πf·t + φ) + C. Times must increase; refusals as fitSineRecord's.
+ */
+export function fourParameterSineFit(
+  timeS: ArrayLike<number>,
+  values: ArrayLike<number>,
+  startHz: number,
+): { frequencyHz: number; amplitude: number; offset: number; phaseRad: number; iterations: number } {
+  const n = timeS.length;
+  const mid = timeS[0] + (timeS[n - 1] - timeS[0]) / 2;
+  const t = Float64Array.from(timeS, (v) => v - mid);
+  const y = Float64Array.from(values);
+  const mean = meanOf(y);
+  const c = new Float64Array(n);
+  const s = new Float64Array(n);
+  fillTrig(t, TWO_PI * startHz, c, s);
+  const start = threeParameterFit(c, s, y, mean);
+  const { omega, iterations } = refineFrequency(t, y, (timeS[n - 1] - timeS[0]) / 2, mean, TWO_PI * startHz, start);
+  fillTrig(t, omega, c, s);
+  const fit = threeParameterFit(c, s, y, mean);
+  const phase = wrapDegrees((Math.atan2(fit.a, fit.b) - omega * mid) * DEG) / DEG;
+  return { frequencyHz: omega / TWO_PI, amplitude: Math.hypot(fit.a, fit.b), offset: fit.offset, phaseRad: phase, iterations };
 }
 
 /** What the loop ellipse needs of a fit (also what a stored sine-record run keeps). */
