@@ -531,6 +531,14 @@ const examples: Record<string, unknown> = {
     cantileverStiffnessNPerM: 0.1,
     temperatureK: 295,
   },
+  'sine-fit': {
+    samples: Array.from({ length: 400 }, (_, i) => ({
+      timeS: i / 100,
+      volts: 5 + 30 * Math.sin(2 * Math.PI * 1.3 * (i / 100)) + 0.2 * Math.cos(7 * i),
+      displacement: 0.2 + 2.4 * Math.sin(2 * Math.PI * 1.3 * (i / 100) - 0.3) + 0.01 * Math.sin(11 * i),
+    })),
+    displacementUnit: 'um',
+  },
 };
 
 describe('POST /api/workbench/<slug> answers what the page shows', () => {
