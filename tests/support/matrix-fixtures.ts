@@ -27,6 +27,7 @@ import {
 import { createListingInput, hideListingInput, sendMessageInput, updateListingInput } from '@shared/schemas/listing.ts';
 import { reorderAttachedPhotosInput, updateAttachedPhotoInput } from '@shared/schemas/attached-photo.ts';
 import { setRoleInput, setSuspendedInput } from '@shared/schemas/user.ts';
+import { createApiTokenInput } from '@shared/schemas/api-token.ts';
 import * as wb from '@shared/schemas/workbench.ts';
 import * as wbx from '@shared/schemas/workbench-extras.ts';
 import type { TestApp } from './test-app.ts';
@@ -47,6 +48,7 @@ import { Listing } from '../../server/models/listing.model.ts';
 import { Message, MessageThread } from '../../server/models/message.model.ts';
 import { PartPhoto } from '../../server/models/part-photo.model.ts';
 import { ListingPhoto } from '../../server/models/listing-photo.model.ts';
+import { ApiToken } from '../../server/models/api-token.model.ts';
 
 /** Who sends the request: a signed-in user with their agent, or a visitor (user null). */
 export interface Acting {
@@ -846,6 +848,40 @@ export const fixtures: Record<string, Fixture> = {
     },
   },
 
+  'POST /api/account/tokens': {
+    schema: createApiTokenInput,
+    allowed: 'owner',
+    async make({ actor }) {
+      const name = unique('Rig');
+      const mine = () => ApiToken.findAll({ where: { name } });
+      return {
+        body: { name, scopes: ['runs:write'] },
+        state: () => rows(mine()),
+        async changed(res) {
+          expect(res.body.token).toMatch(/^swt_/);
+          expect((await mine()).map((tk) => [tk.userId, tk.scopes])).toEqual([[actor.user!.id, ['runs:write']]]);
+        },
+      };
+    },
+  },
+  'DELETE /api/account/tokens/:tokenId': {
+    allowed: 'owner',
+    async make({ owner }) {
+      const token = await ApiToken.create({
+        userId: owner.id,
+        name: unique('Rig'),
+        scopes: ['read'],
+        tokenHash: randomBytes(32).toString('hex'),
+      });
+      return {
+        params: { tokenId: token.id },
+        state: () => rows(ApiToken.findByPk(token.id)),
+        async changed() {
+          expect(await ApiToken.findByPk(token.id)).toBeNull();
+        },
+      };
+    },
+  },
   'POST /api/listings': {
     schema: createListingInput,
     allowed: 'owner',
