@@ -3,10 +3,11 @@ import { AnchorButton } from '@/components/ui/link-button.tsx';
 import { paths } from '@/config/paths.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
 import { MailSettings } from '@/features/account/components/mail-settings.tsx';
+import { RigTokens } from '@/features/account/components/rig-tokens.tsx';
 
 const TITLE = 'Account settings';
 
-/** /account: the signed-in person's own settings (for now, which e-mail they get). */
+/** /account: the signed-in person's own settings: which e-mail they get, and their rig tokens. */
 export function AccountSettingsPage() {
   const { data: session } = useSession();
   if (!session?.user) {
@@ -33,6 +34,7 @@ export function AccountSettingsPage() {
         }
       />
       <MailSettings />
+      <RigTokens />
     </div>
   );
 }
