@@ -69,6 +69,8 @@ export async function startServer(dir, port, { fast = false } = {}) {
     '--character-set-server=utf8mb4',
     '--collation-server=utf8mb4_unicode_ci',
     '--max-connections=300',
+    // A run may carry 200 000 samples (about 12 MB of JSON) in one INSERT.
+    '--max-allowed-packet=64M',
   ];
   if (fast) args.push('--innodb-flush-log-at-trx-commit=2', '--innodb-doublewrite=0', '--innodb-buffer-pool-size=64M');
   const child = spawn('mariadbd', args, { stdio: 'ignore', detached: false });

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import type { RunMethod, RunStatus } from '@shared/schemas/run.ts';
+import type { RunKind, RunMethod, RunStatus } from '@shared/schemas/run.ts';
 import type { DisplacementUnit, VoltageUnit } from '@shared/units.ts';
 import type { FitModel } from '@shared/workbench/line-fit.ts';
 
@@ -10,6 +10,10 @@ export class CalibrationRun extends Model<InferAttributes<CalibrationRun>, Infer
   declare partId: number;
   declare ownerId: number;
   declare status: CreationOptional<RunStatus>;
+  declare kind: CreationOptional<RunKind>;
+  declare measuredOn: string | null;
+  declare detailJson: string | null;
+  declare plotJson: string | null;
   declare method: RunMethod;
   declare voltageUnit: VoltageUnit;
   declare displacementUnit: DisplacementUnit;
@@ -45,6 +49,10 @@ export class CalibrationRun extends Model<InferAttributes<CalibrationRun>, Infer
         partId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         ownerId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         status: { type: DataTypes.STRING(12), allowNull: false, defaultValue: 'pending' },
+        kind: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'points' },
+        measuredOn: DataTypes.DATEONLY,
+        detailJson: DataTypes.TEXT,
+        plotJson: DataTypes.TEXT('medium'),
         method: { type: DataTypes.STRING(20), allowNull: false },
         voltageUnit: { type: DataTypes.STRING(4), allowNull: false },
         displacementUnit: { type: DataTypes.STRING(10), allowNull: false },

@@ -60,6 +60,14 @@ export function presentBuildSummary(b: Build, extras: BuildCardExtras): BuildSum
   };
 }
 
+/**
+ * Plot points per run on a build page: a budget of 4 000 shared by all its runs (at most 2 000 each,
+ * at least 40), so the page stays a few hundred kilobytes whatever its runs hold.
+ */
+export function buildPagePlotPoints(runCount: number): number {
+  return Math.max(40, Math.min(2000, Math.floor(4000 / Math.max(1, runCount))));
+}
+
 /** An actuator with its part, runs (newest first) and expected gain. */
 export function presentActuator(a: Actuator, part: Part, runs: CalibrationRun[]): ActuatorDto {
   const expected = expectedGainForPart(part, a.drive, a.axis);
@@ -76,7 +84,7 @@ export function presentActuator(a: Actuator, part: Part, runs: CalibrationRun[])
     expectedGain: expected
       ? { gainNmPerV: expected.gainNmPerV, lowNmPerV: expected.lowNmPerV, highNmPerV: expected.highNmPerV, basis: expected.basis }
       : null,
-    runs: runs.filter((r) => r.actuatorId === a.id).map((r) => presentRun(r)),
+    runs: runs.filter((r) => r.actuatorId === a.id).map((r) => presentRun(r, buildPagePlotPoints(runs.length))),
   };
 }
 

@@ -1,3 +1,4 @@
+import type { RunKind } from '@shared/schemas/run.ts';
 import type { PartChoiceDto, PartDetailDto, PartSummaryDto } from '@shared/schemas/part.ts';
 import type { AttachedPhotoDto } from '@shared/schemas/attached-photo.ts';
 import { priceLabel, type PriceKind } from '@shared/schemas/listing.ts';
@@ -78,7 +79,9 @@ export interface PartRunRow {
   buildTitle: string | null;
   maker: string | null;
   method: string;
+  kind: RunKind;
   gainNmPerV: number;
+  gainStdErrNmPerV: number | null;
   gainCi95LoNmPerV: number | null;
   gainCi95HiNmPerV: number | null;
   hysteresisPctFs: number | null;
@@ -121,7 +124,9 @@ export function presentPartDetail(part: Part, rows: PartPageRows, editPhotos: bo
       buildTitle: r.buildTitle ?? '',
       maker: r.maker ?? 'unknown',
       method: r.method,
+      kind: r.kind,
       gainNmPerV: Math.abs(r.gainNmPerV),
+      gainStdUncertaintyNmPerV: r.gainStdErrNmPerV,
       gainCi95NmPerV: [r.gainCi95LoNmPerV, r.gainCi95HiNmPerV],
       hysteresisPctFs: r.hysteresisPctFs,
       createdAt: r.createdAt,

@@ -1,5 +1,4 @@
 import type { QueueBuildDto, QueuePartDto, QueueReportDto, QueueRunDto, ReviewAuthorDto } from '@shared/schemas/review.ts';
-import type { FitPoint } from '@shared/schemas/workbench.ts';
 import { plausibilityFlags } from '@shared/review/plausibility.ts';
 import { expectedGainForPart } from '@shared/workbench/part-expected-gain.ts';
 import { toNm, toVolts } from '@shared/units.ts';
@@ -33,15 +32,18 @@ export function presentQueueBuild(b: Build, author: ReviewAuthorDto, counts: Que
   };
 }
 
-/** A pending run with its points in SI units, its part's accepted gains and the plausibility flags. */
+/** Points of each run's plot on the desk (LTTB from the stored series), so a queue of many large runs stays small. */
+const QUEUE_PLOT_POINTS = 100;
+
+/** A pending run with its plot series in SI units, its part's accepted gains and the plausibility flags. */
 export function presentQueueRun(
   r: CalibrationRun,
   related: { author: ReviewAuthorDto; part: Part; actuator: Actuator | undefined; buildTitle: string; acceptedGains: number[] },
 ): QueueRunDto {
   const { part, actuator, acceptedGains: gains } = related;
   const expected = actuator ? expectedGainForPart(part, actuator.drive, actuator.axis) : null;
-  const dto = presentRun(r);
-  const points = (JSON.parse(r.pointsJson) as FitPoint[]).map((p) => ({
+  const dto = presentRun(r, QUEUE_PLOT_POINTS);
+  const points = dto.points.map((p) => ({
     volts: toVolts(p.volts, r.voltageUnit),
     displacementNm: toNm(p.displacement, r.displacementUnit),
     ...(p.sweep ? { sweep: p.sweep } : {}),
@@ -55,11 +57,12 @@ export function presentQueueRun(
     author: related.author,
     part: { id: part.id, name: part.name, category: part.category, stats: presentPartSummary(part).stats, acceptedGainsNmPerV: gains },
     method: r.method,
+    kind: r.kind,
     fit: dto.fit,
     points,
     expectedGainNmPerV: expected?.gainNmPerV ?? null,
     flags: plausibilityFlags(
-      { n: r.pointCount, gainNmPerV: r.gainNmPerV, r2: r.r2, hysteresisPctFs: r.hysteresisPctFs },
+      { kind: r.kind, n: r.pointCount, gainNmPerV: r.gainNmPerV, r2: r.r2, hysteresisPctFs: r.hysteresisPctFs },
       gains,
       expected?.gainNmPerV ?? null,
     ),

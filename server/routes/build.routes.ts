@@ -17,6 +17,7 @@ import {
   listMyBuilds,
   listPublishedBuilds,
   submitBuild,
+  withdrawBuild,
   updateBuild,
 } from '../services/build.service.ts';
 import { createEntry, deleteEntry, updateEntry } from '../services/entry.service.ts';
@@ -71,6 +72,13 @@ export function buildRoutes(config: Config): Router {
     requireUser,
     route({ params: buildIdParams }, async ({ actor, params, res }) => {
       res.json(await submitBuild(actor, params.buildId));
+    }),
+  );
+  r.post(
+    '/api/builds/:buildId/withdraw',
+    requireUser,
+    route({ params: buildIdParams }, async ({ actor, params, res }) => {
+      res.json(await withdrawBuild(actor, params.buildId));
     }),
   );
 

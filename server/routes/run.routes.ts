@@ -1,12 +1,14 @@
 import { Router } from 'express';
 import { actuatorIdParams } from '@shared/schemas/actuator.ts';
-import { createRunInput, runIdParams } from '@shared/schemas/run.ts';
+import { createRunInput, runExportQuery, runIdParams, updateRunInput } from '@shared/schemas/run.ts';
+import type { Config } from '../config.ts';
 import { requireUser } from '../middleware/auth.ts';
-import { createRun, deleteRun, getRun } from '../services/run.service.ts';
+import { createRun, deleteRun, getRun, updateRun } from '../services/run.service.ts';
+import { exportRun } from '../services/run-export.service.ts';
 import { route } from './route.ts';
 
-/** Calibration runs: recorded against an actuator, read and deleted on their own. */
-export function runRoutes(): Router {
+/** Calibration runs: recorded against an actuator; read, corrected, exported and deleted on their own. */
+export function runRoutes(config: Config): Router {
   const r = Router();
   r.post(
     '/api/actuators/:actuatorId/runs',
@@ -19,6 +21,20 @@ export function runRoutes(): Router {
     '/api/runs/:runId',
     route({ params: runIdParams }, async ({ actor, params, res }) => {
       res.json(await getRun(actor, params.runId));
+    }),
+  );
+  r.patch(
+    '/api/runs/:runId',
+    requireUser,
+    route({ params: runIdParams, body: updateRunInput }, async ({ actor, params, body, res }) => {
+      res.json(await updateRun(actor, params.runId, body));
+    }),
+  );
+  r.get(
+    '/api/runs/:runId/export',
+    route({ params: runIdParams, query: runExportQuery }, async ({ actor, params, query, res }) => {
+      const file = await exportRun(actor, params.runId, query.format, config.publicUrl);
+      res.set('Content-Type', file.contentType).attachment(file.filename).send(file.body);
     }),
   );
   r.delete(

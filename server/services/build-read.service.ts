@@ -10,6 +10,7 @@ import { Actuator } from '../models/actuator.model.ts';
 import { Part } from '../models/part.model.ts';
 import { CalibrationRun } from '../models/calibration-run.model.ts';
 import { presentPhoto } from '../presenters/photo.presenter.ts';
+import { RUN_READ_COLUMNS } from '../presenters/run.presenter.ts';
 import {
   coverOf,
   presentActuator,
@@ -83,7 +84,11 @@ export async function summarizeBuilds(builds: Build[]): Promise<BuildSummaryDto[
 export async function loadActuators(buildId: number, includeRejected: boolean): Promise<ActuatorDto[]> {
   const [actuators, runs] = await Promise.all([
     Actuator.findAll({ where: { buildId }, include: [{ model: Part, as: 'part' }], order: [['id', 'ASC']] }),
-    CalibrationRun.findAll({ where: { buildId, ...(includeRejected ? {} : { status: { [Op.ne]: 'rejected' } }) }, order: newestFirst }),
+    CalibrationRun.findAll({
+      attributes: [...RUN_READ_COLUMNS],
+      where: { buildId, ...(includeRejected ? {} : { status: { [Op.ne]: 'rejected' } }) },
+      order: newestFirst,
+    }),
   ]);
   return actuators.map((a) => presentActuator(a, a.part!, runs));
 }
@@ -103,6 +108,7 @@ async function loadBuildPage(build: Build, includeRejected: boolean): Promise<Bu
     }),
     Actuator.findAll({ where: { buildId: build.id }, include: [{ model: Part, as: 'part' }], order: [['id', 'ASC']] }),
     CalibrationRun.findAll({
+      attributes: [...RUN_READ_COLUMNS],
       where: { buildId: build.id, ...(includeRejected ? {} : { status: { [Op.ne]: 'rejected' } }) },
       order: newestFirst,
     }),

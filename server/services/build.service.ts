@@ -107,3 +107,15 @@ export async function submitBuild(actor: Actor | null, buildId: number): Promise
   });
   return presentBuildDetail(actor, build);
 }
+
+/** The maker takes a submitted build back to draft (before a moderator has decided on it). */
+export async function withdrawBuild(actor: Actor | null, buildId: number): Promise<BuildDto> {
+  const build = await Build.sequelize!.transaction(async (transaction) => {
+    const b = await loadBuildForEdit(actor, buildId, transaction, { anyState: true });
+    if (b.status !== 'submitted')
+      throw new ConflictError(`Only a build pending review can be withdrawn; this one is ${b.status}.`, 'invalid_state');
+    await b.update({ status: 'draft', submittedAt: null }, { transaction });
+    return b;
+  });
+  return presentBuildDetail(actor, build);
+}

@@ -3,6 +3,7 @@ import type { Actor } from '@shared/policies.ts';
 import type { QueueBuildDto, QueueRunDto, ReportTargetType, ReviewAuthorDto, ReviewQueueDto } from '@shared/schemas/review.ts';
 import { Build } from '../models/build.model.ts';
 import { CalibrationRun } from '../models/calibration-run.model.ts';
+import { RUN_READ_COLUMNS } from '../presenters/run.presenter.ts';
 import { Actuator } from '../models/actuator.model.ts';
 import { Part } from '../models/part.model.ts';
 import { Photo } from '../models/photo.model.ts';
@@ -127,6 +128,7 @@ export async function getReviewQueue(actor: Actor | null): Promise<ReviewQueueDt
       limit: LIMIT,
     }),
     CalibrationRun.findAndCountAll({
+      attributes: [...RUN_READ_COLUMNS],
       where: { status: 'pending', buildId: { [Op.notIn]: Build.sequelize!.literal("(SELECT id FROM builds WHERE status = 'draft')") } },
       order: [
         ['createdAt', 'ASC'],

@@ -167,3 +167,13 @@ export function formatTimeLabel(seconds: number): string {
   }
   return `${formatTick(Number((seconds / 3600).toPrecision(3)))} h`;
 }
+
+/** A figure printed by this module as plain ASCII for files (CSV): ASCII minus, no digit grouping, 1.2e-5 for powers of ten. */
+export function plainFigure(printed: string): string {
+  if (printed === '—') return '';
+  const sup = Object.fromEntries(Object.entries(SUPERSCRIPT).map(([k, v]) => [v, k]));
+  return printed
+    .replace(/\u2212/g, '-')
+    .replace(/\u202F/g, '')
+    .replace(/ × 10([⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+)/, (_m, e: string) => `e${[...e].map((c) => sup[c] ?? c).join('')}`);
+}

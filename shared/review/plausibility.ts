@@ -53,6 +53,8 @@ export interface PlausibilityFlag {
 }
 
 export interface RunForFlags {
+  /** Point runs only are judged on their point count (a peak-to-peak reading is two readings by design). Default 'points'. */
+  kind?: 'points' | 'peak-to-peak' | 'sine-record';
   n: number;
   gainNmPerV: number;
   r2: number | null;
@@ -87,7 +89,8 @@ export function plausibilityFlags(
   const gain = Math.abs(run.gainNmPerV);
   if (run.r2 !== null && run.r2 < POOR_FIT_R2)
     flags.push({ code: 'poor-fit', message: `R² ${run.r2.toFixed(4)} is below ${POOR_FIT_R2}.` });
-  if (run.n < FEW_POINTS) flags.push({ code: 'few-points', message: `Only ${run.n} points (fewer than ${FEW_POINTS}).` });
+  if ((run.kind ?? 'points') === 'points' && run.n < FEW_POINTS)
+    flags.push({ code: 'few-points', message: `Only ${run.n} points (fewer than ${FEW_POINTS}).` });
   if (run.hysteresisPctFs !== null && run.hysteresisPctFs > LARGE_HYSTERESIS_PCT) {
     flags.push({
       code: 'large-hysteresis',

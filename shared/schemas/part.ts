@@ -1,3 +1,4 @@
+import type { RunKind } from './run.ts';
 import { z } from 'zod';
 import type { AttachedPhotoDto } from './attached-photo.ts';
 
@@ -151,8 +152,11 @@ export interface PartRunDto {
   buildTitle: string;
   maker: string;
   method: string;
+  kind: RunKind;
   gainNmPerV: number;
+  /** Null on point runs' interval ends for peak-to-peak and sine runs, which carry a standard uncertainty instead. */
   gainCi95NmPerV: [number | null, number | null];
+  gainStdUncertaintyNmPerV: number | null;
   hysteresisPctFs: number | null;
   createdAt: string;
 }

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { PlausibilityFlag } from '../review/plausibility.ts';
-import type { FitResultDto } from './workbench.ts';
+import type { RunFitDto, RunKind } from './run.ts';
 import type { PartStatsDto } from './part.ts';
 
 const note = z.string().trim().max(4000);
@@ -89,7 +89,8 @@ export interface QueueRunDto {
   author: ReviewAuthorDto;
   part: { id: number; name: string; category: string; stats: PartStatsDto; acceptedGainsNmPerV: number[] };
   method: string;
-  fit: FitResultDto;
+  kind: RunKind;
+  fit: RunFitDto;
   points: { volts: number; displacementNm: number; sweep?: 'up' | 'down' }[];
   expectedGainNmPerV: number | null;
   flags: PlausibilityFlag[];

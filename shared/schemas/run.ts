@@ -1,11 +1,23 @@
 import { z } from 'zod';
-import { fitInput, type FitPoint, type FitResultDto } from './workbench.ts';
-import type { DisplacementUnit, VoltageUnit } from '../units.ts';
+import { fitInput, fitPoint, type FitPoint, type FitResultDto } from './workbench.ts';
+import { sineSample } from './sine-fit.ts';
+import { displacementUnits, voltageUnits, type DisplacementUnit, type VoltageUnit } from '../units.ts';
 
 export const RUN_METHODS = ['indicator', 'capacitive', 'interferometer', 'optical-lever', 'reference-sample'] as const;
 export type RunMethod = (typeof RUN_METHODS)[number];
 export const RUN_STATUSES = ['pending', 'accepted', 'rejected'] as const;
 export type RunStatus = (typeof RUN_STATUSES)[number];
+
+/** How a run was recorded: calibration points, one peak-to-peak reading of a sine drive, or a sampled sine record. */
+export const RUN_KINDS = ['points', 'peak-to-peak', 'sine-record'] as const;
+export type RunKind = (typeof RUN_KINDS)[number];
+
+/** Most points or samples one run may hold (the raw record; pages show a decimated series). */
+export const MAX_RUN_POINTS = 200_000;
+/** Most points and samples all runs of one build may hold together. */
+export const MAX_BUILD_POINTS = 2_000_000;
+/** Most runs one build may hold, so a build page stays small whatever its runs hold. */
+export const MAX_BUILD_RUNS = 100;
 
 export const runMethodLabels: Record<RunMethod, string> = {
   indicator: 'Dial or electronic indicator',
@@ -13,6 +25,12 @@ export const runMethodLabels: Record<RunMethod, string> = {
   interferometer: 'Interferometer',
   'optical-lever': 'Optical lever',
   'reference-sample': 'Reference sample (known step or lattice)',
+};
+
+export const runKindLabels: Record<RunKind, string> = {
+  points: 'Calibration points',
+  'peak-to-peak': 'Peak-to-peak reading',
+  'sine-record': 'Sine record',
 };
 
 /** DC steps, or a sine with its frequency and amplitude. */
@@ -29,22 +47,130 @@ export const runConditions = z.strictObject({
 });
 export type RunConditions = z.infer<typeof runConditions>;
 
-/** A calibration run as recorded; the server computes the fit from the points. */
-export const createRunInput = fitInput.extend({
+/** A calendar date (YYYY-MM-DD) not in the future by more than a day (time zones). */
+const measuredOn = z.iso
+  .date()
+  .refine((d) => Date.parse(`${d}T00:00:00Z`) <= Date.now() + 86_400_000, { message: 'The measurement date is in the future.' });
+
+/** What every kind of run carries besides its data. */
+const runCommon = {
   method: z.enum(RUN_METHODS),
   drive: runDrive.optional(),
   conditions: runConditions.optional(),
   notes: z.string().trim().max(4000).optional(),
+  measuredOn: measuredOn.optional(),
+};
+
+/** Calibration points; the server fits them (the shape runs have always had: `kind` may be left out). */
+export const pointsRunInput = z.strictObject({
+  kind: z.literal('points').default('points'),
+  ...fitInput.shape,
+  points: z.array(fitPoint).min(3).max(MAX_RUN_POINTS),
+  ...runCommon,
 });
+
+/** One peak-to-peak reading of a sine drive, in the run's units, with the reading resolutions. */
+export const peakToPeakRunInput = z.strictObject({
+  kind: z.literal('peak-to-peak'),
+  displacementPp: z.number().positive(),
+  voltsPp: z.number().positive(),
+  displacementUnit: z.enum(displacementUnits),
+  voltageUnit: z.enum(voltageUnits).default('V'),
+  displacementResolution: z.number().nonnegative(),
+  voltsResolution: z.number().nonnegative().optional(),
+  frequencyHz: z.number().positive().max(1e7).optional(),
+  ...runCommon,
+});
+
+/** A sampled record of drive volts and displacement against time; the server fits a sine to each channel. */
+export const sineRecordRunInput = z.strictObject({
+  kind: z.literal('sine-record'),
+  samples: z.array(sineSample).min(8).max(MAX_RUN_POINTS),
+  displacementUnit: z.enum(displacementUnits),
+  voltageUnit: z.enum(voltageUnits).default('V'),
+  frequencyHz: z.number().positive().max(1e7).optional(),
+  ...runCommon,
+});
+
+/** A calibration run as recorded; the server computes the fit from it. */
+export const createRunInput = z.discriminatedUnion('kind', [pointsRunInput, peakToPeakRunInput, sineRecordRunInput]);
 export type CreateRunInput = z.infer<typeof createRunInput>;
+export type PointsRunInput = z.infer<typeof pointsRunInput>;
+export type PeakToPeakRunInput = z.infer<typeof peakToPeakRunInput>;
+export type SineRecordRunInput = z.infer<typeof sineRecordRunInput>;
+
+/**
+ * A change to a run: any of its recorded fields (of its own kind; `kind` cannot change). The server merges
+ * it over what is stored, validates the whole run again and refits it.
+ */
+export const updateRunInput = z
+  .strictObject({
+    method: runCommon.method.optional(),
+    drive: runDrive.nullable().optional(),
+    conditions: runConditions.nullable().optional(),
+    notes: z.string().trim().max(4000).nullable().optional(),
+    measuredOn: measuredOn.nullable().optional(),
+    voltageUnit: z.enum(voltageUnits).optional(),
+    displacementUnit: z.enum(displacementUnits).optional(),
+    model: fitInput.shape.model.unwrap().optional(),
+    points: pointsRunInput.shape.points.optional(),
+    displacementPp: z.number().positive().optional(),
+    voltsPp: z.number().positive().optional(),
+    displacementResolution: z.number().nonnegative().optional(),
+    voltsResolution: z.number().nonnegative().nullable().optional(),
+    frequencyHz: z.number().positive().max(1e7).nullable().optional(),
+    samples: sineRecordRunInput.shape.samples.optional(),
+  })
+  .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change.' });
+export type UpdateRunInput = z.infer<typeof updateRunInput>;
 
 export const runIdParams = z.strictObject({ runId: z.coerce.number().int().positive() });
+
+export const RUN_EXPORT_FORMATS = ['csv', 'json'] as const;
+export const runExportQuery = z.strictObject({ format: z.enum(RUN_EXPORT_FORMATS).default('csv') });
+
+/** What a peak-to-peak run recorded (in its own units). */
+export interface PeakToPeakReadingDto {
+  displacementPp: number;
+  voltsPp: number;
+  displacementResolution: number;
+  voltsResolution: number | null;
+  frequencyHz: number | null;
+}
+
+/** The sine fit of a sine-record run (IEEE Std 1057 fit, SI units). */
+export interface SineRecordFitDto {
+  frequencyHz: number;
+  frequencyKnown: boolean;
+  periods: number;
+  voltsAmplitudeV: number;
+  voltsOffsetV: number;
+  displacementAmplitudeNm: number;
+  displacementOffsetNm: number;
+  phaseLagDeg: number;
+}
+
+/**
+ * A stored fit. Point runs have the least-squares figures and a 95 % interval; peak-to-peak and sine
+ * runs have a standard uncertainty (k = 1) instead (`gainCi95NmPerV` null), peak-to-peak runs also
+ * the worst-case bounds, sine runs the sine fit.
+ */
+export interface RunFitDto extends Omit<FitResultDto, 'gainCi95NmPerV'> {
+  gainCi95NmPerV: [number, number] | null;
+  gainStdUncertaintyNmPerV: number;
+  gainBoundsNmPerV?: [number, number];
+  sine?: SineRecordFitDto;
+}
+
+/** A point of the plot series a page draws: the recorded points, or a decimated series of a large run or record. */
+export type RunPlotPoint = FitPoint;
 
 export interface RunDto {
   id: number;
   actuatorId: number;
   buildId: number;
   partId: number;
+  kind: RunKind;
   status: RunStatus;
   method: RunMethod;
   voltageUnit: VoltageUnit;
@@ -53,8 +179,15 @@ export interface RunDto {
   drive: RunDrive | null;
   conditions: RunConditions | null;
   notes: string | null;
-  fit: FitResultDto;
-  points: FitPoint[];
+  measuredOn: string | null;
+  fit: RunFitDto;
+  /** Points or samples recorded (the raw record is in the export). */
+  pointCount: number;
+  /** The plot series in the run's units: every point of a small run, else at most PLOT_POINTS chosen by LTTB. */
+  points: RunPlotPoint[];
+  decimated: boolean;
+  reading: PeakToPeakReadingDto | null;
   reviewNote: string | null;
   createdAt: string;
+  updatedAt: string;
 }

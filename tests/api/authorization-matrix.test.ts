@@ -63,6 +63,7 @@ const expected: Record<string, Row> = {
   'PATCH /api/builds/:buildId': [401, 200, 404, 403, 403, 403],
   'DELETE /api/builds/:buildId': [401, 204, 404, 403, 403, 403],
   'POST /api/builds/:buildId/submit': [401, 200, 404, 403, 403, 403],
+  'POST /api/builds/:buildId/withdraw': [401, 200, 404, 403, 403, 403],
   'POST /api/builds/:buildId/entries': [401, 201, 404, 403, 403, 403],
   'PATCH /api/builds/:buildId/entries/:entryId': [401, 200, 404, 403, 403, 403],
   'DELETE /api/builds/:buildId/entries/:entryId': [401, 204, 404, 403, 403, 403],
@@ -71,6 +72,7 @@ const expected: Record<string, Row> = {
   'PATCH /api/actuators/:actuatorId': [401, 200, 404, 403, 403, 403],
   'DELETE /api/actuators/:actuatorId': [401, 204, 404, 403, 403, 403],
   'POST /api/actuators/:actuatorId/runs': [401, 201, 404, 403, 403, 403],
+  'PATCH /api/runs/:runId': [401, 200, 404, 403, 403, 403],
   'DELETE /api/runs/:runId': [401, 204, 404, 403, 403, 403],
 
   'POST /api/parts': [401, 201, 201, 403, 201, 201],

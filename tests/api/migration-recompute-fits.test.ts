@@ -4,7 +4,7 @@ import { createBuildRow, createPart, createRunRow, createUser } from '../support
 import { recomputeNonlinearity, up } from '../../server/db/migrations/20261202100000-recompute-run-fits.ts';
 import { CalibrationRun } from '../../server/models/calibration-run.model.ts';
 import { runColumns } from '../../server/services/run.service.ts';
-import { fitCalibrationInUnits } from '../../shared/workbench/calibration-fit.ts';
+import { fitRun } from '../../shared/workbench/run-fit.ts';
 
 let t: TestApp;
 beforeAll(async () => {
@@ -26,6 +26,7 @@ const points = [
   ...volts.toReversed().map((V) => ({ volts: V, displacement: 10 * V - loop(V), sweep: 'down' as const })),
 ];
 const input = {
+  kind: 'points' as const,
   points,
   voltageUnit: 'V' as const,
   displacementUnit: 'nm' as const,
@@ -56,7 +57,7 @@ async function storedRuns() {
   const part = await createPart();
   const base = { buildId: build.id, partId: part.id, ownerId: owner.id, status: 'accepted' as const };
   const loopRun = await createRunRow({ ...base, gainNmPerV: 10 });
-  await loopRun.update({ ...runColumns(input, fitCalibrationInUnits(input)), nonlinearityPctFs: oldNonlinearityPct });
+  await loopRun.update({ ...runColumns(input, fitRun(input)), nonlinearityPctFs: oldNonlinearityPct });
   const other = await createRunRow({ ...base, gainNmPerV: 55 });
   return { loopRun, other };
 }

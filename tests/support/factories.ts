@@ -78,7 +78,7 @@ export async function createRunRow(opts: {
   const { Actuator } = await import('../../server/models/actuator.model.ts');
   const { CalibrationRun } = await import('../../server/models/calibration-run.model.ts');
   const { runColumns } = await import('../../server/services/run.service.ts');
-  const { fitCalibrationInUnits } = await import('../../shared/workbench/calibration-fit.ts');
+  const { fitRun } = await import('../../shared/workbench/run-fit.ts');
   const { demoSweep } = await import('../../server/db/seed/demo-points.ts');
   const actuator = await Actuator.create({
     buildId: opts.buildId,
@@ -100,13 +100,14 @@ export async function createRunRow(opts: {
     seed: Math.floor(Math.random() * 1e9),
   });
   const input = {
+    kind: 'points' as const,
     points,
     voltageUnit: 'V' as const,
     displacementUnit: 'nm' as const,
     model: 'intercept' as const,
     method: 'indicator' as const,
   };
-  const fit = fitCalibrationInUnits(input);
+  const fit = fitRun(input);
   return CalibrationRun.create({
     actuatorId: actuator.id,
     buildId: opts.buildId,

@@ -15,7 +15,7 @@ import {
   updatePhotoInput,
 } from '@shared/schemas/build.ts';
 import { createActuatorInput, updateActuatorInput } from '@shared/schemas/actuator.ts';
-import { createRunInput } from '@shared/schemas/run.ts';
+import { createRunInput, updateRunInput } from '@shared/schemas/run.ts';
 import { mergePartInput, proposePartInput } from '@shared/schemas/part.ts';
 import {
   acceptRejectInput,
@@ -30,6 +30,7 @@ import { setRoleInput, setSuspendedInput } from '@shared/schemas/user.ts';
 import { createApiTokenInput } from '@shared/schemas/api-token.ts';
 import * as wb from '@shared/schemas/workbench.ts';
 import * as wbx from '@shared/schemas/workbench-extras.ts';
+import { sineFitInput } from '@shared/schemas/sine-fit.ts';
 import type { TestApp } from './test-app.ts';
 import type { Agent } from './login.ts';
 import { fillPath, type RouteEntry } from './route-table.ts';
@@ -399,6 +400,18 @@ export const fixtures: Record<string, Fixture> = {
     { actuatorGainNmPerV: 102.6, dacBits: 16, dacSpanV: 10, ampGainVPerV: 30 },
     'warnings',
   ),
+  'POST /api/workbench/sine-fit': workbench(
+    sineFitInput,
+    {
+      samples: Array.from({ length: 100 }, (_, i) => ({
+        timeS: i / 20,
+        volts: 10 * Math.sin(i / 3),
+        displacement: 500 * Math.sin(i / 3 - 0.2),
+      })),
+      displacementUnit: 'nm',
+    },
+    'gainNmPerV',
+  ),
 
   'POST /api/builds/:buildId/photos': {
     allowed: 'owner',
@@ -532,6 +545,19 @@ export const fixtures: Record<string, Fixture> = {
         state: buildState(build.id),
         async changed() {
           expect((await Build.findByPk(build.id))?.status).toBe('submitted');
+        },
+      };
+    },
+  },
+  'POST /api/builds/:buildId/withdraw': {
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx, 'submitted');
+      return {
+        params: { buildId: build.id },
+        state: buildState(build.id),
+        async changed() {
+          expect((await Build.findByPk(build.id))?.status).toBe('draft');
         },
       };
     },
@@ -671,6 +697,23 @@ export const fixtures: Record<string, Fixture> = {
         state: () => rows(runs(), Build.findByPk(build.id)),
         async changed() {
           expect((await runs()).map((r) => [r.status, Number(r.gainNmPerV.toFixed(6))])).toEqual([['pending', 4.2]]);
+        },
+      };
+    },
+  },
+  'PATCH /api/runs/:runId': {
+    schema: updateRunInput,
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const part = await createPart();
+      const run = await createRunRow({ buildId: build.id, partId: part.id, ownerId: ctx.owner.id, gainNmPerV: 40 });
+      return {
+        params: { runId: run.id },
+        body: { measuredOn: '2026-11-02', notes: 'Re-read the indicator.' },
+        state: () => rows(CalibrationRun.findByPk(run.id)),
+        async changed() {
+          expect(await CalibrationRun.findByPk(run.id)).toMatchObject({ measuredOn: '2026-11-02', notes: 'Re-read the indicator.' });
         },
       };
     },

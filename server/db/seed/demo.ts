@@ -1,5 +1,5 @@
 import type { Sequelize, Transaction } from 'sequelize';
-import { fitCalibrationInUnits } from '@shared/workbench/calibration-fit.ts';
+import { fitRun } from '@shared/workbench/run-fit.ts';
 import { AppMeta } from '../../models/app-meta.model.ts';
 import { User } from '../../models/user.model.ts';
 import { Part } from '../../models/part.model.ts';
@@ -121,6 +121,7 @@ async function seedBuild(
     for (const r of a.runs) {
       const points = demoSweep({ ...r, unit: r.displacementUnit, seed: seed++ });
       const input = {
+        kind: 'points' as const,
         points,
         voltageUnit: 'V' as const,
         displacementUnit: r.displacementUnit,
@@ -128,7 +129,7 @@ async function seedBuild(
         method: r.method,
         drive: { kind: 'dc-steps' as const },
       };
-      const fit = fitCalibrationInUnits(input);
+      const fit = fitRun(input);
       const reviewed = r.status !== 'pending';
       await CalibrationRun.create(
         {

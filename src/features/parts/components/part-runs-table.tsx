@@ -1,22 +1,23 @@
 import { formatDate } from '@shared/format/dates.ts';
 import { Link } from 'react-router-dom';
 import type { PartRunDto } from '@shared/schemas/part.ts';
-import { runMethodLabels, type RunMethod } from '@shared/schemas/run.ts';
+import { runKindLabels, runMethodLabels, type RunMethod } from '@shared/schemas/run.ts';
+import { runGainPlusMinus } from '@shared/export/run-figures.ts';
 import { paths } from '@/config/paths.ts';
 import { formatShort, formatWithUncertainty } from '@shared/format/measured-number.ts';
 import { PlusMinusLabel } from '@/components/ui/plus-minus-label.tsx';
 
 function Gain({ run }: { run: PartRunDto }) {
-  const [lo, hi] = run.gainCi95NmPerV;
-  if (lo === null || hi === null) return <>{formatShort(run.gainNmPerV)}</>;
-  const f = formatWithUncertainty(run.gainNmPerV, Math.abs(hi - lo) / 2);
+  const pm = runGainPlusMinus(run);
+  if (pm.halfWidth === null) return <>{formatShort(run.gainNmPerV)}</>;
+  const f = formatWithUncertainty(run.gainNmPerV, pm.halfWidth);
   return (
     <>
       {f.value}
       {f.uncertainty && (
         <span className="text-ink-soft">
           {' '}
-          ± {f.uncertainty} <PlusMinusLabel kind="ci95" />
+          ± {f.uncertainty} <PlusMinusLabel kind={pm.kind} />
         </span>
       )}
     </>
@@ -50,7 +51,7 @@ export function PartRunsTable({ runs }: { runs: PartRunDto[] }) {
                 Method
               </th>
               <th scope="col" className="px-3 py-2 text-right">
-                Gain (nm/V, 95 %)
+                Gain (nm/V)
               </th>
               <th scope="col" className="px-3 py-2 text-right">
                 Hysteresis
@@ -69,7 +70,10 @@ export function PartRunsTable({ runs }: { runs: PartRunDto[] }) {
                   </Link>
                 </td>
                 <td className="whitespace-nowrap px-3 py-1.5">{r.maker}</td>
-                <td className="px-3 py-1.5">{runMethodLabels[r.method as RunMethod] ?? r.method}</td>
+                <td className="px-3 py-1.5">
+                  {runMethodLabels[r.method as RunMethod] ?? r.method}
+                  <span className="block text-xs text-ink-soft">{runKindLabels[r.kind]}</span>
+                </td>
                 <td className="num whitespace-nowrap px-3 py-1.5 text-right">
                   <Gain run={r} />
                 </td>

@@ -1,6 +1,6 @@
 import { lazy, Suspense, useDeferredValue, useMemo } from 'react';
 import { useFormContext, useWatch } from 'react-hook-form';
-import type { CreateRunInput } from '@shared/schemas/run.ts';
+import type { PointsRunInput } from '@shared/schemas/run.ts';
 import { fitCalculator } from '@shared/workbench/calculators/fit-calculator.ts';
 import { pointsAboveLimit } from '@shared/workbench/safety.ts';
 import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
@@ -13,7 +13,7 @@ const CalibrationChart = lazy(async () => ({ default: (await import('@/component
 
 /** The gain fit of the points as typed, computed in the browser with the same shared code the server uses. */
 export function FitPreview({ maxVolts }: { maxVolts: number | null }) {
-  const { control } = useFormContext<RunFormValues, unknown, CreateRunInput>();
+  const { control } = useFormContext<RunFormValues, unknown, PointsRunInput>();
   const watched = useWatch({ control, name: ['points', 'voltageUnit', 'displacementUnit', 'model'] });
   const [rows, voltageUnit, displacementUnit, model] = useDeferredValue(watched);
 

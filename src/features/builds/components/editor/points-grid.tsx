@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { useFormContext, useWatch, type FieldArrayWithId, type UseFieldArrayReturn } from 'react-hook-form';
-import type { CreateRunInput } from '@shared/schemas/run.ts';
+import type { PointsRunInput } from '@shared/schemas/run.ts';
 import { displacementUnitLabels, voltageUnitLabels, type DisplacementUnit, type VoltageUnit } from '@shared/units.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { blankPoint, type RunFormValues } from './run-form-schema.ts';
@@ -20,7 +20,7 @@ export function PointsGrid({
     register,
     control,
     formState: { errors },
-  } = useFormContext<RunFormValues, unknown, CreateRunInput>();
+  } = useFormContext<RunFormValues, unknown, PointsRunInput>();
   const [vUnit, dUnit] = useWatch({ control, name: ['voltageUnit', 'displacementUnit'] });
   const [showAll, setShowAll] = useState(false);
   const shown = showAll ? fields : fields.slice(0, SHOWN);

@@ -1,5 +1,5 @@
 import { useFormContext } from 'react-hook-form';
-import type { CreateRunInput } from '@shared/schemas/run.ts';
+import type { PointsRunInput } from '@shared/schemas/run.ts';
 import { describe, Field, fieldMessage, inputClass } from '@/components/ui/form-bits.tsx';
 import type { RunFormValues } from './run-form-schema.ts';
 
@@ -8,7 +8,7 @@ export function RunConditionsFields({ idPrefix }: { idPrefix: string }) {
   const {
     register,
     formState: { errors },
-  } = useFormContext<RunFormValues, unknown, CreateRunInput>();
+  } = useFormContext<RunFormValues, unknown, PointsRunInput>();
   const id = (f: string) => `${idPrefix}-${f}`;
   const tempError = fieldMessage(errors.conditions?.temperatureC, 'Enter a temperature in °C.');
   return (

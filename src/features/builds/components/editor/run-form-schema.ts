@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { createRunInput, type CreateRunInput } from '@shared/schemas/run.ts';
+import { pointsRunInput, type PointsRunInput } from '@shared/schemas/run.ts';
 import type { RecordedCalibrationPoint } from '@shared/workbench/calibration-fit.ts';
 import { parseNumber, parseOptionalNumber } from '@/lib/csv/number-text.ts';
 
@@ -41,11 +41,11 @@ export const runFormDefaults = (): RunFormValues => ({
 
 /**
  * The grid's text turned into the API's run: blank rows dropped, numbers parsed (a row that is not a
- * number is flagged where it stands), then checked by the shared `createRunInput` itself.
+ * number is flagged where it stands), then checked by the shared `pointsRunInput` itself.
  */
 export const runForm = formShape
-  .transform((v, ctx): z.input<typeof createRunInput> => {
-    const points: z.input<typeof createRunInput>['points'] = [];
+  .transform((v, ctx): z.input<typeof pointsRunInput> => {
+    const points: z.input<typeof pointsRunInput>['points'] = [];
     v.points.forEach((p, i) => {
       if (isBlank(p)) return;
       const volts = parseNumber(p.volts);
@@ -59,10 +59,10 @@ export const runForm = formShape
     const sine = v.drive.kind === 'sine';
     const conditions = { preload: text(v.conditions.preload), temperatureC, notes: text(v.conditions.notes) };
     return {
-      method: v.method as CreateRunInput['method'],
-      voltageUnit: v.voltageUnit as CreateRunInput['voltageUnit'],
-      displacementUnit: v.displacementUnit as CreateRunInput['displacementUnit'],
-      model: v.model as CreateRunInput['model'],
+      method: v.method as PointsRunInput['method'],
+      voltageUnit: v.voltageUnit as PointsRunInput['voltageUnit'],
+      displacementUnit: v.displacementUnit as PointsRunInput['displacementUnit'],
+      model: v.model as PointsRunInput['model'],
       drive: sine
         ? { kind: 'sine', frequencyHz: parseNumber(v.drive.frequencyHz), amplitudeV: parseNumber(v.drive.amplitudeV) }
         : { kind: 'dc-steps' },
@@ -71,7 +71,7 @@ export const runForm = formShape
       points,
     };
   })
-  .pipe(createRunInput);
+  .pipe(pointsRunInput);
 
 /** The points the live preview can use (readable rows only), and how many typed rows it had to leave out. */
 export function previewPoints(rows: readonly GridPoint[]): { points: RecordedCalibrationPoint[]; skipped: number } {

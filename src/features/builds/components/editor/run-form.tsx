@@ -1,6 +1,6 @@
 import { FormProvider, useFieldArray, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import type { CreateRunInput, RunDto } from '@shared/schemas/run.ts';
+import type { PointsRunInput, RunDto } from '@shared/schemas/run.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { useCreateRun } from '../../api/create-run.ts';
 import { fieldMessage, FormError } from '@/components/ui/form-bits.tsx';
@@ -28,7 +28,7 @@ export function RunForm({
   onCancel: () => void;
 }) {
   const create = useCreateRun(actuatorId);
-  const form = useForm<RunFormValues, unknown, CreateRunInput>({ resolver: zodResolver(runForm), defaultValues: runFormDefaults() });
+  const form = useForm<RunFormValues, unknown, PointsRunInput>({ resolver: zodResolver(runForm), defaultValues: runFormDefaults() });
   const points = useFieldArray({ control: form.control, name: 'points' });
   usePointsUnitConversion(form, points);
   const { errors, isSubmitting } = form.formState;

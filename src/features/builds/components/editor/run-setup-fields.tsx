@@ -1,5 +1,5 @@
 import { useFormContext, useWatch } from 'react-hook-form';
-import type { CreateRunInput } from '@shared/schemas/run.ts';
+import type { PointsRunInput } from '@shared/schemas/run.ts';
 import { RUN_METHODS, runMethodLabels } from '@shared/schemas/run.ts';
 import { displacementUnitLabels, displacementUnits, voltageUnitLabels, voltageUnits } from '@shared/units.ts';
 import { describe, Field, fieldMessage, inputClass } from '@/components/ui/form-bits.tsx';
@@ -11,7 +11,7 @@ export function RunSetupFields({ idPrefix }: { idPrefix: string }) {
     register,
     control,
     formState: { errors },
-  } = useFormContext<RunFormValues, unknown, CreateRunInput>();
+  } = useFormContext<RunFormValues, unknown, PointsRunInput>();
   const driveKind = useWatch({ control, name: 'drive.kind' });
   const id = (f: string) => `${idPrefix}-${f}`;
   const methodError = fieldMessage(errors.method, 'Pick how you measured the displacement.');

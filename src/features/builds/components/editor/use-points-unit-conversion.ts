@@ -1,13 +1,13 @@
 import { useEffect, useRef } from 'react';
 import { useWatch, type UseFieldArrayReturn, type UseFormReturn } from 'react-hook-form';
-import type { CreateRunInput } from '@shared/schemas/run.ts';
+import type { PointsRunInput } from '@shared/schemas/run.ts';
 import type { DisplacementUnit, VoltageUnit } from '@shared/units.ts';
 import { convertTypedPoints } from '@/hooks/use-unit-conversion.ts';
 import type { RunFormValues } from './run-form-schema.ts';
 
 /** Changing the run's voltage or displacement unit converts the typed points, so each keeps its physical value. */
 export function usePointsUnitConversion(
-  form: UseFormReturn<RunFormValues, unknown, CreateRunInput>,
+  form: UseFormReturn<RunFormValues, unknown, PointsRunInput>,
   points: UseFieldArrayReturn<RunFormValues, 'points'>,
 ) {
   const [voltageUnit, displacementUnit] = useWatch({ control: form.control, name: ['voltageUnit', 'displacementUnit'] });

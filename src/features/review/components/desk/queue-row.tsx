@@ -3,8 +3,11 @@ import { reportReasonLabels, type QueueBuildDto, type QueueRunDto } from '@share
 import { instrumentKindLabels, type InstrumentKind } from '@shared/schemas/build.ts';
 import { partCategoryLabels, type PartCategory } from '@shared/schemas/part.ts';
 import { FlagChips } from '../flag-chips.tsx';
-import { age, count, halfWidth, sentenceCase, sig, targetTypeWords, withUncertainty } from '../format.ts';
+import { age, count, sentenceCase, sig, targetTypeWords, withUncertainty } from '../format.ts';
 import type { QueueEntry } from './queue-model.ts';
+import { runKindLabels } from '@shared/schemas/run.ts';
+import { runGainPlusMinus } from '@shared/export/run-figures.ts';
+import { PlusMinusLabel } from '@/components/ui/plus-minus-label.tsx';
 
 const kindLabel = (k: string) => instrumentKindLabels[k as InstrumentKind] ?? k;
 const categoryLabel = (c: string) => partCategoryLabels[c as PartCategory] ?? c;
@@ -108,8 +111,8 @@ function RunFacts({ run: r }: { run: QueueRunDto }) {
     >
       <span className="flex flex-wrap gap-x-3 gap-y-0.5">
         <span>
-          <span className="num font-medium">{withUncertainty(r.fit.gainNmPerV, halfWidth(r.fit.gainCi95NmPerV))}</span> nm/V{' '}
-          <span className="text-xs text-ink-soft">(95 %)</span>
+          <span className="num font-medium">{withUncertainty(r.fit.gainNmPerV, runGainPlusMinus(r.fit).halfWidth)}</span> nm/V{' '}
+          <PlusMinusLabel kind={runGainPlusMinus(r.fit).kind} className="text-xs" /> · {runKindLabels[r.kind].toLowerCase()}
         </span>
         <span>
           R² <span className="num">{r.fit.r2 === null ? '—' : r.fit.r2.toFixed(4)}</span>

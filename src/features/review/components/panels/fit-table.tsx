@@ -1,14 +1,25 @@
 import { formatPlusMinus } from '@shared/format/measured-number.ts';
-import type { FitResultDto } from '@shared/schemas/workbench.ts';
-import { halfWidth, sig } from '../format.ts';
+import type { RunFitDto } from '@shared/schemas/run.ts';
+import { runGainPlusMinus } from '@shared/export/run-figures.ts';
+import { sig } from '../format.ts';
 
 /** The server's fit of a run as a table of measured numbers with units. */
-export function FitTable({ fit }: { fit: FitResultDto }) {
-  const [lo, hi] = fit.gainCi95NmPerV;
+export function FitTable({ fit }: { fit: RunFitDto }) {
+  const pm = runGainPlusMinus(fit);
+  const ci = fit.gainCi95NmPerV;
   const rows: [string, string][] = [
-    ['Gain', formatPlusMinus(fit.gainNmPerV, halfWidth(fit.gainCi95NmPerV), 'ci95')],
-    ['95 % interval', `${sig(lo, 4)} to ${sig(hi, 4)} nm/V`],
-    ['Standard error', `${sig(fit.gainStdErrNmPerV, 2)} nm/V`],
+    ['Gain', formatPlusMinus(fit.gainNmPerV, pm.halfWidth, pm.kind)],
+    ...(ci ? [['95 % interval', `${sig(ci[0], 4)} to ${sig(ci[1], 4)} nm/V`] as [string, string]] : []),
+    ...(fit.gainBoundsNmPerV
+      ? [['Worst-case bounds', `${sig(fit.gainBoundsNmPerV[0], 4)} to ${sig(fit.gainBoundsNmPerV[1], 4)} nm/V`] as [string, string]]
+      : []),
+    ...(fit.sine
+      ? [
+          ['Drive frequency', `${sig(fit.sine.frequencyHz, 4)} Hz`] as [string, string],
+          ['Phase lag', `${sig(fit.sine.phaseLagDeg, 3)}°`] as [string, string],
+        ]
+      : []),
+    [ci ? 'Standard error' : 'Standard uncertainty', `${sig(fit.gainStdErrNmPerV, 2)} nm/V`],
     ['Intercept', `${sig(fit.interceptNm, 3)} nm`],
     ['R²', fit.r2 === null ? '—' : fit.r2.toFixed(4)],
     ['Residual std. dev.', `${sig(fit.residualStdNm, 2)} nm`],
