@@ -237,3 +237,40 @@ describe('big runs stay cheap', () => {
     );
   });
 });
+
+describe('POST /api/actuators/:actuatorId/runs with kind "sine-record"', () => {
+  // A generated record [calc]: 50 Hz drive of 60 V amplitude on a 60 V offset, displacement 5.1 µm amplitude
+  // lagging 12°, 4 000 samples over 0.1 s (5 periods), no noise: the fit must return what was put in.
+  const f = 50;
+  const samples = Array.from({ length: 4000 }, (_, i) => {
+    const t = i * 2.5e-5;
+    const w = 2 * Math.PI * f * t;
+    return { timeS: t, volts: 60 + 60 * Math.sin(w), displacement: 1.3 + 5.1 * Math.sin(w - (12 * Math.PI) / 180) };
+  });
+  const body = { kind: 'sine-record', samples, voltageUnit: 'V', displacementUnit: 'um', method: 'capacitive' };
+
+  test('when a maker stores a sine record, then the gain is amplitude ÷ amplitude, the lag and frequency are stored, and the plot is decimated', async () => {
+    const { a, actuatorId } = await ownerWithActuator();
+    const res = await post(a, `/api/actuators/${actuatorId}/runs`, body);
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ kind: 'sine-record', pointCount: 4000, decimated: true });
+    expect(res.body.points.length).toBeLessThanOrEqual(2000);
+    expect(res.body.fit.gainNmPerV).toBeCloseTo(5100 / 60, 6);
+    expect(res.body.fit.sine.frequencyHz).toBeCloseTo(50, 6);
+    expect(res.body.fit.sine.phaseLagDeg).toBeCloseTo(12, 4);
+    expect(res.body.fit.sine.frequencyKnown).toBe(false);
+    // The workbench route answers the same gain for the same record.
+    const wb = await request(t.app).post('/api/workbench/sine-fit').send({ samples, voltageUnit: 'V', displacementUnit: 'um' });
+    expect(wb.status).toBe(200);
+    expect(res.body.fit.gainNmPerV).toBe(wb.body.gainNmPerV);
+    const csv = await a.get(`/api/runs/${res.body.id}/export?format=csv`);
+    expect(Papa.parse<string[]>(csv.text.trim(), { comments: '#' }).data[0]).toEqual(['time_s', 'volts_V', 'displacement_um']);
+  });
+
+  test('when the record spans less than two periods, then 400 with the fit’s code and nothing is stored', async () => {
+    const { a, actuatorId } = await ownerWithActuator();
+    const res = await post(a, `/api/actuators/${actuatorId}/runs`, { ...body, samples: samples.slice(0, 1000) });
+    expectError(res, 400, 'record_too_short');
+    expect(await CalibrationRun.count({ where: { actuatorId } })).toBe(0);
+  });
+});
