@@ -18,7 +18,8 @@ export function RigTokens() {
         </h2>
         <p className="mt-1 text-sm text-ink-soft">
           A token lets a script on your bench computer add calibration runs to your actuators without a browser: send it as{' '}
-          <code>Authorization: Bearer …</code>. Give each rig its own token, so you can revoke one without touching the others.
+          <code className="whitespace-nowrap">Authorization: Bearer …</code>. Give each rig its own token, so you can revoke one without
+          touching the others.
         </p>
       </div>
       {created ? <NewTokenSecret token={created} onDone={() => setCreated(null)} /> : <NewTokenForm onCreated={setCreated} />}
