@@ -124,6 +124,22 @@ export const updateRunInput = z
   .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change.' });
 export type UpdateRunInput = z.infer<typeof updateRunInput>;
 
+/** What a workbench page hands over to be recorded: a run's data of its kind, without method, drive or conditions. */
+export type RunRecordData =
+  | Pick<PointsRunInput, 'kind' | 'points' | 'voltageUnit' | 'displacementUnit' | 'model'>
+  | Pick<
+      PeakToPeakRunInput,
+      | 'kind'
+      | 'displacementPp'
+      | 'voltsPp'
+      | 'displacementUnit'
+      | 'voltageUnit'
+      | 'displacementResolution'
+      | 'voltsResolution'
+      | 'frequencyHz'
+    >
+  | Pick<SineRecordRunInput, 'kind' | 'samples' | 'voltageUnit' | 'displacementUnit' | 'frequencyHz'>;
+
 export const runIdParams = z.strictObject({ runId: z.coerce.number().int().positive() });
 
 export const RUN_EXPORT_FORMATS = ['csv', 'json'] as const;

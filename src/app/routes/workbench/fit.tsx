@@ -20,6 +20,7 @@ import { useFitUnitConversion } from '@/features/workbench/fit/use-fit-unit-conv
 import { UnitChangeQuestion } from '@/components/ui/unit-change-question.tsx';
 import { friendlyError } from '@/features/workbench/form/error-map.ts';
 import { displacementOptions, voltageOptions } from '@/features/workbench/unit-options.ts';
+import { RecordAsRun } from '@/features/builds/components/record/record-as-run.tsx';
 
 const defaults: FitFormValues = {
   source: 'grid',
@@ -96,6 +97,7 @@ export function FitPage() {
               >
                 <LazyCalibrationChart points={result.preview.plotPoints} fit={result.preview.fit} />
               </ChartFrame>
+              <RecordAsRun data={{ kind: 'points', ...result.preview.input }} defaultMethod="indicator" />
               <p className="text-sm text-ink-soft">
                 Sine drive instead? Use the{' '}
                 <Link className="text-teal-dark underline" to={paths.workbenchTool('peak-to-peak')}>

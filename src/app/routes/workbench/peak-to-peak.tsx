@@ -8,6 +8,8 @@ import { formatSig } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { peakToPeakForm, peakToPeakLengthFields } from '@/features/workbench/simple/peak-to-peak-form.ts';
 import { displacementOptions } from '@/features/workbench/unit-options.ts';
+import { RecordAsRun } from '@/features/builds/components/record/record-as-run.tsx';
+import type { RunRecordData } from '@shared/schemas/run.ts';
 
 const defaults = { unit: 'um', displacementPp: 2, displacementResolution: 0.1, voltsPpV: 20 } as const;
 
@@ -16,6 +18,20 @@ export function PeakToPeakPage() {
   useUnitConversion(form, 'unit', peakToPeakLengthFields, convertDisplacement);
   const unit = displacementUnitLabels[form.watch('unit') ?? 'nm'];
   const r = live.ok ? live.result : null;
+  const v = form.watch();
+  const record: RunRecordData | null = r
+    ? {
+        kind: 'peak-to-peak',
+        displacementPp: Number(v.displacementPp),
+        voltsPp: Number(v.voltsPpV),
+        displacementUnit: v.unit ?? 'nm',
+        voltageUnit: 'V',
+        displacementResolution: Number(v.displacementResolution),
+        ...(v.voltsResolutionV !== undefined && v.voltsResolutionV !== null && String(v.voltsResolutionV) !== ''
+          ? { voltsResolution: Number(v.voltsResolutionV) }
+          : {}),
+      }
+    : null;
   return (
     <ToolPage
       slug="peak-to-peak"
@@ -78,6 +94,7 @@ export function PeakToPeakPage() {
                   </span>
                 </ResultRow>
               </ResultPanel>
+              <RecordAsRun data={record} defaultMethod="indicator" />
             </>
           ) : (
             <NoResult message={live.ok ? '' : live.message} />

@@ -62,6 +62,8 @@ export type FitCalculation = CalculatorResult<typeof fitCalculator>;
 /** A fit ready to show: the shared result and the points in V and nm for the plot. */
 export interface FitPreview {
   fit: FitCalculation;
+  /** The parsed input the fit was computed from (the run "record as a run" stores). */
+  input: z.output<typeof fitInput>;
   plotPoints: CalibrationChartPoint[];
 }
 
@@ -88,7 +90,7 @@ export function previewFit(
       displacementNm: toNm(p.displacement, displacementUnit),
       sweep: p.sweep,
     }));
-    return { ok: true, preview: { fit, plotPoints } };
+    return { ok: true, preview: { fit, input: parsed.data, plotPoints } };
   } catch (err) {
     return { ok: false, message: refusalMessage(err) };
   }
