@@ -6,6 +6,11 @@ export const workbenchTools = [
     title: 'Peak-to-peak gain',
     line: 'Gain from a sine drive read at its peaks, limited by the reading resolution.',
   },
+  {
+    slug: 'sine-fit',
+    title: 'Sine recording',
+    line: 'Gain and phase lag from a recorded sine drive and displacement (IEEE 1057 sine fit), with the loop plotted.',
+  },
   { slug: 'creep', title: 'Creep', line: 'Fit the logarithmic creep after a voltage step and project it to later times.' },
   {
     slug: 'expected-gain',
