@@ -1,8 +1,27 @@
-import { formatPlusMinus, formatSig } from '@shared/format/measured-number.ts';
+import { formatSig, formatWithUncertainty } from '@shared/format/measured-number.ts';
+import { PlusMinusLabel } from '@/components/ui/plus-minus-label.tsx';
 import { Gain, Headline, ResultPanel, ResultRow } from '@/features/workbench/components/results.tsx';
 import type { SineFitResult } from './use-sine-record.ts';
 
-const pm = (value: number, u: number | null, unit: string) => formatPlusMinus(value, u, 'std', unit);
+/** A value ± its standard uncertainty and unit, the label on its own so a narrow screen can wrap before it. */
+function Measured({ value, u, unit }: { value: number; u: number | null; unit: string }) {
+  const f = formatWithUncertainty(value, u);
+  return (
+    <>
+      <span className="num whitespace-nowrap">
+        {f.value}
+        {f.uncertainty && ` ± ${f.uncertainty}`}
+        {unit === '°' ? unit : ` ${unit}`}
+      </span>
+      {f.uncertainty && (
+        <>
+          {' '}
+          <PlusMinusLabel kind="std" className="whitespace-nowrap text-xs" />
+        </>
+      )}
+    </>
+  );
+}
 
 /** Gain ± u, phase lag, frequency, amplitudes, residual SDs and the record's extent. */
 export function SineFitResults({ r }: { r: SineFitResult }) {
@@ -23,16 +42,20 @@ export function SineFitResults({ r }: { r: SineFitResult }) {
       }
     >
       <ResultRow label="Phase lag of displacement behind drive" note="Positive: the displacement follows the drive late; the loop's width.">
-        <span className="num">{pm(r.phaseLagDeg, r.phaseLagStdUncDeg, '°')}</span>
+        <Measured value={r.phaseLagDeg} u={r.phaseLagStdUncDeg} unit="°" />
       </ResultRow>
       <ResultRow label={r.frequencyKnown ? 'Frequency (given)' : 'Frequency (fitted)'}>
-        <span className="num">{r.frequencyKnown ? `${formatSig(r.frequencyHz, 6)} Hz` : pm(r.frequencyHz, r.frequencyStdUncHz, 'Hz')}</span>
+        {r.frequencyKnown ? (
+          <span className="num">{formatSig(r.frequencyHz, 6)} Hz</span>
+        ) : (
+          <Measured value={r.frequencyHz} u={r.frequencyStdUncHz} unit="Hz" />
+        )}
       </ResultRow>
       <ResultRow label="Drive amplitude" note={`Offset ${formatSig(r.voltsOffsetV)} V`}>
-        <span className="num">{pm(r.voltsAmplitudeV, r.voltsAmplitudeStdUncV, 'V')}</span>
+        <Measured value={r.voltsAmplitudeV} u={r.voltsAmplitudeStdUncV} unit="V" />
       </ResultRow>
       <ResultRow label="Displacement amplitude" note={`Offset ${formatSig(r.displacementOffsetNm)} nm`}>
-        <span className="num">{pm(r.displacementAmplitudeNm, r.displacementAmplitudeStdUncNm, 'nm')}</span>
+        <Measured value={r.displacementAmplitudeNm} u={r.displacementAmplitudeStdUncNm} unit="nm" />
       </ResultRow>
       <ResultRow
         label="Residual SD"
