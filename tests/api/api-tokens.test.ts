@@ -103,6 +103,19 @@ describe('requests with Authorization: Bearer', () => {
     expect(Date.parse(listed.lastUsedAt)).toBeGreaterThan(Date.now() - 60_000);
   });
 
+  test('when a runs:write token corrects one of its owner’s runs (PATCH), then 200 and the run is refitted', async () => {
+    const { agent, actuator } = await makerWithActuator(t);
+    const { secret } = await makeToken(agent, ['runs:write']);
+    const created = await request(t.app).post(`/api/actuators/${actuator.id}/runs`).set(bearer(secret)).send(rigRun()).expect(201);
+    const res = await request(t.app)
+      .patch(`/api/runs/${created.body.id}`)
+      .set(bearer(secret))
+      .send({ points: rigRun(5).points });
+    expect(res.status, res.text).toBe(200);
+    // 5 nm/V by construction of the corrected points [calc].
+    expect((await CalibrationRun.findByPk(created.body.id))!.gainNmPerV).toBeCloseTo(5, 9);
+  });
+
   test('when a runs:write token is sent to any other route, then 403 token_scope and nothing changes', async () => {
     const { agent, actuator, build } = await makerWithActuator(t);
     const { secret } = await makeToken(agent, ['runs:write']);
