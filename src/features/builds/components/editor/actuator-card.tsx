@@ -84,7 +84,7 @@ export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
       {a.runs.length === 0 && !addingRun && <p className="mb-2 text-sm text-ink-soft">No calibration runs yet.</p>}
       <ul className="space-y-2">
         {a.runs.map((r) => (
-          <StoredRun key={r.id} run={r} />
+          <StoredRun key={r.id} run={r} maxVolts={a.maxVolts} />
         ))}
       </ul>
       <div className="mt-3">

@@ -22,6 +22,15 @@ export function RunConditionsFields({ idPrefix }: { idPrefix: string }) {
           {...register('conditions.preload')}
         />
       </Field>
+      <Field label="Measured on" id={id('date')} error={errors.measuredOn?.message} hint="Leave empty for the day you save it.">
+        <input
+          id={id('date')}
+          type="date"
+          className={inputClass}
+          {...describe(id('date'), errors.measuredOn?.message, true)}
+          {...register('measuredOn')}
+        />
+      </Field>
       <Field label="Temperature (°C)" id={id('temp')} error={tempError}>
         <input
           id={id('temp')}

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { pointsRunInput, type PointsRunInput } from '@shared/schemas/run.ts';
+import { pointsRunInput, type PointsRunInput, type RunDto } from '@shared/schemas/run.ts';
 import type { RecordedCalibrationPoint } from '@shared/workbench/calibration-fit.ts';
 import { parseNumber, parseOptionalNumber } from '@/lib/csv/number-text.ts';
 
@@ -20,6 +20,7 @@ const formShape = z.object({
   drive: z.object({ kind: z.enum(['dc-steps', 'sine']), frequencyHz: z.string(), amplitudeV: z.string() }),
   conditions: z.object({ preload: z.string(), temperatureC: z.string(), notes: z.string() }),
   notes: z.string(),
+  measuredOn: z.string(),
   points: z.array(gridPoint),
 });
 export type RunFormValues = z.input<typeof formShape>;
@@ -36,7 +37,30 @@ export const runFormDefaults = (): RunFormValues => ({
   drive: { kind: 'dc-steps', frequencyHz: '', amplitudeV: '' },
   conditions: { preload: '', temperatureC: '', notes: '' },
   notes: '',
+  measuredOn: '',
   points: Array.from({ length: 5 }, blankPoint),
+});
+
+const cell = (n: number) => String(n);
+
+/** A stored point run (every point, not a decimated series) as the form's values, for correcting it. */
+export const runFormValuesOf = (run: RunDto): RunFormValues => ({
+  method: run.method,
+  voltageUnit: run.voltageUnit,
+  displacementUnit: run.displacementUnit,
+  model: run.model,
+  drive:
+    run.drive?.kind === 'sine'
+      ? { kind: 'sine', frequencyHz: cell(run.drive.frequencyHz), amplitudeV: cell(run.drive.amplitudeV) }
+      : { kind: 'dc-steps', frequencyHz: '', amplitudeV: '' },
+  conditions: {
+    preload: run.conditions?.preload ?? '',
+    temperatureC: run.conditions?.temperatureC === undefined ? '' : cell(run.conditions.temperatureC),
+    notes: run.conditions?.notes ?? '',
+  },
+  notes: run.notes ?? '',
+  measuredOn: run.measuredOn ?? '',
+  points: run.points.map((p) => ({ volts: cell(p.volts), displacement: cell(p.displacement), sweep: p.sweep ?? '' })),
 });
 
 /**
@@ -68,6 +92,7 @@ export const runForm = formShape
         : { kind: 'dc-steps' },
       conditions: Object.values(conditions).some((c) => c !== undefined) ? conditions : undefined,
       notes: text(v.notes),
+      ...(v.measuredOn ? { measuredOn: v.measuredOn } : {}),
       points,
     };
   })

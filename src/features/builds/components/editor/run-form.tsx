@@ -3,32 +3,40 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import type { PointsRunInput, RunDto } from '@shared/schemas/run.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { useCreateRun } from '../../api/create-run.ts';
+import { useUpdateRun } from '../../api/update-run.ts';
 import { fieldMessage, FormError } from '@/components/ui/form-bits.tsx';
 import { FitPreview } from './fit-preview.tsx';
 import { PointsCsvImport } from './points-csv-import.tsx';
 import { PointsGrid } from './points-grid.tsx';
 import { RunConditionsFields } from './run-conditions-fields.tsx';
-import { runForm, runFormDefaults, type RunFormValues } from './run-form-schema.ts';
+import { runForm, runFormDefaults, runFormValuesOf, type RunFormValues } from './run-form-schema.ts';
 import { RunSetupFields } from './run-setup-fields.tsx';
 import { applyServerErrors } from '@/components/ui/form-bits.tsx';
 import { usePointsUnitConversion } from './use-points-unit-conversion.ts';
 
-const FIELDS = ['method', 'voltageUnit', 'displacementUnit', 'model', 'drive', 'conditions', 'notes', 'points'] as const;
+const FIELDS = ['method', 'voltageUnit', 'displacementUnit', 'model', 'drive', 'conditions', 'notes', 'measuredOn', 'points'] as const;
 
-/** A new calibration run for one actuator: setup, conditions, points (typed or from CSV) and the live fit. */
+/** A new calibration run for one actuator, or a stored point run to correct: setup, conditions, points (typed or from CSV) and the live fit. */
 export function RunForm({
   actuatorId,
   maxVolts,
+  run,
   onSaved,
   onCancel,
 }: {
   actuatorId: number;
   maxVolts: number | null;
+  /** The stored point run to correct (all its points: not a decimated series). */
+  run?: RunDto;
   onSaved: (run: RunDto) => void;
   onCancel: () => void;
 }) {
   const create = useCreateRun(actuatorId);
-  const form = useForm<RunFormValues, unknown, PointsRunInput>({ resolver: zodResolver(runForm), defaultValues: runFormDefaults() });
+  const update = useUpdateRun(run?.id ?? 0);
+  const form = useForm<RunFormValues, unknown, PointsRunInput>({
+    resolver: zodResolver(runForm),
+    defaultValues: run ? runFormValuesOf(run) : runFormDefaults(),
+  });
   const points = useFieldArray({ control: form.control, name: 'points' });
   usePointsUnitConversion(form, points);
   const { errors, isSubmitting } = form.formState;
@@ -40,7 +48,10 @@ export function RunForm({
 
   const submit = form.handleSubmit(async (values) => {
     try {
-      onSaved(await create.mutateAsync(values));
+      if (run) {
+        const { kind: _kind, ...change } = values;
+        onSaved(await update.mutateAsync(change));
+      } else onSaved(await create.mutateAsync(values));
     } catch (err) {
       applyServerErrors(err, form.setError, FIELDS);
     }
@@ -51,10 +62,15 @@ export function RunForm({
       <form
         onSubmit={submit}
         noValidate
-        aria-label="New calibration run"
+        aria-label={run ? 'Correct calibration run' : 'New calibration run'}
         className="space-y-4 rounded-md border border-copper/40 bg-white p-2 sm:p-3"
       >
-        <h4 className="font-semibold">New calibration run</h4>
+        <h4 className="font-semibold">{run ? 'Correct this calibration run' : 'New calibration run'}</h4>
+        {run?.status === 'accepted' && (
+          <p className="text-sm text-ink-soft">
+            This run is accepted: saving a correction takes it out of the part&apos;s figures until a moderator accepts it again.
+          </p>
+        )}
         <RunSetupFields idPrefix={idPrefix} />
         <fieldset className="space-y-3">
           <legend className="mb-2 text-sm font-semibold">Points</legend>
@@ -71,7 +87,7 @@ export function RunForm({
         </p>
         <div className="flex flex-wrap gap-2">
           <Button type="submit" disabled={isSubmitting}>
-            {isSubmitting ? 'Saving…' : 'Save calibration run'}
+            {isSubmitting ? 'Saving…' : run ? 'Save the correction' : 'Save calibration run'}
           </Button>
           <Button variant="ghost" onClick={onCancel}>
             Cancel

@@ -1,12 +1,13 @@
 import { lazy, Suspense, useState } from 'react';
 import type { RunDto } from '@shared/schemas/run.ts';
-import { runMethodLabels } from '@shared/schemas/run.ts';
+import { runKindLabels, runMethodLabels } from '@shared/schemas/run.ts';
 import { displacementUnitLabels, toNm, toVolts, voltageUnitLabels } from '@shared/units.ts';
 import { StatusBadge, type BadgeTone } from '@/components/ui/status-badge.tsx';
 import { Button } from '@/components/ui/button.tsx';
 import { useDeleteRun } from '../../api/delete-run.ts';
 import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { FitSummary } from './fit-summary.tsx';
+import { RunForm } from './run-form.tsx';
 import { sig } from './format.ts';
 import { errorMessage } from '@/components/ui/form-bits.tsx';
 
@@ -18,9 +19,10 @@ const STATUS: Record<RunDto['status'], [BadgeTone, string]> = {
 };
 
 /** A saved calibration run with the fit Scanwright stored, its review state and, on request, its plot. */
-export function StoredRun({ run }: { run: RunDto }) {
+export function StoredRun({ run, maxVolts = null }: { run: RunDto; maxVolts?: number | null }) {
   const remove = useDeleteRun();
   const [plot, setPlot] = useState(false);
+  const [editing, setEditing] = useState(false);
   const [tone, statusText] = STATUS[run.status];
   const drive =
     run.drive?.kind === 'sine'
@@ -46,7 +48,8 @@ export function StoredRun({ run }: { run: RunDto }) {
     <li className="rounded-md border border-rule bg-white p-2 sm:p-3" aria-label={`Calibration run of ${run.createdAt.slice(0, 10)}`}>
       <div className="flex flex-wrap items-center justify-between gap-2">
         <p className="text-sm">
-          <span className="num">{run.createdAt.slice(0, 10)}</span> · {runMethodLabels[run.method]}
+          <span className="num">{run.measuredOn ?? run.createdAt.slice(0, 10)}</span> · {runKindLabels[run.kind]} ·{' '}
+          {runMethodLabels[run.method]}
         </p>
         <StatusBadge tone={tone}>{statusText}</StatusBadge>
       </div>
@@ -55,7 +58,11 @@ export function StoredRun({ run }: { run: RunDto }) {
       </div>
       <p className="mt-2 text-xs text-ink-soft">
         Recorded in {voltageUnitLabels[run.voltageUnit]} and {displacementUnitLabels[run.displacementUnit]};{' '}
-        {run.model === 'origin' ? 'line through the origin' : 'line with intercept'}
+        {run.kind === 'points'
+          ? run.model === 'origin'
+            ? 'line through the origin'
+            : 'line with intercept'
+          : `${run.pointCount} ${run.kind === 'sine-record' ? 'samples' : 'readings'}`}
         {drive && `; ${drive}`}
         {conditions && `; ${conditions}`}
       </p>
@@ -69,9 +76,16 @@ export function StoredRun({ run }: { run: RunDto }) {
         </Suspense>
       )}
       <div className="mt-2 flex flex-wrap gap-2">
-        <Button variant="ghost" className="border-rule" aria-expanded={plot} onClick={() => setPlot((p) => !p)}>
-          {plot ? 'Hide plot' : 'Show plot'}
-        </Button>
+        {run.kind !== 'peak-to-peak' && (
+          <Button variant="ghost" className="border-rule" aria-expanded={plot} onClick={() => setPlot((p) => !p)}>
+            {plot ? 'Hide plot' : 'Show plot'}
+          </Button>
+        )}
+        {run.kind === 'points' && !run.decimated && (
+          <Button variant="ghost" className="border-rule" aria-expanded={editing} onClick={() => setEditing((e) => !e)}>
+            {editing ? 'Close the correction' : 'Correct this run'}
+          </Button>
+        )}
         {run.status !== 'accepted' && (
           <ConfirmButton
             label="Delete run"
@@ -82,6 +96,17 @@ export function StoredRun({ run }: { run: RunDto }) {
           />
         )}
       </div>
+      {editing && (
+        <div className="mt-2">
+          <RunForm
+            actuatorId={run.actuatorId}
+            maxVolts={maxVolts}
+            run={run}
+            onSaved={() => setEditing(false)}
+            onCancel={() => setEditing(false)}
+          />
+        </div>
+      )}
       {remove.error && (
         <p role="alert" className="mt-2 text-sm text-danger">
           {errorMessage(remove.error)}

@@ -39,7 +39,7 @@ export function RunCards({
             <p className="num mt-2 text-base font-medium">
               {f.gain.value}
               {f.gain.uncertainty && <span className="font-normal text-ink-soft"> ± {f.gain.uncertainty}</span>} nm/V
-              {f.gain.uncertainty && <PlusMinusLabel kind="ci95" className="ml-1 font-sans text-xs" />}
+              {f.gain.uncertainty && <PlusMinusLabel kind={f.plusMinusKind} className="ml-1 font-sans text-xs" />}
             </p>
             <dl className="mt-1 grid grid-cols-2 gap-x-3 text-xs">
               <dt className="text-ink-soft">R²</dt>

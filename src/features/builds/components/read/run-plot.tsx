@@ -3,11 +3,54 @@ import type { RunDto } from '@shared/schemas/run.ts';
 import { displacementUnitLabels, toNm, toVolts, voltageUnitLabels } from '@shared/units.ts';
 import { ErrorBoundary } from '@/components/ui/error-boundary.tsx';
 import { formatDate } from '@shared/format/dates.ts';
+import { DATA_LICENCE } from '@shared/data-licence.ts';
 
 const CalibrationChart = lazy(() => import('@/components/charts/calibration-chart.tsx').then((m) => ({ default: m.CalibrationChart })));
 
-/** The selected run's points (converted to V and nm) with its fitted line, in a labelled region. */
+/** Where to fetch a run's raw record, and under which licence it is shared. */
+function RunExportLinks({ run }: { run: RunDto }) {
+  return (
+    <p className="mt-1 text-xs text-ink-soft">
+      Raw {run.kind === 'sine-record' ? 'samples' : run.kind === 'peak-to-peak' ? 'readings' : 'points'}:{' '}
+      <a className="text-teal-dark underline" href={`/api/runs/${run.id}/export?format=csv`} download>
+        CSV
+      </a>{' '}
+      ·{' '}
+      <a className="text-teal-dark underline" href={`/api/runs/${run.id}/export?format=json`} download>
+        JSON
+      </a>
+      , shared under{' '}
+      <a className="underline" href={DATA_LICENCE.url} rel="license noreferrer" target="_blank">
+        {DATA_LICENCE.id.replace(/-/g, ' ')}
+      </a>
+      .
+    </p>
+  );
+}
+
+/** The selected run's points (converted to V and nm) with its fitted line, in a labelled region; a peak-to-peak reading as words. */
 export function RunPlot({ run, actuatorName }: { run: RunDto; actuatorName: string }) {
+  if (run.kind === 'peak-to-peak' && run.reading) {
+    const r = run.reading;
+    const unit = displacementUnitLabels[run.displacementUnit];
+    return (
+      <section aria-label={`Peak-to-peak reading: ${actuatorName}`} className="rounded-md border border-rule bg-white p-3 text-sm">
+        <p>
+          Peak-to-peak reading of <span className="num">{formatDate(run.measuredOn ?? run.createdAt)}</span>:{' '}
+          <span className="num">
+            {r.displacementPp} {unit}
+          </span>{' '}
+          (read to {r.displacementResolution} {unit}) for{' '}
+          <span className="num">
+            {r.voltsPp} {voltageUnitLabels[run.voltageUnit]}
+          </span>
+          {r.voltsResolution !== null && ` (read to ${r.voltsResolution} ${voltageUnitLabels[run.voltageUnit]})`}
+          {r.frequencyHz !== null && `, sine at ${r.frequencyHz} Hz`}. Nothing to plot: two readings make one gain.
+        </p>
+        <RunExportLinks run={run} />
+      </section>
+    );
+  }
   const points = run.points.map((p) => ({
     volts: toVolts(p.volts, run.voltageUnit),
     displacementNm: toNm(p.displacement, run.displacementUnit),
@@ -38,10 +81,16 @@ export function RunPlot({ run, actuatorName }: { run: RunDto; actuatorName: stri
         </Suspense>
       </ErrorBoundary>
       <p className="mt-2 text-xs text-ink-soft">
-        Run of <span className="num">{formatDate(run.createdAt)}</span>: <span className="num">{run.points.length}</span> points recorded in{' '}
-        {recordedIn}
-        {converted ? ', plotted in nm and V' : ''}; line fitted {run.model === 'origin' ? 'through the origin' : 'with an intercept'}.
+        Run of <span className="num">{formatDate(run.measuredOn ?? run.createdAt)}</span>: <span className="num">{run.pointCount}</span>{' '}
+        {run.kind === 'sine-record' ? 'samples of a sine drive' : 'points'} recorded in {recordedIn}
+        {converted ? ', plotted in nm and V' : ''}
+        {run.decimated ? `; ${run.points.length} of them drawn (Largest-Triangle-Three-Buckets)` : ''};{' '}
+        {run.kind === 'sine-record'
+          ? 'the loop of displacement against drive, with the line of the fitted gain'
+          : `line fitted ${run.model === 'origin' ? 'through the origin' : 'with an intercept'}`}
+        .
       </p>
+      <RunExportLinks run={run} />
     </section>
   );
 }

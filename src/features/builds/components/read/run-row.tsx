@@ -1,6 +1,7 @@
 import type { RunDto } from '@shared/schemas/run.ts';
 import { StatusBadge } from '@/components/ui/status-badge.tsx';
 import { runFigures } from './run-figures.ts';
+import { PlusMinusLabel } from '@/components/ui/plus-minus-label.tsx';
 
 const cell = 'px-2 py-2 align-top';
 
@@ -23,14 +24,22 @@ export function RunRow({ run, group, selected, onSelect }: { run: RunDto; group:
         <td className={`${cell} num whitespace-nowrap`}>{f.date}</td>
         <td className={`${cell} num whitespace-nowrap text-right font-medium`}>
           {f.gain.value}
-          {f.gain.uncertainty && <span className="font-normal text-ink-soft"> ± {f.gain.uncertainty}</span>}
+          {f.gain.uncertainty && (
+            <span className="font-normal text-ink-soft">
+              {' '}
+              ± {f.gain.uncertainty} <PlusMinusLabel kind={f.plusMinusKind} className="text-xs" />
+            </span>
+          )}
         </td>
         <td className={`${cell} num text-right`}>{f.r2}</td>
         <td className={`${cell} num text-right`}>{f.residualNm}</td>
         <td className={`${cell} num text-right`}>{f.nonlinearityPct}</td>
         <td className={`${cell} num text-right`}>{f.hysteresisPct}</td>
         <td className={`${cell} num text-right`}>{f.n}</td>
-        <td className={`${cell} min-w-[9rem]`}>{f.method}</td>
+        <td className={`${cell} min-w-[9rem]`}>
+          {f.method}
+          <span className="block text-xs text-ink-soft">{f.kind}</span>
+        </td>
         <td className={cell}>
           <StatusBadge tone={f.badge.tone}>{f.badge.label}</StatusBadge>
         </td>

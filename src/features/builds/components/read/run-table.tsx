@@ -25,14 +25,17 @@ export function RunTable({
       aria-label={`Calibration runs of ${actuatorName}`}
     >
       <table className="w-full min-w-[46rem] text-left text-sm">
-        <caption className="sr-only">Calibration runs of {actuatorName}: gain with its 95 % interval and the fit figures</caption>
+        <caption className="sr-only">
+          Calibration runs of {actuatorName}: gain with its 95 % interval (point runs) or standard uncertainty (peak-to-peak and sine runs)
+          and the fit figures
+        </caption>
         <thead className="bg-paper-deep text-xs text-ink-soft">
           <tr className="[&>th]:pt-2">
             <th className={head}>
               <span className="sr-only">Plot</span>
             </th>
             <th className={head}>Recorded</th>
-            <th className={`${head} text-right`}>Gain ± 95 % (nm/V)</th>
+            <th className={`${head} text-right`}>Gain ± (nm/V)</th>
             <th className={`${head} text-right`}>R²</th>
             <th className={`${head} text-right`}>Residual SD (nm)</th>
             <th className={`${head} text-right`}>Nonlinearity (% FS)</th>
