@@ -115,9 +115,11 @@ describe('POST /api/actuators/:id/runs', () => {
     const { a, actuator } = await ownerWithActuator();
     const res = await a.post(`/api/actuators/${actuator.id}/runs`).set('X-CSRF-Token', a.csrf).send(runBody);
     expect(res.status).toBe(201);
-    const expected = toFitResultDto(
+    const base = toFitResultDto(
       fitCalibrationInUnits({ points: points as never, voltageUnit: 'V', displacementUnit: 'um', model: 'intercept' }),
     );
+    // A point run's standard uncertainty is the slope's standard error (k = 1).
+    const expected = { ...base, gainStdUncertaintyNmPerV: base.gainStdErrNmPerV };
     expect(res.body).toMatchObject({
       id: expect.any(Number),
       status: 'pending',
