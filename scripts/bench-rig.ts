@@ -20,8 +20,11 @@ const DURATION_S = Number(process.env.BENCH_SECONDS ?? 10);
 const POINTS = 10_000;
 const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 4);
 
-/** A maker with a draft build, one actuator and a runs:write token (a new maker each run of the bench). */
-async function rigFixture(): Promise<{ actuatorId: number; token: string }> {
+/** Builds to spread the runs over: a build holds at most 100 runs (MAX_BUILD_RUNS). */
+const BUILDS = 30;
+
+/** A maker with BUILDS draft builds of one actuator each and a runs:write token (a new maker each run of the bench). */
+async function rigFixture(): Promise<{ actuatorIds: number[]; token: string }> {
   const sq = createSequelize(benchConfig(DATABASE).db);
   try {
     await createMigrator(sq).up();
@@ -35,10 +38,19 @@ async function rigFixture(): Promise<{ actuatorId: number; token: string }> {
       role: 'maker',
     } as never);
     const part = await Part.create({ name: `Bench bender ${stamp}`, category: 'bimorph', status: 'accepted' } as never);
-    const build = await Build.create({ ownerId: user.id, title: `Bench rig ${stamp}`, instrumentKind: 'afm', status: 'draft' } as never);
-    const actuator = await Actuator.create({ buildId: build.id, partId: part.id, axis: 'X', drive: 'single' } as never);
+    const actuatorIds: number[] = [];
+    for (let i = 0; i < BUILDS; i++) {
+      const build = await Build.create({
+        ownerId: user.id,
+        title: `Bench rig ${stamp} ${i}`,
+        instrumentKind: 'force-microscope',
+        summary: 'A rig posting runs for the benchmark.',
+        status: 'draft',
+      } as never);
+      actuatorIds.push((await Actuator.create({ buildId: build.id, partId: part.id, axis: 'X', drive: 'single' } as never)).id);
+    }
     const { token } = await createApiToken(toActor(user), { name: 'bench rig', scopes: ['runs:write'] });
-    return { actuatorId: actuator.id, token };
+    return { actuatorIds, token };
   } finally {
     await sq.close();
   }
@@ -77,16 +89,26 @@ function measure(opts: LoadOptions): Promise<Figures> {
 
 const stop = await startBenchDb();
 try {
-  const { actuatorId, token } = await rigFixture();
+  const { actuatorIds, token } = await rigFixture();
+  let turn = 0;
   const body = runBody();
   const server = await startServerProcess(DATABASE);
   try {
     const runs: LoadOptions = {
-      url: `${server.base}/api/actuators/${actuatorId}/runs`,
-      method: 'POST',
+      url: server.base,
       connections: CONNECTIONS,
-      headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' },
-      body,
+      requests: [
+        {
+          method: 'POST',
+          headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' },
+          body,
+          // Round-robin over the builds' actuators.
+          setupRequest: (req: Record<string, unknown>) => ({
+            ...req,
+            path: `/api/actuators/${actuatorIds[turn++ % actuatorIds.length]}/runs`,
+          }),
+        } as NonNullable<LoadOptions['requests']>[number],
+      ],
     };
     await measure({ url: `${server.base}/api/health`, connections: 16, duration: 1 });
     const health = await measure({ url: `${server.base}/api/health`, connections: 16 });
