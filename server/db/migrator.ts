@@ -15,6 +15,7 @@ import * as recomputeRunFits from './migrations/20261202100000-recompute-run-fit
 import * as addRunKinds from './migrations/20261203120000-add-run-kinds.ts';
 import * as createApiTokens from './migrations/20261203100000-create-api-tokens.ts';
 import * as createIdempotencyKeys from './migrations/20261203100100-create-idempotency-keys.ts';
+import * as addActuatorDriveMatrix from './migrations/20261203140000-add-actuator-drive-matrix.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -35,6 +36,7 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261203100000-create-api-tokens', createApiTokens],
   ['20261203100100-create-idempotency-keys', createIdempotencyKeys],
   ['20261203120000-add-run-kinds', addRunKinds],
+  ['20261203140000-add-actuator-drive-matrix', addActuatorDriveMatrix],
 ];
 
 /** Umzug over our migration list; the only source of the schema, in tests too. */

@@ -8,6 +8,7 @@ import type { Part } from '../models/part.model.ts';
 import type { CalibrationRun } from '../models/calibration-run.model.ts';
 import { presentPartSummary } from './part.presenter.ts';
 import { presentRun } from './run.presenter.ts';
+import { presentDriveMatrix } from './drive-matrix.presenter.ts';
 
 /** What a build card shows beside the build's own columns, loaded in batches by the read service. */
 export interface BuildCardExtras {
@@ -84,6 +85,7 @@ export function presentActuator(a: Actuator, part: Part, runs: CalibrationRun[])
     expectedGain: expected
       ? { gainNmPerV: expected.gainNmPerV, lowNmPerV: expected.lowNmPerV, highNmPerV: expected.highNmPerV, basis: expected.basis }
       : null,
+    driveMatrix: presentDriveMatrix(a.driveMatrixJson),
     runs: runs.filter((r) => r.actuatorId === a.id).map((r) => presentRun(r, buildPagePlotPoints(runs.length))),
   };
 }
@@ -119,6 +121,7 @@ export function presentBuildPage(b: Build, content: BuildPageContent, mayEdit: b
     abilities: {
       edit: mayEdit && editable,
       submit: mayEdit && (b.status === 'draft' || b.status === 'returned'),
+      withdraw: mayEdit && b.status === 'submitted',
       delete: mayEdit && b.status === 'draft',
     },
   };

@@ -51,3 +51,15 @@ export function makerRunChecks(
       : null;
   return { flags, overLimit };
 }
+
+/** A stored run's flags as the review desk will raise them, with advice, for the maker's own view of a build before submitting. */
+export function storedRunFlags(
+  run: { kind: CreateRunInput['kind']; fit: { n: number; gainNmPerV: number; r2: number | null; hysteresisPctFs: number | null } },
+  actuator: { expectedGainNmPerV: number | null; partMedianNmPerV: number | null },
+): MakerFlag[] {
+  const accepted = actuator.partMedianNmPerV !== null ? [actuator.partMedianNmPerV] : [];
+  return plausibilityFlags({ kind: run.kind, ...run.fit }, accepted, actuator.expectedGainNmPerV).map((f) => ({
+    ...f,
+    advice: flagAdvice[f.code],
+  }));
+}

@@ -139,7 +139,7 @@ export interface BuildDto extends BuildSummaryDto {
   photos: PhotoDto[];
   entries: LogEntryDto[];
   actuators: ActuatorDto[];
-  abilities: { edit: boolean; submit: boolean; delete: boolean };
+  abilities: { edit: boolean; submit: boolean; withdraw: boolean; delete: boolean };
 }
 
 export interface BuildListDto {

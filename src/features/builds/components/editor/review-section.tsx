@@ -7,6 +7,7 @@ import { useSubmitBuild } from '../../api/submit-build.ts';
 import { useDeleteBuild } from '../../api/delete-build.ts';
 import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { EditorSection } from './editor-section.tsx';
+import { BuildRunFlags } from './build-run-flags.tsx';
 import { errorMessage } from '@/components/ui/form-bits.tsx';
 
 export const WHAT_HAPPENS_NEXT =
@@ -39,6 +40,7 @@ export function ReviewSection({ build }: { build: BuildDto }) {
               This build has no calibration run yet. You can submit it anyway; runs help other builders most.
             </p>
           )}
+          <BuildRunFlags build={build} />
           <Button onClick={() => submit.mutate()} disabled={submit.isPending}>
             {submit.isPending ? 'Submitting…' : build.status === 'returned' ? 'Submit again for review' : 'Submit for review'}
           </Button>
