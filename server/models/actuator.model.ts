@@ -20,6 +20,7 @@ export class Actuator extends Model<InferAttributes<Actuator>, InferCreationAttr
   declare amplifier: string | null;
   declare maxVolts: number | null;
   declare notes: string | null;
+  declare driveMatrixJson: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare part?: NonAttribute<Part>;
@@ -36,6 +37,7 @@ export class Actuator extends Model<InferAttributes<Actuator>, InferCreationAttr
         amplifier: DataTypes.STRING(200),
         maxVolts: DataTypes.DOUBLE,
         notes: DataTypes.TEXT,
+        driveMatrixJson: DataTypes.TEXT,
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

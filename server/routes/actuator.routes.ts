@@ -4,6 +4,8 @@ import { actuatorIdParams, createActuatorInput, updateActuatorInput } from '@sha
 import { requireUser } from '../middleware/auth.ts';
 import { createActuator, deleteActuator, updateActuator } from '../services/actuator.service.ts';
 import { route } from './route.ts';
+import { driveMatrixInput } from '@shared/schemas/drive-matrix.ts';
+import { clearDriveMatrix, saveDriveMatrix } from '../services/drive-matrix.service.ts';
 
 /** The actuators of a build (their calibration runs are in run.routes.ts). */
 export function actuatorRoutes(): Router {
@@ -27,6 +29,22 @@ export function actuatorRoutes(): Router {
     requireUser,
     route({ params: actuatorIdParams }, async ({ actor, params, res }) => {
       await deleteActuator(actor, params.actuatorId);
+      res.status(204).end();
+    }),
+  );
+  r.put(
+    '/api/actuators/:actuatorId/drive-matrix',
+    requireUser,
+    route({ params: actuatorIdParams, body: driveMatrixInput }, async ({ actor, params, body, res }) => {
+      const { actuator, created } = await saveDriveMatrix(actor, params.actuatorId, body);
+      res.status(created ? 201 : 200).json(actuator);
+    }),
+  );
+  r.delete(
+    '/api/actuators/:actuatorId/drive-matrix',
+    requireUser,
+    route({ params: actuatorIdParams }, async ({ actor, params, res }) => {
+      await clearDriveMatrix(actor, params.actuatorId);
       res.status(204).end();
     }),
   );

@@ -15,6 +15,7 @@ import {
   updatePhotoInput,
 } from '@shared/schemas/build.ts';
 import { createActuatorInput, updateActuatorInput } from '@shared/schemas/actuator.ts';
+import { driveMatrixInput } from '@shared/schemas/drive-matrix.ts';
 import { createRunInput, updateRunInput } from '@shared/schemas/run.ts';
 import { mergePartInput, proposePartInput } from '@shared/schemas/part.ts';
 import {
@@ -670,6 +671,79 @@ export const fixtures: Record<string, Fixture> = {
         state: buildState(build.id),
         async changed() {
           expect(await Actuator.findByPk(actuator.id)).toBeNull();
+        },
+      };
+    },
+  },
+  'PUT /api/actuators/:actuatorId/drive-matrix': {
+    schema: driveMatrixInput,
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const part = await createPart();
+      const actuator = await Actuator.create({
+        buildId: build.id,
+        partId: part.id,
+        label: null,
+        axis: 'XY',
+        drive: 'pair-anti-phase',
+        amplifier: null,
+        maxVolts: null,
+        notes: null,
+      });
+      return {
+        params: { actuatorId: actuator.id },
+        body: {
+          gainNmPerV: [
+            [70, -70],
+            [70, 70],
+          ],
+          limits: { vaMinV: -10, vaMaxV: 10, vbMinV: -10, vbMaxV: 10 },
+        },
+        state: buildState(build.id),
+        async changed() {
+          expect(JSON.parse((await Actuator.findByPk(actuator.id))?.driveMatrixJson ?? 'null')).toMatchObject({
+            gainNmPerV: [
+              [70, -70],
+              [70, 70],
+            ],
+          });
+        },
+      };
+    },
+  },
+  'DELETE /api/actuators/:actuatorId/drive-matrix': {
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const part = await createPart();
+      const saved = {
+        gainNmPerV: [
+          [70, -70],
+          [70, 70],
+        ],
+        offsetNm: [0, 0],
+        limits: { vaMinV: -10, vaMaxV: 10, vbMinV: -10, vbMaxV: 10 },
+        model: 'origin',
+        measuredOn: null,
+        savedAt: '2026-12-01T00:00:00.000Z',
+      };
+      const actuator = await Actuator.create({
+        buildId: build.id,
+        partId: part.id,
+        label: null,
+        axis: 'XY',
+        drive: 'pair-anti-phase',
+        amplifier: null,
+        maxVolts: null,
+        notes: null,
+        driveMatrixJson: JSON.stringify(saved),
+      });
+      return {
+        params: { actuatorId: actuator.id },
+        state: buildState(build.id),
+        async changed() {
+          expect((await Actuator.findByPk(actuator.id))?.driveMatrixJson).toBeNull();
         },
       };
     },
