@@ -12,6 +12,7 @@ import {
 } from '@shared/schemas/run.ts';
 import type { ActuatorDto } from '@shared/schemas/actuator.ts';
 import { fitRun, type RunFit } from '@shared/workbench/run-fit.ts';
+import { toVolts } from '@shared/units.ts';
 import { makerRunChecks } from '@shared/review/maker-checks.ts';
 import { formatDate } from '@shared/format/dates.ts';
 import { Button } from '@/components/ui/button.tsx';
@@ -52,16 +53,27 @@ export function RecordAsRun({ data, defaultMethod = 'indicator' }: { data: RunRe
   const [preload, setPreload] = useState('');
   const [temperature, setTemperature] = useState('');
   const [notes, setNotes] = useState('');
+  const [frequency, setFrequency] = useState('');
   const [saved, setSaved] = useState<{ run: RunDto; actuator: ActuatorDto } | null>(null);
   const createActuator = useCreateActuator(buildId ?? 0);
   const createRun = useCreateRun(typeof actuatorId === 'number' ? actuatorId : 0);
 
   const temperatureC = parseOptionalNumber(temperature);
+  const frequencyHz = parseOptionalNumber(frequency);
   const candidate = useMemo(() => {
     if (!data) return null;
     const conditions = { preload: text(preload), temperatureC: Number.isNaN(temperatureC) ? undefined : temperatureC };
+    const typedHz = frequencyHz !== undefined && Number.isFinite(frequencyHz) && frequencyHz > 0 ? frequencyHz : undefined;
+    const withDrive = (() => {
+      if (data.kind === 'points') return { ...data, drive: { kind: 'dc-steps' as const } };
+      if (data.kind === 'peak-to-peak') {
+        const amplitudeV = toVolts(data.voltsPp, data.voltageUnit) / 2;
+        return typedHz ? { ...data, frequencyHz: typedHz, drive: { kind: 'sine' as const, frequencyHz: typedHz, amplitudeV } } : data;
+      }
+      return data;
+    })();
     const parsed = createRunInput.safeParse({
-      ...data,
+      ...withDrive,
       method,
       ...(measuredOn ? { measuredOn } : {}),
       ...(Object.values(conditions).some((v) => v !== undefined) ? { conditions } : {}),
@@ -69,11 +81,17 @@ export function RecordAsRun({ data, defaultMethod = 'indicator' }: { data: RunRe
     });
     if (!parsed.success) return { ok: false as const, message: parsed.error.issues[0]?.message ?? 'These readings cannot be stored.' };
     try {
-      return { ok: true as const, input: parsed.data, fit: fitRun(parsed.data) };
+      const fit = fitRun(parsed.data);
+      // A sine record states its own drive: the fitted frequency and amplitude.
+      const input =
+        parsed.data.kind === 'sine-record' && fit.sine
+          ? { ...parsed.data, drive: { kind: 'sine' as const, frequencyHz: fit.sine.frequencyHz, amplitudeV: fit.sine.voltsAmplitudeV } }
+          : parsed.data;
+      return { ok: true as const, input, fit };
     } catch (err) {
       return { ok: false as const, message: errorMessage(err) };
     }
-  }, [data, method, measuredOn, preload, temperatureC, notes]);
+  }, [data, method, measuredOn, preload, temperatureC, notes, frequencyHz]);
 
   if (mine.error instanceof ApiError && mine.error.status === 401) {
     return (
@@ -173,6 +191,22 @@ export function RecordAsRun({ data, defaultMethod = 'indicator' }: { data: RunRe
         <Field id="record-date" label="Measured on" hint="Leave empty for today.">
           <input id="record-date" type="date" className={inputClass} value={measuredOn} onChange={(e) => setMeasuredOn(e.target.value)} />
         </Field>
+        {data?.kind === 'peak-to-peak' && (
+          <Field
+            id="record-frequency"
+            label="Drive frequency (Hz)"
+            hint="Optional; stored with the run as its sine drive."
+            error={Number.isNaN(frequencyHz) ? 'Not a number.' : undefined}
+          >
+            <input
+              id="record-frequency"
+              inputMode="decimal"
+              className={inputClass}
+              value={frequency}
+              onChange={(e) => setFrequency(e.target.value)}
+            />
+          </Field>
+        )}
         <Field id="record-preload" label="Preload or load" hint="Optional, e.g. “spring, about 2 N”.">
           <input id="record-preload" className={inputClass} value={preload} onChange={(e) => setPreload(e.target.value)} />
         </Field>
