@@ -29,9 +29,6 @@ export function withUncertainty(value: number, halfWidth: number | null | undefi
   return f.uncertainty === null ? f.value : `${f.value} ± ${f.uncertainty}`;
 }
 
-/** Half the width of a 95 % interval [lo, hi]. */
-export const halfWidth = ([lo, hi]: [number, number]) => (hi - lo) / 2;
-
 /** "4 photos", "1 entry": a count with its noun. */
 export const count = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 
