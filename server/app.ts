@@ -38,6 +38,9 @@ import { reviewRoutes } from './routes/review.routes.ts';
 import { accountRoutes } from './routes/account.routes.ts';
 import { exchangeRoutes } from './routes/exchange.routes.ts';
 import { apiTokenRoutes } from './routes/api-token.routes.ts';
+import { dataLicenceRoutes } from './routes/data-licence.routes.ts';
+import { registryDatasetRoutes } from './routes/registry-dataset.routes.ts';
+import { openApiRoutes } from './routes/openapi.routes.ts';
 
 export interface AppHandle {
   app: Express;
@@ -171,6 +174,9 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(reviewRoutes(config));
   app.use(accountRoutes());
   app.use(apiTokenRoutes());
+  app.use(dataLicenceRoutes());
+  app.use(registryDatasetRoutes(config));
+  app.use(openApiRoutes(config));
   app.use(exchangeRoutes(config));
   app.use(['/api', '/auth'], apiNotFound);
 

@@ -13,6 +13,7 @@ import * as addPartDescIndexes from './migrations/20261201003200-add-part-desc-i
 import * as createPartPhotos from './migrations/20261202000100-create-part-photos.ts';
 import * as recomputeRunFits from './migrations/20261202100000-recompute-run-fits.ts';
 import * as addRunKinds from './migrations/20261203120000-add-run-kinds.ts';
+import * as addDataLicenceAcceptance from './migrations/20261203130000-add-data-licence-acceptance.ts';
 import * as createApiTokens from './migrations/20261203100000-create-api-tokens.ts';
 import * as createIdempotencyKeys from './migrations/20261203100100-create-idempotency-keys.ts';
 import * as addActuatorDriveMatrix from './migrations/20261203140000-add-actuator-drive-matrix.ts';
@@ -36,6 +37,7 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261203100000-create-api-tokens', createApiTokens],
   ['20261203100100-create-idempotency-keys', createIdempotencyKeys],
   ['20261203120000-add-run-kinds', addRunKinds],
+  ['20261203130000-add-data-licence-acceptance', addDataLicenceAcceptance],
   ['20261203140000-add-actuator-drive-matrix', addActuatorDriveMatrix],
 ];
 

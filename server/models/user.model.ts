@@ -12,6 +12,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare suspendedAt: CreationOptional<Date | null>;
   declare mailOptOut: CreationOptional<boolean>;
   declare lastSignInAt: CreationOptional<Date | null>;
+  declare dataLicenceAcceptedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -28,6 +29,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         suspendedAt: DataTypes.DATE,
         mailOptOut: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         lastSignInAt: DataTypes.DATE,
+        dataLicenceAcceptedAt: DataTypes.DATE,
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -90,6 +90,7 @@ const expected: Record<string, Row> = {
   'POST /api/review/reports/:id/decision': [401, 403, 403, 403, 200, 200],
   'POST /api/reports': [401, 201, 201, 403, 201, 201],
   'PATCH /api/account/settings': [401, 200, 200, 403, 200, 200],
+  'POST /api/account/data-licence': [401, 200, 200, 403, 200, 200],
   'POST /api/account/tokens': [401, 201, 201, 403, 201, 201],
   'DELETE /api/account/tokens/:tokenId': [401, 204, 404, 403, 404, 404],
 

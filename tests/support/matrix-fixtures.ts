@@ -965,6 +965,18 @@ export const fixtures: Record<string, Fixture> = {
     },
   },
 
+  'POST /api/account/data-licence': {
+    allowed: 'owner',
+    async make({ actor }) {
+      return {
+        state: () => rows(actor.user ? User.findByPk(actor.user.id) : Promise.resolve(null)),
+        async changed(res) {
+          expect(res.body.acceptedAt).toEqual(expect.any(String));
+          expect((await User.findByPk(actor.user!.id))?.dataLicenceAcceptedAt).toBeInstanceOf(Date);
+        },
+      };
+    },
+  },
   'POST /api/account/tokens': {
     schema: createApiTokenInput,
     allowed: 'owner',
