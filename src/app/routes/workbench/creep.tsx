@@ -14,13 +14,17 @@ import { creepForm, exampleRecord, previewCreep, type CreepFormValues } from '@/
 import { CreepResults } from '@/features/workbench/creep/creep-results.tsx';
 import { RowProblems } from '@/features/workbench/components/row-problems.tsx';
 import { friendlyError } from '@/features/workbench/form/error-map.ts';
+import { useUrlInitialValues, useUrlWriteBack } from '@/features/workbench/form/use-url-inputs.ts';
 import { displacementOptions } from '@/features/workbench/unit-options.ts';
 
 const defaults: CreepFormValues = { text: exampleRecord, unit: 'nm', projectToS: 3600 };
+const urlInputs = { skip: ['text'] };
 
 export function CreepPage() {
   const textId = useId();
-  const form = useForm({ resolver: zodResolver(creepForm, { error: friendlyError }), mode: 'onChange', defaultValues: defaults });
+  const initial = useUrlInitialValues(creepForm, defaults, urlInputs);
+  const form = useForm({ resolver: zodResolver(creepForm, { error: friendlyError }), mode: 'onChange', defaultValues: initial });
+  useUrlWriteBack(form.control, form.reset, creepForm, defaults, urlInputs);
   const [text, unit, projectToS] = useWatch({ control: form.control, name: ['text', 'unit', 'projectToS'] });
   const deferredText = useDeferredValue(text);
   const unitChange = useUnitChangeQuestion(form, 'unit');
@@ -28,6 +32,7 @@ export function CreepPage() {
   return (
     <ToolPage
       slug="creep"
+      linkNote="pasted records are not kept in the link"
       lead="After a voltage step a piezo keeps moving for minutes. Fit the logarithmic creep law to a step-and-hold record."
     >
       <ToolColumns

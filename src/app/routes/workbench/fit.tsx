@@ -19,6 +19,7 @@ import { useFitPreview } from '@/features/workbench/fit/use-fit-preview.ts';
 import { useFitUnitConversion } from '@/features/workbench/fit/use-fit-unit-conversion.ts';
 import { UnitChangeQuestion } from '@/components/ui/unit-change-question.tsx';
 import { friendlyError } from '@/features/workbench/form/error-map.ts';
+import { useUrlInitialValues, useUrlWriteBack } from '@/features/workbench/form/use-url-inputs.ts';
 import { displacementOptions, voltageOptions } from '@/features/workbench/unit-options.ts';
 import { RecordAsRun } from '@/features/builds/components/record/record-as-run.tsx';
 
@@ -30,6 +31,11 @@ const defaults: FitFormValues = {
   displacementUnit: 'nm',
   model: 'intercept',
 };
+/** Typed points travel in one compact param; pasted CSV text stays out of the link. */
+const urlInputs = {
+  skip: ['csvText'],
+  grids: { rows: { param: 'pts', columns: ['volts', 'displacement', 'sweep'], short: { sweep: { up: 'u', down: 'd' } } } },
+};
 const sources = [
   { value: 'grid', label: 'Type points' },
   { value: 'csv', label: 'Paste or load a CSV' },
@@ -40,13 +46,19 @@ const models = [
 ];
 
 export function FitPage() {
-  const form = useForm({ resolver: zodResolver(fitForm, { error: friendlyError }), mode: 'onChange', defaultValues: defaults });
+  const initial = useUrlInitialValues(fitForm, defaults, urlInputs);
+  const form = useForm({ resolver: zodResolver(fitForm, { error: friendlyError }), mode: 'onChange', defaultValues: initial });
+  useUrlWriteBack(form.control, form.reset, fitForm, defaults, urlInputs);
   const { source, rows, checked, result } = useFitPreview(form);
   const unitChange = useFitUnitConversion(form);
   const voltsUnit = voltageUnitLabels[form.watch('voltageUnit') ?? 'V'];
   const lengthUnit = displacementUnitLabels[form.watch('displacementUnit')];
   return (
-    <ToolPage slug="fit" lead="Fit the gain of an actuator from a calibration run: displacement against drive voltage, up and down sweeps.">
+    <ToolPage
+      slug="fit"
+      linkNote={source === 'csv' ? 'pasted records are not kept in the link' : undefined}
+      lead="Fit the gain of an actuator from a calibration run: displacement against drive voltage, up and down sweeps."
+    >
       <ToolColumns
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">

@@ -3,9 +3,23 @@ import { Link } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
 import { toolTitle, type WorkbenchSlug } from '../tools.ts';
+import { CopyLinkButton } from './copy-link-button.tsx';
 
-/** Frame of every calculator: breadcrumb back to the workbench, title, one line of purpose. */
-export function ToolPage({ slug, lead, children }: { slug: WorkbenchSlug; lead: ReactNode; children: ReactNode }) {
+/**
+ * Frame of every calculator: breadcrumb back to the workbench, title, one line of purpose, and a button copying
+ * the link to the result (the inputs live in the URL; `linkNote` says what the link leaves out).
+ */
+export function ToolPage({
+  slug,
+  lead,
+  linkNote,
+  children,
+}: {
+  slug: WorkbenchSlug;
+  lead: ReactNode;
+  linkNote?: string;
+  children: ReactNode;
+}) {
   const title = toolTitle(slug);
   return (
     <div>
@@ -23,6 +37,9 @@ export function ToolPage({ slug, lead, children }: { slug: WorkbenchSlug; lead: 
         </ol>
       </nav>
       <PageHeader title={title} lead={lead} />
+      <div className="mb-4">
+        <CopyLinkButton note={linkNote} />
+      </div>
       {children}
     </div>
   );

@@ -3,6 +3,8 @@ import { useForm, useWatch, type DefaultValues, type FieldValues, type UseFormRe
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import { friendlyError, refusalMessage } from './error-map.ts';
+import type { UrlInputOptions } from './url-inputs.ts';
+import { useUrlInitialValues, useUrlWriteBack } from './use-url-inputs.ts';
 
 /** A live result: computed, or why not (the first problem with the inputs, or the calculation's refusal). */
 export type Live<R> = { ok: true; result: R } | { ok: false; message: string };
@@ -27,18 +29,22 @@ export function computeLive<S extends FormSchema, R>(schema: S, values: unknown,
 /**
  * react-hook-form validated by the page's zod schema (built on the shared one), plus the result
  * recomputed in the browser on every change: no server round trip for the preview.
- * `compute` must be a stable (module-level) function.
+ * The inputs live in the URL's search too (read on load, written back as people type), so a result can be
+ * shared as a link; `url` names fields kept out of the link. `compute` must be a stable (module-level) function.
  */
 export function useLiveForm<S extends FormSchema, R>(
   schema: S,
   defaultValues: DefaultValues<z.input<S>>,
   compute: (input: z.output<S>) => R,
+  url?: UrlInputOptions,
 ): { form: UseFormReturn<z.input<S>, unknown, z.output<S>>; live: Live<R> } {
+  const initial = useUrlInitialValues(schema, defaultValues, url);
   const form = useForm<z.input<S>, unknown, z.output<S>>({
     resolver: zodResolver(schema, { error: friendlyError }),
     mode: 'onChange',
-    defaultValues,
+    defaultValues: initial,
   });
+  useUrlWriteBack(form.control, form.reset, schema, defaultValues as z.input<S>, url);
   const values = useWatch({ control: form.control });
   const live = useMemo(() => computeLive(schema, values, compute), [schema, values, compute]);
   return { form, live };
