@@ -89,7 +89,13 @@ export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
       </ul>
       <div className="mt-3">
         {addingRun ? (
-          <RunForm actuatorId={a.id} maxVolts={a.maxVolts} onSaved={() => setAddingRun(false)} onCancel={() => setAddingRun(false)} />
+          <RunForm
+            actuatorId={a.id}
+            maxVolts={a.maxVolts}
+            flagContext={{ expectedGainNmPerV: a.expectedGain?.gainNmPerV ?? null, partMedianNmPerV: a.part.stats.gainMedianNmPerV }}
+            onSaved={() => setAddingRun(false)}
+            onCancel={() => setAddingRun(false)}
+          />
         ) : (
           <Button variant="secondary" onClick={() => setAddingRun(true)} aria-label={`Add a calibration run to ${name}`}>
             Add a calibration run

@@ -7,12 +7,21 @@ import { SafetyNotice } from '@/components/ui/safety-notice.tsx';
 import { FitInputError } from '@shared/workbench/fit-input-error.ts';
 import { toNm, toVolts, type DisplacementUnit, type VoltageUnit } from '@shared/units.ts';
 import { FitSummary } from './fit-summary.tsx';
+import { storedRunFlags } from '@shared/review/maker-checks.ts';
+import { MakerFlags } from '../record/maker-flags.tsx';
 import { previewPoints, type RunFormValues } from './run-form-schema.ts';
 
 const CalibrationChart = lazy(async () => ({ default: (await import('@/components/charts/calibration-chart.tsx')).CalibrationChart }));
 
 /** The gain fit of the points as typed, computed in the browser with the same shared code the server uses. */
-export function FitPreview({ maxVolts }: { maxVolts: number | null }) {
+export function FitPreview({
+  maxVolts,
+  flagContext,
+}: {
+  maxVolts: number | null;
+  /** The actuator's expected gain and its part's median, for the flags the review desk will raise. */
+  flagContext?: { expectedGainNmPerV: number | null; partMedianNmPerV: number | null };
+}) {
   const { control } = useFormContext<RunFormValues, unknown, PointsRunInput>();
   const watched = useWatch({ control, name: ['points', 'voltageUnit', 'displacementUnit', 'model'] });
   const [rows, voltageUnit, displacementUnit, model] = useDeferredValue(watched);
@@ -47,8 +56,9 @@ export function FitPreview({ maxVolts }: { maxVolts: number | null }) {
         </p>
       )}
       {result.fit && (
-        <div className="mt-2">
+        <div className="mt-2 space-y-2">
           <SafetyNotice cautions={result.fit.cautions} crossed={result.fit.levelsCrossed} />
+          {flagContext && <MakerFlags flags={storedRunFlags({ kind: 'points', fit: result.fit }, flagContext)} overLimit={null} />}
         </div>
       )}
       <div aria-live="polite" className="mt-1">

@@ -20,12 +20,14 @@ const FIELDS = ['method', 'voltageUnit', 'displacementUnit', 'model', 'drive', '
 export function RunForm({
   actuatorId,
   maxVolts,
+  flagContext,
   run,
   onSaved,
   onCancel,
 }: {
   actuatorId: number;
   maxVolts: number | null;
+  flagContext?: { expectedGainNmPerV: number | null; partMedianNmPerV: number | null };
   /** The stored point run to correct (all its points: not a decimated series). */
   run?: RunDto;
   onSaved: (run: RunDto) => void;
@@ -78,7 +80,7 @@ export function RunForm({
           <PointsGrid fields={points.fields} array={points} />
           {pointsError && <p className="text-sm text-danger">{pointsError}</p>}
         </fieldset>
-        <FitPreview maxVolts={maxVolts} />
+        <FitPreview maxVolts={maxVolts} flagContext={flagContext} />
         <RunConditionsFields idPrefix={idPrefix} />
         <FormError message={errors.root?.server?.message} />
         <p className="text-sm text-ink-soft">
