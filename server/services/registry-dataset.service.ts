@@ -152,7 +152,8 @@ export async function streamDatasetPoints(out: Writable): Promise<void> {
     attributes: ['id', 'pointCount', 'kind', 'voltageUnit', 'displacementUnit'],
     order: [['id', 'ASC']],
   });
-  const combos = [...new Map(runs.map((r) => [`${r.kind} ${r.voltageUnit} ${r.displacementUnit}`, r])).values()].sort(
+  const shapes = runs.map((r) => ({ kind: r.kind, voltageUnit: r.voltageUnit, displacementUnit: r.displacementUnit }));
+  const combos = [...new Map(shapes.map((c) => [`${c.kind} ${c.voltageUnit} ${c.displacementUnit}`, c])).values()].sort(
     (a, b) => RUN_KINDS.indexOf(a.kind) - RUN_KINDS.indexOf(b.kind),
   );
   const header = pointsHeader(combos.length > 0 ? combos : [{ kind: 'points', voltageUnit: 'V', displacementUnit: 'nm' }]);
