@@ -48,7 +48,7 @@ const cached = <T>(make: (n: number) => T) => {
 /** A JSON body one byte over the limit, and one that inflates to over it from a few kilobytes. */
 const oversized = cached((limit) => `{"x":"${'x'.repeat(limit - 7)}"}`);
 const gzipBomb = cached((limit) => gzipSync(`{"x":"${' '.repeat(limit)}"}`));
-const limitOf = (route: RouteEntry) => (/^\/api\/(workbench|actuators)\//.test(route.path) ? 12 * 1024 * 1024 : 1024 * 1024);
+const limitOf = (route: RouteEntry) => (/^\/api\/(workbench|actuators|runs)\//.test(route.path) ? 32 * 1024 * 1024 : 1024 * 1024);
 
 // ---- JSON built from mutated valid bodies ---------------------------------------------------
 
