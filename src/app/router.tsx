@@ -32,6 +32,7 @@ export const router = createBrowserRouter([
             lazy: async () => ({ Component: (await import('./routes/account/account-settings.tsx')).AccountSettingsPage }),
           },
           { path: 'admin', lazy: async () => ({ Component: (await import('./routes/admin/users.tsx')).AdminUsersPage }) },
+          { path: 'api-reference', lazy: async () => ({ Component: (await import('./routes/api-reference.tsx')).ApiReferencePage }) },
           workbenchRoutes,
           { path: '*', lazy: async () => ({ Component: (await import('./routes/not-found.tsx')).NotFoundPage }) },
         ],

@@ -22,5 +22,6 @@ export const paths = {
   reviewAudit: '/review/audit',
   account: '/account',
   admin: '/admin',
+  apiReference: '/api-reference',
   signIn: (returnTo?: string) => `/auth/github${returnTo ? `?returnTo=${encodeURIComponent(returnTo)}` : ''}`,
 } as const;

@@ -62,7 +62,7 @@ describe('GET /api/openapi.json', () => {
 
   test('when the document is checked against the OpenAPI 3.1 schema, then it is valid', async () => {
     const validator = new Validator();
-    const result = await validator.validate(structuredClone(doc) as unknown as object);
+    const result = await validator.validate(structuredClone(doc) as unknown as Parameters<Validator['validate']>[0]);
     expect(result.errors ?? [], JSON.stringify(result.errors ?? []).slice(0, 2000)).toEqual([]);
     expect(validator.version).toBe('3.1');
     expect(result.valid).toBe(true);

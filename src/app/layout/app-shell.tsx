@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Link, NavLink, Outlet, useLocation, useSearchParams } from 'react-router-dom';
 import { can } from '@shared/policies.ts';
+import { DATA_LICENCE } from '@shared/data-licence.ts';
 import { LogoMark } from '@/components/ui/logo-mark.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { paths } from '@/config/paths.ts';
@@ -95,7 +96,19 @@ export function AppShell() {
         <Outlet />
       </main>
       <footer className="border-t border-rule py-4 text-center text-xs text-ink-soft">
-        Scanwright · measurements by makers, checked by moderators · high-voltage work: follow local electrical codes and qualified practice
+        <p>
+          Scanwright · measurements by makers, checked by moderators · high-voltage work: follow local electrical codes and qualified
+          practice
+        </p>
+        <p className="mt-1">
+          <Link to={paths.apiReference} className="underline hover:text-copper-dark">
+            API and rig tokens
+          </Link>{' '}
+          ·{' '}
+          <a href="/api/registry/dataset/README.md" className="underline hover:text-copper-dark">
+            Registry dataset ({DATA_LICENCE.id.replace(/-/g, ' ')})
+          </a>
+        </p>
       </footer>
     </div>
   );

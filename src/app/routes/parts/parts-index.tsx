@@ -13,6 +13,7 @@ import { PartFilters } from '@/features/parts/components/part-filters.tsx';
 import { PartsTable } from '@/features/parts/components/parts-table.tsx';
 import { ResultsBar } from '@/features/parts/components/results-bar.tsx';
 import { usePartSearch } from '@/features/parts/components/use-part-search.ts';
+import { RegistryDownloads } from '@/features/parts/components/registry-downloads.tsx';
 
 /** /parts: every listed part with figures pooled from accepted runs, searchable by measured gain. */
 export function PartsIndexPage() {
@@ -60,6 +61,7 @@ export function PartsIndexPage() {
           <Pager page={search.page} pageCount={pageCount} hrefFor={search.hrefFor} label="Registry pages" />
         </>
       )}
+      <RegistryDownloads />
     </div>
   );
 }

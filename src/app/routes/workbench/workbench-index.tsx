@@ -26,6 +26,14 @@ export function WorkbenchIndexPage() {
       <p className="mt-6 text-sm text-ink-soft">
         Each result names the formula and source it rests on. Free, unloaded figures are upper bounds for salvaged parts: always measure.
       </p>
+      <p className="mt-2 text-sm text-ink-soft">
+        Every calculator is also an API route (<code className="font-mono">POST /api/workbench/…</code>), open to scripts without sign-in:
+        see the{' '}
+        <Link to={paths.apiReference} className="text-copper-dark underline">
+          API reference
+        </Link>
+        .
+      </p>
     </div>
   );
 }

@@ -5,6 +5,7 @@ import { useCreateActuator } from '../../api/actuators.ts';
 import { ActuatorCard } from './actuator-card.tsx';
 import { ActuatorForm } from './actuator-form.tsx';
 import { EditorSection } from './editor-section.tsx';
+import { DataLicenceNotice } from '../data-licence-notice.tsx';
 
 /** The transducers of the build and the calibration runs measured on each. */
 export function ActuatorsSection({ build }: { build: BuildDto }) {
@@ -16,6 +17,9 @@ export function ActuatorsSection({ build }: { build: BuildDto }) {
       title="Actuators and calibration runs"
       lead="Each actuator is a part from the parts registry on an axis. Add calibration runs to record its measured gain in nm/V."
     >
+      <div className="mb-3">
+        <DataLicenceNotice />
+      </div>
       {build.actuators.length === 0 && !adding && <p className="mb-3 text-sm text-ink-soft">No actuators yet.</p>}
       <ul className="space-y-4">
         {build.actuators.map((a) => (

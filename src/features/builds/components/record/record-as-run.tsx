@@ -27,6 +27,7 @@ import { useCreateRun } from '../../api/create-run.ts';
 import { ActuatorForm } from '../editor/actuator-form.tsx';
 import { FitSummary } from '../editor/fit-summary.tsx';
 import { MakerFlags } from './maker-flags.tsx';
+import { DataLicenceNotice } from '../data-licence-notice.tsx';
 import { RunTarget, actuatorLine } from './run-target.tsx';
 
 /** The stored fit as the run's page will show it. */
@@ -155,6 +156,7 @@ export function RecordAsRun({ data, defaultMethod = 'indicator' }: { data: RunRe
       <h2 id="record-title" className="text-base font-semibold">
         Record as a run
       </h2>
+      <DataLicenceNotice />
       <RunTarget
         buildId={buildId}
         actuatorId={actuatorId}
