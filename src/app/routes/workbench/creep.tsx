@@ -24,7 +24,7 @@ export function CreepPage() {
   const textId = useId();
   const initial = useUrlInitialValues(creepForm, defaults, urlInputs);
   const form = useForm({ resolver: zodResolver(creepForm, { error: friendlyError }), mode: 'onChange', defaultValues: initial });
-  useUrlWriteBack(form.control, form.reset, creepForm, defaults, urlInputs);
+  useUrlWriteBack(form.control, creepForm, defaults, urlInputs);
   const [text, unit, projectToS] = useWatch({ control: form.control, name: ['text', 'unit', 'projectToS'] });
   const deferredText = useDeferredValue(text);
   const unitChange = useUnitChangeQuestion(form, 'unit');

@@ -48,7 +48,7 @@ const models = [
 export function FitPage() {
   const initial = useUrlInitialValues(fitForm, defaults, urlInputs);
   const form = useForm({ resolver: zodResolver(fitForm, { error: friendlyError }), mode: 'onChange', defaultValues: initial });
-  useUrlWriteBack(form.control, form.reset, fitForm, defaults, urlInputs);
+  useUrlWriteBack(form.control, fitForm, defaults, urlInputs);
   const { source, rows, checked, result } = useFitPreview(form);
   const unitChange = useFitUnitConversion(form);
   const voltsUnit = voltageUnitLabels[form.watch('voltageUnit') ?? 'V'];

@@ -1,3 +1,4 @@
+import { useWatch } from 'react-hook-form';
 import { ChartFrame } from '@/features/workbench/components/chart-frame.tsx';
 import { LazyMixerChart } from '@/features/workbench/components/charts/lazy-charts.ts';
 import { FieldGroup, FormNumber, errorOf } from '@/features/workbench/components/fields.tsx';
@@ -6,10 +7,12 @@ import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { GainMatrixFields } from '@/features/workbench/mixing/gain-matrix-fields.tsx';
 import { GridFitPanel } from '@/features/workbench/mixing/grid-fit-panel.tsx';
-import { mixingForm, type MixingFormValues } from '@/features/workbench/mixing/mixing-form.ts';
+import { driveMatrixFromForm, mixingForm, type MixingFormValues } from '@/features/workbench/mixing/mixing-form.ts';
 import { mixingCalculator } from '@shared/workbench/calculators/mixing-calculators.ts';
 import { MixingResults } from '@/features/workbench/mixing/mixing-results.tsx';
 import { PairPreset } from '@/features/workbench/mixing/pair-preset.tsx';
+import { SaveDriveMatrix } from '@/features/builds/components/record/save-drive-matrix.tsx';
+import { StartFromActuator } from '@/features/builds/components/record/start-from-actuator.tsx';
 
 const defaults: MixingFormValues = {
   gain: [
@@ -24,14 +27,18 @@ const defaults: MixingFormValues = {
 export function MixingPage() {
   const { form, live } = useLiveForm(mixingForm, defaults, mixingCalculator.compute);
   const limitsError = errorOf(form, 'limits');
+  const values = useWatch({ control: form.control }) as MixingFormValues;
+  const matrix = live.ok ? driveMatrixFromForm(values) : null;
   return (
     <ToolPage
       slug="mixing"
+      linkNote="pasted records are not kept in the link (a pasted grid included)"
       lead="Two benders meeting at one tip: the drive matrix, the volts for a wanted x, y, and the region the limits allow."
     >
       <ToolColumns
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+            <StartFromActuator tool="mixing" />
             <fieldset className="space-y-3 rounded-lg border border-rule bg-white p-4">
               <legend className="px-1 text-sm font-semibold">Gain matrix</legend>
               <GainMatrixFields form={form} />
@@ -50,6 +57,18 @@ export function MixingPage() {
               <FormNumber form={form} name="limits.vbMinV" label="Vb minimum" unit="V" />
               <FormNumber form={form} name="limits.vbMaxV" label="Vb maximum" unit="V" />
             </FieldGroup>
+            <FieldGroup
+              legend="Offsets x₀, y₀"
+              pairs
+              note={`Where the indicator reads the rest position; a grid fit with offsets fills them. Saved with the matrix (${
+                (values.model ?? (values.offsetXNm || values.offsetYNm ? 'affine' : 'origin')) === 'affine'
+                  ? 'fit with offsets'
+                  : 'through the origin'
+              }).`}
+            >
+              <FormNumber form={form} name="offsetXNm" label="x₀" unit="nm" optional />
+              <FormNumber form={form} name="offsetYNm" label="y₀" unit="nm" optional />
+            </FieldGroup>
             <FieldGroup legend="Wanted point" pairs>
               <FormNumber form={form} name="targetXNm" label="x" unit="nm" optional />
               <FormNumber form={form} name="targetYNm" label="y" unit="nm" optional />
@@ -67,6 +86,7 @@ export function MixingPage() {
               >
                 <LazyMixerChart region={live.result.regionNm} target={live.result.target} />
               </ChartFrame>
+              <SaveDriveMatrix matrix={matrix} />
             </>
           ) : (
             <NoResult message={live.message} />

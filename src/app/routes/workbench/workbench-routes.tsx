@@ -1,8 +1,10 @@
 import type { RouteObject } from 'react-router-dom';
+import { WorkbenchOutlet } from './workbench-outlet.tsx';
 
 /** The workbench section: an index of calculators, one lazily loaded page each. */
 export const workbenchRoutes: RouteObject = {
   path: 'workbench',
+  Component: WorkbenchOutlet,
   children: [
     { index: true, lazy: async () => ({ Component: (await import('./workbench-index.tsx')).WorkbenchIndexPage }) },
     { path: 'fit', lazy: async () => ({ Component: (await import('./fit.tsx')).FitPage }) },

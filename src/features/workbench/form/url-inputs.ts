@@ -3,6 +3,7 @@
 // compact param (`pts=0,0.1,u;10,1.0,d`, cells escaped with `~` so a decimal comma typed in a cell stays a cell).
 // Reading is field by field with the page's own form schema: a bad param falls back to that field's default.
 import type { z } from 'zod';
+import { queryText } from '@shared/workbench/start-links.ts';
 
 /** A grid field (an array of row objects) kept as one param: the columns in order, each maybe abbreviated. */
 export interface UrlGrid {
@@ -148,12 +149,6 @@ function decodeLeaf(text: string, kind: string, defaultValue: unknown, grid?: Ur
   if (kind === 'number') return text.trim() === '' ? undefined : Number(text.replace(',', '.'));
   if (kind === 'boolean') return text === '1' || text === 'true';
   return text;
-}
-
-/** Query text like URLSearchParams', but leaving `,` `;` `~` readable (they are legal in a query). */
-function queryText(pairs: [string, string][]): string {
-  const enc = (s: string) => encodeURIComponent(s).replace(/%2C/gi, ',').replace(/%3B/gi, ';').replace(/%20/g, '+');
-  return pairs.map(([k, v]) => `${enc(k)}=${enc(v)}`).join('&');
 }
 
 /**

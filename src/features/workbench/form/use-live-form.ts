@@ -44,7 +44,7 @@ export function useLiveForm<S extends FormSchema, R>(
     mode: 'onChange',
     defaultValues: initial,
   });
-  useUrlWriteBack(form.control, form.reset, schema, defaultValues as z.input<S>, url);
+  useUrlWriteBack(form.control, schema, defaultValues as z.input<S>, url);
   const values = useWatch({ control: form.control });
   const live = useMemo(() => computeLive(schema, values, compute), [schema, values, compute]);
   return { form, live };

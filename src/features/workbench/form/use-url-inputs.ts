@@ -1,11 +1,17 @@
 import { useEffect, useRef, useState } from 'react';
-import { useWatch, type Control, type FieldValues, type UseFormReset } from 'react-hook-form';
+import { useWatch, type Control, type FieldValues } from 'react-hook-form';
 import { useLocation, useNavigate } from 'react-router-dom';
 import type { z } from 'zod';
 import { decodeInputs, encodeInputs, type UrlInputOptions } from './url-inputs.ts';
 
 /** How long typing pauses before the URL follows (ms). */
 const WRITE_DELAY_MS = 400;
+
+/** History state on the entries the form writes, so the workbench outlet tells them from real navigation. */
+export const URL_INPUTS_STATE = { urlInputs: true } as const;
+
+/** Whether a location was written by a form following its inputs (not a link, a picker or back/forward). */
+export const isInputsWrite = (state: unknown) => typeof state === 'object' && state !== null && 'urlInputs' in state;
 
 /** A page's first form values: its defaults, overridden field by field by what the URL's search holds. */
 export function useUrlInitialValues<T>(schema: z.ZodType, defaults: T, options?: UrlInputOptions): T {
@@ -15,12 +21,12 @@ export function useUrlInitialValues<T>(schema: z.ZodType, defaults: T, options?:
 }
 
 /**
- * Keeps the URL's search in step with the form (replacing the history entry, after a pause in typing),
- * and loads the form again when someone navigates to another search of the same page (a link, back).
+ * Keeps the URL's search in step with the form, replacing the history entry after a pause in typing.
+ * Navigation to another search of the page (a link, a "start from" picker, back) remounts the page
+ * (see WorkbenchOutlet), which then reads its inputs afresh.
  */
 export function useUrlWriteBack<T extends FieldValues>(
   control: Control<T, unknown, unknown>,
-  reset: UseFormReset<T>,
   schema: z.ZodType,
   defaults: T,
   options?: UrlInputOptions,
@@ -28,24 +34,15 @@ export function useUrlWriteBack<T extends FieldValues>(
   const values = useWatch({ control });
   const { search, pathname } = useLocation();
   const navigate = useNavigate();
-  const written = useRef(search);
-  const latest = useRef({ schema, defaults, options });
-  latest.current = { schema, defaults, options };
-
-  useEffect(() => {
-    if (search === written.current) return;
-    written.current = search;
-    const l = latest.current;
-    reset(decodeInputs(l.schema, new URLSearchParams(search), l.defaults, l.options));
-  }, [search, reset]);
+  const latest = useRef({ schema, defaults, options, search });
+  latest.current = { schema, defaults, options, search };
 
   useEffect(() => {
     const timer = setTimeout(() => {
       const l = latest.current;
       const next = encodeInputs(l.schema, values, l.defaults, l.options);
-      if (next === written.current || (next === '' && written.current === '')) return;
-      written.current = next;
-      void navigate({ pathname, search: next }, { replace: true, preventScrollReset: true });
+      if (next === l.search || (next === '' && l.search === '?')) return;
+      void navigate({ pathname, search: next }, { replace: true, preventScrollReset: true, state: URL_INPUTS_STATE });
     }, WRITE_DELAY_MS);
     return () => clearTimeout(timer);
   }, [values, pathname, navigate]);

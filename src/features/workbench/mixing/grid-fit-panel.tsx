@@ -85,7 +85,16 @@ export function GridFitPanel({ form }: { form: MixingFormApi }) {
             {formatLengthNm(r.fit.residualStdXNm).unit}, y <span className="num">{formatLengthNm(r.fit.residualStdYNm).value}</span>{' '}
             {formatLengthNm(r.fit.residualStdYNm).unit}
           </p>
-          <Button variant="secondary" onClick={() => form.setValue('gain', roundMatrix(r.fit.gainNmPerV), { shouldValidate: true })}>
+          <Button
+            variant="secondary"
+            onClick={() => {
+              const fit = r.fit;
+              form.setValue('gain', roundMatrix(fit.gainNmPerV), { shouldValidate: true });
+              form.setValue('offsetXNm', Number(fit.offsetNm[0].toPrecision(6)));
+              form.setValue('offsetYNm', Number(fit.offsetNm[1].toPrecision(6)));
+              form.setValue('model', fit.model);
+            }}
+          >
             Use this G
           </Button>
         </div>
