@@ -21,7 +21,7 @@ import { UnitChangeQuestion } from '@/components/ui/unit-change-question.tsx';
 import { friendlyError } from '@/features/workbench/form/error-map.ts';
 import { useUrlInitialValues, useUrlWriteBack } from '@/features/workbench/form/use-url-inputs.ts';
 import { displacementOptions, voltageOptions } from '@/features/workbench/unit-options.ts';
-import { RecordAsRun } from '@/features/builds/components/record/record-as-run.tsx';
+import { RecordRunPanel } from './record-run-panel.tsx';
 
 const defaults: FitFormValues = {
   source: 'grid',
@@ -109,7 +109,7 @@ export function FitPage() {
               >
                 <LazyCalibrationChart points={result.preview.plotPoints} fit={result.preview.fit} />
               </ChartFrame>
-              <RecordAsRun data={{ kind: 'points', ...result.preview.input }} defaultMethod="indicator" />
+              <RecordRunPanel data={{ kind: 'points', ...result.preview.input }} defaultMethod="indicator" />
               <p className="text-sm text-ink-soft">
                 Sine drive instead? Use the{' '}
                 <Link className="text-teal-dark underline" to={paths.workbenchTool('peak-to-peak')}>

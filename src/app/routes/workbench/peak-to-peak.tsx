@@ -8,7 +8,7 @@ import { formatSig } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { peakToPeakForm, peakToPeakLengthFields } from '@/features/workbench/simple/peak-to-peak-form.ts';
 import { displacementOptions } from '@/features/workbench/unit-options.ts';
-import { RecordAsRun } from '@/features/builds/components/record/record-as-run.tsx';
+import { RecordRunPanel } from './record-run-panel.tsx';
 import type { RunRecordData } from '@shared/schemas/run.ts';
 
 const defaults = { unit: 'um', displacementPp: 2, displacementResolution: 0.1, voltsPpV: 20 } as const;
@@ -94,7 +94,7 @@ export function PeakToPeakPage() {
                   </span>
                 </ResultRow>
               </ResultPanel>
-              <RecordAsRun data={record} defaultMethod="indicator" />
+              <RecordRunPanel data={record} defaultMethod="indicator" />
             </>
           ) : (
             <NoResult message={live.ok ? '' : live.message} />

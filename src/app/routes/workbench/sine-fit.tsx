@@ -9,7 +9,7 @@ import { SineLoop } from '@/features/workbench/components/sine-fit/sine-loop.tsx
 import { SinePreview } from '@/features/workbench/components/sine-fit/sine-preview.tsx';
 import { SineSource } from '@/features/workbench/components/sine-fit/sine-source.tsx';
 import { useSineRecord } from '@/features/workbench/components/sine-fit/use-sine-record.ts';
-import { RecordAsRun } from '@/features/builds/components/record/record-as-run.tsx';
+import { RecordRunPanel } from './record-run-panel.tsx';
 
 export function SineFitPage() {
   const record = useSineRecord();
@@ -43,7 +43,7 @@ export function SineFitPage() {
               <ResultNotesBlock r={outcome.result} />
               <SineFitResults r={outcome.result} />
               <SineLoop input={input} result={outcome.result} />
-              <RecordAsRun data={{ kind: 'sine-record', ...input }} defaultMethod="capacitive" />
+              <RecordRunPanel data={{ kind: 'sine-record', ...input }} defaultMethod="capacitive" />
               <p className="text-sm text-ink-soft">
                 Read the swing off a dial instead? Use the{' '}
                 <Link className="text-teal-dark underline" to={paths.workbenchTool('peak-to-peak')}>

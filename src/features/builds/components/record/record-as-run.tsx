@@ -42,9 +42,18 @@ const text = (s: string) => s.trim() || undefined;
  * "Record as a run": what a workbench page computed goes into one of my builds as a calibration run,
  * with the same data, units and the fit the page showed (the server refits with the same shared code).
  */
-export function RecordAsRun({ data, defaultMethod = 'indicator' }: { data: RunRecordData | null; defaultMethod?: RunMethod }) {
+export function RecordAsRun({
+  data,
+  signedIn,
+  defaultMethod = 'indicator',
+}: {
+  data: RunRecordData | null;
+  /** Whether someone is signed in (the page knows from the session); visitors get a sign-in line and no requests. */
+  signedIn: boolean;
+  defaultMethod?: RunMethod;
+}) {
   const location = useLocation();
-  const mine = useQuery(buildQueries.mine());
+  const mine = useQuery({ ...buildQueries.mine(), enabled: signedIn });
   const [open, setOpen] = useState(false);
   const [buildId, setBuildId] = useState<number | null>(null);
   const [actuatorId, setActuatorId] = useState<number | 'new' | null>(null);
@@ -94,7 +103,7 @@ export function RecordAsRun({ data, defaultMethod = 'indicator' }: { data: RunRe
     }
   }, [data, method, measuredOn, preload, temperatureC, notes, frequencyHz]);
 
-  if (mine.error instanceof ApiError && mine.error.status === 401) {
+  if (!signedIn || (mine.error instanceof ApiError && mine.error.status === 401)) {
     return (
       <section aria-label="Record as a run" className="rounded-lg border border-dashed border-rule bg-white p-4 text-sm">
         <p>
