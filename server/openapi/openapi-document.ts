@@ -184,5 +184,3 @@ export function buildOpenApiDocument(publicUrl: string, docs: readonly RouteDoc[
     },
   };
 }
-
-export type OpenApiDocument = ReturnType<typeof buildOpenApiDocument>;

@@ -9,10 +9,6 @@ import { DATA_LICENCE } from '../data-licence.ts';
 import { RUN_FIGURE_COLUMNS, runFigureRow } from './run-figures.ts';
 import { recordTable } from './run-export.ts';
 
-/** The files of the dataset, in the order the README lists them. */
-export const DATASET_FILES = ['README.md', 'parts.csv', 'runs.csv', 'points.csv', 'dataset.json'] as const;
-export type DatasetFile = (typeof DATASET_FILES)[number];
-
 /** A listed part as the dataset needs it. */
 export interface DatasetPart {
   id: number;
@@ -152,7 +148,8 @@ export function pointsRows(run: RunDto, record: readonly unknown[], header: read
 
 /** CSV text of a header and rows (no formula escaping here: text cells are already safeText). */
 export function csvText(fields: readonly string[], rows: ReadonlyArray<ReadonlyArray<string | number>>, withHeader = true): string {
-  if (rows.length === 0) return withHeader ? `${Papa.unparse({ fields: [...fields], data: [] }, { newline: '\n' })}\n` : '';
+  if (rows.length === 0)
+    return withHeader ? `${Papa.unparse({ fields: [...fields], data: [] }, { newline: '\n' }).replace(/\n+$/, '')}\n` : '';
   const body = Papa.unparse({ fields: [...fields], data: rows.map((r) => [...r]) }, { newline: '\n', header: withHeader });
   return `${body}\n`;
 }

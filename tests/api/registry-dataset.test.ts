@@ -125,6 +125,7 @@ describe('GET /api/registry/dataset/points.csv', () => {
     const parsed = csv(res.text);
     expect(parsed.errors).toEqual([]);
     expect(parsed.meta.fields![0]).toBe('run_id');
+    expect(res.text.split('\n')[1], 'no blank line after the header').not.toBe('');
     expect(parsed.meta.fields).toEqual(expect.arrayContaining(['volts_V', 'displacement_nm', 'sweep', 'displacement_um_peak_to_peak']));
     const runIds = new Set(parsed.data.map((r) => Number(r.run_id)));
     for (const hidden of [ids.pending, ids.rejected, ids.inDraft, ids.ofProposed]) expect(runIds.has(hidden)).toBe(false);

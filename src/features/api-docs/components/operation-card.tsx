@@ -69,7 +69,19 @@ export function OperationCard({ method, path, op, doc }: { method: string; path:
         <code className="break-all font-mono text-sm font-semibold">{path}</code>
       </header>
       <h3 className="mt-2 font-medium">{op.summary}</h3>
-      {op.description && <p className="mt-1 text-sm text-ink-soft">{op.description}</p>}
+      {op.description && (
+        <p className="mt-1 text-sm text-ink-soft">
+          {op.description.split('`').map((part, i) =>
+            i % 2 === 1 ? (
+              <code key={i} className="font-mono text-xs text-ink">
+                {part}
+              </code>
+            ) : (
+              part
+            ),
+          )}
+        </p>
+      )}
       <dl className="mt-3 grid gap-x-4 gap-y-1 text-sm sm:grid-cols-[8rem_1fr]">
         <dt className="text-ink-soft">Who</dt>
         <dd>
