@@ -1,18 +1,10 @@
 import { useId, useState } from 'react';
 import { inputClass } from '@/components/ui/form-bits.tsx';
 import type { SineRecordState } from './use-sine-record.ts';
+import { exampleSineRecord as example } from './sine-example.ts';
 
 /** Roughly what 200 000 samples of three long decimals take as CSV text. */
 const MAX_FILE_BYTES = 32 * 1024 * 1024;
-
-const example = [
-  'time (s),drive (V),displacement (µm)',
-  ...Array.from({ length: 400 }, (_, i) => {
-    const t = i / 100;
-    const w = 2 * Math.PI * 1.5 * t;
-    return `${t.toFixed(2)},${(20 * Math.sin(w) + 0.05 * Math.sin(37 * i)).toFixed(3)},${(2.1 * Math.sin(w - 0.12) + 0.004 * Math.cos(53 * i)).toFixed(4)}`;
-  }),
-].join('\n');
 
 /** Paste the record, or load a CSV file into the same box (read in the browser; nothing is uploaded). */
 export function SineSource({ state }: { state: SineRecordState }) {

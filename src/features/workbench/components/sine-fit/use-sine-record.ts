@@ -8,6 +8,7 @@ import { sineFitCalculator } from '@shared/workbench/calculators/sine-fit-calcul
 import { SineFitError } from '@shared/workbench/sine-fit-error.ts';
 import { parseOptionalNumber } from '@/lib/csv/number-text.ts';
 import type { RowProblem } from '@/lib/csv/split-csv.ts';
+import { exampleSineRecord } from './sine-example.ts';
 import { guessMapping, readSineTable, samplesFromTable, type ColumnMapping, type SineTable, type TimeUnit } from './sine-csv.ts';
 
 /** The calculator's result on the page. */
@@ -32,7 +33,7 @@ function fitOutcome(input: SineFitInput | null, why: string): SineFitOutcome {
  * hand it to a "record as a run" panel as it is.
  */
 export function useSineRecord() {
-  const [text, setText] = useState('');
+  const [text, setText] = useState(exampleSineRecord);
   const [mappingChoice, setMapping] = useState<ColumnMapping | null>(null);
   const [timeUnit, setTimeUnit] = useState<TimeUnit>('s');
   const [voltageUnit, setVoltageUnit] = useState<VoltageUnit>('V');
