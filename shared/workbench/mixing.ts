@@ -235,6 +235,19 @@ export function reachableRegion(g: GainMatrix, limits: DriveLimits): { xNm: numb
   ];
 }
 
+/**
+ * Reachable region of a saved drive matrix in the indicator's frame: the parallelogram of
+ * reachableRegion moved by the fitted offsets, since x = x₀ + G·V [practice; small-angle, linear —
+ * FIELD.md "Displacement per volt"]. Corners in the same order as reachableRegion.
+ */
+export function reachableRegionWithOffset(
+  g: GainMatrix,
+  limits: DriveLimits,
+  offsetNm: readonly [number, number],
+): { xNm: number; yNm: number }[] {
+  return reachableRegion(g, limits).map((p) => ({ xNm: p.xNm + offsetNm[0], yNm: p.yNm + offsetNm[1] }));
+}
+
 /** Whether a wanted (x, y) lies inside the reachable region (voltages within limits ± toleranceV). */
 export function isReachable(g: GainMatrix, limits: DriveLimits, xNm: number, yNm: number, toleranceV = 1e-9): boolean {
   const { vaV, vbV } = voltsFor(g, xNm, yNm);

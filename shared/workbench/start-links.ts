@@ -9,11 +9,12 @@ import type { DriveMatrixDto } from '../schemas/drive-matrix.ts';
 /** Workbench pages a part or an actuator can start. */
 export type StartTool = 'expected-gain' | 'tube' | 'resonance' | 'loaded-gain' | 'mixing';
 
+/** The pages' titles as the workbench index names them (src/features/workbench/tools.ts). */
 export const startToolTitles: Readonly<Record<StartTool, string>> = {
   'expected-gain': 'Expected gain',
-  tube: 'Tube capacitance and resonance',
+  tube: 'Piezo tube',
   resonance: 'Cantilever resonance',
-  'loaded-gain': 'Gain against a spring',
+  'loaded-gain': 'Loaded gain',
   mixing: 'Two-axis mixer',
 };
 

@@ -124,7 +124,7 @@ describe('actuatorStartSearch', () => {
       measuredGainNmPerV: -88.25,
       driveMatrix: null,
     });
-    expect(read(expectedGainForm, search, egDefaults).measuredNmPerV).toBe(88.25);
+    expect(read(expectedGainForm, search, egDefaults as Record<string, unknown>).measuredNmPerV).toBe(88.25);
   });
 
   test('when an XY pair has a saved matrix, then the mixer link carries G, offsets, model and limits', () => {

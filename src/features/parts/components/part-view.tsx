@@ -9,6 +9,7 @@ import { PartPhotos } from './part-photos.tsx';
 import { PartRunsPlot } from './part-runs-plot.tsx';
 import { PartRunsTable } from './part-runs-table.tsx';
 import { ReportPartButton } from './report-part-button.tsx';
+import { PartWorkbenchLinks } from './part-workbench-links.tsx';
 
 /** One part: its figures and plot, the part itself beside its photos and exchange listings, and the runs behind the figures. */
 export function PartView({ part, signedIn }: { part: PartDetailDto; signedIn: boolean }) {
@@ -47,6 +48,7 @@ export function PartView({ part, signedIn }: { part: PartDetailDto; signedIn: bo
         </Notice>
       )}
       <PartFigures stats={part.stats} />
+      <PartWorkbenchLinks part={part} />
       <PartRunsPlot part={part} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,4fr)]">
         <PartFacts part={part} />

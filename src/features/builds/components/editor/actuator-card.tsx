@@ -10,6 +10,9 @@ import { sig } from './format.ts';
 import { RunForm } from './run-form.tsx';
 import { errorMessage } from '@/components/ui/form-bits.tsx';
 import { StoredRun } from './stored-run.tsx';
+import { DriveMatrixPanel } from '../read/drive-matrix-panel.tsx';
+import { WorkbenchLinks } from '../read/workbench-links.tsx';
+import { useClearDriveMatrix } from '../../api/drive-matrix.ts';
 
 /** One actuator: what it is and how it is driven, its calibration runs, and a form for the next run. */
 export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
@@ -17,6 +20,7 @@ export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
   const [addingRun, setAddingRun] = useState(false);
   const update = useUpdateActuator();
   const remove = useDeleteActuator();
+  const clearMatrix = useClearDriveMatrix();
   const a = actuator;
   const name = a.label || a.part.name;
   const facts = [`Axis ${a.axis}`, actuatorDriveLabels[a.drive], a.amplifier, a.maxVolts !== null ? `max ${sig(a.maxVolts)} V` : null]
@@ -80,6 +84,32 @@ export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
           />
         </div>
       )}
+      <div className="mt-3 space-y-2">
+        <WorkbenchLinks actuator={a} />
+        {a.driveMatrix && (
+          <>
+            <DriveMatrixPanel matrix={a.driveMatrix} />
+            <ConfirmButton
+              label="Remove the saved matrix"
+              ariaLabel={`Remove the saved drive matrix of ${name}`}
+              question="Remove the drive matrix saved on this actuator?"
+              confirmLabel="Yes, remove"
+              disabled={clearMatrix.isPending}
+              onConfirm={() => clearMatrix.mutate(a.id)}
+            />
+            {clearMatrix.error && (
+              <p role="alert" className="text-sm text-danger">
+                {errorMessage(clearMatrix.error)}
+              </p>
+            )}
+          </>
+        )}
+        {a.axis === 'XY' && !a.driveMatrix && (
+          <p className="text-xs text-ink-soft">
+            An XY pair can keep its drive matrix: fit it on the two-axis mixer and save it onto this actuator.
+          </p>
+        )}
+      </div>
       <h4 className="mb-2 mt-4 text-sm font-semibold">Calibration runs</h4>
       {a.runs.length === 0 && !addingRun && <p className="mb-2 text-sm text-ink-soft">No calibration runs yet.</p>}
       <ul className="space-y-2">

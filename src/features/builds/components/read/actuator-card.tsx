@@ -6,6 +6,8 @@ import { RunCards } from './run-cards.tsx';
 import { RunDetails } from './run-details.tsx';
 import { RunPlot } from './run-plot.tsx';
 import { RunTable } from './run-table.tsx';
+import { DriveMatrixPanel } from './drive-matrix-panel.tsx';
+import { WorkbenchLinks } from './workbench-links.tsx';
 
 /** One actuator: what it is and how it is driven, its calibration runs, and the plot of the chosen run. */
 export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
@@ -22,6 +24,8 @@ export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
       <ActuatorFacts actuator={actuator} />
       {isHighVoltage(actuator) && <HighVoltageMarker actuator={actuator} />}
       {actuator.notes && <p className="whitespace-pre-line text-sm">{actuator.notes}</p>}
+      {actuator.driveMatrix && <DriveMatrixPanel matrix={actuator.driveMatrix} />}
+      <WorkbenchLinks actuator={actuator} />
       <div className="space-y-3">
         <h4 className="text-sm font-semibold">Calibration runs</h4>
         {selected ? (

@@ -1,0 +1,81 @@
+import {
+  CartesianGrid,
+  ReferenceDot,
+  ResponsiveContainer,
+  Scatter,
+  ScatterChart,
+  XAxis,
+  YAxis,
+  useXAxisScale,
+  useYAxisScale,
+} from 'recharts';
+import { formatTick } from '@shared/format/measured-number.ts';
+import { axisLabelStyle, chartColors, tickStyle } from '@/components/charts/chart-theme.ts';
+
+interface PlanePoint {
+  xNm: number;
+  yNm: number;
+}
+
+function Parallelogram({ corners }: { corners: readonly PlanePoint[] }) {
+  const sx = useXAxisScale();
+  const sy = useYAxisScale();
+  if (!sx || !sy) return null;
+  return (
+    <polygon
+      points={corners.map((c) => `${sx(c.xNm)},${sy(c.yNm)}`).join(' ')}
+      fill={chartColors.teal}
+      fillOpacity={0.14}
+      stroke={chartColors.teal}
+      strokeWidth={1.5}
+    />
+  );
+}
+
+/** One span for both axes around the corners and the rest position, so the parallelogram keeps its shape. */
+function squareDomain(points: readonly PlanePoint[]): { x: [number, number]; y: [number, number] } {
+  const xs = points.map((p) => p.xNm);
+  const ys = points.map((p) => p.yNm);
+  const half = (Math.max(Math.max(...xs) - Math.min(...xs), Math.max(...ys) - Math.min(...ys)) || 1) * 0.55;
+  const cx = (Math.max(...xs) + Math.min(...xs)) / 2;
+  const cy = (Math.max(...ys) + Math.min(...ys)) / 2;
+  return { x: [cx - half, cx + half], y: [cy - half, cy + half] };
+}
+
+const noMarker = () => <g />;
+
+/** A small plot of the positions a saved drive matrix reaches within its limits, with the rest position (x₀, y₀). */
+export function DriveRegionChart({ region, rest }: { region: readonly PlanePoint[]; rest: PlanePoint }) {
+  const domain = squareDomain([...region, rest]);
+  return (
+    <ResponsiveContainer width="100%" aspect={1} maxHeight={260}>
+      <ScatterChart margin={{ top: 4, right: 8, bottom: 20, left: 4 }}>
+        <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
+        <XAxis
+          type="number"
+          dataKey="xNm"
+          domain={domain.x}
+          allowDataOverflow
+          tickCount={5}
+          tick={tickStyle}
+          tickFormatter={formatTick}
+          label={{ value: 'x (nm)', position: 'insideBottom', offset: -12, style: axisLabelStyle }}
+        />
+        <YAxis
+          type="number"
+          dataKey="yNm"
+          domain={domain.y}
+          allowDataOverflow
+          tickCount={5}
+          width={64}
+          tick={tickStyle}
+          tickFormatter={formatTick}
+          label={{ value: 'y (nm)', angle: -90, position: 'insideLeft', style: { ...axisLabelStyle, textAnchor: 'middle' } }}
+        />
+        <Parallelogram corners={region} />
+        <Scatter name="Reachable region" data={[...region]} fill={chartColors.teal} shape={noMarker} isAnimationActive={false} />
+        <ReferenceDot x={rest.xNm} y={rest.yNm} r={3} fill={chartColors.ink} stroke="none" />
+      </ScatterChart>
+    </ResponsiveContainer>
+  );
+}
