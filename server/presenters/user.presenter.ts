@@ -3,14 +3,7 @@ import type { User } from '../models/user.model.ts';
 
 /** What any page may know about the signed-in user. */
 export function presentSessionUser(u: User): SessionUserDto {
-  return {
-    id: u.id,
-    login: u.login,
-    name: u.name,
-    avatarUrl: u.avatarUrl,
-    role: u.role,
-    dataLicenceAcceptedAt: u.dataLicenceAcceptedAt?.toISOString() ?? null,
-  };
+  return { id: u.id, login: u.login, name: u.name, avatarUrl: u.avatarUrl, role: u.role };
 }
 
 /** What the admin page shows (no e-mail addresses). */

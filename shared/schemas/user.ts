@@ -8,8 +8,6 @@ export interface SessionUserDto {
   name: string | null;
   avatarUrl: string | null;
   role: Role;
-  /** When they accepted the data licence for what they contribute (ISO), or null. */
-  dataLicenceAcceptedAt: string | null;
 }
 
 export interface SessionDto {
