@@ -1,5 +1,5 @@
 // The data licence a maker accepts once: POST /api/account/data-licence (idempotent), the session user's
-// acceptedAt (GET /api/account/data-licence), and run creation that does not depend on it.
+// acceptance date (GET /api/account/data-licence), and run creation that does not depend on it.
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import request from 'supertest';
 import { startTestApp, type TestApp } from '../support/test-app.ts';
