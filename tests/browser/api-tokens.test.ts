@@ -1,27 +1,14 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
+import { beforeAll, describe, expect, test } from 'vitest';
+import { journey, SCREENSHOTS } from '../support/browser.ts';
 import { createUser } from '../support/factories.ts';
 
 describe('journey: a maker makes a rig token, copies it once and revokes it', () => {
-  let live: LiveApp;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
-  const errors: string[] = [];
-  beforeAll(async () => {
-    live = await startLiveApp();
-    browser = await launchBrowser();
-    await browser.context.grantPermissions(['clipboard-read', 'clipboard-write'], { origin: live.baseUrl });
-    browser.page.on('pageerror', (e) => errors.push(e.message));
-    browser.page.on('console', (m) => {
-      if (m.type() === 'error') errors.push(m.text());
-    });
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await live?.close();
-  });
+  const j = journey();
+  beforeAll(() => j.browser.context.grantPermissions(['clipboard-read', 'clipboard-write'], { origin: j.live.baseUrl }));
 
   test('when the maker creates a token, then its secret shows once, works from a script, and stops working once revoked', async () => {
-    const { page } = browser;
+    const { page } = j.browser;
+    const { live } = j;
     const user = await createUser();
     const name = 'Bench PC, capacitive rig';
     await page.goto(`${live.baseUrl}/auth/github?login=${user.login}`);
@@ -67,6 +54,6 @@ describe('journey: a maker makes a rig token, copies it once and revokes it', ()
     await section.getByRole('button', { name: 'Revoke token' }).click();
     await section.getByText('No tokens yet.').waitFor();
     expect((await asRig()).status).toBe(401);
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 });

@@ -1,28 +1,15 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
+import { describe, expect, test } from 'vitest';
+import { journey, SCREENSHOTS } from '../support/browser.ts';
 import { createBuildRow, createUser } from '../support/factories.ts';
 import { CalibrationRun } from '../../server/models/calibration-run.model.ts';
 import { peakToPeakGain } from '../../shared/workbench/peak-to-peak.ts';
 
 describe('journey: a maker turns an indicator reading into a stored run from the peak-to-peak page', () => {
-  let live: LiveApp;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
-  const errors: string[] = [];
-  beforeAll(async () => {
-    live = await startLiveApp();
-    browser = await launchBrowser();
-    browser.page.on('pageerror', (e) => errors.push(e.message));
-    browser.page.on('console', (m) => {
-      if (m.type() === 'error') errors.push(m.text());
-    });
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await live?.close();
-  });
+  const j = journey();
 
   test('when the maker records the reading on a new actuator of a draft, then the stored run holds the same gain the page showed', async () => {
-    const { page } = browser;
+    const { page } = j.browser;
+    const { live } = j;
     const user = await createUser();
     const build = await createBuildRow(user.id, { title: 'Bench stage for the record test' });
     await page.setViewportSize({ width: 1366, height: 900 });
@@ -52,7 +39,13 @@ describe('journey: a maker turns an indicator reading into a stored run from the
     // The page's figure and the stored one come from the same shared code [calc]: 7400 nm / 96 V, u from 0.2 µm divisions.
     const expected = peakToPeakGain({ displacementPpNm: 7400, voltsPpV: 96, displacementResolutionNm: 200 });
     const run = await CalibrationRun.findOne({ where: { buildId: build.id } });
-    expect(run).toMatchObject({ kind: 'peak-to-peak', status: 'pending', measuredOn: '2026-11-28', displacementUnit: 'um', method: 'indicator' });
+    expect(run).toMatchObject({
+      kind: 'peak-to-peak',
+      status: 'pending',
+      measuredOn: '2026-11-28',
+      displacementUnit: 'um',
+      method: 'indicator',
+    });
     expect(run!.gainNmPerV).toBeCloseTo(expected.gainNmPerV, 9);
     expect(run!.gainStdErrNmPerV).toBeCloseTo(expected.gainStdUncNmPerV, 9);
     expect(JSON.parse(run!.driveJson!)).toEqual({ kind: 'sine', frequencyHz: 2, amplitudeV: 48 });
@@ -60,6 +53,6 @@ describe('journey: a maker turns an indicator reading into a stored run from the
     await page.getByRole('link', { name: 'Open the build editor' }).click();
     await page.getByText('Peak-to-peak reading', { exact: false }).first().waitFor();
     await page.screenshot({ path: `${SCREENSHOTS}/record-as-run-editor-1366.png`, fullPage: true });
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 });

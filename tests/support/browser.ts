@@ -1,3 +1,4 @@
+import { afterAll, beforeAll } from 'vitest';
 import { mkdtempSync, rmSync, mkdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -83,4 +84,32 @@ export async function pickListingPart(page: Page, search: string, name: string, 
   await page.getByLabel('Find a part').fill(search);
   await page.getByLabel('Part', { exact: true }).locator('option', { hasText: name }).waitFor({ state: 'attached' });
   await page.getByLabel('Part', { exact: true }).selectOption({ label: `${name} (${categoryLabel})` });
+}
+
+/** What a journey's tests share: the live app, the browser, and every console error and page error seen. */
+export interface Journey {
+  live: LiveApp;
+  browser: Awaited<ReturnType<typeof launchBrowser>>;
+  errors: string[];
+}
+
+/**
+ * Starts the live app and a browser before a describe block's tests and closes both after, collecting
+ * console and page errors (tests end with `expect(j.errors).toEqual([])`). Call it inside `describe`.
+ */
+export function journey(): Journey {
+  const j = { errors: [] as string[] } as Journey;
+  beforeAll(async () => {
+    j.live = await startLiveApp();
+    j.browser = await launchBrowser();
+    j.browser.page.on('pageerror', (e) => j.errors.push(e.message));
+    j.browser.page.on('console', (m) => {
+      if (m.type() === 'error') j.errors.push(m.text());
+    });
+  });
+  afterAll(async () => {
+    await j.browser?.close();
+    await j.live?.close();
+  });
+  return j;
 }
