@@ -1,3 +1,5 @@
+import { Link } from 'react-router-dom';
+import { paths } from '@/config/paths.ts';
 import { useState } from 'react';
 import type { ActuatorDto } from '@shared/schemas/actuator.ts';
 import { actuatorDriveLabels } from '@shared/schemas/actuator.ts';
@@ -48,6 +50,13 @@ export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
               ({a.expectedGain.basis})
             </p>
           )}
+          <p className="text-xs text-ink-soft">
+            For a rig posting runs with a token: actuator id <span className="num text-ink">{a.id}</span> (
+            <Link className="underline" to={paths.apiReference}>
+              how
+            </Link>
+            )
+          </p>
         </div>
         {!editing && (
           <div className="flex flex-wrap gap-2">
