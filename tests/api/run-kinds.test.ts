@@ -219,6 +219,22 @@ describe('big runs stay cheap', () => {
     expect(json.body.record).toHaveLength(50_000);
   });
 
+  test('when large runs wait on the desk, then the review queue carries a thinned series and stays under 1 MB', async () => {
+    const { a, actuatorId, build } = await ownerWithActuator();
+    const points = Array.from({ length: 40_000 }, (_, i) => ({ volts: (i % 400) / 4, displacement: ((i % 400) / 4) * 63.1 + Math.cos(i) }));
+    for (let k = 0; k < 3; k++)
+      expect((await post(a, `/api/actuators/${actuatorId}/runs`, { points, displacementUnit: 'nm', method: 'capacitive' })).status).toBe(
+        201,
+      );
+    expect((await post(a, `/api/builds/${build.id}/submit`, {})).status).toBe(200);
+    const queue = await mod.get('/api/review/queue');
+    expect(queue.status).toBe(200);
+    expect(queue.text.length).toBeLessThan(1_000_000);
+    const mine = queue.body.runs.filter((r: { buildId: number }) => r.buildId === build.id);
+    expect(mine).toHaveLength(3);
+    for (const r of mine) expect(r.points.length).toBeLessThanOrEqual(100);
+  });
+
   test('when a run has more than 200 000 points, then 400; when a build would pass 2 000 000, then 413', async () => {
     const { a, actuatorId, build, part, owner } = await ownerWithActuator();
     const many = Array.from({ length: 200_001 }, (_, i) => ({ volts: i % 100, displacement: i % 100 }));
