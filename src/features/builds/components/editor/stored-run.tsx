@@ -8,6 +8,7 @@ import { useDeleteRun } from '../../api/delete-run.ts';
 import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { FitSummary } from './fit-summary.tsx';
 import { RunForm } from './run-form.tsx';
+import { RunDetailsForm } from './run-details-form.tsx';
 import { sig } from './format.ts';
 import { errorMessage } from '@/components/ui/form-bits.tsx';
 
@@ -81,7 +82,7 @@ export function StoredRun({ run, maxVolts = null }: { run: RunDto; maxVolts?: nu
             {plot ? 'Hide plot' : 'Show plot'}
           </Button>
         )}
-        {run.kind === 'points' && !run.decimated && (
+        {(run.kind !== 'points' || !run.decimated) && (
           <Button variant="ghost" className="border-rule" aria-expanded={editing} onClick={() => setEditing((e) => !e)}>
             {editing ? 'Close the correction' : 'Correct this run'}
           </Button>
