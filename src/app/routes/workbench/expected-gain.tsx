@@ -1,5 +1,4 @@
-import { StartFromPart } from '@/features/workbench/prefill/start-from-part.tsx';
-import { StartFromActuator } from '@/features/builds/components/record/start-from-actuator.tsx';
+import { StartPickers } from './start-pickers.tsx';
 import { materials, type MaterialKey } from '@shared/workbench/materials.ts';
 import { FieldGroup, FormNumber, FormSelect } from '@/features/workbench/components/fields.tsx';
 import { NoResult } from '@/features/workbench/components/results.tsx';
@@ -32,8 +31,7 @@ export function ExpectedGainPage() {
       <ToolColumns
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
-            <StartFromPart tool="expected-gain" />
-            <StartFromActuator tool="expected-gain" />
+            <StartPickers tool="expected-gain" />
             <FieldGroup legend="Actuator">
               <div className="sm:col-span-2">
                 <FormSelect form={form} name="spec.actuator" label="Kind" options={actuatorKinds} />

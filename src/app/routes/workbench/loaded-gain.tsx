@@ -1,5 +1,4 @@
-import { StartFromPart } from '@/features/workbench/prefill/start-from-part.tsx';
-import { StartFromActuator } from '@/features/builds/components/record/start-from-actuator.tsx';
+import { StartPickers } from './start-pickers.tsx';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths.ts';
 import { FieldGroup, FormNumber, FormRadios } from '@/features/workbench/components/fields.tsx';
@@ -33,8 +32,7 @@ export function LoadedGainPage() {
       <ToolColumns
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
-            <StartFromPart tool="loaded-gain" />
-            <StartFromActuator tool="loaded-gain" />
+            <StartPickers tool="loaded-gain" />
             <FieldGroup legend="Actuator">
               <FormNumber
                 form={form}

@@ -11,8 +11,7 @@ import { driveMatrixFromForm, mixingForm, type MixingFormValues } from '@/featur
 import { mixingCalculator } from '@shared/workbench/calculators/mixing-calculators.ts';
 import { MixingResults } from '@/features/workbench/mixing/mixing-results.tsx';
 import { PairPreset } from '@/features/workbench/mixing/pair-preset.tsx';
-import { SaveDriveMatrix } from '@/features/builds/components/record/save-drive-matrix.tsx';
-import { StartFromActuator } from '@/features/builds/components/record/start-from-actuator.tsx';
+import { SaveDriveMatrixPanel, StartPickers } from './start-pickers.tsx';
 
 const defaults: MixingFormValues = {
   gain: [
@@ -38,7 +37,7 @@ export function MixingPage() {
       <ToolColumns
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
-            <StartFromActuator tool="mixing" />
+            <StartPickers tool="mixing" parts={false} />
             <fieldset className="space-y-3 rounded-lg border border-rule bg-white p-4">
               <legend className="px-1 text-sm font-semibold">Gain matrix</legend>
               <GainMatrixFields form={form} />
@@ -86,7 +85,7 @@ export function MixingPage() {
               >
                 <LazyMixerChart region={live.result.regionNm} target={live.result.target} />
               </ChartFrame>
-              <SaveDriveMatrix matrix={matrix} />
+              <SaveDriveMatrixPanel matrix={matrix} />
             </>
           ) : (
             <NoResult message={live.message} />

@@ -1,5 +1,4 @@
-import { StartFromPart } from '@/features/workbench/prefill/start-from-part.tsx';
-import { StartFromActuator } from '@/features/builds/components/record/start-from-actuator.tsx';
+import { StartPickers } from './start-pickers.tsx';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths.ts';
 import { FieldGroup, FormNumber, FormSelect, SelectInput } from '@/features/workbench/components/fields.tsx';
@@ -39,8 +38,7 @@ export function ResonancePage() {
       <ToolColumns
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
-            <StartFromPart tool="resonance" />
-            <StartFromActuator tool="resonance" />
+            <StartPickers tool="resonance" />
             <FieldGroup legend="Material">
               <div className="sm:col-span-2">
                 <SelectInput

@@ -1,5 +1,4 @@
-import { StartFromPart } from '@/features/workbench/prefill/start-from-part.tsx';
-import { StartFromActuator } from '@/features/builds/components/record/start-from-actuator.tsx';
+import { StartPickers } from './start-pickers.tsx';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths.ts';
 import { FieldGroup, FormNumber, SelectInput } from '@/features/workbench/components/fields.tsx';
@@ -37,8 +36,7 @@ export function TubePage() {
       <ToolColumns
         inputs={
           <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
-            <StartFromPart tool="tube" />
-            <StartFromActuator tool="tube" />
+            <StartPickers tool="tube" />
             <FieldGroup legend="Tube (clamped at one end)">
               <FormNumber form={form} name="lengthMm" label="Free length L" unit="mm" />
               <FormNumber form={form} name="outerDiameterMm" label="Outer diameter" unit="mm" />

@@ -110,9 +110,9 @@ export function DriveMatrixPanel({ matrix, headingLevel = 4 }: { matrix: DriveMa
             </dd>
           </dl>
         </div>
-        <figure className="min-w-0">
+        <figure className="w-full max-w-[300px] min-w-0">
           <ErrorBoundary fallback={<p className="text-sm text-ink-soft">The plot could not be drawn.</p>}>
-            <Suspense fallback={<div className="aspect-square max-h-64 animate-pulse rounded bg-paper-deep" />}>
+            <Suspense fallback={<div className="aspect-square animate-pulse rounded bg-paper-deep" />}>
               <DriveRegionChart region={region} rest={{ xNm: matrix.offsetNm[0], yNm: matrix.offsetNm[1] }} />
             </Suspense>
           </ErrorBoundary>

@@ -32,23 +32,40 @@ function Parallelogram({ corners }: { corners: readonly PlanePoint[] }) {
   );
 }
 
+/** A 1-2-5 step giving about four intervals over `span` [practice: the usual chart tick rule]. */
+function niceStep(span: number): number {
+  const raw = span / 4;
+  const mag = 10 ** Math.floor(Math.log10(raw));
+  const f = raw / mag;
+  return (f < 1.5 ? 1 : f < 3.5 ? 2 : f < 7.5 ? 5 : 10) * mag;
+}
+
+const ticksIn = (lo: number, hi: number, step: number) => {
+  const out: number[] = [];
+  for (let v = Math.ceil(lo / step) * step; v <= hi + step * 1e-9; v += step) out.push(Number(v.toPrecision(12)));
+  return out;
+};
+
 /** One span for both axes around the corners and the rest position, so the parallelogram keeps its shape. */
-function squareDomain(points: readonly PlanePoint[]): { x: [number, number]; y: [number, number] } {
+function squareAxes(points: readonly PlanePoint[]) {
   const xs = points.map((p) => p.xNm);
   const ys = points.map((p) => p.yNm);
   const half = (Math.max(Math.max(...xs) - Math.min(...xs), Math.max(...ys) - Math.min(...ys)) || 1) * 0.55;
   const cx = (Math.max(...xs) + Math.min(...xs)) / 2;
   const cy = (Math.max(...ys) + Math.min(...ys)) / 2;
-  return { x: [cx - half, cx + half], y: [cy - half, cy + half] };
+  const step = niceStep(2 * half);
+  const x: [number, number] = [cx - half, cx + half];
+  const y: [number, number] = [cy - half, cy + half];
+  return { x, y, xTicks: ticksIn(x[0], x[1], step), yTicks: ticksIn(y[0], y[1], step) };
 }
 
 const noMarker = () => <g />;
 
 /** A small plot of the positions a saved drive matrix reaches within its limits, with the rest position (x₀, y₀). */
 export function DriveRegionChart({ region, rest }: { region: readonly PlanePoint[]; rest: PlanePoint }) {
-  const domain = squareDomain([...region, rest]);
+  const domain = squareAxes([...region, rest]);
   return (
-    <ResponsiveContainer width="100%" aspect={1} maxHeight={260}>
+    <ResponsiveContainer width="100%" aspect={1}>
       <ScatterChart margin={{ top: 4, right: 8, bottom: 20, left: 4 }}>
         <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
         <XAxis
@@ -56,7 +73,7 @@ export function DriveRegionChart({ region, rest }: { region: readonly PlanePoint
           dataKey="xNm"
           domain={domain.x}
           allowDataOverflow
-          tickCount={5}
+          ticks={domain.xTicks}
           tick={tickStyle}
           tickFormatter={formatTick}
           label={{ value: 'x (nm)', position: 'insideBottom', offset: -12, style: axisLabelStyle }}
@@ -66,7 +83,7 @@ export function DriveRegionChart({ region, rest }: { region: readonly PlanePoint
           dataKey="yNm"
           domain={domain.y}
           allowDataOverflow
-          tickCount={5}
+          ticks={domain.yTicks}
           width={64}
           tick={tickStyle}
           tickFormatter={formatTick}

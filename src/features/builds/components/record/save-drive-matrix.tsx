@@ -19,9 +19,16 @@ const EDITABLE = new Set(['draft', 'returned', 'published']);
  * "Save onto an actuator": the mixer's G, offsets and drive limits go onto an XY pair of one of my builds,
  * where its page shows the drive matrix and the reachable region. `matrix` is null while the inputs are not usable.
  */
-export function SaveDriveMatrix({ matrix }: { matrix: DriveMatrixInput | null }) {
+export function SaveDriveMatrix({
+  matrix,
+  signedIn,
+}: {
+  matrix: DriveMatrixInput | null;
+  /** From the session: visitors get a sign-in line and cause no requests. */
+  signedIn: boolean;
+}) {
   const location = useLocation();
-  const mine = useQuery(buildQueries.mine());
+  const mine = useQuery({ ...buildQueries.mine(), enabled: signedIn });
   const [buildId, setBuildId] = useState<number | null>(null);
   const [actuatorId, setActuatorId] = useState<number | null>(null);
   const [measuredOn, setMeasuredOn] = useState('');
@@ -29,7 +36,7 @@ export function SaveDriveMatrix({ matrix }: { matrix: DriveMatrixInput | null })
   const build = useQuery({ ...buildQueries.detail(buildId ?? 0), enabled: buildId !== null });
   const save = useSaveDriveMatrix();
 
-  if (mine.error instanceof ApiError && mine.error.status === 401) {
+  if (!signedIn || (mine.error instanceof ApiError && mine.error.status === 401)) {
     return (
       <section aria-label="Save onto an actuator" className="rounded-lg border border-dashed border-rule bg-white p-4 text-sm">
         <p>

@@ -16,13 +16,20 @@ import { actuatorLine } from './run-target.tsx';
  * and material, its newest gain; on the mixer an XY pair's saved matrix) through the page's URL inputs.
  * Nothing shows to visitors.
  */
-export function StartFromActuator({ tool }: { tool: StartTool }) {
+export function StartFromActuator({
+  tool,
+  signedIn,
+}: {
+  tool: StartTool;
+  /** From the session: visitors see nothing and cause no requests. */ signedIn: boolean;
+}) {
   const navigate = useNavigate();
-  const mine = useQuery(buildQueries.mine());
+  const mine = useQuery({ ...buildQueries.mine(), enabled: signedIn });
   const [buildId, setBuildId] = useState<number | null>(null);
   const [actuatorId, setActuatorId] = useState<number | null>(null);
   const build = useQuery({ ...buildQueries.detail(buildId ?? 0), enabled: buildId !== null });
-  if ((mine.error instanceof ApiError && mine.error.status === 401) || (mine.isSuccess && mine.data.items.length === 0)) return null;
+  if (!signedIn || (mine.error instanceof ApiError && mine.error.status === 401) || (mine.isSuccess && mine.data.items.length === 0))
+    return null;
   const actuators = (build.data?.actuators ?? []).filter((a) => (tool === 'mixing' ? a.axis === 'XY' && a.driveMatrix : true));
   const chosen = actuators.find((a) => a.id === actuatorId);
   const gain = chosen ? newestGain(chosen) : null;
