@@ -99,13 +99,17 @@ export function StoredRun({ run, maxVolts = null }: { run: RunDto; maxVolts?: nu
       </div>
       {editing && (
         <div className="mt-2">
-          <RunForm
-            actuatorId={run.actuatorId}
-            maxVolts={maxVolts}
-            run={run}
-            onSaved={() => setEditing(false)}
-            onCancel={() => setEditing(false)}
-          />
+          {run.kind === 'points' ? (
+            <RunForm
+              actuatorId={run.actuatorId}
+              maxVolts={maxVolts}
+              run={run}
+              onSaved={() => setEditing(false)}
+              onCancel={() => setEditing(false)}
+            />
+          ) : (
+            <RunDetailsForm run={run} onDone={() => setEditing(false)} />
+          )}
         </div>
       )}
       {remove.error && (
