@@ -20,7 +20,7 @@ import { requireSameOrigin } from './middleware/same-origin.ts';
 import { jsonBody } from './middleware/json-body.ts';
 import { sessionUser } from './middleware/session-user.ts';
 import { outsideApi, unlessAnonymousRead } from './middleware/anonymous-reads.ts';
-import { errorHandler, apiNotFound } from './middleware/error-handler.ts';
+import { errorHandler, apiNotFound, isDbDown } from './middleware/error-handler.ts';
 import { limiter } from './middleware/rate-limit.ts';
 import { bearerToken, unlessBearer } from './middleware/bearer-token.ts';
 import { idempotency } from './middleware/idempotency.ts';
@@ -41,12 +41,20 @@ import { apiTokenRoutes } from './routes/api-token.routes.ts';
 import { dataLicenceRoutes } from './routes/data-licence.routes.ts';
 import { registryDatasetRoutes } from './routes/registry-dataset.routes.ts';
 import { openApiRoutes } from './routes/openapi.routes.ts';
+import { opsRoutes } from './routes/ops.routes.ts';
+import { outboxRoutes } from './routes/outbox.routes.ts';
+import { createDrain, type Drain } from './ops/drain.ts';
+import { createMetrics } from './ops/metrics.ts';
+import { createReadiness } from './ops/readiness.ts';
+import { createOutageLog } from './ops/db-outage.ts';
 
 export interface AppHandle {
   app: Express;
   sequelize: Sequelize;
   mailer: Mailer;
   log: Logger;
+  /** SIGTERM's first step (server/index.ts): /api/ready turns 503 and responses close their connections. */
+  drain: Drain;
   close(): Promise<void>;
 }
 
@@ -60,8 +68,19 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   const log = deps.log ?? createLogger(config.logLevel);
   const sequelize = createSequelize(config.db);
   initModels(sequelize);
-  const mailer = deps.mailer ?? createMailer(config.smtpUrl ?? 'smtp://127.0.0.1:2525', config.mailFrom, log);
-  const outbox = startOutboxWorker(mailer, config.publicUrl, log, config.env === 'test' ? 250 : 5000);
+  const mailer =
+    deps.mailer ??
+    createMailer(config.smtpUrl ?? 'smtp://127.0.0.1:2525', config.mailFrom, log, { timeoutMs: config.outbox.smtpTimeoutMs });
+  const metrics = createMetrics({ sequelize, uploadsDir: config.uploadsDir });
+  const drain = createDrain();
+  const outage = createOutageLog(sequelize, log);
+  const outbox = startOutboxWorker(mailer, {
+    appUrl: config.publicUrl,
+    log,
+    intervalMs: config.env === 'test' ? 250 : 5000,
+    leaseS: config.outbox.leaseS,
+    onGivenUp: metrics.mailGivenUp,
+  });
   const passport = createPassport(config, log);
   const SequelizeStore = connectSessionSequelize(session.Store);
   const store = new SequelizeStore({
@@ -81,7 +100,8 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   const touch = store.touch.bind(store);
   store.touch = (sid, data, done) =>
     touch(sid, data, (err?: unknown) => {
-      if (err) log.warn({ err }, 'session touch failed');
+      if (err && isDbDown(err)) outage.noteDown(err);
+      else if (err) log.warn({ err }, 'session touch failed');
       done?.();
     });
   const https = config.publicUrl.startsWith('https://');
@@ -90,10 +110,15 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.disable('x-powered-by');
   app.set('query parser', 'simple');
   if (https) app.set('trust proxy', 1);
+  app.use(drain.middleware, metrics.middleware);
+  const probes = new Set(['/api/health', '/api/ready', '/metrics']);
   app.use(
     pinoHttp({
       logger: log,
-      autoLogging: { ignore: (req) => req.url === '/api/health' },
+      autoLogging: { ignore: (req) => probes.has(req.url ?? '') },
+      // A 503 during a database outage is logged once by the outage log; its access line needs no error stack.
+      customErrorObject: (_req, res, err, val) =>
+        (res as { locals?: { dbDown?: boolean } }).locals?.dbDown ? { res: val.res, responseTime: val.responseTime } : val,
       serializers: {
         req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
         res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
@@ -132,6 +157,19 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   }
   app.use('/uploads', express.static(resolve(config.uploadsDir), { index: false, immutable: true, maxAge: '30d', fallthrough: false }));
   app.use(healthRoutes(sequelize));
+  app.use(
+    opsRoutes({
+      drain,
+      metrics,
+      metricsToken: config.ops.metricsToken,
+      readiness: createReadiness({
+        sequelize,
+        uploadsDir: config.uploadsDir,
+        minFreeMb: config.ops.readyMinFreeMb,
+        maxOutbox: config.ops.readyMaxOutbox,
+      }),
+    }),
+  );
   // A rig's personal API token: checked (401/403/429) before any body is read; such requests skip sessions and CSRF.
   app.use(...bearerToken(config.rateLimits));
 
@@ -166,6 +204,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(sessionRoutes());
   app.use(authRoutes(passport, limiter(config.rateLimits, { windowMs: 60_000, limit: 20, what: 'sign-in attempts' })));
   app.use(adminRoutes());
+  app.use(outboxRoutes());
   app.use(workbenchRoutes());
   app.use(photoRoutes(config));
   app.use(buildRoutes(config));
@@ -185,14 +224,16 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
     if (!existsSync(indexHtml)) return next();
     res.set('Cache-Control', 'no-cache').sendFile(indexHtml);
   });
-  app.use(errorHandler(config.env === 'development'));
+  app.use(errorHandler(config.env === 'development', { onDbDown: outage.noteDown }));
 
   return {
     app,
     sequelize,
     mailer,
     log,
+    drain,
     async close() {
+      outage.close();
       await outbox.stop();
       store.stopExpiringSessions();
       mailer.close();

@@ -30,6 +30,11 @@ const envSchema = z
     CLIENT_DIST: z.string().default('dist/client'),
     RATE_LIMITS: bool.default(true),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
+    READY_MIN_FREE_MB: z.coerce.number().min(0).default(200),
+    READY_MAX_OUTBOX: z.coerce.number().int().min(1).default(500),
+    METRICS_TOKEN: z.string().min(16).optional(),
+    OUTBOX_LEASE_S: z.coerce.number().int().min(1).default(120),
+    SMTP_TIMEOUT_S: z.coerce.number().min(0.1).default(10),
   })
   .refine((e) => e.NODE_ENV !== 'production' || e.SESSION_SECRET !== DEFAULT_SESSION_SECRET, {
     path: ['SESSION_SECRET'],
@@ -55,6 +60,10 @@ export interface Config {
   clientDist: string;
   rateLimits: boolean;
   logLevel: string;
+  /** /api/ready bounds (uploads disk free space, unsent mails) and the /metrics bearer token (loopback only when null). */
+  ops: { readyMinFreeMb: number; readyMaxOutbox: number; metricsToken: string | null };
+  /** How long a worker's claim on a mail holds, and the SMTP connection, greeting and socket timeouts. */
+  outbox: { leaseS: number; smtpTimeoutMs: number };
 }
 
 /** Parse the environment once, with defaults that fit the embedded set-up. */
@@ -87,6 +96,8 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env, overrides: P
     clientDist: e.CLIENT_DIST,
     rateLimits: e.RATE_LIMITS,
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
+    ops: { readyMinFreeMb: e.READY_MIN_FREE_MB, readyMaxOutbox: e.READY_MAX_OUTBOX, metricsToken: e.METRICS_TOKEN ?? null },
+    outbox: { leaseS: e.OUTBOX_LEASE_S, smtpTimeoutMs: Math.round(e.SMTP_TIMEOUT_S * 1000) },
   };
   return { ...config, ...overrides };
 }

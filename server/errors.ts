@@ -34,3 +34,9 @@ export class ConflictError extends AppError {
     super(409, code, message);
   }
 }
+/** The disk holding uploads is full (ENOSPC) or over quota (EDQUOT): 507, nothing stored. */
+export class InsufficientStorageError extends AppError {
+  constructor() {
+    super(507, 'insufficient_storage', 'The server has no room for this upload right now; try again later.');
+  }
+}

@@ -1,6 +1,8 @@
 // Process entry: start the local stand-ins when no real services are configured, then listen.
-// SIGTERM/SIGINT: stop accepting, finish in-flight requests, close the pool, exit 0.
+// SIGTERM/SIGINT: drain (ready 503, `Connection: close`), stop accepting, finish in-flight requests,
+// stop the outbox after its current mail, close the pool, exit 0 — or 1 when that takes past 10 s.
 import type { Server } from 'node:http';
+import { Server as NetServer } from 'node:net';
 import { loadConfig, standInPorts } from './config.ts';
 import { createLogger } from './logger.ts';
 import { createApp } from './app.ts';
@@ -18,7 +20,7 @@ let catcher: SmtpCatcher | null = null;
 if (config.github.standIn) oauth = await startOAuthStandIn(ports.oauth);
 if (!config.smtpUrl) catcher = await startSmtpCatcher(ports.smtp, ports.inbox);
 
-const mailer = createMailer(config.smtpUrl ?? catcher!.smtpUrl, config.mailFrom, log);
+const mailer = createMailer(config.smtpUrl ?? catcher!.smtpUrl, config.mailFrom, log, { timeoutMs: config.outbox.smtpTimeoutMs });
 const handle = await createApp(config, { mailer, log });
 const server: Server = handle.app.listen(config.port, config.host, () => {
   const lines = [
@@ -40,23 +42,34 @@ const server: Server = handle.app.listen(config.port, config.host, () => {
 server.keepAliveTimeout = 5000;
 
 let closing = false;
+/** Connections idle this long after the drain starts are closed; busy ones close after their next response. */
+const IDLE_GRACE_MS = 300;
 async function shutdown(signal: string) {
   if (closing) return;
   closing = true;
-  // Stop listening first, so that once "shutting down" is logged no new connection is accepted.
-  const closed = new Promise<void>((resolve) => server.once('close', () => resolve()));
-  server.close();
-  server.closeIdleConnections();
-  log.info({ signal }, 'shutting down');
+  const started = Date.now();
   const force = setTimeout(() => {
     log.error('forced exit after 10 s');
     process.exit(1);
   }, 10_000);
   force.unref();
+  // 1. /api/ready answers 503 and every response from now on (in flight ones too) says `Connection: close`.
+  handle.drain.start();
+  // 2. Stop listening, so that once "shutting down" is logged no new connection is accepted. net.Server's close,
+  // not http.Server's: the latter also destroys idle keep-alive sockets at once, and a client that has just
+  // sent its next request on one would see it cut. They are closed after a short grace instead.
+  const closed = new Promise<void>((resolve) => server.once('close', () => resolve()));
+  NetServer.prototype.close.call(server);
+  log.info({ signal }, 'shutting down');
+  const idle = setInterval(() => server.closeIdleConnections(), IDLE_GRACE_MS);
+  // 3. In-flight requests finish; each connection closes after its answer.
   await closed;
+  clearInterval(idle);
+  // 4. The outbox stops after its current mail, the session store and the pools close.
   await handle.close();
   await oauth?.close();
   await catcher?.close();
+  log.info({ ms: Date.now() - started }, 'drained; exiting');
   process.exit(0);
 }
 process.on('SIGTERM', () => void shutdown('SIGTERM'));

@@ -73,6 +73,8 @@ const rules = {
   /** Admins change others' roles, never their own (so the last admin cannot lock everyone out). */
   'user.set-role': and(active, hasRole('admin'), not(isSelf)),
   'user.suspend': and(active, hasRole('admin'), not(isSelf)),
+  /** Mails the outbox gave up on: listed and re-queued by admins. */
+  'outbox.manage': and(active, hasRole('admin')),
 } satisfies Record<string, Rule>;
 
 export type Action = keyof typeof rules;

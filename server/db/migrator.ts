@@ -17,6 +17,7 @@ import * as addDataLicenceAcceptance from './migrations/20261203130000-add-data-
 import * as createApiTokens from './migrations/20261203100000-create-api-tokens.ts';
 import * as createIdempotencyKeys from './migrations/20261203100100-create-idempotency-keys.ts';
 import * as addActuatorDriveMatrix from './migrations/20261203140000-add-actuator-drive-matrix.ts';
+import * as addOutboxClaims from './migrations/20261203150000-add-outbox-claims.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -39,6 +40,7 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261203120000-add-run-kinds', addRunKinds],
   ['20261203130000-add-data-licence-acceptance', addDataLicenceAcceptance],
   ['20261203140000-add-actuator-drive-matrix', addActuatorDriveMatrix],
+  ['20261203150000-add-outbox-claims', addOutboxClaims],
 ];
 
 /** Umzug over our migration list; the only source of the schema, in tests too. */

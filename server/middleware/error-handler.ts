@@ -1,7 +1,8 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import { BaseError, ConnectionError, UniqueConstraintError, TimeoutError, ForeignKeyConstraintError } from 'sequelize';
-import { AppError } from '../errors.ts';
+import { AppError, InsufficientStorageError } from '../errors.ts';
+import { isNoSpace } from '../ops/disk-space.ts';
 
 /** At most this many field issues go back in `details`. */
 const MAX_DETAILS = 50;
@@ -15,7 +16,8 @@ export const apiNotFound: RequestHandler = (req, res) => {
   res.status(404).json(body('not_found', `No route for ${req.method} ${req.path}`));
 };
 
-function isDbDown(err: unknown): boolean {
+/** The database could not be reached (refused, timed out, connection lost), as opposed to a query that failed. */
+export function isDbDown(err: unknown): boolean {
   if (err instanceof ConnectionError || err instanceof TimeoutError) return true;
   type Coded = { code?: string; sqlState?: string };
   const e = err as { name?: string; original?: Coded; parent?: Coded } & Coded;
@@ -31,8 +33,12 @@ function isDbDown(err: unknown): boolean {
   );
 }
 
-/** One error middleware, registered last: every failure leaves as `{ error: { code, message, details? } }`. */
-export function errorHandler(showStack: boolean): ErrorRequestHandler {
+/**
+ * One error middleware, registered last: every failure leaves as `{ error: { code, message, details? } }`.
+ * A 503 for an unreachable database goes to `onDbDown` (logged once per outage) and its access line
+ * carries no error object (`res.locals.dbDown`, read by app.ts's request logger).
+ */
+export function errorHandler(showStack: boolean, opts: { onDbDown?: (err: unknown) => void } = {}): ErrorRequestHandler {
   return (err, req, res, _next) => {
     if (res.headersSent) return void req.socket.destroy();
     if (err instanceof AppError) return void res.status(err.status).json(body(err.code, err.message, err.details));
@@ -57,7 +63,15 @@ export function errorHandler(showStack: boolean): ErrorRequestHandler {
     if (err instanceof UniqueConstraintError) return void res.status(409).json(body('conflict', 'That already exists.'));
     if (err instanceof ForeignKeyConstraintError)
       return void res.status(409).json(body('conflict', 'A referenced record does not exist or is still in use.'));
-    if (isDbDown(err)) return void res.status(503).json(body('db_unavailable', 'The database is not reachable; try again shortly.'));
+    if (isNoSpace(err)) {
+      const e = new InsufficientStorageError();
+      return void res.status(e.status).json(body(e.code, e.message));
+    }
+    if (isDbDown(err)) {
+      opts.onDbDown?.(err);
+      res.locals.dbDown = true;
+      return void res.status(503).json(body('db_unavailable', 'The database is not reachable; try again shortly.'));
+    }
     req.log?.error({ err }, 'unhandled error');
     const message = showStack && err instanceof Error ? `${err.message}\n${err.stack}` : 'Something went wrong on our side.';
     if (err instanceof BaseError) return void res.status(500).json(body('internal_error', showStack ? err.message : message));

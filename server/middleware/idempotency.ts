@@ -18,6 +18,11 @@ const IDEMPOTENT_POSTS: readonly string[] = [
   '/api/listings',
   '/api/listings/:listingId/messages',
   '/api/inbox/:threadId/messages',
+  // Photo uploads add rows for every request. Their multipart body is read later by the route, so the
+  // comparison covers its length (a retry of the same files keeps it; multipart boundaries have a fixed length).
+  '/api/builds/:buildId/photos',
+  '/api/parts/:partId/photos',
+  '/api/listings/:listingId/photos',
 ];
 
 /** 1–255 visible ASCII characters (no spaces or control characters). */
@@ -82,8 +87,9 @@ export const idempotency: RequestHandler = async (req, res, next) => {
   if (!KEY_SHAPE.test(key)) {
     throw new AppError(400, 'invalid_idempotency_key', 'The Idempotency-Key header must be 1–255 visible ASCII characters (no spaces).');
   }
+  const multipart = req.is('multipart/form-data') ? `multipart:${req.get('content-length') ?? ''}` : null;
   const bodyHash = createHash('sha256')
-    .update(canonicalJson(req.body ?? {}))
+    .update(multipart ?? canonicalJson(req.body ?? {}))
     .digest('hex');
   const claim = await claimIdempotencyKey({ userId, key, method: req.method, path: req.path, bodyHash });
   switch (claim.kind) {

@@ -10,6 +10,9 @@ export class OutboxMail extends Model<InferAttributes<OutboxMail>, InferCreation
   declare nextAttemptAt: Date;
   declare sentAt: CreationOptional<Date | null>;
   declare lastError: CreationOptional<string | null>;
+  /** The instance sending it now, and until when its lease holds (see outbox.service.ts). */
+  declare claimedBy: CreationOptional<string | null>;
+  declare claimedUntil: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -25,6 +28,8 @@ export class OutboxMail extends Model<InferAttributes<OutboxMail>, InferCreation
         nextAttemptAt: { type: DataTypes.DATE, allowNull: false },
         sentAt: DataTypes.DATE,
         lastError: DataTypes.STRING(500),
+        claimedBy: DataTypes.STRING(80),
+        claimedUntil: DataTypes.DATE,
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

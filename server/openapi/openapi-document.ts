@@ -30,6 +30,7 @@ const ERROR_TEXT: Record<number, string> = {
   413: 'Too large (a body, a photo, or a run or build past its point budget).',
   429: 'Too many requests; wait and retry.',
   503: 'The database is unreachable; retry later.',
+  507: 'The server has no room to store the upload right now (`insufficient_storage`); retry later.',
 };
 
 function errorStatuses(d: RouteDoc): number[] {

@@ -45,6 +45,7 @@ import {
 } from '@shared/schemas/review.ts';
 import { createRunInput, runExportQuery, runIdParams, updateRunInput } from '@shared/schemas/run.ts';
 import { listUsersQuery, setRoleInput, setSuspendedInput, userIdParams } from '@shared/schemas/user.ts';
+import { mailIdParams } from '@shared/schemas/outbox.ts';
 import { calculators } from '@shared/workbench/calculators/all-calculators.ts';
 import { RIG_RUN_BODY } from '@shared/docs/rig-examples.ts';
 
@@ -111,8 +112,9 @@ function attachedPhotoDocs(base: string, idName: string, tag: string, what: stri
       auth: 'session',
       params: idParams,
       multipart: photosUpload(false),
+      idempotent: true,
       response: json(201, 'The stored photos.'),
-      errors: [413],
+      errors: [413, 507],
     },
     {
       method: 'PUT',
@@ -209,6 +211,33 @@ export const ROUTE_DOCS: readonly RouteDoc[] = [
     auth: 'visitor',
     response: json(200, 'Up.'),
     errors: [503],
+  },
+  {
+    method: 'GET',
+    path: '/api/ready',
+    summary: 'Should this instance get traffic (readiness)',
+    description:
+      'Checks the database (`SELECT 1`), that migrations are current, that the uploads directory is writable with free space ' +
+      'above `READY_MIN_FREE_MB`, and that fewer than `READY_MAX_OUTBOX` mails wait to be sent; answers are cached for a second. ' +
+      '200 `{ status: "ready", checks }`; 503 `not_ready` naming the failed checks in `details.failed`, or `draining` while the ' +
+      'instance shuts down. `/api/health` stays the cheap liveness check.',
+    tag: 'Service',
+    auth: 'visitor',
+    response: json(200, 'Ready, with each check.'),
+    errors: [503],
+  },
+  {
+    method: 'GET',
+    path: '/metrics',
+    summary: 'Prometheus metrics (operators)',
+    description:
+      'Prometheus text format: requests by route pattern and status with latency histograms, database pool, outbox backlog and ' +
+      'given-up mails, free space of the uploads disk, process memory and event-loop lag. Answered only on a loopback connection ' +
+      'that no proxy forwarded, or with `Authorization: Bearer <METRICS_TOKEN>` when that is set; 404 otherwise.',
+    tag: 'Service',
+    auth: 'visitor',
+    response: { status: 200, description: 'The metrics.', contentType: 'text/plain; version=0.0.4' },
+    errors: [404],
   },
   {
     method: 'GET',
@@ -434,8 +463,9 @@ export const ROUTE_DOCS: readonly RouteDoc[] = [
     auth: 'session',
     params: buildIdParams,
     multipart: photosUpload(true),
+    idempotent: true,
     response: json(201, 'The stored photos.'),
-    errors: [413],
+    errors: [413, 507],
   },
   {
     method: 'PUT',
@@ -761,6 +791,26 @@ export const ROUTE_DOCS: readonly RouteDoc[] = [
     params: userIdParams,
     body: setSuspendedInput,
     response: json(200, 'The user.'),
+  },
+  {
+    method: 'GET',
+    path: '/api/admin/outbox/given-up',
+    summary: 'Mails the outbox gave up on (admins)',
+    description: 'The newest 100 mails not sent after the last attempt, with the account they were for (a login, never an address).',
+    tag: 'Admin',
+    auth: 'session-or-token',
+    scope: 'read',
+    response: json(200, 'The given-up mails and their total.'),
+  },
+  {
+    method: 'POST',
+    path: '/api/admin/outbox/:mailId/requeue',
+    summary: 'Put a given-up mail back in the queue (admins)',
+    tag: 'Admin',
+    auth: 'session',
+    params: mailIdParams,
+    response: json(200, 'The mail, due now with its attempts from zero.'),
+    errors: [409],
   },
   // Exchange
   {

@@ -14,12 +14,25 @@ export type SendResult = { ok: true } | { ok: false; error: unknown };
 export interface Mailer {
   /** Send without ever throwing into the caller: a failed send comes back as the result, not as an exception. */
   send(mail: OutgoingMail): Promise<SendResult>;
+  /** Whether the relay answers now (connect, greeting, EHLO, QUIT); never throws. */
+  verify(): Promise<boolean>;
   close(): void;
 }
 
-/** nodemailer over SMTP (the local catcher in development and tests). */
-export function createMailer(smtpUrl: string, from: string, log: Logger): Mailer {
-  const transport: Transporter = nodemailer.createTransport(smtpUrl);
+/**
+ * nodemailer over SMTP (the local catcher in development and tests). Connection, greeting and socket
+ * timeouts are bounded (10 s by default), so a relay that accepts and never answers fails a send in
+ * seconds instead of holding the sender for minutes (nodemailer's defaults are 2 min, 30 s and 10 min).
+ */
+export function createMailer(smtpUrl: string, from: string, log: Logger, opts: { timeoutMs?: number } = {}): Mailer {
+  const timeoutMs = opts.timeoutMs ?? 10_000;
+  const transport: Transporter = nodemailer.createTransport({
+    url: smtpUrl,
+    connectionTimeout: timeoutMs,
+    greetingTimeout: timeoutMs,
+    socketTimeout: timeoutMs,
+    dnsTimeout: timeoutMs,
+  } as Parameters<typeof nodemailer.createTransport>[0]);
   return {
     async send(mail) {
       try {
@@ -30,6 +43,11 @@ export function createMailer(smtpUrl: string, from: string, log: Logger): Mailer
         return { ok: false, error };
       }
     },
+    verify: () =>
+      transport.verify().then(
+        () => true,
+        () => false,
+      ),
     close: () => transport.close(),
   };
 }

@@ -1,4 +1,7 @@
-import { Op, type Transaction } from 'sequelize';
+import { randomBytes } from 'node:crypto';
+import { hostname } from 'node:os';
+import { Op, QueryTypes, type Transaction } from 'sequelize';
+import pLimit from 'p-limit';
 import { OutboxMail } from '../models/outbox-mail.model.ts';
 import { User } from '../models/user.model.ts';
 import type { Logger } from '../logger.ts';
@@ -6,7 +9,8 @@ import type { Mailer, OutgoingMail } from './mail.service.ts';
 
 /** Placeholder for the app's public address; the worker fills it in at send time. */
 export const APP_URL = '{{APP_URL}}';
-const MAX_ATTEMPTS = 8;
+/** After this many failed sends a mail is given up: listed for admins, counted in /metrics, re-queued by hand. */
+export const MAX_ATTEMPTS = 8;
 
 /** A send error as the logs and the row keep it, the recipient's address cut out (SMTP refusals often quote it). */
 function sendError(error: unknown, address: string): { name: string; message: string; code?: string; responseCode?: number } {
@@ -15,6 +19,14 @@ function sendError(error: unknown, address: string): { name: string; message: st
     .split(address)
     .join('<recipient>');
   return { name: e.name ?? 'Error', message, code: e.code, responseCode: e.responseCode };
+}
+
+/**
+ * The relay itself failed (no connection, no greeting, a socket timeout, 421 "service not available"),
+ * as opposed to a refusal of this one mail: the worker then stops sending until the relay answers again.
+ */
+function relayFailure(err: { code?: string; responseCode?: number }): boolean {
+  return /^(ECONNECTION|ETIMEDOUT|ESOCKET|EDNS|ECONNREFUSED|ECONNRESET|EPIPE)$/.test(err.code ?? '') || err.responseCode === 421;
 }
 
 /** Who a mail was for, without the address: the role of the account that has it, or that none does (any more). */
@@ -50,43 +62,133 @@ export function kickOutbox(): void {
 export interface OutboxWorker {
   /** Send what is due now; resolves with how many were sent. */
   flush(): Promise<number>;
-  /** Stop the timer and wait for a pass in progress, so the pool can close under it safely. */
-  stop(): Promise<void>;
+  /**
+   * Stop: no new mail is started, the mails in the relay's hands finish (waiting at most `waitMs`), and the
+   * claims on mails not started are given back at once, so another instance sends them without waiting for the lease.
+   */
+  stop(waitMs?: number): Promise<void>;
 }
 
-/** Sends queued mail in the background and retries failures with exponential backoff (30 s · 2^n). */
-export function startOutboxWorker(mailer: Mailer, appUrl: string, log: Logger, intervalMs = 5000): OutboxWorker {
+export interface OutboxOptions {
+  appUrl: string;
+  log: Logger;
+  intervalMs?: number;
+  /** How long a claim holds (s); longer than the slowest send (three bounded SMTP timeouts). */
+  leaseS?: number;
+  /** Mails in the relay's hands at once. */
+  concurrency?: number;
+  /** Called once per mail given up (the /metrics counter). */
+  onGivenUp?: () => void;
+}
+
+/**
+ * Sends queued mail in the background and retries failures with exponential backoff (30 s · 2^n).
+ *
+ * Several instances may run against one database: each pass first claims due mails with one UPDATE that
+ * sets `claimed_by` (this instance) and `claimed_until` (a lease) on rows nobody holds, then sends only
+ * what it claimed. InnoDB locks the rows that UPDATE writes, so two workers never claim the same row;
+ * a worker that dies mid-send leaves a lease that expires, and another instance takes the mail then.
+ * When the relay itself fails, the worker stops sending and checks the relay each pass; once it answers
+ * again the backoff of every waiting mail is reset, so nothing waits out a long delay for an outage.
+ */
+export function startOutboxWorker(mailer: Mailer, opts: OutboxOptions): OutboxWorker {
+  const { appUrl, log, intervalMs = 5000, leaseS = 120, concurrency = 3 } = opts;
+  const me = `${hostname().slice(0, 40)}:${process.pid}:${randomBytes(4).toString('hex')}`;
+  const limit = pLimit(concurrency);
   let running: Promise<number> | null = null;
+  let stopping = false;
+  let relayDown = false;
   const fill = (s: string) => s.split(APP_URL).join(appUrl);
-  async function sendDue(): Promise<number> {
-    const due = await OutboxMail.findAll({
-      where: { sentAt: null, attempts: { [Op.lt]: MAX_ATTEMPTS }, nextAttemptAt: { [Op.lte]: new Date() } },
+  const sequelize = () => OutboxMail.sequelize!;
+
+  async function claim(): Promise<OutboxMail[]> {
+    await sequelize().query(
+      `UPDATE mail_outbox SET claimed_by = :me, claimed_until = NOW() + INTERVAL :leaseS SECOND
+        WHERE sent_at IS NULL AND attempts < :max AND next_attempt_at <= :now
+          AND (claimed_until IS NULL OR claimed_until < NOW())
+        ORDER BY id LIMIT :n`,
+      { replacements: { me, leaseS, max: MAX_ATTEMPTS, now: new Date(), n: concurrency * 3 }, type: QueryTypes.UPDATE },
+    );
+    return OutboxMail.findAll({
+      where: { claimedBy: me, sentAt: null, attempts: { [Op.lt]: MAX_ATTEMPTS } },
       order: [['id', 'ASC']],
-      limit: 25,
     });
-    let sent = 0;
-    for (const m of due) {
-      const result = await mailer.send({ to: m.toAddress, subject: fill(m.subject), text: fill(m.textBody), html: fill(m.htmlBody) });
-      const attempts = m.attempts + 1;
-      if (result.ok) {
-        await m.update({ sentAt: new Date(), attempts, lastError: null });
-        sent++;
-        continue;
-      }
-      const err = sendError(result.error, m.toAddress);
-      const nextAttemptAt = new Date(Date.now() + 30_000 * 2 ** (attempts - 1));
-      await m.update({ attempts, nextAttemptAt, lastError: `${err.name}: ${err.message}`.slice(0, 500) });
-      if (attempts < MAX_ATTEMPTS) {
-        log.warn({ mailId: m.id, attempt: attempts, err, nextAttemptAt }, 'mail send failed; will retry');
-      } else {
-        log.error(
-          { mailId: m.id, recipientKind: await recipientKind(m.toAddress), attempts, err },
-          'mail given up: not sent after the last attempt',
-        );
-      }
-    }
-    return sent;
   }
+
+  /** Mails in the relay's hands right now: their claims stay until their send ends. */
+  const inFlight = new Set<number>();
+  /** Give back this instance's claims on mails it has not started (stopping, or the relay went down mid-pass). */
+  const releaseClaims = () =>
+    OutboxMail.update(
+      { claimedBy: null, claimedUntil: null },
+      { where: { claimedBy: me, sentAt: null, ...(inFlight.size ? { id: { [Op.notIn]: [...inFlight] } } : {}) } },
+    );
+
+  /** The relay answers again: every mail waiting out a backoff is due now. */
+  async function relayBack(): Promise<void> {
+    relayDown = false;
+    const [reset] = await OutboxMail.update(
+      { nextAttemptAt: new Date() },
+      { where: { sentAt: null, attempts: { [Op.gt]: 0, [Op.lt]: MAX_ATTEMPTS }, nextAttemptAt: { [Op.gt]: new Date() } } },
+    );
+    log.info({ reset }, 'mail relay answers again; backoff reset');
+  }
+
+  async function sendOne(m: OutboxMail): Promise<boolean> {
+    if (stopping || relayDown) return false;
+    inFlight.add(m.id);
+    try {
+      return await sendAndRecord(m);
+    } finally {
+      inFlight.delete(m.id);
+    }
+  }
+
+  async function sendAndRecord(m: OutboxMail): Promise<boolean> {
+    const result = await mailer.send({ to: m.toAddress, subject: fill(m.subject), text: fill(m.textBody), html: fill(m.htmlBody) });
+    const attempts = m.attempts + 1;
+    const mine = { where: { id: m.id, claimedBy: me } };
+    if (result.ok) {
+      await OutboxMail.update({ sentAt: new Date(), attempts, lastError: null, claimedBy: null, claimedUntil: null }, mine);
+      if (relayDown) await relayBack();
+      return true;
+    }
+    const err = sendError(result.error, m.toAddress);
+    if (relayFailure(err) && !relayDown) {
+      relayDown = true;
+      log.warn({ err }, 'mail relay not answering; sending paused until it does');
+    }
+    const nextAttemptAt = new Date(Date.now() + 30_000 * 2 ** (attempts - 1));
+    const lastError = `${err.name}: ${err.message}`.slice(0, 500);
+    await OutboxMail.update({ attempts, nextAttemptAt, lastError, claimedBy: null, claimedUntil: null }, mine);
+    if (attempts < MAX_ATTEMPTS) {
+      log.warn({ mailId: m.id, attempt: attempts, err, nextAttemptAt }, 'mail send failed; will retry');
+    } else {
+      opts.onGivenUp?.();
+      log.error(
+        { mailId: m.id, recipientKind: await recipientKind(m.toAddress), attempts, err },
+        'mail given up: not sent after the last attempt',
+      );
+    }
+    return false;
+  }
+
+  async function sendDue(): Promise<number> {
+    if (stopping) return 0;
+    if (relayDown) {
+      if (!(await mailer.verify())) return 0;
+      await relayBack();
+    }
+    const due = await claim();
+    if (due.length === 0) return 0;
+    try {
+      const results = await Promise.all(due.map((m) => limit(() => sendOne(m))));
+      return results.filter(Boolean).length;
+    } finally {
+      await releaseClaims();
+    }
+  }
+
   const flush = () => {
     running ??= sendDue()
       .catch((err: unknown) => {
@@ -103,10 +205,16 @@ export function startOutboxWorker(mailer: Mailer, appUrl: string, log: Logger, i
   kick = () => void flush();
   return {
     flush,
-    stop: async () => {
+    stop: async (waitMs = 5000) => {
+      stopping = true;
       clearInterval(timer);
       kick = () => {};
-      await running;
+      if (running) {
+        let timeout: NodeJS.Timeout | undefined;
+        await Promise.race([running, new Promise((r) => (timeout = setTimeout(r, waitMs)))]);
+        clearTimeout(timeout);
+      }
+      await releaseClaims().catch(() => undefined);
     },
   };
 }

@@ -5,7 +5,8 @@ import sharp, { type Metadata } from 'sharp';
 import { fileTypeFromBuffer } from 'file-type';
 import pLimit from 'p-limit';
 import { availableParallelism } from 'node:os';
-import { AppError } from '../errors.ts';
+import { AppError, InsufficientStorageError } from '../errors.ts';
+import { isNoSpace } from '../ops/disk-space.ts';
 
 export const MAX_FILE_BYTES = 20 * 1024 * 1024;
 export const MAX_FILES_PER_UPLOAD = 10;
@@ -158,7 +159,8 @@ export async function writeVariants(dir: string, photos: ProcessedPhoto[]): Prom
     }
   } catch (err) {
     await removeFiles(dir, created).catch(() => undefined);
-    throw err;
+    // A full disk is the server's state, not the upload's fault: 507 and a message to try later.
+    throw isNoSpace(err) ? new InsufficientStorageError() : err;
   }
   return created;
 }

@@ -35,6 +35,7 @@ const expected: Record<string, Row> = {
   'POST /auth/logout': [204, 204, 204, 403, 204, 204],
   'PATCH /api/admin/users/:userId/role': [401, 403, 403, 403, 403, 200],
   'PATCH /api/admin/users/:userId/suspension': [401, 403, 403, 403, 403, 200],
+  'POST /api/admin/outbox/:mailId/requeue': [401, 403, 403, 403, 403, 200],
 
   'POST /api/workbench/fit': [200, 200, 200, 200, 200, 200],
   'POST /api/workbench/peak-to-peak': [200, 200, 200, 200, 200, 200],

@@ -28,6 +28,8 @@ import {
 import { createListingInput, hideListingInput, sendMessageInput, updateListingInput } from '@shared/schemas/listing.ts';
 import { reorderAttachedPhotosInput, updateAttachedPhotoInput } from '@shared/schemas/attached-photo.ts';
 import { setRoleInput, setSuspendedInput } from '@shared/schemas/user.ts';
+import { OutboxMail } from '../../server/models/outbox-mail.model.ts';
+import { MAX_ATTEMPTS } from '../../server/services/outbox.service.ts';
 import { createApiTokenInput } from '@shared/schemas/api-token.ts';
 import * as wb from '@shared/schemas/workbench.ts';
 import * as wbx from '@shared/schemas/workbench-extras.ts';
@@ -298,6 +300,31 @@ export const fixtures: Record<string, Fixture> = {
         async changed(res) {
           expect(res.body).toMatchObject({ id: owner.id, role: 'moderator' });
           expect((await User.findByPk(owner.id))?.role).toBe('moderator');
+        },
+      };
+    },
+  },
+  'POST /api/admin/outbox/:mailId/requeue': {
+    allowed: 'admin',
+    async make() {
+      // Given up: every attempt failed, the next one (never taken) far off.
+      const mail = await OutboxMail.create({
+        toAddress: `${unique('given-up').replace(' ', '-')}@example.org`,
+        subject: 'Given up',
+        textBody: 'x',
+        htmlBody: '<p>x</p>',
+        attempts: MAX_ATTEMPTS,
+        nextAttemptAt: new Date(Date.now() + 86_400_000),
+        lastError: 'Error: relay refused',
+      });
+      return {
+        params: { mailId: mail.id },
+        state: () => rows(OutboxMail.findByPk(mail.id)),
+        async changed(res) {
+          expect(res.body).toMatchObject({ id: mail.id, attempts: 0 });
+          // Back in the queue: due now from zero attempts, or already sent by the worker.
+          const row = await OutboxMail.findByPk(mail.id);
+          expect(row!.sentAt !== null || (row!.attempts === 0 && row!.nextAttemptAt.getTime() <= Date.now())).toBe(true);
         },
       };
     },

@@ -22,6 +22,7 @@ const table: Record<Action, Row> = {
   'user.list': [false, false, false, false, false, true],
   'user.set-role': [false, false, false, false, false, true],
   'user.suspend': [false, false, false, false, false, true],
+  'outbox.manage': [false, false, false, false, false, true],
 };
 
 const OWNER = 1;
