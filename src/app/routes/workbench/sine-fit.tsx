@@ -17,7 +17,7 @@ export function SineFitPage() {
   return (
     <ToolPage
       slug="sine-fit"
-      linkNote="pasted records are not kept in the link"
+      linkNote="the record itself is not kept in the link, only its units and the frequency"
       lead="Fit a recorded sine drive and the displacement it makes (a scope or data-logger export): gain, phase lag and the loop."
     >
       <ToolColumns

@@ -1,7 +1,9 @@
 // The sine-fit page's state: the CSV text, the column mapping and units, the known frequency, and
 // what they give — the parsed SineFitInput (what POST /api/workbench/sine-fit and a sine-record run
 // take) and the shared calculator's result for it (the page's live result; the API answers the same).
-import { useDeferredValue, useMemo, useState } from 'react';
+import { useDeferredValue, useEffect, useMemo, useState } from 'react';
+import { useSearchParams } from 'react-router-dom';
+import { displacementUnits, voltageUnits } from '@shared/units.ts';
 import { sineFitInput, type SineFitInput } from '@shared/schemas/sine-fit.ts';
 import type { DisplacementUnit, VoltageUnit } from '@shared/units.ts';
 import { sineFitCalculator } from '@shared/workbench/calculators/sine-fit-calculator.ts';
@@ -9,7 +11,7 @@ import { SineFitError } from '@shared/workbench/sine-fit-error.ts';
 import { parseOptionalNumber } from '@/lib/csv/number-text.ts';
 import type { RowProblem } from '@/lib/csv/split-csv.ts';
 import { exampleSineRecord } from './sine-example.ts';
-import { guessMapping, readSineTable, samplesFromTable, type ColumnMapping, type SineTable, type TimeUnit } from './sine-csv.ts';
+import { timeUnits, guessMapping, readSineTable, samplesFromTable, type ColumnMapping, type SineTable, type TimeUnit } from './sine-csv.ts';
 
 /** The calculator's result on the page. */
 export type SineFitResult = ReturnType<typeof sineFitCalculator.compute>;
@@ -27,6 +29,10 @@ function fitOutcome(input: SineFitInput | null, why: string): SineFitOutcome {
   }
 }
 
+/** A value from the link when it is one of the allowed ones, else the default. */
+const pick = <T extends string>(v: string | null, allowed: readonly T[], fallback: T): T =>
+  (allowed as readonly string[]).includes(v ?? '') ? (v as T) : fallback;
+
 /**
  * Everything the sine-fit page holds and derives. `input` is the parsed record in the shape of
  * `sineFitInput` ({ samples, voltageUnit, displacementUnit, frequencyHz? }), null while it is incomplete:
@@ -35,10 +41,20 @@ function fitOutcome(input: SineFitInput | null, why: string): SineFitOutcome {
 export function useSineRecord() {
   const [text, setText] = useState(exampleSineRecord);
   const [mappingChoice, setMapping] = useState<ColumnMapping | null>(null);
-  const [timeUnit, setTimeUnit] = useState<TimeUnit>('s');
-  const [voltageUnit, setVoltageUnit] = useState<VoltageUnit>('V');
-  const [displacementUnit, setDisplacementUnit] = useState<DisplacementUnit>('um');
-  const [frequencyText, setFrequencyText] = useState('');
+  // Units and the known frequency live in the link (the record itself does not: it can be megabytes).
+  const [params, setParams] = useSearchParams();
+  const [timeUnit, setTimeUnit] = useState<TimeUnit>(() => pick(params.get('tu'), Object.keys(timeUnits) as TimeUnit[], 's'));
+  const [voltageUnit, setVoltageUnit] = useState<VoltageUnit>(() => pick(params.get('vu'), voltageUnits, 'V'));
+  const [displacementUnit, setDisplacementUnit] = useState<DisplacementUnit>(() => pick(params.get('du'), displacementUnits, 'um'));
+  const [frequencyText, setFrequencyText] = useState(() => params.get('f') ?? '');
+  useEffect(() => {
+    const next = new URLSearchParams();
+    if (timeUnit !== 's') next.set('tu', timeUnit);
+    if (voltageUnit !== 'V') next.set('vu', voltageUnit);
+    if (displacementUnit !== 'um') next.set('du', displacementUnit);
+    if (frequencyText.trim()) next.set('f', frequencyText.trim());
+    if (next.toString() !== params.toString()) setParams(next, { replace: true });
+  }, [timeUnit, voltageUnit, displacementUnit, frequencyText, params, setParams]);
   const deferredText = useDeferredValue(text);
 
   const table: SineTable = useMemo(() => readSineTable(deferredText), [deferredText]);
