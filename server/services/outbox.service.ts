@@ -11,6 +11,8 @@ import type { Mailer, OutgoingMail } from './mail.service.ts';
 export const APP_URL = '{{APP_URL}}';
 /** After this many failed sends a mail is given up: listed for admins, counted in /metrics, re-queued by hand. */
 export const MAX_ATTEMPTS = 8;
+/** Mails claimed per concurrent send in one batch: small, so other instances share a backlog. */
+const BATCH = 3;
 
 /** A send error as the logs and the row keep it, the recipient's address cut out (SMTP refusals often quote it). */
 function sendError(error: unknown, address: string): { name: string; message: string; code?: string; responseCode?: number } {
@@ -107,7 +109,7 @@ export function startOutboxWorker(mailer: Mailer, opts: OutboxOptions): OutboxWo
         WHERE sent_at IS NULL AND attempts < :max AND next_attempt_at <= :now
           AND (claimed_until IS NULL OR claimed_until < NOW())
         ORDER BY id LIMIT :n`,
-      { replacements: { me, leaseS, max: MAX_ATTEMPTS, now: new Date(), n: concurrency * 3 }, type: QueryTypes.UPDATE },
+      { replacements: { me, leaseS, max: MAX_ATTEMPTS, now: new Date(), n: BATCH * concurrency }, type: QueryTypes.UPDATE },
     );
     return OutboxMail.findAll({
       where: { claimedBy: me, sentAt: null, attempts: { [Op.lt]: MAX_ATTEMPTS } },
@@ -179,13 +181,18 @@ export function startOutboxWorker(mailer: Mailer, opts: OutboxOptions): OutboxWo
       if (!(await mailer.verify())) return 0;
       await relayBack();
     }
-    const due = await claim();
-    if (due.length === 0) return 0;
-    try {
-      const results = await Promise.all(due.map((m) => limit(() => sendOne(m))));
-      return results.filter(Boolean).length;
-    } finally {
-      await releaseClaims();
+    // Claim and send batch after batch until nothing is due, so a backlog drains at the relay's pace.
+    let sent = 0;
+    for (;;) {
+      const due = await claim();
+      if (due.length === 0) return sent;
+      try {
+        const results = await Promise.all(due.map((m) => limit(() => sendOne(m))));
+        sent += results.filter(Boolean).length;
+      } finally {
+        await releaseClaims();
+      }
+      if (due.length < BATCH * concurrency || stopping || relayDown) return sent;
     }
   }
 

@@ -7,6 +7,7 @@ import { useSession } from '@/features/session/api/get-session.ts';
 import { toActor } from '@/features/session/to-actor.ts';
 import { useAdminUsers } from '@/features/admin/api/list-users.ts';
 import { UserRow } from '@/features/admin/components/user-row.tsx';
+import { GivenUpMails } from '@/features/admin/components/given-up-mails.tsx';
 
 export function AdminUsersPage() {
   const { data: session } = useSession();
@@ -93,6 +94,7 @@ export function AdminUsersPage() {
           </Button>
         )}
       </p>
+      <GivenUpMails />
     </div>
   );
 }
