@@ -1,11 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
 import type { ActuatorDto } from '@shared/schemas/actuator.ts';
-import { Field, describe, inputClass } from '@/components/ui/form-bits.tsx';
+import { Field, inputClass } from '@/components/ui/form-bits.tsx';
+import { MyBuildSelect } from './my-build-select.tsx';
 import { buildQueries } from '../../api/build-queries.ts';
-import { ApiError } from '@/lib/api-client.ts';
-
-/** Builds that still take runs: drafts, returned and published builds (those pending review or declined are frozen). */
-const TAKES_RUNS = new Set(['draft', 'returned', 'published']);
 
 /** The actuator's line in the picker: label or axis, the part, and its expected gain. */
 export const actuatorLine = (a: ActuatorDto) =>
@@ -23,36 +20,18 @@ export function RunTarget({
   onBuild: (id: number | null) => void;
   onActuator: (id: number | 'new' | null, actuator?: ActuatorDto) => void;
 }) {
-  const mine = useQuery(buildQueries.mine());
   const build = useQuery({ ...buildQueries.detail(buildId ?? 0), enabled: buildId !== null });
-  if (mine.error instanceof ApiError && mine.error.status === 401) return null;
-  const builds = (mine.data?.items ?? []).filter((b) => TAKES_RUNS.has(b.status));
   const actuators = build.data?.actuators ?? [];
   return (
     <div className="grid gap-3 sm:grid-cols-2">
-      <Field
+      <MyBuildSelect
         id="record-build"
-        label="Build"
-        hint={builds.length === 0 && mine.isSuccess ? 'No build of yours takes runs yet: start one first.' : undefined}
-      >
-        <select
-          id="record-build"
-          className={inputClass}
-          value={buildId ?? ''}
-          {...describe('record-build', undefined, builds.length === 0)}
-          onChange={(e) => {
-            onBuild(e.target.value ? Number(e.target.value) : null);
-            onActuator(null);
-          }}
-        >
-          <option value="">{mine.isPending ? 'Loading your builds…' : 'Choose a build'}</option>
-          {builds.map((b) => (
-            <option key={b.id} value={b.id}>
-              {b.title} ({b.status})
-            </option>
-          ))}
-        </select>
-      </Field>
+        value={buildId}
+        onChange={(id) => {
+          onBuild(id);
+          onActuator(null);
+        }}
+      />
       <Field id="record-actuator" label="Actuator">
         <select
           id="record-actuator"

@@ -11,9 +11,7 @@ import { ApiError } from '@/lib/api-client.ts';
 import { buildQueries } from '../../api/build-queries.ts';
 import { useSaveDriveMatrix } from '../../api/drive-matrix.ts';
 import { actuatorLine } from './run-target.tsx';
-
-/** Builds that still take changes: drafts, returned and published builds (those pending review or declined are frozen). */
-const EDITABLE = new Set(['draft', 'returned', 'published']);
+import { MyBuildSelect } from './my-build-select.tsx';
 
 /**
  * "Save onto an actuator": the mixer's G, offsets and drive limits go onto an XY pair of one of my builds,
@@ -49,7 +47,6 @@ export function SaveDriveMatrix({
       </section>
     );
   }
-  const builds = (mine.data?.items ?? []).filter((b) => EDITABLE.has(b.status));
   const pairs = (build.data?.actuators ?? []).filter((a) => a.axis === 'XY');
   const handleSave = () => {
     if (!matrix || actuatorId === null) return;
@@ -66,29 +63,15 @@ export function SaveDriveMatrix({
         wanted position and the reachable region.
       </p>
       <div className="grid gap-3 sm:grid-cols-2">
-        <Field
+        <MyBuildSelect
           id="matrix-build"
-          label="Build"
-          hint={builds.length === 0 && mine.isSuccess ? 'No build of yours can change now: start one first.' : undefined}
-        >
-          <select
-            id="matrix-build"
-            className={inputClass}
-            value={buildId ?? ''}
-            onChange={(e) => {
-              setBuildId(e.target.value ? Number(e.target.value) : null);
-              setActuatorId(null);
-              setSaved(null);
-            }}
-          >
-            <option value="">{mine.isPending ? 'Loading your builds…' : 'Choose a build'}</option>
-            {builds.map((b) => (
-              <option key={b.id} value={b.id}>
-                {b.title} ({b.status})
-              </option>
-            ))}
-          </select>
-        </Field>
+          value={buildId}
+          onChange={(id) => {
+            setBuildId(id);
+            setActuatorId(null);
+            setSaved(null);
+          }}
+        />
         <Field
           id="matrix-actuator"
           label="XY actuator"
