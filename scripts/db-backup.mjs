@@ -1,24 +1,25 @@
-// `npm run db:backup`: a consistent dump of the app's database from the private MariaDB that
-// `npm start` runs (its socket in .data/mariadb), to .data/backups/<database>-<UTC time>.sql.
-// Safe while the app runs: one snapshot transaction (InnoDB), no table locks.
-// MARIADB_SOCKET, DB_NAME and BACKUP_DIR override the defaults.
-import { spawn, spawnSync } from 'node:child_process';
-import { closeSync, existsSync, mkdirSync, openSync, renameSync, rmSync, statSync } from 'node:fs';
+// `npm run db:backup`: one archive of the app's database (a consistent dump) and its uploads, with a
+// manifest of row counts and checksums (scripts/lib/backup-archive.mjs), from the private MariaDB that
+// `npm start` runs (its socket in .data/mariadb), to .data/backups/<database>-<UTC time>.tar.gz.
+// Safe while the app runs: one snapshot transaction (InnoDB), no table locks. Old scheduled archives are
+// pruned afterwards (7 daily, 4 weekly). MARIADB_SOCKET, DB_NAME, UPLOADS_DIR and BACKUP_DIR override the defaults.
+import { spawnSync } from 'node:child_process';
+import { existsSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { DATA_DIR } from './lib/paths.mjs';
+import { createBackup, rootArgs } from './lib/backup-archive.mjs';
+import { backupDir, pruneArchives } from './lib/backup-schedule.mjs';
 
-/** Where to work: MARIADB_SOCKET / DB_NAME / BACKUP_DIR override what `npm start` uses. */
+/** Where to work: MARIADB_SOCKET / DB_NAME / UPLOADS_DIR / BACKUP_DIR override what `npm start` uses. */
 export function dbTarget() {
   return {
     socket: resolve(process.env.MARIADB_SOCKET ?? join(DATA_DIR, 'mariadb', 'mysqld.sock')),
     database: process.env.DB_NAME ?? 'scanwright',
-    backupDir: resolve(process.env.BACKUP_DIR ?? join(DATA_DIR, 'backups')),
+    backupDir: backupDir(),
+    uploadsDir: resolve(process.env.UPLOADS_DIR ?? 'uploads'),
   };
 }
-
-/** Root over the server's own socket, never reading /etc/mysql. */
-export const rootArgs = (socket) => ['--no-defaults', `--socket=${socket}`, '--user=root', '--default-character-set=utf8mb4'];
 
 export function fail(message, code = 1) {
   process.stderr.write(`${message}\n`);
@@ -43,70 +44,22 @@ export function requireRunningServer({ socket, database }) {
   return has.stdout.trim() === database;
 }
 
-/** 2026-12-01T23-30-05Z: sortable and safe in file names. */
-const stamp = (d = new Date()) =>
-  d
-    .toISOString()
-    .replace(/\.\d+Z$/, 'Z')
-    .replace(/:/g, '-');
-
-/**
- * Dump `database` to `<backupDir>/<prefix><database>-<time>.sql` (written to a .partial file and
- * renamed when complete, so a failed dump never looks like a backup). Resolves with the path.
- */
-export async function backup({ socket, database, backupDir }, prefix = '') {
-  mkdirSync(backupDir, { recursive: true, mode: 0o700 });
-  const file = join(backupDir, `${prefix}${database}-${stamp()}.sql`);
-  const partial = `${file}.partial`;
-  const out = openSync(partial, 'w', 0o600);
-  const args = [
-    ...rootArgs(socket),
-    '--single-transaction',
-    '--routines',
-    '--triggers',
-    '--events',
-    '--hex-blob',
-    '--tz-utc',
-    '--add-drop-table',
-    '--quick',
-    '--skip-dump-date',
-    database,
-  ];
-  const code = await new Promise((done) => {
-    const child = spawn('mariadb-dump', args, { stdio: ['ignore', out, 'pipe'] });
-    let err = '';
-    child.stderr.on('data', (c) => {
-      err += c;
-    });
-    child.on('error', (e) => {
-      err += e.message;
-      done(-1);
-    });
-    child.on('exit', (c) => {
-      if (c !== 0) process.stderr.write(err);
-      done(c ?? 1);
-    });
-  });
-  closeSync(out);
-  if (code !== 0) {
-    rmSync(partial, { force: true });
-    throw new Error(`mariadb-dump failed (exit ${code}); no backup was written.`);
-  }
-  renameSync(partial, file);
-  return file;
-}
-
 async function main() {
   const target = dbTarget();
   if (!requireRunningServer(target)) fail(`MariaDB is running, but it has no database \`${target.database}\` to back up.`);
   try {
-    const file = await backup(target);
+    const { file, manifest } = await createBackup(target);
     const kb = (statSync(file).size / 1024).toFixed(1);
+    const rows = Object.values(manifest.tables).reduce((a, b) => a + b, 0);
     process.stdout.write(
-      `Backed up database \`${target.database}\` to ${file} (${kb} KiB).\nRestore it with: npm run db:restore ${file}\n`,
+      `Backed up database \`${target.database}\` (${Object.keys(manifest.tables).length} tables, ${rows} rows) and ` +
+        `${Object.keys(manifest.uploads).length} upload files to ${file} (${kb} KiB).\n` +
+        `Check it with: npm run db:verify ${file}\nRestore it with: npm run db:restore ${file}\n`,
     );
+    const removed = pruneArchives(target.backupDir, target.database);
+    if (removed.length) process.stdout.write(`Removed old backups (7 daily and 4 weekly are kept): ${removed.join(', ')}\n`);
   } catch (err) {
-    fail(err instanceof Error ? err.message : String(err));
+    fail(`${err instanceof Error ? err.message : String(err)}\nNo backup was written.`);
   }
 }
 

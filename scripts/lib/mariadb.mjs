@@ -48,8 +48,11 @@ function pidAlive(pid) {
   }
 }
 
-/** Start mariadbd on 127.0.0.1:port; resolves once it answers a ping. */
-export async function startServer(dir, port, { fast = false } = {}) {
+/**
+ * Start mariadbd on 127.0.0.1:port; resolves once it answers a ping. `onSpawn(child)` gets the process
+ * at once (a supervisor can stop it while it is still starting); `shouldStop()` true gives up waiting.
+ */
+export async function startServer(dir, port, { fast = false, onSpawn, shouldStop } = {}) {
   const pidFile = join(dir, 'mysqld.pid');
   if (existsSync(pidFile)) {
     const old = Number(readFileSync(pidFile, 'utf8').trim());
@@ -74,12 +77,14 @@ export async function startServer(dir, port, { fast = false } = {}) {
   ];
   if (fast) args.push('--innodb-flush-log-at-trx-commit=2', '--innodb-doublewrite=0', '--innodb-buffer-pool-size=64M');
   const child = spawn('mariadbd', args, { stdio: 'ignore', detached: false });
+  onSpawn?.(child);
   let exited = null;
   child.on('exit', (code) => {
     exited = code ?? -1;
   });
   const deadline = Date.now() + 60_000;
   while (Date.now() < deadline) {
+    if (shouldStop?.()) return child;
     if (exited !== null) {
       let log = '';
       try {
@@ -120,7 +125,8 @@ export function ensureDatabase(dir, { database, user, password }) {
 
 /** SIGTERM mariadbd and wait for a clean shutdown. */
 export async function stopServer(child, timeoutMs = 30_000) {
-  if (!child || child.exitCode !== null) return;
+  // Killed by a signal: exitCode stays null but signalCode is set, and its `exit` has already fired.
+  if (!child || child.exitCode !== null || child.signalCode !== null) return;
   const done = new Promise((resolve) => child.once('exit', resolve));
   child.kill('SIGTERM');
   let timer;

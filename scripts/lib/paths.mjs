@@ -1,10 +1,11 @@
 // Where the project keeps its runtime state, and the secrets it generates once.
 import { randomBytes } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, writeFileSync, readdirSync, statSync } from 'node:fs';
-import { join } from 'node:path';
+import { join, resolve } from 'node:path';
 
 export const ROOT = process.cwd();
-export const DATA_DIR = join(ROOT, '.data');
+/** Runtime state of `npm start`; SCANWRIGHT_DATA_DIR moves it (tests use their own). */
+export const DATA_DIR = process.env.SCANWRIGHT_DATA_DIR ? resolve(process.env.SCANWRIGHT_DATA_DIR) : join(ROOT, '.data');
 
 /** Secrets made on the first start and kept in .data/secrets.json (git-ignored). */
 export function localSecrets() {
