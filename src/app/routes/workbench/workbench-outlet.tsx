@@ -1,6 +1,6 @@
 import { useRef } from 'react';
 import { Outlet, useLocation } from 'react-router-dom';
-import { isInputsWrite } from '@/features/workbench/form/use-url-inputs.ts';
+import { isInputsWrite } from '@/features/workbench/form/inputs-write-state.ts';
 
 /**
  * The workbench pages, remounted when someone navigates to another address (a shared link, a "start from"

@@ -3,15 +3,10 @@ import { useWatch, type Control, type FieldValues } from 'react-hook-form';
 import { useLocation, useNavigate } from 'react-router-dom';
 import type { z } from 'zod';
 import { decodeInputs, encodeInputs, type UrlInputOptions } from './url-inputs.ts';
+import { URL_INPUTS_STATE } from './inputs-write-state.ts';
 
 /** How long typing pauses before the URL follows (ms). */
 const WRITE_DELAY_MS = 400;
-
-/** History state on the entries the form writes, so the workbench outlet tells them from real navigation. */
-export const URL_INPUTS_STATE = { urlInputs: true } as const;
-
-/** Whether a location was written by a form following its inputs (not a link, a picker or back/forward). */
-export const isInputsWrite = (state: unknown) => typeof state === 'object' && state !== null && 'urlInputs' in state;
 
 /** A page's first form values: its defaults, overridden field by field by what the URL's search holds. */
 export function useUrlInitialValues<T>(schema: z.ZodType, defaults: T, options?: UrlInputOptions): T {
