@@ -24,6 +24,7 @@ import { errorHandler, apiNotFound, isDbDown } from './middleware/error-handler.
 import { limiter } from './middleware/rate-limit.ts';
 import { bearerToken, unlessBearer } from './middleware/bearer-token.ts';
 import { idempotency } from './middleware/idempotency.ts';
+import { maintenance } from './middleware/maintenance.ts';
 import { healthRoutes } from './routes/health.routes.ts';
 import { sessionRoutes } from './routes/session.routes.ts';
 import { authRoutes } from './routes/auth.routes.ts';
@@ -80,6 +81,8 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
     intervalMs: config.env === 'test' ? 250 : 5000,
     leaseS: config.outbox.leaseS,
     onGivenUp: metrics.mailGivenUp,
+    // During a database outage the worker's failed passes join the one outage warning.
+    onPassFailed: (err) => (isDbDown(err) ? outage.noteDown(err) : log.warn({ err }, 'outbox pass failed')),
   });
   const passport = createPassport(config, log);
   const SequelizeStore = connectSessionSequelize(session.Store);
@@ -170,6 +173,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
       }),
     }),
   );
+  app.use(maintenance(sequelize));
   // A rig's personal API token: checked (401/403/429) before any body is read; such requests skip sessions and CSRF.
   app.use(...bearerToken(config.rateLimits));
 

@@ -5,7 +5,7 @@ import type { Sequelize } from 'sequelize';
 import type { Logger } from '../logger.ts';
 
 export interface OutageLog {
-  /** A request failed because the database is unreachable. */
+  /** A request (or the outbox worker) failed because the database is unreachable. */
   noteDown(err: unknown): void;
   close(): void;
 }
@@ -27,7 +27,7 @@ export function createOutageLog(sequelize: Sequelize, log: Logger): OutageLog {
     timer = setTimeout(() => {
       sequelize.query('SELECT 1').then(
         () => {
-          log.info({ downForMs: Date.now() - since!, requestsRefused: failures }, 'database answers again');
+          log.info({ downForMs: Date.now() - since!, failures }, 'database answers again');
           since = null;
           failures = 0;
         },

@@ -81,6 +81,8 @@ export interface OutboxOptions {
   concurrency?: number;
   /** Called once per mail given up (the /metrics counter). */
   onGivenUp?: () => void;
+  /** A pass failed (the database went away, say); logged as a warning unless this takes it. */
+  onPassFailed?: (err: unknown) => void;
 }
 
 /**
@@ -199,7 +201,8 @@ export function startOutboxWorker(mailer: Mailer, opts: OutboxOptions): OutboxWo
   const flush = () => {
     running ??= sendDue()
       .catch((err: unknown) => {
-        log.warn({ err }, 'outbox pass failed');
+        if (opts.onPassFailed) opts.onPassFailed(err);
+        else log.warn({ err }, 'outbox pass failed');
         return 0;
       })
       .finally(() => {

@@ -6,6 +6,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import request from 'supertest';
+import { pino } from 'pino';
+import type { Sequelize } from 'sequelize';
 import { startTestApp, type TestApp } from '../support/test-app.ts';
 import { signIn } from '../support/login.ts';
 import { createBuildRow, createUser } from '../support/factories.ts';
@@ -15,6 +17,8 @@ import { waitFor } from '../support/wait-for.ts';
 import { OutboxMail } from '../../server/models/outbox-mail.model.ts';
 import { Photo } from '../../server/models/photo.model.ts';
 import { MAX_ATTEMPTS } from '../../server/services/outbox.service.ts';
+import { createApp } from '../../server/app.ts';
+import { createOutageLog } from '../../server/ops/db-outage.ts';
 
 let t: TestApp;
 beforeAll(async () => {
@@ -237,6 +241,51 @@ describe('mails the outbox gave up on', () => {
     expect(t.mail.messages.filter((m) => m.subject === subject)).toHaveLength(1);
     expectError(await admin.post(`/api/admin/outbox/${mail.id}/requeue`).set('X-CSRF-Token', admin.csrf), 409, 'mail_not_given_up');
     expectError(await admin.post('/api/admin/outbox/999999999/requeue').set('X-CSRF-Token', admin.csrf), 404, 'not_found');
+  });
+});
+
+/** A JSON logger writing into an array, parsed. */
+function capturedLog() {
+  const lines: string[] = [];
+  const log = pino({ level: 'info' }, { write: (line: string) => void lines.push(line) });
+  return { log, entries: () => lines.map((l) => JSON.parse(l) as { level: number; msg: string; err?: unknown }) };
+}
+
+describe('logging a database outage', () => {
+  test('when the database is unreachable for many requests, then one warning for the outage and no error stack per request', async () => {
+    const { log, entries } = capturedLog();
+    const handle = await createApp({ ...t.config, db: { ...t.config.db, port: 1 } }, { log });
+    try {
+      for (let i = 0; i < 6; i++) {
+        const res = await request(handle.app).get('/api/builds');
+        expectError(res, 503, 'db_unavailable');
+      }
+      const warnings = entries().filter((e) => e.msg.startsWith('database unreachable'));
+      expect(warnings).toHaveLength(1);
+      expect(warnings[0]!.level).toBe(40);
+      expect(entries().filter((e) => e.err !== undefined)).toEqual([]);
+      expect(entries().filter((e) => e.level >= 50)).toEqual([]);
+    } finally {
+      await handle.close();
+      t.rebind();
+    }
+  });
+
+  test('when the database answers again, then one info line says so, and the next outage warns again', async () => {
+    const { log, entries } = capturedLog();
+    let up = false;
+    const fake = { query: () => (up ? Promise.resolve([]) : Promise.reject(new Error('ECONNREFUSED'))) } as unknown as Sequelize;
+    const outage = createOutageLog(fake, log);
+    try {
+      for (let i = 0; i < 5; i++) outage.noteDown(new Error('connect ECONNREFUSED'));
+      up = true;
+      await waitFor(() => entries().some((e) => e.msg === 'database answers again'), { timeoutMs: 3000, what: 'the recovery line' });
+      expect(entries().find((e) => e.msg === 'database answers again')).toMatchObject({ level: 30, failures: 5 });
+      outage.noteDown(new Error('connect ECONNREFUSED'));
+      expect(entries().filter((e) => e.msg.startsWith('database unreachable'))).toHaveLength(2);
+    } finally {
+      outage.close();
+    }
   });
 });
 
