@@ -12,7 +12,7 @@ import { startTestApp, type TestApp } from '../support/test-app.ts';
 import { signIn } from '../support/login.ts';
 import { createBuildRow, createUser } from '../support/factories.ts';
 import { expectError } from '../support/expect-error.ts';
-import { noisyJpeg } from '../support/images.ts';
+import { jpeg, noisyJpeg } from '../support/images.ts';
 import { waitFor } from '../support/wait-for.ts';
 import { OutboxMail } from '../../server/models/outbox-mail.model.ts';
 import { Photo } from '../../server/models/photo.model.ts';
@@ -241,6 +241,32 @@ describe('mails the outbox gave up on', () => {
     expect(t.mail.messages.filter((m) => m.subject === subject)).toHaveLength(1);
     expectError(await admin.post(`/api/admin/outbox/${mail.id}/requeue`).set('X-CSRF-Token', admin.csrf), 409, 'mail_not_given_up');
     expectError(await admin.post('/api/admin/outbox/999999999/requeue').set('X-CSRF-Token', admin.csrf), 404, 'not_found');
+  });
+});
+
+describe('Idempotency-Key on photo uploads', () => {
+  test('when the same upload is sent twice with one key, then the answer is replayed and the photo is stored once; another file under that key is 409', async () => {
+    const owner = await createUser();
+    const build = await createBuildRow(owner.id, { status: 'draft' });
+    const agent = await signIn(t, owner.login);
+    const photo = await jpeg(320, 240);
+    const upload = (bytes: Buffer, key: string) =>
+      agent
+        .post(`/api/builds/${build.id}/photos`)
+        .set('X-CSRF-Token', agent.csrf)
+        .set('Idempotency-Key', key)
+        .field('alt', 'Coarse approach')
+        .attach('photos', bytes, { filename: 'approach.jpg', contentType: 'image/jpeg' });
+    const key = `photo-${Date.now()}`;
+    const first = await upload(photo, key);
+    expect(first.status, first.text).toBe(201);
+    const again = await upload(photo, key);
+    expect(again.status).toBe(201);
+    expect(again.headers['idempotent-replayed']).toBe('true');
+    expect(again.body).toEqual(first.body);
+    expect(await Photo.count({ where: { buildId: build.id } })).toBe(1);
+    expectError(await upload(await jpeg(640, 480), key), 409, 'idempotency_key_reused');
+    expect(await Photo.count({ where: { buildId: build.id } })).toBe(1);
   });
 });
 
