@@ -1,8 +1,7 @@
+import { formatDateTime } from '@shared/format/dates.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Loading } from '@/components/ui/load-states.tsx';
 import { useGivenUpMails, useRequeueMail } from '../api/given-up-mails.ts';
-
-const when = (iso: string) => iso.slice(0, 16).replace('T', ' ');
 
 /** Mails the outbox stopped trying after its last attempt, each with a button that queues it again. */
 export function GivenUpMails() {
@@ -49,7 +48,7 @@ export function GivenUpMails() {
                 <tr key={m.id} className="border-t border-rule align-top">
                   <td className="py-2 pr-3">{m.subject}</td>
                   <td className="py-2 pr-3">{m.recipientLogin ?? <span className="text-ink-soft">no account</span>}</td>
-                  <td className="num py-2 pr-3">{when(m.lastAttemptAt)}</td>
+                  <td className="num py-2 pr-3">{formatDateTime(m.lastAttemptAt)}</td>
                   <td className="max-w-[20rem] break-words py-2 pr-3 text-xs text-ink-soft">{m.lastError ?? '—'}</td>
                   <td className="py-2 text-right">
                     <Button
