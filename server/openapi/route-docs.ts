@@ -156,6 +156,7 @@ const WORKBENCH_SUMMARIES: Record<string, string> = {
   'expected-gain': 'Expected gain of a bender, stack or tube from its geometry and material',
   mixing: 'Drive voltages for a wanted X/Y displacement through a gain matrix',
   'mixing-fit': 'Fit a two-axis gain matrix from a grid of readings',
+  linearise: 'Polynomial per sweep branch and the table of volts that linearises the drive',
   'scan-plan': 'Step size, range and timing of a raster scan',
   resonance: 'First resonance of a cantilevered bender, with a tip mass',
   'drive-current': 'Peak current to drive a capacitive load with a sine',

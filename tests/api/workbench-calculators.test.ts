@@ -539,6 +539,23 @@ const examples: Record<string, unknown> = {
     })),
     displacementUnit: 'um',
   },
+  // A loop with a cubic bend on each branch [calc, invented]: up 0→100 V, down 100→0 V.
+  linearise: {
+    points: [
+      ...[0, 10, 20, 30, 40, 50, 60, 70, 80, 90, 100].map((v) => ({
+        volts: v,
+        displacement: 80 * v + 0.004 * v ** 3 - 0.4 * v ** 2,
+        sweep: 'up',
+      })),
+      ...[100, 90, 80, 70, 60, 50, 40, 30, 20, 10, 0].map((v) => ({
+        volts: v,
+        displacement: 80 * v + 0.3 * v * (100 - v) - 0.4 * v ** 2 + 0.004 * v ** 3,
+        sweep: 'down',
+      })),
+    ],
+    displacementUnit: 'nm',
+    degree: 'auto',
+  },
 };
 
 describe('POST /api/workbench/<slug> answers what the page shows', () => {

@@ -34,6 +34,7 @@ import { createApiTokenInput } from '@shared/schemas/api-token.ts';
 import * as wb from '@shared/schemas/workbench.ts';
 import * as wbx from '@shared/schemas/workbench-extras.ts';
 import { sineFitInput } from '@shared/schemas/sine-fit.ts';
+import { lineariseInput } from '@shared/schemas/linearise.ts';
 import type { TestApp } from './test-app.ts';
 import type { Agent } from './login.ts';
 import { fillPath, type RouteEntry } from './route-table.ts';
@@ -427,6 +428,11 @@ export const fixtures: Record<string, Fixture> = {
     wbx.noiseFloorInput,
     { actuatorGainNmPerV: 102.6, dacBits: 16, dacSpanV: 10, ampGainVPerV: 30 },
     'warnings',
+  ),
+  'POST /api/workbench/linearise': workbench(
+    lineariseInput,
+    { points: [0, 10, 20, 30, 40].map((v) => ({ volts: v, displacement: 80 * v + 0.1 * v * v })), displacementUnit: 'nm', degree: 2 },
+    'table',
   ),
   'POST /api/workbench/sine-fit': workbench(
     sineFitInput,

@@ -13,6 +13,7 @@ import { tubeCalculator } from './tube-calculator.ts';
 import { driveLimitsCalculator } from './drive-limits-calculator.ts';
 import { noiseFloorCalculator } from './noise-floor-calculator.ts';
 import { sineFitCalculator } from './sine-fit-calculator.ts';
+import { lineariseCalculator } from './linearise-calculator.ts';
 
 /** All calculators; add a new one here and it gets its route. */
 export const calculators = [
@@ -32,4 +33,5 @@ export const calculators = [
   driveLimitsCalculator,
   noiseFloorCalculator,
   sineFitCalculator,
+  lineariseCalculator,
 ] as const;
