@@ -11,6 +11,11 @@ export const workbenchTools = [
     title: 'Sine recording',
     line: 'Gain and phase lag from a recorded sine drive and displacement (IEEE 1057 sine fit), with the loop plotted.',
   },
+  {
+    slug: 'linearise',
+    title: 'Linearise the drive',
+    line: 'A curve per sweep branch and the table of volts that puts the actuator where you want it (CSV or C array).',
+  },
   { slug: 'creep', title: 'Creep', line: 'Fit the logarithmic creep after a voltage step and project it to later times.' },
   {
     slug: 'expected-gain',

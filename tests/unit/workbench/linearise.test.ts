@@ -3,6 +3,7 @@ import { describe, expect, test } from 'vitest';
 import { evaluatePolynomial, fitPolynomial, PolynomialFitError } from '../../../shared/workbench/polynomial-fit.ts';
 import { chooseDegree, linearise, LineariseError } from '../../../shared/workbench/linearise.ts';
 import { lineariseInput } from '../../../shared/schemas/linearise.ts';
+import { driveTableC, driveTableCsv } from '../../../shared/export/drive-table.ts';
 
 /** NIST StRD Pontius: data and certified values read from the file itself. */
 function pontius() {
@@ -97,5 +98,20 @@ describe('linearisation', () => {
   test('when a branch turns back within the range, then it is refused as not_monotonic [calc]', () => {
     const hump = Array.from({ length: 11 }, (_, i) => ({ volts: i * 10, displacement: -((i * 10 - 50) ** 2) }));
     expect(() => linearise(lineariseInput.parse({ points: hump, displacementUnit: 'nm', degree: 2 }))).toThrow(LineariseError);
+  });
+});
+
+describe('drive table files', () => {
+  test('when a two-branch table is written, then the CSV has target, up and down columns and the C array one float array each [calc]', () => {
+    const rows = [
+      { targetNm: 0, voltsUp: 0, voltsDown: 0 },
+      { targetNm: 500, voltsUp: 6.25, voltsDown: 5.5 },
+    ];
+    expect(driveTableCsv(rows)).toBe('target_nm,volts_up,volts_down\n0,0,0\n500,6.25,5.5\n');
+    const c = driveTableC(rows);
+    expect(c).toContain('#define SCANWRIGHT_DRIVE_ROWS 2');
+    expect(c).toContain('static const float scanwright_drive_volts_up[2] = {\n  0.0f, 6.25f\n};');
+    expect(c).not.toContain('volts[');
+    expect(c).toContain('scanwright_drive_target_nm[2] = {\n  0.0f, 500.0f\n};');
   });
 });

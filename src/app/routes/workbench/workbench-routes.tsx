@@ -10,6 +10,7 @@ export const workbenchRoutes: RouteObject = {
     { path: 'fit', lazy: async () => ({ Component: (await import('./fit.tsx')).FitPage }) },
     { path: 'peak-to-peak', lazy: async () => ({ Component: (await import('./peak-to-peak.tsx')).PeakToPeakPage }) },
     { path: 'sine-fit', lazy: async () => ({ Component: (await import('./sine-fit.tsx')).SineFitPage }) },
+    { path: 'linearise', lazy: async () => ({ Component: (await import('./linearise.tsx')).LinearisePage }) },
     { path: 'creep', lazy: async () => ({ Component: (await import('./creep.tsx')).CreepPage }) },
     { path: 'expected-gain', lazy: async () => ({ Component: (await import('./expected-gain.tsx')).ExpectedGainPage }) },
     { path: 'mixing', lazy: async () => ({ Component: (await import('./mixing.tsx')).MixingPage }) },

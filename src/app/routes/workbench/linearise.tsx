@@ -1,0 +1,121 @@
+import { useDeferredValue, useEffect, useId, useMemo, useState } from 'react';
+import { useSearchParams } from 'react-router-dom';
+import { displacementUnits, voltageUnits } from '@shared/units.ts';
+import { CsvFileInput } from '@/components/ui/csv-file-input.tsx';
+import { Field, inputClass } from '@/components/ui/form-bits.tsx';
+import { NoResult, ResultNotesBlock } from '@/features/workbench/components/results.tsx';
+import { RowProblems } from '@/features/workbench/components/row-problems.tsx';
+import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
+import { displacementOptions, voltageOptions } from '@/features/workbench/unit-options.ts';
+import { exampleLoop, previewLinearise } from '@/features/workbench/linearise/linearise-preview.ts';
+import { LineariseResults } from '@/features/workbench/linearise/linearise-results.tsx';
+
+const DEGREES = ['auto', '1', '2', '3', '4', '5'] as const;
+const pick = (v: string | null, allowed: readonly string[], fallback: string) => (v !== null && allowed.includes(v) ? v : fallback);
+
+export function LinearisePage() {
+  const textId = useId();
+  const [params, setParams] = useSearchParams();
+  const [text, setText] = useState(exampleLoop);
+  const [voltageUnit, setVoltageUnit] = useState(() => pick(params.get('vu'), voltageUnits, 'V'));
+  const [displacementUnit, setDisplacementUnit] = useState(() => pick(params.get('du'), displacementUnits, 'um'));
+  const [degree, setDegree] = useState(() => pick(params.get('deg'), DEGREES, 'auto'));
+  const [stepNm, setStepNm] = useState(() => params.get('step') ?? '');
+  useEffect(() => {
+    const next = new URLSearchParams();
+    if (voltageUnit !== 'V') next.set('vu', voltageUnit);
+    if (displacementUnit !== 'um') next.set('du', displacementUnit);
+    if (degree !== 'auto') next.set('deg', degree);
+    if (stepNm.trim()) next.set('step', stepNm.trim());
+    if (next.toString() !== params.toString()) setParams(next, { replace: true });
+  }, [voltageUnit, displacementUnit, degree, stepNm, params, setParams]);
+  const deferred = useDeferredValue(text);
+  const r = useMemo(
+    () => previewLinearise(deferred, { voltageUnit, displacementUnit, degree, stepNm }),
+    [deferred, voltageUnit, displacementUnit, degree, stepNm],
+  );
+  return (
+    <ToolPage
+      slug="linearise"
+      linkNote="the pasted run itself is not kept in the link, only the settings"
+      lead="Fit a curve to each sweep of a calibration run and get the table of volts that puts the actuator where you want it, hysteresis branch by branch."
+    >
+      <ToolColumns
+        inputs={
+          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+            <section aria-label="Calibration run" className="space-y-3 rounded-lg border border-rule bg-white p-4">
+              <div>
+                <label htmlFor={textId} className="block text-sm font-medium">
+                  Points (CSV: volts, displacement, sweep up or down)
+                </label>
+                <textarea
+                  id={textId}
+                  rows={9}
+                  spellCheck={false}
+                  aria-describedby={`${textId}-hint`}
+                  className={`num mt-1 text-sm ${inputClass}`}
+                  value={text}
+                  onChange={(e) => setText(e.target.value)}
+                />
+                <p id={`${textId}-hint`} className="mt-1 text-xs text-ink-soft">
+                  Label every point up or down to get one curve per branch, or none for a single curve. The example is invented; replace it
+                  with your run.
+                </p>
+              </div>
+              <CsvFileInput maxBytes={12 * 1024 * 1024} tooLarge="thin the run first." onText={setText} />
+              <RowProblems used={r.checked.points.length} problems={r.checked.problems} note={r.checked.note} what="Line" />
+            </section>
+            <section aria-label="Settings" className="grid gap-3 rounded-lg border border-rule bg-white p-4 sm:grid-cols-2">
+              <Field id="lin-vu" label="Voltage unit">
+                <select id="lin-vu" className={inputClass} value={voltageUnit} onChange={(e) => setVoltageUnit(e.target.value)}>
+                  {voltageOptions.map((o) => (
+                    <option key={o.value} value={o.value}>
+                      {o.label}
+                    </option>
+                  ))}
+                </select>
+              </Field>
+              <Field id="lin-du" label="Displacement unit">
+                <select id="lin-du" className={inputClass} value={displacementUnit} onChange={(e) => setDisplacementUnit(e.target.value)}>
+                  {displacementOptions.map((o) => (
+                    <option key={o.value} value={o.value}>
+                      {o.label}
+                    </option>
+                  ))}
+                </select>
+              </Field>
+              <Field id="lin-degree" label="Polynomial degree" hint="Auto: the smallest degree the data support (F-test at 5 %).">
+                <select id="lin-degree" className={inputClass} value={degree} onChange={(e) => setDegree(e.target.value)}>
+                  {DEGREES.map((d) => (
+                    <option key={d} value={d}>
+                      {d === 'auto' ? 'Auto' : d}
+                    </option>
+                  ))}
+                </select>
+              </Field>
+              <Field id="lin-step" label="Table step (nm)" hint="Empty: the common range in 20 steps.">
+                <input
+                  id="lin-step"
+                  inputMode="decimal"
+                  className={inputClass}
+                  value={stepNm}
+                  onChange={(e) => setStepNm(e.target.value)}
+                />
+              </Field>
+            </section>
+          </form>
+        }
+        results={
+          r.ok ? (
+            <>
+              <ResultNotesBlock r={r.result} />
+              <LineariseResults r={r.result} />
+            </>
+          ) : (
+            <NoResult message={r.message} />
+          )
+        }
+      />
+    </ToolPage>
+  );
+}
