@@ -108,7 +108,10 @@ export function invertBranch(fit: PolynomialFit, lo: number, hi: number, target:
     if (below === rising) a = mid;
     else b = mid;
   }
-  return (a + b) / 2;
+  // A root within 1e-9 of the range from an end is that end (bisection leaves ~1e-11 V crumbs otherwise).
+  const v = (a + b) / 2;
+  const tol = 1e-9 * (hi - lo);
+  return Math.abs(v - lo) < tol ? lo : Math.abs(hi - v) < tol ? hi : v;
 }
 
 /** Polynomial per branch, the inverse table and the nonlinearity before and after. */

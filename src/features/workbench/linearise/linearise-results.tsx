@@ -49,7 +49,7 @@ export function LineariseResults({ r }: { r: LineariseResult }) {
                         ± {f.uncertainty} <PlusMinusLabel kind="std" className="text-xs" />
                       </>
                     )}{' '}
-                    <span className="font-sans text-ink-soft">nm/V{k === 0 ? '⁰' : k === 1 ? '' : ['²', '³', '⁴', '⁵'][k - 2]}</span>
+                    <span className="font-sans text-ink-soft">{k === 0 ? 'nm' : `nm/V${k === 1 ? '' : ['²', '³', '⁴', '⁵'][k - 2]}`}</span>
                   </li>
                 );
               })}
