@@ -12,6 +12,8 @@ export const EXIT = {
   GAVE_UP: 71,
   /** Another `npm start` is running from this data directory (its pid is printed). */
   ALREADY_RUNNING: 72,
+  /** `npm run serve`: a required setting is missing (GitHub, mail relay, database password). */
+  CONFIG_MISSING: 78,
   /** A second Ctrl-C / SIGTERM while stopping: everything was killed at once. */
   FORCED: 130,
 };
