@@ -30,12 +30,17 @@ export function ensureDebianPackages({ chromium = false } = {}) {
 const lockHash = () => createHash('sha256').update(readFileSync('package-lock.json')).digest('hex');
 const STAMP = 'node_modules/.scanwright-lock-hash';
 
-/** Run `npm ci` when node_modules is missing or older than package-lock.json. */
+/**
+ * Run `npm ci` when node_modules is missing or older than package-lock.json. Development packages are
+ * included even under NODE_ENV=production (npm would leave them out): the server and client builds need them.
+ * SCANWRIGHT_SKIP_INSTALL=1 skips this (tests never reinstall the shared node_modules).
+ */
 export function ensureNodeModules() {
+  if (process.env.SCANWRIGHT_SKIP_INSTALL === '1') return;
   const hash = lockHash();
   if (existsSync(STAMP) && readFileSync(STAMP, 'utf8') === hash) return;
   console.log('Installing npm packages (npm ci) …');
-  const r = run('npm', ['ci', '--no-audit', '--no-fund']);
+  const r = run('npm', ['ci', '--include=dev', '--no-audit', '--no-fund']);
   if (r.status !== 0) process.exit(r.status ?? 1);
   writeFileSync(STAMP, hash);
 }

@@ -18,6 +18,7 @@ async function ports() {
     ...process.env,
     SCANWRIGHT_DATA_DIR: dataDir,
     SCANWRIGHT_SKIP_CLIENT_BUILD: '1',
+    SCANWRIGHT_SKIP_INSTALL: '1',
     BACKUP_INTERVAL_H: '0',
     NODE_ENV: 'production',
     LOG_LEVEL: 'warn',
