@@ -14,6 +14,7 @@ import { driveLimitsCalculator } from './drive-limits-calculator.ts';
 import { noiseFloorCalculator } from './noise-floor-calculator.ts';
 import { sineFitCalculator } from './sine-fit-calculator.ts';
 import { lineariseCalculator } from './linearise-calculator.ts';
+import { latticeCalculator } from './lattice-calculator.ts';
 
 /** All calculators; add a new one here and it gets its route. */
 export const calculators = [
@@ -34,4 +35,5 @@ export const calculators = [
   noiseFloorCalculator,
   sineFitCalculator,
   lineariseCalculator,
+  latticeCalculator,
 ] as const;
