@@ -167,7 +167,10 @@ let switched = false;
 try {
   if (exists) {
     fenced = fence(socket, database, `restore of ${file}`);
-    if (fenced) say(`Writes are paused (maintenance); waited ${await settleFence(socket, database)} ms for writes in flight to finish.`);
+    if (fenced) {
+      say('Writes are paused (maintenance) …');
+      say(`Waited ${await settleFence(socket, database)} ms for the app to see it and for writes in flight to finish.`);
+    }
   }
   if (exists && current.length) {
     const { file: saved } = await createBackup(target, 'pre-restore-');
@@ -199,6 +202,7 @@ try {
   );
 }
 unfence(socket, database);
+say('Writes are open again.');
 sqlRows(socket, `DROP DATABASE IF EXISTS ${q(restoreDb)}`);
 if (!keepOld) sqlRows(socket, `DROP DATABASE IF EXISTS ${q(oldDb)}`);
 say(

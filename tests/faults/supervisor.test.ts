@@ -31,7 +31,8 @@ async function ports() {
     UPLOADS_DIR: join(dataDir, 'uploads'),
     RATE_LIMITS: 'false',
   };
-  for (const k of ['GITHUB_CLIENT_ID', 'GITHUB_CLIENT_SECRET', 'SMTP_URL', 'DB_NAME', 'DB_USER', 'DB_PASSWORD', 'SESSION_SECRET']) delete env[k];
+  for (const k of ['GITHUB_CLIENT_ID', 'GITHUB_CLIENT_SECRET', 'SMTP_URL', 'DB_NAME', 'DB_USER', 'DB_PASSWORD', 'SESSION_SECRET'])
+    delete env[k];
 }
 
 function start() {
