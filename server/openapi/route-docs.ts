@@ -157,6 +157,7 @@ const WORKBENCH_SUMMARIES: Record<string, string> = {
   mixing: 'Drive voltages for a wanted X/Y displacement through a gain matrix',
   'mixing-fit': 'Fit a two-axis gain matrix from a grid of readings',
   linearise: 'Polynomial per sweep branch and the table of volts that linearises the drive',
+  lattice: 'Lateral scale (nm per pixel, skew, rotation, gains) from an image of a lattice of known spacing',
   'scan-plan': 'Step size, range and timing of a raster scan',
   resonance: 'First resonance of a cantilevered bender, with a tip mass',
   'drive-current': 'Peak current to drive a capacitive load with a sine',

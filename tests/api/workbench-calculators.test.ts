@@ -556,6 +556,19 @@ const examples: Record<string, unknown> = {
     displacementUnit: 'nm',
     degree: 'auto',
   },
+  // A square lattice of 8 px period, 64 × 64, turned 10° [calc, invented]; 0.5 nm constant, 20 V spans.
+  lattice: {
+    heights: Array.from({ length: 64 }, (_, r) =>
+      Array.from(
+        { length: 64 },
+        (_, c) =>
+          Math.cos((2 * Math.PI * (c * Math.cos(0.1745) + r * Math.sin(0.1745))) / 8) +
+          Math.cos((2 * Math.PI * (-c * Math.sin(0.1745) + r * Math.cos(0.1745))) / 8),
+      ),
+    ),
+    lattice: { kind: 'square', constantNm: 0.5 },
+    scanSpanV: { x: 20, y: 20 },
+  },
 };
 
 describe('POST /api/workbench/<slug> answers what the page shows', () => {

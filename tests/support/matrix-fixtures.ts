@@ -35,6 +35,7 @@ import * as wb from '@shared/schemas/workbench.ts';
 import * as wbx from '@shared/schemas/workbench-extras.ts';
 import { sineFitInput } from '@shared/schemas/sine-fit.ts';
 import { lineariseInput } from '@shared/schemas/linearise.ts';
+import { latticeInput } from '@shared/schemas/lattice.ts';
 import type { TestApp } from './test-app.ts';
 import type { Agent } from './login.ts';
 import { fillPath, type RouteEntry } from './route-table.ts';
@@ -433,6 +434,16 @@ export const fixtures: Record<string, Fixture> = {
     lineariseInput,
     { points: [0, 10, 20, 30, 40].map((v) => ({ volts: v, displacement: 80 * v + 0.1 * v * v })), displacementUnit: 'nm', degree: 2 },
     'table',
+  ),
+  'POST /api/workbench/lattice': workbench(
+    latticeInput,
+    {
+      heights: Array.from({ length: 32 }, (_, r) =>
+        Array.from({ length: 32 }, (_, c) => Math.cos((2 * Math.PI * c) / 4) + Math.cos((2 * Math.PI * r) / 4)),
+      ),
+      lattice: { kind: 'square', constantNm: 0.4 },
+    },
+    'nmPerPixel',
   ),
   'POST /api/workbench/sine-fit': workbench(
     sineFitInput,
