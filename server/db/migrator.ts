@@ -18,6 +18,7 @@ import * as createApiTokens from './migrations/20261203100000-create-api-tokens.
 import * as createIdempotencyKeys from './migrations/20261203100100-create-idempotency-keys.ts';
 import * as addActuatorDriveMatrix from './migrations/20261203140000-add-actuator-drive-matrix.ts';
 import * as addOutboxClaims from './migrations/20261203150000-add-outbox-claims.ts';
+import * as addActuatorLinearisation from './migrations/20261203160000-add-actuator-linearisation.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -41,6 +42,7 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261203130000-add-data-licence-acceptance', addDataLicenceAcceptance],
   ['20261203140000-add-actuator-drive-matrix', addActuatorDriveMatrix],
   ['20261203150000-add-outbox-claims', addOutboxClaims],
+  ['20261203160000-add-actuator-linearisation', addActuatorLinearisation],
 ];
 
 /** Umzug over our migration list; the only source of the schema, in tests too. */

@@ -21,6 +21,7 @@ export class Actuator extends Model<InferAttributes<Actuator>, InferCreationAttr
   declare maxVolts: number | null;
   declare notes: string | null;
   declare driveMatrixJson: CreationOptional<string | null>;
+  declare linearisationJson: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare part?: NonAttribute<Part>;
@@ -38,6 +39,7 @@ export class Actuator extends Model<InferAttributes<Actuator>, InferCreationAttr
         maxVolts: DataTypes.DOUBLE,
         notes: DataTypes.TEXT,
         driveMatrixJson: DataTypes.TEXT,
+        linearisationJson: DataTypes.TEXT('medium'),
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -5,6 +5,7 @@
 import type { z } from 'zod';
 import { actuatorIdParams, createActuatorInput, updateActuatorInput } from '@shared/schemas/actuator.ts';
 import { driveMatrixInput } from '@shared/schemas/drive-matrix.ts';
+import { driveTableQuery, saveLinearisationInput } from '@shared/schemas/linearise.ts';
 import { apiTokenIdParams, createApiTokenInput } from '@shared/schemas/api-token.ts';
 import {
   listingPhotoParams,
@@ -567,6 +568,49 @@ export const ROUTE_DOCS: readonly RouteDoc[] = [
     auth: 'session',
     params: actuatorIdParams,
     response: noContent('Removed.'),
+  },
+  {
+    method: 'PUT',
+    path: '/api/actuators/:actuatorId/linearisation',
+    summary: 'Save a drive linearisation on an actuator',
+    description:
+      'The run to linearise (points with their sweeps, units, degree or "auto", table step); the server fits each branch and keeps ' +
+      'the result and its drive table; 201 when new, 200 when replaced; 400 `not_monotonic` when a branch cannot be inverted.',
+    tag: 'Actuators and runs',
+    auth: 'session',
+    params: actuatorIdParams,
+    body: saveLinearisationInput,
+    response: json(200, 'The actuator with its linearisation summary (201 when it had none).'),
+    example: {
+      points: [
+        { volts: 0, displacement: 0, sweep: 'up' },
+        { volts: 40, displacement: 2.6, sweep: 'up' },
+        { volts: 80, displacement: 5.9, sweep: 'up' },
+        { volts: 120, displacement: 9.9, sweep: 'up' },
+      ],
+      displacementUnit: 'um',
+      degree: 2,
+    },
+  },
+  {
+    method: 'DELETE',
+    path: '/api/actuators/:actuatorId/linearisation',
+    summary: "Remove an actuator's linearisation",
+    tag: 'Actuators and runs',
+    auth: 'session',
+    params: actuatorIdParams,
+    response: noContent('Removed.'),
+  },
+  {
+    method: 'GET',
+    path: '/api/actuators/:actuatorId/linearisation/table',
+    summary: "Download an actuator's drive table",
+    description: 'CSV (`format=csv`, target_nm then the volts per branch) or a C array for a microcontroller (`format=c`).',
+    tag: 'Actuators and runs',
+    auth: 'visitor',
+    params: actuatorIdParams,
+    query: driveTableQuery,
+    response: { status: 200, description: 'The table as a file (text/csv, or text/x-c for format=c).', contentType: 'text/csv' },
   },
   {
     method: 'POST',

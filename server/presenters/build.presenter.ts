@@ -9,6 +9,7 @@ import type { CalibrationRun } from '../models/calibration-run.model.ts';
 import { presentPartSummary } from './part.presenter.ts';
 import { presentRun } from './run.presenter.ts';
 import { presentDriveMatrix } from './drive-matrix.presenter.ts';
+import { presentLinearisation } from './linearisation.presenter.ts';
 
 /** What a build card shows beside the build's own columns, loaded in batches by the read service. */
 export interface BuildCardExtras {
@@ -86,6 +87,7 @@ export function presentActuator(a: Actuator, part: Part, runs: CalibrationRun[])
       ? { gainNmPerV: expected.gainNmPerV, lowNmPerV: expected.lowNmPerV, highNmPerV: expected.highNmPerV, basis: expected.basis }
       : null,
     driveMatrix: presentDriveMatrix(a.driveMatrixJson),
+    linearisation: presentLinearisation(a.linearisationJson),
     runs: runs.filter((r) => r.actuatorId === a.id).map((r) => presentRun(r, buildPagePlotPoints(runs.length))),
   };
 }

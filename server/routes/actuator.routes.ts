@@ -6,6 +6,8 @@ import { createActuator, deleteActuator, updateActuator } from '../services/actu
 import { route } from './route.ts';
 import { driveMatrixInput } from '@shared/schemas/drive-matrix.ts';
 import { clearDriveMatrix, saveDriveMatrix } from '../services/drive-matrix.service.ts';
+import { driveTableQuery, saveLinearisationInput } from '@shared/schemas/linearise.ts';
+import { clearLinearisation, driveTableFile, saveLinearisation } from '../services/linearisation.service.ts';
 
 /** The actuators of a build (their calibration runs are in run.routes.ts). */
 export function actuatorRoutes(): Router {
@@ -46,6 +48,29 @@ export function actuatorRoutes(): Router {
     route({ params: actuatorIdParams }, async ({ actor, params, res }) => {
       await clearDriveMatrix(actor, params.actuatorId);
       res.status(204).end();
+    }),
+  );
+  r.put(
+    '/api/actuators/:actuatorId/linearisation',
+    requireUser,
+    route({ params: actuatorIdParams, body: saveLinearisationInput }, async ({ actor, params, body, res }) => {
+      const { actuator, created } = await saveLinearisation(actor, params.actuatorId, body);
+      res.status(created ? 201 : 200).json(actuator);
+    }),
+  );
+  r.delete(
+    '/api/actuators/:actuatorId/linearisation',
+    requireUser,
+    route({ params: actuatorIdParams }, async ({ actor, params, res }) => {
+      await clearLinearisation(actor, params.actuatorId);
+      res.status(204).end();
+    }),
+  );
+  r.get(
+    '/api/actuators/:actuatorId/linearisation/table',
+    route({ params: actuatorIdParams, query: driveTableQuery }, async ({ actor, params, query, res }) => {
+      const file = await driveTableFile(actor, params.actuatorId, query.format);
+      res.set('Content-Type', file.contentType).attachment(file.filename).send(file.body);
     }),
   );
   return r;

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import type { PartSummaryDto } from './part.ts';
 import type { RunDto } from './run.ts';
 import type { DriveMatrixDto } from './drive-matrix.ts';
+import type { LinearisationDto } from './linearise.ts';
 
 export const ACTUATOR_AXES = ['X', 'Y', 'Z', 'XY'] as const;
 export type ActuatorAxis = (typeof ACTUATOR_AXES)[number];
@@ -49,5 +50,6 @@ export interface ActuatorDto {
   expectedGain: { gainNmPerV: number; lowNmPerV: number; highNmPerV: number; basis: string } | null;
   /** A two-axis mixer result saved onto an XY pair (PUT /api/actuators/:id/drive-matrix); null when none. */
   driveMatrix: DriveMatrixDto | null;
+  linearisation: LinearisationDto | null;
   runs: RunDto[];
 }

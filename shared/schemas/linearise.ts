@@ -18,3 +18,20 @@ export const lineariseInput = z.strictObject({
   stepNm: z.number().positive().optional(),
 });
 export type LineariseInput = z.infer<typeof lineariseInput>;
+
+/** Body of PUT /api/actuators/:actuatorId/linearisation: the run to linearise (the server fits it) and when it was measured. */
+export const saveLinearisationInput = lineariseInput.extend({ measuredOn: z.iso.date().optional() });
+export type SaveLinearisationInput = z.infer<typeof saveLinearisationInput>;
+
+export const driveTableQuery = z.strictObject({ format: z.enum(['csv', 'c']).default('csv') });
+
+/** A saved linearisation as an actuator shows it: per branch its degree and residual, the nonlinearity before and after, the table's size. */
+export interface LinearisationDto {
+  branches: Partial<Record<'up' | 'down' | 'all', { degree: number; n: number; residualStdNm: number; r2: number | null }>>;
+  nonlinearityPctBefore: number | null;
+  residualNonlinearityPctAfter: number;
+  spanNm: number;
+  tableRows: number;
+  measuredOn: string | null;
+  savedAt: string;
+}

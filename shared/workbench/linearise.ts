@@ -57,6 +57,13 @@ export interface LineariseResult {
   unlabelledLeftOut: number;
 }
 
+/** What an actuator keeps of a linearisation: the server's result (never numbers sent by the client) and dates. */
+export interface StoredLinearisation {
+  result: LineariseResult;
+  measuredOn: string | null;
+  savedAt: string;
+}
+
 const MONOTONIC_SAMPLES = 512;
 
 /** The degree an "auto" fit settles on: the smallest whose next term is not significant at 5 % (partial F-test). */

@@ -76,6 +76,8 @@ const expected: Record<string, Row> = {
   'DELETE /api/actuators/:actuatorId': [401, 204, 404, 403, 403, 403],
   'PUT /api/actuators/:actuatorId/drive-matrix': [401, 201, 404, 403, 403, 403],
   'DELETE /api/actuators/:actuatorId/drive-matrix': [401, 204, 404, 403, 403, 403],
+  'PUT /api/actuators/:actuatorId/linearisation': [401, 201, 404, 403, 403, 403],
+  'DELETE /api/actuators/:actuatorId/linearisation': [401, 204, 404, 403, 403, 403],
   'POST /api/actuators/:actuatorId/runs': [401, 201, 404, 403, 403, 403],
   'PATCH /api/runs/:runId': [401, 200, 404, 403, 403, 403],
   'DELETE /api/runs/:runId': [401, 204, 404, 403, 403, 403],

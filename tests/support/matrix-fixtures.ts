@@ -34,7 +34,7 @@ import { createApiTokenInput } from '@shared/schemas/api-token.ts';
 import * as wb from '@shared/schemas/workbench.ts';
 import * as wbx from '@shared/schemas/workbench-extras.ts';
 import { sineFitInput } from '@shared/schemas/sine-fit.ts';
-import { lineariseInput } from '@shared/schemas/linearise.ts';
+import { lineariseInput, saveLinearisationInput } from '@shared/schemas/linearise.ts';
 import { latticeInput } from '@shared/schemas/lattice.ts';
 import type { TestApp } from './test-app.ts';
 import type { Agent } from './login.ts';
@@ -752,6 +752,70 @@ export const fixtures: Record<string, Fixture> = {
               [70, 70],
             ],
           });
+        },
+      };
+    },
+  },
+  'PUT /api/actuators/:actuatorId/linearisation': {
+    schema: saveLinearisationInput,
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const part = await createPart();
+      const actuator = await Actuator.create({
+        buildId: build.id,
+        partId: part.id,
+        label: null,
+        axis: 'Z',
+        drive: 'single',
+        amplifier: null,
+        maxVolts: null,
+        notes: null,
+      });
+      return {
+        params: { actuatorId: actuator.id },
+        body: {
+          points: [0, 10, 20, 30, 40].map((v) => ({ volts: v, displacement: 80 * v + 0.1 * v * v })),
+          displacementUnit: 'nm',
+          degree: 2,
+        },
+        state: buildState(build.id),
+        async changed() {
+          expect(JSON.parse((await Actuator.findByPk(actuator.id))?.linearisationJson ?? 'null')).toMatchObject({
+            result: { branches: { all: { degree: 2 } } },
+          });
+        },
+      };
+    },
+  },
+  'DELETE /api/actuators/:actuatorId/linearisation': {
+    allowed: 'owner',
+    async make(ctx) {
+      const build = await draftBuild(ctx);
+      const part = await createPart();
+      const actuator = await Actuator.create({
+        buildId: build.id,
+        partId: part.id,
+        label: null,
+        axis: 'Z',
+        drive: 'single',
+        amplifier: null,
+        maxVolts: null,
+        notes: null,
+      });
+      const { linearise } = await import('../../shared/workbench/linearise.ts');
+      const result = linearise({
+        points: [0, 10, 20, 30].map((v) => ({ volts: v, displacement: 80 * v })),
+        voltageUnit: 'V',
+        displacementUnit: 'nm',
+        degree: 1,
+      });
+      await actuator.update({ linearisationJson: JSON.stringify({ result, measuredOn: null, savedAt: '2026-12-01T00:00:00.000Z' }) });
+      return {
+        params: { actuatorId: actuator.id },
+        state: buildState(build.id),
+        async changed() {
+          expect((await Actuator.findByPk(actuator.id))?.linearisationJson).toBeNull();
         },
       };
     },
