@@ -10,6 +10,7 @@ import {
 } from '../shared/workbench/calibration-fit.ts';
 import { fitSineRecord } from '../shared/workbench/sine-fit.ts';
 import type { SineFitInput } from '../shared/schemas/sine-fit.ts';
+import { analyseLattice } from '../shared/workbench/lattice.ts';
 
 const POINTS = 1_000_000;
 const SINE_SAMPLES = 200_000;
@@ -134,4 +135,33 @@ const sineMedian = time('fitSineRecord (frequency unknown)', () => fitSineRecord
 time('fitSineRecord (frequency given)', () => fitSineRecord({ ...sine, frequencyHz: 10.3 }));
 console.log(
   `target: median ≤ ${SINE_TARGET_MEDIAN_MS} ms for fitSineRecord of ${SINE_SAMPLES.toLocaleString('en')} samples → ${sineMedian <= SINE_TARGET_MEDIAN_MS ? 'met' : 'NOT met'}`,
+);
+
+// Lattice calibration of a 1024 × 1024 image (issue 18's target ≤ 1 s): a hexagonal 0.246 nm lattice at
+// 0.012 × 0.013 nm/px, 2° skew, 12° rotation, noise of half the waves' amplitude.
+const LATTICE_SIDE = 1024;
+const LATTICE_TARGET_MEDIAN_MS = 1000;
+function buildLatticeImage(): number[][] {
+  const rand = mulberry32(18);
+  const gauss = (): number => Math.sqrt(-2 * Math.log(1 - rand())) * Math.cos(2 * Math.PI * rand());
+  const len = 2 / (Math.sqrt(3) * 0.246);
+  const waves = [42, 102, 162].map((d) => [len * Math.cos((d * Math.PI) / 180), len * Math.sin((d * Math.PI) / 180)] as const);
+  const skew = (2 * Math.PI) / 180;
+  return Array.from({ length: LATTICE_SIDE }, (_, r) =>
+    Array.from({ length: LATTICE_SIDE }, (_, c) => {
+      const x = 0.012 * c - 0.013 * Math.sin(skew) * r;
+      const y = 0.013 * Math.cos(skew) * r;
+      return waves.reduce((z, [bx, by]) => z + Math.cos(2 * Math.PI * (bx * x + by * y)), 0.5 * gauss());
+    }),
+  );
+}
+const latticeImage = buildLatticeImage();
+const latticeSample = analyseLattice(latticeImage, { kind: 'hexagonal', constantNm: 0.246 });
+console.log(
+  `lattice of ${LATTICE_SIDE} × ${LATTICE_SIDE}: ${latticeSample.nmPerPixel?.x.toFixed(5)} × ${latticeSample.nmPerPixel?.y.toFixed(5)} nm/px, ` +
+    `skew ${latticeSample.skewDeg?.toFixed(2)}°, rotation ${latticeSample.rotationDeg.toFixed(2)}°`,
+);
+const latticeMedian = time('analyseLattice (1024 × 1024)', () => analyseLattice(latticeImage, { kind: 'hexagonal', constantNm: 0.246 }));
+console.log(
+  `target: median ≤ ${LATTICE_TARGET_MEDIAN_MS} ms for analyseLattice of ${LATTICE_SIDE} × ${LATTICE_SIDE} → ${latticeMedian <= LATTICE_TARGET_MEDIAN_MS ? 'met' : 'NOT met'}`,
 );

@@ -160,22 +160,16 @@ function hann(n: number): Float64Array {
 function halfSpectrum(data: Float64Array, ny: number, P: number): Float64Array {
   const H = P / 2 + 1;
   const fft = new FFT(P);
-  const rowsOut: number[][] = [];
-  const input = new Array<number>(P);
-  for (let r = 0; r < ny; r++) {
-    for (let c = 0; c < P; c++) input[c] = data[r * P + c]!;
-    const out = fft.createComplexArray() as number[];
-    fft.realTransform(out, input);
-    rowsOut.push(out);
-  }
-  const col = fft.createComplexArray() as number[];
-  const colOut = fft.createComplexArray() as number[];
+  // Typed arrays throughout: fft.js only indexes its arguments, and typed storage keeps the GC quiet.
+  const rowsOut = new Float64Array(ny * 2 * P);
+  for (let r = 0; r < ny; r++) fft.realTransform(rowsOut.subarray(r * 2 * P, (r + 1) * 2 * P), data.subarray(r * P, (r + 1) * P));
+  const col = new Float64Array(2 * P);
+  const colOut = new Float64Array(2 * P);
   const mag = new Float64Array(H * P);
   for (let u = 0; u < H; u++) {
-    col.fill(0);
     for (let r = 0; r < ny; r++) {
-      col[2 * r] = rowsOut[r]![2 * u]!;
-      col[2 * r + 1] = rowsOut[r]![2 * u + 1]!;
+      col[2 * r] = rowsOut[r * 2 * P + 2 * u]!;
+      col[2 * r + 1] = rowsOut[r * 2 * P + 2 * u + 1]!;
     }
     fft.transform(colOut, col);
     for (let v = 0; v < P; v++) {
@@ -219,15 +213,30 @@ export function analyseLattice(
       const m = mag[(v + P / 2) * H + u]!;
       if (m <= 0 || inDcDisc(u, v)) continue;
       let isMax = true;
-      for (let dv = -1; dv <= 1 && isMax; dv++)
-        for (let du = -1; du <= 1; du++) {
-          if (du === 0 && dv === 0) continue;
-          const n = at(u + du, v + dv);
-          if (n > m || (n === m && (dv < 0 || (dv === 0 && du < 0)))) {
-            isMax = false;
-            break;
+      if (u > 0 && u < P / 2) {
+        // Interior: neighbours straight from the array; ties go to the first in scan order.
+        const i = (v + P / 2) * H + u;
+        const up = i - H;
+        const down = i + H;
+        isMax =
+          mag[up - 1]! < m &&
+          mag[up]! < m &&
+          mag[up + 1]! < m &&
+          mag[i - 1]! < m &&
+          mag[i + 1]! <= m &&
+          mag[down - 1]! <= m &&
+          mag[down]! <= m &&
+          mag[down + 1]! <= m;
+      } else
+        for (let dv = -1; dv <= 1 && isMax; dv++)
+          for (let du = -1; du <= 1; du++) {
+            if (du === 0 && dv === 0) continue;
+            const n = at(u + du, v + dv);
+            if (n > m || (n === m && (dv < 0 || (dv === 0 && du < 0)))) {
+              isMax = false;
+              break;
+            }
           }
-        }
       if (isMax) maxima.push({ u, v, m });
     }
   maxima.sort((a, b) => b.m - a.m);
