@@ -9,12 +9,15 @@ import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page
 import { displacementOptions, voltageOptions } from '@/features/workbench/unit-options.ts';
 import { exampleLoop, previewLinearise } from '@/features/workbench/linearise/linearise-preview.ts';
 import { LineariseResults } from '@/features/workbench/linearise/linearise-results.tsx';
+import { SaveLinearisation } from '@/features/builds/components/record/save-linearisation.tsx';
+import { useSession } from '@/features/session/api/get-session.ts';
 
 const DEGREES = ['auto', '1', '2', '3', '4', '5'] as const;
 const pick = (v: string | null, allowed: readonly string[], fallback: string) => (v !== null && allowed.includes(v) ? v : fallback);
 
 export function LinearisePage() {
   const textId = useId();
+  const session = useSession();
   const [params, setParams] = useSearchParams();
   const [text, setText] = useState(exampleLoop);
   const [voltageUnit, setVoltageUnit] = useState(() => pick(params.get('vu'), voltageUnits, 'V'));
@@ -110,6 +113,7 @@ export function LinearisePage() {
             <>
               <ResultNotesBlock r={r.result} />
               <LineariseResults r={r.result} />
+              <SaveLinearisation input={r.input} signedIn={Boolean(session.data?.user)} />
             </>
           ) : (
             <NoResult message={r.message} />

@@ -13,6 +13,7 @@ import { RunForm } from './run-form.tsx';
 import { errorMessage } from '@/components/ui/form-bits.tsx';
 import { StoredRun } from './stored-run.tsx';
 import { DriveMatrixPanel } from '../read/drive-matrix-panel.tsx';
+import { LinearisationPanel } from '../read/linearisation-panel.tsx';
 import { WorkbenchLinks } from '../read/workbench-links.tsx';
 import { useClearDriveMatrix } from '../../api/drive-matrix.ts';
 
@@ -113,6 +114,7 @@ export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
             )}
           </>
         )}
+        {a.linearisation && <LinearisationPanel actuatorId={a.id} lin={a.linearisation} />}
         {a.axis === 'XY' && !a.driveMatrix && (
           <p className="text-xs text-ink-soft">
             An XY pair can keep its drive matrix: fit it on the two-axis mixer and save it onto this actuator.

@@ -7,6 +7,7 @@ import { RunDetails } from './run-details.tsx';
 import { RunPlot } from './run-plot.tsx';
 import { RunTable } from './run-table.tsx';
 import { DriveMatrixPanel } from './drive-matrix-panel.tsx';
+import { LinearisationPanel } from './linearisation-panel.tsx';
 import { WorkbenchLinks } from './workbench-links.tsx';
 
 /** One actuator: what it is and how it is driven, its calibration runs, and the plot of the chosen run. */
@@ -25,6 +26,7 @@ export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
       {isHighVoltage(actuator) && <HighVoltageMarker actuator={actuator} />}
       {actuator.notes && <p className="whitespace-pre-line text-sm">{actuator.notes}</p>}
       {actuator.driveMatrix && <DriveMatrixPanel matrix={actuator.driveMatrix} />}
+      {actuator.linearisation && <LinearisationPanel actuatorId={actuator.id} lin={actuator.linearisation} />}
       <WorkbenchLinks actuator={actuator} />
       <div className="space-y-3">
         <h4 className="text-sm font-semibold">Calibration runs</h4>
