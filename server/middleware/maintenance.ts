@@ -22,7 +22,7 @@ export function maintenance(sequelize: Sequelize): RequestHandler {
       read().then((rows) => {
         on = Number(rows[0]?.n) > 0;
       }),
-      new Promise((resolve) => setTimeout(resolve, 1000).unref()),
+      new Promise<void>((resolve) => setTimeout(resolve, 1000).unref()),
     ])
       // The database being down is the routes' 503 to give; keep what we knew.
       .catch(() => undefined)

@@ -18,7 +18,6 @@ import { startTestApp, type TestApp } from '../support/test-app.ts';
 import { signIn } from '../support/login.ts';
 import { createUser } from '../support/factories.ts';
 import { startPrivateMariaDb, type PrivateMariaDb } from '../support/private-mariadb.ts';
-import { waitFor } from '../support/wait-for.ts';
 import { OutboxMail } from '../../server/models/outbox-mail.model.ts';
 
 interface Outcome {
