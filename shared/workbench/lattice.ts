@@ -97,7 +97,7 @@ export interface LatticeOptions {
 }
 
 /** Checks the matrix: rectangular, within the size limits, finite. */
-function checkImage(heights: readonly (readonly number[])[]): { nx: number; ny: number } {
+function checkImage(heights: readonly ArrayLike<number>[]): { nx: number; ny: number } {
   const ny = heights.length;
   const nx = heights[0]?.length ?? 0;
   for (let r = 0; r < ny; r++) {
@@ -121,7 +121,7 @@ function checkImage(heights: readonly (readonly number[])[]): { nx: number; ny: 
 }
 
 /** Plane removed (step 1) and Hann window applied (step 2), into a P × P zero-padded buffer (row-major). */
-function levelAndWindow(heights: readonly (readonly number[])[], nx: number, ny: number, P: number): Float64Array {
+function levelAndWindow(heights: readonly ArrayLike<number>[], nx: number, ny: number, P: number): Float64Array {
   let mean = 0;
   for (let r = 0; r < ny; r++) for (let c = 0; c < nx; c++) mean += heights[r]![c]!;
   mean /= nx * ny;
@@ -182,7 +182,7 @@ function halfSpectrum(data: Float64Array, ny: number, P: number): Float64Array {
 
 /** Analyses a height image of a lattice of known kind and constant. */
 export function analyseLattice(
-  heights: readonly (readonly number[])[],
+  heights: readonly ArrayLike<number>[],
   lattice: { kind: LatticeKind; constantNm: number },
   options: LatticeOptions = {},
 ): LatticeAnalysis & { spectrum?: Float32Array } {

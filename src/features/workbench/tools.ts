@@ -16,6 +16,11 @@ export const workbenchTools = [
     title: 'Linearise the drive',
     line: 'A curve per sweep branch and the table of volts that puts the actuator where you want it (CSV or C array).',
   },
+  {
+    slug: 'lattice',
+    title: 'Scale from a lattice image',
+    line: 'Pixel size in x and y, axis skew, rotation and lateral gains read off an image of graphite or a grating.',
+  },
   { slug: 'creep', title: 'Creep', line: 'Fit the logarithmic creep after a voltage step and project it to later times.' },
   {
     slug: 'expected-gain',

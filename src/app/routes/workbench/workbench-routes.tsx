@@ -11,6 +11,7 @@ export const workbenchRoutes: RouteObject = {
     { path: 'peak-to-peak', lazy: async () => ({ Component: (await import('./peak-to-peak.tsx')).PeakToPeakPage }) },
     { path: 'sine-fit', lazy: async () => ({ Component: (await import('./sine-fit.tsx')).SineFitPage }) },
     { path: 'linearise', lazy: async () => ({ Component: (await import('./linearise.tsx')).LinearisePage }) },
+    { path: 'lattice', lazy: async () => ({ Component: (await import('./lattice.tsx')).LatticePage }) },
     { path: 'creep', lazy: async () => ({ Component: (await import('./creep.tsx')).CreepPage }) },
     { path: 'expected-gain', lazy: async () => ({ Component: (await import('./expected-gain.tsx')).ExpectedGainPage }) },
     { path: 'mixing', lazy: async () => ({ Component: (await import('./mixing.tsx')).MixingPage }) },

@@ -1,0 +1,228 @@
+import { useDeferredValue, useEffect, useId, useMemo, useState } from 'react';
+import { useSearchParams } from 'react-router-dom';
+import { CsvFileInput } from '@/components/ui/csv-file-input.tsx';
+import { Field, inputClass } from '@/components/ui/form-bits.tsx';
+import { NoResult, ResultNotesBlock } from '@/features/workbench/components/results.tsx';
+import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
+import { pngToHeights } from '@/features/workbench/lattice/decode-png.ts';
+import { exampleLatticeRows } from '@/features/workbench/lattice/example-image.ts';
+import { HeightImage, SpectrumImage } from '@/features/workbench/lattice/lattice-canvases.tsx';
+import { LatticeResults } from '@/features/workbench/lattice/lattice-results.tsx';
+import { parseMatrix } from '@/features/workbench/lattice/parse-matrix.ts';
+import { useLatticeWorker } from '@/features/workbench/lattice/use-lattice-worker.ts';
+
+const KINDS = ['hexagonal', 'square', 'line'] as const;
+type Kind = (typeof KINDS)[number];
+/** Presets: graphite's lattice constant [S: Trucano & Chen, Nature 258, 136 (1975)]; else the user's figure. */
+const PRESETS = [
+  { value: 'hopg', label: 'Graphite (HOPG), a = 0.246 nm', kind: 'hexagonal' as Kind, constant: '0.246' },
+  { value: 'custom', label: 'Other: my lattice or grating pitch', kind: null, constant: null },
+] as const;
+const LARGE_TEXT = 200_000;
+
+const positive = (s: string): number | undefined => {
+  const v = Number(s.trim().replace(',', '.'));
+  return s.trim() !== '' && Number.isFinite(v) && v > 0 ? v : undefined;
+};
+
+export function LatticePage() {
+  const textId = useId();
+  const pngId = useId();
+  const [params, setParams] = useSearchParams();
+  const [kind, setKind] = useState<Kind>(() => ((KINDS as readonly string[]).find((k) => k === params.get('kind')) as Kind) ?? 'hexagonal');
+  const [constant, setConstant] = useState(() => params.get('a') ?? '0.246');
+  const [spanX, setSpanX] = useState(() => params.get('vx') ?? '');
+  const [spanY, setSpanY] = useState(() => params.get('vy') ?? '');
+  const preset = kind === 'hexagonal' && constant.trim() === '0.246' ? 'hopg' : 'custom';
+  useEffect(() => {
+    const next = new URLSearchParams();
+    if (kind !== 'hexagonal') next.set('kind', kind);
+    if (constant.trim() !== '0.246') next.set('a', constant.trim());
+    if (spanX.trim()) next.set('vx', spanX.trim());
+    if (spanY.trim()) next.set('vy', spanY.trim());
+    if (next.toString() !== params.toString()) setParams(next, { replace: true });
+  }, [kind, constant, spanX, spanY, params, setParams]);
+
+  // The image: the example, typed text, a loaded text file or a PNG.
+  const [text, setText] = useState('');
+  const [loaded, setLoaded] = useState<{ rows: Float64Array[] | number[][]; note: string } | null>({
+    rows: exampleLatticeRows(),
+    note: 'Showing an invented example (hexagonal, 0.02 nm/px, turned 8°); paste or load your own image.',
+  });
+  const [loadError, setLoadError] = useState<string | null>(null);
+  const deferredText = useDeferredValue(text);
+  const typed = useMemo(() => (deferredText.trim() ? parseMatrix(deferredText) : null), [deferredText]);
+  const rows = typed?.ok ? typed.rows : (loaded?.rows ?? null);
+  const inputProblem = typed && !typed.ok ? typed.message : loadError;
+
+  const onTextFile = (t: string) => {
+    setLoadError(null);
+    if (t.length > LARGE_TEXT) {
+      const parsed = parseMatrix(t);
+      setText('');
+      if (parsed.ok)
+        setLoaded({
+          rows: parsed.rows,
+          note: `Loaded a ${parsed.rows[0]?.length ?? 0} × ${parsed.rows.length} matrix (too long to show as text).`,
+        });
+      else setLoadError(parsed.message);
+    } else setText(t);
+  };
+  const onPng = async (file: File | undefined) => {
+    if (!file) return;
+    setLoadError(null);
+    try {
+      const png = pngToHeights(await file.arrayBuffer());
+      setText('');
+      setLoaded({ rows: png.rows, note: `Loaded ${file.name}: ${png.width} × ${png.height} px, ${png.bitDepth}-bit.` });
+    } catch {
+      setLoadError(`${file.name} could not be read as a PNG.`);
+    }
+  };
+
+  const a = positive(constant);
+  const vx = positive(spanX);
+  const vy = positive(spanY);
+  const request = useMemo(() => {
+    if (!rows || rows.length === 0 || a === undefined) return null;
+    const asArrays = rows.map((r) => (r instanceof Float64Array ? r : Float64Array.from(r)));
+    return { rows: asArrays, lattice: { kind, constantNm: a }, ...(vx && vy ? { scanSpanV: { x: vx, y: vy } } : {}) };
+  }, [rows, kind, a, vx, vy]);
+  const state = useLatticeWorker(request);
+
+  return (
+    <ToolPage
+      slug="lattice"
+      linkNote="the image itself is not kept in the link, only the lattice and the drive spans"
+      lead="Read your scanner's pixel size, axis skew and gains off an image of a lattice whose spacing you know — graphite's atoms or a calibration grating. Everything runs in your browser."
+    >
+      <ToolColumns
+        inputs={
+          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+            <section aria-label="Height image" className="space-y-3 rounded-lg border border-rule bg-white p-4">
+              <div>
+                <label htmlFor={textId} className="block text-sm font-medium">
+                  Heights (one row of numbers per line; commas, tabs or spaces)
+                </label>
+                <textarea
+                  id={textId}
+                  rows={6}
+                  spellCheck={false}
+                  aria-describedby={`${textId}-hint`}
+                  className={`num mt-1 text-sm ${inputClass}`}
+                  value={text}
+                  placeholder="0.12, 0.15, 0.11, …"
+                  onChange={(e) => setText(e.target.value)}
+                />
+                <p id={`${textId}-hint`} className="mt-1 text-xs text-ink-soft">
+                  From 16 × 16 up to 1024 × 1024. {!typed && loaded ? loaded.note : null}
+                </p>
+              </div>
+              <CsvFileInput maxBytes={32 * 1024 * 1024} tooLarge="crop the image to 1024 × 1024 first." onText={onTextFile} />
+              <div>
+                <label htmlFor={pngId} className="block text-sm font-medium">
+                  Or load a greyscale PNG (8 or 16 bits)
+                </label>
+                <input
+                  id={pngId}
+                  type="file"
+                  accept=".png,image/png"
+                  className="mt-1 block w-full text-sm file:mr-3 file:rounded-md file:border file:border-teal file:bg-white file:px-3 file:py-1 file:text-teal-dark"
+                  onChange={(e) => void onPng(e.target.files?.[0])}
+                />
+              </div>
+              {inputProblem && (
+                <p role="alert" className="text-sm text-red-700">
+                  {inputProblem}
+                </p>
+              )}
+            </section>
+            <section aria-label="Lattice and drive" className="grid gap-3 rounded-lg border border-rule bg-white p-4 sm:grid-cols-2">
+              <Field id="lat-preset" label="Reference">
+                <select
+                  id="lat-preset"
+                  className={inputClass}
+                  value={preset}
+                  onChange={(e) => {
+                    const p = PRESETS.find((x) => x.value === e.target.value);
+                    if (p?.kind) setKind(p.kind);
+                    if (p?.constant) setConstant(p.constant);
+                    else if (p) setConstant('');
+                  }}
+                >
+                  {PRESETS.map((p) => (
+                    <option key={p.value} value={p.value}>
+                      {p.label}
+                    </option>
+                  ))}
+                </select>
+              </Field>
+              <Field id="lat-kind" label="Lattice">
+                <select id="lat-kind" className={inputClass} value={kind} onChange={(e) => setKind(e.target.value as Kind)}>
+                  <option value="hexagonal">Hexagonal (6 peaks)</option>
+                  <option value="square">Square (4 peaks)</option>
+                  <option value="line">Line grating (2 peaks)</option>
+                </select>
+              </Field>
+              <Field
+                id="lat-a"
+                label={kind === 'line' ? 'Grating pitch (nm)' : 'Lattice constant (nm)'}
+                hint="Graphite 0.246 nm (Trucano & Chen 1975): the spacing of the atoms an STM shows, not the 0.142 nm bond."
+              >
+                <input
+                  id="lat-a"
+                  inputMode="decimal"
+                  className={inputClass}
+                  value={constant}
+                  onChange={(e) => setConstant(e.target.value)}
+                />
+              </Field>
+              <div className="grid grid-cols-2 gap-3 sm:col-span-2">
+                <Field id="lat-vx" label="Drive span x (V)" hint="Over the full width; optional.">
+                  <input id="lat-vx" inputMode="decimal" className={inputClass} value={spanX} onChange={(e) => setSpanX(e.target.value)} />
+                </Field>
+                <Field id="lat-vy" label="Drive span y (V)" hint="Over the full height; optional.">
+                  <input id="lat-vy" inputMode="decimal" className={inputClass} value={spanY} onChange={(e) => setSpanY(e.target.value)} />
+                </Field>
+              </div>
+            </section>
+            {rows && rows.length > 0 && (
+              <section aria-label="The image" className="rounded-lg border border-rule bg-white p-4">
+                <h2 className="mb-2 text-sm font-semibold uppercase tracking-wide text-ink-soft">Image</h2>
+                <HeightImage rows={rows} label={`Height image, ${rows[0]?.length ?? 0} × ${rows.length} pixels, grey scale`} />
+              </section>
+            )}
+          </form>
+        }
+        results={
+          a === undefined ? (
+            <NoResult message="Enter the lattice constant or grating pitch in nm." />
+          ) : state.status === 'done' && state.reply.ok ? (
+            <>
+              <ResultNotesBlock r={state.reply.result} />
+              <LatticeResults r={state.reply.result} ms={state.reply.ms} />
+              <section aria-label="Spectrum" className="rounded-lg border border-rule bg-white p-4">
+                <h2 className="mb-2 text-sm font-semibold uppercase tracking-wide text-ink-soft">Spectrum (log scale)</h2>
+                <SpectrumImage
+                  spectrum={state.reply.spectrum}
+                  size={state.reply.paddedSize}
+                  peaks={state.reply.result.peaks}
+                  others={state.reply.candidates.slice(0, 8)}
+                />
+                <p className="mt-2 text-xs text-ink-soft">
+                  Thick rings: the peaks used, with their mirror images. Thin rings: other strong peaks.
+                </p>
+              </section>
+            </>
+          ) : state.status === 'done' && !state.reply.ok ? (
+            <NoResult message={state.reply.message} />
+          ) : (
+            <p role="status" className="text-sm text-ink-soft">
+              {state.status === 'running' ? 'Analysing the image…' : 'Paste or load an image.'}
+            </p>
+          )
+        }
+      />
+    </ToolPage>
+  );
+}

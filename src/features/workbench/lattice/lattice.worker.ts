@@ -1,0 +1,30 @@
+// Runs the lattice analysis off the page's thread: the same shared functions the API runs, plus the
+// log-magnitude spectrum for the picture.
+import { analyseLattice, LatticeError } from '@shared/workbench/lattice.ts';
+import { latticeResult } from '@shared/workbench/calculators/lattice-calculator.ts';
+import type { LatticeRequest, LatticeReply } from './lattice-messages.ts';
+
+self.onmessage = (e: MessageEvent<LatticeRequest>) => {
+  const { id, rows, lattice, scanSpanV } = e.data;
+  const t0 = performance.now();
+  let reply: LatticeReply;
+  try {
+    const analysis = analyseLattice(rows, lattice, { withSpectrum: true });
+    const result = latticeResult({ lattice, scanSpanV }, analysis);
+    reply = {
+      id,
+      ok: true,
+      result,
+      candidates: analysis.candidates.map((c) => ({ kx: c.kx, ky: c.ky })),
+      spectrum: analysis.spectrum!,
+      paddedSize: analysis.paddedSize,
+      ms: performance.now() - t0,
+    };
+    (self as unknown as Worker).postMessage(reply, [reply.spectrum.buffer]);
+    return;
+  } catch (err) {
+    if (!(err instanceof RangeError)) throw err;
+    reply = { id, ok: false, message: err.message, code: err instanceof LatticeError ? err.code : 'invalid_input' };
+  }
+  (self as unknown as Worker).postMessage(reply);
+};
