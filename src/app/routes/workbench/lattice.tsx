@@ -1,6 +1,7 @@
 import { useDeferredValue, useEffect, useId, useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { CsvFileInput } from '@/components/ui/csv-file-input.tsx';
+import { URL_INPUTS_STATE } from '@/features/workbench/form/inputs-write-state.ts';
 import { Field, inputClass } from '@/components/ui/form-bits.tsx';
 import { NoResult, ResultNotesBlock } from '@/features/workbench/components/results.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
@@ -40,7 +41,8 @@ export function LatticePage() {
     if (constant.trim() !== '0.246') next.set('a', constant.trim());
     if (spanX.trim()) next.set('vx', spanX.trim());
     if (spanY.trim()) next.set('vy', spanY.trim());
-    if (next.toString() !== params.toString()) setParams(next, { replace: true });
+    // Marked as the page's own write, so the workbench outlet keeps the page (and the loaded image) mounted.
+    if (next.toString() !== params.toString()) setParams(next, { replace: true, preventScrollReset: true, state: URL_INPUTS_STATE });
   }, [kind, constant, spanX, spanY, params, setParams]);
 
   // The image: the example, typed text, a loaded text file or a PNG.

@@ -1,8 +1,9 @@
-import { formatSig } from '@shared/format/measured-number.ts';
+import { formatFixed, formatSig } from '@shared/format/measured-number.ts';
 import { Headline, ResultPanel, ResultRow } from '@/features/workbench/components/results.tsx';
 import type { LatticeResult } from './lattice-messages.ts';
 
-const deg = (v: number | null) => (v === null ? '—' : `${formatSig(v, 3)}°`);
+/** Angles to 0.01°, finer than the analysis resolves them. */
+const deg = (v: number | null) => (v === null ? '—' : `${formatFixed(v, 2)}°`);
 
 /** nm per pixel, skew, rotation, gains and the peaks the lattice analysis chose. */
 export function LatticeResults({ r, ms }: { r: LatticeResult; ms: number }) {
@@ -67,7 +68,7 @@ export function LatticeResults({ r, ms }: { r: LatticeResult; ms: number }) {
       {r.peaks.map((p, i) => (
         <ResultRow key={i} label={`Peak ${i + 1}`} note={`${formatSig(p.strength, 3)} × its ring's median`}>
           <span className="num">
-            period {formatSig(p.periodPx, 4)} px at {formatSig((Math.atan2(p.ky, p.kx) * 180) / Math.PI, 3)}°
+            period {formatSig(p.periodPx, 4)} px at {deg((Math.atan2(p.ky, p.kx) * 180) / Math.PI)}
           </span>
         </ResultRow>
       ))}

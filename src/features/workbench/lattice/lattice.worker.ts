@@ -15,7 +15,10 @@ self.onmessage = (e: MessageEvent<LatticeRequest>) => {
       id,
       ok: true,
       result,
-      candidates: analysis.candidates.map((c) => ({ kx: c.kx, ky: c.ky })),
+      // Other peaks worth seeing: at least a quarter of the strongest [practice].
+      candidates: analysis.candidates
+        .filter((c) => c.magnitude >= 0.25 * analysis.candidates[0]!.magnitude)
+        .map((c) => ({ kx: c.kx, ky: c.ky })),
       spectrum: analysis.spectrum!,
       paddedSize: analysis.paddedSize,
       ms: performance.now() - t0,
