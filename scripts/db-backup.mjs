@@ -2,14 +2,16 @@
 // manifest of row counts and checksums (scripts/lib/backup-archive.mjs), from the private MariaDB that
 // `npm start` runs (its socket in .data/mariadb), to .data/backups/<database>-<UTC time>.tar.gz.
 // Safe while the app runs: one snapshot transaction (InnoDB), no table locks. Old scheduled archives are
-// pruned afterwards (7 daily, 4 weekly). MARIADB_SOCKET, DB_NAME, UPLOADS_DIR and BACKUP_DIR override the defaults.
+// pruned afterwards (7 daily, 4 weekly), and copied to an S3-compatible bucket when BACKUP_S3_BUCKET is
+// set (scripts/lib/backup-s3.mjs). MARIADB_SOCKET, DB_NAME, UPLOADS_DIR and BACKUP_DIR override the defaults.
 import { spawnSync } from 'node:child_process';
 import { existsSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { DATA_DIR } from './lib/paths.mjs';
 import { createBackup, rootArgs } from './lib/backup-archive.mjs';
-import { backupDir, pruneArchives } from './lib/backup-schedule.mjs';
+import { archivesToKeep, backupDir, pruneArchives } from './lib/backup-schedule.mjs';
+import { copyToBucket } from './lib/backup-s3.mjs';
 
 /** Where to work: MARIADB_SOCKET / DB_NAME / UPLOADS_DIR / BACKUP_DIR override what `npm start` uses. */
 export function dbTarget() {
@@ -58,6 +60,9 @@ async function main() {
     );
     const removed = pruneArchives(target.backupDir, target.database);
     if (removed.length) process.stdout.write(`Removed old backups (7 daily and 4 weekly are kept): ${removed.join(', ')}\n`);
+    // With BACKUP_S3_BUCKET set: a copy in the bucket, pruned the same way. A failure there is reported
+    // but the local archive stands, so the exit code stays 0.
+    await copyToBucket({ file, database: target.database, keep: archivesToKeep, log: (line) => process.stdout.write(`${line}\n`) });
   } catch (err) {
     fail(`${err instanceof Error ? err.message : String(err)}\nNo backup was written.`);
   }

@@ -1,11 +1,13 @@
 // The backup schedule inside `npm start`: every BACKUP_INTERVAL_H hours (24 by default, 0 = off) an
 // archive (backup-archive.mjs) is made once the newest one is that old, then old archives are pruned:
 // the newest of each of the last 7 days and of each of the last 4 ISO weeks are kept. Archives made
-// before a restore (prefix `pre-restore-`) are never pruned. BACKUP_DIR moves the archives.
+// before a restore (prefix `pre-restore-`) are never pruned. BACKUP_DIR moves the archives. With
+// BACKUP_S3_BUCKET set each archive is also copied to that bucket and pruned there (backup-s3.mjs).
 import { rmSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { DATA_DIR } from './paths.mjs';
 import { createBackup, listArchives } from './backup-archive.mjs';
+import { copyToBucket, describeBucket, s3Settings } from './backup-s3.mjs';
 
 export const RETENTION = { daily: 7, weekly: 4 };
 
@@ -70,6 +72,7 @@ export function startBackupSchedule({ socket, database, uploadsDir, log }) {
       log(`Backup written: ${file}`);
       const removed = pruneArchives(dir, database);
       if (removed.length) log(`Old backups removed (keeping ${RETENTION.daily} daily, ${RETENTION.weekly} weekly): ${removed.join(', ')}`);
+      await copyToBucket({ file, database, keep: archivesToKeep, log });
     } catch (err) {
       log(`Backup failed (will try again): ${err instanceof Error ? err.message : err}`);
     } finally {
@@ -79,7 +82,11 @@ export function startBackupSchedule({ socket, database, uploadsDir, log }) {
   // First look a minute after start (not during it), then every ten minutes or each interval if shorter.
   const first = setTimeout(check, Number(process.env.BACKUP_FIRST_CHECK_S ?? 60) * 1000);
   const timer = setInterval(check, Math.min(intervalMs, 600_000));
-  log(`Backups every ${hours} h into ${dir} (kept: ${RETENTION.daily} daily, ${RETENTION.weekly} weekly).`);
+  const bucket = s3Settings();
+  log(
+    `Backups every ${hours} h into ${dir}${bucket ? `, copied to ${describeBucket(bucket)}` : ''} ` +
+      `(kept: ${RETENTION.daily} daily, ${RETENTION.weekly} weekly).`,
+  );
   return {
     stop() {
       clearTimeout(first);
