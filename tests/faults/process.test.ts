@@ -1,6 +1,5 @@
 // Process faults: the real server process (`node --import tsx server/index.ts`) against a private
 // MariaDB. SIGTERM with a request in flight, and two instances sharing one database and sessions.
-import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { request as httpRequest, type ClientRequest, type IncomingMessage } from 'node:http';
 import { connect } from 'node:net';
@@ -11,21 +10,12 @@ import type { Sequelize } from 'sequelize';
 import { createSequelize } from '../../server/db/sequelize.ts';
 import { initModels } from '../../server/models/index.ts';
 import { createUser, uniqueLogin } from '../support/factories.ts';
-import { freePort, startPrivateMariaDb, type PrivateMariaDb } from '../support/private-mariadb.ts';
+import { startPrivateMariaDb, type PrivateMariaDb } from '../support/private-mariadb.ts';
+import { startServerProcess, type RunningServer } from '../support/server-process.ts';
 import { waitFor } from '../support/wait-for.ts';
 
 const SESSION_SECRET = 'process-faults-session-secret-0123456789';
 const START_TIMEOUT_MS = 45_000;
-
-interface RunningServer {
-  port: number;
-  base: string;
-  child: ChildProcess;
-  output: () => string;
-  exited: Promise<{ code: number | null; signal: NodeJS.Signals | null }>;
-  waitForOutput(pattern: RegExp, timeoutMs?: number): Promise<void>;
-  stop(): Promise<void>;
-}
 
 let db: PrivateMariaDb;
 let sequelize: Sequelize;
@@ -34,83 +24,8 @@ const servers: RunningServer[] = [];
 
 /** Spawn the real server on free ports (app, OAuth stand-in, SMTP catcher, inbox) against the private DB. */
 async function startServer(): Promise<RunningServer> {
-  const [port, oauth, smtp, inbox] = [await freePort(), await freePort(), await freePort(), await freePort()];
-  // Real GitHub, a real mail relay and admin handles stay out: the stand-ins are part of the test.
-  const kept = ['GITHUB_CLIENT_ID', 'GITHUB_CLIENT_SECRET', 'SMTP_URL', 'ADMIN_LOGINS'];
-  const inherited = Object.fromEntries(Object.entries(process.env).filter(([k]) => !kept.includes(k)));
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-    cwd: process.cwd(),
-    stdio: ['ignore', 'pipe', 'pipe'],
-    env: {
-      ...inherited,
-      NODE_ENV: 'production',
-      LOG_LEVEL: 'info',
-      HOST: '127.0.0.1',
-      PORT: String(port),
-      PUBLIC_URL: `http://127.0.0.1:${port}`,
-      OAUTH_STANDIN_PORT: String(oauth),
-      SMTP_CATCHER_PORT: String(smtp),
-      INBOX_PORT: String(inbox),
-      DB_HOST: db.db.host,
-      DB_PORT: String(db.db.port),
-      DB_NAME: db.db.name,
-      DB_USER: db.db.user,
-      DB_PASSWORD: db.db.password,
-      SESSION_SECRET,
-      RATE_LIMITS: 'false',
-      UPLOADS_DIR: uploads,
-    },
-  });
-  let out = '';
-  const listeners = new Set<() => void>();
-  const onData = (chunk: Buffer) => {
-    out += chunk.toString();
-    for (const l of listeners) l();
-  };
-  child.stdout!.on('data', onData);
-  child.stderr!.on('data', onData);
-  const exited = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((resolve) =>
-    child.once('exit', (code, signal) => resolve({ code, signal })),
-  );
-  const waitForOutput = (pattern: RegExp, timeoutMs = 10_000) =>
-    new Promise<void>((resolve, reject) => {
-      const check = () => {
-        if (pattern.test(out)) {
-          cleanup();
-          resolve();
-        }
-      };
-      const timer = setTimeout(() => {
-        cleanup();
-        reject(new Error(`no ${pattern} in server output within ${timeoutMs} ms:\n${out.slice(-2000)}`));
-      }, timeoutMs);
-      const gone = () => {
-        cleanup();
-        reject(new Error(`server exited while waiting for ${pattern}:\n${out.slice(-2000)}`));
-      };
-      const cleanup = () => {
-        clearTimeout(timer);
-        listeners.delete(check);
-        child.off('exit', gone);
-      };
-      listeners.add(check);
-      child.once('exit', gone);
-      check();
-    });
-  const server: RunningServer = {
-    port,
-    base: `http://127.0.0.1:${port}`,
-    child,
-    output: () => out,
-    exited,
-    waitForOutput,
-    async stop() {
-      if (child.exitCode === null && child.signalCode === null) child.kill('SIGTERM');
-      await exited;
-    },
-  };
+  const server = await startServerProcess({ db, uploads, sessionSecret: SESSION_SECRET, startTimeoutMs: START_TIMEOUT_MS });
   servers.push(server);
-  await waitForOutput(/Scanwright is running/, START_TIMEOUT_MS);
   return server;
 }
 
