@@ -1,3 +1,4 @@
+import { partStatsOf } from '@shared/schemas/part.ts';
 import type { RunKind } from '@shared/schemas/run.ts';
 import type { PartChoiceDto, PartDetailDto, PartSummaryDto } from '@shared/schemas/part.ts';
 import type { AttachedPhotoDto } from '@shared/schemas/attached-photo.ts';
@@ -44,16 +45,7 @@ export function presentPartChoice(p: PartRow): PartChoiceDto {
     material: p.material,
     safeVolts: p.safeVolts,
     capacitanceNf: p.capacitanceNf,
-    stats: {
-      acceptedRunCount: p.acceptedRunCount,
-      buildCount: p.buildCount,
-      gainMedianNmPerV: p.gainMedianNmPerV,
-      gainP25NmPerV: p.gainP25NmPerV,
-      gainP75NmPerV: p.gainP75NmPerV,
-      gainMinNmPerV: p.gainMinNmPerV,
-      gainMaxNmPerV: p.gainMaxNmPerV,
-      hysteresisMedianPct: p.hysteresisMedianPct,
-    },
+    stats: partStatsOf(p),
   };
 }
 

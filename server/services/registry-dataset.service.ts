@@ -1,3 +1,4 @@
+import { partStatsOf } from '@shared/schemas/part.ts';
 // The whole-registry dataset (open data): listed parts, accepted runs of published builds and their raw
 // records. Public and actor-independent. Raw records are read in batches and streamed, never all at once.
 import { once } from 'node:events';
@@ -57,16 +58,7 @@ async function listedParts(): Promise<DatasetPart[]> {
     layers: p.layers,
     capacitanceNf: p.capacitanceNf,
     safeVolts: p.safeVolts,
-    stats: {
-      acceptedRunCount: p.acceptedRunCount,
-      buildCount: p.buildCount,
-      gainMedianNmPerV: p.gainMedianNmPerV,
-      gainP25NmPerV: p.gainP25NmPerV,
-      gainP75NmPerV: p.gainP75NmPerV,
-      gainMinNmPerV: p.gainMinNmPerV,
-      gainMaxNmPerV: p.gainMaxNmPerV,
-      hysteresisMedianPct: p.hysteresisMedianPct,
-    },
+    stats: partStatsOf(p),
   }));
 }
 

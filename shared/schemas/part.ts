@@ -39,6 +39,18 @@ export interface PartStatsDto {
   hysteresisMedianPct: number | null;
 }
 
+/** The pooled figures of anything that carries them as columns (a part row, a registry row). */
+export const partStatsOf = (p: PartStatsDto): PartStatsDto => ({
+  acceptedRunCount: p.acceptedRunCount,
+  buildCount: p.buildCount,
+  gainMedianNmPerV: p.gainMedianNmPerV,
+  gainP25NmPerV: p.gainP25NmPerV,
+  gainP75NmPerV: p.gainP75NmPerV,
+  gainMinNmPerV: p.gainMinNmPerV,
+  gainMaxNmPerV: p.gainMaxNmPerV,
+  hysteresisMedianPct: p.hysteresisMedianPct,
+});
+
 /** A part as pickers and summaries show it. */
 export interface PartSummaryDto {
   id: number;
@@ -103,16 +115,7 @@ export function choiceFromListItem(p: PartListItemDto): PartChoiceDto {
     material: p.material,
     safeVolts: p.safeVolts,
     capacitanceNf: p.capacitanceNf,
-    stats: {
-      acceptedRunCount: p.acceptedRunCount,
-      buildCount: p.buildCount,
-      gainMedianNmPerV: p.gainMedianNmPerV,
-      gainP25NmPerV: p.gainP25NmPerV,
-      gainP75NmPerV: p.gainP75NmPerV,
-      gainMinNmPerV: p.gainMinNmPerV,
-      gainMaxNmPerV: p.gainMaxNmPerV,
-      hysteresisMedianPct: p.hysteresisMedianPct,
-    },
+    stats: partStatsOf(p),
   };
 }
 

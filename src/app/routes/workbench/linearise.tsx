@@ -1,5 +1,6 @@
 import { useDeferredValue, useEffect, useId, useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
+import { URL_INPUTS_STATE } from '@/features/workbench/form/inputs-write-state.ts';
 import { displacementUnits, voltageUnits } from '@shared/units.ts';
 import { CsvFileInput } from '@/components/ui/csv-file-input.tsx';
 import { Field, inputClass } from '@/components/ui/form-bits.tsx';
@@ -30,7 +31,7 @@ export function LinearisePage() {
     if (displacementUnit !== 'um') next.set('du', displacementUnit);
     if (degree !== 'auto') next.set('deg', degree);
     if (stepNm.trim()) next.set('step', stepNm.trim());
-    if (next.toString() !== params.toString()) setParams(next, { replace: true });
+    if (next.toString() !== params.toString()) setParams(next, { replace: true, preventScrollReset: true, state: URL_INPUTS_STATE });
   }, [voltageUnit, displacementUnit, degree, stepNm, params, setParams]);
   const deferred = useDeferredValue(text);
   const r = useMemo(

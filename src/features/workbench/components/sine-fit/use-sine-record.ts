@@ -3,6 +3,7 @@
 // take) and the shared calculator's result for it (the page's live result; the API answers the same).
 import { useDeferredValue, useEffect, useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
+import { URL_INPUTS_STATE } from '@/features/workbench/form/inputs-write-state.ts';
 import { displacementUnits, voltageUnits } from '@shared/units.ts';
 import { sineFitInput, type SineFitInput } from '@shared/schemas/sine-fit.ts';
 import type { DisplacementUnit, VoltageUnit } from '@shared/units.ts';
@@ -53,7 +54,7 @@ export function useSineRecord() {
     if (voltageUnit !== 'V') next.set('vu', voltageUnit);
     if (displacementUnit !== 'um') next.set('du', displacementUnit);
     if (frequencyText.trim()) next.set('f', frequencyText.trim());
-    if (next.toString() !== params.toString()) setParams(next, { replace: true });
+    if (next.toString() !== params.toString()) setParams(next, { replace: true, preventScrollReset: true, state: URL_INPUTS_STATE });
   }, [timeUnit, voltageUnit, displacementUnit, frequencyText, params, setParams]);
   const deferredText = useDeferredValue(text);
 
