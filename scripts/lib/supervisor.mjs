@@ -1,9 +1,21 @@
 // Keeps one child process running: when it dies it is started again after a delay that doubles from
-// 0.5 s up to 30 s, and the delay starts over once the child has run 60 s. After `maxRestarts` restarts
-// in a row that did not last 60 s, `onGiveUp` is called. `decide` may say a given exit is final.
+// 0.5 s up to 30 s (SUPERVISOR_MAX_DELAY_MS), and the delay starts over once the child has run 60 s. At the
+// 10th failure in a row (SUPERVISOR_MAX_FAILURES; failures that did not last 60 s), it is not restarted
+// again and `onGiveUp` is called. `decide` may say a given exit is final.
 import { running } from './processes.mjs';
 
-export const BACKOFF = { firstMs: 500, maxMs: 30_000, healthyMs: 60_000, maxRestarts: 10 };
+/** A positive whole number from the environment, else `fallback`. */
+const fromEnv = (name, fallback) => {
+  const v = Number(process.env[name]);
+  return Number.isInteger(v) && v > 0 ? v : fallback;
+};
+
+export const BACKOFF = {
+  firstMs: 500,
+  maxMs: fromEnv('SUPERVISOR_MAX_DELAY_MS', 30_000),
+  healthyMs: 60_000,
+  maxFailures: fromEnv('SUPERVISOR_MAX_FAILURES', 10),
+};
 
 /**
  * @param {object} o
@@ -57,8 +69,8 @@ export function supervise({ name, start, stopping, decide = () => 'restart', onF
   function scheduleRestart() {
     if (stopping()) return;
     failuresInARow += 1;
-    if (failuresInARow > backoff.maxRestarts) {
-      log(`${name} failed ${backoff.maxRestarts} times in a row; giving up.`);
+    if (failuresInARow >= backoff.maxFailures) {
+      log(`${name} failed ${failuresInARow} times in a row; giving up.`);
       return onGiveUp();
     }
     log(`restarting ${name} in ${(delay / 1000).toFixed(1)} s`);
