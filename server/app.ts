@@ -12,6 +12,7 @@ import { createLogger, type Logger } from './logger.ts';
 import { createSequelize } from './db/sequelize.ts';
 import { closeReadPool } from './db/read-pool.ts';
 import { initModels } from './models/index.ts';
+import { watchIdempotentCreates } from './services/idempotency-context.ts';
 import { createPassport } from './auth/passport.ts';
 import { createMailer, type Mailer } from './services/mail.service.ts';
 import { startOutboxWorker } from './services/outbox.service.ts';
@@ -69,6 +70,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   const log = deps.log ?? createLogger(config.logLevel);
   const sequelize = createSequelize(config.db);
   initModels(sequelize);
+  watchIdempotentCreates(sequelize);
   const mailer =
     deps.mailer ??
     createMailer(config.smtpUrl ?? 'smtp://127.0.0.1:2525', config.mailFrom, log, { timeoutMs: config.outbox.smtpTimeoutMs });

@@ -19,6 +19,7 @@ import * as createIdempotencyKeys from './migrations/20261203100100-create-idemp
 import * as addActuatorDriveMatrix from './migrations/20261203140000-add-actuator-drive-matrix.ts';
 import * as addOutboxClaims from './migrations/20261203150000-add-outbox-claims.ts';
 import * as addActuatorLinearisation from './migrations/20261203160000-add-actuator-linearisation.ts';
+import * as addIdempotencyApplied from './migrations/20261203170000-add-idempotency-applied.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -43,6 +44,7 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261203140000-add-actuator-drive-matrix', addActuatorDriveMatrix],
   ['20261203150000-add-outbox-claims', addOutboxClaims],
   ['20261203160000-add-actuator-linearisation', addActuatorLinearisation],
+  ['20261203170000-add-idempotency-applied', addIdempotencyApplied],
 ];
 
 /** Umzug over our migration list; the only source of the schema, in tests too. */

@@ -3,6 +3,7 @@ import type { Request, RequestHandler, Response } from 'express';
 import { pathMatches } from '@shared/auth/path-pattern.ts';
 import { AppError, ConflictError } from '../errors.ts';
 import { claimIdempotencyKey, releaseIdempotencyKey, storeIdempotentAnswer } from '../services/idempotency.service.ts';
+import { idempotencyScope } from '../services/idempotency-context.ts';
 
 /**
  * POSTs that create something, so that a retry after a lost answer would make it twice. Token
@@ -95,7 +96,15 @@ export const idempotency: RequestHandler = async (req, res, next) => {
   switch (claim.kind) {
     case 'run':
       recordAnswer(req, res, claim.id);
-      return next();
+      return idempotencyScope(claim.id, () => next());
+    case 'applied':
+      throw new AppError(
+        409,
+        'idempotency_already_applied',
+        `The first request with this Idempotency-Key was stored (${claim.resource.replace(':', ' ')}) but its answer was lost; ` +
+          'read it back instead of sending it again.',
+        { resource: claim.resource },
+      );
     case 'replay':
       res.status(claim.status).set('Idempotent-Replayed', 'true');
       if (claim.body) res.type('application/json').send(claim.body);

@@ -13,6 +13,8 @@ export class IdempotencyKey extends Model<InferAttributes<IdempotencyKey>, Infer
   declare bodyHash: string;
   declare responseStatus: CreationOptional<number | null>;
   declare responseBody: CreationOptional<string | null>;
+  /** `table:id` of the first row the request created, set in its own transaction (null until it commits one). */
+  declare appliedResource: CreationOptional<string | null>;
   declare expiresAt: Date;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -28,6 +30,7 @@ export class IdempotencyKey extends Model<InferAttributes<IdempotencyKey>, Infer
         bodyHash: { type: DataTypes.CHAR(64), allowNull: false },
         responseStatus: DataTypes.SMALLINT.UNSIGNED,
         responseBody: DataTypes.TEXT('long'),
+        appliedResource: DataTypes.STRING(80),
         expiresAt: { type: DataTypes.DATE, allowNull: false },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -25,6 +25,33 @@ const postRun = (agent: Agent, actuatorId: number, key: string | null, body: obj
 const runsOn = (actuatorId: number) => CalibrationRun.count({ where: { actuatorId } });
 
 describe('Idempotency-Key on POST /api/actuators/:actuatorId/runs', () => {
+  test('when the write commits but its answer is lost (a crash between the two), then a retry is told it was stored, never runs it again', async () => {
+    const { agent, actuator } = await makerWithActuator(t);
+    const key = newKey();
+    const first = await postRun(agent, actuator.id, key);
+    expect(first.status).toBe(201);
+    // The mark was written in the run's own transaction.
+    const claim = await IdempotencyKey.findOne({ where: { idemKey: key } });
+    expect(claim?.appliedResource).toBe(`calibration_runs:${first.body.id}`);
+    // What a kill -9 after the commit leaves behind: the write and its mark, no stored answer, some time ago.
+    await IdempotencyKey.update({ responseStatus: null, responseBody: null }, { where: { id: claim!.id } });
+    await IdempotencyKey.sequelize!.query('UPDATE idempotency_keys SET created_at = NOW() - INTERVAL 1 HOUR WHERE id = ?', {
+      replacements: [claim!.id],
+    });
+    const retry = await postRun(agent, actuator.id, key);
+    expectError(retry, 409, 'idempotency_already_applied');
+    expect(retry.body.error.details).toEqual({ resource: `calibration_runs:${first.body.id}` });
+    expect(await runsOn(actuator.id)).toBe(1);
+  });
+
+  test('when a request under a key fails validation, then nothing is marked and the key may be used again', async () => {
+    const { agent, actuator } = await makerWithActuator(t);
+    const key = newKey();
+    expect((await postRun(agent, actuator.id, key, { ...rigRun(), method: 'guess' })).status).toBe(400);
+    expect(await IdempotencyKey.count({ where: { idemKey: key } })).toBe(0);
+    expect((await postRun(agent, actuator.id, key)).status).toBe(201);
+  });
+
   test('when the same request is sent twice with one key, then the first answer is replayed and one run exists', async () => {
     const { agent, actuator } = await makerWithActuator(t);
     const key = newKey();
