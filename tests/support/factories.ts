@@ -66,6 +66,21 @@ export async function createBuildRow(ownerId: number, overrides: Partial<{ statu
   });
 }
 
+/** An actuator row on `buildId` using `partId` (a Z single element unless told otherwise), without runs. */
+export async function createActuatorRow(opts: { buildId: number; partId: number; axis?: string; drive?: string }) {
+  const { Actuator } = await import('../../server/models/actuator.model.ts');
+  return Actuator.create({
+    buildId: opts.buildId,
+    partId: opts.partId,
+    label: null,
+    axis: (opts.axis ?? 'Z') as 'Z',
+    drive: (opts.drive ?? 'single') as 'single',
+    amplifier: null,
+    maxVolts: null,
+    notes: null,
+  });
+}
+
 /** An actuator on `buildId` using `partId`, with one run whose points follow `gainNmPerV` (fit computed by the shared code). */
 export async function createRunRow(opts: {
   buildId: number;

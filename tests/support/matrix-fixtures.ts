@@ -39,7 +39,7 @@ import { latticeInput } from '@shared/schemas/lattice.ts';
 import type { TestApp } from './test-app.ts';
 import type { Agent } from './login.ts';
 import { fillPath, type RouteEntry } from './route-table.ts';
-import { createBuildRow, createPart, createRunRow, createUser } from './factories.ts';
+import { createActuatorRow, createBuildRow, createPart, createRunRow, createUser } from './factories.ts';
 import { jpeg } from './images.ts';
 import { signIn } from './login.ts';
 import { User } from '../../server/models/user.model.ts';
@@ -675,16 +675,7 @@ export const fixtures: Record<string, Fixture> = {
     async make(ctx) {
       const build = await draftBuild(ctx);
       const part = await createPart();
-      const actuator = await Actuator.create({
-        buildId: build.id,
-        partId: part.id,
-        label: null,
-        axis: 'Z',
-        drive: 'single',
-        amplifier: null,
-        maxVolts: null,
-        notes: null,
-      });
+      const actuator = await createActuatorRow({ buildId: build.id, partId: part.id });
       return {
         params: { actuatorId: actuator.id },
         body: { label: 'Z tube' },
@@ -700,16 +691,7 @@ export const fixtures: Record<string, Fixture> = {
     async make(ctx) {
       const build = await draftBuild(ctx);
       const part = await createPart();
-      const actuator = await Actuator.create({
-        buildId: build.id,
-        partId: part.id,
-        label: null,
-        axis: 'Z',
-        drive: 'single',
-        amplifier: null,
-        maxVolts: null,
-        notes: null,
-      });
+      const actuator = await createActuatorRow({ buildId: build.id, partId: part.id });
       return {
         params: { actuatorId: actuator.id },
         state: buildState(build.id),
@@ -725,16 +707,7 @@ export const fixtures: Record<string, Fixture> = {
     async make(ctx) {
       const build = await draftBuild(ctx);
       const part = await createPart();
-      const actuator = await Actuator.create({
-        buildId: build.id,
-        partId: part.id,
-        label: null,
-        axis: 'XY',
-        drive: 'pair-anti-phase',
-        amplifier: null,
-        maxVolts: null,
-        notes: null,
-      });
+      const actuator = await createActuatorRow({ buildId: build.id, partId: part.id, axis: 'XY', drive: 'pair-anti-phase' });
       return {
         params: { actuatorId: actuator.id },
         body: {
@@ -762,16 +735,7 @@ export const fixtures: Record<string, Fixture> = {
     async make(ctx) {
       const build = await draftBuild(ctx);
       const part = await createPart();
-      const actuator = await Actuator.create({
-        buildId: build.id,
-        partId: part.id,
-        label: null,
-        axis: 'Z',
-        drive: 'single',
-        amplifier: null,
-        maxVolts: null,
-        notes: null,
-      });
+      const actuator = await createActuatorRow({ buildId: build.id, partId: part.id });
       return {
         params: { actuatorId: actuator.id },
         body: {
@@ -793,16 +757,7 @@ export const fixtures: Record<string, Fixture> = {
     async make(ctx) {
       const build = await draftBuild(ctx);
       const part = await createPart();
-      const actuator = await Actuator.create({
-        buildId: build.id,
-        partId: part.id,
-        label: null,
-        axis: 'Z',
-        drive: 'single',
-        amplifier: null,
-        maxVolts: null,
-        notes: null,
-      });
+      const actuator = await createActuatorRow({ buildId: build.id, partId: part.id });
       const { linearise } = await import('../../shared/workbench/linearise.ts');
       const result = linearise({
         points: [0, 10, 20, 30].map((v) => ({ volts: v, displacement: 80 * v })),
@@ -862,16 +817,7 @@ export const fixtures: Record<string, Fixture> = {
     async make(ctx) {
       const build = await draftBuild(ctx);
       const part = await createPart();
-      const actuator = await Actuator.create({
-        buildId: build.id,
-        partId: part.id,
-        label: null,
-        axis: 'Z',
-        drive: 'single',
-        amplifier: null,
-        maxVolts: null,
-        notes: null,
-      });
+      const actuator = await createActuatorRow({ buildId: build.id, partId: part.id });
       const runs = () => CalibrationRun.findAll({ where: { actuatorId: actuator.id } });
       return {
         params: { actuatorId: actuator.id },

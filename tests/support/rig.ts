@@ -2,10 +2,9 @@
 // made through the account API, and a run body as a rig would send it.
 import { expect } from 'vitest';
 import type { TokenScope } from '../../shared/schemas/api-token.ts';
-import { Actuator } from '../../server/models/actuator.model.ts';
 import type { TestApp } from './test-app.ts';
 import { signIn, type Agent } from './login.ts';
-import { createBuildRow, createPart, createUser } from './factories.ts';
+import { createActuatorRow, createBuildRow, createPart, createUser } from './factories.ts';
 
 /** Points of a 4.2 nm/V bar read by a capacitive sensor (a straight line through the origin) [calc]. */
 export const rigRun = (gain = 4.2) => ({
@@ -19,16 +18,7 @@ export const rigRun = (gain = 4.2) => ({
 export async function actuatorOf(ownerId: number) {
   const build = await createBuildRow(ownerId);
   const part = await createPart();
-  const actuator = await Actuator.create({
-    buildId: build.id,
-    partId: part.id,
-    label: null,
-    axis: 'Z',
-    drive: 'single',
-    amplifier: null,
-    maxVolts: null,
-    notes: null,
-  });
+  const actuator = await createActuatorRow({ buildId: build.id, partId: part.id });
   return { build, actuator };
 }
 
