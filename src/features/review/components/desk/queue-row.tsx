@@ -114,12 +114,16 @@ function RunFacts({ run: r }: { run: QueueRunDto }) {
           <span className="num font-medium">{withUncertainty(r.fit.gainNmPerV, runGainPlusMinus(r.fit).halfWidth)}</span> nm/V{' '}
           <PlusMinusLabel kind={runGainPlusMinus(r.fit).kind} className="text-xs" /> · {runKindLabels[r.kind].toLowerCase()}
         </span>
-        <span>
-          R² <span className="num">{r.fit.r2 === null ? '—' : r.fit.r2.toFixed(4)}</span>
-        </span>
-        <span>
-          hysteresis <span className="num">{r.fit.hysteresisPctFs === null ? '—' : `${sig(r.fit.hysteresisPctFs, 2)} %`}</span>
-        </span>
+        {r.kind === 'points' && (
+          <>
+            <span>
+              R² <span className="num">{r.fit.r2 === null ? '—' : r.fit.r2.toFixed(4)}</span>
+            </span>
+            <span>
+              hysteresis <span className="num">{r.fit.hysteresisPctFs === null ? '—' : `${sig(r.fit.hysteresisPctFs, 2)} %`}</span>
+            </span>
+          </>
+        )}
       </span>
       {r.flags.length > 0 && (
         <span className="mt-1.5 block">

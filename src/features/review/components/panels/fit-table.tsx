@@ -20,13 +20,22 @@ export function FitTable({ fit }: { fit: RunFitDto }) {
         ]
       : []),
     [ci ? 'Standard error' : 'Standard uncertainty', `${sig(fit.gainStdErrNmPerV, 2)} nm/V`],
-    ['Intercept', `${sig(fit.interceptNm, 3)} nm`],
-    ['R²', fit.r2 === null ? '—' : fit.r2.toFixed(4)],
-    ['Residual std. dev.', `${sig(fit.residualStdNm, 2)} nm`],
+    // A reading of two values has no line, residuals or loop to speak of.
+    ...((fit.gainBoundsNmPerV
+      ? []
+      : [
+          [fit.sine ? 'Displacement offset' : 'Intercept', `${sig(fit.interceptNm, 3)} nm`],
+          ['R²', fit.r2 === null ? '—' : fit.r2.toFixed(4)],
+          ['Residual std. dev.', `${sig(fit.residualStdNm, 2)} nm`],
+        ]) as [string, string][]),
     ['Span', `${sig(fit.spanNm, 3)} nm`],
-    ['Nonlinearity', fit.nonlinearityPctFs === null ? '—' : `${sig(fit.nonlinearityPctFs, 2)} % of span`],
-    ['Hysteresis', fit.hysteresisPctFs === null ? '—' : `${sig(fit.hysteresisPctFs, 2)} % of span`],
-    ['Points', String(fit.n)],
+    ...((fit.gainBoundsNmPerV || fit.sine
+      ? []
+      : [
+          ['Nonlinearity', fit.nonlinearityPctFs === null ? '—' : `${sig(fit.nonlinearityPctFs, 2)} % of span`],
+          ['Hysteresis', fit.hysteresisPctFs === null ? '—' : `${sig(fit.hysteresisPctFs, 2)} % of span`],
+        ]) as [string, string][]),
+    [fit.gainBoundsNmPerV ? 'Readings' : fit.sine ? 'Samples' : 'Points', String(fit.n)],
   ];
   return (
     <table className="w-full text-sm">

@@ -48,18 +48,28 @@ export function RunPanel({ run, onDecided }: { run: QueueRunDto; onDecided: (dec
       <PanelSection title="Flags">
         <FlagList flags={run.flags} />
       </PanelSection>
-      <PanelSection title="Calibration plot">
-        <div className="rounded-md border border-rule bg-white p-2 sm:p-3">
-          <Suspense
-            fallback={
-              <p role="status" className="flex h-[260px] items-center justify-center text-sm text-ink-soft">
-                Loading the plot…
-              </p>
-            }
-          >
-            <CalibrationChart points={run.points} fit={{ interceptNm: run.fit.interceptNm, gainNmPerV: run.fit.gainNmPerV }} height={260} />
-          </Suspense>
-        </div>
+      <PanelSection title={run.kind === 'sine-record' ? 'Loop (decimated)' : 'Calibration plot'}>
+        {run.kind === 'peak-to-peak' ? (
+          <p className="text-sm text-ink-soft">
+            A peak-to-peak reading: two readings under a sine drive make one gain, with nothing to plot.
+          </p>
+        ) : (
+          <div className="rounded-md border border-rule bg-white p-2 sm:p-3">
+            <Suspense
+              fallback={
+                <p role="status" className="flex h-[260px] items-center justify-center text-sm text-ink-soft">
+                  Loading the plot…
+                </p>
+              }
+            >
+              <CalibrationChart
+                points={run.points}
+                fit={{ interceptNm: run.fit.interceptNm, gainNmPerV: run.fit.gainNmPerV }}
+                height={260}
+              />
+            </Suspense>
+          </div>
+        )}
       </PanelSection>
       <PanelSection title="Fit">
         <FitTable fit={run.fit} />
