@@ -1,7 +1,6 @@
-import { useDeferredValue, useEffect, useId, useMemo, useState } from 'react';
-import { useSearchParams } from 'react-router-dom';
+import { useDeferredValue, useId, useMemo, useState } from 'react';
 import { CsvFileInput } from '@/components/ui/csv-file-input.tsx';
-import { URL_INPUTS_STATE } from '@/features/workbench/form/inputs-write-state.ts';
+import { useUrlSettings } from '@/features/workbench/form/use-url-settings.ts';
 import { Field, inputClass } from '@/components/ui/form-bits.tsx';
 import { NoResult, ResultNotesBlock } from '@/features/workbench/components/results.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
@@ -14,6 +13,13 @@ import { useLatticeWorker } from '@/features/workbench/lattice/use-lattice-worke
 
 const KINDS = ['hexagonal', 'square', 'line'] as const;
 type Kind = (typeof KINDS)[number];
+/** The lattice and the drive spans live in the link; the image does not. */
+const SETTINGS = {
+  kind: { param: 'kind', fallback: 'hexagonal', allowed: KINDS },
+  constant: { param: 'a', fallback: '0.246' },
+  spanX: { param: 'vx', fallback: '' },
+  spanY: { param: 'vy', fallback: '' },
+};
 /** Presets: graphite's lattice constant [S: Trucano & Chen, Nature 258, 136 (1975)]; else the user's figure. */
 const PRESETS = [
   { value: 'hopg', label: 'Graphite (HOPG), a = 0.246 nm', kind: 'hexagonal' as Kind, constant: '0.246' },
@@ -29,21 +35,10 @@ const positive = (s: string): number | undefined => {
 export function LatticePage() {
   const textId = useId();
   const pngId = useId();
-  const [params, setParams] = useSearchParams();
-  const [kind, setKind] = useState<Kind>(() => ((KINDS as readonly string[]).find((k) => k === params.get('kind')) as Kind) ?? 'hexagonal');
-  const [constant, setConstant] = useState(() => params.get('a') ?? '0.246');
-  const [spanX, setSpanX] = useState(() => params.get('vx') ?? '');
-  const [spanY, setSpanY] = useState(() => params.get('vy') ?? '');
+  const [settings, set] = useUrlSettings(SETTINGS);
+  const kind = settings.kind as Kind;
+  const { constant, spanX, spanY } = settings;
   const preset = kind === 'hexagonal' && constant.trim() === '0.246' ? 'hopg' : 'custom';
-  useEffect(() => {
-    const next = new URLSearchParams();
-    if (kind !== 'hexagonal') next.set('kind', kind);
-    if (constant.trim() !== '0.246') next.set('a', constant.trim());
-    if (spanX.trim()) next.set('vx', spanX.trim());
-    if (spanY.trim()) next.set('vy', spanY.trim());
-    // Marked as the page's own write, so the workbench outlet keeps the page (and the loaded image) mounted.
-    if (next.toString() !== params.toString()) setParams(next, { replace: true, preventScrollReset: true, state: URL_INPUTS_STATE });
-  }, [kind, constant, spanX, spanY, params, setParams]);
 
   // The image: the example, typed text, a loaded text file or a PNG.
   const [text, setText] = useState('');
@@ -147,9 +142,9 @@ export function LatticePage() {
                   value={preset}
                   onChange={(e) => {
                     const p = PRESETS.find((x) => x.value === e.target.value);
-                    if (p?.kind) setKind(p.kind);
-                    if (p?.constant) setConstant(p.constant);
-                    else if (p) setConstant('');
+                    if (p?.kind) set('kind', p.kind);
+                    if (p?.constant) set('constant', p.constant);
+                    else if (p) set('constant', '');
                   }}
                 >
                   {PRESETS.map((p) => (
@@ -160,7 +155,7 @@ export function LatticePage() {
                 </select>
               </Field>
               <Field id="lat-kind" label="Lattice">
-                <select id="lat-kind" className={inputClass} value={kind} onChange={(e) => setKind(e.target.value as Kind)}>
+                <select id="lat-kind" className={inputClass} value={kind} onChange={(e) => set('kind', e.target.value as Kind)}>
                   <option value="hexagonal">Hexagonal (6 peaks)</option>
                   <option value="square">Square (4 peaks)</option>
                   <option value="line">Line grating (2 peaks)</option>
@@ -176,15 +171,27 @@ export function LatticePage() {
                   inputMode="decimal"
                   className={inputClass}
                   value={constant}
-                  onChange={(e) => setConstant(e.target.value)}
+                  onChange={(e) => set('constant', e.target.value)}
                 />
               </Field>
               <div className="grid grid-cols-2 gap-3 sm:col-span-2">
                 <Field id="lat-vx" label="Drive span x (V)" hint="Over the full width; optional.">
-                  <input id="lat-vx" inputMode="decimal" className={inputClass} value={spanX} onChange={(e) => setSpanX(e.target.value)} />
+                  <input
+                    id="lat-vx"
+                    inputMode="decimal"
+                    className={inputClass}
+                    value={spanX}
+                    onChange={(e) => set('spanX', e.target.value)}
+                  />
                 </Field>
                 <Field id="lat-vy" label="Drive span y (V)" hint="Over the full height; optional.">
-                  <input id="lat-vy" inputMode="decimal" className={inputClass} value={spanY} onChange={(e) => setSpanY(e.target.value)} />
+                  <input
+                    id="lat-vy"
+                    inputMode="decimal"
+                    className={inputClass}
+                    value={spanY}
+                    onChange={(e) => set('spanY', e.target.value)}
+                  />
                 </Field>
               </div>
             </section>

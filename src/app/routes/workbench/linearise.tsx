@@ -1,6 +1,5 @@
-import { useDeferredValue, useEffect, useId, useMemo, useState } from 'react';
-import { useSearchParams } from 'react-router-dom';
-import { URL_INPUTS_STATE } from '@/features/workbench/form/inputs-write-state.ts';
+import { useDeferredValue, useId, useMemo, useState } from 'react';
+import { useUrlSettings } from '@/features/workbench/form/use-url-settings.ts';
 import { displacementUnits, voltageUnits } from '@shared/units.ts';
 import { CsvFileInput } from '@/components/ui/csv-file-input.tsx';
 import { Field, inputClass } from '@/components/ui/form-bits.tsx';
@@ -14,25 +13,19 @@ import { SaveLinearisation } from '@/features/builds/components/record/save-line
 import { useSession } from '@/features/session/api/get-session.ts';
 
 const DEGREES = ['auto', '1', '2', '3', '4', '5'] as const;
-const pick = (v: string | null, allowed: readonly string[], fallback: string) => (v !== null && allowed.includes(v) ? v : fallback);
+const SETTINGS = {
+  voltageUnit: { param: 'vu', fallback: 'V', allowed: voltageUnits },
+  displacementUnit: { param: 'du', fallback: 'um', allowed: displacementUnits },
+  degree: { param: 'deg', fallback: 'auto', allowed: DEGREES },
+  stepNm: { param: 'step', fallback: '' },
+};
 
 export function LinearisePage() {
   const textId = useId();
   const session = useSession();
-  const [params, setParams] = useSearchParams();
   const [text, setText] = useState(exampleLoop);
-  const [voltageUnit, setVoltageUnit] = useState(() => pick(params.get('vu'), voltageUnits, 'V'));
-  const [displacementUnit, setDisplacementUnit] = useState(() => pick(params.get('du'), displacementUnits, 'um'));
-  const [degree, setDegree] = useState(() => pick(params.get('deg'), DEGREES, 'auto'));
-  const [stepNm, setStepNm] = useState(() => params.get('step') ?? '');
-  useEffect(() => {
-    const next = new URLSearchParams();
-    if (voltageUnit !== 'V') next.set('vu', voltageUnit);
-    if (displacementUnit !== 'um') next.set('du', displacementUnit);
-    if (degree !== 'auto') next.set('deg', degree);
-    if (stepNm.trim()) next.set('step', stepNm.trim());
-    if (next.toString() !== params.toString()) setParams(next, { replace: true, preventScrollReset: true, state: URL_INPUTS_STATE });
-  }, [voltageUnit, displacementUnit, degree, stepNm, params, setParams]);
+  const [settings, set] = useUrlSettings(SETTINGS);
+  const { voltageUnit, displacementUnit, degree, stepNm } = settings;
   const deferred = useDeferredValue(text);
   const r = useMemo(
     () => previewLinearise(deferred, { voltageUnit, displacementUnit, degree, stepNm }),
@@ -71,7 +64,7 @@ export function LinearisePage() {
             </section>
             <section aria-label="Settings" className="grid gap-3 rounded-lg border border-rule bg-white p-4 sm:grid-cols-2">
               <Field id="lin-vu" label="Voltage unit">
-                <select id="lin-vu" className={inputClass} value={voltageUnit} onChange={(e) => setVoltageUnit(e.target.value)}>
+                <select id="lin-vu" className={inputClass} value={voltageUnit} onChange={(e) => set('voltageUnit', e.target.value)}>
                   {voltageOptions.map((o) => (
                     <option key={o.value} value={o.value}>
                       {o.label}
@@ -80,7 +73,12 @@ export function LinearisePage() {
                 </select>
               </Field>
               <Field id="lin-du" label="Displacement unit">
-                <select id="lin-du" className={inputClass} value={displacementUnit} onChange={(e) => setDisplacementUnit(e.target.value)}>
+                <select
+                  id="lin-du"
+                  className={inputClass}
+                  value={displacementUnit}
+                  onChange={(e) => set('displacementUnit', e.target.value)}
+                >
                   {displacementOptions.map((o) => (
                     <option key={o.value} value={o.value}>
                       {o.label}
@@ -89,7 +87,7 @@ export function LinearisePage() {
                 </select>
               </Field>
               <Field id="lin-degree" label="Polynomial degree" hint="Auto: the smallest degree the data support (F-test at 5 %).">
-                <select id="lin-degree" className={inputClass} value={degree} onChange={(e) => setDegree(e.target.value)}>
+                <select id="lin-degree" className={inputClass} value={degree} onChange={(e) => set('degree', e.target.value)}>
                   {DEGREES.map((d) => (
                     <option key={d} value={d}>
                       {d === 'auto' ? 'Auto' : d}
@@ -103,7 +101,7 @@ export function LinearisePage() {
                   inputMode="decimal"
                   className={inputClass}
                   value={stepNm}
-                  onChange={(e) => setStepNm(e.target.value)}
+                  onChange={(e) => set('stepNm', e.target.value)}
                 />
               </Field>
             </section>

@@ -1,9 +1,8 @@
 // The sine-fit page's state: the CSV text, the column mapping and units, the known frequency, and
 // what they give — the parsed SineFitInput (what POST /api/workbench/sine-fit and a sine-record run
 // take) and the shared calculator's result for it (the page's live result; the API answers the same).
-import { useDeferredValue, useEffect, useMemo, useState } from 'react';
-import { useSearchParams } from 'react-router-dom';
-import { URL_INPUTS_STATE } from '@/features/workbench/form/inputs-write-state.ts';
+import { useDeferredValue, useMemo, useState } from 'react';
+import { useUrlSettings } from '@/features/workbench/form/use-url-settings.ts';
 import { displacementUnits, voltageUnits } from '@shared/units.ts';
 import { sineFitInput, type SineFitInput } from '@shared/schemas/sine-fit.ts';
 import type { DisplacementUnit, VoltageUnit } from '@shared/units.ts';
@@ -30,9 +29,13 @@ function fitOutcome(input: SineFitInput | null, why: string): SineFitOutcome {
   }
 }
 
-/** A value from the link when it is one of the allowed ones, else the default. */
-const pick = <T extends string>(v: string | null, allowed: readonly T[], fallback: T): T =>
-  (allowed as readonly string[]).includes(v ?? '') ? (v as T) : fallback;
+/** Units and the known frequency live in the link (the record itself does not: it can be megabytes). */
+const SETTINGS = {
+  timeUnit: { param: 'tu', fallback: 's', allowed: Object.keys(timeUnits) },
+  voltageUnit: { param: 'vu', fallback: 'V', allowed: voltageUnits },
+  displacementUnit: { param: 'du', fallback: 'um', allowed: displacementUnits },
+  frequencyText: { param: 'f', fallback: '' },
+};
 
 /**
  * Everything the sine-fit page holds and derives. `input` is the parsed record in the shape of
@@ -42,20 +45,11 @@ const pick = <T extends string>(v: string | null, allowed: readonly T[], fallbac
 export function useSineRecord() {
   const [text, setText] = useState(exampleSineRecord);
   const [mappingChoice, setMapping] = useState<ColumnMapping | null>(null);
-  // Units and the known frequency live in the link (the record itself does not: it can be megabytes).
-  const [params, setParams] = useSearchParams();
-  const [timeUnit, setTimeUnit] = useState<TimeUnit>(() => pick(params.get('tu'), Object.keys(timeUnits) as TimeUnit[], 's'));
-  const [voltageUnit, setVoltageUnit] = useState<VoltageUnit>(() => pick(params.get('vu'), voltageUnits, 'V'));
-  const [displacementUnit, setDisplacementUnit] = useState<DisplacementUnit>(() => pick(params.get('du'), displacementUnits, 'um'));
-  const [frequencyText, setFrequencyText] = useState(() => params.get('f') ?? '');
-  useEffect(() => {
-    const next = new URLSearchParams();
-    if (timeUnit !== 's') next.set('tu', timeUnit);
-    if (voltageUnit !== 'V') next.set('vu', voltageUnit);
-    if (displacementUnit !== 'um') next.set('du', displacementUnit);
-    if (frequencyText.trim()) next.set('f', frequencyText.trim());
-    if (next.toString() !== params.toString()) setParams(next, { replace: true, preventScrollReset: true, state: URL_INPUTS_STATE });
-  }, [timeUnit, voltageUnit, displacementUnit, frequencyText, params, setParams]);
+  const [settings, set] = useUrlSettings(SETTINGS);
+  const timeUnit = settings.timeUnit as TimeUnit;
+  const voltageUnit = settings.voltageUnit as VoltageUnit;
+  const displacementUnit = settings.displacementUnit as DisplacementUnit;
+  const { frequencyText } = settings;
   const deferredText = useDeferredValue(text);
 
   const table: SineTable = useMemo(() => readSineTable(deferredText), [deferredText]);
@@ -90,13 +84,13 @@ export function useSineRecord() {
     mapping,
     setMapping,
     timeUnit,
-    setTimeUnit,
+    setTimeUnit: (v: TimeUnit) => set('timeUnit', v),
     voltageUnit,
-    setVoltageUnit,
+    setVoltageUnit: (v: VoltageUnit) => set('voltageUnit', v),
     displacementUnit,
-    setDisplacementUnit,
+    setDisplacementUnit: (v: DisplacementUnit) => set('displacementUnit', v),
     frequencyText,
-    setFrequencyText,
+    setFrequencyText: (v: string) => set('frequencyText', v),
     frequencyError,
     samples: parsed.samples,
     problems: parsed.problems as readonly RowProblem[],
