@@ -36,14 +36,7 @@ export function makerRunChecks(
   fit: RunFit,
   actuator: { maxVolts: number | null; expectedGainNmPerV: number | null; partMedianNmPerV: number | null },
 ): { flags: MakerFlag[]; overLimit: string | null } {
-  // The part's median stands in for its accepted gains: the unit-slip check needs only the median;
-  // the outlier check needs three runs and stays on the review desk.
-  const accepted = actuator.partMedianNmPerV !== null ? [actuator.partMedianNmPerV] : [];
-  const flags = plausibilityFlags(
-    { kind: input.kind, n: fit.n, gainNmPerV: fit.gainNmPerV, r2: fit.r2, hysteresisPctFs: fit.hysteresisPctFs },
-    accepted,
-    actuator.expectedGainNmPerV,
-  ).map((f) => ({ ...f, advice: flagAdvice[f.code] }));
+  const flags = storedRunFlags({ kind: input.kind, fit }, actuator);
   const peak = runPeakVolts(input);
   const overLimit =
     actuator.maxVolts !== null && peak > Math.abs(actuator.maxVolts)
@@ -57,6 +50,8 @@ export function storedRunFlags(
   run: { kind: CreateRunInput['kind']; fit: { n: number; gainNmPerV: number; r2: number | null; hysteresisPctFs: number | null } },
   actuator: { expectedGainNmPerV: number | null; partMedianNmPerV: number | null },
 ): MakerFlag[] {
+  // The part's median stands in for its accepted gains: the unit-slip check needs only the median;
+  // the outlier check needs three runs and stays on the review desk.
   const accepted = actuator.partMedianNmPerV !== null ? [actuator.partMedianNmPerV] : [];
   return plausibilityFlags({ kind: run.kind, ...run.fit }, accepted, actuator.expectedGainNmPerV).map((f) => ({
     ...f,

@@ -1,6 +1,7 @@
 import { useDeferredValue, useId, useMemo, useState } from 'react';
 import { CsvFileInput } from '@/components/ui/csv-file-input.tsx';
 import { useUrlSettings } from '@/features/workbench/form/use-url-settings.ts';
+import { parseOptionalNumber } from '@/lib/csv/number-text.ts';
 import { Field, inputClass } from '@/components/ui/form-bits.tsx';
 import { NoResult, ResultNotesBlock } from '@/features/workbench/components/results.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
@@ -28,8 +29,8 @@ const PRESETS = [
 const LARGE_TEXT = 200_000;
 
 const positive = (s: string): number | undefined => {
-  const v = Number(s.trim().replace(',', '.'));
-  return s.trim() !== '' && Number.isFinite(v) && v > 0 ? v : undefined;
+  const v = parseOptionalNumber(s);
+  return v !== undefined && Number.isFinite(v) && v > 0 ? v : undefined;
 };
 
 export function LatticePage() {

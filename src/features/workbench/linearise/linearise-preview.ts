@@ -1,6 +1,7 @@
 import { lineariseInput, type LineariseInput } from '@shared/schemas/linearise.ts';
 import { lineariseCalculator } from '@shared/workbench/calculators/linearise-calculator.ts';
 import { checkFitRows, rowsFromCsv, type CheckedRows } from '@/lib/csv/points-csv.ts';
+import { parseOptionalNumber } from '@/lib/csv/number-text.ts';
 
 /** The page's result, or why there is none in words. */
 export type LinearisePreview =
@@ -14,13 +15,13 @@ export function previewLinearise(
 ): LinearisePreview {
   const read = rowsFromCsv(text);
   const checked = checkFitRows(read.rows, read.note);
-  const step = Number(settings.stepNm.replace(',', '.'));
+  const step = parseOptionalNumber(settings.stepNm);
   const parsed = lineariseInput.safeParse({
     points: checked.points,
     voltageUnit: settings.voltageUnit,
     displacementUnit: settings.displacementUnit,
     degree: settings.degree === 'auto' ? 'auto' : Number(settings.degree),
-    ...(settings.stepNm.trim() && step > 0 ? { stepNm: step } : {}),
+    ...(step !== undefined && step > 0 ? { stepNm: step } : {}),
   });
   if (!parsed.success)
     return {
