@@ -71,9 +71,11 @@ function multipartSchema(m: NonNullable<RouteDoc['multipart']>): JsonSchema {
     properties[name] =
       f.type === 'binary[]'
         ? { type: 'array', items: { type: 'string', contentMediaType: 'application/octet-stream' }, description: f.description }
-        : f.type === 'string | string[]'
-          ? { oneOf: [{ type: 'string' }, { type: 'array', items: { type: 'string' } }], description: f.description }
-          : { type: f.type, description: f.description };
+        : f.type === 'binary'
+          ? { type: 'string', contentMediaType: 'application/octet-stream', description: f.description }
+          : f.type === 'string | string[]'
+            ? { oneOf: [{ type: 'string' }, { type: 'array', items: { type: 'string' } }], description: f.description }
+            : { type: f.type, description: f.description };
   }
   return {
     type: 'object',

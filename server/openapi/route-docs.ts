@@ -58,9 +58,9 @@ export type AuthNeed = 'visitor' | 'session' | 'session-or-token';
 
 export type DocMethod = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
-/** A multipart photo upload: the `photos` files and these text fields (described by hand: multer reads them). */
+/** A multipart upload: photos, or one image to decode, and these text fields (described by hand: multer reads them). */
 interface MultipartBody {
-  kind: 'photos';
+  kind: 'photos' | 'image';
   fields: Record<string, { type: string; description: string; required?: boolean }>;
 }
 
@@ -193,6 +193,24 @@ const workbenchDocs: RouteDoc[] = calculators.map((c) => ({
   errors: [413, 429],
   ...(WORKBENCH_EXAMPLES[c.slug] ? { example: WORKBENCH_EXAMPLES[c.slug] } : {}),
 }));
+
+const imageHeightsDoc: RouteDoc = {
+  method: 'POST',
+  path: '/api/workbench/image-heights',
+  summary: 'Decode a greyscale PNG or TIFF height image into rows of numbers (for the lattice calculation)',
+  description:
+    'Nothing is stored. 8- and 16-bit PNG and TIFF, and 32-bit float TIFF; colour becomes the mean of R, G and B. At most 1024 × 1024 ' +
+    'pixels (400 `image_too_large`), at least 16 × 16 (`image_too_small`); other formats 415 `unsupported_image`; unreadable files 400 ' +
+    '`unreadable_image`. Answers `{ format, width, height, bitDepth, heights }`, the rows ready for POST /api/workbench/lattice.',
+  tag: 'Workbench',
+  auth: 'visitor',
+  multipart: {
+    kind: 'image',
+    fields: { image: { type: 'binary', description: 'One PNG or TIFF file, at most 8 MB.', required: true } },
+  },
+  response: json(200, 'The image as rows of numbers, top row first.'),
+  errors: [413, 415, 429],
+};
 
 const datasetFile = (file: string, summary: string, contentType: string): RouteDoc => ({
   method: 'GET',
@@ -962,6 +980,7 @@ export const ROUTE_DOCS: readonly RouteDoc[] = [
   ...attachedPhotoDocs('/api/listings', 'listingId', 'Exchange', 'listing', listingIdParams, listingPhotoParams),
   // Workbench
   ...workbenchDocs,
+  imageHeightsDoc,
 ];
 
 /** Tags in the order the document and the reference page list them, each with a line of its own. */

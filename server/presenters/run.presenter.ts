@@ -1,3 +1,4 @@
+import type { LatticeRunFiguresDto } from '@shared/schemas/lattice.ts';
 import type { PeakToPeakReadingDto, RunDto, RunPlotPoint, SineRecordFitDto } from '@shared/schemas/run.ts';
 import { thinPlot } from '@shared/workbench/run-fit.ts';
 import type { CalibrationRun } from '../models/calibration-run.model.ts';
@@ -9,6 +10,7 @@ export interface RunDetail {
   reading?: PeakToPeakReadingDto;
   gainBoundsNmPerV?: [number, number];
   sine?: SineRecordFitDto;
+  lattice?: LatticeRunFiguresDto;
 }
 
 /** The run columns a presenter reads: every column but the raw record. */
@@ -86,10 +88,11 @@ export function presentRun(r: CalibrationRun, plotMax?: number): RunDto {
       hysteresisPctFs: r.hysteresisPctFs,
       ...(detail.gainBoundsNmPerV ? { gainBoundsNmPerV: detail.gainBoundsNmPerV } : {}),
       ...(detail.sine ? { sine: detail.sine } : {}),
+      ...(detail.lattice ? { lattice: detail.lattice } : {}),
     },
     pointCount: r.pointCount,
     points,
-    decimated: points.length < r.pointCount && r.kind !== 'peak-to-peak',
+    decimated: points.length < r.pointCount && r.kind !== 'peak-to-peak' && r.kind !== 'lattice',
     reading: detail.reading ?? null,
     reviewNote: r.reviewNote,
     createdAt: r.createdAt.toISOString(),

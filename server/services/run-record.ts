@@ -28,17 +28,19 @@ export function storedRunInput(r: CalibrationRun, change: UpdateRunInput): unkno
     measuredOn: r.measuredOn,
   };
   const own =
-    r.kind === 'points'
-      ? { model: r.model, points: JSON.parse(r.pointsJson) as unknown }
-      : r.kind === 'sine-record'
-        ? { samples: JSON.parse(r.pointsJson) as unknown, frequencyHz: detail.sine?.frequencyKnown ? detail.sine.frequencyHz : undefined }
-        : {
-            displacementPp: detail.reading?.displacementPp,
-            voltsPp: detail.reading?.voltsPp,
-            displacementResolution: detail.reading?.displacementResolution,
-            voltsResolution: detail.reading?.voltsResolution,
-            frequencyHz: detail.reading?.frequencyHz,
-          };
+    r.kind === 'lattice'
+      ? (JSON.parse(r.pointsJson) as Record<string, unknown>)
+      : r.kind === 'points'
+        ? { model: r.model, points: JSON.parse(r.pointsJson) as unknown }
+        : r.kind === 'sine-record'
+          ? { samples: JSON.parse(r.pointsJson) as unknown, frequencyHz: detail.sine?.frequencyKnown ? detail.sine.frequencyHz : undefined }
+          : {
+              displacementPp: detail.reading?.displacementPp,
+              voltsPp: detail.reading?.voltsPp,
+              displacementResolution: detail.reading?.displacementResolution,
+              voltsResolution: detail.reading?.voltsResolution,
+              frequencyHz: detail.reading?.frequencyHz,
+            };
   return present({ ...common, ...own, ...(change as Record<string, unknown>) });
 }
 
@@ -47,6 +49,7 @@ const OTHER_KIND_FIELDS: Record<RunKind, readonly string[]> = {
   points: ['displacementPp', 'voltsPp', 'displacementResolution', 'voltsResolution', 'frequencyHz', 'samples'],
   'peak-to-peak': ['points', 'model', 'samples'],
   'sine-record': ['points', 'model', 'displacementPp', 'voltsPp', 'displacementResolution', 'voltsResolution'],
+  lattice: ['points', 'model', 'samples', 'displacementPp', 'voltsPp', 'displacementResolution', 'voltsResolution', 'frequencyHz'],
 };
 
 /** Refuse a change that names fields this kind of run does not have (400 naming the field). */

@@ -33,7 +33,21 @@ export function runColumns(input: CreateRunInput, fit: RunFit) {
   }
   if (fit.gainBoundsNmPerV) detail.gainBoundsNmPerV = fit.gainBoundsNmPerV;
   if (fit.sine) detail.sine = fit.sine;
-  const record = input.kind === 'points' ? input.points : input.kind === 'sine-record' ? input.samples : [];
+  if (fit.lattice) detail.lattice = fit.lattice;
+  const record =
+    input.kind === 'points'
+      ? input.points
+      : input.kind === 'sine-record'
+        ? input.samples
+        : input.kind === 'lattice'
+          ? {
+              lattice: input.lattice,
+              image: input.image,
+              scanSpanV: input.scanSpanV,
+              peaks: input.peaks,
+              quadrantPeaks: input.quadrantPeaks,
+            }
+          : [];
   return {
     kind: input.kind,
     method: input.method,
@@ -88,7 +102,7 @@ async function assertBuildBudget(buildId: number, adding: number, transaction: T
 export async function createRun(actor: Actor | null, actuatorId: number, input: CreateRunInput): Promise<RunDto> {
   const run = await Build.sequelize!.transaction(async (transaction) => {
     const { actuator, build } = await loadActuatorForEdit(actor, actuatorId, transaction);
-    const fit = asBadRequest(() => fitRun(input));
+    const fit = asBadRequest(() => fitRun(input, actuator.axis));
     await assertBuildBudget(build.id, recordedCount(input), transaction);
     const r = await CalibrationRun.create(
       { actuatorId, buildId: build.id, partId: actuator.partId, ownerId: build.ownerId, ...runColumns(input, fit) },
@@ -130,10 +144,10 @@ export async function updateRun(actor: Actor | null, runId: number, change: Upda
   const run = await Build.sequelize!.transaction(async (transaction) => {
     const r = await CalibrationRun.findByPk(runId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!r) throw new NotFoundError('No such calibration run.');
-    const { build } = await loadActuatorForEdit(actor, r.actuatorId, transaction);
+    const { actuator, build } = await loadActuatorForEdit(actor, r.actuatorId, transaction);
     assertChangeFitsKind(r.kind, change);
     const merged = createRunInput.parse(storedRunInput(r, change));
-    const fit = asBadRequest(() => fitRun(merged));
+    const fit = asBadRequest(() => fitRun(merged, actuator.axis));
     await assertBuildBudget(build.id, recordedCount(merged), transaction, r);
     const wasAccepted = r.status === 'accepted';
     await r.update(

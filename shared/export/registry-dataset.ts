@@ -238,7 +238,7 @@ The pooled figures count every accepted run of the part; runs.csv lists those wh
 | part_id, part_name | the registry part the actuator uses |
 | build_id, build_title, maker | the build and its maker (their Scanwright handle) |
 | run_id | run id |
-| kind | points (a calibration curve), peak-to-peak (two readings under a sine) or sine-record (a sampled record fitted with the IEEE Std 1057 sine fit) |
+| kind | points (a calibration curve), peak-to-peak (two readings under a sine), sine-record (a sampled record, IEEE Std 1057 sine fit) or lattice (a lattice in a scan image) |
 | method | how displacement was measured: indicator, capacitive, interferometer, optical-lever, reference-sample |
 | status | accepted |
 | measured_on | the day of the measurement, if given (YYYY-MM-DD) |
@@ -265,7 +265,9 @@ maker recorded them, in the run's own units, named in each column: \`volts_V\` o
 
 - points runs: volts, displacement, \`sweep\` (up, down or empty);
 - sine-record runs: \`time_s\` (seconds), volts, displacement;
-- peak-to-peak runs: one row with the \`…_peak_to_peak\` readings, their \`…_resolution\` and \`frequency_hz\`.
+- peak-to-peak runs: one row with the \`…_peak_to_peak\` readings, their \`…_resolution\` and \`frequency_hz\`;
+- lattice runs (gain: the actuator's axis, or the mean of x and y on an XY actuator): one row per measured reciprocal vector, \`kx_cycles_per_px\` and \`ky_cycles_per_px\`, of the whole
+  image and of each quarter (\`image_part\`, \`vector\`); the lattice, image size and drive spans are in the run's JSON.
 
 ## dataset.json
 

@@ -25,6 +25,16 @@ export function recordTable(run: RunDto, record: readonly unknown[]): { header: 
     const rows = (record as Array<{ timeS: number; volts: number; displacement: number }>).map((s) => [s.timeS, s.volts, s.displacement]);
     return { header: ['time_s', v, x], rows };
   }
+  if (run.kind === 'lattice') {
+    // The stored record is one object: the vectors of the whole image, then of each quarter found.
+    type Vectors = { peaks?: { kx: number; ky: number }[]; quadrantPeaks?: { kx: number; ky: number }[][] };
+    const l: Vectors = Array.isArray(record) ? {} : (record as unknown as Vectors);
+    const rows: Row[] = [
+      ...(l.peaks ?? []).map((k, i) => ['whole', i + 1, k.kx, k.ky]),
+      ...(l.quadrantPeaks ?? []).flatMap((q, j) => q.map((k, i) => [`quarter ${j + 1}`, i + 1, k.kx, k.ky])),
+    ];
+    return { header: ['image_part', 'vector', 'kx_cycles_per_px', 'ky_cycles_per_px'], rows };
+  }
   if (run.kind === 'peak-to-peak') {
     const r = run.reading;
     return {

@@ -21,9 +21,14 @@ export interface MakerFlag extends PlausibilityFlag {
   advice: string;
 }
 
-/** Largest drive a run reaches (V): the largest point, the peak of a sine record, or the top of a peak-to-peak swing (taken as a peak). */
+/**
+ * Largest drive a run reaches (V): the largest point, the peak of a sine record, the top of a peak-to-peak swing
+ * (taken as a peak), or half a lattice scan's span.
+ */
 export function runPeakVolts(input: CreateRunInput): number {
   if (input.kind === 'peak-to-peak') return toVolts(input.voltsPp, input.voltageUnit);
+  // A scan span is swept at least from −V/2 to +V/2 [calc].
+  if (input.kind === 'lattice') return Math.max(input.scanSpanV.x, input.scanSpanV.y) / 2;
   const series = input.kind === 'points' ? input.points : input.samples;
   let m = 0;
   for (const p of series) if (Math.abs(p.volts) > m) m = Math.abs(p.volts);

@@ -1,6 +1,7 @@
 // Plausibility flags for a pending calibration run, shown on the review desk. Each flag names its
 // threshold and why. They help a moderator look; they never decide.
 import { summarize } from '../stats/quantiles.ts';
+import type { RunKind } from '../schemas/run.ts';
 
 /** R² below this on a quasi-static run suggests misread or slipped readings. [practice: a piezo read
  * on an indicator over its range is near-linear; hysteresis alone keeps R² above ~0.98] */
@@ -54,7 +55,7 @@ export interface PlausibilityFlag {
 
 export interface RunForFlags {
   /** Point runs only are judged on their point count (a peak-to-peak reading is two readings by design). Default 'points'. */
-  kind?: 'points' | 'peak-to-peak' | 'sine-record';
+  kind?: RunKind;
   n: number;
   gainNmPerV: number;
   r2: number | null;

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { fitInput, fitPoint, type FitPoint, type FitResultDto } from './workbench.ts';
 import { sineSample } from './sine-fit.ts';
+import { imageVector, latticeRunFigures, type LatticeRunFiguresDto } from './lattice.ts';
 import { displacementUnits, voltageUnits, type DisplacementUnit, type VoltageUnit } from '../units.ts';
 
 export const RUN_METHODS = ['indicator', 'capacitive', 'interferometer', 'optical-lever', 'reference-sample'] as const;
@@ -8,8 +9,11 @@ export type RunMethod = (typeof RUN_METHODS)[number];
 export const RUN_STATUSES = ['pending', 'accepted', 'rejected'] as const;
 export type RunStatus = (typeof RUN_STATUSES)[number];
 
-/** How a run was recorded: calibration points, one peak-to-peak reading of a sine drive, or a sampled sine record. */
-export const RUN_KINDS = ['points', 'peak-to-peak', 'sine-record'] as const;
+/**
+ * How a run was recorded: calibration points, one peak-to-peak reading of a sine drive, a sampled sine record, or
+ * the lattice of a reference sample read off a scan image (lateral axes).
+ */
+export const RUN_KINDS = ['points', 'peak-to-peak', 'sine-record', 'lattice'] as const;
 export type RunKind = (typeof RUN_KINDS)[number];
 
 /** Most points or samples one run may hold (the raw record; pages show a decimated series). */
@@ -31,6 +35,7 @@ export const runKindLabels: Record<RunKind, string> = {
   points: 'Calibration points',
   'peak-to-peak': 'Peak-to-peak reading',
   'sine-record': 'Sine record',
+  lattice: 'Lattice image',
 };
 
 /** DC steps, or a sine with its frequency and amplitude. */
@@ -92,12 +97,32 @@ export const sineRecordRunInput = z.strictObject({
   ...runCommon,
 });
 
+/**
+ * The lattice of a reference sample in a scan image: the reciprocal vectors measured on the whole image and on
+ * its quarters (cycles per pixel, as the lattice page finds them), the image's size and the drive span of each
+ * axis. The server solves the pixel → nm map and the ± from them (lattice-figures.ts). The run counts with the
+ * gain of its actuator's axis: x or y, or for an XY actuator the mean of the two (a part that drives both).
+ */
+export const latticeRunInput = z.strictObject({
+  kind: z.literal('lattice'),
+  lattice: latticeRunFigures.shape.lattice,
+  image: latticeRunFigures.shape.image,
+  scanSpanV: latticeRunFigures.shape.scanSpanV,
+  peaks: z.array(imageVector).length(2),
+  quadrantPeaks: z.array(z.array(imageVector).length(2)).min(3).max(4),
+  voltageUnit: z.literal('V').default('V'),
+  displacementUnit: z.literal('nm').default('nm'),
+  ...runCommon,
+  method: z.literal('reference-sample').default('reference-sample'),
+});
+
 /** A calibration run as recorded; the server computes the fit from it. */
-export const createRunInput = z.discriminatedUnion('kind', [pointsRunInput, peakToPeakRunInput, sineRecordRunInput]);
+export const createRunInput = z.discriminatedUnion('kind', [pointsRunInput, peakToPeakRunInput, sineRecordRunInput, latticeRunInput]);
 export type CreateRunInput = z.infer<typeof createRunInput>;
 export type PointsRunInput = z.infer<typeof pointsRunInput>;
 export type PeakToPeakRunInput = z.infer<typeof peakToPeakRunInput>;
 export type SineRecordRunInput = z.infer<typeof sineRecordRunInput>;
+export type LatticeRunInput = z.infer<typeof latticeRunInput>;
 
 /**
  * A change to a run: any of its recorded fields (of its own kind; `kind` cannot change). The server merges
@@ -138,7 +163,8 @@ export type RunRecordData =
       | 'voltsResolution'
       | 'frequencyHz'
     >
-  | Pick<SineRecordRunInput, 'kind' | 'samples' | 'voltageUnit' | 'displacementUnit' | 'frequencyHz'>;
+  | Pick<SineRecordRunInput, 'kind' | 'samples' | 'voltageUnit' | 'displacementUnit' | 'frequencyHz'>
+  | Pick<LatticeRunInput, 'kind' | 'lattice' | 'image' | 'scanSpanV' | 'peaks' | 'quadrantPeaks'>;
 
 export const runIdParams = z.strictObject({ runId: z.coerce.number().int().positive() });
 
@@ -169,13 +195,14 @@ export interface SineRecordFitDto {
 /**
  * A stored fit. Point runs have the least-squares figures and a 95 % interval; peak-to-peak and sine
  * runs have a standard uncertainty (k = 1) instead (`gainCi95NmPerV` null), peak-to-peak runs also
- * the worst-case bounds, sine runs the sine fit.
+ * the worst-case bounds, sine runs the sine fit, lattice runs both axes' figures.
  */
 export interface RunFitDto extends Omit<FitResultDto, 'gainCi95NmPerV'> {
   gainCi95NmPerV: [number, number] | null;
   gainStdUncertaintyNmPerV: number;
   gainBoundsNmPerV?: [number, number];
   sine?: SineRecordFitDto;
+  lattice?: LatticeRunFiguresDto;
 }
 
 /** A point of the plot series a page draws: the recorded points, or a decimated series of a large run or record. */

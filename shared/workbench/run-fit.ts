@@ -5,13 +5,17 @@
 //   rectangular ±r/2 so a difference of two readings has u = r/√6, and the exact worst-case bounds
 //   (peak-to-peak.ts) [S: JCGM 100:2008 (GUM) 4.3.7, 5.1.2 — memory for the clauses];
 // - sine-record: the IEEE Std 1057 sine fit of each channel (sine-fit.ts), gain = displacement
-//   amplitude ÷ drive amplitude.
+//   amplitude ÷ drive amplitude;
+// - lattice: both lateral axes solved from the image's reciprocal vectors (lattice-run-fit.ts).
+import type { ActuatorAxis } from '../schemas/actuator.ts';
+import type { LatticeRunFiguresDto } from '../schemas/lattice.ts';
 import type { CreateRunInput, PeakToPeakRunInput, RunPlotPoint, SineRecordFitDto } from '../schemas/run.ts';
 import { toNm, toVolts } from '../units.ts';
 import { lttb } from '../stats/lttb.ts';
 import { fitCalibrationInUnits } from './calibration-fit.ts';
 import { peakToPeakGain } from './peak-to-peak.ts';
 import { fitSineRecord } from './sine-fit.ts';
+import { fitLatticeRun } from './lattice-run-fit.ts';
 
 /** Points a stored plot series holds at most (LTTB keeps the shape; the raw record is in the export). */
 export const PLOT_POINTS = 2000;
@@ -31,6 +35,7 @@ export interface RunFit {
   hysteresisPctFs: number | null;
   gainBoundsNmPerV?: [number, number];
   sine?: SineRecordFitDto;
+  lattice?: LatticeRunFiguresDto;
 }
 
 /** Gain of one peak-to-peak reading, in the run's units. */
@@ -55,9 +60,28 @@ export function fitPeakToPeakRun(input: PeakToPeakRunInput): RunFit {
   };
 }
 
-/** The fit stored with a run of any kind (throws the fits' own refusals, which the API turns into 400s). */
-export function fitRun(input: CreateRunInput): RunFit {
+/**
+ * The fit stored with a run of any kind (throws the fits' own refusals, which the API turns into 400s). A
+ * lattice run needs its actuator's axis: it says which gain the run counts with (without one, the mean of x and y).
+ */
+export function fitRun(input: CreateRunInput, axis?: ActuatorAxis): RunFit {
   if (input.kind === 'peak-to-peak') return fitPeakToPeakRun(input);
+  if (input.kind === 'lattice') {
+    const l = fitLatticeRun(input, axis ?? 'XY');
+    return {
+      n: 2,
+      gainNmPerV: l.gainNmPerV,
+      gainStdUncertaintyNmPerV: l.gainStdUncertaintyNmPerV,
+      gainCi95NmPerV: null,
+      interceptNm: 0,
+      r2: null,
+      residualStdNm: null,
+      spanNm: l.spanNm,
+      nonlinearityPctFs: null,
+      hysteresisPctFs: null,
+      lattice: l.lattice,
+    };
+  }
   if (input.kind === 'sine-record') {
     const s = fitSineRecord({
       samples: input.samples,
@@ -107,15 +131,17 @@ export function fitRun(input: CreateRunInput): RunFit {
 export function recordedCount(input: CreateRunInput): number {
   if (input.kind === 'points') return input.points.length;
   if (input.kind === 'sine-record') return input.samples.length;
+  if (input.kind === 'lattice') return input.peaks.length * (1 + input.quadrantPeaks.length);
   return 2;
 }
 
 /**
  * The series a page plots, in the run's units: a point run's points, a sine record's (drive, displacement)
- * loop, or nothing for a peak-to-peak reading; at most `max` points, chosen by LTTB along the record.
+ * loop, or nothing for a peak-to-peak reading or a lattice image; at most `max` points, chosen by LTTB along the
+ * record.
  */
 export function plotSeries(input: CreateRunInput, max = PLOT_POINTS): RunPlotPoint[] {
-  if (input.kind === 'peak-to-peak') return [];
+  if (input.kind === 'peak-to-peak' || input.kind === 'lattice') return [];
   const series: RunPlotPoint[] =
     input.kind === 'points' ? input.points : input.samples.map((s) => ({ volts: s.volts, displacement: s.displacement }));
   return lttb(series, max, (p) => p.displacement);

@@ -55,6 +55,7 @@ const expected: Record<string, Row> = {
   'POST /api/workbench/sine-fit': [200, 200, 200, 200, 200, 200],
   'POST /api/workbench/linearise': [200, 200, 200, 200, 200, 200],
   'POST /api/workbench/lattice': [200, 200, 200, 200, 200, 200],
+  'POST /api/workbench/image-heights': [200, 200, 200, 200, 200, 200],
 
   'POST /api/builds/:buildId/photos': [401, 201, 404, 403, 403, 403],
   'PUT /api/builds/:buildId/photos/order': [401, 200, 404, 403, 403, 403],

@@ -31,6 +31,7 @@ import { setRoleInput, setSuspendedInput } from '@shared/schemas/user.ts';
 import { OutboxMail } from '../../server/models/outbox-mail.model.ts';
 import { MAX_ATTEMPTS } from '../../server/services/outbox.service.ts';
 import { createApiTokenInput } from '@shared/schemas/api-token.ts';
+import { encode as encodePng } from 'fast-png';
 import * as wb from '@shared/schemas/workbench.ts';
 import * as wbx from '@shared/schemas/workbench-extras.ts';
 import { sineFitInput } from '@shared/schemas/sine-fit.ts';
@@ -73,8 +74,8 @@ export interface Target {
   params?: Record<string, number>;
   /** JSON body; absent for routes that take none. */
   body?: Record<string, unknown>;
-  /** Multipart upload instead of JSON (photos). */
-  multipart?: { files: Buffer[]; fields: Record<string, string> };
+  /** Multipart upload instead of JSON (photos, or one image in `field`). */
+  multipart?: { files: Buffer[]; fields: Record<string, string>; field?: string; contentType?: string };
   /** A cheap read of everything the route could change: equal before and after a refusal. */
   state(): Promise<unknown>;
   /** After a 2xx: the change the route promises really happened. */
@@ -242,7 +243,10 @@ export function send(
   if (target.multipart) {
     for (const [name, value] of Object.entries(target.multipart.fields)) req = req.field(name, value);
     for (const [i, file] of target.multipart.files.entries())
-      req = req.attach('photos', file, { filename: `p${i}.jpg`, contentType: 'image/jpeg' });
+      req = req.attach(target.multipart.field ?? 'photos', file, {
+        filename: `p${i}.${target.multipart.contentType === 'image/png' ? 'png' : 'jpg'}`,
+        contentType: target.multipart.contentType ?? 'image/jpeg',
+      });
     return req;
   }
   return target.body === undefined ? req : req.send(target.body);
@@ -435,6 +439,24 @@ export const fixtures: Record<string, Fixture> = {
     { points: [0, 10, 20, 30, 40].map((v) => ({ volts: v, displacement: 80 * v + 0.1 * v * v })), displacementUnit: 'nm', degree: 2 },
     'table',
   ),
+  'POST /api/workbench/image-heights': {
+    allowed: 'owner',
+    async make() {
+      const pixels = Uint16Array.from({ length: 32 * 32 }, (_, i) => (i % 32) * 1000);
+      return {
+        multipart: {
+          files: [Buffer.from(encodePng({ width: 32, height: 32, data: pixels, depth: 16, channels: 1 }))],
+          fields: {},
+          field: 'image',
+          contentType: 'image/png',
+        },
+        state: async () => null,
+        async changed(res) {
+          expect(res.body).toMatchObject({ width: 32, height: 32, bitDepth: 16 });
+        },
+      };
+    },
+  },
   'POST /api/workbench/lattice': workbench(
     latticeInput,
     {

@@ -2,11 +2,9 @@
 // spans, warnings (weak peaks, few periods, the every-other-atom trap) and the cautions for the drive span.
 import { latticeInput, type LatticeInput } from '../../schemas/lattice.ts';
 import { analyseLattice, MIN_PERIODS, WEAK_PEAK_RATIO, type LatticeAnalysis } from '../lattice.ts';
+import { latticeFigures, MIN_QUADRANTS } from '../lattice-figures.ts';
 import { assessSafety } from '../safety.ts';
 import { defineCalculator, type ResultWarning } from './calculator.ts';
-
-/** Lines within this angle of an axis let a grating's scale stand for that axis's gain [practice]. */
-const AXIS_ALIGNED_DEG = 5;
 
 export function latticeWarnings(r: LatticeAnalysis, kind: string): ResultWarning[] {
   const warnings: ResultWarning[] = [];
@@ -56,44 +54,28 @@ export function latticeWarnings(r: LatticeAnalysis, kind: string): ResultWarning
 export function latticeResult(input: Pick<LatticeInput, 'lattice' | 'scanSpanV'>, r: LatticeAnalysis) {
   const warnings = latticeWarnings(r, input.lattice.kind);
   const span = input.scanSpanV;
-  let gainNmPerV: { x: number | null; y: number | null } | undefined;
-  let gainMatrixNmPerV: [[number, number], [number, number]] | undefined;
-  if (span && r.pixelToNm) {
-    // G = A·diag(Nx/Vx, Ny/Vy): the span over the image's N pixels is V/N per pixel [calc].
-    const fx = r.width / span.x;
-    const fy = r.height / span.y;
-    const A = r.pixelToNm;
-    gainMatrixNmPerV = [
-      [A[0][0] * fx, A[0][1] * fy],
-      [A[1][0] * fx, A[1][1] * fy],
-    ];
-    gainNmPerV = {
-      x: Math.hypot(gainMatrixNmPerV[0][0], gainMatrixNmPerV[1][0]),
-      y: Math.hypot(gainMatrixNmPerV[0][1], gainMatrixNmPerV[1][1]),
-    };
-  } else if (span && r.alongNormal) {
-    const n = r.alongNormal.angleDeg;
-    const alongX = Math.abs(n) <= AXIS_ALIGNED_DEG || Math.abs(Math.abs(n) - 180) <= AXIS_ALIGNED_DEG;
-    const alongY = Math.abs(Math.abs(n) - 90) <= AXIS_ALIGNED_DEG;
-    gainNmPerV = {
-      x: alongX ? (r.alongNormal.nmPerPixel * r.width) / span.x : null,
-      y: alongY ? (r.alongNormal.nmPerPixel * r.height) / span.y : null,
-    };
-  }
+  const figures = latticeFigures({
+    lattice: input.lattice,
+    width: r.width,
+    height: r.height,
+    peaks: r.peaks,
+    quadrantPeaks: r.quadrantPeaks,
+    scanSpanV: span,
+  });
+  if (!figures.standardUncertainty)
+    warnings.push({
+      code: 'no_uncertainty',
+      message: `The lattice was found in only ${r.quadrantPeaks.length} of the image's four quarters (at least ${MIN_QUADRANTS} needed): no ± can be given. Image more periods.`,
+    });
   // The span is swept at least from −V/2 to +V/2, so V/2 is the least peak it implies [calc].
   const safety = span ? assessSafety({ peakV: Math.max(span.x, span.y) / 2 }) : { cautions: [], crossed: [] };
   return {
-    nmPerPixel: r.nmPerPixel,
-    skewDeg: r.skewDeg,
-    rotationDeg: r.rotationDeg,
-    alongNormal: r.alongNormal,
-    pixelToNm: r.pixelToNm,
+    ...figures,
     peaks: r.peaks.map(({ kx, ky, magnitude, periodPx, strength }) => ({ kx, ky, magnitude, periodPx, strength })),
+    quadrantPeaks: r.quadrantPeaks,
     width: r.width,
     height: r.height,
     periodsAcross: r.periodsAcross,
-    ...(gainNmPerV ? { gainNmPerV } : {}),
-    ...(gainMatrixNmPerV ? { gainMatrixNmPerV } : {}),
     warnings,
     cautions: safety.cautions,
     levelsCrossed: safety.crossed,
