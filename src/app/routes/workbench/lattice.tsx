@@ -2,12 +2,17 @@ import { useDeferredValue, useId, useMemo, useState } from 'react';
 import { CsvFileInput } from '@/components/ui/csv-file-input.tsx';
 import { useUrlSettings } from '@/features/workbench/form/use-url-settings.ts';
 import { parseOptionalNumber } from '@/lib/csv/number-text.ts';
+import { formatSig } from '@shared/format/measured-number.ts';
 import { Field, inputClass } from '@/components/ui/form-bits.tsx';
 import { NoResult, ResultNotesBlock } from '@/features/workbench/components/results.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { pngToHeights } from '@/features/workbench/lattice/decode-png.ts';
 import { exampleLatticeRows } from '@/features/workbench/lattice/example-image.ts';
-import { HeightImage, SpectrumImage } from '@/features/workbench/lattice/lattice-canvases.tsx';
+import { CorrectedImageCanvas, HeightImage, SpectrumImage } from '@/features/workbench/lattice/lattice-canvases.tsx';
+import { useDecodeImage } from '@/features/workbench/lattice/use-decode-image.ts';
+import { errorMessage } from '@/components/ui/form-bits.tsx';
+import type { RunRecordData } from '@shared/schemas/run.ts';
+import { RecordRunPanel } from './record-run-panel.tsx';
 import { LatticeResults } from '@/features/workbench/lattice/lattice-results.tsx';
 import { parseMatrix } from '@/features/workbench/lattice/parse-matrix.ts';
 import { useLatticeWorker } from '@/features/workbench/lattice/use-lattice-worker.ts';
@@ -66,15 +71,27 @@ export function LatticePage() {
       else setLoadError(parsed.message);
     } else setText(t);
   };
-  const onPng = async (file: File | undefined) => {
+  const decode = useDecodeImage();
+  const onImage = async (file: File | undefined) => {
     if (!file) return;
     setLoadError(null);
+    const isPng = /\.png$/i.test(file.name) || file.type === 'image/png';
     try {
-      const png = pngToHeights(await file.arrayBuffer());
-      setText('');
-      setLoaded({ rows: png.rows, note: `Loaded ${file.name}: ${png.width} × ${png.height} px, ${png.bitDepth}-bit.` });
-    } catch {
-      setLoadError(`${file.name} could not be read as a PNG.`);
+      if (isPng) {
+        // PNGs are read here; TIFFs go to the server, whose decoder (sharp) reads them.
+        const png = pngToHeights(await file.arrayBuffer());
+        setText('');
+        setLoaded({ rows: png.rows, note: `Loaded ${file.name}: ${png.width} × ${png.height} px, ${png.bitDepth}-bit.` });
+      } else {
+        const img = await decode.mutateAsync(file);
+        setText('');
+        setLoaded({
+          rows: img.heights,
+          note: `Loaded ${file.name}: ${img.width} × ${img.height} px, ${img.bitDepth === 32 ? '32-bit float' : `${img.bitDepth}-bit`} ${img.format.toUpperCase()}.`,
+        });
+      }
+    } catch (err) {
+      setLoadError(isPng ? `${file.name} could not be read as a PNG.` : `${file.name}: ${errorMessage(err)}`);
     }
   };
 
@@ -87,6 +104,20 @@ export function LatticePage() {
     return { rows: asArrays, lattice: { kind, constantNm: a }, ...(vx && vy ? { scanSpanV: { x: vx, y: vy } } : {}) };
   }, [rows, kind, a, vx, vy]);
   const state = useLatticeWorker(request);
+  const result = state.status === 'done' && state.reply.ok ? state.reply.result : null;
+  // A run needs a two-dimensional lattice, both spans and the ± (the lattice found in at least three quarters).
+  const runData: RunRecordData | null = useMemo(() => {
+    if (!result || kind === 'line' || !vx || !vy || !result.standardUncertainty || result.peaks.length !== 2 || a === undefined)
+      return null;
+    return {
+      kind: 'lattice',
+      lattice: { kind, constantNm: a },
+      image: { width: result.width, height: result.height },
+      scanSpanV: { x: vx, y: vy },
+      peaks: result.peaks.map(({ kx, ky }) => ({ kx, ky })),
+      quadrantPeaks: result.quadrantPeaks.map((q) => q.map(({ kx, ky }) => ({ kx, ky }))),
+    };
+  }, [result, kind, vx, vy, a]);
 
   return (
     <ToolPage
@@ -119,15 +150,20 @@ export function LatticePage() {
               <CsvFileInput maxBytes={32 * 1024 * 1024} tooLarge="crop the image to 1024 × 1024 first." onText={onTextFile} />
               <div>
                 <label htmlFor={pngId} className="block text-sm font-medium">
-                  Or load a greyscale PNG (8 or 16 bits)
+                  Or load a greyscale PNG or TIFF (8 or 16 bits, or 32-bit float TIFF)
                 </label>
                 <input
                   id={pngId}
                   type="file"
-                  accept=".png,image/png"
+                  accept=".png,.tif,.tiff,image/png,image/tiff"
                   className="mt-1 block w-full text-sm file:mr-3 file:rounded-md file:border file:border-teal file:bg-white file:px-3 file:py-1 file:text-teal-dark"
-                  onChange={(e) => void onPng(e.target.files?.[0])}
+                  onChange={(e) => void onImage(e.target.files?.[0])}
                 />
+                {decode.isPending && (
+                  <p role="status" className="mt-1 text-xs text-ink-soft">
+                    Reading the TIFF…
+                  </p>
+                )}
               </div>
               {inputProblem && (
                 <p role="alert" className="text-sm text-red-700">
@@ -223,6 +259,31 @@ export function LatticePage() {
                   Thick rings: the peaks used, with their mirror images. Thin rings: other strong peaks.
                 </p>
               </section>
+              {state.reply.corrected && (
+                <section aria-label="Corrected image" className="rounded-lg border border-rule bg-white p-4">
+                  <h2 className="mb-2 text-sm font-semibold uppercase tracking-wide text-ink-soft">
+                    Corrected image, ideal lattice over it
+                  </h2>
+                  <CorrectedImageCanvas
+                    image={state.reply.corrected}
+                    sites={state.reply.sites}
+                    label={`The image redrawn on square ${formatSig(state.reply.corrected.nmPerPixel, 3)} nm pixels, with ${state.reply.sites.length} sites of the ideal ${kind} lattice as dots`}
+                  />
+                  <p className="mt-2 text-xs text-ink-soft">
+                    Redrawn through the solved pixel-to-nm map on square {formatSig(state.reply.corrected.nmPerPixel, 3)} nm pixels
+                    (bilinear). Teal dots: the ideal lattice through the brightest point near the centre. Where the dots drift off the
+                    bright points towards an edge, the scan crept or drifted there.
+                  </p>
+                </section>
+              )}
+              {kind === 'line' ? null : runData ? (
+                <RecordRunPanel data={runData} defaultMethod="reference-sample" />
+              ) : (
+                <p className="rounded-lg border border-dashed border-rule bg-white p-4 text-sm">
+                  To record this as a calibration run of an X, Y or XY actuator, enter both drive spans
+                  {result?.standardUncertainty ? '' : ' (and load an image in which the lattice shows in at least three quarters)'}.
+                </p>
+              )}
             </>
           ) : state.status === 'done' && !state.reply.ok ? (
             <NoResult message={state.reply.message} />

@@ -1,4 +1,5 @@
 import { useEffect, useRef } from 'react';
+import type { CorrectedImage } from '@shared/workbench/lattice-corrected.ts';
 
 /** Grey-scale picture of a height image, lowest black, highest white. */
 export function HeightImage({ rows, label }: { rows: readonly ArrayLike<number>[]; label: string }) {
@@ -97,5 +98,49 @@ export function SpectrumImage({
       aria-label={`Spectrum of the image, log scale, zero frequency in the centre; the ${peaks.length === 1 ? 'chosen peak is' : 'chosen peaks are'} ringed`}
       className="w-full max-w-md rounded border border-rule"
     />
+  );
+}
+
+/** The image redrawn on a square nm grid (outside the scan: paper colour) with the ideal lattice's sites as dots. */
+export function CorrectedImageCanvas({
+  image,
+  sites,
+  label,
+}: {
+  image: CorrectedImage;
+  sites: readonly { x: number; y: number }[];
+  label: string;
+}) {
+  const ref = useRef<HTMLCanvasElement>(null);
+  const { width, height, data } = image;
+  useEffect(() => {
+    const ctx = ref.current?.getContext('2d');
+    if (!ctx) return;
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (let i = 0; i < data.length; i++) {
+      const v = data[i]!;
+      if (v < lo) lo = v;
+      if (v > hi) hi = v;
+    }
+    const span = hi > lo ? hi - lo : 1;
+    const img = ctx.createImageData(width, height);
+    for (let i = 0; i < data.length; i++) {
+      const v = data[i]!;
+      const g = Number.isNaN(v) ? 250 : Math.round(((v - lo) / span) * 255);
+      img.data[4 * i] = img.data[4 * i + 1] = img.data[4 * i + 2] = g;
+      img.data[4 * i + 3] = 255;
+    }
+    ctx.putImageData(img, 0, 0);
+    ctx.fillStyle = '#0d9488';
+    const r = Math.max(1, Math.min(3, width / 200));
+    for (const p of sites) {
+      ctx.beginPath();
+      ctx.arc(p.x, p.y, r, 0, 2 * Math.PI);
+      ctx.fill();
+    }
+  }, [data, width, height, sites]);
+  return (
+    <canvas ref={ref} width={width} height={height} role="img" aria-label={label} className="w-full max-w-md rounded border border-rule" />
   );
 }

@@ -1,5 +1,6 @@
 import type { LatticeKind } from '@shared/workbench/lattice.ts';
 import type { latticeResult } from '@shared/workbench/calculators/lattice-calculator.ts';
+import type { CorrectedImage } from '@shared/workbench/lattice-corrected.ts';
 
 export type LatticeResult = ReturnType<typeof latticeResult>;
 
@@ -20,6 +21,9 @@ export type LatticeReply =
       candidates: { kx: number; ky: number }[];
       spectrum: Float32Array;
       paddedSize: number;
+      /** The image on a square nm grid, and the ideal lattice's sites on it (none for a line grating). */
+      corrected: CorrectedImage | null;
+      sites: { x: number; y: number }[];
       ms: number;
     }
   | { id: number; ok: false; message: string; code: string };

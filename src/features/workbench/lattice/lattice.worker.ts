@@ -2,6 +2,7 @@
 // log-magnitude spectrum for the picture.
 import { analyseLattice, LatticeError } from '@shared/workbench/lattice.ts';
 import { latticeResult } from '@shared/workbench/calculators/lattice-calculator.ts';
+import { correctedImage, latticeSites } from '@shared/workbench/lattice-corrected.ts';
 import type { LatticeRequest, LatticeReply } from './lattice-messages.ts';
 
 self.onmessage = (e: MessageEvent<LatticeRequest>) => {
@@ -11,6 +12,12 @@ self.onmessage = (e: MessageEvent<LatticeRequest>) => {
   try {
     const analysis = analyseLattice(rows, lattice, { withSpectrum: true });
     const result = latticeResult({ lattice, scanSpanV }, analysis);
+    // The image on a square nm grid with the ideal lattice's sites (two-dimensional lattices only).
+    const corrected = analysis.pixelToNm && lattice.kind !== 'line' ? correctedImage(rows, analysis.pixelToNm, 512) : null;
+    const sites =
+      corrected && lattice.kind !== 'line'
+        ? latticeSites(corrected, { kind: lattice.kind, constantNm: lattice.constantNm }, analysis.rotationDeg)
+        : [];
     reply = {
       id,
       ok: true,
@@ -21,9 +28,11 @@ self.onmessage = (e: MessageEvent<LatticeRequest>) => {
         .map((c) => ({ kx: c.kx, ky: c.ky })),
       spectrum: analysis.spectrum!,
       paddedSize: analysis.paddedSize,
+      corrected,
+      sites,
       ms: performance.now() - t0,
     };
-    (self as unknown as Worker).postMessage(reply, [reply.spectrum.buffer]);
+    (self as unknown as Worker).postMessage(reply, [reply.spectrum.buffer, ...(corrected ? [corrected.data.buffer] : [])]);
     return;
   } catch (err) {
     if (!(err instanceof RangeError)) throw err;

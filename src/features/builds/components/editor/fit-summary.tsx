@@ -2,12 +2,17 @@ import type { FitResultDto } from '@shared/schemas/workbench.ts';
 import type { RunFitDto } from '@shared/schemas/run.ts';
 import { runGainPlusMinus } from '@shared/export/run-figures.ts';
 import { formatSig } from '@shared/format/measured-number.ts';
+import { latticeRunLines } from '@shared/format/lattice-run-lines.ts';
 import { interval, pct, r2, withUncertainty } from './format.ts';
 import { PlusMinusLabel } from '@/components/ui/plus-minus-label.tsx';
 
-/** The rows a fit shows beside its gain: a point run's interval and %-of-span figures, a reading's bounds, a sine fit's figures. */
+/**
+ * The rows a fit shows beside its gain: a point run's interval and %-of-span figures, a reading's bounds, a sine
+ * fit's figures, a lattice run's two axes.
+ */
 function fitRows(fit: FitResultDto | RunFitDto): Array<[string, string]> {
   const run = fit as RunFitDto;
+  if (run.lattice) return latticeRunLines(run.lattice);
   if (run.gainBoundsNmPerV)
     return [
       ['Worst-case bounds', `${formatSig(run.gainBoundsNmPerV[0])} to ${formatSig(run.gainBoundsNmPerV[1])} nm/V`],

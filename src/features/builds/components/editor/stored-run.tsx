@@ -58,12 +58,16 @@ export function StoredRun({ run, maxVolts = null }: { run: RunDto; maxVolts?: nu
         <FitSummary fit={run.fit} label="Stored fit, computed by Scanwright" />
       </div>
       <p className="mt-2 text-xs text-ink-soft">
-        Recorded in {voltageUnitLabels[run.voltageUnit]} and {displacementUnitLabels[run.displacementUnit]};{' '}
-        {run.kind === 'points'
-          ? run.model === 'origin'
-            ? 'line through the origin'
-            : 'line with intercept'
-          : `${run.pointCount} ${run.kind === 'sine-record' ? 'samples' : 'readings'}`}
+        {run.kind === 'lattice'
+          ? 'Solved from the lattice vectors of the image and its quarters'
+          : `Recorded in ${voltageUnitLabels[run.voltageUnit]} and ${displacementUnitLabels[run.displacementUnit]}; `}
+        {run.kind === 'lattice'
+          ? ''
+          : run.kind === 'points'
+            ? run.model === 'origin'
+              ? 'line through the origin'
+              : 'line with intercept'
+            : `${run.pointCount} ${run.kind === 'sine-record' ? 'samples' : 'readings'}`}
         {drive && `; ${drive}`}
         {conditions && `; ${conditions}`}
       </p>
@@ -77,7 +81,7 @@ export function StoredRun({ run, maxVolts = null }: { run: RunDto; maxVolts?: nu
         </Suspense>
       )}
       <div className="mt-2 flex flex-wrap gap-2">
-        {run.kind !== 'peak-to-peak' && (
+        {run.kind !== 'peak-to-peak' && run.kind !== 'lattice' && (
           <Button variant="ghost" className="border-rule" aria-expanded={plot} onClick={() => setPlot((p) => !p)}>
             {plot ? 'Hide plot' : 'Show plot'}
           </Button>

@@ -4,6 +4,7 @@ import { displacementUnitLabels, toNm, toVolts, voltageUnitLabels } from '@share
 import { ErrorBoundary } from '@/components/ui/error-boundary.tsx';
 import { formatDate } from '@shared/format/dates.ts';
 import { DATA_LICENCE } from '@shared/data-licence.ts';
+import { latticeRunLines } from '@shared/format/lattice-run-lines.ts';
 
 const CalibrationChart = lazy(() => import('@/components/charts/calibration-chart.tsx').then((m) => ({ default: m.CalibrationChart })));
 
@@ -11,7 +12,8 @@ const CalibrationChart = lazy(() => import('@/components/charts/calibration-char
 function RunExportLinks({ run }: { run: RunDto }) {
   return (
     <p className="mt-1 text-xs text-ink-soft">
-      Raw {run.kind === 'sine-record' ? 'samples' : run.kind === 'peak-to-peak' ? 'readings' : 'points'}:{' '}
+      Raw{' '}
+      {run.kind === 'sine-record' ? 'samples' : run.kind === 'peak-to-peak' ? 'readings' : run.kind === 'lattice' ? 'vectors' : 'points'}:{' '}
       <a className="text-teal-dark underline" href={`/api/runs/${run.id}/export?format=csv`} download>
         CSV
       </a>{' '}
@@ -47,6 +49,25 @@ export function RunPlot({ run, actuatorName }: { run: RunDto; actuatorName: stri
           {r.voltsResolution !== null && ` (read to ${r.voltsResolution} ${voltageUnitLabels[run.voltageUnit]})`}
           {r.frequencyHz !== null && `, sine at ${r.frequencyHz} Hz`}. Nothing to plot: two readings make one gain.
         </p>
+        <RunExportLinks run={run} />
+      </section>
+    );
+  }
+  if (run.kind === 'lattice' && run.fit.lattice) {
+    return (
+      <section aria-label={`Lattice image: ${actuatorName}`} className="rounded-md border border-rule bg-white p-3 text-sm">
+        <p>
+          Lattice of a reference sample read off a scan image on <span className="num">{formatDate(run.measuredOn ?? run.createdAt)}</span>;
+          nothing to plot: the two axes come from the image’s spectrum.
+        </p>
+        <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1">
+          {latticeRunLines(run.fit.lattice).map(([k, v]) => (
+            <div key={k} className="contents">
+              <dt className="text-ink-soft">{k}</dt>
+              <dd className="num">{v}</dd>
+            </div>
+          ))}
+        </dl>
         <RunExportLinks run={run} />
       </section>
     );

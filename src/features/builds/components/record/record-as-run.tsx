@@ -84,14 +84,15 @@ export function RecordAsRun({
     })();
     const parsed = createRunInput.safeParse({
       ...withDrive,
-      method,
+      // A lattice run is always a reference sample's; its schema says so.
+      ...(data.kind === 'lattice' ? {} : { method }),
       ...(measuredOn ? { measuredOn } : {}),
       ...(Object.values(conditions).some((v) => v !== undefined) ? { conditions } : {}),
       ...(text(notes) ? { notes: text(notes) } : {}),
     });
     if (!parsed.success) return { ok: false as const, message: parsed.error.issues[0]?.message ?? 'These readings cannot be stored.' };
     try {
-      const fit = fitRun(parsed.data);
+      const fit = fitRun(parsed.data, actuator?.axis);
       // A sine record states its own drive: the fitted frequency and amplitude.
       const input =
         parsed.data.kind === 'sine-record' && fit.sine
@@ -101,7 +102,7 @@ export function RecordAsRun({
     } catch (err) {
       return { ok: false as const, message: errorMessage(err) };
     }
-  }, [data, method, measuredOn, preload, temperatureC, notes, frequencyHz]);
+  }, [data, method, measuredOn, preload, temperatureC, notes, frequencyHz, actuator]);
 
   if (!signedIn || (mine.error instanceof ApiError && mine.error.status === 401)) {
     return (
@@ -190,15 +191,17 @@ export function RecordAsRun({
         </div>
       )}
       <div className="grid gap-3 sm:grid-cols-2">
-        <Field id="record-method" label="Measured with">
-          <select id="record-method" className={inputClass} value={method} onChange={(e) => setMethod(e.target.value as RunMethod)}>
-            {RUN_METHODS.map((m) => (
-              <option key={m} value={m}>
-                {runMethodLabels[m]}
-              </option>
-            ))}
-          </select>
-        </Field>
+        {data?.kind !== 'lattice' && (
+          <Field id="record-method" label="Measured with">
+            <select id="record-method" className={inputClass} value={method} onChange={(e) => setMethod(e.target.value as RunMethod)}>
+              {RUN_METHODS.map((m) => (
+                <option key={m} value={m}>
+                  {runMethodLabels[m]}
+                </option>
+              ))}
+            </select>
+          </Field>
+        )}
         <Field id="record-date" label="Measured on" hint="Leave empty for today.">
           <input id="record-date" type="date" className={inputClass} value={measuredOn} onChange={(e) => setMeasuredOn(e.target.value)} />
         </Field>

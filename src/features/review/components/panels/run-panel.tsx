@@ -11,6 +11,7 @@ import { FitTable } from './fit-table.tsx';
 import { FlagList } from './flag-list.tsx';
 import { PanelFrame, PanelSection } from './panel-frame.tsx';
 import { PartGains } from './part-gains.tsx';
+import { latticeRunLines } from '@shared/format/lattice-run-lines.ts';
 
 const CalibrationChart = lazy(() => import('@/components/charts/calibration-chart.tsx').then((m) => ({ default: m.CalibrationChart })));
 
@@ -48,11 +49,20 @@ export function RunPanel({ run, onDecided }: { run: QueueRunDto; onDecided: (dec
       <PanelSection title="Flags">
         <FlagList flags={run.flags} />
       </PanelSection>
-      <PanelSection title={run.kind === 'sine-record' ? 'Loop (decimated)' : 'Calibration plot'}>
+      <PanelSection title={run.kind === 'sine-record' ? 'Loop (decimated)' : run.kind === 'lattice' ? 'Lattice image' : 'Calibration plot'}>
         {run.kind === 'peak-to-peak' ? (
           <p className="text-sm text-ink-soft">
             A peak-to-peak reading: two readings under a sine drive make one gain, with nothing to plot.
           </p>
+        ) : run.kind === 'lattice' && run.fit.lattice ? (
+          <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
+            {latticeRunLines(run.fit.lattice).map(([k, v]) => (
+              <div key={k} className="contents">
+                <dt className="text-ink-soft">{k}</dt>
+                <dd className="num">{v}</dd>
+              </div>
+            ))}
+          </dl>
         ) : (
           <div className="rounded-md border border-rule bg-white p-2 sm:p-3">
             <Suspense
