@@ -105,7 +105,10 @@ function halfSpectrum(data: Float64Array, ny: number, P: number): Float64Array {
     fft.transform(colOut, col);
     for (let v = 0; v < P; v++) {
       const vs = v < P / 2 ? v : v - P; // signed frequency index
-      mag[(vs + P / 2) * H + u] = Math.hypot(colOut[2 * v]!, colOut[2 * v + 1]!);
+      const re = colOut[2 * v]!;
+      const im = colOut[2 * v + 1]!;
+      // √(re² + im²): Math.hypot guards against overflow, which these magnitudes cannot reach, at 20× the cost.
+      mag[(vs + P / 2) * H + u] = Math.sqrt(re * re + im * im);
     }
   }
   return mag;
