@@ -154,6 +154,7 @@ export async function hideListing(actor: Actor | null, listingId: number, input:
   await Listing.sequelize!.transaction(async (transaction) => {
     const listing = await Listing.findByPk(listingId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!listing) throw new NotFoundError('No such listing.');
+    authorize(actor, 'listing.hide', { authorIds: [listing.ownerId] });
     await listing.update({ hiddenAt: input.hidden ? new Date() : null, hiddenNote: input.hidden ? input.note : null }, { transaction });
     await recordAudit(
       actor,

@@ -4,6 +4,7 @@ import type { AcceptRejectInput, BuildDecisionInput, ReportDecisionInput } from 
 import { Build } from '../models/build.model.ts';
 import { CalibrationRun } from '../models/calibration-run.model.ts';
 import { Part } from '../models/part.model.ts';
+import { Listing } from '../models/listing.model.ts';
 import { Report } from '../models/report.model.ts';
 import { User } from '../models/user.model.ts';
 import { authorize } from '../policies/authorize.ts';
@@ -28,6 +29,21 @@ async function recipient(userId: number | null, transaction: Transaction) {
   return userId ? User.findByPk(userId, { transaction, attributes: ['id', 'login', 'email', 'mailOptOut'] }) : null;
 }
 
+/** Who owns the thing a report is about (a part's proposer), so a moderator never settles a report on their own work. */
+async function reportedOwner(report: Report, transaction: Transaction): Promise<number | null> {
+  const id = report.targetId;
+  switch (report.targetType) {
+    case 'build':
+      return (await Build.findByPk(id, { transaction, attributes: ['ownerId'] }))?.ownerId ?? null;
+    case 'run':
+      return (await CalibrationRun.findByPk(id, { transaction, attributes: ['ownerId'] }))?.ownerId ?? null;
+    case 'part':
+      return (await Part.findByPk(id, { transaction, attributes: ['proposedById'] }))?.proposedById ?? null;
+    case 'listing':
+      return (await Listing.findByPk(id, { transaction, attributes: ['ownerId'] }))?.ownerId ?? null;
+  }
+}
+
 const BUILD_OUTCOME = { publish: 'published', return: 'returned', decline: 'declined' } as const;
 
 /** Publish, return (with notes, editable again) or decline a submitted build; also clears "edited since review" on published ones. */
@@ -35,6 +51,7 @@ export async function decideBuild(actor: Actor | null, buildId: number, input: B
   return decide(actor, async (me, transaction) => {
     const build = await Build.findByPk(buildId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!build) throw new NotFoundError('No such build.');
+    authorize(me, 'review.decide', { authorIds: [build.ownerId] });
     const editedPublished = build.status === 'published' && build.editedSinceReview;
     if (build.status !== 'submitted' && !editedPublished) throw notWaiting('build');
     const status = BUILD_OUTCOME[input.decision];
@@ -78,6 +95,7 @@ export async function decideRun(actor: Actor | null, runId: number, input: Accep
   return decide(actor, async (me, transaction) => {
     const run = await CalibrationRun.findByPk(runId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!run) throw new NotFoundError('No such calibration run.');
+    authorize(me, 'review.decide', { authorIds: [run.ownerId] });
     if (run.status !== 'pending') throw notWaiting('calibration run');
     // Take the part row first: changing the run's status re-checks its part foreign key (a shared
     // lock), and two decisions on one part would otherwise deadlock upgrading it for the stats.
@@ -115,6 +133,7 @@ export async function decidePart(actor: Actor | null, partId: number, input: Acc
   return decide(actor, async (me, transaction) => {
     const part = await Part.findByPk(partId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!part) throw new NotFoundError('No such part.');
+    authorize(me, 'review.decide', { authorIds: [part.proposedById] });
     if (part.status !== 'proposed') throw notWaiting('part');
     const status = input.decision === 'accept' ? 'accepted' : 'rejected';
     await part.update({ status }, { transaction });
@@ -148,6 +167,7 @@ export async function decideReport(actor: Actor | null, reportId: number, input:
   return decide(actor, async (me, transaction) => {
     const report = await Report.findByPk(reportId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!report) throw new NotFoundError('No such report.');
+    authorize(me, 'review.decide', { authorIds: [report.reporterId, await reportedOwner(report, transaction)] });
     if (report.status !== 'open') throw notWaiting('report');
     const status = input.decision === 'resolve' ? 'resolved' : 'dismissed';
     await report.update({ status, resolutionNote: input.note, resolvedById: me.id, resolvedAt: new Date() }, { transaction });

@@ -39,7 +39,7 @@ import { latticeInput } from '@shared/schemas/lattice.ts';
 import type { TestApp } from './test-app.ts';
 import type { Agent } from './login.ts';
 import { fillPath, type RouteEntry } from './route-table.ts';
-import { createActuatorRow, createBuildRow, createPart, createRunRow, createUser } from './factories.ts';
+import { createActuatorRow, createBuildRow, createListingRow, createPart, createRunRow, createUser } from './factories.ts';
 import { jpeg } from './images.ts';
 import { signIn } from './login.ts';
 import { User } from '../../server/models/user.model.ts';
@@ -1190,19 +1190,4 @@ export const fixtures: Record<string, Fixture> = {
   },
 };
 
-async function listingRow(ownerId: number) {
-  const part = await createPart();
-  return Listing.create({
-    ownerId,
-    partId: part.id,
-    kind: 'offering',
-    quantity: 3,
-    condition: 'new',
-    priceKind: 'free',
-    priceAmount: null,
-    currency: null,
-    region: 'Here',
-    shipsTo: null,
-    notes: null,
-  });
-}
+const listingRow = (ownerId: number) => createListingRow(ownerId);
