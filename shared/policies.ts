@@ -82,6 +82,8 @@ const rules = {
   /** Admins change others' roles, never their own (so the last admin cannot lock everyone out). */
   'user.set-role': and(active, hasRole('admin'), not(isSelf)),
   'user.suspend': and(active, hasRole('admin'), not(isSelf)),
+  /** Admins see anyone's API tokens (names and dates, never secrets) and revoke one that leaked. */
+  'user.tokens': and(active, hasRole('admin')),
   /** Mails the outbox gave up on: listed and re-queued by admins. */
   'outbox.manage': and(active, hasRole('admin')),
 } satisfies Record<string, Rule>;

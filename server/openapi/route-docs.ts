@@ -45,7 +45,7 @@ import {
   reviewIdParams,
 } from '@shared/schemas/review.ts';
 import { createRunInput, runExportQuery, runIdParams, updateRunInput } from '@shared/schemas/run.ts';
-import { listUsersQuery, setRoleInput, setSuspendedInput, userIdParams } from '@shared/schemas/user.ts';
+import { listUsersQuery, setRoleInput, setSuspendedInput, userIdParams, userTokenParams } from '@shared/schemas/user.ts';
 import { mailIdParams } from '@shared/schemas/outbox.ts';
 import { calculators } from '@shared/workbench/calculators/all-calculators.ts';
 import { RIG_RUN_BODY } from '@shared/docs/rig-examples.ts';
@@ -837,6 +837,26 @@ export const ROUTE_DOCS: readonly RouteDoc[] = [
     params: userIdParams,
     body: setSuspendedInput,
     response: json(200, 'The user.'),
+  },
+  {
+    method: 'GET',
+    path: '/api/admin/users/:userId/tokens',
+    summary: "A user's rig tokens (admins; never their secrets)",
+    description: 'Browser session only, like the account page: a token cannot list tokens.',
+    tag: 'Admin',
+    auth: 'session',
+    params: userIdParams,
+    response: json(200, 'The tokens with created and last-used times.'),
+  },
+  {
+    method: 'DELETE',
+    path: '/api/admin/users/:userId/tokens/:tokenId',
+    summary: "Revoke a user's rig token (admins)",
+    description: 'For a leaked or misbehaving rig; the audit trail names the token and its owner.',
+    tag: 'Admin',
+    auth: 'session',
+    params: userTokenParams,
+    response: noContent('Revoked.'),
   },
   {
     method: 'GET',

@@ -14,6 +14,7 @@ import { recomputePartStats } from './part-stats.service.ts';
 import { enqueueMail, kickOutbox } from './outbox.service.ts';
 import { noticeMail } from './review-mails.ts';
 import { invalidateRegistryCounts } from './registry-count-cache.ts';
+import { nameListing, nameRun, RUN_NAME_COLUMNS } from './audit-names.ts';
 
 const notWaiting = (what: string) => new ConflictError(`This ${what} is not waiting for a decision.`, 'not_waiting');
 
@@ -29,18 +30,27 @@ async function recipient(userId: number | null, transaction: Transaction) {
   return userId ? User.findByPk(userId, { transaction, attributes: ['id', 'login', 'email', 'mailOptOut'] }) : null;
 }
 
-/** Who owns the thing a report is about (a part's proposer), so a moderator never settles a report on their own work. */
-async function reportedOwner(report: Report, transaction: Transaction): Promise<number | null> {
+/** The thing a report is about: who owns it (a part's proposer), so a moderator never settles a report on their own work, and its name. */
+async function reported(report: Report, transaction: Transaction): Promise<{ ownerId: number | null; label: string }> {
   const id = report.targetId;
+  const gone = { ownerId: null, label: `${report.targetType} ${id} (gone)` };
   switch (report.targetType) {
-    case 'build':
-      return (await Build.findByPk(id, { transaction, attributes: ['ownerId'] }))?.ownerId ?? null;
-    case 'run':
-      return (await CalibrationRun.findByPk(id, { transaction, attributes: ['ownerId'] }))?.ownerId ?? null;
-    case 'part':
-      return (await Part.findByPk(id, { transaction, attributes: ['proposedById'] }))?.proposedById ?? null;
-    case 'listing':
-      return (await Listing.findByPk(id, { transaction, attributes: ['ownerId'] }))?.ownerId ?? null;
+    case 'build': {
+      const build = await Build.findByPk(id, { transaction, attributes: ['id', 'ownerId', 'title'] });
+      return build ? { ownerId: build.ownerId, label: `build “${build.title}”` } : gone;
+    }
+    case 'run': {
+      const run = await CalibrationRun.findByPk(id, { transaction, attributes: [...RUN_NAME_COLUMNS] });
+      return run ? { ownerId: run.ownerId, label: await nameRun(run, transaction) } : gone;
+    }
+    case 'part': {
+      const part = await Part.findByPk(id, { transaction, attributes: ['id', 'proposedById', 'name'] });
+      return part ? { ownerId: part.proposedById, label: `part “${part.name}”` } : gone;
+    }
+    case 'listing': {
+      const listing = await Listing.findByPk(id, { transaction });
+      return listing ? { ownerId: listing.ownerId, label: `listing ${await nameListing(listing, transaction)}` } : gone;
+    }
   }
 }
 
@@ -64,7 +74,11 @@ export async function decideBuild(actor: Actor | null, buildId: number, input: B
       },
       { transaction },
     );
-    await recordAudit(me, { action: `build.${input.decision}`, targetType: 'build', targetId: build.id, note: input.note }, transaction);
+    await recordAudit(
+      me,
+      { action: `build.${input.decision}`, targetType: 'build', targetId: build.id, targetLabel: `“${build.title}”`, note: input.note },
+      transaction,
+    );
     const owner = await recipient(build.ownerId, transaction);
     if (owner) {
       const lines = {
@@ -103,19 +117,23 @@ export async function decideRun(actor: Actor | null, runId: number, input: Accep
     const status = input.decision === 'accept' ? 'accepted' : 'rejected';
     await run.update({ status, reviewNote: input.note ?? null, reviewedById: me.id, reviewedAt: new Date() }, { transaction });
     await recomputePartStats(run.partId, transaction);
-    await recordAudit(me, { action: `run.${input.decision}`, targetType: 'run', targetId: run.id, note: input.note }, transaction);
+    const name = await nameRun(run, transaction);
+    await recordAudit(
+      me,
+      { action: `run.${input.decision}`, targetType: 'run', targetId: run.id, targetLabel: name, note: input.note },
+      transaction,
+    );
     const owner = await recipient(run.ownerId, transaction);
     if (owner) {
-      const gain = `${Number(run.gainNmPerV.toPrecision(4))} nm/V`;
       await enqueueMail(
         owner,
         noticeMail({
-          subject: `Calibration run ${status}: ${gain}`,
+          subject: `Calibration run ${status}: ${name}`,
           greeting: owner.login,
           lines: [
             status === 'accepted'
-              ? `Your calibration run (${gain}) was accepted and now counts in the parts registry.`
-              : `Your calibration run (${gain}) was rejected; it does not count in the parts registry.`,
+              ? `Your calibration run ${name} was accepted and now counts in the parts registry.`
+              : `Your calibration run ${name} was rejected; it does not count in the parts registry.`,
           ],
           note: input.note ?? null,
           path: `/builds/${run.buildId}`,
@@ -138,7 +156,11 @@ export async function decidePart(actor: Actor | null, partId: number, input: Acc
     const status = input.decision === 'accept' ? 'accepted' : 'rejected';
     await part.update({ status }, { transaction });
     transaction.afterCommit(invalidateRegistryCounts);
-    await recordAudit(me, { action: `part.${input.decision}`, targetType: 'part', targetId: part.id, note: input.note }, transaction);
+    await recordAudit(
+      me,
+      { action: `part.${input.decision}`, targetType: 'part', targetId: part.id, targetLabel: part.name, note: input.note },
+      transaction,
+    );
     const proposer = await recipient(part.proposedById, transaction);
     if (proposer) {
       await enqueueMail(
@@ -167,11 +189,22 @@ export async function decideReport(actor: Actor | null, reportId: number, input:
   return decide(actor, async (me, transaction) => {
     const report = await Report.findByPk(reportId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!report) throw new NotFoundError('No such report.');
-    authorize(me, 'review.decide', { authorIds: [report.reporterId, await reportedOwner(report, transaction)] });
+    const thing = await reported(report, transaction);
+    authorize(me, 'review.decide', { authorIds: [report.reporterId, thing.ownerId] });
     if (report.status !== 'open') throw notWaiting('report');
     const status = input.decision === 'resolve' ? 'resolved' : 'dismissed';
     await report.update({ status, resolutionNote: input.note, resolvedById: me.id, resolvedAt: new Date() }, { transaction });
-    await recordAudit(me, { action: `report.${input.decision}`, targetType: 'report', targetId: report.id, note: input.note }, transaction);
+    await recordAudit(
+      me,
+      {
+        action: `report.${input.decision}`,
+        targetType: 'report',
+        targetId: report.id,
+        targetLabel: `${report.reason} · ${thing.label}`,
+        note: input.note,
+      },
+      transaction,
+    );
     const reporter = await recipient(report.reporterId, transaction);
     if (reporter) {
       await enqueueMail(

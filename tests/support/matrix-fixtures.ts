@@ -306,6 +306,24 @@ export const fixtures: Record<string, Fixture> = {
       };
     },
   },
+  'DELETE /api/admin/users/:userId/tokens/:tokenId': {
+    allowed: 'admin',
+    async make({ owner }) {
+      const token = await ApiToken.create({
+        userId: owner.id,
+        name: unique('Leaked rig'),
+        scopes: ['read'],
+        tokenHash: randomBytes(32).toString('hex'),
+      });
+      return {
+        params: { userId: owner.id, tokenId: token.id },
+        state: () => rows(ApiToken.findByPk(token.id)),
+        async changed() {
+          expect(await ApiToken.findByPk(token.id)).toBeNull();
+        },
+      };
+    },
+  },
   'POST /api/admin/outbox/:mailId/requeue': {
     allowed: 'admin',
     async make() {

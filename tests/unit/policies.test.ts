@@ -23,6 +23,7 @@ const table: Record<Action, Row> = {
   'user.list': [false, false, false, false, false, true],
   'user.set-role': [false, false, false, false, false, true],
   'user.suspend': [false, false, false, false, false, true],
+  'user.tokens': [false, false, false, false, false, true],
   'outbox.manage': [false, false, false, false, false, true],
 };
 
