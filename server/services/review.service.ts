@@ -10,7 +10,8 @@ import { User } from '../models/user.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { ConflictError, NotFoundError } from '../errors.ts';
 import { recordAudit } from './audit.service.ts';
-import { recomputePartStats } from './part-stats.service.ts';
+import { recomputeBuildParts, recomputePartStats } from './part-stats.service.ts';
+import { RUN_DECIDABLE_BUILD_STATUSES } from '@shared/review/run-counting.ts';
 import { enqueueMail, kickOutbox } from './outbox.service.ts';
 import { noticeMail } from './review-mails.ts';
 import { invalidateRegistryCounts } from './registry-count-cache.ts';
@@ -74,6 +75,8 @@ export async function decideBuild(actor: Actor | null, buildId: number, input: B
       },
       { transaction },
     );
+    // Its runs count only while it is published: publishing, returning and declining all move its parts' figures.
+    await recomputeBuildParts(build.id, transaction);
     await recordAudit(
       me,
       { action: `build.${input.decision}`, targetType: 'build', targetId: build.id, targetLabel: `“${build.title}”`, note: input.note },
@@ -111,6 +114,14 @@ export async function decideRun(actor: Actor | null, runId: number, input: Accep
     if (!run) throw new NotFoundError('No such calibration run.');
     authorize(me, 'review.decide', { authorIds: [run.ownerId] });
     if (run.status !== 'pending') throw notWaiting('calibration run');
+    // Read the build under a shared lock: a decision on the build waits for this one, and this one sees its outcome.
+    const build = await Build.findByPk(run.buildId, { transaction, lock: transaction.LOCK.SHARE, attributes: ['id', 'status'] });
+    if (!build || !RUN_DECIDABLE_BUILD_STATUSES.includes(build.status)) {
+      throw new ConflictError(
+        `This run's build is ${build?.status ?? 'gone'}: runs are decided once their build is submitted, and count only while it is published.`,
+        'build_not_submitted',
+      );
+    }
     // Take the part row first: changing the run's status re-checks its part foreign key (a shared
     // lock), and two decisions on one part would otherwise deadlock upgrading it for the stats.
     await Part.findByPk(run.partId, { transaction, lock: transaction.LOCK.UPDATE, attributes: ['id'] });
