@@ -1179,6 +1179,27 @@ export const fixtures: Record<string, Fixture> = {
       };
     },
   },
+  'POST /api/inbox/:threadId/read': {
+    allowed: 'owner',
+    async make({ owner }) {
+      const listing = await listingRow(owner.id);
+      const starter = await createUser();
+      const thread = await MessageThread.create({
+        listingId: listing.id,
+        starterId: starter.id,
+        ownerId: owner.id,
+        lastMessageAt: new Date(),
+      });
+      const message = await Message.create({ threadId: thread.id, senderId: starter.id, body: 'Still there?' });
+      return {
+        params: { threadId: thread.id },
+        state: () => rows(Message.findByPk(message.id)),
+        async changed() {
+          expect((await Message.findByPk(message.id))?.readAt).not.toBeNull();
+        },
+      };
+    },
+  },
   'POST /api/inbox/:threadId/messages': {
     schema: sendMessageInput,
     allowed: 'owner',
