@@ -158,7 +158,7 @@ describe('messages', () => {
     expect((await Message.findAll({ where: { threadId: sent.body.threadId } })).map((m) => m.readAt)).toEqual([null]);
     const outsider = await signIn(t, (await createUser()).login);
     expectError(await send(outsider, 'post', `${path}/read`, {}), 404, 'not_found');
-    expectError(await request(t.app).post(`${path}/read`, {}), 403, 'csrf_failed');
+    expectError(await request(t.app).post(`${path}/read`), 403, 'csrf_failed');
     expectError(await send(ownerAgent, 'post', '/api/inbox/999999999/read', {}), 404, 'not_found');
     expect(await unread()).toBe(1);
     // The sender marking it read changes nothing: only the other party's messages are marked.
