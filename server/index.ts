@@ -22,6 +22,7 @@ if (!config.smtpUrl) catcher = await startSmtpCatcher(ports.smtp, ports.inbox);
 
 const mailer = createMailer(config.smtpUrl ?? catcher!.smtpUrl, config.mailFrom, log, { timeoutMs: config.outbox.smtpTimeoutMs });
 const handle = await createApp(config, { mailer, log });
+const demoRest = (role: string) => DEMO_ACCOUNTS.slice(3).filter((a) => a.role === role).length;
 const server: Server = handle.app.listen(config.port, config.host, () => {
   const lines = [
     '',
@@ -32,7 +33,7 @@ const server: Server = handle.app.listen(config.port, config.host, () => {
     oauth
       ? `  Demo logins  ${DEMO_ACCOUNTS.slice(0, 3)
           .map((a) => a.login)
-          .join(', ')} (+ ${DEMO_ACCOUNTS.length - 3} demo makers)`
+          .join(', ')} (+ ${demoRest('maker')} demo makers, ${demoRest('moderator')} more moderator)`
       : '',
     '  Stop         Ctrl-C',
     '',

@@ -17,6 +17,11 @@ export interface Resource {
   userId?: number;
   /** The other party of a two-sided resource (a message thread's enquirer). */
   participantId?: number;
+  /**
+   * Everyone whose work a decision judges: a build's, run's or listing's owner, a part's proposer, a report's
+   * author and the owner of what it reports. Four eyes: none of them may make that decision.
+   */
+  authorIds?: ReadonlyArray<number | null>;
 }
 
 type Rule = (actor: Actor, resource?: Resource) => boolean;
@@ -34,6 +39,8 @@ export const isOwner: Rule = (actor, resource) => resource?.ownerId != null && r
 export const isParticipant: Rule = (actor, resource) => resource?.participantId != null && resource.participantId === actor.id;
 /** The resource is the actor's own account. */
 export const isSelf: Rule = (actor, resource) => resource?.userId === actor.id;
+/** The actor's own work is among what a decision judges. */
+export const isOwnWork: Rule = (actor, resource) => (resource?.authorIds ?? []).includes(actor.id);
 export const and =
   (...rules: Rule[]): Rule =>
   (a, r) =>
@@ -61,9 +68,11 @@ const rules = {
   /** A part's photos are kept by whoever proposed it and by moderators. */
   'part.photos': and(active, or(isOwner, hasRole('moderator'))),
   'review.access': and(active, hasRole('moderator')),
+  /** Deciding a build, run, part or report: moderators, never on their own work (four eyes). */
+  'review.decide': and(active, hasRole('moderator'), not(isOwnWork)),
   /** Listings are changed by their owner; moderators only hide them (with a note). */
   'listing.edit': and(active, isOwner),
-  'listing.hide': and(active, hasRole('moderator')),
+  'listing.hide': and(active, hasRole('moderator'), not(isOwnWork)),
   'listing.view-hidden': or(isOwner, hasRole('moderator')),
   /** Anyone signed in may write to a listing's owner, except the owner themself. */
   'listing.message': and(active, not(isOwner)),
@@ -73,6 +82,8 @@ const rules = {
   /** Admins change others' roles, never their own (so the last admin cannot lock everyone out). */
   'user.set-role': and(active, hasRole('admin'), not(isSelf)),
   'user.suspend': and(active, hasRole('admin'), not(isSelf)),
+  /** Admins see anyone's API tokens (names and dates, never secrets) and revoke one that leaked. */
+  'user.tokens': and(active, hasRole('admin')),
   /** Mails the outbox gave up on: listed and re-queued by admins. */
   'outbox.manage': and(active, hasRole('admin')),
 } satisfies Record<string, Rule>;
@@ -85,4 +96,21 @@ export const ACTIONS = Object.keys(rules) as Action[];
 export function can(actor: Actor | null | undefined, action: Action, resource?: Resource): boolean {
   if (!actor) return false;
   return rules[action](actor, resource);
+}
+
+/** Decisions under the four-eyes rule: refused on one's own work with a reason of their own. */
+const FOUR_EYES: ReadonlySet<Action> = new Set<Action>(['review.decide', 'listing.hide']);
+
+export interface Refusal {
+  code: 'forbidden' | 'own_work';
+  message: string;
+}
+
+/** Why a signed-in actor is refused (null when allowed), so the answer can say what to do instead. */
+export function refusal(actor: Actor, action: Action, resource?: Resource): Refusal | null {
+  if (can(actor, action, resource)) return null;
+  if (FOUR_EYES.has(action) && !actor.suspended && hasRole('moderator')(actor) && isOwnWork(actor, resource)) {
+    return { code: 'own_work', message: 'This is your own work: another moderator has to decide it.' };
+  }
+  return { code: 'forbidden', message: 'You are not allowed to do this.' };
 }

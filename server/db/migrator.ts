@@ -20,6 +20,8 @@ import * as addActuatorDriveMatrix from './migrations/20261203140000-add-actuato
 import * as addOutboxClaims from './migrations/20261203150000-add-outbox-claims.ts';
 import * as addActuatorLinearisation from './migrations/20261203160000-add-actuator-linearisation.ts';
 import * as addIdempotencyApplied from './migrations/20261203170000-add-idempotency-applied.ts';
+import * as addAuditTargetLabel from './migrations/20261210000100-add-audit-target-label.ts';
+import * as recountPublishedRuns from './migrations/20261210000200-recount-published-runs.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -45,6 +47,8 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261203150000-add-outbox-claims', addOutboxClaims],
   ['20261203160000-add-actuator-linearisation', addActuatorLinearisation],
   ['20261203170000-add-idempotency-applied', addIdempotencyApplied],
+  ['20261210000100-add-audit-target-label', addAuditTargetLabel],
+  ['20261210000200-recount-published-runs', recountPublishedRuns],
 ];
 
 /** Umzug over our migration list; the only source of the schema, in tests too. */

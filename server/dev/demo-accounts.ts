@@ -9,6 +9,8 @@ export const DEMO_ACCOUNTS = [
   { login: 'tunnel-rohan', name: 'Rohan', role: 'maker' },
   { login: 'bimorph-bea', name: 'Bea', role: 'maker' },
   { login: 'stage-kwame', name: 'Kwame', role: 'maker' },
+  // A second moderator, so that a moderator's own work (four eyes) still has someone to decide it.
+  { login: 'flexure-ines', name: 'Ines', role: 'moderator' },
 ] as const;
 
 /** The stand-in's stable numeric id for a handle (same handle, same account, every run). */

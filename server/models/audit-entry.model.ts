@@ -6,6 +6,8 @@ export class AuditEntry extends Model<InferAttributes<AuditEntry>, InferCreation
   declare action: string;
   declare targetType: string;
   declare targetId: number;
+  /** The target named in words when the entry was made (null on entries older than the column). */
+  declare targetLabel: string | null;
   declare note: string | null;
   declare createdAt: CreationOptional<Date>;
 
@@ -17,6 +19,7 @@ export class AuditEntry extends Model<InferAttributes<AuditEntry>, InferCreation
         action: { type: DataTypes.STRING(40), allowNull: false },
         targetType: { type: DataTypes.STRING(20), allowNull: false },
         targetId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+        targetLabel: DataTypes.STRING(300),
         note: DataTypes.TEXT,
         createdAt: DataTypes.DATE,
       },

@@ -45,7 +45,7 @@ import {
   reviewIdParams,
 } from '@shared/schemas/review.ts';
 import { createRunInput, runExportQuery, runIdParams, updateRunInput } from '@shared/schemas/run.ts';
-import { listUsersQuery, setRoleInput, setSuspendedInput, userIdParams } from '@shared/schemas/user.ts';
+import { listUsersQuery, setRoleInput, setSuspendedInput, userIdParams, userTokenParams } from '@shared/schemas/user.ts';
 import { mailIdParams } from '@shared/schemas/outbox.ts';
 import { calculators } from '@shared/workbench/calculators/all-calculators.ts';
 import { RIG_RUN_BODY } from '@shared/docs/rig-examples.ts';
@@ -858,6 +858,26 @@ export const ROUTE_DOCS: readonly RouteDoc[] = [
   },
   {
     method: 'GET',
+    path: '/api/admin/users/:userId/tokens',
+    summary: "A user's rig tokens (admins; never their secrets)",
+    description: 'Browser session only, like the account page: a token cannot list tokens.',
+    tag: 'Admin',
+    auth: 'session',
+    params: userIdParams,
+    response: json(200, 'The tokens with created and last-used times.'),
+  },
+  {
+    method: 'DELETE',
+    path: '/api/admin/users/:userId/tokens/:tokenId',
+    summary: "Revoke a user's rig token (admins)",
+    description: 'For a leaked or misbehaving rig; the audit trail names the token and its owner.',
+    tag: 'Admin',
+    auth: 'session',
+    params: userTokenParams,
+    response: noContent('Revoked.'),
+  },
+  {
+    method: 'GET',
     path: '/api/admin/outbox/given-up',
     summary: 'Mails the outbox gave up on (admins)',
     description: 'The newest 100 mails not sent after the last attempt, with the account they were for (a login, never an address).',
@@ -959,11 +979,22 @@ export const ROUTE_DOCS: readonly RouteDoc[] = [
     method: 'GET',
     path: '/api/inbox/:threadId',
     summary: 'A message thread',
+    description: 'Reading changes nothing; `POST …/read` marks the other party’s messages read.',
     tag: 'Exchange',
     auth: 'session-or-token',
     scope: 'read',
     params: threadIdParams,
     response: json(200, 'The thread.'),
+  },
+  {
+    method: 'POST',
+    path: '/api/inbox/:threadId/read',
+    summary: 'Mark a thread read',
+    description: 'Marks the other party’s messages in the thread read (the inbox does this when it shows the thread).',
+    tag: 'Exchange',
+    auth: 'session',
+    params: threadIdParams,
+    response: noContent('Marked read.'),
   },
   {
     method: 'POST',

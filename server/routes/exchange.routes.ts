@@ -12,7 +12,7 @@ import type { Config } from '../config.ts';
 import { requireUser } from '../middleware/auth.ts';
 import { limiter } from '../middleware/rate-limit.ts';
 import { createListing, getListing, hideListing, listListings, listMyListings, updateListing } from '../services/listing.service.ts';
-import { getThread, listThreads, replyInThread, sendListingMessage } from '../services/message.service.ts';
+import { getThread, listThreads, markThreadRead, replyInThread, sendListingMessage } from '../services/message.service.ts';
 import { photoRoutesFor } from './attached-photo.routes.ts';
 import { route } from './route.ts';
 
@@ -80,6 +80,14 @@ export function exchangeRoutes(config: Config): Router {
     requireUser,
     route({ params: threadIdParams }, async ({ actor, params, res }) => {
       res.json(await getThread(actor, params.threadId));
+    }),
+  );
+  r.post(
+    '/api/inbox/:threadId/read',
+    requireUser,
+    route({ params: threadIdParams }, async ({ actor, params, res }) => {
+      await markThreadRead(actor, params.threadId);
+      res.status(204).end();
     }),
   );
   r.post(

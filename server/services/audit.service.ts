@@ -5,14 +5,21 @@ import { AuditEntry } from '../models/audit-entry.model.ts';
 import { User } from '../models/user.model.ts';
 import { authorize } from '../policies/authorize.ts';
 
-/** Write who did what to which thing, inside the same transaction as the change itself. */
+/** Write who did what to which thing (named in words as it is now), inside the same transaction as the change itself. */
 export async function recordAudit(
   actor: Actor,
-  entry: { action: string; targetType: string; targetId: number; note?: string | null },
+  entry: { action: string; targetType: string; targetId: number; targetLabel: string; note?: string | null },
   transaction: Transaction,
 ): Promise<void> {
   await AuditEntry.create(
-    { actorId: actor.id, action: entry.action, targetType: entry.targetType, targetId: entry.targetId, note: entry.note ?? null },
+    {
+      actorId: actor.id,
+      action: entry.action,
+      targetType: entry.targetType,
+      targetId: entry.targetId,
+      targetLabel: entry.targetLabel.slice(0, 300),
+      note: entry.note ?? null,
+    },
     { transaction },
   );
 }
@@ -47,6 +54,7 @@ export async function listAudit(actor: Actor | null, q: AuditQuery): Promise<Aud
       action: r.action,
       targetType: r.targetType,
       targetId: r.targetId,
+      targetLabel: r.targetLabel,
       note: r.note,
       createdAt: r.createdAt.toISOString(),
     })),

@@ -10,6 +10,7 @@ import { presentBuildDetail, summarizeBuilds } from './build-read.service.ts';
 import { pruneAfterRemoval } from './photo-files.ts';
 import { containsPattern } from '../db/like-pattern.ts';
 import { cachedPublicRead } from './public-read-cache.ts';
+import { recomputeBuildParts } from './part-stats.service.ts';
 
 /** Start a build as a draft owned by the actor. */
 export async function createBuild(actor: Actor | null, input: CreateBuildInput): Promise<BuildDto> {
@@ -115,6 +116,7 @@ export async function withdrawBuild(actor: Actor | null, buildId: number): Promi
     if (b.status !== 'submitted')
       throw new ConflictError(`Only a build pending review can be withdrawn; this one is ${b.status}.`, 'invalid_state');
     await b.update({ status: 'draft', submittedAt: null }, { transaction });
+    await recomputeBuildParts(b.id, transaction);
     return b;
   });
   return presentBuildDetail(actor, build);

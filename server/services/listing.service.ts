@@ -14,6 +14,7 @@ import { User } from '../models/user.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { NotFoundError, ValidationError } from '../errors.ts';
 import { recordAudit } from './audit.service.ts';
+import { nameListing } from './audit-names.ts';
 import { containsPattern } from '../db/like-pattern.ts';
 import { photosBySubject } from './attached-photos.service.ts';
 import { loadListingForView } from './listing-access.ts';
@@ -154,10 +155,17 @@ export async function hideListing(actor: Actor | null, listingId: number, input:
   await Listing.sequelize!.transaction(async (transaction) => {
     const listing = await Listing.findByPk(listingId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!listing) throw new NotFoundError('No such listing.');
+    authorize(actor, 'listing.hide', { authorIds: [listing.ownerId] });
     await listing.update({ hiddenAt: input.hidden ? new Date() : null, hiddenNote: input.hidden ? input.note : null }, { transaction });
     await recordAudit(
       actor,
-      { action: input.hidden ? 'listing.hide' : 'listing.unhide', targetType: 'listing', targetId: listing.id, note: input.note },
+      {
+        action: input.hidden ? 'listing.hide' : 'listing.unhide',
+        targetType: 'listing',
+        targetId: listing.id,
+        targetLabel: await nameListing(listing, transaction),
+        note: input.note,
+      },
       transaction,
     );
   });

@@ -132,10 +132,9 @@ export async function listThreads(actor: Actor | null): Promise<ThreadSummaryDto
   return summarize(actor, threads);
 }
 
-/** One conversation; opening it marks the other party's messages read. */
+/** One conversation, read without changing anything (a GET must be safe: an image link could otherwise mark it read). */
 export async function getThread(actor: Actor | null, threadId: number): Promise<ThreadDto> {
   const thread = await loadThread(actor, threadId);
-  await Message.update({ readAt: new Date() }, { where: { threadId, senderId: { [Op.ne]: actor!.id }, readAt: null } });
   const [summary] = await summarize(actor!, [thread]);
   const messages = await Message.findAll({
     where: { threadId },
@@ -148,6 +147,12 @@ export async function getThread(actor: Actor | null, threadId: number): Promise<
     (await User.findAll({ where: { id: [thread.ownerId, thread.starterId] }, attributes: ['id', 'login'] })).map((u) => [u.id, u.login]),
   );
   return presentThread(summary!, messages, actor!.id, logins);
+}
+
+/** The reader marks the other party's messages in a conversation read (the client does so when it shows the thread). */
+export async function markThreadRead(actor: Actor | null, threadId: number): Promise<void> {
+  await loadThread(actor, threadId);
+  await Message.update({ readAt: new Date() }, { where: { threadId, senderId: { [Op.ne]: actor!.id }, readAt: null } });
 }
 
 /** Reply inside a conversation; the other party gets a mail with a link, never an address. */

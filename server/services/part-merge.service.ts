@@ -24,6 +24,7 @@ export async function mergeParts(actor: Actor | null, fromId: number, input: Mer
     ]);
     if (!from) throw new NotFoundError('No such part.');
     if (!into) throw new ValidationError('No such part to merge into.', [{ path: 'intoPartId', message: 'No such part.' }]);
+    authorize(actor, 'review.decide', { authorIds: [from.proposedById, into.proposedById] });
     if (from.mergedIntoId !== null) throw new ConflictError('This part was already merged.', 'already_merged');
     if (into.mergedIntoId !== null || into.status !== 'accepted') throw new ConflictError('Merge into a listed part.', 'invalid_target');
     const moved = { partId: into.id };
@@ -43,7 +44,13 @@ export async function mergeParts(actor: Actor | null, fromId: number, input: Mer
     await recomputePartStats(into.id, transaction);
     await recordAudit(
       actor,
-      { action: 'part.merge', targetType: 'part', targetId: from.id, note: `into part ${into.id}: ${input.note}` },
+      {
+        action: 'part.merge',
+        targetType: 'part',
+        targetId: from.id,
+        targetLabel: `${from.name} → ${into.name}`,
+        note: `into part ${into.id}: ${input.note}`,
+      },
       transaction,
     );
     return { id: from.id, mergedIntoId: into.id, moved: { actuators, runs, listings, photos } };

@@ -6,14 +6,14 @@ import type { PartListingRow, PartRunRow } from '../presenters/part.presenter.ts
 
 const ISO = "'%Y-%m-%dT%H:%i:%s.000Z'"; // DATETIME(0) holding UTC (Sequelize timezone +00:00)
 
-/** Accepted runs of a part, oldest first (at most `limit`), in one statement. */
+/** Accepted runs of a part in published builds (the runs that count), oldest first (at most `limit`), in one statement. */
 export async function selectPartRuns(sequelize: Sequelize, partId: number, limit: number): Promise<PartRunRow[]> {
   return readPool(sequelize).query(
     `SELECT r.id, r.build_id AS buildId, b.title AS buildTitle, u.login AS maker, r.method, r.kind, r.gain_nm_per_v AS gainNmPerV, r.gain_std_err_nm_per_v AS gainStdErrNmPerV,
        r.gain_ci95_lo_nm_per_v AS gainCi95LoNmPerV, r.gain_ci95_hi_nm_per_v AS gainCi95HiNmPerV, r.hysteresis_pct_fs AS hysteresisPctFs,
        DATE_FORMAT(r.created_at, ${ISO}) AS createdAt
      FROM calibration_runs r LEFT JOIN builds b ON b.id = r.build_id LEFT JOIN users u ON u.id = b.owner_id
-     WHERE r.part_id = ? AND r.status = 'accepted' ORDER BY r.created_at ASC, r.id ASC LIMIT ?`,
+     WHERE r.part_id = ? AND r.status = 'accepted' AND b.status = 'published' ORDER BY r.created_at ASC, r.id ASC LIMIT ?`,
     [partId, limit],
   ) as Promise<PartRunRow[]>;
 }

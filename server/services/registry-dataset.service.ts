@@ -22,6 +22,7 @@ import { Build } from '../models/build.model.ts';
 import { Part } from '../models/part.model.ts';
 import { User } from '../models/user.model.ts';
 import { presentRun, RUN_READ_COLUMNS } from '../presenters/run.presenter.ts';
+import { IN_PUBLISHED_BUILD } from './part-stats.service.ts';
 
 /** Points or samples read per batch for points.csv (a run is never split). */
 const POINTS_PER_BATCH = 200_000;
@@ -31,10 +32,7 @@ const RUNS_PER_BATCH = 100;
 /** Accepted runs of listed parts in published builds: the only runs the dataset holds. */
 const PUBLIC_RUNS: WhereOptions<CalibrationRun> = {
   status: 'accepted',
-  [Op.and]: [
-    literal(`build_id IN (SELECT b.id FROM builds b WHERE b.status = 'published')`),
-    literal(`part_id IN (SELECT p.id FROM parts p WHERE p.status = 'accepted')`),
-  ],
+  [Op.and]: [literal(IN_PUBLISHED_BUILD), literal(`part_id IN (SELECT p.id FROM parts p WHERE p.status = 'accepted')`)],
 };
 
 /** Every column a presenter reads except the plot series, which files never need. */

@@ -12,6 +12,8 @@ import { Report } from '../models/report.model.ts';
 import { User } from '../models/user.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { presentQueueBuild, presentQueuePart, presentQueueReport, presentQueueRun } from '../presenters/review-queue.presenter.ts';
+import { RUN_DECIDABLE_BUILD_STATUSES } from '@shared/review/run-counting.ts';
+import { countingRuns } from './part-stats.service.ts';
 
 const LIMIT = 100;
 
@@ -65,7 +67,7 @@ async function queueRuns(runs: CalibrationRun[], author: AuthorOf): Promise<Queu
   const partIds = [...new Set(runs.map((r) => r.partId))];
   const [parts, accepted, actuators, builds] = await Promise.all([
     Part.findAll({ where: { id: partIds } }),
-    CalibrationRun.findAll({ where: { partId: partIds, status: 'accepted' }, attributes: ['partId', 'gainNmPerV'] }),
+    CalibrationRun.findAll({ where: countingRuns({ partId: partIds }), attributes: ['partId', 'gainNmPerV'] }),
     Actuator.findAll({ where: { id: [...new Set(runs.map((r) => r.actuatorId))] }, attributes: ['id', 'label', 'axis', 'drive'] }),
     Build.findAll({ where: { id: [...new Set(runs.map((r) => r.buildId))] }, attributes: ['id', 'title'] }),
   ]);
@@ -84,6 +86,8 @@ async function queueRuns(runs: CalibrationRun[], author: AuthorOf): Promise<Queu
     }),
   );
 }
+
+const DECIDABLE_SQL = RUN_DECIDABLE_BUILD_STATUSES.map((s) => `'${s}'`).join(', ');
 
 /** Labels for what reports point at: one `IN (…)` query per target type. */
 async function targetLabels(reports: Report[]): Promise<(r: Report) => string> {
@@ -129,7 +133,10 @@ export async function getReviewQueue(actor: Actor | null): Promise<ReviewQueueDt
     }),
     CalibrationRun.findAndCountAll({
       attributes: [...RUN_READ_COLUMNS],
-      where: { status: 'pending', buildId: { [Op.notIn]: Build.sequelize!.literal("(SELECT id FROM builds WHERE status = 'draft')") } },
+      where: {
+        status: 'pending',
+        buildId: { [Op.in]: Build.sequelize!.literal(`(SELECT id FROM builds WHERE status IN (${DECIDABLE_SQL}))`) },
+      },
       order: [
         ['createdAt', 'ASC'],
         ['id', 'ASC'],

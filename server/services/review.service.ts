@@ -4,15 +4,18 @@ import type { AcceptRejectInput, BuildDecisionInput, ReportDecisionInput } from 
 import { Build } from '../models/build.model.ts';
 import { CalibrationRun } from '../models/calibration-run.model.ts';
 import { Part } from '../models/part.model.ts';
+import { Listing } from '../models/listing.model.ts';
 import { Report } from '../models/report.model.ts';
 import { User } from '../models/user.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { ConflictError, NotFoundError } from '../errors.ts';
 import { recordAudit } from './audit.service.ts';
-import { recomputePartStats } from './part-stats.service.ts';
+import { recomputeBuildParts, recomputePartStats } from './part-stats.service.ts';
+import { RUN_DECIDABLE_BUILD_STATUSES } from '@shared/review/run-counting.ts';
 import { enqueueMail, kickOutbox } from './outbox.service.ts';
 import { noticeMail } from './review-mails.ts';
 import { invalidateRegistryCounts } from './registry-count-cache.ts';
+import { nameListing, nameRun, RUN_NAME_COLUMNS } from './audit-names.ts';
 
 const notWaiting = (what: string) => new ConflictError(`This ${what} is not waiting for a decision.`, 'not_waiting');
 
@@ -28,6 +31,30 @@ async function recipient(userId: number | null, transaction: Transaction) {
   return userId ? User.findByPk(userId, { transaction, attributes: ['id', 'login', 'email', 'mailOptOut'] }) : null;
 }
 
+/** The thing a report is about: who owns it (a part's proposer), so a moderator never settles a report on their own work, and its name. */
+async function reported(report: Report, transaction: Transaction): Promise<{ ownerId: number | null; label: string }> {
+  const id = report.targetId;
+  const gone = { ownerId: null, label: `${report.targetType} ${id} (gone)` };
+  switch (report.targetType) {
+    case 'build': {
+      const build = await Build.findByPk(id, { transaction, attributes: ['id', 'ownerId', 'title'] });
+      return build ? { ownerId: build.ownerId, label: `build “${build.title}”` } : gone;
+    }
+    case 'run': {
+      const run = await CalibrationRun.findByPk(id, { transaction, attributes: [...RUN_NAME_COLUMNS] });
+      return run ? { ownerId: run.ownerId, label: await nameRun(run, transaction) } : gone;
+    }
+    case 'part': {
+      const part = await Part.findByPk(id, { transaction, attributes: ['id', 'proposedById', 'name'] });
+      return part ? { ownerId: part.proposedById, label: `part “${part.name}”` } : gone;
+    }
+    case 'listing': {
+      const listing = await Listing.findByPk(id, { transaction });
+      return listing ? { ownerId: listing.ownerId, label: `listing ${await nameListing(listing, transaction)}` } : gone;
+    }
+  }
+}
+
 const BUILD_OUTCOME = { publish: 'published', return: 'returned', decline: 'declined' } as const;
 
 /** Publish, return (with notes, editable again) or decline a submitted build; also clears "edited since review" on published ones. */
@@ -35,6 +62,7 @@ export async function decideBuild(actor: Actor | null, buildId: number, input: B
   return decide(actor, async (me, transaction) => {
     const build = await Build.findByPk(buildId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!build) throw new NotFoundError('No such build.');
+    authorize(me, 'review.decide', { authorIds: [build.ownerId] });
     const editedPublished = build.status === 'published' && build.editedSinceReview;
     if (build.status !== 'submitted' && !editedPublished) throw notWaiting('build');
     const status = BUILD_OUTCOME[input.decision];
@@ -47,7 +75,13 @@ export async function decideBuild(actor: Actor | null, buildId: number, input: B
       },
       { transaction },
     );
-    await recordAudit(me, { action: `build.${input.decision}`, targetType: 'build', targetId: build.id, note: input.note }, transaction);
+    // Its runs count only while it is published: publishing, returning and declining all move its parts' figures.
+    await recomputeBuildParts(build.id, transaction);
+    await recordAudit(
+      me,
+      { action: `build.${input.decision}`, targetType: 'build', targetId: build.id, targetLabel: `“${build.title}”`, note: input.note },
+      transaction,
+    );
     const owner = await recipient(build.ownerId, transaction);
     if (owner) {
       const lines = {
@@ -78,26 +112,39 @@ export async function decideRun(actor: Actor | null, runId: number, input: Accep
   return decide(actor, async (me, transaction) => {
     const run = await CalibrationRun.findByPk(runId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!run) throw new NotFoundError('No such calibration run.');
+    authorize(me, 'review.decide', { authorIds: [run.ownerId] });
     if (run.status !== 'pending') throw notWaiting('calibration run');
+    // Read the build under a shared lock: a decision on the build waits for this one, and this one sees its outcome.
+    const build = await Build.findByPk(run.buildId, { transaction, lock: transaction.LOCK.SHARE, attributes: ['id', 'status'] });
+    if (!build || !RUN_DECIDABLE_BUILD_STATUSES.includes(build.status)) {
+      throw new ConflictError(
+        `This run's build is ${build?.status ?? 'gone'}: runs are decided once their build is submitted, and count only while it is published.`,
+        'build_not_submitted',
+      );
+    }
     // Take the part row first: changing the run's status re-checks its part foreign key (a shared
     // lock), and two decisions on one part would otherwise deadlock upgrading it for the stats.
     await Part.findByPk(run.partId, { transaction, lock: transaction.LOCK.UPDATE, attributes: ['id'] });
     const status = input.decision === 'accept' ? 'accepted' : 'rejected';
     await run.update({ status, reviewNote: input.note ?? null, reviewedById: me.id, reviewedAt: new Date() }, { transaction });
     await recomputePartStats(run.partId, transaction);
-    await recordAudit(me, { action: `run.${input.decision}`, targetType: 'run', targetId: run.id, note: input.note }, transaction);
+    const name = await nameRun(run, transaction);
+    await recordAudit(
+      me,
+      { action: `run.${input.decision}`, targetType: 'run', targetId: run.id, targetLabel: name, note: input.note },
+      transaction,
+    );
     const owner = await recipient(run.ownerId, transaction);
     if (owner) {
-      const gain = `${Number(run.gainNmPerV.toPrecision(4))} nm/V`;
       await enqueueMail(
         owner,
         noticeMail({
-          subject: `Calibration run ${status}: ${gain}`,
+          subject: `Calibration run ${status}: ${name}`,
           greeting: owner.login,
           lines: [
             status === 'accepted'
-              ? `Your calibration run (${gain}) was accepted and now counts in the parts registry.`
-              : `Your calibration run (${gain}) was rejected; it does not count in the parts registry.`,
+              ? `Your calibration run ${name} was accepted and now counts in the parts registry.`
+              : `Your calibration run ${name} was rejected; it does not count in the parts registry.`,
           ],
           note: input.note ?? null,
           path: `/builds/${run.buildId}`,
@@ -115,11 +162,16 @@ export async function decidePart(actor: Actor | null, partId: number, input: Acc
   return decide(actor, async (me, transaction) => {
     const part = await Part.findByPk(partId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!part) throw new NotFoundError('No such part.');
+    authorize(me, 'review.decide', { authorIds: [part.proposedById] });
     if (part.status !== 'proposed') throw notWaiting('part');
     const status = input.decision === 'accept' ? 'accepted' : 'rejected';
     await part.update({ status }, { transaction });
     transaction.afterCommit(invalidateRegistryCounts);
-    await recordAudit(me, { action: `part.${input.decision}`, targetType: 'part', targetId: part.id, note: input.note }, transaction);
+    await recordAudit(
+      me,
+      { action: `part.${input.decision}`, targetType: 'part', targetId: part.id, targetLabel: part.name, note: input.note },
+      transaction,
+    );
     const proposer = await recipient(part.proposedById, transaction);
     if (proposer) {
       await enqueueMail(
@@ -148,10 +200,22 @@ export async function decideReport(actor: Actor | null, reportId: number, input:
   return decide(actor, async (me, transaction) => {
     const report = await Report.findByPk(reportId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!report) throw new NotFoundError('No such report.');
+    const thing = await reported(report, transaction);
+    authorize(me, 'review.decide', { authorIds: [report.reporterId, thing.ownerId] });
     if (report.status !== 'open') throw notWaiting('report');
     const status = input.decision === 'resolve' ? 'resolved' : 'dismissed';
     await report.update({ status, resolutionNote: input.note, resolvedById: me.id, resolvedAt: new Date() }, { transaction });
-    await recordAudit(me, { action: `report.${input.decision}`, targetType: 'report', targetId: report.id, note: input.note }, transaction);
+    await recordAudit(
+      me,
+      {
+        action: `report.${input.decision}`,
+        targetType: 'report',
+        targetId: report.id,
+        targetLabel: `${report.reason} · ${thing.label}`,
+        note: input.note,
+      },
+      transaction,
+    );
     const reporter = await recipient(report.reporterId, transaction);
     if (reporter) {
       await enqueueMail(

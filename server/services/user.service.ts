@@ -5,6 +5,8 @@ import { User } from '../models/user.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { ForbiddenError, NotFoundError } from '../errors.ts';
 import { presentAdminUser } from '../presenters/user.presenter.ts';
+import { recordAudit } from './audit.service.ts';
+import { nameUser } from './audit-names.ts';
 
 export interface GithubIdentity {
   githubId: string;
@@ -65,11 +67,25 @@ async function loadUser(userId: number): Promise<User> {
   return user;
 }
 
-/** Grant or revoke a role (admins only, never on themselves). */
+/** Grant or revoke a role (admins only, never on themselves); the change is on the audit trail, naming the account. */
 export async function setUserRole(actor: Actor | null, userId: number, input: SetRoleInput): Promise<AdminUserDto> {
   const user = await loadUser(userId);
   authorize(actor, 'user.set-role', { userId: user.id });
-  await user.update({ role: input.role });
+  const before = user.role;
+  await user.sequelize.transaction(async (transaction) => {
+    await user.update({ role: input.role }, { transaction });
+    await recordAudit(
+      actor,
+      {
+        action: 'user.set-role',
+        targetType: 'user',
+        targetId: user.id,
+        targetLabel: nameUser(user),
+        note: `Role: ${before} → ${input.role}`,
+      },
+      transaction,
+    );
+  });
   return presentAdminUser(user);
 }
 
@@ -80,6 +96,11 @@ export async function setUserSuspended(actor: Actor | null, userId: number, inpu
   await user.sequelize.transaction(async (transaction) => {
     await user.update({ suspendedAt: input.suspended ? new Date() : null }, { transaction });
     if (input.suspended) await user.sequelize.models.Session.destroy({ where: { userId: user.id }, transaction });
+    await recordAudit(
+      actor,
+      { action: input.suspended ? 'user.suspend' : 'user.reinstate', targetType: 'user', targetId: user.id, targetLabel: nameUser(user) },
+      transaction,
+    );
   });
   return presentAdminUser(user);
 }

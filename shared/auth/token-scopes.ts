@@ -25,9 +25,15 @@ const TOKEN_SCOPE_RULES: Record<TokenScope, readonly ScopeRule[]> = {
 
 /**
  * Never with a token, whatever its scopes: managing tokens needs a browser session (a leaked token
- * must not mint or list others), and the session route hands out CSRF tokens.
+ * must not mint or list others, nor an admin's token revoke them), and the session route hands out CSRF tokens.
  */
-const NEVER_WITH_A_TOKEN: readonly string[] = ['/api/account/tokens', '/api/account/tokens/*', '/api/session'];
+const NEVER_WITH_A_TOKEN: readonly string[] = [
+  '/api/account/tokens',
+  '/api/account/tokens/*',
+  '/api/admin/users/:userId/tokens',
+  '/api/admin/users/:userId/tokens/*',
+  '/api/session',
+];
 
 /** Whether a token with these scopes may send `method` to `path` (the path without its query). */
 export function tokenMayRequest(scopes: readonly TokenScope[], method: string, path: string): boolean {

@@ -134,6 +134,8 @@ export interface AuditEntryDto {
   action: string;
   targetType: string;
   targetId: number;
+  /** The thing named as it was when the entry was made; null on entries from before names were kept. */
+  targetLabel: string | null;
   note: string | null;
   createdAt: string;
 }

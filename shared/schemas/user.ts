@@ -46,3 +46,4 @@ export const setSuspendedInput = z.strictObject({ suspended: z.boolean() });
 export type SetSuspendedInput = z.infer<typeof setSuspendedInput>;
 
 export const userIdParams = z.strictObject({ userId: z.coerce.number().int().positive() });
+export const userTokenParams = z.strictObject({ userId: z.coerce.number().int().positive(), tokenId: z.coerce.number().int().positive() });

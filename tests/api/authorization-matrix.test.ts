@@ -36,6 +36,7 @@ const expected: Record<string, Row> = {
   'PATCH /api/admin/users/:userId/role': [401, 403, 403, 403, 403, 200],
   'PATCH /api/admin/users/:userId/suspension': [401, 403, 403, 403, 403, 200],
   'POST /api/admin/outbox/:mailId/requeue': [401, 403, 403, 403, 403, 200],
+  'DELETE /api/admin/users/:userId/tokens/:tokenId': [401, 403, 403, 403, 403, 204],
 
   'POST /api/workbench/fit': [200, 200, 200, 200, 200, 200],
   'POST /api/workbench/peak-to-peak': [200, 200, 200, 200, 200, 200],
@@ -109,6 +110,7 @@ const expected: Record<string, Row> = {
   'POST /api/listings/:listingId/visibility': [401, 403, 403, 403, 200, 200],
   'POST /api/listings/:listingId/messages': [401, 403, 201, 403, 201, 201],
   'POST /api/inbox/:threadId/messages': [401, 201, 404, 403, 404, 404],
+  'POST /api/inbox/:threadId/read': [401, 204, 404, 403, 404, 404],
 };
 
 const routes = stateChangingRoutes(t.app);

@@ -145,6 +145,29 @@ describe('messages', () => {
     ]);
   });
 
+  test('when a thread is read with GET, then nothing changes; POST …/read marks the other party’s messages read, for its parties only', async () => {
+    const { a: ownerAgent, listing } = await ownerWithListing();
+    const b = await signIn(t, (await createUser()).login);
+    const sent = await send(b, 'post', `/api/listings/${listing.id}/messages`, { body: 'Is the stack still there?' });
+    const path = `/api/inbox/${sent.body.threadId}`;
+    const unread = async () =>
+      (await ownerAgent.get('/api/inbox')).body.threads.find((th: { id: number }) => th.id === sent.body.threadId).unread;
+    for (let i = 0; i < 2; i++) expect((await ownerAgent.get(path)).status).toBe(200);
+    expect((await ownerAgent.get(path)).body.unread).toBe(1);
+    expect(await unread()).toBe(1);
+    expect((await Message.findAll({ where: { threadId: sent.body.threadId } })).map((m) => m.readAt)).toEqual([null]);
+    const outsider = await signIn(t, (await createUser()).login);
+    expectError(await send(outsider, 'post', `${path}/read`, {}), 404, 'not_found');
+    expectError(await request(t.app).post(`${path}/read`), 403, 'csrf_failed');
+    expectError(await send(ownerAgent, 'post', '/api/inbox/999999999/read', {}), 404, 'not_found');
+    expect(await unread()).toBe(1);
+    // The sender marking it read changes nothing: only the other party's messages are marked.
+    expect((await send(b, 'post', `${path}/read`, {})).status).toBe(204);
+    expect(await unread()).toBe(1);
+    expect((await send(ownerAgent, 'post', `${path}/read`, {})).status).toBe(204);
+    expect(await unread()).toBe(0);
+  });
+
   test('when the owner writes to their own listing, an outsider reads a thread, or the body is empty, then 403 / 404 / 400', async () => {
     const { a, listing } = await ownerWithListing();
     expectError(await send(a, 'post', `/api/listings/${listing.id}/messages`, { body: 'me' }), 403, 'forbidden');

@@ -95,7 +95,7 @@ describe('POST /api/actuators/:actuatorId/runs with kind "peak-to-peak"', () => 
   });
 
   test('when a peak-to-peak run and a point run are accepted on one part, then the part pools both gains and its page names each kind', async () => {
-    const { a, actuatorId, part } = await ownerWithActuator();
+    const { a, actuatorId, part } = await ownerWithActuator('published');
     const one = await post(a, `/api/actuators/${actuatorId}/runs`, p2p);
     const two = await post(a, `/api/actuators/${actuatorId}/runs`, {
       points: linePoints(-70),
@@ -134,7 +134,7 @@ describe('PATCH /api/runs/:runId', () => {
   });
 
   test('when an accepted run is corrected, then it goes back to pending and leaves the part figures in the same change', async () => {
-    const { a, actuatorId, part } = await ownerWithActuator();
+    const { a, actuatorId, part } = await ownerWithActuator('published');
     const created = await post(a, `/api/actuators/${actuatorId}/runs`, p2p);
     await post(mod, `/api/review/runs/${created.body.id}/decision`, { decision: 'accept' });
     expect((await Part.findByPk(part.id))!.acceptedRunCount).toBe(1);

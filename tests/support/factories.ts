@@ -132,3 +132,26 @@ export async function createRunRow(opts: {
     ...runColumns(input, fit),
   });
 }
+
+/** An open listing of a fresh part owned by `ownerId`, free, in one region. */
+export async function createListingRow(
+  ownerId: number,
+  overrides: Partial<{ status: 'open' | 'reserved' | 'closed'; hiddenAt: Date | null }> = {},
+) {
+  const { Listing } = await import('../../server/models/listing.model.ts');
+  const part = await createPart();
+  return Listing.create({
+    ownerId,
+    partId: part.id,
+    kind: 'offering',
+    quantity: 3,
+    condition: 'new',
+    priceKind: 'free',
+    priceAmount: null,
+    currency: null,
+    region: 'Here',
+    shipsTo: null,
+    notes: null,
+    ...overrides,
+  });
+}

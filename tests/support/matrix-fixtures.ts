@@ -40,7 +40,7 @@ import { latticeInput } from '@shared/schemas/lattice.ts';
 import type { TestApp } from './test-app.ts';
 import type { Agent } from './login.ts';
 import { fillPath, type RouteEntry } from './route-table.ts';
-import { createActuatorRow, createBuildRow, createPart, createRunRow, createUser } from './factories.ts';
+import { createActuatorRow, createBuildRow, createListingRow, createPart, createRunRow, createUser } from './factories.ts';
 import { jpeg } from './images.ts';
 import { signIn } from './login.ts';
 import { User } from '../../server/models/user.model.ts';
@@ -306,6 +306,24 @@ export const fixtures: Record<string, Fixture> = {
         async changed(res) {
           expect(res.body).toMatchObject({ id: owner.id, role: 'moderator' });
           expect((await User.findByPk(owner.id))?.role).toBe('moderator');
+        },
+      };
+    },
+  },
+  'DELETE /api/admin/users/:userId/tokens/:tokenId': {
+    allowed: 'admin',
+    async make({ owner }) {
+      const token = await ApiToken.create({
+        userId: owner.id,
+        name: unique('Leaked rig'),
+        scopes: ['read'],
+        tokenHash: randomBytes(32).toString('hex'),
+      });
+      return {
+        params: { userId: owner.id, tokenId: token.id },
+        state: () => rows(ApiToken.findByPk(token.id)),
+        async changed() {
+          expect(await ApiToken.findByPk(token.id)).toBeNull();
         },
       };
     },
@@ -1183,6 +1201,27 @@ export const fixtures: Record<string, Fixture> = {
       };
     },
   },
+  'POST /api/inbox/:threadId/read': {
+    allowed: 'owner',
+    async make({ owner }) {
+      const listing = await listingRow(owner.id);
+      const starter = await createUser();
+      const thread = await MessageThread.create({
+        listingId: listing.id,
+        starterId: starter.id,
+        ownerId: owner.id,
+        lastMessageAt: new Date(),
+      });
+      const message = await Message.create({ threadId: thread.id, senderId: starter.id, body: 'Still there?' });
+      return {
+        params: { threadId: thread.id },
+        state: () => rows(Message.findByPk(message.id)),
+        async changed() {
+          expect((await Message.findByPk(message.id))?.readAt).not.toBeNull();
+        },
+      };
+    },
+  },
   'POST /api/inbox/:threadId/messages': {
     schema: sendMessageInput,
     allowed: 'owner',
@@ -1212,19 +1251,4 @@ export const fixtures: Record<string, Fixture> = {
   },
 };
 
-async function listingRow(ownerId: number) {
-  const part = await createPart();
-  return Listing.create({
-    ownerId,
-    partId: part.id,
-    kind: 'offering',
-    quantity: 3,
-    condition: 'new',
-    priceKind: 'free',
-    priceAmount: null,
-    currency: null,
-    region: 'Here',
-    shipsTo: null,
-    notes: null,
-  });
-}
+const listingRow = (ownerId: number) => createListingRow(ownerId);

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { ACTIONS, can, type Action, type Actor, type Resource } from '../../shared/policies.ts';
+import { ACTIONS, can, refusal, type Action, type Actor, type Resource } from '../../shared/policies.ts';
 
 // Every action × every kind of actor, answers written out by hand from PRODUCT.md's role table and
 // the rule comments in shared/policies.ts. Columns: visitor, maker who owns it (and is the account),
@@ -14,6 +14,7 @@ const table: Record<Action, Row> = {
   'part.view-unlisted': [false, true, false, true, true, true],
   'part.photos': [false, true, false, false, true, true],
   'review.access': [false, false, false, false, true, true],
+  'review.decide': [false, false, false, false, true, true],
   'listing.edit': [false, true, false, false, false, false],
   'listing.hide': [false, false, false, false, true, true],
   'listing.view-hidden': [false, true, false, true, true, true],
@@ -22,6 +23,7 @@ const table: Record<Action, Row> = {
   'user.list': [false, false, false, false, false, true],
   'user.set-role': [false, false, false, false, false, true],
   'user.suspend': [false, false, false, false, false, true],
+  'user.tokens': [false, false, false, false, false, true],
   'outbox.manage': [false, false, false, false, false, true],
 };
 
@@ -57,6 +59,22 @@ describe('can()', () => {
     const starter: Actor = { id: 5, role: 'maker', suspended: false };
     expect(can(starter, 'message.thread.view', { ownerId: OWNER, participantId: 5 })).toBe(true);
     expect(can({ ...starter, id: 6 }, 'message.thread.view', { ownerId: OWNER, participantId: 5 })).toBe(false);
+  });
+
+  test('when moderators or admins decide on their own work, then they may not, and the refusal says why', () => {
+    const moderator: Actor = { id: 3, role: 'moderator', suspended: false };
+    const admin: Actor = { id: 4, role: 'admin', suspended: false };
+    for (const action of ['review.decide', 'listing.hide'] as const) {
+      for (const actor of [moderator, admin]) {
+        expect(can(actor, action, { authorIds: [actor.id] })).toBe(false);
+        expect(can(actor, action, { authorIds: [null, 99, actor.id] })).toBe(false);
+        expect(refusal(actor, action, { authorIds: [actor.id] })?.code).toBe('own_work');
+        expect(can(actor, action, { authorIds: [99, null] })).toBe(true);
+        expect(refusal(actor, action, { authorIds: [99] })).toBeNull();
+      }
+      // A maker is refused for being a maker, not for the work being theirs.
+      expect(refusal({ id: 5, role: 'maker', suspended: false }, action, { authorIds: [5] })?.code).toBe('forbidden');
+    }
   });
 
   test('when a resource has no owner, then nobody owns it', () => {

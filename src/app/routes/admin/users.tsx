@@ -31,7 +31,7 @@ export function AdminUsersPage() {
     <div>
       <PageHeader
         title="Accounts"
-        lead="Grant or revoke the moderator role, and suspend accounts. A suspended person is signed out and cannot write."
+        lead="Grant or revoke the moderator role, suspend accounts and revoke rig tokens. A suspended person is signed out and cannot write. Each change is on the audit trail."
       />
       <form
         role="search"

@@ -1,5 +1,5 @@
 import { useEffect } from 'react';
-import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useQuery } from '@tanstack/react-query';
 import { Link, useLocation, useParams } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice.tsx';
 import { AnchorButton } from '@/components/ui/link-button.tsx';
@@ -7,23 +7,25 @@ import { ApiError } from '@/lib/api-client.ts';
 import { paths } from '@/config/paths.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
 import { inboxQueries } from '@/features/exchange/api/inbox-queries.ts';
+import { useMarkThreadRead } from '@/features/exchange/api/message-mutations.ts';
 import { LoadError, Loading } from '@/components/ui/load-states.tsx';
 import { ThreadView } from '@/features/exchange/components/thread-view.tsx';
 import { ExchangeNotFound } from './not-found.tsx';
 import { parseId } from '@/utils/parse-id.ts';
 
-/** /inbox/:threadId: one conversation; opening it marks it read, so the thread list is refetched. */
+/** /inbox/:threadId: one conversation; showing it marks it read (a POST), then the thread list is refetched. */
 export function InboxThreadPage() {
   const id = parseId(useParams().threadId);
   const { data: session } = useSession();
   const location = useLocation();
-  const qc = useQueryClient();
   const signedIn = Boolean(session?.user);
   const thread = useQuery({ ...inboxQueries.thread(id ?? 0), enabled: id !== null && signedIn });
-  const loaded = thread.isSuccess;
+  const unread = thread.data?.unread ?? 0;
+  const { mutate: markRead } = useMarkThreadRead(id ?? 0);
+  // Reading is a GET that changes nothing; the page marks the thread read once it shows unread messages.
   useEffect(() => {
-    if (loaded) void qc.invalidateQueries({ queryKey: inboxQueries.threads().queryKey });
-  }, [loaded, qc]);
+    if (unread > 0) markRead();
+  }, [unread, markRead]);
 
   const notFound = <ExchangeNotFound what="conversation" back={paths.inbox} backLabel="Back to the inbox" />;
   if (!signedIn)

@@ -3,10 +3,11 @@ import { ROLES, type Role } from '@shared/policies.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { UserBadge } from '@/components/ui/user-badge.tsx';
 import { useSetUserRole, useSetUserSuspended } from '../api/update-user.ts';
+import { UserTokens } from './user-tokens.tsx';
 
 const day = (iso: string | null) => (iso ? iso.slice(0, 10) : '—');
 
-/** One account: role picker and suspend/reinstate (not on one's own row). */
+/** One account: role picker, suspend/reinstate (not on one's own row) and its rig tokens. */
 export function UserRow({ user, isSelf }: { user: AdminUserDto; isSelf: boolean }) {
   const setRole = useSetUserRole();
   const setSuspended = useSetUserSuspended();
@@ -54,6 +55,7 @@ export function UserRow({ user, isSelf }: { user: AdminUserDto; isSelf: boolean 
             {user.suspended ? 'Reinstate' : 'Suspend'}
           </Button>
         )}
+        <UserTokens userId={user.id} login={user.login} />
         {error && (
           <p role="alert" className="mt-1 text-xs text-danger">
             {error.message}

@@ -22,3 +22,12 @@ export function useReplyInThread(threadId: number) {
     onSuccess: () => qc.invalidateQueries({ queryKey: inboxQueries.all }),
   });
 }
+
+/** Mark a conversation's messages from the other party read (the thread page does so once it shows them). */
+export function useMarkThreadRead(threadId: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: () => api.post<void>(`/api/inbox/${threadId}/read`),
+    onSuccess: () => qc.invalidateQueries({ queryKey: inboxQueries.all }),
+  });
+}

@@ -21,6 +21,13 @@ const actionLabels: Record<string, string> = {
   'part.reject': 'Rejected the part',
   'report.resolve': 'Resolved the report',
   'report.dismiss': 'Dismissed the report',
+  'part.merge': 'Merged the part into another',
+  'listing.hide': 'Hid the listing',
+  'listing.unhide': 'Showed the listing again',
+  'user.set-role': 'Changed the role',
+  'user.suspend': 'Suspended the account',
+  'user.reinstate': 'Reinstated the account',
+  'token.revoke': 'Revoked a rig token',
 };
 
 /** "Returned the build with notes" for `build.return`; unknown actions show as recorded. */

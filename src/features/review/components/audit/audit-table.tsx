@@ -50,9 +50,13 @@ export function AuditTable({ items }: { items: AuditEntryDto[] }) {
             <td data-label="Action" className={cell}>
               {actionLabel(e.action)}
             </td>
-            <td data-label="Thing" className={`${cell} sm:whitespace-nowrap`}>
+            <td data-label="Thing" className={cell}>
               <TargetLink type={e.targetType} id={e.targetId}>
-                {targetTypeLabels[e.targetType] ?? e.targetType} <span className="num">#{e.targetId}</span>
+                {e.targetLabel ?? (
+                  <>
+                    {targetTypeLabels[e.targetType] ?? e.targetType} <span className="num">#{e.targetId}</span>
+                  </>
+                )}
               </TargetLink>
             </td>
             <td data-label="Note" className={cell}>
