@@ -8,11 +8,22 @@ export default defineConfig({
   resolve: { alias },
   test: {
     env: { TZ: 'UTC' },
+    // Projects of one `sequence.groupOrder` run together and must agree on maxWorkers. unit and api run
+    // first, two files at a time (vitest's default is cores − 1, one worker on a two-core machine); then
+    // browser, then faults, one file at a time. `npm test` runs browser and faults side by side instead,
+    // as two vitest processes (scripts/test.mjs).
+    maxWorkers: 2,
     projects: [
       {
         resolve: { alias },
         // Pure code: files share one module cache per worker (no per-file re-import).
-        test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node', isolate: false },
+        test: {
+          name: 'unit',
+          include: ['tests/unit/**/*.test.ts'],
+          environment: 'node',
+          isolate: false,
+          sequence: { groupOrder: 0 },
+        },
       },
       {
         resolve: { alias },
@@ -25,6 +36,7 @@ export default defineConfig({
           isolate: false,
           testTimeout: 20000,
           hookTimeout: 30000,
+          sequence: { groupOrder: 0 },
         },
       },
       {
@@ -37,7 +49,8 @@ export default defineConfig({
           environment: 'node',
           testTimeout: 60000,
           hookTimeout: 60000,
-          fileParallelism: false,
+          maxWorkers: 1,
+          sequence: { groupOrder: 2 },
         },
       },
       {
@@ -48,7 +61,8 @@ export default defineConfig({
           environment: 'node',
           testTimeout: 60000,
           hookTimeout: 60000,
-          fileParallelism: false,
+          maxWorkers: 1,
+          sequence: { groupOrder: 1 },
         },
       },
     ],

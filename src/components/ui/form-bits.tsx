@@ -1,6 +1,6 @@
 // The one form kit of the app: the input look, a labelled field with hint and error, the aria wiring,
 // form-level errors, and how the server's field issues land on a react-hook-form form.
-import type { ReactNode } from 'react';
+import type { ComponentProps, ReactNode } from 'react';
 import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
 import { ApiError } from '@/lib/api-client.ts';
 
@@ -12,6 +12,8 @@ export const inputClass =
 export function Field({
   id,
   label,
+  unit,
+  optional,
   hint,
   error,
   children,
@@ -19,6 +21,9 @@ export function Field({
 }: {
   id: string;
   label: ReactNode;
+  /** Shown after the label in brackets, e.g. "nm". */
+  unit?: string;
+  optional?: boolean;
   hint?: ReactNode;
   error?: string;
   children: ReactNode;
@@ -28,6 +33,8 @@ export function Field({
     <div className={`min-w-0 ${className}`}>
       <label htmlFor={id} className="mb-1 block text-sm font-medium">
         {label}
+        {unit && <span className="font-normal text-ink-soft"> ({unit})</span>}
+        {optional && <span className="font-normal text-ink-soft"> · optional</span>}
       </label>
       {children}
       {hint && !error && (
@@ -47,6 +54,73 @@ export function Field({
 /** aria attributes tying a control to its Field's hint or error. */
 export const describe = (id: string, error?: string, hint?: boolean) =>
   ({ 'aria-invalid': error ? true : undefined, 'aria-describedby': error ? `${id}-error` : hint ? `${id}-hint` : undefined }) as const;
+
+/** What a Field shows around its control; `fieldClassName` styles the Field, `className` adds to the control's look. */
+interface FieldChrome {
+  id: string;
+  label: ReactNode;
+  unit?: string;
+  optional?: boolean;
+  hint?: ReactNode;
+  error?: string;
+  fieldClassName?: string;
+  className?: string;
+}
+
+/** Splits a field component's props into the Field's and the control's (id, look, aria wiring, the rest). */
+function splitField<P extends FieldChrome>({ id, label, unit, optional, hint, error, fieldClassName, className = '', ...rest }: P) {
+  return {
+    field: { id, label, unit, optional, hint, error, className: fieldClassName },
+    control: { id, className: `${inputClass} ${className}`.trim(), ...describe(id, error, !!hint), ...rest },
+  };
+}
+
+/** An input in its Field, tied to the hint or error (spread `register(…)` onto it, or pass value and onChange). */
+export function InputField(props: FieldChrome & ComponentProps<'input'>) {
+  const { field, control } = splitField(props);
+  return (
+    <Field {...field}>
+      <input {...control} />
+    </Field>
+  );
+}
+
+/** One choice of a SelectField. */
+export interface SelectOption {
+  value: string | number;
+  label: ReactNode;
+}
+
+/** A select in its Field, tied to the hint or error; its choices as `options` (after any children, e.g. a "Choose…" entry). */
+export function SelectField({
+  options = [],
+  children,
+  ...props
+}: FieldChrome & ComponentProps<'select'> & { options?: readonly SelectOption[] }) {
+  const { field, control } = splitField(props);
+  return (
+    <Field {...field}>
+      <select {...control}>
+        {children}
+        {options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
+      </select>
+    </Field>
+  );
+}
+
+/** A text area in its Field, tied to the hint or error. */
+export function TextAreaField(props: FieldChrome & ComponentProps<'textarea'>) {
+  const { field, control } = splitField(props);
+  return (
+    <Field {...field}>
+      <textarea {...control} />
+    </Field>
+  );
+}
 
 /** A form-level error: what the server said that belongs to no single field. */
 export function FormError({ message }: { message?: string }) {

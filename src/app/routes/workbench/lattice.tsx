@@ -3,7 +3,7 @@ import { CsvFileInput } from '@/components/ui/csv-file-input.tsx';
 import { useUrlSettings } from '@/features/workbench/form/use-url-settings.ts';
 import { parseOptionalNumber } from '@/lib/csv/number-text.ts';
 import { formatSig } from '@shared/format/measured-number.ts';
-import { Field, inputClass } from '@/components/ui/form-bits.tsx';
+import { inputClass, InputField, SelectField } from '@/components/ui/form-bits.tsx';
 import { NoResult, ResultNotesBlock } from '@/features/workbench/components/results.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
 import { pngToHeights } from '@/features/workbench/lattice/decode-png.ts';
@@ -19,6 +19,11 @@ import { useLatticeWorker } from '@/features/workbench/lattice/use-lattice-worke
 
 const KINDS = ['hexagonal', 'square', 'line'] as const;
 type Kind = (typeof KINDS)[number];
+const LATTICE_KINDS: readonly { value: Kind; label: string }[] = [
+  { value: 'hexagonal', label: 'Hexagonal (6 peaks)' },
+  { value: 'square', label: 'Square (4 peaks)' },
+  { value: 'line', label: 'Line grating (2 peaks)' },
+];
 /** The lattice and the drive spans live in the link; the image does not. */
 const SETTINGS = {
   kind: { param: 'kind', fallback: 'hexagonal', allowed: KINDS },
@@ -172,64 +177,50 @@ export function LatticePage() {
               )}
             </section>
             <section aria-label="Lattice and drive" className="grid gap-3 rounded-lg border border-rule bg-white p-4 sm:grid-cols-2">
-              <Field id="lat-preset" label="Reference">
-                <select
-                  id="lat-preset"
-                  className={inputClass}
-                  value={preset}
-                  onChange={(e) => {
-                    const p = PRESETS.find((x) => x.value === e.target.value);
-                    if (p?.kind) set('kind', p.kind);
-                    if (p?.constant) set('constant', p.constant);
-                    else if (p) set('constant', '');
-                  }}
-                >
-                  {PRESETS.map((p) => (
-                    <option key={p.value} value={p.value}>
-                      {p.label}
-                    </option>
-                  ))}
-                </select>
-              </Field>
-              <Field id="lat-kind" label="Lattice">
-                <select id="lat-kind" className={inputClass} value={kind} onChange={(e) => set('kind', e.target.value as Kind)}>
-                  <option value="hexagonal">Hexagonal (6 peaks)</option>
-                  <option value="square">Square (4 peaks)</option>
-                  <option value="line">Line grating (2 peaks)</option>
-                </select>
-              </Field>
-              <Field
+              <SelectField
+                id="lat-preset"
+                label="Reference"
+                value={preset}
+                options={PRESETS}
+                onChange={(e) => {
+                  const p = PRESETS.find((x) => x.value === e.target.value);
+                  if (p?.kind) set('kind', p.kind);
+                  if (p?.constant) set('constant', p.constant);
+                  else if (p) set('constant', '');
+                }}
+              />
+              <SelectField
+                id="lat-kind"
+                label="Lattice"
+                value={kind}
+                options={LATTICE_KINDS}
+                onChange={(e) => set('kind', e.target.value as Kind)}
+              />
+              <InputField
                 id="lat-a"
                 label={kind === 'line' ? 'Grating pitch (nm)' : 'Lattice constant (nm)'}
                 hint="Graphite 0.246 nm (Trucano & Chen 1975): the spacing of the atoms an STM shows, not the 0.142 nm bond."
-              >
-                <input
-                  id="lat-a"
-                  inputMode="decimal"
-                  className={inputClass}
-                  value={constant}
-                  onChange={(e) => set('constant', e.target.value)}
-                />
-              </Field>
+                inputMode="decimal"
+                value={constant}
+                onChange={(e) => set('constant', e.target.value)}
+              />
               <div className="grid grid-cols-2 gap-3 sm:col-span-2">
-                <Field id="lat-vx" label="Drive span x (V)" hint="Over the full width; optional.">
-                  <input
-                    id="lat-vx"
-                    inputMode="decimal"
-                    className={inputClass}
-                    value={spanX}
-                    onChange={(e) => set('spanX', e.target.value)}
-                  />
-                </Field>
-                <Field id="lat-vy" label="Drive span y (V)" hint="Over the full height; optional.">
-                  <input
-                    id="lat-vy"
-                    inputMode="decimal"
-                    className={inputClass}
-                    value={spanY}
-                    onChange={(e) => set('spanY', e.target.value)}
-                  />
-                </Field>
+                <InputField
+                  id="lat-vx"
+                  label="Drive span x (V)"
+                  hint="Over the full width; optional."
+                  inputMode="decimal"
+                  value={spanX}
+                  onChange={(e) => set('spanX', e.target.value)}
+                />
+                <InputField
+                  id="lat-vy"
+                  label="Drive span y (V)"
+                  hint="Over the full height; optional."
+                  inputMode="decimal"
+                  value={spanY}
+                  onChange={(e) => set('spanY', e.target.value)}
+                />
               </div>
             </section>
             {rows && rows.length > 0 && (

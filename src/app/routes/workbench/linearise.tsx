@@ -2,7 +2,7 @@ import { useDeferredValue, useId, useMemo, useState } from 'react';
 import { useUrlSettings } from '@/features/workbench/form/use-url-settings.ts';
 import { displacementUnits, voltageUnits } from '@shared/units.ts';
 import { CsvFileInput } from '@/components/ui/csv-file-input.tsx';
-import { Field, inputClass } from '@/components/ui/form-bits.tsx';
+import { inputClass, InputField, SelectField } from '@/components/ui/form-bits.tsx';
 import { NoResult, ResultNotesBlock } from '@/features/workbench/components/results.tsx';
 import { RowProblems } from '@/features/workbench/components/row-problems.tsx';
 import { ToolColumns, ToolPage } from '@/features/workbench/components/tool-page.tsx';
@@ -63,47 +63,36 @@ export function LinearisePage() {
               <RowProblems used={r.checked.points.length} problems={r.checked.problems} note={r.checked.note} what="Line" />
             </section>
             <section aria-label="Settings" className="grid gap-3 rounded-lg border border-rule bg-white p-4 sm:grid-cols-2">
-              <Field id="lin-vu" label="Voltage unit">
-                <select id="lin-vu" className={inputClass} value={voltageUnit} onChange={(e) => set('voltageUnit', e.target.value)}>
-                  {voltageOptions.map((o) => (
-                    <option key={o.value} value={o.value}>
-                      {o.label}
-                    </option>
-                  ))}
-                </select>
-              </Field>
-              <Field id="lin-du" label="Displacement unit">
-                <select
-                  id="lin-du"
-                  className={inputClass}
-                  value={displacementUnit}
-                  onChange={(e) => set('displacementUnit', e.target.value)}
-                >
-                  {displacementOptions.map((o) => (
-                    <option key={o.value} value={o.value}>
-                      {o.label}
-                    </option>
-                  ))}
-                </select>
-              </Field>
-              <Field id="lin-degree" label="Polynomial degree" hint="Auto: the smallest degree the data support (F-test at 5 %).">
-                <select id="lin-degree" className={inputClass} value={degree} onChange={(e) => set('degree', e.target.value)}>
-                  {DEGREES.map((d) => (
-                    <option key={d} value={d}>
-                      {d === 'auto' ? 'Auto' : d}
-                    </option>
-                  ))}
-                </select>
-              </Field>
-              <Field id="lin-step" label="Table step (nm)" hint="Empty: the common range in 20 steps.">
-                <input
-                  id="lin-step"
-                  inputMode="decimal"
-                  className={inputClass}
-                  value={stepNm}
-                  onChange={(e) => set('stepNm', e.target.value)}
-                />
-              </Field>
+              <SelectField
+                id="lin-vu"
+                label="Voltage unit"
+                value={voltageUnit}
+                options={voltageOptions}
+                onChange={(e) => set('voltageUnit', e.target.value)}
+              />
+              <SelectField
+                id="lin-du"
+                label="Displacement unit"
+                value={displacementUnit}
+                options={displacementOptions}
+                onChange={(e) => set('displacementUnit', e.target.value)}
+              />
+              <SelectField
+                id="lin-degree"
+                label="Polynomial degree"
+                hint="Auto: the smallest degree the data support (F-test at 5 %)."
+                value={degree}
+                options={DEGREES.map((d) => ({ value: d, label: d === 'auto' ? 'Auto' : d }))}
+                onChange={(e) => set('degree', e.target.value)}
+              />
+              <InputField
+                id="lin-step"
+                label="Table step (nm)"
+                hint="Empty: the common range in 20 steps."
+                inputMode="decimal"
+                value={stepNm}
+                onChange={(e) => set('stepNm', e.target.value)}
+              />
             </section>
           </form>
         }

@@ -9,7 +9,7 @@ import {
   type CreateListingInput,
 } from '@shared/schemas/listing.ts';
 import { Button } from '@/components/ui/button.tsx';
-import { applyServerErrors, describe, Field, FormError, inputClass, textOrUndefined } from '@/components/ui/form-bits.tsx';
+import { applyServerErrors, FormError, InputField, SelectField, TextAreaField, textOrUndefined } from '@/components/ui/form-bits.tsx';
 import { PartPicker } from './part-picker.tsx';
 import { PriceFields } from './price-fields.tsx';
 
@@ -84,67 +84,51 @@ export function ListingForm({
         </div>
       </fieldset>
       <div className="grid gap-4 sm:grid-cols-[8rem_1fr]">
-        <Field id="listing-quantity" label="Quantity" error={errors.quantity && 'A whole number from 1 to 10 000.'}>
-          <input
-            id="listing-quantity"
-            type="number"
-            inputMode="numeric"
-            min={1}
-            step={1}
-            className={`${inputClass} num`}
-            {...describe('listing-quantity', errors.quantity?.message)}
-            {...register('quantity', { valueAsNumber: true })}
-          />
-        </Field>
-        <Field id="listing-condition" label="Condition" error={errors.condition?.message}>
-          <select id="listing-condition" className={inputClass} {...register('condition')}>
-            {LISTING_CONDITIONS.map((c) => (
-              <option key={c} value={c}>
-                {listingConditionLabels[c]}
-              </option>
-            ))}
-          </select>
-        </Field>
+        <InputField
+          id="listing-quantity"
+          label="Quantity"
+          error={errors.quantity && 'A whole number from 1 to 10 000.'}
+          type="number"
+          inputMode="numeric"
+          min={1}
+          step={1}
+          className="num"
+          {...register('quantity', { valueAsNumber: true })}
+        />
+        <SelectField id="listing-condition" label="Condition" error={errors.condition?.message} {...register('condition')}>
+          {LISTING_CONDITIONS.map((c) => (
+            <option key={c} value={c}>
+              {listingConditionLabels[c]}
+            </option>
+          ))}
+        </SelectField>
       </div>
       <PriceFields register={register} errors={errors} priceKind={priceKind} />
       <div className="grid gap-4 sm:grid-cols-2">
-        <Field
+        <InputField
           id="listing-region"
           label="Region"
           hint="Town or area, so people can judge shipping."
           error={errors.region && 'Give a region of 2 to 80 characters.'}
-        >
-          <input
-            id="listing-region"
-            className={inputClass}
-            autoComplete="address-level2"
-            {...describe('listing-region', errors.region?.message, true)}
-            {...register('region')}
-          />
-        </Field>
-        <Field id="listing-ships" label="Ships to" hint="e.g. EU, UK only, worldwide, collection only." error={errors.shipsTo?.message}>
-          <input
-            id="listing-ships"
-            className={inputClass}
-            {...describe('listing-ships', errors.shipsTo?.message, true)}
-            {...register('shipsTo', text)}
-          />
-        </Field>
+          autoComplete="address-level2"
+          {...register('region')}
+        />
+        <InputField
+          id="listing-ships"
+          label="Ships to"
+          hint="e.g. EU, UK only, worldwide, collection only."
+          error={errors.shipsTo?.message}
+          {...register('shipsTo', text)}
+        />
       </div>
-      <Field
+      <TextAreaField
         id="listing-notes"
         label="Notes"
         hint="Tested how, what's wrong with them, what you'd swap for. Markdown works."
         error={errors.notes?.message}
-      >
-        <textarea
-          id="listing-notes"
-          rows={5}
-          className={inputClass}
-          {...describe('listing-notes', errors.notes?.message, true)}
-          {...register('notes', text)}
-        />
-      </Field>
+        rows={5}
+        {...register('notes', text)}
+      />
       <FormError message={errors.root?.server?.message} />
       <Button type="submit" disabled={isSubmitting}>
         {isSubmitting ? 'Saving…' : submitLabel}

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { partCategoryLabels } from '@shared/schemas/part.ts';
 import { usePartOptions, usePickedPart } from '../api/part-options.ts';
-import { describe, Field, inputClass } from '@/components/ui/form-bits.tsx';
+import { InputField, SelectField } from '@/components/ui/form-bits.tsx';
 
 /**
  * Pick a listed part: type to narrow the list, then choose it in the select below (both labelled,
@@ -23,35 +23,31 @@ export function PartPicker({
   const pickedMissing = value !== undefined && !items.some((p) => p.id === value);
   return (
     <div className="grid gap-3 sm:grid-cols-2">
-      <Field id="part-search" label="Find a part" hint="Name or salvage source; only parts in the registry can be listed.">
-        <input
-          id="part-search"
-          type="search"
-          className={inputClass}
-          value={q}
-          maxLength={100}
-          autoComplete="off"
-          {...describe('part-search', undefined, true)}
-          onChange={(e) => setQ(e.target.value)}
-        />
-      </Field>
-      <Field id="listing-part" label="Part" error={error}>
-        <select
-          id="listing-part"
-          className={inputClass}
-          value={value ?? ''}
-          {...describe('listing-part', error)}
-          onChange={(e) => onChange(e.target.value ? Number(e.target.value) : undefined)}
-        >
-          <option value="">{options.isPending ? 'Loading parts…' : items.length ? 'Choose a part…' : 'No part matches'}</option>
-          {pickedMissing && <option value={value}>{picked.data?.name ?? `Part ${value}`}</option>}
-          {items.map((p) => (
-            <option key={p.id} value={p.id}>
-              {p.name} ({partCategoryLabels[p.category]})
-            </option>
-          ))}
-        </select>
-      </Field>
+      <InputField
+        id="part-search"
+        label="Find a part"
+        hint="Name or salvage source; only parts in the registry can be listed."
+        type="search"
+        value={q}
+        maxLength={100}
+        autoComplete="off"
+        onChange={(e) => setQ(e.target.value)}
+      />
+      <SelectField
+        id="listing-part"
+        label="Part"
+        error={error}
+        value={value ?? ''}
+        onChange={(e) => onChange(e.target.value ? Number(e.target.value) : undefined)}
+      >
+        <option value="">{options.isPending ? 'Loading parts…' : items.length ? 'Choose a part…' : 'No part matches'}</option>
+        {pickedMissing && <option value={value}>{picked.data?.name ?? `Part ${value}`}</option>}
+        {items.map((p) => (
+          <option key={p.id} value={p.id}>
+            {p.name} ({partCategoryLabels[p.category]})
+          </option>
+        ))}
+      </SelectField>
     </div>
   );
 }

@@ -1,7 +1,7 @@
 import type { UseFormRegister, FieldErrors } from 'react-hook-form';
 import type { z } from 'zod';
 import { PRICE_KINDS, type createListingInput, type PriceKind } from '@shared/schemas/listing.ts';
-import { describe, Field, inputClass, numberOrNull } from '@/components/ui/form-bits.tsx';
+import { InputField, numberOrNull } from '@/components/ui/form-bits.tsx';
 
 type Values = z.input<typeof createListingInput>;
 const priceKindLabels: Record<PriceKind, string> = { price: 'For a price', free: 'Free', swap: 'Swap' };
@@ -33,28 +33,26 @@ export function PriceFields({
       </div>
       {priceKind === 'price' && (
         <div className="grid max-w-md grid-cols-[1fr_7rem] gap-3">
-          <Field id="listing-amount" label="Amount" error={amountError}>
-            <input
-              id="listing-amount"
-              type="number"
-              inputMode="decimal"
-              min={0}
-              step="0.01"
-              className={`${inputClass} num`}
-              {...describe('listing-amount', amountError)}
-              {...register('priceAmount', { setValueAs: numberOrNull })}
-            />
-          </Field>
-          <Field id="listing-currency" label="Currency" error={currencyError}>
-            <input
-              id="listing-currency"
-              maxLength={3}
-              autoCapitalize="characters"
-              className={`${inputClass} num uppercase`}
-              {...describe('listing-currency', currencyError)}
-              {...register('currency', { setValueAs: (v: string) => (v ? v.trim().toUpperCase() : null) })}
-            />
-          </Field>
+          <InputField
+            id="listing-amount"
+            label="Amount"
+            error={amountError}
+            type="number"
+            inputMode="decimal"
+            min={0}
+            step="0.01"
+            className="num"
+            {...register('priceAmount', { setValueAs: numberOrNull })}
+          />
+          <InputField
+            id="listing-currency"
+            label="Currency"
+            error={currencyError}
+            maxLength={3}
+            autoCapitalize="characters"
+            className="num uppercase"
+            {...register('currency', { setValueAs: (v: string) => (v ? v.trim().toUpperCase() : null) })}
+          />
         </div>
       )}
     </fieldset>

@@ -1,13 +1,11 @@
 import { useId, type ReactNode } from 'react';
 import type { FieldValues, Path, UseFormRegisterReturn, UseFormReturn } from 'react-hook-form';
+import { InputField, SelectField } from '@/components/ui/form-bits.tsx';
 
 /** Empty input → undefined (so optional fields stay absent), anything else → a number for zod to judge. */
 export const asNumber = {
   setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? undefined : typeof v === 'number' ? v : Number(v)),
 };
-
-const inputClass =
-  'mt-1 w-full rounded-md border border-rule bg-white px-2 py-1.5 text-ink aria-[invalid=true]:border-danger aria-[invalid=true]:bg-danger/5';
 
 interface Chrome {
   label: ReactNode;
@@ -16,89 +14,26 @@ interface Chrome {
   optional?: boolean;
 }
 
-/** Label, control, hint and error, wired with htmlFor and aria-describedby. */
-export function FieldShell({
-  id,
-  label,
-  unit,
-  hint,
-  optional,
-  error,
-  children,
-}: Chrome & { id: string; error?: string; children: ReactNode }) {
-  return (
-    <div className="min-w-0">
-      <label htmlFor={id} className="block text-sm font-medium">
-        {label}
-        {unit && <span className="font-normal text-ink-soft"> ({unit})</span>}
-        {optional && <span className="font-normal text-ink-soft"> · optional</span>}
-      </label>
-      {children}
-      {hint && !error && (
-        <p id={`${id}-hint`} className="mt-1 text-xs text-ink-soft">
-          {hint}
-        </p>
-      )}
-      {error && (
-        <p id={`${id}-error`} className="mt-1 text-xs font-medium text-danger">
-          {error}
-        </p>
-      )}
-    </div>
-  );
-}
-
-const describedBy = (id: string, error?: string, hint?: ReactNode) => (error ? `${id}-error` : hint ? `${id}-hint` : undefined);
-
-/** A numeric input: decimal keypad on phones, monospace digits, the unit in its label. */
+/** A numeric input of the form kit: decimal keypad on phones, monospace digits, the unit in its label. */
 export function NumberInput({
   registration,
   error,
   step = 'any',
   ...chrome
 }: Chrome & { registration: UseFormRegisterReturn; error?: string; step?: string }) {
-  const id = useId();
   return (
-    <FieldShell id={id} error={error} {...chrome}>
-      <input
-        id={id}
-        type="number"
-        inputMode="decimal"
-        step={step}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(id, error, chrome.hint)}
-        className={`num ${inputClass}`}
-        {...registration}
-      />
-    </FieldShell>
+    <InputField id={useId()} error={error} type="number" inputMode="decimal" step={step} className="num" {...chrome} {...registration} />
   );
 }
 
-/** A select with its label; options as value/label pairs. */
+/** A select of the form kit with its label; options as value/label pairs. */
 export function SelectInput({
   registration,
   error,
   options,
   ...chrome
 }: Chrome & { registration: UseFormRegisterReturn; error?: string; options: readonly { value: string; label: string }[] }) {
-  const id = useId();
-  return (
-    <FieldShell id={id} error={error} {...chrome}>
-      <select
-        id={id}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(id, error, chrome.hint)}
-        className={inputClass}
-        {...registration}
-      >
-        {options.map((o) => (
-          <option key={o.value} value={o.value}>
-            {o.label}
-          </option>
-        ))}
-      </select>
-    </FieldShell>
-  );
+  return <SelectField id={useId()} error={error} options={options} {...chrome} {...registration} />;
 }
 
 /** The error message react-hook-form holds for a field (subscribes to formState.errors). */

@@ -1,7 +1,8 @@
 import { useCallback, useId, useMemo, type ReactNode } from 'react';
 import { useUnitConversion } from '@/hooks/use-unit-conversion.ts';
 import type { FieldValues, Path, UseFormReturn } from 'react-hook-form';
-import { asNumber, errorOf, FieldShell } from './fields.tsx';
+import { describe, Field, inputClass } from '@/components/ui/form-bits.tsx';
+import { asNumber, errorOf } from './fields.tsx';
 
 /**
  * A number with its own unit picker beside it (e.g. capacitance in nF or µF); both controls labelled.
@@ -38,21 +39,20 @@ export function FormQuantity<T extends FieldValues, O>({
   const fields = useMemo(() => [name], [name]);
   useUnitConversion(form as unknown as UseFormReturn<T, unknown, unknown>, unitName, fields, convert);
   return (
-    <FieldShell id={id} label={label} hint={hint} optional={optional} error={error}>
-      <div className="mt-1 flex gap-2">
+    <Field id={id} label={label} hint={hint} optional={optional} error={error}>
+      <div className="flex gap-2">
         <input
           id={id}
           type="number"
           inputMode="decimal"
           step="any"
-          aria-invalid={error ? true : undefined}
-          aria-describedby={error ? `${id}-error` : hint ? `${id}-hint` : undefined}
-          className="num min-w-0 flex-1 rounded-md border border-rule bg-white px-2 py-1.5 aria-[invalid=true]:border-danger aria-[invalid=true]:bg-danger/5"
+          {...describe(id, error, !!hint)}
+          className={`num min-w-0 flex-1 ${inputClass}`}
           {...form.register(name, asNumber)}
         />
         <select
           aria-label={`${label}: unit`}
-          className="w-24 shrink-0 rounded-md border border-rule bg-white px-2 py-1.5"
+          className="w-24 shrink-0 rounded-md border border-rule bg-white px-2 py-1.5 text-base"
           {...form.register(unitName)}
         >
           {units.map((u) => (
@@ -62,6 +62,6 @@ export function FormQuantity<T extends FieldValues, O>({
           ))}
         </select>
       </div>
-    </FieldShell>
+    </Field>
   );
 }

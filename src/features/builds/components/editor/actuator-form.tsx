@@ -12,7 +12,16 @@ import {
 } from '@shared/schemas/actuator.ts';
 import type { PartChoiceDto } from '@shared/schemas/part.ts';
 import { Button } from '@/components/ui/button.tsx';
-import { describe, Field, fieldMessage, FormError, inputClass } from '@/components/ui/form-bits.tsx';
+import {
+  describe,
+  Field,
+  fieldMessage,
+  FormError,
+  inputClass,
+  InputField,
+  SelectField,
+  TextAreaField,
+} from '@/components/ui/form-bits.tsx';
 import { HighVoltageCaution } from './high-voltage-caution.tsx';
 import { parseOptionalNumber } from '@/lib/csv/number-text.ts';
 import { PartPicker } from './part-picker.tsx';
@@ -85,30 +94,36 @@ export function ActuatorForm({
         )}
       />
       <div className="grid gap-3 sm:grid-cols-3">
-        <Field label="Label (optional)" id={id('label')} error={errors.label?.message} className="sm:col-span-3">
-          <input id={id('label')} className={inputClass} placeholder="e.g. Z bender, X stack" {...register('label')} />
-        </Field>
-        <Field label="Axis" id={id('axis')} error={errors.axis?.message}>
-          <select id={id('axis')} className={inputClass} {...register('axis')}>
-            {ACTUATOR_AXES.map((a) => (
-              <option key={a} value={a}>
-                {AXIS_LABELS[a]}
-              </option>
-            ))}
-          </select>
-        </Field>
-        <Field label="Drive" id={id('drive')} error={errors.drive?.message} className="sm:col-span-2">
-          <select id={id('drive')} className={inputClass} {...register('drive')}>
-            {ACTUATOR_DRIVES.map((d) => (
-              <option key={d} value={d}>
-                {actuatorDriveLabels[d]}
-              </option>
-            ))}
-          </select>
-        </Field>
-        <Field label="Amplifier (optional)" id={id('amp')} error={errors.amplifier?.message} className="sm:col-span-2">
-          <input id={id('amp')} className={inputClass} placeholder="e.g. 0–150 V op-amp stage" {...register('amplifier')} />
-        </Field>
+        <InputField
+          label="Label (optional)"
+          id={id('label')}
+          error={errors.label?.message}
+          fieldClassName="sm:col-span-3"
+          placeholder="e.g. Z bender, X stack"
+          {...register('label')}
+        />
+        <SelectField label="Axis" id={id('axis')} error={errors.axis?.message} {...register('axis')}>
+          {ACTUATOR_AXES.map((a) => (
+            <option key={a} value={a}>
+              {AXIS_LABELS[a]}
+            </option>
+          ))}
+        </SelectField>
+        <SelectField label="Drive" id={id('drive')} error={errors.drive?.message} fieldClassName="sm:col-span-2" {...register('drive')}>
+          {ACTUATOR_DRIVES.map((d) => (
+            <option key={d} value={d}>
+              {actuatorDriveLabels[d]}
+            </option>
+          ))}
+        </SelectField>
+        <InputField
+          label="Amplifier (optional)"
+          id={id('amp')}
+          error={errors.amplifier?.message}
+          fieldClassName="sm:col-span-2"
+          placeholder="e.g. 0–150 V op-amp stage"
+          {...register('amplifier')}
+        />
         <Field label="Max volts (optional)" id={id('volts')} error={voltsError}>
           <div className="flex items-center gap-2">
             <input
@@ -125,9 +140,7 @@ export function ActuatorForm({
         </Field>
       </div>
       <HighVoltageCaution maxVolts={typeof maxVolts === 'number' ? maxVolts : undefined} capacitanceNf={part?.capacitanceNf} />
-      <Field label="Notes (optional)" id={id('notes')} error={errors.notes?.message}>
-        <textarea id={id('notes')} rows={2} className={inputClass} {...register('notes')} />
-      </Field>
+      <TextAreaField label="Notes (optional)" id={id('notes')} error={errors.notes?.message} rows={2} {...register('notes')} />
       <FormError message={errors.root?.server?.message} />
       <div className="flex gap-2">
         <Button type="submit" disabled={isSubmitting}>
