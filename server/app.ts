@@ -31,6 +31,7 @@ import { sessionRoutes } from './routes/session.routes.ts';
 import { authRoutes } from './routes/auth.routes.ts';
 import { adminRoutes } from './routes/admin.routes.ts';
 import { workbenchRoutes } from './routes/workbench.routes.ts';
+import { shareRoutes } from './routes/share.routes.ts';
 import { photoRoutes } from './routes/photo.routes.ts';
 import { buildRoutes } from './routes/build.routes.ts';
 import { actuatorRoutes } from './routes/actuator.routes.ts';
@@ -226,6 +227,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(['/api', '/auth'], apiNotFound);
 
   const indexHtml = resolve(dist, 'index.html');
+  app.use(shareRoutes({ indexHtml, origin: config.publicUrl }));
   app.get('/{*splat}', (_req, res, next) => {
     if (!existsSync(indexHtml)) return next();
     res.set('Cache-Control', 'no-cache').sendFile(indexHtml);

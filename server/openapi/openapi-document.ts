@@ -28,6 +28,7 @@ const ERROR_TEXT: Record<number, string> = {
   404: 'No such thing, or not visible to you (`not_found`).',
   409: 'A conflict: the wrong state, or an Idempotency-Key reused or still running (`idempotency_key_reused`, `idempotency_in_progress`).',
   413: 'Too large (a body, a photo, or a run or build past its point budget).',
+  415: 'A file of a kind this route does not take (`unsupported_image`).',
   429: 'Too many requests; wait and retry.',
   503: 'The database is unreachable; retry later.',
   507: 'The server has no room to store the upload right now (`insufficient_storage`); retry later.',
