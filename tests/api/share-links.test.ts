@@ -45,7 +45,22 @@ async function metaOf(path: string) {
   return { res, meta, alternates, title };
 }
 
-const validXml = (xml: string) => {
+interface XmlEntry {
+  id: string;
+  title: string;
+  updated: string;
+  author: { name: string };
+  link: { '@href': string };
+}
+interface XmlDoc {
+  feed: { '@xmlns': string; id: string; title: string; updated: string; entry?: XmlEntry | XmlEntry[] };
+  urlset: { url: { loc: string } | { loc: string }[] };
+}
+
+/** A feed's entries as a list (the parser gives one entry as an object). */
+const entriesOf = (feed: XmlDoc['feed']): XmlEntry[] => (feed.entry === undefined ? [] : entriesOf(feed));
+
+const validXml = (xml: string): XmlDoc => {
   expect(xmlParser.validate(xml)).toBe(true);
   // fast-xml-parser 3 leaves entities as written; the five predefined ones decoded here [S: XML 1.0 §4.6].
   const decode = (v: string) =>
@@ -55,7 +70,7 @@ const validXml = (xml: string) => {
     attributeNamePrefix: '@',
     tagValueProcessor: decode,
     attrValueProcessor: decode,
-  }) as Record<string, any>;
+  }) as XmlDoc;
 };
 
 describe('share cards', () => {
@@ -132,16 +147,16 @@ describe('Atom feeds', () => {
     expect(feed.id).toBe('tag:scanwright.example,2026:builds');
     expect(typeof feed.title).toBe('string');
     expect(Date.parse(feed.updated)).not.toBeNaN();
-    const entries = [feed.entry].flat();
-    const mine = entries.find((e: any) => e.id === `tag:scanwright.example,2026:build-${pub.id}`);
+    const entries = entriesOf(feed);
+    const mine = entries.find((e) => e.id === `tag:scanwright.example,2026:build-${pub.id}`)!;
     expect(mine).toBeTruthy();
     expect(mine.title).toBe('Feed & friends');
     expect(mine.author.name).toBe('feed-maker');
     expect(mine.link['@href']).toBe(`https://scanwright.example/builds/${pub.id}`);
-    expect(entries.some((e: any) => e.id.endsWith(`build-${draft.id}`))).toBe(false);
+    expect(entries.some((e: XmlEntry) => e.id.endsWith(`build-${draft.id}`))).toBe(false);
     // Stable: the same id on a second read.
     const again = validXml((await request(t.app).get('/feeds/builds.atom')).text).feed;
-    expect([again.entry].flat().map((e: any) => e.id)).toContain(mine.id);
+    expect(entriesOf(again).map((e: XmlEntry) => e.id)).toContain(mine.id);
   });
 
   test('when a build’s feed is read, then its log entries; a draft’s feed is 404', async () => {
@@ -149,7 +164,7 @@ describe('Atom feeds', () => {
     const b = await createBuildRow(owner.id, { status: 'published' });
     await LogEntry.create({ buildId: b.id, entryDate: '2026-11-20', title: 'Wired the <bar>', body: 'Soldered **both** halves.' });
     const feed = validXml((await request(t.app).get(`/feeds/builds/${b.id}.atom`)).text).feed;
-    const entry = [feed.entry].flat()[0];
+    const entry = entriesOf(feed)[0]!;
     expect(entry.title).toBe('Wired the <bar>');
     expect(entry.updated).toBe('2026-11-20T00:00:00.000Z');
     const draft = await createBuildRow(owner.id, { status: 'draft' });
@@ -166,9 +181,9 @@ describe('Atom feeds', () => {
       await createRunRow({ buildId: b.id, partId: part.id, ownerId: owner.id, gainNmPerV: 42, status: 'accepted' });
     await Build.update({ publishedAt: new Date() }, { where: { id: pub.id } });
     const feed = validXml((await request(t.app).get(`/feeds/parts/${part.id}.atom`)).text).feed;
-    const entries = [feed.entry].flat().filter(Boolean);
-    expect(entries.map((e: any) => e.title)).toEqual([expect.stringContaining('Published rig')]);
-    expect(entries[0].title).toMatch(/nm\/V/);
+    const entries = entriesOf(feed);
+    expect(entries.map((e: XmlEntry) => e.title)).toEqual([expect.stringContaining('Published rig')]);
+    expect(entries[0]!.title).toMatch(/nm\/V/);
   });
 });
 
@@ -179,7 +194,7 @@ describe('sitemap.xml and robots.txt', () => {
     const draft = await createBuildRow(owner.id, { status: 'draft' });
     const res = await request(t.app).get('/sitemap.xml');
     expect(res.status).toBe(200);
-    const locs = [validXml(res.text).urlset.url].flat().map((u: any) => u.loc);
+    const locs = [validXml(res.text).urlset.url].flat().map((u: { loc: string }) => u.loc);
     expect(locs).toContain(`https://scanwright.example/builds/${pub.id}`);
     expect(locs).not.toContain(`https://scanwright.example/builds/${draft.id}`);
   });
