@@ -58,7 +58,7 @@ interface XmlDoc {
 }
 
 /** A feed's entries as a list (the parser gives one entry as an object). */
-const entriesOf = (feed: XmlDoc['feed']): XmlEntry[] => (feed.entry === undefined ? [] : entriesOf(feed));
+const entriesOf = (feed: XmlDoc['feed']): XmlEntry[] => (feed.entry === undefined ? [] : [feed.entry].flat());
 
 const validXml = (xml: string): XmlDoc => {
   expect(xmlParser.validate(xml)).toBe(true);
