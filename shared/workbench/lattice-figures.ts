@@ -179,7 +179,3 @@ export function latticeFigures(input: LatticeFiguresInput): LatticeFigures {
   };
   return figures;
 }
-/** Fewest periods across the image along any of the vectors. */
-export function periodsAcross(peaks: readonly ImageVector[], width: number, height: number): number {
-  return Math.min(...peaks.map((k) => Math.abs(k.kx) * width + Math.abs(k.ky) * height));
-}

@@ -29,7 +29,7 @@ import { lineGratingScale, orderPair, solveLatticeMap, type ImageVector, type Ma
 import { quadrantPeaks } from './lattice-quadrants.ts';
 import { centredLogSpectrum, checkImage, imageSpectrum, refinePeak, ringMedian, strongestMaxima } from './lattice-spectrum.ts';
 
-export { LatticeError, MAX_IMAGE_SIDE, MIN_IMAGE_SIDE, MIN_PERIODS, NO_PERIODICITY_RATIO, WEAK_PEAK_RATIO } from './lattice-limits.ts';
+export { LatticeError, MIN_PERIODS, WEAK_PEAK_RATIO } from './lattice-limits.ts';
 export type { LatticeKind } from './lattice-limits.ts';
 
 const SQRT3 = Math.sqrt(3);
