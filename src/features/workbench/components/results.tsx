@@ -105,9 +105,9 @@ export function Headline({ label, children, sub }: { label: string; children: Re
 /** One labelled result; `note` says what it means or where it comes from. */
 export function ResultRow({ label, children, note }: { label: ReactNode; children: ReactNode; note?: ReactNode }) {
   return (
-    <div className="grid grid-cols-[minmax(0,1fr)_auto] items-baseline gap-x-4 py-2">
+    <div className="grid grid-cols-[minmax(6rem,max-content)_minmax(0,1fr)] items-baseline gap-x-4 py-2">
       <dt className="text-sm">{label}</dt>
-      <dd className="text-right">{children}</dd>
+      <dd className="min-w-0 break-words text-right">{children}</dd>
       {note && <dd className="col-span-2 text-xs text-ink-soft">{note}</dd>}
     </div>
   );

@@ -1,12 +1,15 @@
-import { formatFixed, formatPlusMinus, formatSig } from '@shared/format/measured-number.ts';
+import { formatFixed, formatSig, formatWithUncertainty } from '@shared/format/measured-number.ts';
 import { Headline, ResultPanel, ResultRow } from '@/features/workbench/components/results.tsx';
 import type { LatticeResult } from './lattice-messages.ts';
 
 /** Angles to 0.01° when no ± says otherwise. */
 const deg = (v: number | null) => (v === null ? '—' : `${formatFixed(v, 2)}°`);
-/** A figure with its standard uncertainty (k = 1) when the quarters gave one. */
-const pm = (v: number, u: number | null | undefined, unit: string) => formatPlusMinus(v, u ?? null, 'std', unit);
-const pmDeg = (v: number | null, u: number | null | undefined) => (v === null ? '—' : u ? pm(v, u, '°').replace(' °', '°') : deg(v));
+/** A figure with its standard uncertainty (k = 1, said once in the basis) when the quarters gave one. */
+const pm = (v: number, u: number | null | undefined, unit: string) => {
+  const f = formatWithUncertainty(v, u ?? null);
+  return `${f.value}${f.uncertainty === null ? '' : ` ± ${f.uncertainty}`}${unit === '°' ? '°' : ` ${unit}`}`.replace(/-/g, '−');
+};
+const pmDeg = (v: number | null, u: number | null | undefined) => (v === null ? '—' : u ? pm(v, u, '°') : deg(v));
 
 /** nm per pixel, skew, rotation, gains and the peaks the lattice analysis chose, each with its ±. */
 export function LatticeResults({ r, ms }: { r: LatticeResult; ms: number }) {
@@ -29,7 +32,7 @@ export function LatticeResults({ r, ms }: { r: LatticeResult; ms: number }) {
         'Plane removed, Hann window, 2-D FFT; peaks placed between bins by Gaussian interpolation (Gasior & Gonzalez 2004); ' +
         'the pixel-to-nm map takes the measured reciprocal vectors onto the ideal lattice’s, with x along the image rows. ' +
         (u
-          ? `± is a standard uncertainty (k = 1, GUM): the scatter of the same figures from the image’s ${u.quadrants} quarters (s/√n), ` +
+          ? `Every ± is a standard uncertainty (u, k = 1, GUM): the scatter of the same figures from the image’s ${u.quadrants} quarters (s/√n), ` +
             'which also catches drift and creep across the scan, combined with the interpolation’s largest bias (0.016 bin, rectangular).'
           : 'No ± : the lattice was not found in at least three quarters of the image.')
       }
