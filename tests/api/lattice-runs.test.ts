@@ -36,6 +36,17 @@ async function analysed() {
   return res.body;
 }
 
+type Analysed = Awaited<ReturnType<typeof analysed>>;
+/** A lattice run's body from the calculation's answer: the vectors the page would send. */
+const latticeBody = (r: Analysed) => ({
+  kind: 'lattice',
+  lattice: { kind: 'hexagonal', constantNm: 0.246 },
+  image: { width: 256, height: 256 },
+  scanSpanV: span,
+  peaks: r.peaks.map(({ kx, ky }: { kx: number; ky: number }) => ({ kx, ky })),
+  quadrantPeaks: r.quadrantPeaks,
+});
+
 async function ownerWithActuator(axis: 'X' | 'Y' | 'Z' | 'XY') {
   const owner = await createUser();
   const build = await createBuildRow(owner.id, { status: 'draft' });
@@ -67,15 +78,7 @@ describe('POST /api/actuators/:actuatorId/runs with kind "lattice"', () => {
   test('when a maker records the page’s vectors on an XY actuator, then the server solves both axes and the run counts the mean', async () => {
     const r = await analysed();
     const { a, actuatorId } = await ownerWithActuator('XY');
-    const body = {
-      kind: 'lattice',
-      lattice: { kind: 'hexagonal', constantNm: 0.246 },
-      image: { width: 256, height: 256 },
-      scanSpanV: span,
-      peaks: r.peaks.map(({ kx, ky }: { kx: number; ky: number }) => ({ kx, ky })),
-      quadrantPeaks: r.quadrantPeaks,
-      measuredOn: '2026-11-20',
-    };
+    const body = { ...latticeBody(r), measuredOn: '2026-11-20' };
     const res = await post(a, `/api/actuators/${actuatorId}/runs`, body);
     expect(res.status, JSON.stringify(res.body).slice(0, 400)).toBe(201);
     expect(res.body).toMatchObject({
@@ -107,14 +110,7 @@ describe('POST /api/actuators/:actuatorId/runs with kind "lattice"', () => {
   test('when a lattice run is accepted on a published build, then the part’s figures count its gain', async () => {
     const r = await analysed();
     const { a, actuatorId, build, part } = await ownerWithActuator('Y');
-    const res = await post(a, `/api/actuators/${actuatorId}/runs`, {
-      kind: 'lattice',
-      lattice: { kind: 'hexagonal', constantNm: 0.246 },
-      image: { width: 256, height: 256 },
-      scanSpanV: span,
-      peaks: r.peaks.map(({ kx, ky }: { kx: number; ky: number }) => ({ kx, ky })),
-      quadrantPeaks: r.quadrantPeaks,
-    });
+    const res = await post(a, `/api/actuators/${actuatorId}/runs`, latticeBody(r));
     expect(res.status).toBe(201);
     expect(res.body.fit.lattice.countsAs).toBe('y');
     expect(res.body.fit.gainNmPerV).toBeCloseTo(res.body.fit.lattice.gainNmPerV.y, 12);
@@ -127,14 +123,7 @@ describe('POST /api/actuators/:actuatorId/runs with kind "lattice"', () => {
 
   test('when the actuator is a Z axis, or fewer than three quarters are sent, or the vectors are out of range, then 400 with its code', async () => {
     const r = await analysed();
-    const base = {
-      kind: 'lattice',
-      lattice: { kind: 'hexagonal', constantNm: 0.246 },
-      image: { width: 256, height: 256 },
-      scanSpanV: span,
-      peaks: r.peaks.map(({ kx, ky }: { kx: number; ky: number }) => ({ kx, ky })),
-      quadrantPeaks: r.quadrantPeaks,
-    };
+    const base = latticeBody(r);
     const z = await ownerWithActuator('Z');
     expectError(await post(z.a, `/api/actuators/${z.actuatorId}/runs`, base), 400, 'lattice_axis');
     const xy = await ownerWithActuator('XY');
