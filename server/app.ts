@@ -32,6 +32,7 @@ import { authRoutes } from './routes/auth.routes.ts';
 import { adminRoutes } from './routes/admin.routes.ts';
 import { workbenchRoutes } from './routes/workbench.routes.ts';
 import { shareRoutes } from './routes/share.routes.ts';
+import { commentRoutes } from './routes/comment.routes.ts';
 import { photoRoutes } from './routes/photo.routes.ts';
 import { buildRoutes } from './routes/build.routes.ts';
 import { actuatorRoutes } from './routes/actuator.routes.ts';
@@ -224,6 +225,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(registryDatasetRoutes(config));
   app.use(openApiRoutes(config));
   app.use(exchangeRoutes(config));
+  app.use(commentRoutes(config));
   app.use(['/api', '/auth'], apiNotFound);
 
   const indexHtml = resolve(dist, 'index.html');

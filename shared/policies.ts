@@ -74,6 +74,8 @@ const rules = {
   'listing.edit': and(active, isOwner),
   'listing.hide': and(active, hasRole('moderator'), not(isOwnWork)),
   'listing.view-hidden': or(isOwner, hasRole('moderator')),
+  /** A comment on a published build is hidden by a moderator (with a note), not on their own comment or build. */
+  'comment.hide': and(active, hasRole('moderator'), not(isOwnWork)),
   /** Anyone signed in may write to a listing's owner, except the owner themself. */
   'listing.message': and(active, not(isOwner)),
   /** A conversation about a listing is seen by its two parties only: the listing's owner and the maker who wrote first. */

@@ -9,6 +9,7 @@ import { Actuator } from './actuator.model.ts';
 import { CalibrationRun } from './calibration-run.model.ts';
 import { AuditEntry } from './audit-entry.model.ts';
 import { Report } from './report.model.ts';
+import { BuildComment } from './build-comment.model.ts';
 import { OutboxMail } from './outbox-mail.model.ts';
 import { Listing } from './listing.model.ts';
 import { ListingPhoto } from './listing-photo.model.ts';
@@ -29,6 +30,7 @@ export function initModels(sequelize: Sequelize) {
   CalibrationRun.initModel(sequelize);
   AuditEntry.initModel(sequelize);
   Report.initModel(sequelize);
+  BuildComment.initModel(sequelize);
   OutboxMail.initModel(sequelize);
   Listing.initModel(sequelize);
   ListingPhoto.initModel(sequelize);

@@ -49,6 +49,7 @@ import { listUsersQuery, setRoleInput, setSuspendedInput, userIdParams, userToke
 import { mailIdParams } from '@shared/schemas/outbox.ts';
 import { calculators } from '@shared/workbench/calculators/all-calculators.ts';
 import { RIG_RUN_BODY } from '@shared/docs/rig-examples.ts';
+import { commentIdParams, createCommentInput, hideCommentInput } from '@shared/schemas/comment.ts';
 
 /**
  * Who may call a route: anyone (`visitor`, signed in or not); a browser session only (`session`: cookie, and the
@@ -232,6 +233,41 @@ const pageWithCard = (path: string, what: string): RouteDoc => ({
   response: { status: 200, description: 'HTML.', contentType: 'text/html' },
   errors: [404],
 });
+const commentDocs: RouteDoc[] = [
+  {
+    method: 'GET',
+    path: '/api/builds/:buildId/comments',
+    summary: 'Comments on a published build, oldest first (hidden ones are not listed)',
+    tag: 'Comments',
+    auth: 'visitor',
+    params: buildIdParams,
+    response: json(200, '`{ items: [...] }`, each with its Markdown body and what you may do with it.'),
+    errors: [404, 409],
+  },
+  {
+    method: 'POST',
+    path: '/api/builds/:buildId/comments',
+    summary: 'Comment on a published build (Markdown); the build’s owner is mailed',
+    description: 'At most 10 comments per 10 minutes per maker (429). A build that is not published answers 409 `build_not_published`.',
+    tag: 'Comments',
+    auth: 'session',
+    params: buildIdParams,
+    body: createCommentInput,
+    response: json(201, 'The comment.'),
+    errors: [409, 429],
+  },
+  {
+    method: 'POST',
+    path: '/api/comments/:commentId/hide',
+    summary: 'Hide a comment, with a note on the audit trail (moderators, not on their own comment or build)',
+    tag: 'Comments',
+    auth: 'session',
+    params: commentIdParams,
+    body: hideCommentInput,
+    response: noContent('Hidden: it leaves the list for everyone.'),
+  },
+];
+
 const shareDocs: RouteDoc[] = [
   pageWithCard('/builds/:id', 'a published build'),
   pageWithCard('/parts/:id', 'a registry part'),
@@ -1082,6 +1118,7 @@ export const ROUTE_DOCS: readonly RouteDoc[] = [
   ...workbenchDocs,
   imageHeightsDoc,
   ...shareDocs,
+  ...commentDocs,
 ];
 
 /** Tags in the order the document and the reference page list them, each with a line of its own. */

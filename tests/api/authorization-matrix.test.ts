@@ -109,6 +109,8 @@ const expected: Record<string, Row> = {
   'DELETE /api/listings/:listingId/photos/:photoId': [401, 204, 403, 403, 403, 403],
   'POST /api/listings/:listingId/visibility': [401, 403, 403, 403, 200, 200],
   'POST /api/listings/:listingId/messages': [401, 403, 201, 403, 201, 201],
+  'POST /api/builds/:buildId/comments': [401, 201, 201, 403, 201, 201],
+  'POST /api/comments/:commentId/hide': [401, 403, 403, 403, 204, 204],
   'POST /api/inbox/:threadId/messages': [401, 201, 404, 403, 404, 404],
   'POST /api/inbox/:threadId/read': [401, 204, 404, 403, 404, 404],
 };

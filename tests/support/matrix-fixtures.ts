@@ -45,6 +45,8 @@ import { jpeg } from './images.ts';
 import { signIn } from './login.ts';
 import { User } from '../../server/models/user.model.ts';
 import { Build } from '../../server/models/build.model.ts';
+import { BuildComment } from '../../server/models/build-comment.model.ts';
+import { createCommentInput, hideCommentInput } from '@shared/schemas/comment.ts';
 import { LogEntry } from '../../server/models/log-entry.model.ts';
 import { Photo } from '../../server/models/photo.model.ts';
 import { Actuator } from '../../server/models/actuator.model.ts';
@@ -1178,6 +1180,39 @@ export const fixtures: Record<string, Fixture> = {
         state: () => rows(Listing.findByPk(listing.id)),
         async changed() {
           expect((await Listing.findByPk(listing.id))?.hiddenAt).not.toBeNull();
+        },
+      };
+    },
+  },
+  'POST /api/builds/:buildId/comments': {
+    schema: createCommentInput,
+    allowed: 'other',
+    async make({ owner, actor }) {
+      const build = await createBuildRow(owner.id, { status: 'published' });
+      const comments = () => BuildComment.findAll({ where: { buildId: build.id } });
+      return {
+        params: { buildId: build.id },
+        body: { body: 'Which **clamp** holds the bar?' },
+        state: () => rows(comments()),
+        async changed(res) {
+          expect((await comments()).map((c) => [c.authorId, c.body])).toEqual([[actor.user!.id, 'Which **clamp** holds the bar?']]);
+          expect(res.body).toMatchObject({ buildId: build.id, body: 'Which **clamp** holds the bar?' });
+        },
+      };
+    },
+  },
+  'POST /api/comments/:commentId/hide': {
+    schema: hideCommentInput,
+    allowed: 'moderator',
+    async make({ owner }) {
+      const build = await createBuildRow(owner.id, { status: 'published' });
+      const comment = await BuildComment.create({ buildId: build.id, authorId: owner.id, body: 'Buy cheap bars at my shop' });
+      return {
+        params: { commentId: comment.id },
+        body: { note: 'Advertising.' },
+        state: () => rows(BuildComment.findByPk(comment.id)),
+        async changed() {
+          expect((await BuildComment.findByPk(comment.id))?.hiddenAt).not.toBeNull();
         },
       };
     },

@@ -17,6 +17,7 @@ const table: Record<Action, Row> = {
   'review.decide': [false, false, false, false, true, true],
   'listing.edit': [false, true, false, false, false, false],
   'listing.hide': [false, false, false, false, true, true],
+  'comment.hide': [false, false, false, false, true, true],
   'listing.view-hidden': [false, true, false, true, true, true],
   'listing.message': [false, false, true, false, true, true],
   'message.thread.view': [false, true, false, true, false, false],

@@ -1,0 +1,93 @@
+// Comments on published builds: any signed-in maker writes one (Markdown, shown with the site's safe
+// renderer), the build's owner gets a mail, moderators hide one with a note (kept on the audit trail);
+// hidden comments are gone from the list for everyone.
+import type { Actor } from '@shared/policies.ts';
+import type { BuildCommentDto, CreateCommentInput, HideCommentInput } from '@shared/schemas/comment.ts';
+import { Build } from '../models/build.model.ts';
+import { BuildComment } from '../models/build-comment.model.ts';
+import { User } from '../models/user.model.ts';
+import { authorize } from '../policies/authorize.ts';
+import { ConflictError, NotFoundError } from '../errors.ts';
+import { presentComment } from '../presenters/comment.presenter.ts';
+import { loadBuildForView } from './build-access.ts';
+import { enqueueMail, kickOutbox } from './outbox.service.ts';
+import { noticeMail } from './review-mails.ts';
+import { recordAudit } from './audit.service.ts';
+
+/** Most comments a build page lists (the newest are kept; older ones stay in the database). */
+const MAX_LISTED = 500;
+
+/** A published build, or 404 for what the actor cannot see and 409 for a build that is not published. */
+async function publishedBuild(actor: Actor | null, buildId: number): Promise<Build> {
+  const build = await loadBuildForView(actor, buildId);
+  if (build.status !== 'published') throw new ConflictError('Only published builds take comments.', 'build_not_published');
+  return build;
+}
+
+export async function listComments(actor: Actor | null, buildId: number): Promise<BuildCommentDto[]> {
+  const build = await publishedBuild(actor, buildId);
+  const rows = await BuildComment.findAll({
+    where: { buildId, hiddenAt: null },
+    attributes: ['id', 'buildId', 'authorId', 'body', 'createdAt'],
+    order: [['id', 'DESC']],
+    limit: MAX_LISTED,
+  });
+  rows.reverse();
+  const users = await User.findAll({ where: { id: [...new Set(rows.map((r) => r.authorId))] }, attributes: ['id', 'login'] });
+  const authors = new Map(users.map((u) => [u.id, u.login]));
+  return rows.map((c) => presentComment(c, authors, actor, build.ownerId));
+}
+
+export async function createComment(actor: Actor | null, buildId: number, input: CreateCommentInput): Promise<BuildCommentDto> {
+  authorize(actor, 'content.create');
+  const build = await publishedBuild(actor, buildId);
+  const login = (await User.findByPk(actor.id, { attributes: ['login'] }))?.login ?? 'A maker';
+  const comment = await Build.sequelize!.transaction(async (transaction) => {
+    const c = await BuildComment.create({ buildId, authorId: actor.id, body: input.body }, { transaction });
+    if (build.ownerId !== actor.id) {
+      const owner = await User.findByPk(build.ownerId, { attributes: ['id', 'login', 'email', 'mailOptOut'], transaction });
+      if (owner) {
+        const excerpt = input.body.length > 600 ? `${input.body.slice(0, 600)}…` : input.body;
+        await enqueueMail(
+          owner,
+          noticeMail({
+            subject: `${login} commented on ${build.title}`,
+            greeting: owner.login,
+            lines: [`${login} commented on your build “${build.title}”:`, excerpt],
+            note: null,
+            path: `/builds/${build.id}#comment-${c.id}`,
+            linkText: 'Read and answer',
+          }),
+          { essential: false, transaction },
+        );
+      }
+    }
+    return c;
+  });
+  kickOutbox();
+  return presentComment(comment, new Map([[actor.id, login]]), actor, build.ownerId);
+}
+
+/** A moderator hides a comment with a note; it leaves the list for everyone and the note goes on the audit trail. */
+export async function hideComment(actor: Actor | null, commentId: number, input: HideCommentInput): Promise<void> {
+  authorize(actor, 'review.access');
+  await BuildComment.sequelize!.transaction(async (transaction) => {
+    const c = await BuildComment.findByPk(commentId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!c || c.hiddenAt) throw new NotFoundError('No such comment.');
+    const build = await Build.findByPk(c.buildId, { attributes: ['id', 'title', 'ownerId'], transaction });
+    authorize(actor, 'comment.hide', { authorIds: [c.authorId, build?.ownerId ?? 0] });
+    await c.update({ hiddenAt: new Date(), hiddenNote: input.note, hiddenById: actor.id }, { transaction });
+    const author = await User.findByPk(c.authorId, { attributes: ['login'], transaction });
+    await recordAudit(
+      actor,
+      {
+        action: 'comment.hide',
+        targetType: 'comment',
+        targetId: c.id,
+        targetLabel: `comment by ${author?.login ?? 'a former maker'} on “${build?.title ?? 'a deleted build'}”`,
+        note: input.note,
+      },
+      transaction,
+    );
+  });
+}

@@ -1,0 +1,26 @@
+import { z } from 'zod';
+
+/** Longest comment, in characters of Markdown. */
+export const MAX_COMMENT_CHARS = 4000;
+
+export const createCommentInput = z.strictObject({
+  body: z.string().trim().min(1, 'Write something.').max(MAX_COMMENT_CHARS, `At most ${MAX_COMMENT_CHARS} characters.`),
+});
+export type CreateCommentInput = z.infer<typeof createCommentInput>;
+
+export const hideCommentInput = z.strictObject({ note: z.string().trim().min(1, 'Say why it is hidden.').max(1000) });
+export type HideCommentInput = z.infer<typeof hideCommentInput>;
+
+export const commentIdParams = z.strictObject({ commentId: z.coerce.number().int().positive() });
+
+/** A comment on a published build as everyone sees it (hidden ones are not listed). */
+export interface BuildCommentDto {
+  id: number;
+  buildId: number;
+  author: { id: number; login: string };
+  /** Markdown, shown with the site's safe renderer. */
+  body: string;
+  createdAt: string;
+  /** What the viewer may do with it (the server decides; the client only hides controls). */
+  abilities: { hide: boolean; report: boolean };
+}
