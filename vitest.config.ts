@@ -10,8 +10,8 @@ export default defineConfig({
     env: { TZ: 'UTC' },
     // Projects of one `sequence.groupOrder` run together and must agree on maxWorkers. unit and api run
     // first, two files at a time (vitest's default is cores − 1, one worker on a two-core machine); then
-    // browser, then faults, one file at a time. `npm test` runs browser and faults side by side instead,
-    // as two vitest processes (scripts/test.mjs). Each api worker has its own database copy
+    // browser, then faults, one file at a time (`npm test` runs the phases as separate vitest processes,
+    // scripts/test.mjs). Each api worker has its own database copy
     // (tests/support/worker-database.ts).
     maxWorkers: 2,
     projects: [

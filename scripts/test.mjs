@@ -100,11 +100,12 @@ try {
     rmSync(reports[0], { force: true });
     status = await vitest(extra, reports[0]);
   } else {
-    // A full run, in two phases to keep both cores busy (timed in DEVELOPERS.md):
-    // 1. unit and api (two files at a time), while the client builds for the browser tests and the
-    //    conventions are checked: lint with the import boundaries and cycles, formatting, dead code (knip)
-    //    and the types of client, server, shared code and tests. Any failure fails the run.
-    // 2. browser and faults side by side, each one file at a time (the fault tests mostly wait on processes).
+    // A full run, in three phases (timed in DEVELOPERS.md): the client build for the browser tests; then
+    // 1. unit and api, two files at a time, each worker on its own copy of the migrated database;
+    // 2. browser, one file at a time, while the conventions are checked one after another: lint with the import
+    //    boundaries and cycles, formatting, dead code (knip) and the types of client, server, shared code and
+    //    tests (a browser file mostly waits on chromium and the live app). Any failure fails the run;
+    // 3. faults alone: they time recoveries of killed processes and must not compete for the cores.
     reports.push('test-output/vitest-unit-api.json', 'test-output/vitest-browser.json', 'test-output/vitest-faults.json');
     for (const f of reports) rmSync(f, { force: true });
     const checks = [
@@ -113,20 +114,16 @@ try {
       ['format', ['prettier', '--check', '.', '--log-level', 'warn']],
       ['dead code', ['knip', '--no-progress']],
     ];
-    const built = buildClient();
+    await buildClient();
+    const first = await vitest(['--project', 'unit', '--project', 'api'], reports[0]);
     const checking = (async () => {
       const codes = [];
       for (const [, args] of checks) codes.push(await runAsync('npx', args, env));
       return codes;
     })();
-    const first = await vitest(['--project', 'unit', '--project', 'api'], reports[0]);
-    await built;
-    const [browser, faults, codes] = await Promise.all([
-      vitest(['--project', 'browser'], reports[1]),
-      vitest(['--project', 'faults'], reports[2]),
-      checking,
-    ]);
+    const [browser, codes] = await Promise.all([vitest(['--project', 'browser'], reports[1]), checking]);
     checks.forEach(([name], i) => console.log(`${name}: ${codes[i] === 0 ? 'ok' : 'FAILED'}`));
+    const faults = await vitest(['--project', 'faults'], reports[2]);
     status = [first, browser, faults, ...codes].find((code) => code !== 0) ?? 0;
   }
   let passed = 0;
