@@ -10,8 +10,9 @@ export default defineConfig({
     env: { TZ: 'UTC' },
     // Projects of one `sequence.groupOrder` run together and must agree on maxWorkers. unit and api run
     // first, two files at a time (vitest's default is cores − 1, one worker on a two-core machine); then
-    // browser, then faults, one file at a time. `npm test` runs browser and faults side by side instead,
-    // as two vitest processes (scripts/test.mjs).
+    // browser, then faults, one file at a time (`npm test` runs the phases as separate vitest processes,
+    // scripts/test.mjs). Each api worker has its own database copy
+    // (tests/support/worker-database.ts).
     maxWorkers: 2,
     projects: [
       {
@@ -34,6 +35,7 @@ export default defineConfig({
           // Each file builds its own app and rows (tests/support/test-app.ts), so files can share one module
           // cache per worker instead of importing the whole server again for every file.
           isolate: false,
+          setupFiles: ['tests/support/worker-database.ts'],
           testTimeout: 20000,
           hookTimeout: 30000,
           sequence: { groupOrder: 0 },
@@ -59,6 +61,8 @@ export default defineConfig({
           name: 'browser',
           include: ['tests/browser/**/*.test.ts'],
           environment: 'node',
+          // Each file starts its own live app (tests/support/browser.ts); one module cache per worker.
+          isolate: false,
           testTimeout: 60000,
           hookTimeout: 60000,
           maxWorkers: 1,

@@ -6,7 +6,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { createServer } from 'node:net';
 import { ensureDebianPackages, ensureNodeModules } from './lib/setup.mjs';
-import { initDataDir, startServer, ensureDatabase, stopServer } from './lib/mariadb.mjs';
+import { initDataDir, startServer, ensureDatabase, stopServer, copyDatabase } from './lib/mariadb.mjs';
 import { clientBuildIsStale } from './lib/paths.mjs';
 
 ensureDebianPackages({ chromium: true });
@@ -29,6 +29,8 @@ try {
 } catch {
   /* use tmpdir */
 }
+/** Workers of the api project, as many as `maxWorkers` in vitest.config.ts; one database copy each. */
+const API_WORKERS = 2;
 const dir = mkdtempSync(join(base, 'scanwright-test-'));
 let mariadb = null;
 let status;
@@ -71,9 +73,16 @@ try {
     // Live-app browser tests share one uploads folder (demo pictures seeded once); removed with the run.
     TEST_UPLOADS_DIR: join(dir, 'uploads'),
     SESSION_SECRET: 'test-session-secret-test-session-secret',
+    TEST_WORKER_DATABASES: String(API_WORKERS),
   };
   const migrate = spawnSync(process.execPath, ['--import', 'tsx', 'server/cli/migrate.ts'], { stdio: 'inherit', env });
   if (migrate.status !== 0) throw new Error('migrations failed');
+  // API test files run two at a time, each worker on its own copy of the migrated database
+  // (tests/support/worker-database.ts), so one file's app never sees another's rows, mails or jobs.
+  for (let worker = 1; worker <= API_WORKERS; worker++) {
+    ensureDatabase(dir, { ...db, database: `${db.database}_${worker}` });
+    copyDatabase(dir, db.database, `${db.database}_${worker}`);
+  }
   const extra = process.argv.slice(2);
   const projects = extra.flatMap((a, i) => (a === '--project' ? [extra[i + 1]] : a.startsWith('--project=') ? [a.slice(10)] : []));
   const needsClient = projects.length === 0 || projects.includes('browser');
@@ -91,31 +100,30 @@ try {
     rmSync(reports[0], { force: true });
     status = await vitest(extra, reports[0]);
   } else {
-    // A full run, in two phases to keep both cores busy (timed in DEVELOPERS.md):
-    // 1. unit and api (two files at a time) while the client builds for the browser tests;
-    // 2. browser and faults side by side (each one file at a time; the fault tests mostly wait on processes)
-    //    while the conventions are checked: lint with the import boundaries and cycles, formatting, dead code
-    //    (knip) and the types of client, server, shared code and tests. Any failure fails the run.
+    // A full run, in three phases (timed in DEVELOPERS.md): the client build for the browser tests; then
+    // 1. unit and api, two files at a time, each worker on its own copy of the migrated database;
+    // 2. browser, one file at a time, while the conventions are checked one after another: lint with the import
+    //    boundaries and cycles, formatting, dead code (knip) and the types of client, server, shared code and
+    //    tests (a browser file mostly waits on chromium and the live app). Any failure fails the run;
+    // 3. faults alone: they time recoveries of killed processes and must not compete for the cores.
     reports.push('test-output/vitest-unit-api.json', 'test-output/vitest-browser.json', 'test-output/vitest-faults.json');
     for (const f of reports) rmSync(f, { force: true });
-    const [first] = await Promise.all([vitest(['--project', 'unit', '--project', 'api'], reports[0]), buildClient()]);
     const checks = [
       ['lint', ['eslint', '.']],
       ['typecheck', ['tsc', '--noEmit', '-p', 'tsconfig.json']],
       ['format', ['prettier', '--check', '.', '--log-level', 'warn']],
       ['dead code', ['knip', '--no-progress']],
     ];
+    await buildClient();
+    const first = await vitest(['--project', 'unit', '--project', 'api'], reports[0]);
     const checking = (async () => {
       const codes = [];
       for (const [, args] of checks) codes.push(await runAsync('npx', args, env));
       return codes;
     })();
-    const [browser, faults, codes] = await Promise.all([
-      vitest(['--project', 'browser'], reports[1]),
-      vitest(['--project', 'faults'], reports[2]),
-      checking,
-    ]);
+    const [browser, codes] = await Promise.all([vitest(['--project', 'browser'], reports[1]), checking]);
     checks.forEach(([name], i) => console.log(`${name}: ${codes[i] === 0 ? 'ok' : 'FAILED'}`));
+    const faults = await vitest(['--project', 'faults'], reports[2]);
     status = [first, browser, faults, ...codes].find((code) => code !== 0) ?? 0;
   }
   let passed = 0;

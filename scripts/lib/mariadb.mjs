@@ -123,6 +123,20 @@ export function ensureDatabase(dir, { database, user, password }) {
   );
 }
 
+/**
+ * Copy a (migrated) database into `to`, which must exist: schema, foreign keys and rows, through
+ * mariadb-dump piped into mariadb on the server's socket. Much faster than migrating again.
+ */
+export function copyDatabase(dir, from, to) {
+  const socket = `--socket=${join(dir, 'mysqld.sock')}`;
+  const dump = spawnSync('mariadb-dump', ['--no-defaults', socket, '-uroot', '--single-transaction', '--routines', from], {
+    maxBuffer: 256 * 1024 * 1024,
+  });
+  if (dump.status !== 0) throw new Error(`dump of ${from} failed: ${dump.stderr}`);
+  const load = spawnSync('mariadb', ['--no-defaults', socket, '-uroot', to], { input: dump.stdout });
+  if (load.status !== 0) throw new Error(`copy into ${to} failed: ${load.stderr}`);
+}
+
 /** SIGTERM mariadbd and wait for a clean shutdown. */
 export async function stopServer(child, timeoutMs = 30_000) {
   // Killed by a signal: exitCode stays null but signalCode is set, and its `exit` has already fired.

@@ -4,7 +4,8 @@ import { z } from 'zod';
 import { apiErrorBody } from '@shared/schemas/api-error.ts';
 import { DATA_LICENCE } from '@shared/data-licence.ts';
 import { TOKEN_PREFIX } from '@shared/schemas/api-token.ts';
-import { ROUTE_DOCS, ROUTE_TAGS, type RouteDoc } from './route-docs.ts';
+import { ROUTE_DOCS, ROUTE_TAGS } from './route-docs.ts';
+import type { RouteDoc } from './route-doc.ts';
 
 type JsonSchema = Record<string, unknown>;
 

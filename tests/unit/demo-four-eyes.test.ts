@@ -1,7 +1,9 @@
 import { describe, expect, test } from 'vitest';
 import { can } from '../../shared/policies.ts';
 import { DEMO_ACCOUNTS } from '../../server/dev/demo-accounts.ts';
-import { DEMO_BUILDS, DEMO_LISTINGS, DEMO_PARTS } from '../../server/db/seed/demo-scenario.ts';
+import { DEMO_PARTS } from '../../server/db/seed/demo-parts.ts';
+import { DEMO_BUILDS } from '../../server/db/seed/demo-builds.ts';
+import { DEMO_LISTINGS } from '../../server/db/seed/demo-listings.ts';
 
 // Four eyes in the demo: every seeded build, run, part and listing has a moderator or admin among the demo
 // accounts who is not its owner and so may decide it.

@@ -8,7 +8,7 @@ import { ListingPhoto } from '../../models/listing-photo.model.ts';
 import { processPhoto, writeVariants } from '../../services/photo-storage.ts';
 import { storedColumns } from '../../services/photo-files.ts';
 import type { AttachPictures } from './demo.ts';
-import type { DemoPicture } from './demo-scenario.ts';
+import type { DemoPicture } from './demo-parts.ts';
 
 type Scene = DemoPicture['scene'];
 

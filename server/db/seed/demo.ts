@@ -10,7 +10,9 @@ import { CalibrationRun } from '../../models/calibration-run.model.ts';
 import { DEMO_ACCOUNTS, standInEmail, standInGithubId } from '../../dev/demo-accounts.ts';
 import { runColumns } from '../../services/run.service.ts';
 import { recomputePartStats } from '../../services/part-stats.service.ts';
-import { DEMO_BUILDS, DEMO_LISTINGS, DEMO_PARTS, type DemoBuild, type DemoPicture } from './demo-scenario.ts';
+import { DEMO_PARTS, type DemoPicture } from './demo-parts.ts';
+import { DEMO_BUILDS, type DemoBuild } from './demo-builds.ts';
+import { DEMO_LISTINGS } from './demo-listings.ts';
 import { Listing } from '../../models/listing.model.ts';
 import { demoSweep } from './demo-points.ts';
 

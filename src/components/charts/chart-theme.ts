@@ -1,5 +1,6 @@
 // The one chart theme: colours for SVG attributes (the same values as the tokens in src/index.css) and
 // the text styles of ticks and axis labels, for every plot in the app.
+import { formatTick } from '@shared/format/measured-number.ts';
 export const chartColors = {
   ink: '#1D232B',
   inkSoft: '#4A525C',
@@ -23,3 +24,13 @@ export const axisLabelStyle = { fontSize: 12, fill: chartColors.inkSoft } as con
 
 /** Tooltip box: monospace figures, the rule colour for its border. */
 export const tooltipStyle = { fontFamily: tickStyle.fontFamily, fontSize: 12, borderColor: chartColors.rule } as const;
+
+/** Ticks of a number axis: the figures' font, printed by the one tick formatter. */
+export const numberTicks = { tick: tickStyle, tickFormatter: formatTick } as const;
+
+/** The label under an x axis. */
+export const xAxisLabel = (value: string, offset = -14) => ({ value, position: 'insideBottom', offset, style: axisLabelStyle }) as const;
+
+/** The label along a y axis, reading upwards. */
+export const yAxisLabel = (value: string) =>
+  ({ value, angle: -90, position: 'insideLeft', offset: 4, style: { ...axisLabelStyle, textAnchor: 'middle' } }) as const;

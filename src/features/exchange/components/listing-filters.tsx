@@ -1,21 +1,14 @@
-import { useState } from 'react';
-import { Link } from 'react-router-dom';
-import { LISTING_CONDITIONS, listingConditionLabels, type ListingCondition, type ListingKind } from '@shared/schemas/listing.ts';
-import { PART_CATEGORIES, partCategoryLabels, type PartCategory } from '@shared/schemas/part.ts';
+import { LISTING_CONDITIONS, LISTING_KINDS, listingConditionLabels, type ListingKind } from '@shared/schemas/listing.ts';
+import { PART_CATEGORIES, partCategoryLabels } from '@shared/schemas/part.ts';
 import { Button } from '@/components/ui/button.tsx';
+import { ClearFilters, FilterSelect, FilterText, SearchForm, useFilterDraft } from '@/components/search/filter-controls.tsx';
 import type { ListingFilters as Filters, ListingSearch } from './use-listing-search.ts';
 
-const field = 'w-full rounded-md border border-rule bg-white px-2.5 py-1.5 text-base sm:text-sm';
-const label = 'mb-1 block text-xs font-medium text-ink-soft';
+const kindLabels: Record<ListingKind, string> = { offering: 'Offering', seeking: 'Seeking' };
 
 /** Exchange filters: the selects and "free only" apply at once, words and region on "Search"; all in the URL. */
 export function ListingFilters({ search }: { search: ListingSearch }) {
-  const [draft, setDraft] = useState<Filters>(search.filters);
-  const [seen, setSeen] = useState(search.key);
-  if (seen !== search.key) {
-    setSeen(search.key);
-    setDraft(search.filters);
-  }
+  const [draft, setDraft] = useFilterDraft<Filters>(search.key, () => search.filters);
   const f = draft;
   const apply = (next: Partial<Filters> = {}) => {
     const all = { ...draft, ...next };
@@ -23,93 +16,56 @@ export function ListingFilters({ search }: { search: ListingSearch }) {
     search.setFilters({ ...all, q: all.q.trim(), region: all.region.trim() });
   };
   return (
-    <form
-      role="search"
-      aria-label="Search the exchange"
+    <SearchForm
+      label="Search the exchange"
       className="mb-5 grid gap-3 rounded-lg border border-rule bg-white p-3 sm:grid-cols-2 lg:grid-cols-6 lg:items-end"
-      onSubmit={(e) => {
-        e.preventDefault();
-        apply();
-      }}
+      onSubmit={() => apply()}
     >
-      <div className="lg:col-span-2">
-        <label htmlFor="listing-q" className={label}>
-          Words in part name or notes
-        </label>
-        <input
-          id="listing-q"
-          type="search"
-          maxLength={100}
-          value={f.q}
-          placeholder="e.g. tube, cartridge"
-          className={field}
-          onChange={(e) => setDraft({ ...f, q: e.target.value })}
-        />
-      </div>
-      <div>
-        <label htmlFor="listing-kind" className={label}>
-          Offering or seeking
-        </label>
-        <select
-          id="listing-kind"
-          className={field}
-          value={f.kind ?? ''}
-          onChange={(e) => apply({ kind: (e.target.value || undefined) as ListingKind | undefined })}
-        >
-          <option value="">Both</option>
-          <option value="offering">Offering</option>
-          <option value="seeking">Seeking</option>
-        </select>
-      </div>
-      <div>
-        <label htmlFor="listing-category" className={label}>
-          Category
-        </label>
-        <select
-          id="listing-category"
-          className={field}
-          value={f.category ?? ''}
-          onChange={(e) => apply({ category: (e.target.value || undefined) as PartCategory | undefined })}
-        >
-          <option value="">All categories</option>
-          {PART_CATEGORIES.map((c) => (
-            <option key={c} value={c}>
-              {partCategoryLabels[c]}
-            </option>
-          ))}
-        </select>
-      </div>
-      <div>
-        <label htmlFor="listing-condition" className={label}>
-          Condition
-        </label>
-        <select
-          id="listing-condition"
-          className={field}
-          value={f.condition ?? ''}
-          onChange={(e) => apply({ condition: (e.target.value || undefined) as ListingCondition | undefined })}
-        >
-          <option value="">Any condition</option>
-          {LISTING_CONDITIONS.map((c) => (
-            <option key={c} value={c}>
-              {listingConditionLabels[c]}
-            </option>
-          ))}
-        </select>
-      </div>
-      <div>
-        <label htmlFor="listing-region" className={label}>
-          Region
-        </label>
-        <input
-          id="listing-region"
-          maxLength={80}
-          value={f.region}
-          placeholder="e.g. Leeds"
-          className={field}
-          onChange={(e) => setDraft({ ...f, region: e.target.value })}
-        />
-      </div>
+      <FilterText
+        id="listing-q"
+        label="Words in part name or notes"
+        className="lg:col-span-2"
+        type="search"
+        maxLength={100}
+        value={f.q}
+        placeholder="e.g. tube, cartridge"
+        onChange={(e) => setDraft({ ...f, q: e.target.value })}
+      />
+      <FilterSelect
+        id="listing-kind"
+        label="Offering or seeking"
+        all="Both"
+        values={LISTING_KINDS}
+        labels={kindLabels}
+        value={f.kind}
+        onChange={(kind) => apply({ kind })}
+      />
+      <FilterSelect
+        id="listing-category"
+        label="Category"
+        all="All categories"
+        values={PART_CATEGORIES}
+        labels={partCategoryLabels}
+        value={f.category}
+        onChange={(category) => apply({ category })}
+      />
+      <FilterSelect
+        id="listing-condition"
+        label="Condition"
+        all="Any condition"
+        values={LISTING_CONDITIONS}
+        labels={listingConditionLabels}
+        value={f.condition}
+        onChange={(condition) => apply({ condition })}
+      />
+      <FilterText
+        id="listing-region"
+        label="Region"
+        maxLength={80}
+        value={f.region}
+        placeholder="e.g. Leeds"
+        onChange={(e) => setDraft({ ...f, region: e.target.value })}
+      />
       <div className="flex flex-wrap items-center gap-x-4 gap-y-2 sm:col-span-2 lg:col-span-6">
         <label className="inline-flex items-center gap-2 text-sm">
           <input
@@ -123,12 +79,8 @@ export function ListingFilters({ search }: { search: ListingSearch }) {
         <Button type="submit" variant="secondary">
           Search
         </Button>
-        {search.filtered && (
-          <Link to={search.clearHref} className="text-sm text-copper-dark underline">
-            Clear filters
-          </Link>
-        )}
+        <ClearFilters search={search} />
       </div>
-    </form>
+    </SearchForm>
   );
 }

@@ -2,7 +2,7 @@ import type { GainHistogramDto } from '@shared/schemas/part.ts';
 import { formatShort } from '@shared/format/measured-number.ts';
 import { GainHistogram } from './gain-histogram.tsx';
 import { gainScale } from './gain-scale.ts';
-import { fieldClass, labelClass } from './filter-styles.ts';
+import { fieldClass, labelClass } from '@/components/search/filter-styles.ts';
 
 const thumb =
   'pointer-events-none absolute inset-x-0 top-0 h-6 w-full appearance-none bg-transparent focus-visible:outline-none ' +

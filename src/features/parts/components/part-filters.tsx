@@ -1,10 +1,8 @@
-import { useState } from 'react';
-import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { PART_CATEGORIES, partCategoryLabels, type PartCategory } from '@shared/schemas/part.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { partQueries } from '@/lib/part-queries.ts';
-import { fieldClass, labelClass } from './filter-styles.ts';
+import { ClearFilters, FilterSelect, FilterText, SearchForm, useFilterDraft } from '@/components/search/filter-controls.tsx';
 import { GainRangeField } from './gain-range-field.tsx';
 import type { PartFilters as Filters, PartSearch } from './use-part-search.ts';
 
@@ -50,12 +48,7 @@ export function PartFilters({ search }: { search: PartSearch }) {
     minRuns: text(f.minRuns),
     maxVolts: text(f.maxVolts),
   });
-  const [draft, setDraft] = useState<Draft>(fromUrl);
-  const [seen, setSeen] = useState(search.key);
-  if (seen !== search.key) {
-    setSeen(search.key);
-    setDraft(fromUrl());
-  }
+  const [draft, setDraft] = useFilterDraft<Draft>(search.key, fromUrl);
   const apply = (next: Partial<Draft> = {}) => {
     const all = { ...draft, ...next };
     setDraft(all);
@@ -63,47 +56,31 @@ export function PartFilters({ search }: { search: PartSearch }) {
   };
 
   return (
-    <form
-      role="search"
-      aria-label="Search the parts registry"
+    <SearchForm
+      label="Search the parts registry"
       className="mb-5 grid gap-x-6 gap-y-4 rounded-lg border border-rule bg-white p-3 sm:grid-cols-2 sm:p-4 lg:grid-cols-4"
-      onSubmit={(e) => {
-        e.preventDefault();
-        apply();
-      }}
+      onSubmit={() => apply()}
     >
-      <div className="sm:col-span-2">
-        <label htmlFor="part-q" className={labelClass}>
-          Words in name or salvage source
-        </label>
-        <input
-          id="part-q"
-          type="search"
-          maxLength={100}
-          value={draft.q}
-          placeholder="e.g. cartridge, buzzer, stack"
-          className={fieldClass}
-          onChange={(e) => setDraft({ ...draft, q: e.target.value })}
-        />
-      </div>
-      <div className="sm:col-span-2">
-        <label htmlFor="part-category" className={labelClass}>
-          Category
-        </label>
-        <select
-          id="part-category"
-          className={fieldClass}
-          value={draft.category ?? ''}
-          onChange={(e) => apply({ category: (e.target.value || undefined) as PartCategory | undefined })}
-        >
-          <option value="">All categories</option>
-          {PART_CATEGORIES.map((c) => (
-            <option key={c} value={c}>
-              {partCategoryLabels[c]}
-            </option>
-          ))}
-        </select>
-      </div>
+      <FilterText
+        id="part-q"
+        label="Words in name or salvage source"
+        className="sm:col-span-2"
+        type="search"
+        maxLength={100}
+        value={draft.q}
+        placeholder="e.g. cartridge, buzzer, stack"
+        onChange={(e) => setDraft({ ...draft, q: e.target.value })}
+      />
+      <FilterSelect
+        id="part-category"
+        label="Category"
+        className="sm:col-span-2"
+        all="All categories"
+        values={PART_CATEGORIES}
+        labels={partCategoryLabels}
+        value={draft.category}
+        onChange={(category) => apply({ category })}
+      />
       <GainRangeField
         histogram={histogram.data}
         minText={draft.gainMin}
@@ -112,51 +89,37 @@ export function PartFilters({ search }: { search: PartSearch }) {
         onCommit={() => apply()}
       />
       <div className="grid content-start gap-4 sm:col-span-2 sm:grid-cols-2">
-        <div>
-          <label htmlFor="part-min-runs" className={labelClass}>
-            At least this many accepted runs
-          </label>
-          <input
-            id="part-min-runs"
-            type="number"
-            inputMode="numeric"
-            min={0}
-            step={1}
-            value={draft.minRuns}
-            placeholder="any"
-            className={`${fieldClass} num`}
-            onChange={(e) => setDraft({ ...draft, minRuns: e.target.value })}
-          />
-        </div>
-        <div>
-          <label htmlFor="part-max-volts" className={labelClass}>
-            Safe voltage at most (V)
-          </label>
-          <input
-            id="part-max-volts"
-            type="number"
-            inputMode="decimal"
-            min={0}
-            step="any"
-            value={draft.maxVolts}
-            placeholder="any"
-            className={`${fieldClass} num`}
-            onChange={(e) => setDraft({ ...draft, maxVolts: e.target.value })}
-          />
-        </div>
+        <FilterText
+          id="part-min-runs"
+          label="At least this many accepted runs"
+          type="number"
+          inputMode="numeric"
+          min={0}
+          step={1}
+          value={draft.minRuns}
+          placeholder="any"
+          onChange={(e) => setDraft({ ...draft, minRuns: e.target.value })}
+        />
+        <FilterText
+          id="part-max-volts"
+          label="Safe voltage at most (V)"
+          type="number"
+          inputMode="decimal"
+          min={0}
+          step="any"
+          value={draft.maxVolts}
+          placeholder="any"
+          onChange={(e) => setDraft({ ...draft, maxVolts: e.target.value })}
+        />
         <p className="text-xs text-ink-soft sm:col-span-2">
           A part matches a gain range when its median over accepted runs lies inside it; parts without accepted runs drop out. The bars show
           how many listed parts have their median in each band; drag the copper handles or type the numbers.
         </p>
         <div className="flex items-center gap-3 sm:col-span-2">
           <Button type="submit">Apply filters</Button>
-          {search.filtered && (
-            <Link to={search.clearHref} className="text-sm text-copper-dark underline">
-              Clear filters
-            </Link>
-          )}
+          <ClearFilters search={search} />
         </div>
       </div>
-    </form>
+    </SearchForm>
   );
 }

@@ -1,6 +1,6 @@
 import { PART_SORTS, type PartSort } from '@shared/schemas/part.ts';
 import { partsExportHref } from '@/lib/part-queries.ts';
-import { fieldClass, labelClass } from './filter-styles.ts';
+import { fieldClass, labelClass } from '@/components/search/filter-styles.ts';
 import type { PartSearch } from './use-part-search.ts';
 
 const sortLabels: Record<PartSort, string> = {

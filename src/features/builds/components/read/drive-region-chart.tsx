@@ -9,8 +9,7 @@ import {
   useXAxisScale,
   useYAxisScale,
 } from 'recharts';
-import { formatTick } from '@shared/format/measured-number.ts';
-import { axisLabelStyle, chartColors, tickStyle } from '@/components/charts/chart-theme.ts';
+import { chartColors, numberTicks, xAxisLabel, yAxisLabel } from '@/components/charts/chart-theme.ts';
 
 interface PlanePoint {
   xNm: number;
@@ -74,9 +73,8 @@ export function DriveRegionChart({ region, rest }: { region: readonly PlanePoint
           domain={domain.x}
           allowDataOverflow
           ticks={domain.xTicks}
-          tick={tickStyle}
-          tickFormatter={formatTick}
-          label={{ value: 'x (nm)', position: 'insideBottom', offset: -12, style: axisLabelStyle }}
+          {...numberTicks}
+          label={xAxisLabel('x (nm)', -12)}
         />
         <YAxis
           type="number"
@@ -85,9 +83,8 @@ export function DriveRegionChart({ region, rest }: { region: readonly PlanePoint
           allowDataOverflow
           ticks={domain.yTicks}
           width={64}
-          tick={tickStyle}
-          tickFormatter={formatTick}
-          label={{ value: 'y (nm)', angle: -90, position: 'insideLeft', style: { ...axisLabelStyle, textAnchor: 'middle' } }}
+          {...numberTicks}
+          label={yAxisLabel('y (nm)')}
         />
         <Parallelogram corners={region} />
         <Scatter name="Reachable region" data={[...region]} fill={chartColors.teal} shape={noMarker} isAnimationActive={false} />

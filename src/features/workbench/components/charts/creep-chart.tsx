@@ -1,7 +1,6 @@
 import { CartesianGrid, Legend, ResponsiveContainer, Scatter, ScatterChart, XAxis, YAxis } from 'recharts';
-import { formatTick } from '@shared/format/measured-number.ts';
 import { decadeTicks } from './axis-ticks.ts';
-import { axisLabelStyle, chartColors, tickStyle } from '@/components/charts/chart-theme.ts';
+import { chartColors, numberTicks, xAxisLabel, yAxisLabel } from '@/components/charts/chart-theme.ts';
 
 /** A sample or a point of the fitted law: time since the step (s) and displacement (nm). */
 export interface CreepPoint {
@@ -25,24 +24,16 @@ export function CreepChart({ samples, curve }: { samples: readonly CreepPoint[];
           scale="log"
           domain={[ticks[0], ticks[ticks.length - 1]]}
           ticks={ticks}
-          tick={tickStyle}
-          tickFormatter={formatTick}
-          label={{ value: 'Time since the step (s)', position: 'insideBottom', offset: -14, style: axisLabelStyle }}
+          {...numberTicks}
+          label={xAxisLabel('Time since the step (s)')}
         />
         <YAxis
           type="number"
           dataKey="displacementNm"
           domain={['auto', 'auto']}
           width={72}
-          tick={tickStyle}
-          tickFormatter={formatTick}
-          label={{
-            value: 'Displacement (nm)',
-            angle: -90,
-            position: 'insideLeft',
-            offset: 4,
-            style: { ...axisLabelStyle, textAnchor: 'middle' },
-          }}
+          {...numberTicks}
+          label={yAxisLabel('Displacement (nm)')}
         />
         <Legend verticalAlign="top" itemSorter={null} />
         <Scatter name="Samples" data={[...samples]} fill={chartColors.copper} isAnimationActive={false} />

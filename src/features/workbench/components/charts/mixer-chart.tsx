@@ -10,9 +10,8 @@ import {
   useXAxisScale,
   useYAxisScale,
 } from 'recharts';
-import { formatTick } from '@shared/format/measured-number.ts';
 import { niceStep, stepTicks } from './axis-ticks.ts';
-import { axisLabelStyle, chartColors, tickStyle } from '@/components/charts/chart-theme.ts';
+import { chartColors, numberTicks, xAxisLabel, yAxisLabel } from '@/components/charts/chart-theme.ts';
 
 /** A point of the tip plane in nm. */
 export interface PlanePoint {
@@ -59,9 +58,8 @@ export function MixerChart({ region, target }: { region: readonly PlanePoint[]; 
           domain={domain.x}
           ticks={axes.x}
           allowDataOverflow
-          tick={tickStyle}
-          tickFormatter={formatTick}
-          label={{ value: 'x (nm)', position: 'insideBottom', offset: -14, style: axisLabelStyle }}
+          {...numberTicks}
+          label={xAxisLabel('x (nm)')}
         />
         <YAxis
           type="number"
@@ -70,9 +68,8 @@ export function MixerChart({ region, target }: { region: readonly PlanePoint[]; 
           ticks={axes.y}
           allowDataOverflow
           width={72}
-          tick={tickStyle}
-          tickFormatter={formatTick}
-          label={{ value: 'y (nm)', angle: -90, position: 'insideLeft', offset: 4, style: { ...axisLabelStyle, textAnchor: 'middle' } }}
+          {...numberTicks}
+          label={yAxisLabel('y (nm)')}
         />
         <Legend verticalAlign="top" itemSorter={null} />
         <RegionPolygon corners={region} />

@@ -1,7 +1,6 @@
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, XAxis, YAxis } from 'recharts';
-import { formatTick } from '@shared/format/measured-number.ts';
 import { decadeTicks } from './axis-ticks.ts';
-import { axisLabelStyle, chartColors, tickStyle } from '@/components/charts/chart-theme.ts';
+import { chartColors, numberTicks, tickStyle, xAxisLabel, yAxisLabel } from '@/components/charts/chart-theme.ts';
 
 /** Smallest step at one DAC resolution. */
 export interface StepAtBits {
@@ -34,7 +33,7 @@ export function ScanChart({
           domain={['dataMin', 'dataMax']}
           allowDecimals={false}
           tick={tickStyle}
-          label={{ value: 'DAC bits', position: 'insideBottom', offset: -14, style: axisLabelStyle }}
+          label={xAxisLabel('DAC bits')}
         />
         <YAxis
           type="number"
@@ -43,9 +42,8 @@ export function ScanChart({
           ticks={ticks}
           allowDataOverflow
           width={72}
-          tick={tickStyle}
-          tickFormatter={formatTick}
-          label={{ value: 'Step (nm)', angle: -90, position: 'insideLeft', offset: 4, style: { ...axisLabelStyle, textAnchor: 'middle' } }}
+          {...numberTicks}
+          label={yAxisLabel('Step (nm)')}
         />
         <Legend verticalAlign="top" />
         <Line name="LSB step" dataKey="lsbNm" stroke={chartColors.teal} strokeWidth={2} dot={{ r: 2 }} isAnimationActive={false} />

@@ -1,6 +1,5 @@
 import { CartesianGrid, Legend, ResponsiveContainer, Scatter, ScatterChart, XAxis, YAxis } from 'recharts';
-import { formatTick } from '@shared/format/measured-number.ts';
-import { axisLabelStyle, chartColors, tickStyle } from '@/components/charts/chart-theme.ts';
+import { chartColors, numberTicks, xAxisLabel, yAxisLabel } from '@/components/charts/chart-theme.ts';
 
 /** One point of the loop: drive (V) and displacement (nm). */
 export interface LoopPoint {
@@ -16,28 +15,14 @@ export function LoopChart({ samples, ellipse }: { samples: readonly LoopPoint[];
     <ResponsiveContainer width="100%" height={300}>
       <ScatterChart margin={{ top: 4, right: 16, bottom: 24, left: 8 }}>
         <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
-        <XAxis
-          type="number"
-          dataKey="volts"
-          domain={['auto', 'auto']}
-          tick={tickStyle}
-          tickFormatter={formatTick}
-          label={{ value: 'Drive (V)', position: 'insideBottom', offset: -14, style: axisLabelStyle }}
-        />
+        <XAxis type="number" dataKey="volts" domain={['auto', 'auto']} {...numberTicks} label={xAxisLabel('Drive (V)')} />
         <YAxis
           type="number"
           dataKey="displacementNm"
           domain={['auto', 'auto']}
           width={72}
-          tick={tickStyle}
-          tickFormatter={formatTick}
-          label={{
-            value: 'Displacement (nm)',
-            angle: -90,
-            position: 'insideLeft',
-            offset: 4,
-            style: { ...axisLabelStyle, textAnchor: 'middle' },
-          }}
+          {...numberTicks}
+          label={yAxisLabel('Displacement (nm)')}
         />
         <Legend verticalAlign="top" itemSorter={null} />
         <Scatter name="Samples" data={[...samples]} fill={chartColors.copper} fillOpacity={0.45} shape="circle" isAnimationActive={false} />
