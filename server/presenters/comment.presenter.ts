@@ -15,9 +15,6 @@ export function presentComment(
     author: { id: c.authorId, login: authors.get(c.authorId) ?? 'a former maker' },
     body: c.body,
     createdAt: c.createdAt.toISOString(),
-    abilities: {
-      hide: can(viewer, 'comment.hide', { authorIds: [c.authorId, buildOwnerId] }),
-      report: viewer !== null && viewer.id !== c.authorId && can(viewer, 'content.create'),
-    },
+    abilities: { hide: can(viewer, 'comment.hide', { authorIds: [c.authorId, buildOwnerId] }) },
   };
 }

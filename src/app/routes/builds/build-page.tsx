@@ -20,5 +20,5 @@ export function BuildPage() {
     if (build.error instanceof ApiError && build.error.status === 404) return <BuildNotFound signedIn={user !== null} />;
     return <LoadError what="this build" error={build.error} onRetry={() => void build.refetch()} />;
   }
-  return <BuildView build={build.data} viewerIsOwner={user?.id === build.data.owner.id} />;
+  return <BuildView build={build.data} viewerIsOwner={user?.id === build.data.owner.id} signedIn={user !== null} />;
 }

@@ -6,6 +6,7 @@ import { BuildHeader } from './build-header.tsx';
 import { LogEntries } from './log-entries.tsx';
 import { PhotoGrid } from '@/components/photos/photo-grid.tsx';
 import { ReviewNotices } from './review-notices.tsx';
+import { BuildComments } from './build-comments.tsx';
 
 function Section({ id, title, children }: { id: string; title: string; children: ReactNode }) {
   return (
@@ -20,7 +21,7 @@ function Section({ id, title, children }: { id: string; title: string; children:
 }
 
 /** A whole build as readers see it: header, review notes, write-up, photos, log entries, actuators and runs. */
-export function BuildView({ build, viewerIsOwner }: { build: BuildDto; viewerIsOwner: boolean }) {
+export function BuildView({ build, viewerIsOwner, signedIn = false }: { build: BuildDto; viewerIsOwner: boolean; signedIn?: boolean }) {
   const buildPhotos = build.photos.filter((p) => p.entryId === null);
   return (
     <article>
@@ -46,6 +47,11 @@ export function BuildView({ build, viewerIsOwner }: { build: BuildDto; viewerIsO
       <Section id="actuators" title="Actuators and calibration runs">
         <ActuatorList actuators={build.actuators} />
       </Section>
+      {build.status === 'published' && (
+        <Section id="comments" title="Comments">
+          <BuildComments buildId={build.id} signedIn={signedIn} />
+        </Section>
+      )}
     </article>
   );
 }
