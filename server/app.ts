@@ -20,6 +20,7 @@ import { requireCsrf } from './middleware/csrf.ts';
 import { requireSameOrigin } from './middleware/same-origin.ts';
 import { jsonBody } from './middleware/json-body.ts';
 import { sessionUser } from './middleware/session-user.ts';
+import { privateAnswers } from './middleware/private-answers.ts';
 import { outsideApi, unlessAnonymousRead } from './middleware/anonymous-reads.ts';
 import { errorHandler, apiNotFound, isDbDown } from './middleware/error-handler.ts';
 import { limiter } from './middleware/rate-limit.ts';
@@ -176,6 +177,8 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
       }),
     }),
   );
+  // Answers that depend on who asks are never stored by a cache (Cache-Control: no-store), whatever the route.
+  app.use(privateAnswers('scanwright.sid'));
   app.use(maintenance(sequelize));
   // A rig's personal API token: checked (401/403/429) before any body is read; such requests skip sessions and CSRF.
   app.use(...bearerToken(config.rateLimits));
