@@ -128,7 +128,9 @@ export interface BuildSummaryDto {
   cover: PhotoDto | null;
   gains: BuildGainDto[];
   editedSinceReview: boolean;
+  /** The review desk's note: for the owner and moderators, or anyone when the moderator made a publish note public. */
   reviewNote: string | null;
+  reviewNotePublic: boolean;
   createdAt: string;
   updatedAt: string;
   publishedAt: string | null;
