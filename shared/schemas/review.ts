@@ -1,9 +1,10 @@
 import { z } from 'zod';
+import { multiLine } from './text.ts';
 import type { PlausibilityFlag } from '../review/plausibility.ts';
 import type { RunFitDto, RunKind } from './run.ts';
 import type { PartStatsDto } from './part.ts';
 
-const note = z.string().trim().max(4000);
+const note = multiLine(4000).trim();
 
 /** Publish needs no note; return and decline must say why. */
 export const buildDecisionInput = z
