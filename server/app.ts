@@ -20,9 +20,11 @@ import { requireCsrf } from './middleware/csrf.ts';
 import { requireSameOrigin } from './middleware/same-origin.ts';
 import { jsonBody } from './middleware/json-body.ts';
 import { sessionUser } from './middleware/session-user.ts';
+import { privateAnswers } from './middleware/private-answers.ts';
 import { outsideApi, unlessAnonymousRead } from './middleware/anonymous-reads.ts';
 import { errorHandler, apiNotFound, isDbDown } from './middleware/error-handler.ts';
 import { limiter } from './middleware/rate-limit.ts';
+import { largeBodyLimit } from './middleware/large-bodies.ts';
 import { bearerToken, unlessBearer } from './middleware/bearer-token.ts';
 import { idempotency } from './middleware/idempotency.ts';
 import { maintenance } from './middleware/maintenance.ts';
@@ -177,22 +179,19 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
       }),
     }),
   );
+  // Answers that depend on who asks are never stored by a cache (Cache-Control: no-store), whatever the route.
+  app.use(privateAnswers('scanwright.sid'));
   app.use(maintenance(sequelize));
   // A rig's personal API token: checked (401/403/429) before any body is read; such requests skip sessions and CSRF.
   app.use(...bearerToken(config.rateLimits));
 
   // Workbench calculations are open to visitors, and reading a body of up to 32 MB (a 200 000-sample sine record) costs
   // seconds of CPU: large ones are limited per client before the body is read (normal use sends kilobytes).
-  app.use(
-    '/api/workbench',
-    limiter(config.rateLimits, {
-      windowMs: 60_000,
-      limit: 10,
-      what: 'large workbench calculations (over 1 MB)',
-      skip: (req) => req.method !== 'POST' || Number(req.headers['content-length'] ?? Infinity) <= 1_000_000,
-    }),
-  );
+  // A compressed body is counted by its inflated size, after the parser has inflated it (within the 32 MB limit).
+  const largeBodies = largeBodyLimit(config.rateLimits);
+  app.use('/api/workbench', largeBodies.beforeBody);
   app.use(['/api/workbench', '/api/actuators', '/api/runs'], jsonBody('32mb'));
+  app.use('/api/workbench', largeBodies.afterBody);
   app.use(jsonBody('1mb'));
   const sessions = session({
     name: 'scanwright.sid',

@@ -63,6 +63,8 @@ const rules = {
   'build.edit': and(active, isOwner),
   /** Unpublished builds are visible to their owner and to moderators (who review them). */
   'build.view-unpublished': or(isOwner, hasRole('moderator')),
+  /** The review desk's note on a build is for its owner and moderators, unless the moderator made a publish note public. */
+  'build.view-review-note': or(isOwner, hasRole('moderator')),
   /** Parts not (yet) in the registry are visible to whoever proposed them and to moderators. */
   'part.view-unlisted': or(isOwner, hasRole('moderator')),
   /** A part's photos are kept by whoever proposed it and by moderators. */

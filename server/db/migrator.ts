@@ -22,6 +22,7 @@ import * as addActuatorLinearisation from './migrations/20261203160000-add-actua
 import * as addIdempotencyApplied from './migrations/20261203170000-add-idempotency-applied.ts';
 import * as addAuditTargetLabel from './migrations/20261210000100-add-audit-target-label.ts';
 import * as recountPublishedRuns from './migrations/20261210000200-recount-published-runs.ts';
+import * as addBuildReviewNotePublic from './migrations/20261210000300-add-build-review-note-public.ts';
 import * as createBuildComments from './migrations/20261212000100-create-build-comments.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
@@ -50,6 +51,7 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261203170000-add-idempotency-applied', addIdempotencyApplied],
   ['20261210000100-add-audit-target-label', addAuditTargetLabel],
   ['20261210000200-recount-published-runs', recountPublishedRuns],
+  ['20261210000300-add-build-review-note-public', addBuildReviewNotePublic],
   ['20261212000100-create-build-comments', createBuildComments],
 ];
 

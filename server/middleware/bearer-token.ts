@@ -4,6 +4,7 @@ import { tokenMayRequest } from '@shared/auth/token-scopes.ts';
 import { AppError, ForbiddenError } from '../errors.ts';
 import { authenticateApiToken } from '../services/api-token.service.ts';
 import { limiter } from './rate-limit.ts';
+import { routePath } from './route-path.ts';
 
 declare module 'express-serve-static-core' {
   interface Request {
@@ -45,7 +46,7 @@ export function bearerToken(rateLimits: boolean): RequestHandler[] {
     skip: (req) => !req.apiToken,
   });
   const withinScopes: RequestHandler = (req, _res, next) => {
-    if (!req.apiToken || tokenMayRequest(req.apiToken.scopes, req.method, req.path)) return next();
+    if (!req.apiToken || tokenMayRequest(req.apiToken.scopes, req.method, routePath(req))) return next();
     next(
       new ForbiddenError(
         `This API token's scopes (${req.apiToken.scopes.join(', ')}) do not allow ${req.method} ${req.path}; token management needs a browser session.`,

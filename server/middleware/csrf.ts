@@ -11,7 +11,7 @@ declare module 'express-session' {
 
 const SAFE = new Set(['GET', 'HEAD', 'OPTIONS']);
 /** Pure calculations that store nothing; visitors may call them without a session. */
-const STATELESS = [/^\/api\/workbench\/[a-z-]+$/];
+const STATELESS = [/^\/api\/workbench\/[a-z-]+\/?$/i];
 
 /** The session's CSRF token, made on first request for it. */
 export function csrfTokenFor(req: Request): string {
@@ -19,7 +19,11 @@ export function csrfTokenFor(req: Request): string {
   return req.session.csrfToken;
 }
 
-const same = (a: string, b: string) => a.length === b.length && timingSafeEqual(Buffer.from(a), Buffer.from(b));
+/** Compared as bytes: a header of the right length in characters can be longer in UTF-8 (Latin-1 bytes in a header). */
+const same = (a: string, b: string) => {
+  const [x, y] = [Buffer.from(a), Buffer.from(b)];
+  return x.length === y.length && timingSafeEqual(x, y);
+};
 
 /** Every state-changing request under /api and /auth/logout must echo the token in X-CSRF-Token. */
 export const requireCsrf: RequestHandler = (req, _res, next) => {

@@ -1,3 +1,4 @@
+import { STATUS_CODES } from 'node:http';
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import { BaseError, ConnectionError, UniqueConstraintError, TimeoutError, ForeignKeyConstraintError } from 'sequelize';
@@ -58,8 +59,15 @@ export function errorHandler(showStack: boolean, opts: { onDbDown?: (err: unknow
     if (type === 'entity.too.large') return void res.status(413).json(body('payload_too_large', 'The request body is too large.'));
     if (type === 'encoding.unsupported' || type === 'charset.unsupported')
       return void res.status(415).json(body('unsupported_encoding', 'Unsupported body encoding.'));
-    if (status && status >= 400 && status < 500)
-      return void res.status(status).json(body('bad_request', (err as Error).message || 'Bad request.'));
+    // A library's 4xx (the static file servers, the body parser): a missing file is not_found, and a message that
+    // carries a file-system error (ENOENT … '/srv/…/uploads/x.webp') is replaced by the status's own words.
+    if (status === 404) return void res.status(404).json(body('not_found', 'Not found.'));
+    if (status === 403) return void res.status(403).json(body('forbidden', 'Forbidden.'));
+    if (status && status >= 400 && status < 500) {
+      const message = (err as Error).message || '';
+      const leaks = typeof (err as { code?: unknown }).code === 'string' || /[\\/]/.test(message);
+      return void res.status(status).json(body('bad_request', leaks || !message ? (STATUS_CODES[status] ?? 'Bad request.') : message));
+    }
     if (err instanceof UniqueConstraintError) return void res.status(409).json(body('conflict', 'That already exists.'));
     if (err instanceof ForeignKeyConstraintError)
       return void res.status(409).json(body('conflict', 'A referenced record does not exist or is still in use.'));

@@ -4,6 +4,7 @@ import { pathMatches } from '@shared/auth/path-pattern.ts';
 import { AppError, ConflictError } from '../errors.ts';
 import { claimIdempotencyKey, releaseIdempotencyKey, storeIdempotentAnswer } from '../services/idempotency.service.ts';
 import { idempotencyScope } from '../services/idempotency-context.ts';
+import { routePath } from './route-path.ts';
 
 /**
  * POSTs that create something, so that a retry after a lost answer would make it twice. Token
@@ -81,7 +82,7 @@ function recordAnswer(req: Request, res: Response, id: number): void {
  * `idempotency_in_progress`. Keys are per user; visitors are left to the route's 401.
  */
 export const idempotency: RequestHandler = async (req, res, next) => {
-  if (req.method !== 'POST' || !IDEMPOTENT_POSTS.some((p) => pathMatches(p, req.path))) return next();
+  if (req.method !== 'POST' || !IDEMPOTENT_POSTS.some((p) => pathMatches(p, routePath(req)))) return next();
   const key = req.get('idempotency-key');
   const userId = (req.user as { id?: number } | undefined)?.id;
   if (key === undefined || userId === undefined) return next();
@@ -92,7 +93,7 @@ export const idempotency: RequestHandler = async (req, res, next) => {
   const bodyHash = createHash('sha256')
     .update(multipart ?? canonicalJson(req.body ?? {}))
     .digest('hex');
-  const claim = await claimIdempotencyKey({ userId, key, method: req.method, path: req.path, bodyHash });
+  const claim = await claimIdempotencyKey({ userId, key, method: req.method, path: routePath(req), bodyHash });
   switch (claim.kind) {
     case 'run':
       recordAnswer(req, res, claim.id);

@@ -3,6 +3,7 @@
 // (so every instance sees it) at most once a second, and only when a write asks.
 import type { RequestHandler } from 'express';
 import { QueryTypes, type Sequelize } from 'sequelize';
+import { routePath } from './route-path.ts';
 
 const FRESH_MS = 1000;
 const READS = new Set(['GET', 'HEAD', 'OPTIONS']);
@@ -31,7 +32,7 @@ export function maintenance(sequelize: Sequelize): RequestHandler {
         pending = null;
       }));
   return async (req, res, next) => {
-    if (!changesData(req.method, req.path)) return next();
+    if (!changesData(req.method, routePath(req))) return next();
     if (Date.now() - checkedAt > FRESH_MS) await refresh();
     if (!on) return next();
     res

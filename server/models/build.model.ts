@@ -22,6 +22,8 @@ export class Build extends Model<InferAttributes<Build>, InferCreationAttributes
   declare coverPhotoId: CreationOptional<number | null>;
   declare editedSinceReview: CreationOptional<boolean>;
   declare reviewNote: CreationOptional<string | null>;
+  /** The moderator chose to show the publish note to everyone; otherwise only the owner and moderators read it. */
+  declare reviewNotePublic: CreationOptional<boolean>;
   declare submittedAt: CreationOptional<Date | null>;
   declare publishedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
@@ -42,6 +44,7 @@ export class Build extends Model<InferAttributes<Build>, InferCreationAttributes
         coverPhotoId: DataTypes.INTEGER.UNSIGNED,
         editedSinceReview: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         reviewNote: DataTypes.TEXT,
+        reviewNotePublic: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         submittedAt: DataTypes.DATE,
         publishedAt: DataTypes.DATE,
         createdAt: DataTypes.DATE,

@@ -42,8 +42,11 @@ export function coverOf(build: Pick<Build, 'coverPhotoId'>, photos: PhotoDto[]):
   return photos.find((p) => p.id === build.coverPhotoId) ?? photos[0] ?? null;
 }
 
-/** A build card: a field allow-list over the build row and its batched extras. */
-export function presentBuildSummary(b: Build, extras: BuildCardExtras): BuildSummaryDto {
+/**
+ * A build card: a field allow-list over the build row and its batched extras. The review note goes only to
+ * viewers who may read it (`seesReviewNote`: owner, moderators) unless the moderator made it public.
+ */
+export function presentBuildSummary(b: Build, extras: BuildCardExtras, seesReviewNote: boolean): BuildSummaryDto {
   return {
     id: b.id,
     title: b.title,
@@ -55,7 +58,8 @@ export function presentBuildSummary(b: Build, extras: BuildCardExtras): BuildSum
     cover: extras.cover,
     gains: extras.gains,
     editedSinceReview: b.editedSinceReview,
-    reviewNote: b.reviewNote,
+    reviewNote: seesReviewNote || b.reviewNotePublic ? b.reviewNote : null,
+    reviewNotePublic: b.reviewNotePublic,
     createdAt: b.createdAt.toISOString(),
     updatedAt: b.updatedAt.toISOString(),
     publishedAt: b.publishedAt?.toISOString() ?? null,
@@ -112,10 +116,10 @@ export interface BuildPageContent {
 }
 
 /** The whole build page; `mayEdit` is the caller's authorization answer for this actor. */
-export function presentBuildPage(b: Build, content: BuildPageContent, mayEdit: boolean): BuildDto {
+export function presentBuildPage(b: Build, content: BuildPageContent, mayEdit: boolean, seesReviewNote: boolean): BuildDto {
   const editable = b.status === 'draft' || b.status === 'returned' || b.status === 'published';
   return {
-    ...presentBuildSummary(b, content.extras),
+    ...presentBuildSummary(b, content.extras, seesReviewNote),
     body: b.body,
     photos: content.photos,
     entries: content.entries,

@@ -73,11 +73,11 @@ async function loadCardExtras(builds: Build[]): Promise<Map<number, BuildCardExt
 }
 
 /** Summaries for a page of builds in a fixed number of queries (no N+1), cached briefly (see public-read-cache). */
-export async function summarizeBuilds(builds: Build[]): Promise<BuildSummaryDto[]> {
+export async function summarizeBuilds(actor: Actor | null, builds: Build[]): Promise<BuildSummaryDto[]> {
   if (builds.length === 0) return [];
   const key = `build-cards:${builds.map((b) => `${b.id}.${b.ownerId}.${b.coverPhotoId ?? ''}`).join(',')}`;
   const extras = await cachedPublicRead(Build.sequelize!, key, () => loadCardExtras(builds));
-  return builds.map((b) => presentBuildSummary(b, extras.get(b.id)!));
+  return builds.map((b) => presentBuildSummary(b, extras.get(b.id)!, can(actor, 'build.view-review-note', { ownerId: b.ownerId })));
 }
 
 /** Actuators of a build with their parts, runs and expected gain. Rejected runs show only to those who may see unpublished work. */
@@ -127,5 +127,10 @@ export async function presentBuildDetail(actor: Actor | null, build: Build): Pro
   const includeRejected = can(actor, 'build.view-unpublished', { ownerId: build.ownerId });
   const key = `build-page:${build.id}:${build.coverPhotoId ?? ''}:${includeRejected}`;
   const content = await cachedPublicRead(Build.sequelize!, key, () => loadBuildPage(build, includeRejected));
-  return presentBuildPage(build, content, can(actor, 'build.edit', { ownerId: build.ownerId }));
+  return presentBuildPage(
+    build,
+    content,
+    can(actor, 'build.edit', { ownerId: build.ownerId }),
+    can(actor, 'build.view-review-note', { ownerId: build.ownerId }),
+  );
 }

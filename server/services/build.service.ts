@@ -44,7 +44,8 @@ async function loadPublishedBuilds(query: ListBuildsQuery): Promise<BuildListDto
     limit: query.pageSize,
     offset: (query.page - 1) * query.pageSize,
   });
-  return { items: await summarizeBuilds(rows), total: count, page: query.page, pageSize: query.pageSize };
+  // The same for every viewer: only public review notes.
+  return { items: await summarizeBuilds(null, rows), total: count, page: query.page, pageSize: query.pageSize };
 }
 
 /** Every build of the actor, any state, most recently changed first. */
@@ -58,7 +59,7 @@ export async function listMyBuilds(actor: Actor | null): Promise<BuildListDto> {
     ],
     limit: 500,
   });
-  return { items: await summarizeBuilds(rows), total: rows.length, page: 1, pageSize: rows.length };
+  return { items: await summarizeBuilds(actor, rows), total: rows.length, page: 1, pageSize: rows.length };
 }
 
 /** One build as its page shows it (404 for builds the actor may not see). */

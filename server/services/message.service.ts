@@ -57,6 +57,13 @@ async function lockThread(listing: Listing, starterId: number, transaction: Tran
   return (await MessageThread.findOne({ where, transaction, lock: transaction.LOCK.UPDATE }))!;
 }
 
+/** A closed or hidden listing takes no new messages, in a new conversation or an existing one (409). */
+function assertOpenForMessages(listing: Listing | null): asserts listing is Listing {
+  if (!listing || listing.status === 'closed')
+    throw new ConflictError('This listing is closed; it takes no new messages.', 'listing_closed');
+  if (listing.hiddenAt) throw new ConflictError('A moderator hid this listing; it takes no new messages.', 'listing_hidden');
+}
+
 /** Write to a listing's owner through the site: one thread per listing and enquirer. */
 export async function sendListingMessage(
   actor: Actor | null,
@@ -65,7 +72,7 @@ export async function sendListingMessage(
 ): Promise<{ threadId: number; messageId: number }> {
   const listing = await loadListingForView(actor, listingId);
   authorize(actor, 'listing.message', { ownerId: listing.ownerId });
-  if (listing.status === 'closed' || listing.hiddenAt) throw new ConflictError('This listing is closed.', 'listing_closed');
+  assertOpenForMessages(listing);
   const title = await listingTitle(listing);
   const me = await User.findByPk(actor.id, { attributes: ['login'] });
   const result = await Listing.sequelize!.transaction(async (transaction) => {
@@ -163,9 +170,10 @@ export async function replyInThread(
 ): Promise<{ threadId: number; messageId: number }> {
   const thread = await loadThread(actor, threadId);
   const listing = await Listing.findByPk(thread.listingId);
+  assertOpenForMessages(listing);
   const me = await User.findByPk(actor!.id, { attributes: ['login'] });
   const otherId = thread.ownerId === actor!.id ? thread.starterId : thread.ownerId;
-  const title = listing ? (thread.ownerId === actor!.id ? `their enquiry` : await listingTitle(listing)) : 'a listing';
+  const title = thread.ownerId === actor!.id ? `their enquiry` : await listingTitle(listing);
   const result = await Listing.sequelize!.transaction(async (transaction) => {
     // The thread row first: the message's foreign key would otherwise take a shared lock on it that
     // two replies at once both try to upgrade (a deadlock).

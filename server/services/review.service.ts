@@ -70,6 +70,7 @@ export async function decideBuild(actor: Actor | null, buildId: number, input: B
       {
         status,
         reviewNote: input.note ?? null,
+        reviewNotePublic: input.decision === 'publish' && input.notePublic === true && Boolean(input.note),
         editedSinceReview: false,
         publishedAt: status === 'published' ? (build.publishedAt ?? new Date()) : build.publishedAt,
       },

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { multiLine, singleLine } from './text.ts';
 import type { PartSummaryDto } from './part.ts';
 import type { RunDto } from './run.ts';
 import type { DriveMatrixDto } from './drive-matrix.ts';
@@ -16,7 +17,7 @@ export const actuatorDriveLabels: Record<ActuatorDrive, string> = {
   'quartered-tube': 'Quartered tube',
 };
 
-const optionalText = (max: number) => z.string().trim().max(max).optional();
+const optionalText = (max: number) => singleLine(max).optional();
 
 export const createActuatorInput = z.strictObject({
   partId: z.number().int().positive(),
@@ -25,7 +26,7 @@ export const createActuatorInput = z.strictObject({
   drive: z.enum(ACTUATOR_DRIVES),
   amplifier: optionalText(200),
   maxVolts: z.number().positive().max(5000).optional(),
-  notes: optionalText(4000),
+  notes: multiLine(4000).trim().optional(),
 });
 export type CreateActuatorInput = z.infer<typeof createActuatorInput>;
 

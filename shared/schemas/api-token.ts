@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { singleLine } from './text.ts';
 
 /** What a personal API token may do: post runs from a rig, or read as its owner. */
 export const TOKEN_SCOPES = ['runs:write', 'read'] as const;
@@ -16,7 +17,7 @@ export const TOKEN_PREFIX = 'swt_';
 export const MAX_TOKENS_PER_USER = 20;
 
 export const createApiTokenInput = z.strictObject({
-  name: z.string().trim().min(1, 'Give the token a name.').max(80),
+  name: singleLine(80).min(1, 'Give the token a name.'),
   scopes: z
     .array(z.enum(TOKEN_SCOPES))
     .min(1, 'Choose at least one scope.')

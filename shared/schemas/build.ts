@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { multiLine, singleLine } from './text.ts';
 import { altText } from './alt-text.ts';
 import type { ActuatorDto } from './actuator.ts';
 
@@ -39,9 +40,9 @@ export const buildStatusLabels: Record<BuildStatus, string> = {
   declined: 'Declined',
 };
 
-const title = z.string().trim().min(3, 'At least 3 characters.').max(160);
-const summary = z.string().trim().min(1, 'Say in a sentence what this build is.').max(600);
-const markdown = z.string().max(200_000);
+const title = singleLine(160).min(3, 'At least 3 characters.');
+const summary = multiLine(600).trim().min(1, 'Say in a sentence what this build is.');
+const markdown = multiLine(200_000);
 
 export const createBuildInput = z.strictObject({
   title,
@@ -65,7 +66,7 @@ export const updateBuildInput = z
 export type UpdateBuildInput = z.infer<typeof updateBuildInput>;
 
 export const listBuildsQuery = z.strictObject({
-  q: z.string().trim().max(100).optional(),
+  q: singleLine(100).optional(),
   kind: z.enum(INSTRUMENT_KINDS).optional(),
   page: z.coerce.number().int().min(1).max(10_000).default(1),
   pageSize: z.coerce.number().int().min(1).max(50).default(12),
@@ -128,7 +129,9 @@ export interface BuildSummaryDto {
   cover: PhotoDto | null;
   gains: BuildGainDto[];
   editedSinceReview: boolean;
+  /** The review desk's note: for the owner and moderators, or anyone when the moderator made a publish note public. */
   reviewNote: string | null;
+  reviewNotePublic: boolean;
   createdAt: string;
   updatedAt: string;
   publishedAt: string | null;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { multiLine, singleLine } from './text.ts';
 import type { AttachedPhotoDto } from './attached-photo.ts';
 import { PART_CATEGORIES, type PartCategory } from './part.ts';
 
@@ -24,7 +25,8 @@ export function priceLabel(kind: PriceKind, amount: number | null, currency: str
   return `${(amount ?? 0).toFixed(2)} ${currency ?? ''}`.trim();
 }
 
-const text = (max: number) => z.string().trim().max(max);
+const text = (max: number) => singleLine(max);
+const longText = (max: number) => multiLine(max).trim();
 
 const listingFields = {
   partId: z.number().int().positive(),
@@ -41,7 +43,7 @@ const listingFields = {
     .optional(),
   region: text(80).min(2),
   shipsTo: text(160).optional(),
-  notes: text(4000).optional(),
+  notes: longText(4000).optional(),
 };
 
 const priceRule = (v: { priceKind?: PriceKind; priceAmount?: number | null; currency?: string | null }) =>
@@ -109,7 +111,7 @@ export interface ListingListDto {
   pageSize: number;
 }
 
-export const sendMessageInput = z.strictObject({ body: text(4000).min(1, 'Write a message.') });
+export const sendMessageInput = z.strictObject({ body: longText(4000).min(1, 'Write a message.') });
 export type SendMessageInput = z.infer<typeof sendMessageInput>;
 export const threadIdParams = z.strictObject({ threadId: z.coerce.number().int().positive() });
 

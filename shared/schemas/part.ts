@@ -1,5 +1,6 @@
 import type { RunKind } from './run.ts';
 import { z } from 'zod';
+import { multiLine, singleLine } from './text.ts';
 import type { AttachedPhotoDto } from './attached-photo.ts';
 
 export const PART_CATEGORIES = ['bimorph', 'buzzer-disc', 'stack', 'tube', 'shear-plate', 'voice-coil', 'other'] as const;
@@ -75,7 +76,7 @@ const optionalNumber = (schema: z.ZodNumber) => z.preprocess((v) => (v === '' ? 
 /** Registry search; every filter optional. A gain range matches parts whose median lies inside it. */
 export const listPartsQuery = z
   .strictObject({
-    q: z.string().trim().max(100).optional(),
+    q: singleLine(100).optional(),
     category: z.enum(PART_CATEGORIES).optional(),
     gainMin: optionalNumber(z.number().min(0).max(1e7)),
     gainMax: optionalNumber(z.number().min(0).max(1e7)),
@@ -130,9 +131,9 @@ const mm = z.number().positive().max(10_000).nullable().optional();
 /** A maker proposes a part; it is listed once a moderator accepts it. */
 export const proposePartInput = z.strictObject({
   category: z.enum(PART_CATEGORIES),
-  name: z.string().trim().min(3).max(160),
-  salvageSource: z.string().trim().max(240).optional(),
-  material: z.string().trim().max(40).optional(),
+  name: singleLine(160).min(3),
+  salvageSource: singleLine(240).optional(),
+  material: singleLine(40).optional(),
   lengthMm: mm,
   widthMm: mm,
   thicknessMm: mm,
@@ -141,11 +142,11 @@ export const proposePartInput = z.strictObject({
   layers: z.number().int().min(1).max(10_000).nullable().optional(),
   capacitanceNf: z.number().positive().max(1e9).nullable().optional(),
   safeVolts: z.number().positive().max(100_000).nullable().optional(),
-  notes: z.string().trim().max(4000).optional(),
+  notes: multiLine(4000).trim().optional(),
 });
 export type ProposePartInput = z.infer<typeof proposePartInput>;
 
-export const mergePartInput = z.strictObject({ intoPartId: z.number().int().positive(), note: z.string().trim().min(1).max(4000) });
+export const mergePartInput = z.strictObject({ intoPartId: z.number().int().positive(), note: multiLine(4000).trim().min(1) });
 export type MergePartInput = z.infer<typeof mergePartInput>;
 
 /** An accepted run as the part page lists it. */

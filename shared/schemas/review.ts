@@ -1,16 +1,26 @@
 import { z } from 'zod';
+import { multiLine } from './text.ts';
 import type { PlausibilityFlag } from '../review/plausibility.ts';
 import type { RunFitDto, RunKind } from './run.ts';
 import type { PartStatsDto } from './part.ts';
 
-const note = z.string().trim().max(4000);
+const note = multiLine(4000).trim();
 
 /** Publish needs no note; return and decline must say why. */
 export const buildDecisionInput = z
-  .strictObject({ decision: z.enum(['publish', 'return', 'decline']), note: note.optional() })
+  .strictObject({
+    decision: z.enum(['publish', 'return', 'decline']),
+    note: note.optional(),
+    /** Show the publish note on the public build page too (otherwise the owner and moderators only). */
+    notePublic: z.boolean().optional(),
+  })
   .refine((v) => v.decision === 'publish' || (v.note?.length ?? 0) > 0, {
     message: 'A note is required to return or decline.',
     path: ['note'],
+  })
+  .refine((v) => !v.notePublic || (v.decision === 'publish' && (v.note?.length ?? 0) > 0), {
+    message: 'Only a note written with a publish decision can be shown to everyone.',
+    path: ['notePublic'],
   });
 export type BuildDecisionInput = z.infer<typeof buildDecisionInput>;
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { multiLine, singleLine } from './text.ts';
 import { fitInput, fitPoint, type FitPoint, type FitResultDto } from './workbench.ts';
 import { sineSample } from './sine-fit.ts';
 import { imageVector, latticeRunFigures, type LatticeRunFiguresDto } from './lattice.ts';
@@ -46,9 +47,9 @@ export const runDrive = z.discriminatedUnion('kind', [
 export type RunDrive = z.infer<typeof runDrive>;
 
 export const runConditions = z.strictObject({
-  preload: z.string().trim().max(200).optional(),
+  preload: singleLine(200).optional(),
   temperatureC: z.number().min(-273.15).max(1000).optional(),
-  notes: z.string().trim().max(2000).optional(),
+  notes: multiLine(2000).trim().optional(),
 });
 export type RunConditions = z.infer<typeof runConditions>;
 
@@ -62,7 +63,7 @@ const runCommon = {
   method: z.enum(RUN_METHODS),
   drive: runDrive.optional(),
   conditions: runConditions.optional(),
-  notes: z.string().trim().max(4000).optional(),
+  notes: multiLine(4000).trim().optional(),
   measuredOn: measuredOn.optional(),
 };
 
@@ -133,7 +134,7 @@ export const updateRunInput = z
     method: runCommon.method.optional(),
     drive: runDrive.nullable().optional(),
     conditions: runConditions.nullable().optional(),
-    notes: z.string().trim().max(4000).nullable().optional(),
+    notes: multiLine(4000).trim().nullable().optional(),
     measuredOn: measuredOn.nullable().optional(),
     voltageUnit: z.enum(voltageUnits).optional(),
     displacementUnit: z.enum(displacementUnits).optional(),

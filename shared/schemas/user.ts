@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { singleLine } from './text.ts';
 import { ROLES, type Role } from '../policies.ts';
 
 /** The signed-in person as the client sees them. */
@@ -31,7 +32,7 @@ export interface AdminUserListDto {
 }
 
 export const listUsersQuery = z.strictObject({
-  q: z.string().trim().max(64).optional(),
+  q: singleLine(64).optional(),
   role: z.enum(ROLES).optional(),
   page: z.coerce.number().int().min(1).max(100000).default(1),
   pageSize: z.coerce.number().int().min(1).max(100).default(25),

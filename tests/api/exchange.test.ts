@@ -5,7 +5,8 @@ import { signIn, type Agent } from '../support/login.ts';
 import { createPart, createUser } from '../support/factories.ts';
 import { expectError } from '../support/expect-error.ts';
 import { standInEmail } from '../../server/dev/demo-accounts.ts';
-import { Message } from '../../server/models/message.model.ts';
+import { Message, MessageThread } from '../../server/models/message.model.ts';
+import { Listing } from '../../server/models/listing.model.ts';
 
 let t: TestApp;
 beforeAll(async () => {
@@ -167,6 +168,32 @@ describe('messages', () => {
     expect((await send(ownerAgent, 'post', `${path}/read`, {})).status).toBe(204);
     expect(await unread()).toBe(0);
   });
+
+  test.each([
+    ['closed', { status: 'closed' }, 'listing_closed'],
+    ['hidden by a moderator', { hiddenAt: new Date(), hiddenNote: 'No cautions.' }, 'listing_hidden'],
+  ] as const)(
+    'when the listing is %s, then new messages are refused with 409 in new and existing threads, and nothing is stored',
+    async (_what, change, code) => {
+      const { a: ownerAgent, listing } = await ownerWithListing();
+      const b = await signIn(t, (await createUser()).login);
+      const sent = await send(b, 'post', `/api/listings/${listing.id}/messages`, { body: 'Still there?' });
+      expect(sent.status).toBe(201);
+      await Listing.update(change, { where: { id: listing.id } });
+      const path = `/api/inbox/${sent.body.threadId}/messages`;
+      expectError(await send(b, 'post', path, { body: 'Hello again?' }), 409, code);
+      expectError(await send(ownerAgent, 'post', path, { body: 'Sold, sorry.' }), 409, code);
+      const moderator = await signIn(t, (await createUser({ role: 'moderator' })).login);
+      // A new conversation: refused for whoever may still see the listing (another maker cannot see a hidden one).
+      expectError(await send(moderator, 'post', `/api/listings/${listing.id}/messages`, { body: 'A question' }), 409, code);
+      const late = await send(await signIn(t, (await createUser()).login), 'post', `/api/listings/${listing.id}/messages`, {
+        body: 'Mine?',
+      });
+      expect([404, 409]).toContain(late.status);
+      expect((await Message.findAll({ where: { threadId: sent.body.threadId } })).map((m) => m.body)).toEqual(['Still there?']);
+      expect(await MessageThread.count({ where: { listingId: listing.id } })).toBe(1);
+    },
+  );
 
   test('when the owner writes to their own listing, an outsider reads a thread, or the body is empty, then 403 / 404 / 400', async () => {
     const { a, listing } = await ownerWithListing();

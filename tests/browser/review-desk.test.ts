@@ -36,7 +36,7 @@ describe('journey: a moderator works the review desk', () => {
     await toReturn.update({ submittedAt: new Date(Date.now() - 2 * DAY) });
     for (const gain of [95, 104, 110, 118])
       await createRunRow({ buildId: toPublish.id, partId: part.id, ownerId: owner.id, gainNmPerV: gain, status: 'accepted' });
-    const pending = await createRunRow({ buildId: toReturn.id, partId: part.id, ownerId: owner.id, gainNmPerV: 240, hysteresis: 0.3 });
+    const pending = await createRunRow({ buildId: toPublish.id, partId: part.id, ownerId: owner.id, gainNmPerV: 240, hysteresis: 0.3 });
     const reporter = await createUser();
     const { Report } = await import('../../server/models/report.model.ts');
     await Report.create({

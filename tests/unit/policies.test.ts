@@ -11,6 +11,7 @@ const table: Record<Action, Row> = {
   'account.update-settings': [false, true, false, false, false, false],
   'build.edit': [false, true, false, false, false, false],
   'build.view-unpublished': [false, true, false, true, true, true],
+  'build.view-review-note': [false, true, false, true, true, true],
   'part.view-unlisted': [false, true, false, true, true, true],
   'part.photos': [false, true, false, false, true, true],
   'review.access': [false, false, false, false, true, true],

@@ -39,7 +39,7 @@ export function ReviewAuditPage() {
     <div>
       <PageHeader
         title={TITLE}
-        lead="Who decided what on the review desk, when, and with which note. Newest first; dates in UTC."
+        lead="Who decided what on the review desk, and which admin changed an account or revoked a token, when, and with which note. Newest first; dates in UTC."
         actions={
           <LinkButton variant="secondary" to={paths.review}>
             Back to the desk

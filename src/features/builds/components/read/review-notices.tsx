@@ -18,7 +18,21 @@ export function ReviewNotices({ build, viewerIsOwner }: { build: BuildDto; viewe
         <p className="text-ink-soft">A declined build stays visible to its maker and to moderators only, and can no longer be edited.</p>
       </Notice>,
     );
-  } else if (build.status === 'submitted' && viewerIsOwner) {
+  } else if (build.status === 'published' && build.reviewNote) {
+    notices.push(
+      <Notice key="published-note" title="Note from the review desk">
+        <p className="whitespace-pre-line">{build.reviewNote}</p>
+        {viewerIsOwner && (
+          <p className="text-ink-soft">
+            {build.reviewNotePublic
+              ? 'The moderator made this note public: visitors see it too.'
+              : 'Only you and moderators see this note.'}
+          </p>
+        )}
+      </Notice>,
+    );
+  }
+  if (build.status === 'submitted' && viewerIsOwner) {
     notices.push(
       <Notice key="submitted" title="Submitted for review">
         <p>A moderator will look at it. Until then it cannot be edited, and only you and moderators can see it.</p>

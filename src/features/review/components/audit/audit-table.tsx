@@ -19,7 +19,7 @@ export function AuditTable({ items }: { items: AuditEntryDto[] }) {
             When
           </th>
           <th scope="col" className="px-2 py-2">
-            Moderator
+            By
           </th>
           <th scope="col" className="px-2 py-2">
             Action
@@ -38,7 +38,7 @@ export function AuditTable({ items }: { items: AuditEntryDto[] }) {
             <td data-label="When" className={cell}>
               <span className="num whitespace-nowrap">{formatDateTime(e.createdAt)}</span>
             </td>
-            <td data-label="Moderator" className={`${cell} sm:whitespace-nowrap`}>
+            <td data-label="By" className={`${cell} sm:whitespace-nowrap`}>
               <Link
                 className="underline decoration-rule hover:text-copper"
                 to={`${paths.reviewAudit}?actorId=${e.actor.id}`}

@@ -16,6 +16,7 @@ export interface DecisionChoice<D extends string> {
 interface Values<D extends string> {
   decision: D;
   note?: string;
+  notePublic?: boolean;
 }
 
 /**
@@ -28,6 +29,7 @@ export function DecisionForm<D extends string>({
   choices,
   noteLabel,
   noteHint,
+  publicNote,
   onDecide,
 }: {
   id: string;
@@ -35,11 +37,13 @@ export function DecisionForm<D extends string>({
   choices: DecisionChoice<D>[];
   noteLabel: string;
   noteHint: string;
+  /** Offer "show this note to everyone" for this decision (a build's publish note); otherwise notes stay private. */
+  publicNote?: { decision: D; label: string };
   onDecide: (values: Values<D>) => Promise<unknown>;
 }) {
   const { register, handleSubmit, setValue, setError, formState } = useForm<Values<string>, unknown, Values<D>>({
     resolver: zodResolver(schema),
-    defaultValues: { decision: choices[0].decision, note: '' },
+    defaultValues: { decision: choices[0].decision, note: '', notePublic: false },
   });
   const [busy, setBusy] = useState<D | null>(null);
   const noteError = formState.errors.note?.message;
@@ -51,7 +55,12 @@ export function DecisionForm<D extends string>({
     void handleSubmit(async (values) => {
       setBusy(decision);
       try {
-        await onDecide({ decision: values.decision, ...(values.note ? { note: values.note } : {}) });
+        const shareNote = Boolean(values.note && values.notePublic && values.decision === publicNote?.decision);
+        await onDecide({
+          decision: values.decision,
+          ...(values.note ? { note: values.note } : {}),
+          ...(shareNote ? { notePublic: true } : {}),
+        });
       } catch (err) {
         const issue = noteIssue(err);
         if (issue) setError('note', { type: 'server', message: issue }, { shouldFocus: true });
@@ -91,6 +100,12 @@ export function DecisionForm<D extends string>({
           </p>
         )}
       </div>
+      {publicNote && (
+        <label className="flex items-start gap-2 text-sm">
+          <input type="checkbox" className="mt-1" {...register('notePublic')} />
+          <span>{publicNote.label}</span>
+        </label>
+      )}
       <div className="flex flex-wrap gap-2">
         {choices.map((c) => (
           <Button key={c.decision} variant={c.variant} disabled={busy !== null} onClick={() => decide(c.decision)}>

@@ -37,7 +37,8 @@ export function BuildPanel({ build, edited, onDecided }: { build: QueueBuildDto;
           schema={buildDecisionInput}
           choices={edited ? editedChoices : buildChoices}
           noteLabel="Note to the maker"
-          noteHint="Required to return or decline: say what to change or why. The maker sees it on the build and by e-mail."
+          noteHint="Required to return or decline: say what to change or why. The maker sees it on the build and by e-mail; visitors do not, unless you tick the box below when publishing."
+          publicNote={{ decision: 'publish', label: 'When publishing, show this note on the public build page too' }}
           onDecide={async (v) => {
             await decide.mutateAsync({ id: build.id, ...v });
             onDecided(v.decision);
