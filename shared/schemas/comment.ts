@@ -1,14 +1,15 @@
 import { z } from 'zod';
+import { multiLine } from './text.ts';
 
 /** Longest comment, in characters of Markdown. */
 export const MAX_COMMENT_CHARS = 4000;
 
 export const createCommentInput = z.strictObject({
-  body: z.string().trim().min(1, 'Write something.').max(MAX_COMMENT_CHARS, `At most ${MAX_COMMENT_CHARS} characters.`),
+  body: multiLine(MAX_COMMENT_CHARS).trim().min(1, 'Write something.'),
 });
 export type CreateCommentInput = z.infer<typeof createCommentInput>;
 
-export const hideCommentInput = z.strictObject({ note: z.string().trim().min(1, 'Say why it is hidden.').max(1000) });
+export const hideCommentInput = z.strictObject({ note: multiLine(1000).trim().min(1, 'Say why it is hidden.') });
 export type HideCommentInput = z.infer<typeof hideCommentInput>;
 
 export const commentIdParams = z.strictObject({ commentId: z.coerce.number().int().positive() });

@@ -71,6 +71,8 @@ describe('comments on a build', () => {
     expectError(await post(fan, `/api/builds/${build.id}/comments`, { body: '   ' }), 400, 'validation_failed', 'body');
     expectError(await post(fan, `/api/builds/${build.id}/comments`, { body: 'x'.repeat(4001) }), 400, 'validation_failed', 'body');
     expectError(await post(fan, `/api/builds/${build.id}/comments`, { body: 'ok', pinned: true }), 400, 'validation_failed');
+    expectError(await post(fan, `/api/builds/${build.id}/comments`, { body: 'nul \u0000 here' }), 400, 'validation_failed', 'body');
+    expectError(await post(fan, `/api/builds/${build.id}/comments`, { body: 'lone \uD800 half' }), 400, 'validation_failed', 'body');
     expect(await BuildComment.count({ where: { buildId: build.id } })).toBe(0);
   });
 
