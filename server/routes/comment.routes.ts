@@ -3,6 +3,7 @@ import { buildIdParams } from '@shared/schemas/build.ts';
 import { commentIdParams, createCommentInput, hideCommentInput } from '@shared/schemas/comment.ts';
 import type { Config } from '../config.ts';
 import { limiter } from '../middleware/rate-limit.ts';
+import { requireUser } from '../middleware/auth.ts';
 import { createComment, hideComment, listComments } from '../services/comment.service.ts';
 import { route } from './route.ts';
 
@@ -18,6 +19,7 @@ export function commentRoutes(config: Config): Router {
   );
   r.post(
     '/api/builds/:buildId/comments',
+    requireUser,
     commentLimit,
     route({ params: buildIdParams, body: createCommentInput }, async ({ actor, params, body, res }) => {
       res.status(201).json(await createComment(actor, params.buildId, body));
@@ -25,6 +27,7 @@ export function commentRoutes(config: Config): Router {
   );
   r.post(
     '/api/comments/:commentId/hide',
+    requireUser,
     route({ params: commentIdParams, body: hideCommentInput }, async ({ actor, params, body, res }) => {
       await hideComment(actor, params.commentId, body);
       res.status(204).end();

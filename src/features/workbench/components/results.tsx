@@ -105,10 +105,11 @@ export function Headline({ label, children, sub }: { label: string; children: Re
 /** One labelled result; `note` says what it means or where it comes from. */
 export function ResultRow({ label, children, note }: { label: ReactNode; children: ReactNode; note?: ReactNode }) {
   return (
-    <div className="grid grid-cols-[minmax(6rem,max-content)_minmax(0,1fr)] items-baseline gap-x-4 py-2">
-      <dt className="text-sm">{label}</dt>
-      <dd className="min-w-0 break-words text-right">{children}</dd>
-      {note && <dd className="col-span-2 text-xs text-ink-soft">{note}</dd>}
+    // A value too wide to sit beside its label goes onto the next line, right-aligned (never over the label).
+    <div className="flex flex-wrap items-baseline justify-between gap-x-4 py-2">
+      <dt className="min-w-[6rem] flex-1 text-sm">{label}</dt>
+      <dd className="ml-auto max-w-full text-right [overflow-wrap:anywhere]">{children}</dd>
+      {note && <dd className="w-full text-xs text-ink-soft">{note}</dd>}
     </div>
   );
 }
