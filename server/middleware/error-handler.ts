@@ -20,15 +20,21 @@ export const apiNotFound: RequestHandler = (req, res) => {
 /** The database could not be reached (refused, timed out, connection lost), as opposed to a query that failed. */
 export function isDbDown(err: unknown): boolean {
   if (err instanceof ConnectionError || err instanceof TimeoutError) return true;
-  type Coded = { code?: string; sqlState?: string };
+  type Coded = { code?: string; sqlState?: string; errno?: number };
   const e = err as { name?: string; original?: Coded; parent?: Coded } & Coded;
   const code = e?.original?.code ?? e?.parent?.code ?? e?.code ?? '';
   const sqlState = e?.original?.sqlState ?? e?.parent?.sqlState ?? e?.sqlState ?? '';
-  // SQLSTATE class 08 is "connection exception" (SQL standard); the codes are the driver's and Node's.
+  const errno = e?.original?.errno ?? e?.parent?.errno ?? e?.errno;
+  // SQLSTATE class 08 is "connection exception" (SQL standard); the codes are the driver's and Node's. A server that
+  // is shutting down also kills the statements it is running or holding on a lock: 1053 ER_SERVER_SHUTDOWN,
+  // 1317 ER_QUERY_INTERRUPTED, 1927 ER_CONNECTION_KILLED [S: MariaDB Server error codes reference].
   return (
-    /ECONNREFUSED|ER_GET_CONNECTION_TIMEOUT|ER_CONNECTION_TIMEOUT|ER_SOCKET_UNEXPECTED_CLOSE|ECONNRESET|PROTOCOL_CONNECTION_LOST|ER_CONNECTION_ALREADY_CLOSED|ER_CMD_CONNECTION_CLOSED|ER_POOL_ALREADY_CLOSED/.test(
+    /ECONNREFUSED|ER_GET_CONNECTION_TIMEOUT|ER_CONNECTION_TIMEOUT|ER_SOCKET_UNEXPECTED_CLOSE|ECONNRESET|PROTOCOL_CONNECTION_LOST|ER_CONNECTION_ALREADY_CLOSED|ER_CMD_CONNECTION_CLOSED|ER_POOL_ALREADY_CLOSED|ER_SERVER_SHUTDOWN|ER_QUERY_INTERRUPTED|ER_CONNECTION_KILLED/.test(
       code,
     ) ||
+    errno === 1053 ||
+    errno === 1317 ||
+    errno === 1927 ||
     sqlState.startsWith('08') ||
     e?.name === 'SequelizeConnectionAcquireTimeoutError'
   );

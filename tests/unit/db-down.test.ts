@@ -1,0 +1,30 @@
+// Which errors mean "the database is not reachable" (503 db_unavailable) rather than a fault of ours (500).
+import { describe, expect, test } from 'vitest';
+import { isDbDown } from '../../server/middleware/error-handler.ts';
+
+// Shapes as Sequelize wraps the mariadb driver's SqlError (`original`/`parent` carry code, errno and sqlState);
+// codes and numbers from the MariaDB Server error codes reference [S: mariadb.com/kb, "MariaDB Error Codes"].
+const wrapped = (code: string, errno: number, sqlState: string) => ({
+  name: 'SequelizeDatabaseError',
+  original: { code, errno, sqlState },
+});
+
+describe('isDbDown', () => {
+  test.each([
+    ['a refused connection', wrapped('ECONNREFUSED', 0, '')],
+    ['a server shutting down', wrapped('ER_SERVER_SHUTDOWN', 1053, '08S01')],
+    ['a statement killed at shutdown', wrapped('ER_CONNECTION_KILLED', 1927, '70100')],
+    ['a query interrupted at shutdown', wrapped('ER_QUERY_INTERRUPTED', 1317, '70100')],
+    ['a socket closed under a query', wrapped('ER_SOCKET_UNEXPECTED_CLOSE', 45007, '08S01')],
+  ])('when %s, then the database is down (503)', (_what, err) => {
+    expect(isDbDown(err)).toBe(true);
+  });
+
+  test.each([
+    ['a duplicate key', wrapped('ER_DUP_ENTRY', 1062, '23000')],
+    ['a syntax error', wrapped('ER_PARSE_ERROR', 1064, '42000')],
+    ['a plain error', new Error('boom')],
+  ])('when %s, then it is not a database outage', (_what, err) => {
+    expect(isDbDown(err)).toBe(false);
+  });
+});
