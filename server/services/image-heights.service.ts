@@ -2,7 +2,7 @@
 // (libvips) into rows of numbers for the lattice analysis. Colour images become grey by the mean of R, G and
 // B, as the page's own PNG reader does (src/features/workbench/lattice/decode-png.ts); alpha is ignored.
 import sharp from 'sharp';
-import { LatticeError, MAX_IMAGE_SIDE, MIN_IMAGE_SIDE } from '@shared/workbench/lattice-limits.ts';
+import { MAX_IMAGE_SIDE, MIN_IMAGE_SIDE } from '@shared/workbench/lattice-limits.ts';
 import { AppError } from '../errors.ts';
 
 export interface HeightImage {
@@ -30,12 +30,16 @@ export async function decodeHeightImage(bytes: Buffer): Promise<HeightImage> {
     );
   const { width = 0, height = 0 } = meta;
   if (width > MAX_IMAGE_SIDE || height > MAX_IMAGE_SIDE)
-    throw asBadRequest(
-      new LatticeError('image_too_large', `The image is ${width} × ${height}; at most ${MAX_IMAGE_SIDE} × ${MAX_IMAGE_SIDE} is analysed.`),
+    throw new AppError(
+      400,
+      'image_too_large',
+      `The image is ${width} × ${height}; at most ${MAX_IMAGE_SIDE} × ${MAX_IMAGE_SIDE} is analysed.`,
     );
   if (width < MIN_IMAGE_SIDE || height < MIN_IMAGE_SIDE)
-    throw asBadRequest(
-      new LatticeError('image_too_small', `The image is ${width} × ${height}; at least ${MIN_IMAGE_SIDE} × ${MIN_IMAGE_SIDE} is needed.`),
+    throw new AppError(
+      400,
+      'image_too_small',
+      `The image is ${width} × ${height}; at least ${MIN_IMAGE_SIDE} × ${MIN_IMAGE_SIDE} is needed.`,
     );
   const colour = (meta.channels ?? 1) >= 3;
   const depth = meta.depth === 'float' ? 'float' : meta.depth === 'ushort' ? 'ushort' : 'uchar';
@@ -74,5 +78,3 @@ export async function decodeHeightImage(bytes: Buffer): Promise<HeightImage> {
     heights,
   };
 }
-
-const asBadRequest = (err: LatticeError) => new AppError(400, err.code, err.message);

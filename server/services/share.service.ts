@@ -12,6 +12,8 @@ import type { ShareCard } from '../presenters/share-card.presenter.ts';
 import type { AtomFeed } from '../presenters/atom.presenter.ts';
 import { plainExcerpt } from '../presenters/xml-text.ts';
 import { getBuild, listPublishedBuilds } from './build.service.ts';
+import { loadBuildForView } from './build-access.ts';
+import { summarizeBuilds } from './build-read.service.ts';
 import { getPart } from './part.service.ts';
 import { getListing } from './listing.service.ts';
 
@@ -24,12 +26,14 @@ const photoOf = (origin: string, p: { url: string; width: number; height: number
 
 /** A published build's card, or null when a visitor cannot see it. */
 export async function buildCard(buildId: number, origin: string): Promise<ShareCard | null> {
-  const b = await visible(() => getBuild(null, buildId));
+  // The card needs what a builds-index card shows (title, summary, cover, gains), not the whole build page.
+  const row = await visible(() => loadBuildForView(null, buildId));
+  const b = row ? (await summarizeBuilds(null, [row]))[0] : undefined;
   if (!b) return null;
   const gains = b.gains.length ? ` Measured: ${b.gains.map((g) => `${formatShort(g.gainNmPerV)} nm/V`).join(', ')}.` : '';
   return {
     title: b.title,
-    description: plainExcerpt(`${b.summary || b.body}${gains}`, 240) + ` By ${b.owner.login}.`,
+    description: plainExcerpt(`${b.summary}${gains}`, 240) + ` By ${b.owner.login}.`,
     url: abs(origin, `/builds/${b.id}`),
     type: 'article',
     image: photoOf(origin, b.cover),

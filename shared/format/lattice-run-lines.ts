@@ -16,7 +16,7 @@ export function latticeRunLines(l: LatticeRunFiguresDto): Array<[string, string]
     ['Counts in the registry as', countsAsWords[l.countsAs]],
     ['Pixel size x', formatPlusMinus(l.nmPerPixel.x, l.nmPerPixelU.x, 'std', 'nm')],
     ['Pixel size y', formatPlusMinus(l.nmPerPixel.y, l.nmPerPixelU.y, 'std', 'nm')],
-    ['Skew between the axes', formatPlusMinus(l.skewDeg, l.skewDegU, 'std', '°').replace(' °', '°')],
+    ['Skew between the axes', formatPlusMinus(l.skewDeg, l.skewDegU, 'std', '°')],
     ['Cross-coupling (y drive into x)', formatPlusMinus(l.crossCouplingNmPerV, l.crossCouplingU, 'std')],
     [
       'Reference',

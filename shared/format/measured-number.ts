@@ -89,9 +89,12 @@ export const plusMinusLabels: Readonly<Record<PlusMinusKind, { short: string; lo
 };
 
 /** A value ± uncertainty with its unit and kind as one string: "102.7 ± 0.4 nm/V (95 %)". */
+/** A unit after a number: a space before it, except the degree sign, which sits on the number (12.5°) [S: SI Brochure, 9th ed., §5.4.3]. */
+export const unitSuffix = (unit: string) => (!unit ? '' : unit === '°' ? '°' : ` ${unit}`);
+
 export function formatPlusMinus(value: number, uncertainty: number | null | undefined, kind: PlusMinusKind, unit = 'nm/V'): string {
   const f = formatWithUncertainty(value, uncertainty);
-  const u = unit ? ` ${unit}` : '';
+  const u = unitSuffix(unit);
   return f.uncertainty === null ? `${f.value}${u}` : `${f.value} ± ${f.uncertainty}${u} (${plusMinusLabels[kind].short})`;
 }
 

@@ -1,4 +1,4 @@
-import { formatFixed, formatSig, formatWithUncertainty } from '@shared/format/measured-number.ts';
+import { formatFixed, formatSig, formatWithUncertainty, unitSuffix } from '@shared/format/measured-number.ts';
 import { Headline, ResultPanel, ResultRow } from '@/features/workbench/components/results.tsx';
 import type { LatticeResult } from './lattice-messages.ts';
 
@@ -7,7 +7,7 @@ const deg = (v: number | null) => (v === null ? '—' : `${formatFixed(v, 2)}°`
 /** A figure with its standard uncertainty (k = 1, said once in the basis) when the quarters gave one. */
 const pm = (v: number, u: number | null | undefined, unit: string) => {
   const f = formatWithUncertainty(v, u ?? null);
-  return `${f.value}${f.uncertainty === null ? '' : ` ± ${f.uncertainty}`}${unit === '°' ? '°' : ` ${unit}`}`.replace(/-/g, '−');
+  return `${f.value}${f.uncertainty === null ? '' : ` ± ${f.uncertainty}`}${unitSuffix(unit)}`.replace(/-/g, '−');
 };
 const pmDeg = (v: number | null, u: number | null | undefined) => (v === null ? '—' : u ? pm(v, u, '°') : deg(v));
 
