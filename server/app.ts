@@ -35,6 +35,10 @@ import { adminRoutes } from './routes/admin.routes.ts';
 import { workbenchRoutes } from './routes/workbench.routes.ts';
 import { shareRoutes } from './routes/share.routes.ts';
 import { commentRoutes } from './routes/comment.routes.ts';
+import { reviewThreadRoutes } from './routes/review-thread.routes.ts';
+import { followRoutes } from './routes/follow.routes.ts';
+import { notificationRoutes } from './routes/notification.routes.ts';
+import { mailChoiceRoutes } from './routes/mail-choice.routes.ts';
 import { photoRoutes } from './routes/photo.routes.ts';
 import { buildRoutes } from './routes/build.routes.ts';
 import { actuatorRoutes } from './routes/actuator.routes.ts';
@@ -157,6 +161,8 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
     }),
   );
   app.use(compression());
+  // One-click unsubscribe (RFC 8058): the signed link is the credential; mail providers POST it without cookies or Origin.
+  app.use(mailChoiceRoutes());
   app.use(requireSameOrigin(config.publicUrl));
 
   const dist = resolve(config.clientDist);
@@ -225,6 +231,9 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(openApiRoutes(config));
   app.use(exchangeRoutes(config));
   app.use(commentRoutes(config));
+  app.use(reviewThreadRoutes(config));
+  app.use(followRoutes());
+  app.use(notificationRoutes());
   app.use(['/api', '/auth'], apiNotFound);
 
   const indexHtml = resolve(dist, 'index.html');

@@ -59,6 +59,13 @@ const rules = {
   /** Anything a signed-in maker may write: builds, runs, listings, reports. */
   'content.create': and(active, hasRole('maker')),
   'account.update-settings': and(active, isSelf),
+  /** One's own notifications and unread counts (a suspended maker may still read what they were told). */
+  'notification.read': isSelf,
+  /** Following builds, parts and makers: any active signed-in maker. */
+  'follow.manage': and(active, hasRole('maker')),
+  /** A build's review thread is between its owner and the moderators; both read it and write in it. */
+  'review-thread.view': or(isOwner, hasRole('moderator')),
+  'review-thread.post': and(active, or(isOwner, hasRole('moderator'))),
   /** Builds and everything inside them (entries, photos, actuators, runs) are edited by their owner only. */
   'build.edit': and(active, isOwner),
   /** Unpublished builds are visible to their owner and to moderators (who review them). */

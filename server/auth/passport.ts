@@ -46,7 +46,7 @@ export function createPassport(config: Config, log: Logger): PassportStatic {
         )
           .then(async ({ user, created }) => {
             if (created) {
-              await enqueueMail(user, welcomeMail(user.login, APP_URL), { essential: false });
+              await enqueueMail(user, welcomeMail(user.login, APP_URL), { essential: false, kind: null });
               kickOutbox();
             }
             done(null, user);

@@ -24,6 +24,7 @@ import * as addAuditTargetLabel from './migrations/20261210000100-add-audit-targ
 import * as recountPublishedRuns from './migrations/20261210000200-recount-published-runs.ts';
 import * as addBuildReviewNotePublic from './migrations/20261210000300-add-build-review-note-public.ts';
 import * as createBuildComments from './migrations/20261212000100-create-build-comments.ts';
+import * as createConversationsAndFollows from './migrations/20261214000100-create-conversations-and-follows.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -53,6 +54,7 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261210000200-recount-published-runs', recountPublishedRuns],
   ['20261210000300-add-build-review-note-public', addBuildReviewNotePublic],
   ['20261212000100-create-build-comments', createBuildComments],
+  ['20261214000100-create-conversations-and-follows', createConversationsAndFollows],
 ];
 
 /** Umzug over our migration list; the only source of the schema, in tests too. */

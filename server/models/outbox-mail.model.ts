@@ -6,6 +6,8 @@ export class OutboxMail extends Model<InferAttributes<OutboxMail>, InferCreation
   declare subject: string;
   declare textBody: string;
   declare htmlBody: string;
+  /** Extra headers as JSON (List-Unsubscribe and List-Unsubscribe-Post, RFC 8058), or null. */
+  declare headers: CreationOptional<string | null>;
   declare attempts: CreationOptional<number>;
   declare nextAttemptAt: Date;
   declare sentAt: CreationOptional<Date | null>;
@@ -24,6 +26,7 @@ export class OutboxMail extends Model<InferAttributes<OutboxMail>, InferCreation
         subject: { type: DataTypes.STRING(300), allowNull: false },
         textBody: { type: DataTypes.TEXT, allowNull: false },
         htmlBody: { type: DataTypes.TEXT, allowNull: false },
+        headers: DataTypes.TEXT,
         attempts: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         nextAttemptAt: { type: DataTypes.DATE, allowNull: false },
         sentAt: DataTypes.DATE,

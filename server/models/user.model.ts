@@ -11,6 +11,10 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare role: CreationOptional<Role>;
   declare suspendedAt: CreationOptional<Date | null>;
   declare mailOptOut: CreationOptional<boolean>;
+  /** Mail kinds this person turned off, comma-separated (see shared/schemas/mail-choices.ts). */
+  declare mailOff: CreationOptional<string>;
+  /** Random key that signs this person's one-click unsubscribe links; made on first need. */
+  declare mailKey: CreationOptional<string | null>;
   declare lastSignInAt: CreationOptional<Date | null>;
   declare dataLicenceAcceptedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
@@ -28,6 +32,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         role: { type: DataTypes.ENUM('maker', 'moderator', 'admin'), allowNull: false, defaultValue: 'maker' },
         suspendedAt: DataTypes.DATE,
         mailOptOut: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        mailOff: { type: DataTypes.STRING(100), allowNull: false, defaultValue: '' },
+        mailKey: DataTypes.STRING(64),
         lastSignInAt: DataTypes.DATE,
         dataLicenceAcceptedAt: DataTypes.DATE,
         createdAt: DataTypes.DATE,

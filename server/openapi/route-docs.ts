@@ -16,6 +16,7 @@ import { exchangeDocs } from './exchange-docs.ts';
 import { workbenchDocs } from './workbench-docs.ts';
 import { shareDocs } from './share-docs.ts';
 import { commentDocs } from './comment-docs.ts';
+import { conversationDocs } from './conversation-docs.ts';
 
 /** Every route of the app, grouped by resource (one file each). */
 export const ROUTE_DOCS: readonly RouteDoc[] = [
@@ -32,6 +33,7 @@ export const ROUTE_DOCS: readonly RouteDoc[] = [
   ...workbenchDocs,
   ...shareDocs,
   ...commentDocs,
+  ...conversationDocs,
 ];
 
 /** Tags in the order the document and the reference page list them, each with a line of its own. */
@@ -45,6 +47,8 @@ export const ROUTE_TAGS: ReadonlyArray<{ name: string; description: string }> = 
   { name: 'Session', description: 'Signing in and out in a browser.' },
   { name: 'Exchange', description: 'Parts offered and wanted, and messages.' },
   { name: 'Comments', description: 'Questions and remarks on published builds.' },
+  { name: 'Review threads', description: 'A build’s maker and the moderators, talking about its review.' },
+  { name: 'Follows and notifications', description: 'Following builds, parts and makers; what you are told; mail choices.' },
   { name: 'Links and feeds', description: 'Share cards, Atom feeds, the sitemap and robots.txt.' },
   { name: 'Review', description: 'Moderation: the queue, decisions, reports and the audit log.' },
   { name: 'Admin', description: 'User roles and suspensions.' },

@@ -15,6 +15,9 @@ export function presentComment(
     author: { id: c.authorId, login: authors.get(c.authorId) ?? 'a former maker' },
     body: c.body,
     createdAt: c.createdAt.toISOString(),
-    abilities: { hide: can(viewer, 'comment.hide', { authorIds: [c.authorId, buildOwnerId] }) },
+    abilities: {
+      hide: can(viewer, 'comment.hide', { authorIds: [c.authorId, buildOwnerId] }),
+      report: can(viewer, 'content.create') && viewer?.id !== c.authorId,
+    },
   };
 }

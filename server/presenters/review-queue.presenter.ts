@@ -85,12 +85,13 @@ export function presentQueuePart(p: Part, author: ReviewAuthorDto | null): Queue
 }
 
 /** An open report with a label for what it points at. */
-export function presentQueueReport(r: Report, reporter: ReviewAuthorDto, targetLabel: string): QueueReportDto {
+export function presentQueueReport(r: Report, reporter: ReviewAuthorDto, target: { label: string; path: string | null }): QueueReportDto {
   return {
     id: r.id,
     targetType: r.targetType,
     targetId: r.targetId,
-    targetLabel,
+    targetLabel: target.label,
+    targetPath: target.path,
     reason: r.reason,
     note: r.note,
     reporter,

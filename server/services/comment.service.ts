@@ -1,5 +1,5 @@
 // Comments on published builds: any signed-in maker writes one (Markdown, shown with the site's safe
-// renderer), the build's owner gets a mail, moderators hide one with a note (kept on the audit trail);
+// renderer), the build's owner is notified (and mailed unless they turned comment mail off), moderators hide one with a note (kept on the audit trail);
 // hidden comments are gone from the list for everyone.
 import type { Actor } from '@shared/policies.ts';
 import type { BuildCommentDto, CreateCommentInput, HideCommentInput } from '@shared/schemas/comment.ts';
@@ -10,8 +10,8 @@ import { authorize } from '../policies/authorize.ts';
 import { ConflictError, NotFoundError } from '../errors.ts';
 import { presentComment } from '../presenters/comment.presenter.ts';
 import { loadBuildForView } from './build-access.ts';
-import { enqueueMail, kickOutbox } from './outbox.service.ts';
-import { noticeMail } from './review-mails.ts';
+import { kickOutbox } from './outbox.service.ts';
+import { tell } from './news.service.ts';
 import { recordAudit } from './audit.service.ts';
 
 /** Most comments a build page lists (the newest are kept; older ones stay in the database). */
@@ -22,6 +22,14 @@ async function publishedBuild(actor: Actor | null, buildId: number): Promise<Bui
   const build = await loadBuildForView(actor, buildId);
   if (build.status !== 'published') throw new ConflictError('Only published builds take comments.', 'build_not_published');
   return build;
+}
+
+/** A comment anyone who can see its build sees (not hidden, on a published build); 404 otherwise. */
+export async function visibleComment(actor: Actor | null, commentId: number): Promise<BuildComment> {
+  const c = await BuildComment.findByPk(commentId, { attributes: ['id', 'buildId', 'authorId', 'hiddenAt'] });
+  if (!c || c.hiddenAt) throw new NotFoundError('No such comment.');
+  await publishedBuild(actor, c.buildId);
+  return c;
 }
 
 export async function listComments(actor: Actor | null, buildId: number): Promise<BuildCommentDto[]> {
@@ -44,24 +52,19 @@ export async function createComment(actor: Actor | null, buildId: number, input:
   const login = (await User.findByPk(actor.id, { attributes: ['login'] }))?.login ?? 'A maker';
   const comment = await Build.sequelize!.transaction(async (transaction) => {
     const c = await BuildComment.create({ buildId, authorId: actor.id, body: input.body }, { transaction });
-    if (build.ownerId !== actor.id) {
-      const owner = await User.findByPk(build.ownerId, { attributes: ['id', 'login', 'email', 'mailOptOut'], transaction });
-      if (owner) {
-        const excerpt = input.body.length > 600 ? `${input.body.slice(0, 600)}…` : input.body;
-        await enqueueMail(
-          owner,
-          noticeMail({
-            subject: `${login} commented on ${build.title}`,
-            greeting: owner.login,
-            lines: [`${login} commented on your build “${build.title}”:`, excerpt],
-            note: null,
-            path: `/builds/${build.id}#comment-${c.id}`,
-            linkText: 'Read and answer',
-          }),
-          { essential: false, transaction },
-        );
-      }
-    }
+    const excerpt = input.body.length > 600 ? `${input.body.slice(0, 600)}…` : input.body;
+    await tell(
+      [build.ownerId],
+      {
+        kind: 'comment',
+        text: `${login} commented on your build “${build.title}”`,
+        more: [excerpt],
+        path: `/builds/${build.id}#comment-${c.id}`,
+        subject: `${login} commented on ${build.title}`,
+        linkText: 'Read and answer',
+      },
+      { except: actor.id, mailKind: 'comments', transaction },
+    );
     return c;
   });
   kickOutbox();

@@ -5,6 +5,7 @@ import { Photo } from '../models/photo.model.ts';
 import { Build } from '../models/build.model.ts';
 import { NotFoundError } from '../errors.ts';
 import { loadBuildForEdit, markEdited } from './build-access.ts';
+import { announceEntry } from './news.service.ts';
 import { presentPhoto } from '../presenters/photo.presenter.ts';
 
 async function present(entry: LogEntry): Promise<LogEntryDto> {
@@ -30,6 +31,7 @@ export async function createEntry(actor: Actor | null, buildId: number, input: C
     const build = await loadBuildForEdit(actor, buildId, transaction);
     const e = await LogEntry.create({ buildId, ...input }, { transaction });
     await markEdited(build, transaction);
+    await announceEntry(build, e, transaction);
     return e;
   });
   return present(entry);

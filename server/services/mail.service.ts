@@ -6,6 +6,8 @@ export interface OutgoingMail {
   subject: string;
   text: string;
   html: string;
+  /** Extra headers (List-Unsubscribe, RFC 8058). */
+  headers?: Record<string, string>;
 }
 
 /** What one send came to; a failure carries its error so the outbox can log it and retry. */

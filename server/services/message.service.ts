@@ -34,7 +34,7 @@ async function notify(
       path: `/inbox/${threadId}`,
       linkText: 'Read and reply',
     }),
-    { essential: true, transaction },
+    { essential: true, kind: 'messages', transaction },
   );
 }
 

@@ -6,9 +6,12 @@ import { OutboxMail } from '../models/outbox-mail.model.ts';
 import { User } from '../models/user.model.ts';
 import type { Logger } from '../logger.ts';
 import type { Mailer, OutgoingMail } from './mail.service.ts';
+import { mailKindLabels, type MailKind } from '@shared/schemas/mail-choices.ts';
+import { unsubscribeLinks, wantsMail } from './mail-choices.service.ts';
 
-/** Placeholder for the app's public address; the worker fills it in at send time. */
-export const APP_URL = '{{APP_URL}}';
+import { APP_URL } from './outbox-placeholders.ts';
+
+export { APP_URL };
 /** After this many failed sends a mail is given up: listed for admins, counted in /metrics, re-queued by hand. */
 export const MAX_ATTEMPTS = 8;
 /** Mails claimed per concurrent send in one batch: small, so other instances share a backlog. */
@@ -38,18 +41,41 @@ async function recipientKind(address: string): Promise<string> {
   return user ? user.role : 'no-account';
 }
 
+const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
+
 /**
  * Queue a mail in the caller's transaction, so it exists exactly when the decision does.
- * `essential` mail (about the recipient's own builds) ignores the opt-out; the rest respects it.
+ * `essential` mail (about the recipient's own builds) ignores the opt-out from non-essential mail; the rest respects it.
+ * A mail of a `kind` is not queued when the recipient turned that kind off, and carries a one-click unsubscribe
+ * (List-Unsubscribe and List-Unsubscribe-Post headers, RFC 8058 §3.1) and a footer link to the same choice.
  */
 export async function enqueueMail(
-  recipient: { email: string | null; mailOptOut: boolean },
+  recipient: { id?: number; email: string | null; mailOptOut: boolean },
   mail: Omit<OutgoingMail, 'to'>,
-  opts: { essential: boolean; transaction?: Transaction },
+  opts: { essential: boolean; kind: MailKind | null; transaction?: Transaction },
 ): Promise<boolean> {
   if (!recipient.email || (!opts.essential && recipient.mailOptOut)) return false;
+  let { text, html } = mail;
+  let headers: Record<string, string> | null = null;
+  if (opts.kind && recipient.id) {
+    if (!(await wantsMail(recipient.id, opts.kind, opts.transaction))) return false;
+    const links = await unsubscribeLinks(recipient.id, opts.kind, opts.transaction);
+    if (links) {
+      headers = { 'List-Unsubscribe': `<${links.oneClick}>`, 'List-Unsubscribe-Post': 'List-Unsubscribe=One-Click' };
+      const what = mailKindLabels[opts.kind].title.toLowerCase();
+      text += `\n\nStop mails about ${what}: ${links.page}`;
+      html += `<p style="color:#4A525C;font-size:12px"><a href="${links.page}">Stop mails about ${escapeHtml(what)}</a></p>`;
+    }
+  }
   await OutboxMail.create(
-    { toAddress: recipient.email, subject: mail.subject, textBody: mail.text, htmlBody: mail.html, nextAttemptAt: new Date() },
+    {
+      toAddress: recipient.email,
+      subject: mail.subject,
+      textBody: text,
+      htmlBody: html,
+      headers: headers && JSON.stringify(headers),
+      nextAttemptAt: new Date(),
+    },
     { transaction: opts.transaction },
   );
   return true;
@@ -149,7 +175,14 @@ export function startOutboxWorker(mailer: Mailer, opts: OutboxOptions): OutboxWo
   }
 
   async function sendAndRecord(m: OutboxMail): Promise<boolean> {
-    const result = await mailer.send({ to: m.toAddress, subject: fill(m.subject), text: fill(m.textBody), html: fill(m.htmlBody) });
+    const headers = m.headers ? (JSON.parse(fill(m.headers)) as Record<string, string>) : undefined;
+    const result = await mailer.send({
+      to: m.toAddress,
+      subject: fill(m.subject),
+      text: fill(m.textBody),
+      html: fill(m.htmlBody),
+      headers,
+    });
     const attempts = m.attempts + 1;
     const mine = { where: { id: m.id, claimedBy: me } };
     if (result.ok) {

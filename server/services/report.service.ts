@@ -6,6 +6,7 @@ import { getRun } from './run.service.ts';
 import { getPart } from './part.service.ts';
 import { loadBuildForView } from './build-access.ts';
 import { loadListingForView } from './listing-access.ts';
+import { visibleComment } from './comment.service.ts';
 
 /** Each kind of target must exist and be visible to the reporter (404 otherwise). */
 const visibleTarget: Record<ReportTargetType, (actor: Actor, id: number) => Promise<unknown>> = {
@@ -13,6 +14,7 @@ const visibleTarget: Record<ReportTargetType, (actor: Actor, id: number) => Prom
   run: (actor, id) => getRun(actor, id),
   part: (actor, id) => getPart(actor, id),
   listing: (actor, id) => loadListingForView(actor, id),
+  comment: (actor, id) => visibleComment(actor, id),
 };
 
 /** Anyone signed in may report something they can see; moderators work the report on the desk. */

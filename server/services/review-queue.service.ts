@@ -8,6 +8,7 @@ import { Actuator } from '../models/actuator.model.ts';
 import { Part } from '../models/part.model.ts';
 import { Photo } from '../models/photo.model.ts';
 import { LogEntry } from '../models/log-entry.model.ts';
+import { BuildComment } from '../models/build-comment.model.ts';
 import { Report } from '../models/report.model.ts';
 import { User } from '../models/user.model.ts';
 import { authorize } from '../policies/authorize.ts';
@@ -89,25 +90,36 @@ async function queueRuns(runs: CalibrationRun[], author: AuthorOf): Promise<Queu
 
 const DECIDABLE_SQL = RUN_DECIDABLE_BUILD_STATUSES.map((s) => `'${s}'`).join(', ');
 
-/** Labels for what reports point at: one `IN (…)` query per target type. */
-async function targetLabels(reports: Report[]): Promise<(r: Report) => string> {
+/** Labels (and for comments, where they are shown) for what reports point at: one `IN (…)` query per target type. */
+async function targetLabels(reports: Report[]): Promise<(r: Report) => { label: string; path: string | null }> {
   const idsOf = (type: ReportTargetType) => [...new Set(reports.filter((r) => r.targetType === type).map((r) => r.targetId))];
-  const [builds, parts, runs] = await Promise.all([
+  const [builds, parts, runs, comments] = await Promise.all([
     idsOf('build').length ? Build.findAll({ where: { id: idsOf('build') }, attributes: ['id', 'title'] }) : [],
     idsOf('part').length ? Part.findAll({ where: { id: idsOf('part') }, attributes: ['id', 'name'] }) : [],
     idsOf('run').length ? CalibrationRun.findAll({ where: { id: idsOf('run') }, attributes: ['id', 'gainNmPerV'] }) : [],
+    idsOf('comment').length
+      ? BuildComment.findAll({ where: { id: idsOf('comment') }, attributes: ['id', 'buildId', 'authorId', 'body'] })
+      : [],
   ]);
   const title = new Map(builds.map((b) => [b.id, b.title]));
   const name = new Map(parts.map((p) => [p.id, p.name]));
   const gain = new Map(runs.map((r) => [r.id, r.gainNmPerV]));
+  const comment = new Map(comments.map((c) => [c.id, c]));
+  const noPath = (label: string) => ({ label, path: null });
   return ({ targetType: type, targetId: id }) => {
-    if (type === 'build') return title.get(id) ?? `build ${id} (gone)`;
-    if (type === 'part') return name.get(id) ?? `part ${id} (gone)`;
+    if (type === 'build') return noPath(title.get(id) ?? `build ${id} (gone)`);
+    if (type === 'part') return noPath(name.get(id) ?? `part ${id} (gone)`);
     if (type === 'run') {
       const g = gain.get(id);
-      return g !== undefined ? `calibration run ${id} (${Number(g.toPrecision(4))} nm/V)` : `run ${id} (gone)`;
+      return noPath(g !== undefined ? `calibration run ${id} (${Number(g.toPrecision(4))} nm/V)` : `run ${id} (gone)`);
     }
-    return `listing ${id}`;
+    if (type === 'comment') {
+      const c = comment.get(id);
+      if (!c) return noPath(`comment ${id} (gone)`);
+      const excerpt = c.body.length > 120 ? `${c.body.slice(0, 120)}…` : c.body;
+      return { label: `comment: “${excerpt}”`, path: `/builds/${c.buildId}#comment-${c.id}` };
+    }
+    return noPath(`listing ${id}`);
   };
 }
 

@@ -6,6 +6,7 @@ import { CalibrationRun } from '../models/calibration-run.model.ts';
 import { Part } from '../models/part.model.ts';
 import { Listing } from '../models/listing.model.ts';
 import { Report } from '../models/report.model.ts';
+import { BuildComment } from '../models/build-comment.model.ts';
 import { User } from '../models/user.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { ConflictError, NotFoundError } from '../errors.ts';
@@ -16,6 +17,8 @@ import { enqueueMail, kickOutbox } from './outbox.service.ts';
 import { noticeMail } from './review-mails.ts';
 import { invalidateRegistryCounts } from './registry-count-cache.ts';
 import { nameListing, nameRun, RUN_NAME_COLUMNS } from './audit-names.ts';
+import { notify } from './notification.service.ts';
+import { announceCountedRuns, announcePublished } from './news.service.ts';
 
 const notWaiting = (what: string) => new ConflictError(`This ${what} is not waiting for a decision.`, 'not_waiting');
 
@@ -52,6 +55,18 @@ async function reported(report: Report, transaction: Transaction): Promise<{ own
       const listing = await Listing.findByPk(id, { transaction });
       return listing ? { ownerId: listing.ownerId, label: `listing ${await nameListing(listing, transaction)}` } : gone;
     }
+    case 'comment': {
+      const comment = await BuildComment.findByPk(id, { transaction, attributes: ['id', 'authorId', 'buildId'] });
+      if (!comment) return gone;
+      const [author, build] = await Promise.all([
+        User.findByPk(comment.authorId, { transaction, attributes: ['login'] }),
+        Build.findByPk(comment.buildId, { transaction, attributes: ['title'] }),
+      ]);
+      return {
+        ownerId: comment.authorId,
+        label: `comment by ${author?.login ?? 'a former maker'} on “${build?.title ?? 'a deleted build'}”`,
+      };
+    }
   }
 }
 
@@ -66,6 +81,7 @@ export async function decideBuild(actor: Actor | null, buildId: number, input: B
     const editedPublished = build.status === 'published' && build.editedSinceReview;
     if (build.status !== 'submitted' && !editedPublished) throw notWaiting('build');
     const status = BUILD_OUTCOME[input.decision];
+    const firstPublish = status === 'published' && build.publishedAt === null;
     await build.update(
       {
         status,
@@ -78,6 +94,7 @@ export async function decideBuild(actor: Actor | null, buildId: number, input: B
     );
     // Its runs count only while it is published: publishing, returning and declining all move its parts' figures.
     await recomputeBuildParts(build.id, transaction);
+    if (status === 'published' && !editedPublished) await announcePublished(build, firstPublish, transaction);
     await recordAudit(
       me,
       { action: `build.${input.decision}`, targetType: 'build', targetId: build.id, targetLabel: `“${build.title}”`, note: input.note },
@@ -91,6 +108,7 @@ export async function decideBuild(actor: Actor | null, buildId: number, input: B
         decline: [`Your build "${build.title}" was declined.`],
       }[input.decision];
       const subject = { publish: 'published', return: 'returned with notes', decline: 'declined' }[input.decision];
+      await notify([owner.id], { kind: 'review', text: lines[0]!, path: `/builds/${build.id}` }, { transaction });
       await enqueueMail(
         owner,
         noticeMail({
@@ -101,7 +119,7 @@ export async function decideBuild(actor: Actor | null, buildId: number, input: B
           path: `/builds/${build.id}`,
           linkText: 'Open the build',
         }),
-        { essential: true, transaction },
+        { essential: true, kind: 'review', transaction },
       );
     }
     return { id: build.id, status };
@@ -130,6 +148,10 @@ export async function decideRun(actor: Actor | null, runId: number, input: Accep
     await run.update({ status, reviewNote: input.note ?? null, reviewedById: me.id, reviewedAt: new Date() }, { transaction });
     await recomputePartStats(run.partId, transaction);
     const name = await nameRun(run, transaction);
+    if (status === 'accepted' && build.status === 'published') {
+      const title = (await Build.findByPk(build.id, { attributes: ['title'], transaction }))?.title ?? '';
+      await announceCountedRuns([run.id], title, transaction);
+    }
     await recordAudit(
       me,
       { action: `run.${input.decision}`, targetType: 'run', targetId: run.id, targetLabel: name, note: input.note },
@@ -137,6 +159,11 @@ export async function decideRun(actor: Actor | null, runId: number, input: Accep
     );
     const owner = await recipient(run.ownerId, transaction);
     if (owner) {
+      await notify(
+        [owner.id],
+        { kind: 'review', text: `Your calibration run ${name} was ${status}.`, path: `/builds/${run.buildId}` },
+        { transaction },
+      );
       await enqueueMail(
         owner,
         noticeMail({
@@ -151,7 +178,7 @@ export async function decideRun(actor: Actor | null, runId: number, input: Accep
           path: `/builds/${run.buildId}`,
           linkText: 'Open the build',
         }),
-        { essential: false, transaction },
+        { essential: false, kind: 'review', transaction },
       );
     }
     return { id: run.id, status };
@@ -189,7 +216,7 @@ export async function decidePart(actor: Actor | null, partId: number, input: Acc
           path: `/parts/${part.id}`,
           linkText: 'Open the part',
         }),
-        { essential: false, transaction },
+        { essential: false, kind: 'review', transaction },
       );
     }
     return { id: part.id, status };
@@ -229,7 +256,7 @@ export async function decideReport(actor: Actor | null, reportId: number, input:
           path: '/',
           linkText: 'Open Scanwright',
         }),
-        { essential: false, transaction },
+        { essential: false, kind: 'review', transaction },
       );
     }
     return { id: report.id, status };

@@ -23,5 +23,5 @@ export interface BuildCommentDto {
   body: string;
   createdAt: string;
   /** What the viewer may do with it (the server decides; the client only hides controls). */
-  abilities: { hide: boolean };
+  abilities: { hide: boolean; report: boolean };
 }

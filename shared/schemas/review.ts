@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { MAIL_KINDS, type MailKind } from './mail-choices.ts';
 import { multiLine } from './text.ts';
 import type { PlausibilityFlag } from '../review/plausibility.ts';
 import type { RunFitDto, RunKind } from './run.ts';
@@ -33,7 +34,7 @@ export type AcceptRejectInput = z.infer<typeof acceptRejectInput>;
 export const reportDecisionInput = z.strictObject({ decision: z.enum(['resolve', 'dismiss']), note: note.min(1, 'Say what you did.') });
 export type ReportDecisionInput = z.infer<typeof reportDecisionInput>;
 
-export const REPORT_TARGETS = ['build', 'run', 'part', 'listing'] as const;
+export const REPORT_TARGETS = ['build', 'run', 'part', 'listing', 'comment'] as const;
 export type ReportTargetType = (typeof REPORT_TARGETS)[number];
 export const REPORT_REASONS = ['wrong-data', 'spam', 'unsafe', 'offensive', 'duplicate', 'other'] as const;
 export type ReportReason = (typeof REPORT_REASONS)[number];
@@ -68,7 +69,15 @@ export const auditQuery = z.strictObject({
 });
 export type AuditQuery = z.infer<typeof auditQuery>;
 
-export const accountSettingsInput = z.strictObject({ mailOptOut: z.boolean() });
+/** The master switch for non-essential mail, and/or the per-kind choices (kinds not named keep their setting). */
+export const accountSettingsInput = z
+  .strictObject({
+    mailOptOut: z.boolean().optional(),
+    mailChoices: z
+      .strictObject(Object.fromEntries(MAIL_KINDS.map((k) => [k, z.boolean().optional()])) as Record<MailKind, z.ZodOptional<z.ZodBoolean>>)
+      .optional(),
+  })
+  .refine((v) => v.mailOptOut !== undefined || v.mailChoices !== undefined, { message: 'Nothing to change.' });
 export type AccountSettingsInput = z.infer<typeof accountSettingsInput>;
 
 export interface ReviewAuthorDto {
@@ -123,6 +132,8 @@ export interface QueueReportDto {
   targetType: ReportTargetType;
   targetId: number;
   targetLabel: string;
+  /** Where the reported thing is shown, when its type alone does not say (a comment: its build page). */
+  targetPath: string | null;
   reason: ReportReason;
   note: string | null;
   reporter: ReviewAuthorDto;

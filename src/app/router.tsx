@@ -31,6 +31,14 @@ export const router = createBrowserRouter([
             path: 'account',
             lazy: async () => ({ Component: (await import('./routes/account/account-settings.tsx')).AccountSettingsPage }),
           },
+          {
+            path: 'notifications',
+            lazy: async () => ({ Component: (await import('./routes/notifications.tsx')).NotificationsPage }),
+          },
+          {
+            path: 'mail/stop/:userId/:kind/:token',
+            lazy: async () => ({ Component: (await import('./routes/mail-stop.tsx')).MailStopPage }),
+          },
           { path: 'admin', lazy: async () => ({ Component: (await import('./routes/admin/users.tsx')).AdminUsersPage }) },
           { path: 'api-reference', lazy: async () => ({ Component: (await import('./routes/api-reference.tsx')).ApiReferencePage }) },
           workbenchRoutes,

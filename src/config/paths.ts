@@ -21,6 +21,7 @@ export const paths = {
   review: '/review',
   reviewAudit: '/review/audit',
   account: '/account',
+  notifications: '/notifications',
   admin: '/admin',
   apiReference: '/api-reference',
   signIn: (returnTo?: string) => `/auth/github${returnTo ? `?returnTo=${encodeURIComponent(returnTo)}` : ''}`,

@@ -9,6 +9,10 @@ type Row = [visitor: boolean, owner: boolean, otherMaker: boolean, suspendedOwne
 const table: Record<Action, Row> = {
   'content.create': [false, true, true, false, true, true],
   'account.update-settings': [false, true, false, false, false, false],
+  'notification.read': [false, true, false, true, false, false],
+  'follow.manage': [false, true, true, false, true, true],
+  'review-thread.view': [false, true, false, true, true, true],
+  'review-thread.post': [false, true, false, false, true, true],
   'build.edit': [false, true, false, false, false, false],
   'build.view-unpublished': [false, true, false, true, true, true],
   'build.view-review-note': [false, true, false, true, true, true],

@@ -2,7 +2,9 @@ import { parseId } from '@/utils/parse-id.ts';
 import { useQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
 import { ApiError } from '@/lib/api-client.ts';
+import { can } from '@shared/policies.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
+import { toActor } from '@/features/session/to-actor.ts';
 import { buildQueries } from '@/features/builds/api/build-queries.ts';
 import { BuildNotFound } from '@/features/builds/components/read/build-not-found.tsx';
 import { BuildView } from '@/features/builds/components/read/build-view.tsx';
@@ -20,5 +22,15 @@ export function BuildPage() {
     if (build.error instanceof ApiError && build.error.status === 404) return <BuildNotFound signedIn={user !== null} />;
     return <LoadError what="this build" error={build.error} onRetry={() => void build.refetch()} />;
   }
-  return <BuildView build={build.data} viewerIsOwner={user?.id === build.data.owner.id} signedIn={user !== null} />;
+  const owner = user?.id === build.data.owner.id;
+  const moderator = can(toActor(user), 'review.access');
+  return (
+    <BuildView
+      build={build.data}
+      viewerIsOwner={owner}
+      signedIn={user !== null}
+      reviewSide={owner ? 'maker' : moderator ? 'moderator' : null}
+      viewerId={user?.id ?? null}
+    />
+  );
 }

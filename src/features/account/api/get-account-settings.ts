@@ -1,9 +1,12 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { MailChoices } from '@shared/schemas/mail-choices.ts';
 import { api } from '@/lib/api-client.ts';
 
 /** The signed-in person's own settings, and the address mail goes to. */
 export interface AccountSettingsDto {
   mailOptOut: boolean;
+  /** Each kind of mail on or off. */
+  mailChoices: MailChoices;
   email: string | null;
 }
 

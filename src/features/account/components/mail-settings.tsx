@@ -1,10 +1,64 @@
 import { useId } from 'react';
-import { useAccountSettings } from '@/features/account/api/get-account-settings.ts';
+import { MAIL_KINDS, mailKindLabels } from '@shared/schemas/mail-choices.ts';
+import { useAccountSettings, type AccountSettingsDto } from '@/features/account/api/get-account-settings.ts';
 import { useUpdateAccountSettings } from '@/features/account/api/update-account-settings.ts';
+import type { AccountSettingsInput } from '@shared/schemas/review.ts';
+
+function Switch({
+  id,
+  checked,
+  disabled,
+  onChange,
+  title,
+  children,
+}: {
+  id: string;
+  checked: boolean;
+  disabled: boolean;
+  onChange: (on: boolean) => void;
+  title: string;
+  children: React.ReactNode;
+}) {
+  return (
+    <div className="flex items-start gap-3">
+      <input
+        id={id}
+        type="checkbox"
+        role="switch"
+        checked={checked}
+        disabled={disabled}
+        aria-describedby={`${id}-what`}
+        onChange={(e) => onChange(e.target.checked)}
+        className="mt-1 h-5 w-5 shrink-0 accent-copper"
+      />
+      <div>
+        <label htmlFor={id} className="font-medium">
+          {title}
+        </label>
+        <div id={`${id}-what`} className="mt-1 space-y-1 text-sm text-ink-soft">
+          {children}
+        </div>
+      </div>
+    </div>
+  );
+}
+
+/** What the settings will be once the pending change is saved (so switches do not flicker back). */
+function shown(saved: AccountSettingsDto, pending: AccountSettingsInput | undefined): AccountSettingsDto {
+  if (!pending) return saved;
+  return {
+    ...saved,
+    mailOptOut: pending.mailOptOut ?? saved.mailOptOut,
+    mailChoices: {
+      ...saved.mailChoices,
+      ...Object.fromEntries(Object.entries(pending.mailChoices ?? {}).filter(([, v]) => v !== undefined)),
+    },
+  };
+}
 
 /**
- * The one mail setting: non-essential mail on or off (the inverse of `mailOptOut`), saved as soon
- * as it is switched. Decisions on one's builds are always sent.
+ * Mail choices, each saved as soon as it is switched: one switch per kind of mail (the same choice the
+ * one-click link at the foot of every mail turns off), and the master switch for non-essential mail.
  */
 export function MailSettings() {
   const settings = useAccountSettings(true);
@@ -24,7 +78,7 @@ export function MailSettings() {
       </p>
     );
 
-  const wanted = update.isPending && update.variables ? !update.variables.mailOptOut : !settings.data.mailOptOut;
+  const now = shown(settings.data, update.isPending ? update.variables : undefined);
   return (
     <section aria-labelledby={`${id}-title`} className="max-w-2xl rounded-lg border border-rule bg-white p-5">
       <h2 id={`${id}-title`} className="text-lg font-semibold">
@@ -37,33 +91,37 @@ export function MailSettings() {
           </>
         ) : (
           'We have no e-mail address for you, so nothing is sent.'
-        )}
+        )}{' '}
+        Everything below also shows on your notifications page, whatever you choose for mail.
       </p>
-      <div className="mt-4 flex items-start gap-3">
-        <input
+      <fieldset className="mt-4 space-y-4">
+        <legend className="text-sm font-semibold">Which mail</legend>
+        {MAIL_KINDS.map((kind) => (
+          <Switch
+            key={kind}
+            id={`${id}-${kind}`}
+            title={mailKindLabels[kind].title}
+            checked={now.mailChoices[kind]}
+            disabled={update.isPending}
+            onChange={(on) => update.mutate({ mailChoices: { [kind]: on } })}
+          >
+            <p>{mailKindLabels[kind].what}</p>
+          </Switch>
+        ))}
+      </fieldset>
+      <div className="mt-6 border-t border-rule pt-4">
+        <Switch
           id={id}
-          type="checkbox"
-          role="switch"
-          checked={wanted}
+          title="Send me non-essential e-mail"
+          checked={!now.mailOptOut}
           disabled={update.isPending}
-          aria-describedby={`${id}-what`}
-          onChange={(e) => update.mutate({ mailOptOut: !e.target.checked })}
-          className="mt-1 h-5 w-5 shrink-0 accent-copper"
-        />
-        <div>
-          <label htmlFor={id} className="font-medium">
-            Send me non-essential e-mail
-          </label>
-          <div id={`${id}-what`} className="mt-1 space-y-1 text-sm text-ink-soft">
-            <p>
-              Non-essential: decisions on your calibration runs and proposed parts, the outcome of reports you made, and the welcome note.
-            </p>
-            <p>
-              Always sent, whatever you choose here: the review desk’s decisions on your builds (published, returned with notes, declined),
-              because they may ask you to act.
-            </p>
-          </div>
-        </div>
+          onChange={(on) => update.mutate({ mailOptOut: !on })}
+        >
+          <p>
+            Off turns off everything above except the review desk’s decisions on your builds and your builds’ review threads, which may ask
+            you to act, and messages about your listings.
+          </p>
+        </Switch>
       </div>
       <p role="status" className="mt-3 min-h-5 text-sm">
         {update.isPending ? (

@@ -1,5 +1,6 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import type { BuildCommentDto, CreateCommentInput, HideCommentInput } from '@shared/schemas/comment.ts';
+import type { CreateReportInput } from '@shared/schemas/review.ts';
 import { api } from '@/lib/api-client.ts';
 import { buildQueries } from './build-queries.ts';
 
@@ -24,5 +25,13 @@ export function useHideComment(buildId: number) {
     mutationFn: ({ commentId, ...input }: HideCommentInput & { commentId: number }) =>
       api.post<void>(`/api/comments/${commentId}/hide`, input),
     onSuccess: () => qc.invalidateQueries({ queryKey: commentsQuery(buildId).queryKey }),
+  });
+}
+
+/** Report a comment to the moderators (a reason and an optional note). */
+export function useReportComment() {
+  return useMutation({
+    mutationFn: (input: Omit<CreateReportInput, 'targetType'>) =>
+      api.post<{ id: number }>('/api/reports', { ...input, targetType: 'comment' }),
   });
 }

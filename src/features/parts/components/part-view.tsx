@@ -9,6 +9,7 @@ import { PartPhotos } from './part-photos.tsx';
 import { PartRunsPlot } from './part-runs-plot.tsx';
 import { PartRunsTable } from './part-runs-table.tsx';
 import { ReportPartButton } from './report-part-button.tsx';
+import { FollowButton } from '@/components/follow/follow-button.tsx';
 import { PartWorkbenchLinks } from './part-workbench-links.tsx';
 
 /** One part: its figures and plot, the part itself beside its photos and exchange listings, and the runs behind the figures. */
@@ -26,7 +27,12 @@ export function PartView({ part, signedIn }: { part: PartDetailDto; signedIn: bo
           <p className="text-xs font-medium uppercase tracking-wide text-teal-dark">{partCategoryLabels[part.category]}</p>
           <h1 className="text-2xl font-semibold tracking-tight">{part.name}</h1>
         </div>
-        {signedIn && part.status === 'accepted' && <ReportPartButton partId={part.id} partName={part.name} />}
+        {signedIn && part.status === 'accepted' && (
+          <div className="flex flex-wrap items-center gap-2">
+            <FollowButton type="part" id={part.id} signedIn={signedIn} />
+            <ReportPartButton partId={part.id} partName={part.name} />
+          </div>
+        )}
       </header>
       {part.status === 'proposed' && (
         <Notice title="Proposed: waiting for a moderator">

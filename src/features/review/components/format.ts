@@ -43,4 +43,5 @@ export const targetTypeWords: Record<string, string> = {
   listing: 'listing',
   report: 'report',
   user: 'account',
+  comment: 'comment',
 };

@@ -9,6 +9,7 @@ import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { EditorSection } from './editor-section.tsx';
 import { BuildRunFlags } from './build-run-flags.tsx';
 import { errorMessage } from '@/components/ui/form-bits.tsx';
+import { ReviewThread } from '@/components/review-thread/review-thread.tsx';
 
 export const WHAT_HAPPENS_NEXT =
   "A moderator checks the write-up and runs. While it waits you can't edit it; you'll get an e-mail when it is published or returned with notes.";
@@ -69,6 +70,9 @@ export function ReviewSection({ build }: { build: BuildDto }) {
           {errorMessage(error)}
         </p>
       )}
+      <div className="mt-6 border-t border-rule pt-4">
+        <ReviewThread buildId={build.id} side="maker" />
+      </div>
     </EditorSection>
   );
 }

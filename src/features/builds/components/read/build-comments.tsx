@@ -8,7 +8,8 @@ import { Button } from '@/components/ui/button.tsx';
 import { FormError, errorMessage, inputClass } from '@/components/ui/form-bits.tsx';
 import { ApiError } from '@/lib/api-client.ts';
 import { paths } from '@/config/paths.ts';
-import { commentsQuery, useCreateComment, useHideComment } from '../../api/comments.ts';
+import { commentsQuery, useCreateComment, useHideComment, useReportComment } from '../../api/comments.ts';
+import { REPORT_REASONS, reportReasonLabels, type ReportReason } from '@shared/schemas/review.ts';
 
 const failure = (e: unknown) =>
   e instanceof ApiError && e.status === 429
@@ -50,6 +51,64 @@ function HideComment({ buildId, comment }: { buildId: number; comment: BuildComm
   );
 }
 
+/** "Report…" with a reason and an optional note, inline under the comment. */
+function ReportComment({ comment }: { comment: BuildCommentDto }) {
+  const report = useReportComment();
+  const [open, setOpen] = useState(false);
+  const [reason, setReason] = useState<ReportReason | ''>('');
+  const [note, setNote] = useState('');
+  if (report.isSuccess)
+    return (
+      <p role="status" className="mt-2 text-sm text-teal-dark">
+        Thanks: your report is with the moderators.
+      </p>
+    );
+  if (!open)
+    return (
+      <Button variant="ghost" className="text-sm" onClick={() => setOpen(true)}>
+        Report…
+      </Button>
+    );
+  const id = `report-comment-${comment.id}`;
+  return (
+    <form
+      className="mt-2 flex flex-wrap items-end gap-2"
+      onSubmit={(e) => {
+        e.preventDefault();
+        if (reason) report.mutate({ targetId: comment.id, reason, note: note.trim() || undefined });
+      }}
+    >
+      <label htmlFor={`${id}-reason`} className="text-sm">
+        Reason
+        <select
+          id={`${id}-reason`}
+          className={`${inputClass} mt-1`}
+          value={reason}
+          onChange={(e) => setReason(e.target.value as ReportReason)}
+        >
+          <option value="">Choose…</option>
+          {REPORT_REASONS.map((r) => (
+            <option key={r} value={r}>
+              {reportReasonLabels[r]}
+            </option>
+          ))}
+        </select>
+      </label>
+      <label htmlFor={`${id}-note`} className="text-sm">
+        Note for the moderators (optional)
+        <input id={`${id}-note`} className={`${inputClass} mt-1`} value={note} onChange={(e) => setNote(e.target.value)} />
+      </label>
+      <Button type="submit" disabled={!reason || report.isPending}>
+        Send report
+      </Button>
+      <Button variant="ghost" onClick={() => setOpen(false)}>
+        Cancel
+      </Button>
+      <FormError message={report.error ? failure(report.error) : undefined} />
+    </form>
+  );
+}
+
 /** Questions and remarks on a published build: read by anyone, written by signed-in makers. */
 export function BuildComments({ buildId, signedIn }: { buildId: number; signedIn: boolean }) {
   const location = useLocation();
@@ -78,7 +137,10 @@ export function BuildComments({ buildId, signedIn }: { buildId: number; signedIn
                 <span className="font-medium text-ink">{c.author.login}</span> · <span className="num">{formatDate(c.createdAt)}</span>
               </p>
               <Markdown className="max-w-3xl text-sm [&>:first-child]:mt-0!">{c.body}</Markdown>
-              {c.abilities.hide && <HideComment buildId={buildId} comment={c} />}
+              <div className="flex flex-wrap gap-2">
+                {c.abilities.hide && <HideComment buildId={buildId} comment={c} />}
+                {c.abilities.report && <ReportComment comment={c} />}
+              </div>
             </li>
           ))}
         </ol>

@@ -7,6 +7,8 @@ import { LogEntries } from './log-entries.tsx';
 import { PhotoGrid } from '@/components/photos/photo-grid.tsx';
 import { ReviewNotices } from './review-notices.tsx';
 import { BuildComments } from './build-comments.tsx';
+import { FollowButton } from '@/components/follow/follow-button.tsx';
+import { ReviewThread } from '@/components/review-thread/review-thread.tsx';
 
 function Section({ id, title, children }: { id: string; title: string; children: ReactNode }) {
   return (
@@ -21,12 +23,37 @@ function Section({ id, title, children }: { id: string; title: string; children:
 }
 
 /** A whole build as readers see it: header, review notes, write-up, photos, log entries, actuators and runs. */
-export function BuildView({ build, viewerIsOwner, signedIn = false }: { build: BuildDto; viewerIsOwner: boolean; signedIn?: boolean }) {
+export function BuildView({
+  build,
+  viewerIsOwner,
+  signedIn = false,
+  reviewSide = null,
+  viewerId = null,
+}: {
+  build: BuildDto;
+  viewerIsOwner: boolean;
+  signedIn?: boolean;
+  /** The viewer's side of the review thread (the maker or a moderator); null: not shown. */
+  reviewSide?: 'maker' | 'moderator' | null;
+  viewerId?: number | null;
+}) {
   const buildPhotos = build.photos.filter((p) => p.entryId === null);
+  const published = build.status === 'published';
   return (
     <article>
       <BuildHeader build={build} />
+      {published && signedIn && !viewerIsOwner && (
+        <div className="-mt-3 mb-6 flex flex-wrap gap-x-6 gap-y-2">
+          <FollowButton type="build" id={build.id} signedIn={signedIn} />
+          {viewerId !== build.owner.id && <FollowButton type="maker" id={build.owner.id} signedIn={signedIn} label={build.owner.login} />}
+        </div>
+      )}
       <ReviewNotices build={build} viewerIsOwner={viewerIsOwner} />
+      {reviewSide && (
+        <div className="mt-6 rounded-lg border border-rule bg-white p-4">
+          <ReviewThread buildId={build.id} side={reviewSide} />
+        </div>
+      )}
       <Section id="write-up" title="Write-up">
         {build.body.trim() ? (
           <div className="rounded-lg border border-rule bg-white p-4 sm:p-6">
@@ -47,7 +74,7 @@ export function BuildView({ build, viewerIsOwner, signedIn = false }: { build: B
       <Section id="actuators" title="Actuators and calibration runs">
         <ActuatorList actuators={build.actuators} />
       </Section>
-      {build.status === 'published' && (
+      {published && (
         <Section id="comments" title="Comments">
           <BuildComments buildId={build.id} signedIn={signedIn} />
         </Section>

@@ -9,6 +9,7 @@ export const targetTypeLabels: Record<string, string> = {
   report: 'Report',
   listing: 'Listing',
   user: 'Account',
+  comment: 'Comment',
 };
 
 const actionLabels: Record<string, string> = {

@@ -11,6 +11,7 @@ import { formatDate } from '@shared/format/dates.ts';
 import { BuildPhotos } from './build-photos.tsx';
 import { buildChoices, editedChoices } from './decision-choices.ts';
 import { Facts, PanelFrame, PanelSection } from './panel-frame.tsx';
+import { ReviewThread } from '@/components/review-thread/review-thread.tsx';
 
 /** A submitted (or edited published) build: summary, write-up, photos and actuators, then publish / return / decline. */
 export function BuildPanel({ build, edited, onDecided }: { build: QueueBuildDto; edited: boolean; onDecided: (decision: string) => void }) {
@@ -62,6 +63,9 @@ export function BuildPanel({ build, edited, onDecided }: { build: QueueBuildDto;
         </p>
       )}
       {full.data && <BuildDetails build={full.data} />}
+      <div className="border-t border-rule pt-4">
+        <ReviewThread buildId={build.id} side="moderator" />
+      </div>
     </PanelFrame>
   );
 }

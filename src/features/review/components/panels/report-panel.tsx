@@ -1,3 +1,4 @@
+import { Link } from 'react-router-dom';
 import { reportDecisionInput, reportReasonLabels, type QueueReportDto } from '@shared/schemas/review.ts';
 import { useDecideReport } from '@/features/review/api/decide-report.ts';
 import { DecisionForm } from '../decision/decision-form.tsx';
@@ -37,10 +38,16 @@ export function ReportPanel({ report, onDecided }: { report: QueueReportDto; onD
         items={[
           [
             'Reported',
-            <TargetLink key="t" type={report.targetType} id={report.targetId}>
-              {sentenceCase(report.targetLabel)}
-              {report.targetType === 'run' ? ' (its build)' : ''}
-            </TargetLink>,
+            report.targetPath ? (
+              <Link key="t" className="text-copper underline" to={report.targetPath}>
+                {sentenceCase(report.targetLabel)} (on its build; hide it there with a note)
+              </Link>
+            ) : (
+              <TargetLink key="t" type={report.targetType} id={report.targetId}>
+                {sentenceCase(report.targetLabel)}
+                {report.targetType === 'run' ? ' (its build)' : ''}
+              </TargetLink>
+            ),
           ],
           ['Reason', reportReasonLabels[report.reason]],
           [
