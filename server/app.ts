@@ -38,7 +38,7 @@ import { commentRoutes } from './routes/comment.routes.ts';
 import { reviewThreadRoutes } from './routes/review-thread.routes.ts';
 import { followRoutes } from './routes/follow.routes.ts';
 import { notificationRoutes } from './routes/notification.routes.ts';
-import { mailChoiceRoutes } from './routes/mail-choice.routes.ts';
+import { mailChoiceRoutes, ONE_CLICK_UNSUBSCRIBE } from './routes/mail-choice.routes.ts';
 import { photoRoutes } from './routes/photo.routes.ts';
 import { buildRoutes } from './routes/build.routes.ts';
 import { actuatorRoutes } from './routes/actuator.routes.ts';
@@ -161,9 +161,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
     }),
   );
   app.use(compression());
-  // One-click unsubscribe (RFC 8058): the signed link is the credential; mail providers POST it without cookies or Origin.
-  app.use(mailChoiceRoutes());
-  app.use(requireSameOrigin(config.publicUrl));
+  app.use(requireSameOrigin(config.publicUrl, { except: [ONE_CLICK_UNSUBSCRIBE] }));
 
   const dist = resolve(config.clientDist);
   if (existsSync(dist)) {
@@ -199,6 +197,9 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(['/api/workbench', '/api/actuators', '/api/runs'], jsonBody('32mb'));
   app.use('/api/workbench', largeBodies.afterBody);
   app.use(jsonBody('1mb'));
+  // One-click unsubscribe (RFC 8058): the signed link is the credential, so no session or CSRF token; a mail
+  // provider POSTs it from its own servers (and may name its own Origin, hence the exception above).
+  app.use(mailChoiceRoutes());
   const sessions = session({
     name: 'scanwright.sid',
     secret: config.sessionSecret,

@@ -12,8 +12,22 @@ export interface CaughtMail {
   subject: string;
   text: string;
   html: string | null;
+  /** The one-click unsubscribe headers (RFC 8058) as sent, unfolded; null when absent. */
+  listUnsubscribe: string | null;
+  listUnsubscribePost: string | null;
   receivedAt: string;
 }
+
+/** A header's value from the raw header lines, unfolded (RFC 5322 §2.2.3). */
+const headerValue = (lines: ReadonlyArray<{ key: string; line: string }>, key: string): string | null => {
+  const found = lines.find((l) => l.key === key);
+  return found
+    ? found.line
+        .slice(found.line.indexOf(':') + 1)
+        .replace(/\r?\n[ \t]+/g, ' ')
+        .trim()
+    : null;
+};
 
 export interface SmtpCatcher {
   smtpUrl: string;
@@ -64,6 +78,8 @@ export async function startSmtpCatcher(smtpPort: number, inboxPort: number | nul
             subject: parsed.subject ?? '',
             text: parsed.text ?? '',
             html: typeof parsed.html === 'string' ? parsed.html : null,
+            listUnsubscribe: headerValue(parsed.headerLines, 'list-unsubscribe'),
+            listUnsubscribePost: headerValue(parsed.headerLines, 'list-unsubscribe-post'),
             receivedAt: new Date().toISOString(),
           });
           if (messages.length > 500) messages.shift();

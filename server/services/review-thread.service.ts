@@ -66,7 +66,9 @@ export async function getReviewThread(actor: Actor | null, buildId: number): Pro
       at: d.createdAt.getTime(),
     })),
   ];
-  items.sort((a, b) => a.at - b.at);
+  // Times are kept to the second: within one second a decision comes first (a post answers it, not the other way).
+  const second = (ms: number) => Math.floor(ms / 1000);
+  items.sort((a, b) => second(a.at) - second(b.at) || (a.type === b.type ? a.id - b.id : a.type === 'decision' ? -1 : 1));
   return {
     buildId,
     items: items.map(({ at: _at, ...item }) => item),

@@ -38,7 +38,7 @@ describe('comments on a build', () => {
     const list = await request(t.app).get(`/api/builds/${build.id}/comments`);
     expect(list.status).toBe(200);
     expect(list.body.items.map((c: { body: string }) => c.body)).toEqual(['Which **clamp** holds the bar?']);
-    expect(list.body.items[0].abilities).toEqual({ hide: false });
+    expect(list.body.items[0].abilities).toEqual({ hide: false, report: false });
     const mail = await t.mail.waitFor((m) => m.subject.includes('commented on Comment target'));
     expect(mail.to).toContain(`${owner.login}@example.test`);
     expect(mail.text).toContain('Which **clamp** holds the bar?');

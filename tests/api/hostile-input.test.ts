@@ -14,6 +14,7 @@ import { listPartsQuery } from '@shared/schemas/part.ts';
 import { listListingsQuery } from '@shared/schemas/listing.ts';
 import { listUsersQuery } from '@shared/schemas/user.ts';
 import { auditQuery } from '@shared/schemas/review.ts';
+import { notificationsQuery } from '@shared/schemas/notification.ts';
 import { startTestApp } from '../support/test-app.ts';
 import { visitor } from '../support/login.ts';
 import { listRoutes, stateChangingRoutes, type RouteEntry } from '../support/route-table.ts';
@@ -385,6 +386,7 @@ const querySchemas: Record<string, z.ZodObject> = {
   'GET /api/listings': listListingsQuery,
   'GET /api/admin/users': listUsersQuery,
   'GET /api/review/audit': auditQuery,
+  'GET /api/notifications': notificationsQuery,
 };
 function queryRoutes() {
   return listRoutes(t.app).filter((r) => r.method === 'GET' && r.path.startsWith('/api/') && !r.path.includes(':'));

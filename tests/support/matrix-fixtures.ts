@@ -58,6 +58,12 @@ import { Message, MessageThread } from '../../server/models/message.model.ts';
 import { PartPhoto } from '../../server/models/part-photo.model.ts';
 import { ListingPhoto } from '../../server/models/listing-photo.model.ts';
 import { ApiToken } from '../../server/models/api-token.model.ts';
+import { ReviewPost } from '../../server/models/review-post.model.ts';
+import { Follow } from '../../server/models/follow.model.ts';
+import { Notification } from '../../server/models/notification.model.ts';
+import { unsubscribeLinks } from '../../server/services/mail-choices.service.ts';
+import { createReviewPostInput } from '@shared/schemas/review-thread.ts';
+import { markNotificationsReadInput } from '@shared/schemas/notification.ts';
 
 /** Who sends the request: a signed-in user with their agent, or a visitor (user null). */
 export interface Acting {
@@ -73,7 +79,7 @@ export interface CaseContext {
 }
 
 export interface Target {
-  params?: Record<string, number>;
+  params?: Record<string, number | string>;
   /** JSON body; absent for routes that take none. */
   body?: Record<string, unknown>;
   /** Multipart upload instead of JSON (photos, or one image in `field`). */
@@ -1280,6 +1286,91 @@ export const fixtures: Record<string, Fixture> = {
             [starter.id, 'Still there?'],
             [actor.user!.id, 'Yes, two left.'],
           ]);
+        },
+      };
+    },
+  },
+  'POST /api/builds/:buildId/review-thread': {
+    schema: createReviewPostInput,
+    allowed: 'owner',
+    async make({ owner }) {
+      const build = await createBuildRow(owner.id, { status: 'returned' });
+      const posts = () => ReviewPost.findAll({ where: { buildId: build.id } });
+      return {
+        params: { buildId: build.id },
+        body: { body: 'Clamped at 3 mm now; see the new runs.' },
+        state: () => rows(posts()),
+        async changed(res) {
+          expect((await posts()).map((p) => p.body)).toEqual(['Clamped at 3 mm now; see the new runs.']);
+          expect(res.body).toMatchObject({ type: 'post', body: 'Clamped at 3 mm now; see the new runs.' });
+        },
+      };
+    },
+  },
+  'PUT /api/follows/:targetType/:targetId': {
+    allowed: 'other',
+    async make({ owner }) {
+      const build = await createBuildRow(owner.id, { status: 'published' });
+      const follows = () => Follow.findAll({ where: { targetType: 'build', targetId: build.id } });
+      return {
+        params: { targetType: 'build', targetId: build.id },
+        state: () => rows(follows()),
+        async changed(res) {
+          expect((await follows()).length).toBe(1);
+          expect(res.body).toMatchObject({ following: true, followers: 1 });
+        },
+      };
+    },
+  },
+  'DELETE /api/follows/:targetType/:targetId': {
+    allowed: 'other',
+    async make({ owner, actor }) {
+      const build = await createBuildRow(owner.id, { status: 'published' });
+      await Follow.create({ userId: actor.user?.id ?? owner.id, targetType: 'build', targetId: build.id });
+      const follows = () => Follow.findAll({ where: { targetType: 'build', targetId: build.id } });
+      return {
+        params: { targetType: 'build', targetId: build.id },
+        state: () => rows(follows()),
+        async changed() {
+          expect(await follows()).toEqual([]);
+        },
+      };
+    },
+  },
+  'POST /api/notifications/read': {
+    schema: markNotificationsReadInput,
+    allowed: 'owner',
+    async make({ owner, actor }) {
+      const n = await Notification.create({
+        userId: actor.user?.id ?? owner.id,
+        kind: 'comment',
+        text: 'A question on your build',
+        path: '/builds/1',
+      });
+      return {
+        params: {},
+        body: { ids: [n.id] },
+        state: () => rows(Notification.findByPk(n.id)),
+        async changed(res) {
+          expect((await Notification.findByPk(n.id))?.readAt).not.toBeNull();
+          expect(res.body).toEqual({ unread: expect.any(Number) });
+        },
+      };
+    },
+  },
+  // The signed link is the credential: anyone holding it unsubscribes its person (no session, no CSRF token).
+  'POST /api/mail/unsubscribe/:userId/:kind/:token': {
+    allowed: 'owner',
+    async make() {
+      const who = await createUser();
+      const link = (await unsubscribeLinks(who.id, 'comments'))!;
+      const [userId, kind, token] = link.oneClick.split('/').slice(-3);
+      return {
+        params: { userId: userId!, kind: kind!, token: token! },
+        state: () => rows(User.findByPk(who.id, { attributes: ['id', 'mailOff'] })),
+        async changed(res) {
+          expect((await User.findByPk(who.id))?.mailOff).toBe('comments');
+          expect(res.body).toEqual({ kind: 'comments', title: expect.any(String), on: false });
         },
       };
     },

@@ -47,6 +47,12 @@ export function listRoutes(app: Express): RouteEntry[] {
 /** POST, PUT, PATCH and DELETE routes: everything that may change state. */
 export const stateChangingRoutes = (app: Express) => listRoutes(app).filter((r) => STATE_CHANGING.has(r.method));
 
+/**
+ * Routes whose URL carries its own credential (the one-click unsubscribe link, RFC 8058): no session, so no CSRF
+ * token, and other sites' servers (mail providers) POST them by design, so no same-origin check either.
+ */
+export const SIGNED_LINK_ROUTES: ReadonlySet<string> = new Set(['POST /api/mail/unsubscribe/:userId/:kind/:token']);
+
 /** The pure workbench calculations, which store nothing and answer anyone. */
 export const isWorkbench = (key: string) => /^POST \/api\/workbench\/[a-z-]+$/.test(key);
 

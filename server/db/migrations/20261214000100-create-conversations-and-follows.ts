@@ -10,7 +10,8 @@ const userRef = { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references
  * - `follows`: a maker follows a build, a part or another maker;
  * - `notifications`: what each person is told in the app (unread until marked read);
  * - per-kind mail choices (`users.mail_off`, kinds turned off) and the per-user key that signs one-click
- *   unsubscribe links (`users.mail_key`); `mail_outbox.headers` carries List-Unsubscribe (RFC 8058).
+ *   unsubscribe links (`users.mail_key`); `mail_outbox.headers` carries List-Unsubscribe (RFC 8058);
+ * - comments can be reported (`reports.target_type` gains 'comment').
  */
 export const up: Migration = async ({ context: qi }) => {
   await qi.createTable('review_posts', {
@@ -47,8 +48,11 @@ export const up: Migration = async ({ context: qi }) => {
   await qi.addColumn('users', 'mail_off', { type: DataTypes.STRING(100), allowNull: false, defaultValue: '' });
   await qi.addColumn('users', 'mail_key', { type: DataTypes.STRING(64), allowNull: true });
   await qi.addColumn('mail_outbox', 'headers', { type: DataTypes.TEXT, allowNull: true });
+  await qi.changeColumn('reports', 'target_type', { type: DataTypes.ENUM('build', 'run', 'part', 'listing', 'comment'), allowNull: false });
 };
 export const down: Migration = async ({ context: qi }) => {
+  await qi.bulkDelete('reports', { target_type: 'comment' });
+  await qi.changeColumn('reports', 'target_type', { type: DataTypes.ENUM('build', 'run', 'part', 'listing'), allowNull: false });
   await qi.removeColumn('mail_outbox', 'headers');
   await qi.removeColumn('users', 'mail_key');
   await qi.removeColumn('users', 'mail_off');

@@ -20,7 +20,11 @@ function Row({ n, onOpen }: { n: NotificationDto; onOpen: (n: NotificationDto) =
   return (
     <li className={`flex flex-wrap items-baseline gap-x-3 gap-y-1 border-b border-rule px-3 py-3 ${n.read ? '' : 'bg-copper/5'}`}>
       <span className="w-28 shrink-0 text-xs font-medium uppercase tracking-wide text-teal-dark">{kindWords[n.kind]}</span>
-      <Link to={n.path} onClick={() => onOpen(n)} className={`min-w-0 flex-1 hover:underline ${n.read ? 'text-ink-soft' : 'font-medium text-ink'}`}>
+      <Link
+        to={n.path}
+        onClick={() => onOpen(n)}
+        className={`min-w-0 flex-1 hover:underline ${n.read ? 'text-ink-soft' : 'font-medium text-ink'}`}
+      >
         {!n.read && <span className="sr-only">Unread: </span>}
         {n.text}
       </Link>
