@@ -37,12 +37,21 @@ function Item({ item }: { item: ReviewThreadItemDto }) {
 /**
  * The review thread of a build: its maker and the moderators talk about the review, with the desk's decisions
  * in between. Shown to the two sides only (the server answers 404 to anyone else, and this shows nothing then).
+ * `hideWhenEmpty`: where the thread is not the page's point (a published build's page), show it only once it has posts.
  */
-export function ReviewThread({ buildId, side }: { buildId: number; side: 'maker' | 'moderator' }) {
+export function ReviewThread({
+  buildId,
+  side,
+  hideWhenEmpty = false,
+}: {
+  buildId: number;
+  side: 'maker' | 'moderator';
+  hideWhenEmpty?: boolean;
+}) {
   const thread = useQuery(reviewThreadQuery(buildId));
   const post = usePostToReviewThread(buildId);
   const [body, setBody] = useState('');
-  if (thread.isError) return null;
+  if (thread.isError || (hideWhenEmpty && thread.data?.items.length === 0)) return null;
   const submit = (e: FormEvent) => {
     e.preventDefault();
     if (body.trim()) post.mutate({ body }, { onSuccess: () => setBody('') });

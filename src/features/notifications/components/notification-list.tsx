@@ -19,7 +19,7 @@ const kindWords: Record<NotificationKind, string> = {
 function Row({ n, onOpen }: { n: NotificationDto; onOpen: (n: NotificationDto) => void }) {
   return (
     <li className={`flex flex-wrap items-baseline gap-x-3 gap-y-1 border-b border-rule px-3 py-3 ${n.read ? '' : 'bg-copper/5'}`}>
-      <span className="w-28 shrink-0 text-xs font-medium uppercase tracking-wide text-teal-dark">{kindWords[n.kind]}</span>
+      <span className="w-full shrink-0 text-xs font-medium uppercase tracking-wide text-teal-dark sm:w-28">{kindWords[n.kind]}</span>
       <Link
         to={n.path}
         onClick={() => onOpen(n)}

@@ -50,8 +50,8 @@ export function BuildView({
       )}
       <ReviewNotices build={build} viewerIsOwner={viewerIsOwner} />
       {reviewSide && (
-        <div className="mt-6 rounded-lg border border-rule bg-white p-4">
-          <ReviewThread buildId={build.id} side={reviewSide} />
+        <div className="mt-6 rounded-lg border border-rule bg-white p-4 empty:hidden">
+          <ReviewThread buildId={build.id} side={reviewSide} hideWhenEmpty={published} />
         </div>
       )}
       <Section id="write-up" title="Write-up">
