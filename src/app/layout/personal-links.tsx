@@ -35,6 +35,7 @@ export function PersonalLinks() {
                 className={({ isActive }) => (isActive ? 'font-semibold text-copper-dark' : 'text-ink-soft hover:text-copper')}
               >
                 {l.label}
+                {n > 0 && ' '}
                 {n > 0 && (
                   <span className="num ml-1 rounded-full bg-copper px-1.5 py-px text-[11px] font-semibold text-white">
                     {n > 99 ? '99+' : n}
