@@ -46,7 +46,7 @@ export function createPassport(config: Config, log: Logger): PassportStatic {
         )
           .then(async ({ user, created }) => {
             if (created) {
-              await enqueueMail(user, welcomeMail(user.login, APP_URL), { essential: false, kind: null });
+              await enqueueMail(user, welcomeMail(user.login, APP_URL), { essential: false, kind: 'account' });
               kickOutbox();
             }
             done(null, user);

@@ -5,7 +5,7 @@ import { z } from 'zod';
  * one-click link at the foot of every such mail, RFC 8058). `review` is sent even to people who turned off
  * non-essential mail, because a decision on one's own work may ask them to act.
  */
-export const MAIL_KINDS = ['review', 'messages', 'comments', 'follows'] as const;
+export const MAIL_KINDS = ['review', 'messages', 'comments', 'follows', 'account'] as const;
 export type MailKind = (typeof MAIL_KINDS)[number];
 
 export const mailKindLabels: Record<MailKind, { title: string; what: string }> = {
@@ -19,6 +19,7 @@ export const mailKindLabels: Record<MailKind, { title: string; what: string }> =
     title: 'What you follow',
     what: 'New log entries on builds, newly counted runs on parts and new builds by makers you follow.',
   },
+  account: { title: 'About your account', what: 'The welcome note when you first sign in.' },
 };
 
 /** Stored as a comma-separated list of kinds turned off; anything unknown is dropped. */

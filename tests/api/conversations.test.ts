@@ -251,7 +251,7 @@ describe('mail choices', () => {
       .set('X-CSRF-Token', owner.agent.csrf)
       .send({ mailChoices: { comments: false } });
     expect(settings.status, settings.text).toBe(200);
-    expect(settings.body.mailChoices).toEqual({ review: true, messages: true, comments: false, follows: true });
+    expect(settings.body.mailChoices).toEqual({ review: true, messages: true, comments: false, follows: true, account: true });
     const build = await createBuildRow(owner.user.id, { status: 'published' });
     expect((await post(fan.agent, `/api/builds/${build.id}/comments`, { body: 'Nice clamp' })).status).toBe(201);
     expect(await OutboxMail.count({ where: { toAddress: `${owner.user.login}@example.test` } })).toBe(0);
@@ -294,5 +294,13 @@ describe('reports on comments', () => {
       'not_found',
     );
     expect(await Report.count({ where: { targetType: 'comment', targetId: comment.id } })).toBe(1);
+  });
+});
+
+describe('every mail', () => {
+  test('when the tests above have sent decisions, thread posts, follow news and comments, then each mail carries a one-click unsubscribe', async () => {
+    await expect.poll(() => t.mail.messages.length, { timeout: 5000 }).toBeGreaterThan(5);
+    const without = t.mail.messages.filter((m) => m.listUnsubscribePost !== 'List-Unsubscribe=One-Click' || !m.listUnsubscribe);
+    expect(without.map((m) => m.subject)).toEqual([]);
   });
 });

@@ -30,6 +30,8 @@ describe('sign-in through the OAuth stand-in', () => {
     expect(user?.role).toBe('maker');
     const mail = await t.mail.waitFor((m) => m.to.includes(standInEmail(login)));
     expect(mail.subject).toBe('Welcome to Scanwright');
+    expect(mail.listUnsubscribePost).toBe('List-Unsubscribe=One-Click'); // RFC 8058, kind `account`
+    expect(mail.listUnsubscribe).toMatch(/\/api\/mail\/unsubscribe\/\d+\/account\//);
     expect(mail.text).toContain(login);
     expect(mail.html).toContain('Scanwright');
   });
