@@ -1,10 +1,9 @@
-import { useState, type FormEvent } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { MAX_REVIEW_POST_CHARS, type ReviewThreadItemDto } from '@shared/schemas/review-thread.ts';
 import { formatDate } from '@shared/format/dates.ts';
 import { Markdown } from '@/components/ui/markdown.tsx';
-import { Button } from '@/components/ui/button.tsx';
-import { FormError, errorMessage, inputClass } from '@/components/ui/form-bits.tsx';
+import { errorMessage } from '@/components/ui/form-bits.tsx';
+import { MarkdownPostForm } from '@/components/ui/markdown-post-form.tsx';
 import { ApiError } from '@/lib/api-client.ts';
 import { reviewThreadQuery, usePostToReviewThread } from '@/lib/review-thread-queries.ts';
 
@@ -50,12 +49,8 @@ export function ReviewThread({
 }) {
   const thread = useQuery(reviewThreadQuery(buildId));
   const post = usePostToReviewThread(buildId);
-  const [body, setBody] = useState('');
   if (thread.isError || (hideWhenEmpty && thread.data?.items.length === 0)) return null;
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    if (body.trim()) post.mutate({ body }, { onSuccess: () => setBody('') });
-  };
+
   const items = thread.data?.items ?? [];
   const fieldId = `review-post-${buildId}-${side}`;
   return (
@@ -82,23 +77,17 @@ export function ReviewThread({
         </ol>
       )}
       {thread.data?.abilities.post && (
-        <form onSubmit={submit} noValidate className="space-y-2">
-          <label htmlFor={fieldId} className="block text-sm font-medium">
-            {side === 'maker' ? 'Write to the moderators (Markdown)' : 'Write to the maker (Markdown)'}
-          </label>
-          <textarea
-            id={fieldId}
-            rows={3}
-            maxLength={MAX_REVIEW_POST_CHARS}
-            className={inputClass}
-            value={body}
-            onChange={(e) => setBody(e.target.value)}
-          />
-          <FormError message={post.error ? failure(post.error) : undefined} />
-          <Button type="submit" variant="secondary" disabled={!body.trim() || post.isPending}>
-            {post.isPending ? 'Sending…' : 'Send to the thread'}
-          </Button>
-        </form>
+        <MarkdownPostForm
+          id={fieldId}
+          label={side === 'maker' ? 'Write to the moderators (Markdown)' : 'Write to the maker (Markdown)'}
+          maxLength={MAX_REVIEW_POST_CHARS}
+          variant="secondary"
+          pending={post.isPending}
+          error={post.error ? failure(post.error) : undefined}
+          submitLabel="Send to the thread"
+          pendingLabel="Sending…"
+          onPost={(body, stored) => post.mutate({ body }, { onSuccess: stored })}
+        />
       )}
     </section>
   );

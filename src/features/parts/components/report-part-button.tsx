@@ -1,9 +1,10 @@
 import { useRef, useState, type FormEvent } from 'react';
-import { REPORT_REASONS, reportReasonLabels, type ReportReason } from '@shared/schemas/review.ts';
+import type { ReportReason } from '@shared/schemas/review.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { ApiError } from '@/lib/api-client.ts';
 import { useReportPart } from '../api/report-part.ts';
 import { FormError, inputClass } from '@/components/ui/form-bits.tsx';
+import { ReportReasonSelect } from '@/components/ui/report-reason-select.tsx';
 
 const failure = (e: unknown) =>
   e instanceof ApiError && e.status === 429
@@ -61,21 +62,12 @@ export function ReportPartButton({ partId, partName }: { partId: number; partNam
                 <label htmlFor="report-reason" className="mb-1 block text-sm font-medium">
                   Reason
                 </label>
-                <select
+                <ReportReasonSelect
                   id="report-reason"
-                  className={inputClass}
                   value={reason}
-                  aria-invalid={missing && !reason ? true : undefined}
-                  aria-describedby={missing && !reason ? 'report-reason-error' : undefined}
-                  onChange={(e) => setReason(e.target.value as ReportReason)}
-                >
-                  <option value="">Choose…</option>
-                  {REPORT_REASONS.map((r) => (
-                    <option key={r} value={r}>
-                      {reportReasonLabels[r]}
-                    </option>
-                  ))}
-                </select>
+                  onChange={setReason}
+                  errorId={missing && !reason ? 'report-reason-error' : undefined}
+                />
                 {missing && !reason && (
                   <p id="report-reason-error" className="mt-1 text-sm text-danger">
                     Pick a reason.

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from 'react';
+import { useState } from 'react';
 import { useLocation } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { MAX_COMMENT_CHARS, type BuildCommentDto } from '@shared/schemas/comment.ts';
@@ -9,7 +9,9 @@ import { FormError, errorMessage, inputClass } from '@/components/ui/form-bits.t
 import { ApiError } from '@/lib/api-client.ts';
 import { paths } from '@/config/paths.ts';
 import { commentsQuery, useCreateComment, useHideComment, useReportComment } from '../../api/comments.ts';
-import { REPORT_REASONS, reportReasonLabels, type ReportReason } from '@shared/schemas/review.ts';
+import type { ReportReason } from '@shared/schemas/review.ts';
+import { ReportReasonSelect } from '@/components/ui/report-reason-select.tsx';
+import { MarkdownPostForm } from '@/components/ui/markdown-post-form.tsx';
 
 const failure = (e: unknown) =>
   e instanceof ApiError && e.status === 429
@@ -80,19 +82,7 @@ function ReportComment({ comment }: { comment: BuildCommentDto }) {
     >
       <label htmlFor={`${id}-reason`} className="text-sm">
         Reason
-        <select
-          id={`${id}-reason`}
-          className={`${inputClass} mt-1`}
-          value={reason}
-          onChange={(e) => setReason(e.target.value as ReportReason)}
-        >
-          <option value="">Choose…</option>
-          {REPORT_REASONS.map((r) => (
-            <option key={r} value={r}>
-              {reportReasonLabels[r]}
-            </option>
-          ))}
-        </select>
+        <ReportReasonSelect id={`${id}-reason`} className={`${inputClass} mt-1`} value={reason} onChange={setReason} />
       </label>
       <label htmlFor={`${id}-note`} className="text-sm">
         Note for the moderators (optional)
@@ -114,12 +104,6 @@ export function BuildComments({ buildId, signedIn }: { buildId: number; signedIn
   const location = useLocation();
   const comments = useQuery(commentsQuery(buildId));
   const create = useCreateComment(buildId);
-  const [body, setBody] = useState('');
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    if (!body.trim()) return;
-    create.mutate({ body }, { onSuccess: () => setBody('') });
-  };
   const items = comments.data?.items ?? [];
   return (
     <div className="space-y-4">
@@ -146,24 +130,19 @@ export function BuildComments({ buildId, signedIn }: { buildId: number; signedIn
         </ol>
       )}
       {signedIn ? (
-        <form onSubmit={submit} noValidate className="space-y-2 rounded-lg border border-rule bg-white p-4">
-          <label htmlFor="comment-body" className="block text-sm font-medium">
-            Your comment (Markdown)
-          </label>
-          <textarea
-            id="comment-body"
-            rows={4}
-            maxLength={MAX_COMMENT_CHARS}
-            className={inputClass}
-            value={body}
-            onChange={(e) => setBody(e.target.value)}
-            placeholder="Ask about the build, or say what worked for you."
-          />
-          <FormError message={create.error ? failure(create.error) : undefined} />
-          <Button type="submit" disabled={!body.trim() || create.isPending}>
-            {create.isPending ? 'Posting…' : 'Post comment'}
-          </Button>
-        </form>
+        <MarkdownPostForm
+          id="comment-body"
+          label="Your comment (Markdown)"
+          rows={4}
+          maxLength={MAX_COMMENT_CHARS}
+          placeholder="Ask about the build, or say what worked for you."
+          className="space-y-2 rounded-lg border border-rule bg-white p-4"
+          pending={create.isPending}
+          error={create.error ? failure(create.error) : undefined}
+          submitLabel="Post comment"
+          pendingLabel="Posting…"
+          onPost={(body, stored) => create.mutate({ body }, { onSuccess: stored })}
+        />
       ) : (
         <p className="text-sm">
           <a className="text-teal-dark underline" href={paths.signIn(location.pathname)}>
