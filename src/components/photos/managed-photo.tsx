@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import type { AttachedPhotoDto } from '@shared/schemas/attached-photo.ts';
-import { Button } from '@/components/ui/button.tsx';
+import { MoveButtons } from '@/components/photos/move-buttons.tsx';
 import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { PhotoAltEditor } from './photo-alt-editor.tsx';
 import { requestErrorMessage } from './photo-errors.ts';
@@ -50,30 +50,7 @@ export function ManagedPhoto({
           onSave={(alt) => run('saving', () => onSaveAlt(alt))}
         />
         <div className="flex flex-wrap items-center gap-2" aria-live="polite">
-          {count > 1 && (
-            <>
-              <Button
-                id={`photo-${photo.id}-up`}
-                variant="ghost"
-                className="px-2"
-                disabled={index === 0}
-                onClick={() => onMove(-1)}
-                aria-label={`Move photo ${n} earlier`}
-              >
-                ↑ Earlier
-              </Button>
-              <Button
-                id={`photo-${photo.id}-down`}
-                variant="ghost"
-                className="px-2"
-                disabled={index === count - 1}
-                onClick={() => onMove(1)}
-                aria-label={`Move photo ${n} later`}
-              >
-                ↓ Later
-              </Button>
-            </>
-          )}
+          {count > 1 && <MoveButtons photoId={photo.id} n={n} count={count} onMove={onMove} />}
           {busy === 'deleting' ? (
             <p className="text-sm text-ink-soft">Deleting…</p>
           ) : (

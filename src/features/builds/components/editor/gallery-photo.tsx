@@ -1,5 +1,6 @@
 import type { LogEntryDto, PhotoDto } from '@shared/schemas/build.ts';
 import { Button } from '@/components/ui/button.tsx';
+import { MoveButtons } from '@/components/photos/move-buttons.tsx';
 import { useDeletePhoto, useSetCoverPhoto, useUpdatePhoto } from '../../api/photos.ts';
 import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { inputClass } from '@/components/ui/form-bits.tsx';
@@ -75,26 +76,7 @@ export function GalleryPhoto({
           </div>
         )}
         <div className="mt-auto flex flex-wrap gap-2 pt-1">
-          <Button
-            id={`photo-${photo.id}-up`}
-            variant="ghost"
-            className="px-2"
-            disabled={index === 0}
-            onClick={() => onMove(-1)}
-            aria-label={`Move photo ${n} earlier`}
-          >
-            ↑ Earlier
-          </Button>
-          <Button
-            id={`photo-${photo.id}-down`}
-            variant="ghost"
-            className="px-2"
-            disabled={index === count - 1}
-            onClick={() => onMove(1)}
-            aria-label={`Move photo ${n} later`}
-          >
-            ↓ Later
-          </Button>
+          <MoveButtons photoId={photo.id} n={n} count={count} onMove={onMove} />
           {!isCover && (
             <Button
               variant="secondary"
