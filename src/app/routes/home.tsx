@@ -1,6 +1,8 @@
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
+import { MyWork } from '@/features/builds/components/home/my-work.tsx';
+import { UnreadSummary } from '@/features/notifications/components/unread-summary.tsx';
 
 const areas = [
   {
@@ -47,6 +49,11 @@ export function HomePage() {
               Signed in as <span className="font-medium text-ink">{data.user.login}</span>.
             </p>
           )}
+          {data?.user && (
+            <div className="mt-3">
+              <UnreadSummary />
+            </div>
+          )}
         </div>
         <figure className="rounded-lg border border-rule bg-white p-4" aria-label="Example: displacement against drive voltage">
           <svg
@@ -71,6 +78,7 @@ export function HomePage() {
           </figcaption>
         </figure>
       </section>
+      {data?.user && <MyWork />}
       <section aria-labelledby="areas" className="grid gap-4 sm:grid-cols-2">
         <h2 id="areas" className="sr-only">
           Areas

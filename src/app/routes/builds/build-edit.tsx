@@ -6,6 +6,7 @@ import { ApiError } from '@/lib/api-client.ts';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
+import { useScrollToHash } from '@/hooks/use-scroll-to-hash.ts';
 import { buildQueries } from '@/features/builds/api/build-queries.ts';
 import { BuildEditor } from '@/features/builds/components/editor/build-editor.tsx';
 import { CannotEdit, SignInToEdit } from '@/features/builds/components/editor/editor-access.tsx';
@@ -17,6 +18,7 @@ export function BuildEditPage() {
   const { data: session } = useSession();
   const signedIn = Boolean(session?.user);
   const build = useQuery({ ...buildQueries.detail(buildId), enabled: valid && signedIn });
+  useScrollToHash(Boolean(build.data));
 
   if (session && !signedIn) return <SignInToEdit title="Edit build" returnTo={valid ? paths.editBuild(buildId) : paths.myBuilds} />;
   if (!valid || (build.error instanceof ApiError && build.error.status === 404)) return <CannotEdit reason="missing" buildId={buildId} />;

@@ -4,6 +4,7 @@ import { useParams } from 'react-router-dom';
 import { ApiError } from '@/lib/api-client.ts';
 import { can } from '@shared/policies.ts';
 import { useSession } from '@/features/session/api/get-session.ts';
+import { useScrollToHash } from '@/hooks/use-scroll-to-hash.ts';
 import { toActor } from '@/features/session/to-actor.ts';
 import { buildQueries } from '@/features/builds/api/build-queries.ts';
 import { BuildNotFound } from '@/features/builds/components/read/build-not-found.tsx';
@@ -16,6 +17,7 @@ export function BuildPage() {
   const { data: session } = useSession();
   const build = useQuery({ ...buildQueries.detail(id ?? 0), enabled: id !== null && id > 0 });
   const user = session?.user ?? null;
+  useScrollToHash(Boolean(build.data));
   if (id === null || id <= 0) return <BuildNotFound signedIn={user !== null} />;
   if (build.isPending) return <Loading>Loading the build…</Loading>;
   if (build.isError) {

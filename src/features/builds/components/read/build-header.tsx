@@ -17,7 +17,7 @@ export function BuildHeader({ build }: { build: BuildDto }) {
           <div className="flex flex-wrap gap-2">
             {abilities.edit && <LinkButton to={paths.editBuild(build.id)}>Edit build</LinkButton>}
             {abilities.submit && (
-              <LinkButton variant="secondary" to={paths.editBuild(build.id)}>
+              <LinkButton variant="secondary" to={`${paths.editBuild(build.id)}#review`}>
                 Submit for review…
               </LinkButton>
             )}
