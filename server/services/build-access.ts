@@ -36,7 +36,7 @@ export async function loadBuildForEdit(
 /** Builds under review (submitted) or declined are frozen; drafts, returned and published builds can change. */
 export function assertEditable(build: Build): void {
   if (build.status === 'submitted')
-    throw new ConflictError('This build is waiting for review; it can be edited again once a moderator has looked at it.', 'build_locked');
+    throw new ConflictError('This build is pending review; it can be edited again once a moderator has looked at it.', 'build_locked');
   if (build.status === 'declined') throw new ConflictError('This build was declined and can no longer be edited.', 'build_locked');
 }
 

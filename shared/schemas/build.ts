@@ -34,7 +34,7 @@ export const buildStageLabels: Record<BuildStage, string> = {
 };
 export const buildStatusLabels: Record<BuildStatus, string> = {
   draft: 'Draft',
-  submitted: 'Submitted for review',
+  submitted: 'Pending review',
   published: 'Published',
   returned: 'Returned with notes',
   declined: 'Declined',

@@ -30,7 +30,7 @@ export const fitInput = z.strictObject({
   model: z.enum(['intercept', 'origin']).default('intercept'),
 });
 
-/** What the fit API returns (a subset of CalibrationFit; r2 and the %FS figures may be null). */
+/** What the fit API returns (a subset of CalibrationFit; r2 and the % of span figures may be null). */
 export interface FitResultDto {
   n: number;
   gainNmPerV: number;

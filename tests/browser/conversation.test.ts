@@ -72,7 +72,7 @@ describe('journey: talking around a build', () => {
     await thread.getByText('1 µm per division').waitFor();
     await page.screenshot({ path: `${SCREENSHOTS}/conversation-maker-thread-1280.png`, fullPage: true });
     await page.getByRole('button', { name: 'Submit again for review' }).click();
-    await page.getByText('Submitted', { exact: false }).first().waitFor();
+    await page.getByRole('button', { name: 'Submit again for review' }).waitFor({ state: 'detached' });
 
     // The moderator is told, reads the answer on the desk and publishes.
     await as(page, base, 'demo-moderator', '/notifications');

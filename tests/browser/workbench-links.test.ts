@@ -25,7 +25,7 @@ describe('journey: workbench links', () => {
     const { page, context } = browser;
     await page.goto(`${live.baseUrl}/workbench/expected-gain`);
     await page.getByRole('heading', { level: 1, name: 'Expected gain' }).waitFor();
-    await page.getByRole('spinbutton', { name: 'Free length L (mm)', exact: true }).fill('20');
+    await page.getByRole('textbox', { name: 'Free length L (mm)', exact: true }).fill('20');
     await page.getByLabel(/Measured gain/).fill('250');
     await page.waitForURL(/lengthMm=20.*measuredNmPerV=250/);
     // 20 mm × 0.6 mm PZT-5A series bimorph: (3/2)·d31·L²/h² [S: Smits, Dalke & Cooney 1991; calc]
@@ -39,14 +39,14 @@ describe('journey: workbench links', () => {
 
     await page.reload();
     await page.getByRole('heading', { level: 1, name: 'Expected gain' }).waitFor();
-    expect(await page.getByRole('spinbutton', { name: 'Free length L (mm)', exact: true }).inputValue()).toBe('20');
+    expect(await page.getByRole('textbox', { name: 'Free length L (mm)', exact: true }).inputValue()).toBe('20');
     expect(await page.getByLabel(/Measured gain/).inputValue()).toBe('250');
     await expect.poll(() => page.locator('output').first().textContent()).toBe(before);
 
     const shared = await context.newPage();
     await shared.goto(page.url());
     await shared.getByRole('heading', { level: 1, name: 'Expected gain' }).waitFor();
-    expect(await shared.getByRole('spinbutton', { name: 'Free length L (mm)', exact: true }).inputValue()).toBe('20');
+    expect(await shared.getByRole('textbox', { name: 'Free length L (mm)', exact: true }).inputValue()).toBe('20');
     await expect.poll(() => shared.locator('output').first().textContent()).toBe(before);
     await shared.getByRole('button', { name: 'Copy link to this result' }).waitFor();
     await shared.screenshot({ path: `${SCREENSHOTS}/workbench-link-expected-gain.png`, fullPage: true });
@@ -55,7 +55,7 @@ describe('journey: workbench links', () => {
     // A bad param falls back to its default: the page still opens and computes.
     await page.goto(`${live.baseUrl}/workbench/expected-gain?spec.lengthMm=abc&actuator=warp&materialKey=PZT-5H`);
     await page.getByRole('heading', { level: 1, name: 'Expected gain' }).waitFor();
-    expect(await page.getByRole('spinbutton', { name: 'Free length L (mm)', exact: true }).inputValue()).toBe('12');
+    expect(await page.getByRole('textbox', { name: 'Free length L (mm)', exact: true }).inputValue()).toBe('12');
     expect(await page.getByLabel('Piezoceramic').inputValue()).toBe('PZT-5H');
   });
 
@@ -78,8 +78,8 @@ describe('journey: workbench links', () => {
     await page.goto(`${live.baseUrl}/parts/${part.id}`);
     await page.getByRole('navigation', { name: 'Open in the workbench' }).getByRole('link', { name: 'Expected gain' }).click();
     await page.getByRole('heading', { level: 1, name: 'Expected gain' }).waitFor();
-    expect(await page.getByRole('spinbutton', { name: 'Free length L (mm)', exact: true }).inputValue()).toBe('15');
-    expect(await page.getByRole('spinbutton', { name: 'Total thickness h (mm)', exact: true }).inputValue()).toBe('0.5');
+    expect(await page.getByRole('textbox', { name: 'Free length L (mm)', exact: true }).inputValue()).toBe('15');
+    expect(await page.getByRole('textbox', { name: 'Total thickness h (mm)', exact: true }).inputValue()).toBe('0.5');
   });
 
   test('when a maker saves the mixer result onto an XY pair, then the build page shows the drive matrix and its region', async () => {

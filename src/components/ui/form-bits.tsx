@@ -1,5 +1,6 @@
 // The one form kit of the app: the input look, a labelled field with hint and error, the aria wiring,
 // form-level errors, and how the server's field issues land on a react-hook-form form.
+import { parseNumber } from '@/lib/csv/number-text.ts';
 import type { ComponentProps, ReactNode } from 'react';
 import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
 import { ApiError } from '@/lib/api-client.ts';
@@ -164,7 +165,8 @@ export function applyServerErrors<T extends FieldValues>(error: unknown, setErro
   }
 }
 
-/** An empty field becomes null (a number field the maker left blank). */
-export const numberOrNull = (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(v));
+/** An empty field becomes null (a number field the maker left blank); a decimal comma reads as a point. */
+export const numberOrNull = (v: unknown) =>
+  v === '' || v === null || v === undefined ? null : typeof v === 'number' ? v : parseNumber(String(v));
 /** An empty text field becomes undefined, so the server stores nothing rather than "". */
 export const textOrUndefined = (v: unknown) => (typeof v === 'string' && v.trim() === '' ? undefined : v);

@@ -1,4 +1,6 @@
+import { useEffect } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
+import { currencyOfRegionText, defaultCurrency } from '@shared/exchange/currency-by-region.ts';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import {
@@ -30,8 +32,9 @@ export function ListingForm({
     register,
     handleSubmit,
     setError,
+    setValue,
     control,
-    formState: { errors, isSubmitting },
+    formState: { errors, isSubmitting, dirtyFields },
   } = useForm<Values, unknown, CreateListingInput>({
     resolver: zodResolver(createListingInput),
     defaultValues: {
@@ -40,7 +43,7 @@ export function ListingForm({
       condition: 'salvaged-tested',
       priceKind: 'free',
       priceAmount: null,
-      currency: 'EUR',
+      currency: defaultCurrency('', navigator.languages),
       region: '',
       shipsTo: '',
       notes: '',
@@ -48,6 +51,12 @@ export function ListingForm({
     },
   });
   const priceKind = useWatch({ control, name: 'priceKind' });
+  // On a new listing the currency follows a country named in the region ("Leeds, UK") until the maker picks one.
+  const region = useWatch({ control, name: 'region' });
+  const fromRegion = currencyOfRegionText(region ?? '');
+  useEffect(() => {
+    if (fromRegion && !dirtyFields.currency && !defaults?.currency) setValue('currency', fromRegion);
+  }, [fromRegion, dirtyFields.currency, defaults?.currency, setValue]);
   const text = { setValueAs: textOrUndefined };
 
   const submit = handleSubmit(async (values) => {

@@ -37,7 +37,7 @@ export function PriceFields({
             id="listing-amount"
             label="Amount"
             error={amountError}
-            type="number"
+            type="text"
             inputMode="decimal"
             min={0}
             step="0.01"

@@ -90,7 +90,7 @@ export function ProposePartForm({ onPropose }: { onPropose: (input: ProposePartI
                 label={`${g.label} (${g.unit === 'mm' ? 'mm' : 'count'})`}
                 hint={g.hint}
                 error={errors[g.key] && (g.unit === 'mm' ? 'A positive size in mm.' : 'A whole number of layers.')}
-                type="number"
+                type="text"
                 inputMode="decimal"
                 min={0}
                 step={g.unit === 'mm' ? 'any' : 1}
@@ -119,7 +119,7 @@ export function ProposePartForm({ onPropose }: { onPropose: (input: ProposePartI
           id="part-capacitance"
           label="Capacitance (nF)"
           error={errors.capacitanceNf && 'A positive value in nF.'}
-          type="number"
+          type="text"
           inputMode="decimal"
           min={0}
           step="any"
@@ -131,7 +131,7 @@ export function ProposePartForm({ onPropose }: { onPropose: (input: ProposePartI
           label="Safe voltage (V)"
           hint="Rated, or what you have driven it at safely."
           error={errors.safeVolts && 'A positive value in V.'}
-          type="number"
+          type="text"
           inputMode="decimal"
           min={0}
           step="any"

@@ -1,10 +1,15 @@
 import { useId, type ReactNode } from 'react';
 import type { FieldValues, Path, UseFormRegisterReturn, UseFormReturn } from 'react-hook-form';
 import { InputField, SelectField } from '@/components/ui/form-bits.tsx';
+import { parseNumber } from '@/lib/csv/number-text.ts';
 
-/** Empty input → undefined (so optional fields stay absent), anything else → a number for zod to judge. */
+/**
+ * Empty input → undefined (so optional fields stay absent), anything else → a number for zod to judge, read by the one
+ * number reader (a decimal point or comma, a true minus sign, e notation). The inputs are text with a decimal keypad,
+ * because a browser's number input drops "4,5" typed under an English locale.
+ */
 export const asNumber = {
-  setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? undefined : typeof v === 'number' ? v : Number(v)),
+  setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? undefined : typeof v === 'number' ? v : parseNumber(String(v))),
 };
 
 interface Chrome {
@@ -22,7 +27,7 @@ export function NumberInput({
   ...chrome
 }: Chrome & { registration: UseFormRegisterReturn; error?: string; step?: string }) {
   return (
-    <InputField id={useId()} error={error} type="number" inputMode="decimal" step={step} className="num" {...chrome} {...registration} />
+    <InputField id={useId()} error={error} type="text" inputMode="decimal" step={step} className="num" {...chrome} {...registration} />
   );
 }
 

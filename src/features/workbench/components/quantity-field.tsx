@@ -43,7 +43,7 @@ export function FormQuantity<T extends FieldValues, O>({
       <div className="flex gap-2">
         <input
           id={id}
-          type="number"
+          type="text"
           inputMode="decimal"
           step="any"
           {...describe(id, error, !!hint)}

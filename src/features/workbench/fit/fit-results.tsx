@@ -2,7 +2,7 @@ import { formatFixed, formatLengthNm, formatR2, formatSig } from '@shared/format
 import { Gain, Headline, Quantity, ResultPanel, ResultRow } from '../components/results.tsx';
 import type { FitCalculation } from './fit-form.ts';
 
-const pct = (v: number | null) => ({ value: formatSig(v, 3), unit: '%FS' });
+const pct = (v: number | null) => ({ value: formatSig(v, 3), unit: '% of span' });
 
 /** Gain with its 95 % interval and the quality figures of a calibration run. */
 export function FitResults({ fit }: { fit: FitCalculation }) {

@@ -13,7 +13,7 @@ export function GainMatrixFields({ form }: { form: MixingFormApi }) {
   const errors = cells.map((c) => errorOf(form, c.name)).filter(Boolean);
   const input = (i: number) => (
     <input
-      type="number"
+      type="text"
       inputMode="decimal"
       step="any"
       aria-label={`${cells[i].label} (nm/V)`}

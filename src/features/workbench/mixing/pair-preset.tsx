@@ -22,7 +22,7 @@ export function PairPreset({ form }: { form: MixingFormApi }) {
           </label>
           <input
             id={id}
-            type="number"
+            type="text"
             inputMode="decimal"
             step="any"
             value={g}

@@ -14,7 +14,7 @@ import { errorMessage } from '@/components/ui/form-bits.tsx';
 
 const CalibrationChart = lazy(async () => ({ default: (await import('@/components/charts/calibration-chart.tsx')).CalibrationChart }));
 const STATUS: Record<RunDto['status'], [BadgeTone, string]> = {
-  pending: ['info', 'Waiting for review'],
+  pending: ['info', 'Pending review'],
   accepted: ['success', 'Accepted'],
   rejected: ['danger', 'Rejected'],
 };

@@ -34,7 +34,7 @@ export function BuildHeader({ build }: { build: BuildDto }) {
           <UserBadge login={build.owner.login} name={build.owner.name} />
           <span>
             <span className="text-ink-soft">by</span> <span className="font-medium">{build.owner.login}</span>
-            {build.owner.name && <span className="text-ink-soft"> ({build.owner.name})</span>}
+            {build.owner.name && build.owner.name !== build.owner.login && <span className="text-ink-soft"> ({build.owner.name})</span>}
           </span>
         </span>
       </div>

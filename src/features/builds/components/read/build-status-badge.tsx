@@ -2,7 +2,7 @@ import { buildStatusLabels, type BuildStatus } from '@shared/schemas/build.ts';
 import { StatusBadge } from '@/components/ui/status-badge.tsx';
 import { buildStatusTone } from './format.ts';
 
-/** Draft / Submitted for review / Published / Returned with notes / Declined. */
+/** Draft / Pending review / Published / Returned with notes / Declined. */
 export function BuildStatusBadge({ status }: { status: BuildStatus }) {
   return <StatusBadge tone={buildStatusTone[status]}>{buildStatusLabels[status]}</StatusBadge>;
 }

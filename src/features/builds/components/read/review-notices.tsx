@@ -34,7 +34,7 @@ export function ReviewNotices({ build, viewerIsOwner }: { build: BuildDto; viewe
   }
   if (build.status === 'submitted' && viewerIsOwner) {
     notices.push(
-      <Notice key="submitted" title="Submitted for review">
+      <Notice key="submitted" title="Pending review">
         <p>A moderator will look at it. Until then it cannot be edited, and only you and moderators can see it.</p>
       </Notice>,
     );

@@ -47,9 +47,9 @@ export function RunCards({
               <dt className="text-ink-soft">Residual SD</dt>
               <dd className="num">{f.residualNm} nm</dd>
               <dt className="text-ink-soft">Nonlinearity</dt>
-              <dd className="num">{f.nonlinearityPct} % FS</dd>
+              <dd className="num">{f.nonlinearityPct} % of span</dd>
               <dt className="text-ink-soft">Hysteresis</dt>
-              <dd className="num">{f.hysteresisPct} % FS</dd>
+              <dd className="num">{f.hysteresisPct} % of span</dd>
               <dt className="text-ink-soft">Points</dt>
               <dd className="num">{f.n}</dd>
               <dt className="text-ink-soft">Method</dt>

@@ -38,8 +38,8 @@ export function RunTable({
             <th className={`${head} text-right`}>Gain ± (nm/V)</th>
             <th className={`${head} text-right`}>R²</th>
             <th className={`${head} text-right`}>Residual SD (nm)</th>
-            <th className={`${head} text-right`}>Nonlinearity (% FS)</th>
-            <th className={`${head} text-right`}>Hysteresis (% FS)</th>
+            <th className={`${head} text-right`}>Nonlinearity (% of span)</th>
+            <th className={`${head} text-right`}>Hysteresis (% of span)</th>
             <th className={`${head} text-right`}>n</th>
             <th className={head}>Method</th>
             <th className={head}>Review</th>

@@ -13,8 +13,8 @@ export const queueLabels: Record<QueueKind, string> = {
 };
 
 export const emptyQueueText: Record<QueueKind, string> = {
-  builds: 'No build is waiting for review.',
-  runs: 'No calibration run is waiting for review.',
+  builds: 'No build is pending review.',
+  runs: 'No calibration run is pending review.',
   parts: 'No proposed part is waiting.',
   reports: 'No report is open.',
   edited: 'No published build has been edited since its review.',
