@@ -44,7 +44,7 @@ export function QueueList({
       ) : (
         <>
           <p id={`${id}-hint`} className="mb-2 text-xs text-ink-soft">
-            Oldest first. In the list, j / k or ↓ / ↑ move between items.
+            Oldest first.<span className="pointer-coarse:hidden"> In the list, j / k or ↓ / ↑ move between items.</span>
           </p>
           <ul className="space-y-2" aria-describedby={`${id}-hint`} onKeyDown={handleKeyDown}>
             {entries.map((entry) => (
