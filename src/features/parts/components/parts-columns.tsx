@@ -9,6 +9,8 @@ declare module '@tanstack/react-table' {
   interface ColumnMeta<TData extends RowData, TValue> {
     /** Right-aligned figures. */
     numeric?: boolean;
+    /** Left out of the table on a phone; the name cell repeats it in a line of its own. */
+    phoneHidden?: boolean;
   }
 }
 
@@ -41,7 +43,7 @@ export const partColumns = [
     header: 'Part',
     sortDescFirst: false,
     cell: (c) => (
-      <div className="w-40 sm:w-auto sm:min-w-48">
+      <div className="md:min-w-48">
         <Link
           to={paths.part(c.row.original.id)}
           className="font-medium text-copper-dark underline decoration-copper/40 underline-offset-2 hover:decoration-copper"
@@ -49,6 +51,16 @@ export const partColumns = [
           {c.getValue()}
         </Link>
         {c.row.original.salvageSource && <p className="mt-0.5 line-clamp-1 text-xs text-ink-soft">from {c.row.original.salvageSource}</p>}
+        <p className="mt-0.5 text-xs text-ink-soft md:hidden">
+          {partCategoryLabels[c.row.original.category]} · <span className="num">{c.row.original.acceptedRunCount}</span>{' '}
+          {c.row.original.acceptedRunCount === 1 ? 'run' : 'runs'} · <span className="num">{c.row.original.buildCount}</span>{' '}
+          {c.row.original.buildCount === 1 ? 'build' : 'builds'} ·{' '}
+          {c.row.original.safeVolts === null ? (
+            'voltage unknown'
+          ) : (
+            <span className="num">{formatShort(c.row.original.safeVolts)} V safe</span>
+          )}
+        </p>
       </div>
     ),
   }),
@@ -56,6 +68,7 @@ export const partColumns = [
     id: 'category',
     header: 'Category',
     enableSorting: false,
+    meta: { phoneHidden: true },
     cell: (c) => <span className="whitespace-nowrap">{partCategoryLabels[c.getValue()]}</span>,
   }),
   col.accessor('gainMedianNmPerV', {
@@ -82,21 +95,21 @@ export const partColumns = [
     id: 'runs',
     header: 'Accepted runs',
     sortDescFirst: true,
-    meta: { numeric: true },
+    meta: { numeric: true, phoneHidden: true },
     cell: (c) => <span className="num">{c.getValue()}</span>,
   }),
   col.accessor('buildCount', {
     id: 'builds',
     header: 'Builds',
     enableSorting: false,
-    meta: { numeric: true },
+    meta: { numeric: true, phoneHidden: true },
     cell: (c) => <span className="num">{c.getValue()}</span>,
   }),
   col.accessor('safeVolts', {
     id: 'volts',
     header: 'Safe voltage',
     enableSorting: false,
-    meta: { numeric: true },
+    meta: { numeric: true, phoneHidden: true },
     cell: (c) =>
       c.getValue() === null ? (
         <span className="text-ink-soft">unknown</span>

@@ -3,8 +3,9 @@ import type { PartListDto, PartListItemDto } from '@shared/schemas/part.ts';
 import { partColumns, toSortParam, toSortingState } from './parts-columns.tsx';
 import type { PartSearch } from './use-part-search.ts';
 
-/** The part's name stays in view while the figures scroll sideways on a phone. */
-const STICKY = 'max-md:sticky max-md:left-0 max-md:z-[1] max-md:shadow-[1px_0_0_var(--color-rule)]';
+/** On a phone only the name and the median gain keep columns; the other figures sit in a line under the name. */
+const phone = (h: { column: { columnDef: { meta?: { phoneHidden?: boolean } } } }) =>
+  h.column.columnDef.meta?.phoneHidden ? 'max-md:hidden' : '';
 
 const ariaSort = (h: Header<PartListItemDto, unknown>) => {
   const s = h.column.getIsSorted();
@@ -22,7 +23,7 @@ function HeaderCell({ header }: { header: Header<PartListItemDto, unknown> }) {
       className={
         `whitespace-nowrap border-b-2 border-ink/70 bg-paper-deep px-3 py-2 text-xs font-semibold uppercase ` +
         `tracking-wide text-ink-soft ${numeric ? 'text-right' : 'text-left'} ` +
-        `${header.column.id === 'name' ? STICKY : ''}`
+        `${phone(header)}`
       }
     >
       {header.column.getCanSort() ? (
@@ -65,14 +66,13 @@ export function PartsTable({ data, search, stale }: { data: PartListDto; search:
   });
   return (
     <div>
-      <p className="mb-1 text-xs text-ink-soft md:hidden">Swipe the table sideways for gains, runs and voltages.</p>
       <div
         className={`overflow-x-auto rounded-lg border border-rule bg-white transition-opacity ${stale ? 'opacity-60' : ''}`}
         tabIndex={0}
         role="region"
-        aria-label="Parts, scrolls sideways on narrow screens"
+        aria-label="Parts"
       >
-        <table className="w-full min-w-[44rem] border-collapse text-sm">
+        <table className="w-full border-collapse text-sm md:min-w-[44rem]">
           <caption className="sr-only">Listed parts with pooled figures from accepted calibration runs</caption>
           <thead>
             {table.getHeaderGroups().map((g) => (
@@ -89,7 +89,7 @@ export function PartsTable({ data, search, stale }: { data: PartListDto; search:
                 {row.getVisibleCells().map((cell) => (
                   <td
                     key={cell.id}
-                    className={`px-3 py-2 align-top ${cell.column.columnDef.meta?.numeric ? 'text-right' : ''} ${cell.column.id === 'name' ? `${STICKY} bg-white` : ''}`}
+                    className={`px-3 py-2 align-top ${cell.column.columnDef.meta?.numeric ? 'text-right' : ''} ${phone(cell)}`}
                   >
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>
