@@ -59,9 +59,15 @@ describe('journey: a maker writes a build and submits it for review', () => {
     await page.getByLabel('Instrument kind').selectOption('tunnelling-microscope');
     await page.getByLabel('Stage').selectOption('assembling');
     await page.getByLabel('Summary').fill('A first STM from two record-player cartridge bars.');
-    await page.getByLabel('Write-up', { exact: true }).fill('## Scanner\n\nTwo **cartridge bars** in a V.');
-    await page.getByRole('button', { name: 'Preview' }).click();
-    await page.getByRole('heading', { name: 'Scanner' }).waitFor();
+    await page.getByLabel('Write-up', { exact: true }).fill('Two **cartridge bars** in a V.');
+    // The toolbar makes the line a heading; the rendering beside the text follows as it is typed.
+    await page.getByLabel('Write-up', { exact: true }).press('Control+Home');
+    await page.getByRole('toolbar', { name: 'Write-up: insert' }).getByRole('button', { name: 'Heading' }).click();
+    await expect.poll(() => page.getByLabel('Write-up', { exact: true }).inputValue()).toBe('## Two **cartridge bars** in a V.');
+    await page
+      .getByRole('region', { name: 'Write-up as readers see it' })
+      .getByRole('heading', { name: 'Two cartridge bars in a V.' })
+      .waitFor();
     await page.screenshot({ path: `${SCREENSHOTS}/build-new-1280.png`, fullPage: true });
     await page.getByRole('button', { name: 'Create draft' }).click();
     await page.waitForURL(/\/builds\/\d+\/edit$/);

@@ -1,7 +1,14 @@
 import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
-import { BUILD_STAGES, buildStageLabels, createBuildInput, INSTRUMENT_KINDS, instrumentKindLabels } from '@shared/schemas/build.ts';
+import {
+  BUILD_STAGES,
+  buildStageLabels,
+  createBuildInput,
+  INSTRUMENT_KINDS,
+  instrumentKindLabels,
+  type PhotoDto,
+} from '@shared/schemas/build.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { describe, Field, FormError, inputClass } from '@/components/ui/form-bits.tsx';
 import { MarkdownField } from './markdown-field.tsx';
@@ -16,7 +23,10 @@ export function BuildDetailsForm({
   submitLabel,
   savedMessage,
   onSave,
+  photos,
 }: {
+  /** The build's photos, for the write-up toolbar (none on a new build). */
+  photos?: readonly PhotoDto[];
   defaults?: Partial<BuildDetailsValues>;
   submitLabel: string;
   savedMessage?: string;
@@ -85,7 +95,15 @@ export function BuildDetailsForm({
           {...register('summary')}
         />
       </Field>
-      <MarkdownField id="build-body" label="Write-up" value={body} error={errors.body?.message} rows={12} textarea={register('body')} />
+      <MarkdownField
+        id="build-body"
+        label="Write-up"
+        value={body}
+        error={errors.body?.message}
+        rows={12}
+        textarea={register('body')}
+        photos={photos}
+      />
       <FormError message={errors.root?.server?.message} />
       <div className="flex flex-wrap items-center gap-3">
         <Button type="submit" disabled={isSubmitting}>

@@ -29,6 +29,7 @@ export function BuildEditor({ build }: { build: BuildDto }) {
             }}
             submitLabel="Save details"
             savedMessage="Details saved."
+            photos={build.photos}
             onSave={(values) => update.mutateAsync(values)}
           />
         </EditorSection>

@@ -15,13 +15,14 @@ export function EntriesSection({ build }: { build: BuildDto }) {
       {build.entries.length === 0 && !adding && <p className="mb-3 text-sm text-ink-soft">No log entries yet.</p>}
       <ul className="space-y-3">
         {build.entries.map((e) => (
-          <EntryItem key={e.id} buildId={build.id} entry={e} />
+          <EntryItem key={e.id} buildId={build.id} entry={e} photos={build.photos} />
         ))}
       </ul>
       <div className="mt-3">
         {adding ? (
           <EntryForm
             idPrefix="new-entry"
+            photos={build.photos}
             submitLabel="Add entry"
             onSave={async (values) => {
               await create.mutateAsync(values);

@@ -1,6 +1,6 @@
 import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { createEntryInput, type CreateEntryInput } from '@shared/schemas/build.ts';
+import { createEntryInput, type CreateEntryInput, type PhotoDto } from '@shared/schemas/build.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { describe, Field, FormError, inputClass } from '@/components/ui/form-bits.tsx';
 import { MarkdownField } from './markdown-field.tsx';
@@ -15,7 +15,10 @@ export function EntryForm({
   submitLabel,
   onSave,
   onCancel,
+  photos,
 }: {
+  /** The build's photos, for the text's toolbar. */
+  photos?: readonly PhotoDto[];
   idPrefix: string;
   defaults?: CreateEntryInput;
   submitLabel: string;
@@ -65,7 +68,15 @@ export function EntryForm({
           />
         </Field>
       </div>
-      <MarkdownField id={id('body')} label="Entry text" value={body} error={errors.body?.message} rows={6} textarea={register('body')} />
+      <MarkdownField
+        id={id('body')}
+        label="Entry text"
+        value={body}
+        error={errors.body?.message}
+        rows={6}
+        textarea={register('body')}
+        photos={photos}
+      />
       <FormError message={errors.root?.server?.message} />
       <div className="flex gap-2">
         <Button type="submit" disabled={isSubmitting}>

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { LogEntryDto } from '@shared/schemas/build.ts';
+import type { LogEntryDto, PhotoDto } from '@shared/schemas/build.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Markdown } from '@/components/ui/markdown.tsx';
 import { useDeleteEntry, useUpdateEntry } from '../../api/entries.ts';
@@ -8,7 +8,7 @@ import { EntryForm } from './entry-form.tsx';
 import { errorMessage } from '@/components/ui/form-bits.tsx';
 
 /** One log entry: read it, edit it in place, or delete it. */
-export function EntryItem({ buildId, entry }: { buildId: number; entry: LogEntryDto }) {
+export function EntryItem({ buildId, entry, photos }: { buildId: number; entry: LogEntryDto; photos: readonly PhotoDto[] }) {
   const [editing, setEditing] = useState(false);
   const update = useUpdateEntry(buildId);
   const remove = useDeleteEntry(buildId);
@@ -18,6 +18,7 @@ export function EntryItem({ buildId, entry }: { buildId: number; entry: LogEntry
       <li>
         <EntryForm
           idPrefix={`entry-${entry.id}`}
+          photos={photos}
           defaults={{ entryDate: entry.entryDate, title: entry.title, body: entry.body }}
           submitLabel="Save entry"
           onSave={async (values) => {
