@@ -9,6 +9,8 @@ import { decisionErrorMessage, noteIssue } from './decision-errors.ts';
 export interface DecisionChoice<D extends string> {
   decision: D;
   label: string;
+  /** The words once a note is written, e.g. "Accept with note": the note goes to the maker without refusing anything. */
+  withNoteLabel?: string;
   busyLabel: string;
   variant: 'primary' | 'secondary' | 'danger';
 }
@@ -41,7 +43,7 @@ export function DecisionForm<D extends string>({
   publicNote?: { decision: D; label: string };
   onDecide: (values: Values<D>) => Promise<unknown>;
 }) {
-  const { register, handleSubmit, setValue, setError, formState } = useForm<Values<string>, unknown, Values<D>>({
+  const { register, handleSubmit, setValue, setError, formState, watch } = useForm<Values<string>, unknown, Values<D>>({
     resolver: zodResolver(schema),
     defaultValues: { decision: choices[0].decision, note: '', notePublic: false },
   });
@@ -49,6 +51,7 @@ export function DecisionForm<D extends string>({
   const noteError = formState.errors.note?.message;
   const serverError = formState.errors.root?.server?.message;
   const noteId = `${id}-note`;
+  const hasNote = Boolean(watch('note')?.trim());
 
   const decide = (decision: D) => {
     setValue('decision', decision);
@@ -109,7 +112,7 @@ export function DecisionForm<D extends string>({
       <div className="flex flex-wrap gap-2">
         {choices.map((c) => (
           <Button key={c.decision} variant={c.variant} disabled={busy !== null} onClick={() => decide(c.decision)}>
-            {busy === c.decision ? c.busyLabel : c.label}
+            {busy === c.decision ? c.busyLabel : hasNote && c.withNoteLabel ? c.withNoteLabel : c.label}
           </Button>
         ))}
       </div>

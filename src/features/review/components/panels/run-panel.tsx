@@ -6,7 +6,7 @@ import { paths } from '@/config/paths.ts';
 import { useDecideRun } from '@/features/review/api/decide-run.ts';
 import { DecisionForm } from '../decision/decision-form.tsx';
 import { age } from '../format.ts';
-import { acceptChoices } from './decision-choices.ts';
+import { acceptChoices, RUN_NOTE_HINT } from './decision-choices.ts';
 import { FitTable } from './fit-table.tsx';
 import { FlagList } from './flag-list.tsx';
 import { PanelFrame, PanelSection } from './panel-frame.tsx';
@@ -38,7 +38,7 @@ export function RunPanel({ run, onDecided }: { run: QueueRunDto; onDecided: (dec
           schema={acceptRejectInput}
           choices={acceptChoices}
           noteLabel="Note to the maker"
-          noteHint="Required to reject: say what looks wrong. Only accepted runs count in the part’s statistics."
+          noteHint={RUN_NOTE_HINT}
           onDecide={async (v) => {
             await decide.mutateAsync({ id: run.id, ...v });
             onDecided(v.decision);

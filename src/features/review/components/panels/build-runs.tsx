@@ -1,0 +1,88 @@
+import { lazy, Suspense, useState } from 'react';
+import { acceptRejectInput, type QueueRunDto } from '@shared/schemas/review.ts';
+import { formatPlusMinus } from '@shared/format/measured-number.ts';
+import { runGainPlusMinus, runPrintedFigures } from '@shared/export/run-figures.ts';
+import { Button } from '@/components/ui/button.tsx';
+import { useDecideRun } from '@/features/review/api/decide-run.ts';
+import { DecisionForm } from '../decision/decision-form.tsx';
+import { FlagChips } from '../flag-chips.tsx';
+import { acceptChoices, decidedWords, RUN_NOTE_HINT } from './decision-choices.ts';
+import { RunPointsTable } from './run-points-table.tsx';
+
+const CalibrationChart = lazy(() => import('@/components/charts/calibration-chart.tsx').then((m) => ({ default: m.CalibrationChart })));
+
+/** The build's pending runs, each with its gain and ±, flags, a small plot, its raw points and its own decision. */
+export function BuildRuns({ runs }: { runs: QueueRunDto[] }) {
+  if (runs.length === 0) return <p className="text-sm text-ink-soft">No runs waiting in this build.</p>;
+  return (
+    <ul className="space-y-3">
+      {runs.map((r) => (
+        <BuildRun key={r.id} run={r} />
+      ))}
+    </ul>
+  );
+}
+
+function BuildRun({ run }: { run: QueueRunDto }) {
+  const decide = useDecideRun();
+  const [showPoints, setShowPoints] = useState(false);
+  const [decided, setDecided] = useState<string | null>(null);
+  const pm = runGainPlusMinus(run.fit);
+  const figures = runPrintedFigures(run);
+  const plottable = run.kind === 'points' || run.kind === 'sine-record';
+  const title = `${run.actuatorLabel ?? `${run.axis} axis`} · ${run.part.name}`;
+  return (
+    <li className="rounded-md border border-rule p-3" aria-label={`Run ${run.id}: ${title}`}>
+      <div className="flex flex-wrap items-baseline justify-between gap-x-3 gap-y-1">
+        <h4 className="font-medium">{title}</h4>
+        <p className="num text-sm">
+          <span className="sr-only">Gain </span>
+          {formatPlusMinus(run.fit.gainNmPerV, pm.halfWidth, pm.kind)}
+        </p>
+      </div>
+      <p className="text-xs text-ink-soft">
+        {run.kind} · {run.fit.n} {run.kind === 'sine-record' ? 'samples' : 'points'} · R² {figures.r2} · hysteresis {figures.hysteresisPct}{' '}
+        %
+      </p>
+      <div className="mt-2">{run.flags.length ? <FlagChips flags={run.flags} /> : <p className="text-sm text-ink-soft">No flags.</p>}</div>
+      {plottable && (
+        <div className="mt-2 rounded border border-rule bg-white p-1">
+          <Suspense
+            fallback={
+              <p role="status" className="flex h-[140px] items-center justify-center text-sm text-ink-soft">
+                Loading the plot…
+              </p>
+            }
+          >
+            <CalibrationChart points={run.points} fit={{ interceptNm: run.fit.interceptNm, gainNmPerV: run.fit.gainNmPerV }} height={140} />
+          </Suspense>
+        </div>
+      )}
+      <div className="mt-2">
+        <Button variant="ghost" aria-expanded={showPoints} onClick={() => setShowPoints((s) => !s)}>
+          {showPoints ? 'Hide the raw points' : 'Show the raw points'}
+        </Button>
+        {showPoints && <RunPointsTable runId={run.id} />}
+      </div>
+      <div className="mt-2">
+        {decided ? (
+          <p role="status" className="rounded-md border border-teal/40 bg-teal/5 px-3 py-2 text-sm">
+            {decidedWords[decided]}.
+          </p>
+        ) : (
+          <DecisionForm
+            id={`build-run-${run.id}`}
+            schema={acceptRejectInput}
+            choices={acceptChoices}
+            noteLabel="Note on this run"
+            noteHint={RUN_NOTE_HINT}
+            onDecide={async (v) => {
+              await decide.mutateAsync({ id: run.id, ...v });
+              setDecided(v.decision);
+            }}
+          />
+        )}
+      </div>
+    </li>
+  );
+}
