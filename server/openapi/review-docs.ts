@@ -43,6 +43,16 @@ export const reviewDocs: readonly RouteDoc[] = [
     response: json(200, '`{ buildId, runs, plan: { accept, stayPending } }`.'),
   },
   {
+    method: 'GET',
+    path: '/api/review/builds/:buildId/history',
+    summary: "A build's earlier decisions and notes, and what changed in its write-up and runs since the last review (moderators)",
+    tag: 'Review',
+    auth: 'session-or-token',
+    scope: 'read',
+    params: reviewBuildParams,
+    response: json(200, '`{ buildId, decisions, lastReview, writeUp, runs }`; the last three null before a first review.'),
+  },
+  {
     method: 'POST',
     path: '/api/review/builds/:buildId/publish-with-runs',
     summary: 'Publish a build and accept its runs without flags, in one transaction (moderators)',

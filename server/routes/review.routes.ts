@@ -17,6 +17,7 @@ import { createReport } from '../services/report.service.ts';
 import { publishWithRunsInput, reviewBuildParams, reviewRunParams, runPointsQuery } from '@shared/schemas/review-desk.ts';
 import { getReviewBuildRuns, publishBuildWithRuns } from '../services/review-build.service.ts';
 import { getRunPointsPage } from '../services/review-points.service.ts';
+import { getReviewHistory } from '../services/review-history.service.ts';
 import { route } from './route.ts';
 
 /** The review desk, reports and the audit trail. */
@@ -42,6 +43,13 @@ export function reviewRoutes(config: Config): Router {
     requireUser,
     route({ params: reviewBuildParams }, async ({ actor, params, res }) => {
       res.json(await getReviewBuildRuns(actor, params.buildId));
+    }),
+  );
+  r.get(
+    '/api/review/builds/:buildId/history',
+    requireUser,
+    route({ params: reviewBuildParams }, async ({ actor, params, res }) => {
+      res.json(await getReviewHistory(actor, params.buildId));
     }),
   );
   r.post(

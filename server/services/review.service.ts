@@ -19,6 +19,7 @@ import { invalidateRegistryCounts } from './registry-count-cache.ts';
 import { nameListing, nameRun, RUN_NAME_COLUMNS } from './audit-names.ts';
 import { notify } from './notification.service.ts';
 import { announceCountedRuns, announcePublished } from './news.service.ts';
+import { snapshotReview } from './review-history.service.ts';
 
 const notWaiting = (what: string) => new ConflictError(`This ${what} is not waiting for a decision.`, 'not_waiting');
 
@@ -122,6 +123,8 @@ export async function applyBuildDecision(
   // Its runs count only while it is published: publishing, returning and declining all move its parts' figures.
   await recomputeBuildParts(build.id, transaction);
   if (status === 'published' && !editedPublished) await announcePublished(build, firstPublish, transaction);
+  // What was reviewed, so a resubmission shows what changed since.
+  await snapshotReview(me, build, input.decision, transaction);
   await recordAudit(
     me,
     { action: `build.${input.decision}`, targetType: 'build', targetId: build.id, targetLabel: `“${build.title}”`, note: input.note },

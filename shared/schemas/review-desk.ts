@@ -65,3 +65,51 @@ export interface PublishWithRunsResultDto {
   accepted: Array<{ id: number; name: string }>;
   stayPending: Array<{ id: number; name: string; flags: FlagCode[] }>;
 }
+
+/** One run as a moderator saw it at a build decision. */
+export interface ReviewedRun {
+  id: number;
+  /** The actuator's label (or axis) and the part's name. */
+  actuator: string;
+  /** The gain as every page prints it, with its ± and what the ± is. */
+  gain: string;
+  status: 'pending' | 'accepted' | 'rejected';
+}
+
+/** A piece of the write-up's word diff: unchanged, added or removed text. */
+export interface TextChange {
+  value: string;
+  change: 'same' | 'added' | 'removed';
+}
+
+/** A run's change since the last review: added, removed, changed (gain or status) or the same. */
+export interface RunChange {
+  id: number;
+  actuator: string;
+  change: 'added' | 'removed' | 'changed' | 'same';
+  before: { gain: string; status: ReviewedRun['status'] } | null;
+  after: { gain: string; status: ReviewedRun['status'] } | null;
+}
+
+/** One decision on the build or one of its runs, from the audit trail. */
+export interface ReviewDecisionDto {
+  id: number;
+  action: string;
+  targetType: 'build' | 'run';
+  targetId: number;
+  targetLabel: string | null;
+  moderator: string;
+  note: string | null;
+  createdAt: string;
+}
+
+/** A build's earlier decisions and notes, and what changed in its write-up and runs since the last review. */
+export interface ReviewHistoryDto {
+  buildId: number;
+  decisions: ReviewDecisionDto[];
+  /** The last build decision with a snapshot; null when nobody has reviewed it yet (or before snapshots were kept). */
+  lastReview: { decision: string; moderator: string; at: string } | null;
+  /** Null without a last review. */
+  writeUp: { changed: boolean; changes: TextChange[] } | null;
+  runs: RunChange[] | null;
+}

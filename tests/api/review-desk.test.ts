@@ -195,3 +195,75 @@ describe('accept with note', () => {
     expect(mail.text).toContain(note);
   });
 });
+
+describe('GET /api/review/builds/:buildId/history', () => {
+  test('when a returned build comes back changed, then the history shows the note and the write-up and run list diffs since that review', async () => {
+    const owner = await createUser();
+    const build = await createBuildRow(owner.id, { status: 'submitted' });
+    await build.update({ body: 'Tube scanner on a brass base. Coarse approach by screw.' });
+    const kept = await createRunRow({ buildId: build.id, partId: (await createPart()).id, ownerId: owner.id, gainNmPerV: 40 });
+    const dropped = await createRunRow({ buildId: build.id, partId: (await createPart()).id, ownerId: owner.id, gainNmPerV: 41 });
+    const before = await mod.get(`/api/review/builds/${build.id}/history`);
+    expect(before.body).toEqual({ buildId: build.id, decisions: [], lastReview: null, writeUp: null, runs: null });
+
+    const note = 'Say how the screw is geared.';
+    expect((await post(mod, `/api/review/builds/${build.id}/decision`, { decision: 'return', note })).status).toBe(200);
+    // The maker rewrites a sentence, removes one run, adds another, and submits again.
+    await build.reload();
+    await build.update({ status: 'submitted', body: 'Tube scanner on a brass base. Coarse approach by a 100:1 worm gear.' });
+    await CalibrationRun.destroy({ where: { id: dropped.id } });
+    const added = await createRunRow({ buildId: build.id, partId: (await createPart()).id, ownerId: owner.id, gainNmPerV: 39 });
+
+    const res = await mod.get(`/api/review/builds/${build.id}/history`);
+    expect(res.status).toBe(200);
+    expect(res.body.decisions).toEqual([
+      expect.objectContaining({ action: 'build.return', targetType: 'build', note, moderator: expect.any(String) }),
+    ]);
+    expect(res.body.lastReview).toMatchObject({ decision: 'return' });
+    expect(res.body.writeUp.changed).toBe(true);
+    const pieces = (kind: string) =>
+      res.body.writeUp.changes
+        .filter((c: { change: string }) => c.change === kind)
+        .map((c: { value: string }) => c.value)
+        .join('');
+    expect(pieces('removed')).toContain('screw');
+    expect(pieces('added')).toContain('worm gear');
+    expect(pieces('same')).toContain('Tube scanner on a brass base.');
+    expect(res.body.runs.map((r: { id: number; change: string }) => [r.id, r.change])).toEqual([
+      [kept.id, 'same'],
+      [added.id, 'added'],
+      [dropped.id, 'removed'],
+    ]);
+    expect(res.body.runs[0].after.gain).toMatch(/nm\/V \(95 %\)$/);
+  });
+
+  test('when a published build is edited since review, then the history diffs the edit against what was published', async () => {
+    const owner = await createUser();
+    const build = await createBuildRow(owner.id, { status: 'submitted' });
+    await build.update({ body: 'First write-up.' });
+    const run = await createRunRow({ buildId: build.id, partId: (await createPart()).id, ownerId: owner.id, gainNmPerV: 40 });
+    expect((await post(mod, `/api/review/builds/${build.id}/publish-with-runs`, { acceptRunIds: [run.id] })).status).toBe(200);
+    await build.reload();
+    await build.update({ body: 'First write-up, with the noise floor measured.', editedSinceReview: true });
+    const res = await mod.get(`/api/review/builds/${build.id}/history`);
+    expect(res.body.lastReview).toMatchObject({ decision: 'publish' });
+    expect(
+      res.body.writeUp.changes
+        .filter((c: { change: string }) => c.change === 'added')
+        .map((c: { value: string }) => c.value)
+        .join(''),
+    ).toContain('noise floor');
+    expect(res.body.runs).toEqual([
+      expect.objectContaining({ id: run.id, change: 'same', after: expect.objectContaining({ status: 'accepted' }) }),
+    ]);
+    expect(res.body.decisions.map((d: { action: string }) => d.action)).toEqual(['build.publish', 'run.accept']);
+  });
+
+  test('when a visitor or maker asks, the build is unknown or the id malformed, then 401 / 403 / 404 / 400', async () => {
+    const b = await createBuildRow((await createUser()).id, { status: 'submitted' });
+    expectError(await (await visitor(t)).get(`/api/review/builds/${b.id}/history`), 401, 'unauthorized');
+    expectError(await maker.get(`/api/review/builds/${b.id}/history`), 403, 'forbidden');
+    expectError(await mod.get('/api/review/builds/999999/history'), 404, 'not_found');
+    expectError(await mod.get('/api/review/builds/0/history'), 400, 'validation_failed', 'buildId');
+  });
+});
