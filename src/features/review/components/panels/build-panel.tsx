@@ -6,12 +6,14 @@ import { paths } from '@/config/paths.ts';
 import { useReviewBuild } from '@/features/review/api/get-review-build.ts';
 import { useDecideBuild } from '@/features/review/api/decide-build.ts';
 import { useReviewBuildRuns } from '@/features/review/api/get-review-build-runs.ts';
+import { useReviewHistory } from '@/features/review/api/get-review-history.ts';
 import { DecisionForm } from '../decision/decision-form.tsx';
 import { age, count } from '../format.ts';
 import { formatDate } from '@shared/format/dates.ts';
 import { BuildPhotos } from './build-photos.tsx';
 import { BuildRuns } from './build-runs.tsx';
 import { PublishWithRuns } from './publish-with-runs.tsx';
+import { ReviewHistory } from './review-history.tsx';
 import { buildChoices, editedChoices } from './decision-choices.ts';
 import { Facts, PanelFrame, PanelSection } from './panel-frame.tsx';
 import { ReviewThread } from '@/components/review-thread/review-thread.tsx';
@@ -21,6 +23,7 @@ export function BuildPanel({ build, edited, onDecided }: { build: QueueBuildDto;
   const full = useReviewBuild(build.id);
   const decide = useDecideBuild();
   const runs = useReviewBuildRuns(build.id);
+  const history = useReviewHistory(build.id);
   const when = edited
     ? `edited ${age(build.updatedAt)} ago`
     : `submitted ${formatDate(build.submittedAt)}, ${age(build.submittedAt ?? build.updatedAt)} waiting`;
@@ -78,6 +81,12 @@ export function BuildPanel({ build, edited, onDecided }: { build: QueueBuildDto;
           The build did not load: {full.error.message}
         </p>
       )}
+      {history.isError && (
+        <p role="alert" className="text-sm text-danger">
+          The review history did not load: {history.error.message}
+        </p>
+      )}
+      {history.data && <ReviewHistory history={history.data} edited={edited} />}
       {full.data && <BuildDetails build={full.data} />}
       <PanelSection title="Runs waiting for a decision">
         {runs.isPending && (
