@@ -32,6 +32,7 @@ export function DecisionForm<D extends string>({
   noteLabel,
   noteHint,
   publicNote,
+  noteRows = 3,
   onDecide,
 }: {
   id: string;
@@ -41,6 +42,8 @@ export function DecisionForm<D extends string>({
   noteHint: string;
   /** Offer "show this note to everyone" for this decision (a build's publish note); otherwise notes stay private. */
   publicNote?: { decision: D; label: string };
+  /** Height of the note box; a run's form inside a build panel uses a small one. */
+  noteRows?: number;
   onDecide: (values: Values<D>) => Promise<unknown>;
 }) {
   const { register, handleSubmit, setValue, setError, formState, watch } = useForm<Values<string>, unknown, Values<D>>({
@@ -87,7 +90,7 @@ export function DecisionForm<D extends string>({
         </label>
         <textarea
           id={noteId}
-          rows={3}
+          rows={noteRows}
           className="w-full rounded-md border border-rule bg-white px-2 py-1.5 text-base aria-[invalid=true]:border-danger"
           aria-invalid={noteError ? true : undefined}
           aria-describedby={noteError ? `${noteId}-error` : `${noteId}-hint`}

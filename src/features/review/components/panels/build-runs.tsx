@@ -13,20 +13,29 @@ const CalibrationChart = lazy(() => import('@/components/charts/calibration-char
 
 /** The build's pending runs, each with its gain and ±, flags, a small plot, its raw points and its own decision. */
 export function BuildRuns({ runs }: { runs: QueueRunDto[] }) {
-  if (runs.length === 0) return <p className="text-sm text-ink-soft">No runs waiting in this build.</p>;
+  // A decided run leaves the list when the desk reloads; the line above the list says what happened to it.
+  const [message, setMessage] = useState('');
   return (
-    <ul className="space-y-3">
-      {runs.map((r) => (
-        <BuildRun key={r.id} run={r} />
-      ))}
-    </ul>
+    <div className="space-y-3">
+      <p role="status" className={message ? 'rounded-md border border-teal/40 bg-teal/5 px-3 py-2 text-sm' : 'sr-only'}>
+        {message}
+      </p>
+      {runs.length === 0 ? (
+        <p className="text-sm text-ink-soft">No runs waiting in this build.</p>
+      ) : (
+        <ul className="space-y-3">
+          {runs.map((r) => (
+            <BuildRun key={r.id} run={r} onDecided={(decision, title) => setMessage(`${decidedWords[decision]}: run ${r.id}, ${title}.`)} />
+          ))}
+        </ul>
+      )}
+    </div>
   );
 }
 
-function BuildRun({ run }: { run: QueueRunDto }) {
+function BuildRun({ run, onDecided }: { run: QueueRunDto; onDecided: (decision: string, title: string) => void }) {
   const decide = useDecideRun();
   const [showPoints, setShowPoints] = useState(false);
-  const [decided, setDecided] = useState<string | null>(null);
   const pm = runGainPlusMinus(run.fit);
   const figures = runPrintedFigures(run);
   const plottable = run.kind === 'points' || run.kind === 'sine-record';
@@ -65,23 +74,18 @@ function BuildRun({ run }: { run: QueueRunDto }) {
         {showPoints && <RunPointsTable runId={run.id} />}
       </div>
       <div className="mt-2">
-        {decided ? (
-          <p role="status" className="rounded-md border border-teal/40 bg-teal/5 px-3 py-2 text-sm">
-            {decidedWords[decided]}.
-          </p>
-        ) : (
-          <DecisionForm
-            id={`build-run-${run.id}`}
-            schema={acceptRejectInput}
-            choices={acceptChoices}
-            noteLabel="Note on this run"
-            noteHint={RUN_NOTE_HINT}
-            onDecide={async (v) => {
-              await decide.mutateAsync({ id: run.id, ...v });
-              setDecided(v.decision);
-            }}
-          />
-        )}
+        <DecisionForm
+          id={`build-run-${run.id}`}
+          schema={acceptRejectInput}
+          choices={acceptChoices}
+          noteLabel="Note on this run"
+          noteHint={RUN_NOTE_HINT}
+          noteRows={1}
+          onDecide={async (v) => {
+            await decide.mutateAsync({ id: run.id, ...v });
+            onDecided(v.decision, title);
+          }}
+        />
       </div>
     </li>
   );

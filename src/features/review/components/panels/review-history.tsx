@@ -17,9 +17,17 @@ const runChangeWords: Record<RunChange['change'], string> = {
  */
 export function ReviewHistory({ history, edited }: { history: ReviewHistoryDto; edited: boolean }) {
   const { lastReview, writeUp, runs, decisions } = history;
-  if (!lastReview && decisions.length === 0) return null;
+  if (!lastReview && decisions.length === 0 && !edited) return null;
   return (
     <>
+      {edited && !lastReview && (
+        <PanelSection title="Edited since review: what changed">
+          <p className="text-sm text-ink-soft">
+            Its last review was before the desk kept what moderators saw, so there is nothing to compare with: read the write-up and runs
+            below.
+          </p>
+        </PanelSection>
+      )}
       {lastReview && writeUp && runs && (
         <PanelSection title={edited ? 'Edited since review: what changed' : 'Changed since the last review'}>
           <p className="mb-2 text-sm text-ink-soft">
@@ -65,13 +73,13 @@ function WriteUpDiff({ changes }: { changes: TextChange[] }) {
     >
       {changes.map((c, i) =>
         c.change === 'added' ? (
-          <ins key={i} className="bg-teal/15 text-ink decoration-teal">
+          <ins key={i} className="mx-px rounded-sm bg-teal/15 text-ink decoration-teal">
             <span className="sr-only">[added: </span>
             {c.value}
             <span className="sr-only">]</span>
           </ins>
         ) : c.change === 'removed' ? (
-          <del key={i} className="bg-danger/10 text-danger">
+          <del key={i} className="mx-px rounded-sm bg-danger/10 text-danger">
             <span className="sr-only">[removed: </span>
             {c.value}
             <span className="sr-only">]</span>
