@@ -71,7 +71,7 @@ describe('journey: a moderator decides a build with its runs from the builds tab
     // The resubmitted build: earlier note, write-up diff and run list.
     await rowOf(resubmitted.title).click();
     await panel.getByRole('heading', { level: 2, name: resubmitted.title }).waitFor();
-    await panel.getByText(earlierNote).waitFor();
+    await panel.getByRole('blockquote').filter({ hasText: earlierNote }).waitFor();
     const diff = panel.getByLabel('Write-up changes');
     await diff.locator('ins', { hasText: 'worm gear' }).first().waitFor();
     await diff.locator('del', { hasText: 'screw' }).first().waitFor();
@@ -124,7 +124,7 @@ describe('journey: a moderator decides a build with its runs from the builds tab
     await rowOf(`Loose stack ${tag}`).waitFor();
 
     await page.goto(`${live.baseUrl}/review?queue=builds&item=${resubmitted.id}`);
-    await panel.getByText(earlierNote).waitFor();
+    await panel.getByRole('blockquote').filter({ hasText: earlierNote }).waitFor();
     await page.setViewportSize({ width: 390, height: 844 });
     await page.screenshot({ path: `${SCREENSHOTS}/review-desk-resubmitted-390.png`, fullPage: true });
     await page.setViewportSize({ width: 1280, height: 860 });
