@@ -2,12 +2,11 @@ import { lazy, Suspense, useState } from 'react';
 import { acceptRejectInput, type QueueRunDto } from '@shared/schemas/review.ts';
 import { formatPlusMinus } from '@shared/format/measured-number.ts';
 import { runGainPlusMinus, runPrintedFigures } from '@shared/export/run-figures.ts';
-import { Button } from '@/components/ui/button.tsx';
 import { useDecideRun } from '@/features/review/api/decide-run.ts';
 import { DecisionForm } from '../decision/decision-form.tsx';
 import { FlagChips } from '../flag-chips.tsx';
 import { acceptChoices, decidedWords, RUN_NOTE_HINT } from './decision-choices.ts';
-import { RunPointsTable } from './run-points-table.tsx';
+import { RawPoints } from './run-points-table.tsx';
 
 const CalibrationChart = lazy(() => import('@/components/charts/calibration-chart.tsx').then((m) => ({ default: m.CalibrationChart })));
 
@@ -35,7 +34,6 @@ export function BuildRuns({ runs }: { runs: QueueRunDto[] }) {
 
 function BuildRun({ run, onDecided }: { run: QueueRunDto; onDecided: (decision: string, title: string) => void }) {
   const decide = useDecideRun();
-  const [showPoints, setShowPoints] = useState(false);
   const pm = runGainPlusMinus(run.fit);
   const figures = runPrintedFigures(run);
   const plottable = run.kind === 'points' || run.kind === 'sine-record';
@@ -68,10 +66,7 @@ function BuildRun({ run, onDecided }: { run: QueueRunDto; onDecided: (decision: 
         </div>
       )}
       <div className="mt-2">
-        <Button variant="ghost" aria-expanded={showPoints} onClick={() => setShowPoints((s) => !s)}>
-          {showPoints ? 'Hide the raw points' : 'Show the raw points'}
-        </Button>
-        {showPoints && <RunPointsTable runId={run.id} />}
+        <RawPoints runId={run.id} />
       </div>
       <div className="mt-2">
         <DecisionForm

@@ -11,6 +11,7 @@ import { FitTable } from './fit-table.tsx';
 import { FlagList } from './flag-list.tsx';
 import { PanelFrame, PanelSection } from './panel-frame.tsx';
 import { PartGains } from './part-gains.tsx';
+import { RawPoints } from './run-points-table.tsx';
 import { latticeRunLines } from '@shared/format/lattice-run-lines.ts';
 
 const CalibrationChart = lazy(() => import('@/components/charts/calibration-chart.tsx').then((m) => ({ default: m.CalibrationChart })));
@@ -83,6 +84,9 @@ export function RunPanel({ run, onDecided }: { run: QueueRunDto; onDecided: (dec
       </PanelSection>
       <PanelSection title="Fit">
         <FitTable fit={run.fit} />
+      </PanelSection>
+      <PanelSection title="Raw points">
+        <RawPoints runId={run.id} />
       </PanelSection>
       <PanelSection title="Accepted gains of this part">
         <PartGains run={run} />

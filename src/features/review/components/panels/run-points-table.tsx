@@ -2,8 +2,21 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button.tsx';
 import { useRunPoints } from '@/features/review/api/get-run-points.ts';
 
+/** "Show the raw points" and, once opened, the paged table (asked for only then). */
+export function RawPoints({ runId }: { runId: number }) {
+  const [open, setOpen] = useState(false);
+  return (
+    <div>
+      <Button variant="ghost" aria-expanded={open} onClick={() => setOpen((s) => !s)}>
+        {open ? 'Hide the raw points' : 'Show the raw points'}
+      </Button>
+      {open && <RunPointsTable runId={runId} />}
+    </div>
+  );
+}
+
 /** A run's raw record as a paged table, numbers as recorded in the run's own units (the export's columns). */
-export function RunPointsTable({ runId }: { runId: number }) {
+function RunPointsTable({ runId }: { runId: number }) {
   const [page, setPage] = useState(1);
   const points = useRunPoints(runId, page);
   if (points.isPending) {
