@@ -56,8 +56,9 @@ export async function publishBuildWithRuns(
   input: PublishWithRunsInput,
 ): Promise<PublishWithRunsResultDto> {
   return decide(actor, async (me, transaction) => {
+    // Runs before the build, as a run decision takes them (run, then its build): the same order cannot deadlock.
+    const { rows, cards } = await pendingRunCards(buildId, transaction);
     const build = await lockBuildForDecision(buildId, transaction);
-    const { rows, cards } = await pendingRunCards(build.id, transaction);
     authorize(me, 'review.decide', { authorIds: [build.ownerId, ...rows.map((r) => r.ownerId)] });
     assertBuildWaiting(build);
     const plan = publishWithRunsPlan(cards);
@@ -69,8 +70,10 @@ export async function publishBuildWithRuns(
     }
     const accepting = rows.filter((r) => plan.accept.includes(r.id));
     const wasPublished = build.status === 'published';
-    // Parts first, in id order: a run's status change re-checks its part key, and the figures update the part rows.
-    const partIds = [...new Set(accepting.map((r) => r.partId))].sort((a, b) => a - b);
+    // Every part of the build, in id order, before any run changes: a run's status change re-checks its part key,
+    // and the build's figures are recomputed over all of them (recomputeBuildParts takes them in the same order).
+    const allParts = await CalibrationRun.findAll({ where: { buildId }, attributes: ['partId'], group: ['partId'], transaction });
+    const partIds = allParts.map((r) => r.partId).sort((a, b) => a - b);
     for (const id of partIds) await Part.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE, attributes: ['id'] });
     const now = new Date();
     const accepted: PublishWithRunsResultDto['accepted'] = [];

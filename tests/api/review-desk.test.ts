@@ -117,6 +117,24 @@ describe('POST /api/review/builds/:buildId/publish-with-runs', () => {
     expect(await AuditEntry.count({ where: { targetType: 'build', targetId: build.id } })).toBe(0);
   });
 
+  test('when a run decision races the combined decision, then one wins and the other is refused with a 409, never a 500', async () => {
+    const other = await signIn(t, (await createUser({ role: 'moderator' })).login);
+    for (let i = 0; i < 5; i++) {
+      const owner = await createUser();
+      const { build, clean1, clean2 } = await submittedBuildWithRuns(owner.id);
+      const [combined, single] = await Promise.all([
+        post(mod, `/api/review/builds/${build.id}/publish-with-runs`, { acceptRunIds: [clean1.id, clean2.id] }),
+        post(other, `/api/review/runs/${clean1.id}/decision`, { decision: 'reject', note: 'Indicator slipped.' }),
+      ]);
+      const statuses = [combined.status, single.status].sort();
+      expect(statuses, `${combined.text} ${single.text}`).toEqual([200, 409]);
+      const codes = [combined, single].filter((r) => r.status === 409).map((r) => r.body.error.code);
+      expect(codes[0]).toBe(combined.status === 409 ? 'plan_changed' : 'not_waiting');
+      const run1 = await CalibrationRun.findByPk(clean1.id);
+      expect(run1?.status).toBe(combined.status === 200 ? 'accepted' : 'rejected');
+    }
+  });
+
   test('when the moderator made the build or one of its runs, then 403 own_work (four eyes)', async () => {
     const own = await createBuildRow(modId, { status: 'submitted' });
     expectError(await post(mod, `/api/review/builds/${own.id}/publish-with-runs`, { acceptRunIds: [] }), 403, 'own_work');
