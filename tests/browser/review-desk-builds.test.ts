@@ -17,6 +17,7 @@ describe('journey: a moderator decides a build with its runs from the builds tab
   const tag = randomBytes(3).toString('hex');
   let combined: Awaited<ReturnType<typeof createBuildRow>>;
   let resubmitted: Awaited<ReturnType<typeof createBuildRow>>;
+  let edited: Awaited<ReturnType<typeof createBuildRow>>;
   const runIds: { clean: number[]; loopy: number } = { clean: [], loopy: 0 };
   const earlierNote = `Say how the coarse approach is geared (${tag}).`;
 
@@ -47,6 +48,14 @@ describe('journey: a moderator decides a build with its runs from the builds tab
         submittedAt: new Date(Date.now() - 19 * DAY),
       },
       { where: { id: resubmitted.id } },
+    );
+    // A build published, then edited by its maker: the "edited since review" queue.
+    edited = await createBuildRow(owner.id, { status: 'submitted', title: `Inertial slider ${tag}` });
+    await edited.update({ body: 'Slider on sapphire rails.' });
+    await decideBuild(toActor(other), edited.id, { decision: 'publish' });
+    await Build.update(
+      { body: 'Slider on sapphire rails, preloaded by a leaf spring.', editedSinceReview: true },
+      { where: { id: edited.id } },
     );
   });
   afterAll(async () => {
@@ -122,6 +131,13 @@ describe('journey: a moderator decides a build with its runs from the builds tab
     // The flagged run waits in the runs queue.
     await page.getByRole('tab', { name: /Calibration runs pending/ }).click();
     await rowOf(`Loose stack ${tag}`).waitFor();
+
+    // Edited since review: the same diff against what was published.
+    await page.getByRole('tab', { name: /Edited since review/ }).click();
+    await rowOf(edited.title).click();
+    await panel.getByRole('heading', { level: 3, name: 'Edited since review: what changed' }).waitFor();
+    await panel.getByLabel('Write-up changes').locator('ins', { hasText: 'leaf spring' }).first().waitFor();
+    await page.screenshot({ path: `${SCREENSHOTS}/review-desk-edited-1366.png`, fullPage: true });
 
     await page.goto(`${live.baseUrl}/review?queue=builds&item=${resubmitted.id}`);
     await panel.getByRole('blockquote').filter({ hasText: earlierNote }).waitFor();
