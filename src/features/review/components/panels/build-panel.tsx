@@ -88,7 +88,7 @@ export function BuildPanel({ build, edited, onDecided }: { build: QueueBuildDto;
       )}
       {history.data && <ReviewHistory history={history.data} edited={edited} />}
       {full.data && <BuildDetails build={full.data} />}
-      <PanelSection title="Runs waiting for a decision">
+      <PanelSection title="Runs pending review">
         {runs.isPending && (
           <p role="status" className="text-sm text-ink-soft">
             Loading the runs…

@@ -20,7 +20,7 @@ export function BuildRuns({ runs }: { runs: QueueRunDto[] }) {
         {message}
       </p>
       {runs.length === 0 ? (
-        <p className="text-sm text-ink-soft">No runs waiting in this build.</p>
+        <p className="text-sm text-ink-soft">No run in this build is pending review.</p>
       ) : (
         <ul className="space-y-3">
           {runs.map((r) => (
@@ -49,7 +49,7 @@ function BuildRun({ run, onDecided }: { run: QueueRunDto; onDecided: (decision: 
       </div>
       <p className="text-xs text-ink-soft">
         {run.kind} · {run.fit.n} {run.kind === 'sine-record' ? 'samples' : 'points'} · R² {figures.r2} · hysteresis {figures.hysteresisPct}{' '}
-        %
+        % of span
       </p>
       <div className="mt-2">{run.flags.length ? <FlagChips flags={run.flags} /> : <p className="text-sm text-ink-soft">No flags.</p>}</div>
       {plottable && (

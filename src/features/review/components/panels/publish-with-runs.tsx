@@ -83,8 +83,8 @@ export function PublishWithRuns({
         </li>
         {plan.stayPending.length > 0 && (
           <li>
-            leave {plan.stayPending.length === 1 ? 'this flagged run' : `these ${plan.stayPending.length} flagged runs`} pending, to decide
-            on its own:
+            leave {plan.stayPending.length === 1 ? 'this flagged run' : `these ${plan.stayPending.length} flagged runs`} pending review, to
+            decide on its own:
             <ul className="list-disc pl-5">
               {plan.stayPending.map((p) => (
                 <li key={p.id}>

@@ -4,6 +4,13 @@ import { actionLabel } from '../audit/audit-labels.ts';
 import { decidedWords } from './decision-choices.ts';
 import { PanelSection } from './panel-frame.tsx';
 
+/** A run's status in the desk's words. */
+const statusWords: Record<'pending' | 'accepted' | 'rejected', string> = {
+  pending: 'pending review',
+  accepted: 'accepted',
+  rejected: 'rejected',
+};
+
 const runChangeWords: Record<RunChange['change'], string> = {
   added: 'added',
   removed: 'removed',
@@ -121,8 +128,8 @@ function RunDiff({ runs }: { runs: RunChange[] }) {
                 {r.id} · {r.actuator}
               </td>
               <td className="py-1 pr-2 font-medium">{runChangeWords[r.change]}</td>
-              <td className="num py-1 pr-2">{r.before ? `${r.before.gain}, ${r.before.status}` : '—'}</td>
-              <td className="num py-1">{r.after ? `${r.after.gain}, ${r.after.status}` : '—'}</td>
+              <td className="num py-1 pr-2">{r.before ? `${r.before.gain}, ${statusWords[r.before.status]}` : '—'}</td>
+              <td className="num py-1">{r.after ? `${r.after.gain}, ${statusWords[r.after.status]}` : '—'}</td>
             </tr>
           ))}
         </tbody>
