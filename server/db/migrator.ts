@@ -25,6 +25,7 @@ import * as recountPublishedRuns from './migrations/20261210000200-recount-publi
 import * as addBuildReviewNotePublic from './migrations/20261210000300-add-build-review-note-public.ts';
 import * as createBuildComments from './migrations/20261212000100-create-build-comments.ts';
 import * as createConversationsAndFollows from './migrations/20261214000100-create-conversations-and-follows.ts';
+import * as createBuildReviewSnapshots from './migrations/20261213000100-create-build-review-snapshots.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -55,6 +56,7 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261210000300-add-build-review-note-public', addBuildReviewNotePublic],
   ['20261212000100-create-build-comments', createBuildComments],
   ['20261214000100-create-conversations-and-follows', createConversationsAndFollows],
+  ['20261213000100-create-build-review-snapshots', createBuildReviewSnapshots],
 ];
 
 /** Umzug over our migration list; the only source of the schema, in tests too. */

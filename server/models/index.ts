@@ -13,6 +13,7 @@ import { BuildComment } from './build-comment.model.ts';
 import { ReviewPost } from './review-post.model.ts';
 import { Follow } from './follow.model.ts';
 import { Notification } from './notification.model.ts';
+import { BuildReviewSnapshot } from './build-review-snapshot.model.ts';
 import { OutboxMail } from './outbox-mail.model.ts';
 import { Listing } from './listing.model.ts';
 import { ListingPhoto } from './listing-photo.model.ts';
@@ -37,6 +38,7 @@ export function initModels(sequelize: Sequelize) {
   ReviewPost.initModel(sequelize);
   Follow.initModel(sequelize);
   Notification.initModel(sequelize);
+  BuildReviewSnapshot.initModel(sequelize);
   OutboxMail.initModel(sequelize);
   Listing.initModel(sequelize);
   ListingPhoto.initModel(sequelize);

@@ -7,6 +7,7 @@ import {
   reportDecisionInput,
   reviewIdParams,
 } from '@shared/schemas/review.ts';
+import { publishWithRunsInput, reviewBuildParams, reviewRunParams, runPointsQuery } from '@shared/schemas/review-desk.ts';
 import { json, type RouteDoc } from './route-doc.ts';
 
 /** The review desk, reports and the audit log. */
@@ -30,6 +31,49 @@ export const reviewDocs: readonly RouteDoc[] = [
     body: buildDecisionInput,
     response: json(200, '`{ id, status }`.'),
     example: { decision: 'return', note: 'Add a photo of the approach mechanism, please.' },
+  },
+  {
+    method: 'GET',
+    path: '/api/review/builds/:buildId/runs',
+    summary: "A build's pending runs with their flags, and what publish-with-runs would do (moderators)",
+    tag: 'Review',
+    auth: 'session-or-token',
+    scope: 'read',
+    params: reviewBuildParams,
+    response: json(200, '`{ buildId, runs, plan: { accept, stayPending } }`.'),
+  },
+  {
+    method: 'GET',
+    path: '/api/review/builds/:buildId/history',
+    summary: "A build's earlier decisions and notes, and what changed in its write-up and runs since the last review (moderators)",
+    tag: 'Review',
+    auth: 'session-or-token',
+    scope: 'read',
+    params: reviewBuildParams,
+    response: json(200, '`{ buildId, decisions, lastReview, writeUp, runs }`; the last three null before a first review.'),
+  },
+  {
+    method: 'POST',
+    path: '/api/review/builds/:buildId/publish-with-runs',
+    summary: 'Publish a build and accept its runs without flags, in one transaction (moderators)',
+    tag: 'Review',
+    auth: 'session',
+    params: reviewBuildParams,
+    body: publishWithRunsInput,
+    errors: [409],
+    response: json(200, '`{ id, status, accepted, stayPending }`; 409 `plan_changed` when the unflagged runs differ from `acceptRunIds`.'),
+    example: { acceptRunIds: [12, 13], note: 'Clear write-up; the third run has a wide loop, looking at it separately.' },
+  },
+  {
+    method: 'GET',
+    path: '/api/review/runs/:runId/points',
+    summary: "A page of a run's raw record, as recorded (moderators)",
+    tag: 'Review',
+    auth: 'session-or-token',
+    scope: 'read',
+    params: reviewRunParams,
+    query: runPointsQuery,
+    response: json(200, '`{ runId, kind, columns, rows, total, page, pageSize }`; 404 `page_out_of_range` past the last page.'),
   },
   {
     method: 'POST',

@@ -14,6 +14,10 @@ import { decideBuild, decidePart, decideReport, decideRun } from '../services/re
 import { getReviewQueue } from '../services/review-queue.service.ts';
 import { listAudit } from '../services/audit.service.ts';
 import { createReport } from '../services/report.service.ts';
+import { publishWithRunsInput, reviewBuildParams, reviewRunParams, runPointsQuery } from '@shared/schemas/review-desk.ts';
+import { getReviewBuildRuns, publishBuildWithRuns } from '../services/review-build.service.ts';
+import { getRunPointsPage } from '../services/review-points.service.ts';
+import { getReviewHistory } from '../services/review-history.service.ts';
 import { route } from './route.ts';
 
 /** The review desk, reports and the audit trail. */
@@ -32,6 +36,34 @@ export function reviewRoutes(config: Config): Router {
     requireUser,
     route({ params: reviewIdParams, body: buildDecisionInput }, async ({ actor, params, body, res }) => {
       res.json(await decideBuild(actor, params.id, body));
+    }),
+  );
+  r.get(
+    '/api/review/builds/:buildId/runs',
+    requireUser,
+    route({ params: reviewBuildParams }, async ({ actor, params, res }) => {
+      res.json(await getReviewBuildRuns(actor, params.buildId));
+    }),
+  );
+  r.get(
+    '/api/review/builds/:buildId/history',
+    requireUser,
+    route({ params: reviewBuildParams }, async ({ actor, params, res }) => {
+      res.json(await getReviewHistory(actor, params.buildId));
+    }),
+  );
+  r.post(
+    '/api/review/builds/:buildId/publish-with-runs',
+    requireUser,
+    route({ params: reviewBuildParams, body: publishWithRunsInput }, async ({ actor, params, body, res }) => {
+      res.json(await publishBuildWithRuns(actor, params.buildId, body));
+    }),
+  );
+  r.get(
+    '/api/review/runs/:runId/points',
+    requireUser,
+    route({ params: reviewRunParams, query: runPointsQuery }, async ({ actor, params, query, res }) => {
+      res.json(await getRunPointsPage(actor, params.runId, query));
     }),
   );
   r.post(

@@ -1,4 +1,4 @@
-import { Op, col, fn, type Model, type ModelStatic } from 'sequelize';
+import { Op, col, fn, type Model, type ModelStatic, type Transaction } from 'sequelize';
 import type { Actor } from '@shared/policies.ts';
 import type { QueueBuildDto, QueueRunDto, ReportTargetType, ReviewAuthorDto, ReviewQueueDto } from '@shared/schemas/review.ts';
 import { Build } from '../models/build.model.ts';
@@ -21,9 +21,9 @@ const LIMIT = 100;
 type AuthorOf = (id: number | null) => ReviewAuthorDto | null;
 
 /** Logins of every author on the desk in one query. */
-async function authors(ids: (number | null)[]): Promise<AuthorOf> {
+export async function authors(ids: (number | null)[], transaction?: Transaction): Promise<AuthorOf> {
   const wanted = [...new Set(ids.filter((i): i is number => i !== null))];
-  const users = wanted.length ? await User.findAll({ where: { id: wanted }, attributes: ['id', 'login'] }) : [];
+  const users = wanted.length ? await User.findAll({ where: { id: wanted }, attributes: ['id', 'login'], transaction }) : [];
   const map = new Map(users.map((u) => [u.id, { id: u.id, login: u.login }]));
   return (id) => (id === null ? null : (map.get(id) ?? { id, login: 'unknown' }));
 }
@@ -62,16 +62,27 @@ async function queueBuilds(builds: Build[], author: AuthorOf): Promise<Map<numbe
   );
 }
 
-/** Pending runs with their parts, actuators, builds and the parts' accepted gains: four queries whatever the number of runs. */
-async function queueRuns(runs: CalibrationRun[], author: AuthorOf): Promise<QueueRunDto[]> {
+/**
+ * Pending runs with their parts, actuators, builds and the parts' accepted gains: four queries whatever the number of runs.
+ * Inside a decision's transaction the queries run one after another on its connection.
+ */
+export async function queueRuns(runs: CalibrationRun[], author: AuthorOf, transaction?: Transaction): Promise<QueueRunDto[]> {
   if (runs.length === 0) return [];
   const partIds = [...new Set(runs.map((r) => r.partId))];
-  const [parts, accepted, actuators, builds] = await Promise.all([
-    Part.findAll({ where: { id: partIds } }),
-    CalibrationRun.findAll({ where: countingRuns({ partId: partIds }), attributes: ['partId', 'gainNmPerV'] }),
-    Actuator.findAll({ where: { id: [...new Set(runs.map((r) => r.actuatorId))] }, attributes: ['id', 'label', 'axis', 'drive'] }),
-    Build.findAll({ where: { id: [...new Set(runs.map((r) => r.buildId))] }, attributes: ['id', 'title'] }),
-  ]);
+  const queries = [
+    () => Part.findAll({ where: { id: partIds }, transaction }),
+    () => CalibrationRun.findAll({ where: countingRuns({ partId: partIds }), attributes: ['partId', 'gainNmPerV'], transaction }),
+    () =>
+      Actuator.findAll({
+        where: { id: [...new Set(runs.map((r) => r.actuatorId))] },
+        attributes: ['id', 'label', 'axis', 'drive'],
+        transaction,
+      }),
+    () => Build.findAll({ where: { id: [...new Set(runs.map((r) => r.buildId))] }, attributes: ['id', 'title'], transaction }),
+  ] as const;
+  const [parts, accepted, actuators, builds] = transaction
+    ? [await queries[0](), await queries[1](), await queries[2](), await queries[3]()]
+    : await Promise.all([queries[0](), queries[1](), queries[2](), queries[3]()]);
   const partMap = new Map(parts.map((p) => [p.id, p]));
   const actuatorMap = new Map(actuators.map((a) => [a.id, a]));
   const buildMap = new Map(builds.map((b) => [b.id, b]));

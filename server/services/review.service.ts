@@ -19,11 +19,12 @@ import { invalidateRegistryCounts } from './registry-count-cache.ts';
 import { nameListing, nameRun, RUN_NAME_COLUMNS } from './audit-names.ts';
 import { notify } from './notification.service.ts';
 import { announceCountedRuns, announcePublished } from './news.service.ts';
+import { snapshotReview } from './review-history.service.ts';
 
 const notWaiting = (what: string) => new ConflictError(`This ${what} is not waiting for a decision.`, 'not_waiting');
 
 /** Run a decision in one transaction (change + audit + stats + queued mail), then nudge the mail worker. */
-async function decide<T>(actor: Actor | null, work: (actor: Actor, t: Transaction) => Promise<T>): Promise<T> {
+export async function decide<T>(actor: Actor | null, work: (actor: Actor, t: Transaction) => Promise<T>): Promise<T> {
   authorize(actor, 'review.access');
   const result = await Build.sequelize!.transaction((t) => work(actor, t));
   kickOutbox();
@@ -75,55 +76,83 @@ const BUILD_OUTCOME = { publish: 'published', return: 'returned', decline: 'decl
 /** Publish, return (with notes, editable again) or decline a submitted build; also clears "edited since review" on published ones. */
 export async function decideBuild(actor: Actor | null, buildId: number, input: BuildDecisionInput) {
   return decide(actor, async (me, transaction) => {
-    const build = await Build.findByPk(buildId, { transaction, lock: transaction.LOCK.UPDATE });
-    if (!build) throw new NotFoundError('No such build.');
+    const build = await lockBuildForDecision(buildId, transaction);
     authorize(me, 'review.decide', { authorIds: [build.ownerId] });
-    const editedPublished = build.status === 'published' && build.editedSinceReview;
-    if (build.status !== 'submitted' && !editedPublished) throw notWaiting('build');
-    const status = BUILD_OUTCOME[input.decision];
-    const firstPublish = status === 'published' && build.publishedAt === null;
-    await build.update(
-      {
-        status,
-        reviewNote: input.note ?? null,
-        reviewNotePublic: input.decision === 'publish' && input.notePublic === true && Boolean(input.note),
-        editedSinceReview: false,
-        publishedAt: status === 'published' ? (build.publishedAt ?? new Date()) : build.publishedAt,
-      },
-      { transaction },
-    );
-    // Its runs count only while it is published: publishing, returning and declining all move its parts' figures.
-    await recomputeBuildParts(build.id, transaction);
-    if (status === 'published' && !editedPublished) await announcePublished(build, firstPublish, transaction);
-    await recordAudit(
-      me,
-      { action: `build.${input.decision}`, targetType: 'build', targetId: build.id, targetLabel: `“${build.title}”`, note: input.note },
-      transaction,
-    );
-    const owner = await recipient(build.ownerId, transaction);
-    if (owner) {
-      const lines = {
-        publish: [`Your build "${build.title}" is published. Its accepted calibration runs count in the parts registry.`],
-        return: [`Your build "${build.title}" was returned with notes. You can edit it and submit it again.`],
-        decline: [`Your build "${build.title}" was declined.`],
-      }[input.decision];
-      const subject = { publish: 'published', return: 'returned with notes', decline: 'declined' }[input.decision];
-      await notify([owner.id], { kind: 'review', text: lines[0]!, path: `/builds/${build.id}` }, { transaction });
-      await enqueueMail(
-        owner,
-        noticeMail({
-          subject: `Build ${subject}: ${build.title}`,
-          greeting: owner.login,
-          lines,
-          note: input.note ?? null,
-          path: `/builds/${build.id}`,
-          linkText: 'Open the build',
-        }),
-        { essential: true, kind: 'review', transaction },
-      );
-    }
-    return { id: build.id, status };
+    return applyBuildDecision(me, build, input, transaction);
   });
+}
+
+/** The build under an update lock; 404 when gone. */
+export async function lockBuildForDecision(buildId: number, transaction: Transaction): Promise<Build> {
+  const build = await Build.findByPk(buildId, { transaction, lock: transaction.LOCK.UPDATE });
+  if (!build) throw new NotFoundError('No such build.');
+  return build;
+}
+
+/** Throws 409 not_waiting unless the build is submitted, or published and edited since its review. */
+export function assertBuildWaiting(build: Build) {
+  const editedPublished = build.status === 'published' && build.editedSinceReview;
+  if (build.status !== 'submitted' && !editedPublished) throw notWaiting('build');
+}
+
+/**
+ * A build decision inside a transaction (the caller has authorized it): the new status and note, the parts'
+ * figures, the audit entry and the owner's mail. `extraLines` go into the mail (what happened to the runs).
+ */
+export async function applyBuildDecision(
+  me: Actor,
+  build: Build,
+  input: BuildDecisionInput,
+  transaction: Transaction,
+  extraLines: string[] = [],
+): Promise<{ id: number; status: (typeof BUILD_OUTCOME)[keyof typeof BUILD_OUTCOME] }> {
+  assertBuildWaiting(build);
+  const editedPublished = build.status === 'published' && build.editedSinceReview;
+  const status = BUILD_OUTCOME[input.decision];
+  const firstPublish = status === 'published' && build.publishedAt === null;
+  await build.update(
+    {
+      status,
+      reviewNote: input.note ?? null,
+      reviewNotePublic: input.decision === 'publish' && input.notePublic === true && Boolean(input.note),
+      editedSinceReview: false,
+      publishedAt: status === 'published' ? (build.publishedAt ?? new Date()) : build.publishedAt,
+    },
+    { transaction },
+  );
+  // Its runs count only while it is published: publishing, returning and declining all move its parts' figures.
+  await recomputeBuildParts(build.id, transaction);
+  if (status === 'published' && !editedPublished) await announcePublished(build, firstPublish, transaction);
+  // What was reviewed, so a resubmission shows what changed since.
+  await snapshotReview(me, build, input.decision, transaction);
+  await recordAudit(
+    me,
+    { action: `build.${input.decision}`, targetType: 'build', targetId: build.id, targetLabel: `“${build.title}”`, note: input.note },
+    transaction,
+  );
+  const owner = await recipient(build.ownerId, transaction);
+  if (owner) {
+    const lines = {
+      publish: [`Your build "${build.title}" is published. Its accepted calibration runs count in the parts registry.`],
+      return: [`Your build "${build.title}" was returned with notes. You can edit it and submit it again.`],
+      decline: [`Your build "${build.title}" was declined.`],
+    }[input.decision];
+    const subject = { publish: 'published', return: 'returned with notes', decline: 'declined' }[input.decision];
+    await notify([owner.id], { kind: 'review', text: lines[0]!, path: `/builds/${build.id}` }, { transaction });
+    await enqueueMail(
+      owner,
+      noticeMail({
+        subject: `Build ${subject}: ${build.title}`,
+        greeting: owner.login,
+        lines: [...lines, ...extraLines],
+        note: input.note ?? null,
+        path: `/builds/${build.id}`,
+        linkText: 'Open the build',
+      }),
+      { essential: true, kind: 'review', transaction },
+    );
+  }
+  return { id: build.id, status };
 }
 
 /** Accept or reject a pending run; the part's pooled statistics change in the same transaction. */

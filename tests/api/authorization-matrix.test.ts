@@ -92,6 +92,7 @@ const expected: Record<string, Row> = {
   'DELETE /api/parts/:partId/photos/:photoId': [401, 204, 403, 403, 204, 204],
 
   'POST /api/review/builds/:id/decision': [401, 403, 403, 403, 200, 200],
+  'POST /api/review/builds/:buildId/publish-with-runs': [401, 403, 403, 403, 200, 200],
   'POST /api/review/runs/:id/decision': [401, 403, 403, 403, 200, 200],
   'POST /api/review/parts/:id/decision': [401, 403, 403, 403, 200, 200],
   'POST /api/review/reports/:id/decision': [401, 403, 403, 403, 200, 200],

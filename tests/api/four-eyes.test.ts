@@ -39,6 +39,17 @@ const cases: Record<string, Case> = {
       };
     },
   },
+  'their own submitted build with its runs (publish with runs)': {
+    async make(ownerId) {
+      const b = await createBuildRow(ownerId, { status: 'submitted' });
+      const run = await createRunRow({ buildId: b.id, partId: (await createPart()).id, ownerId, gainNmPerV: 40 });
+      return {
+        path: `/api/review/builds/${b.id}/publish-with-runs`,
+        body: { acceptRunIds: [run.id] },
+        state: async () => [(await Build.findByPk(b.id))?.status, (await CalibrationRun.findByPk(run.id))?.status],
+      };
+    },
+  },
   'a pending run of their own published build': {
     async make(ownerId) {
       const b = await createBuildRow(ownerId, { status: 'published' });

@@ -71,7 +71,7 @@ describe('journey: a moderator works the review desk', () => {
     await panel.getByRole('heading', { level: 2, name: toPublish.title }).waitFor();
     expect(await rowOf(toPublish.title).textContent()).toContain('3 days waiting');
     await page.screenshot({ path: `${SCREENSHOTS}/review-desk-build-1280.png`, fullPage: true });
-    await panel.getByRole('button', { name: 'Publish' }).click();
+    await panel.getByRole('button', { name: 'Publish', exact: true }).click();
     await page
       .getByRole('status')
       .filter({ hasText: `Published: ${toPublish.title}.` })

@@ -25,6 +25,7 @@ import {
   createReportInput,
   reportDecisionInput,
 } from '@shared/schemas/review.ts';
+import { publishWithRunsInput } from '@shared/schemas/review-desk.ts';
 import { createListingInput, hideListingInput, sendMessageInput, updateListingInput } from '@shared/schemas/listing.ts';
 import { reorderAttachedPhotosInput, updateAttachedPhotoInput } from '@shared/schemas/attached-photo.ts';
 import { setRoleInput, setSuspendedInput } from '@shared/schemas/user.ts';
@@ -986,6 +987,23 @@ export const fixtures: Record<string, Fixture> = {
         state: buildState(build.id),
         async changed() {
           expect((await Build.findByPk(build.id))?.status).toBe('published');
+        },
+      };
+    },
+  },
+  'POST /api/review/builds/:buildId/publish-with-runs': {
+    schema: publishWithRunsInput,
+    allowed: 'moderator',
+    async make(ctx) {
+      const build = await draftBuild(ctx, 'submitted');
+      const run = await createRunRow({ buildId: build.id, partId: (await createPart()).id, ownerId: ctx.owner.id, gainNmPerV: 40 });
+      return {
+        params: { buildId: build.id },
+        body: { acceptRunIds: [run.id] },
+        state: () => rows(Build.findByPk(build.id), CalibrationRun.findByPk(run.id)),
+        async changed() {
+          expect((await Build.findByPk(build.id))?.status).toBe('published');
+          expect((await CalibrationRun.findByPk(run.id))?.status).toBe('accepted');
         },
       };
     },

@@ -4,6 +4,7 @@ import { ApiError } from '@/lib/api-client.ts';
 export function decisionErrorMessage(error: unknown): string {
   if (error instanceof ApiError) {
     if (error.code === 'not_waiting') return `${error.message} Someone else decided it first; the desk has been reloaded.`;
+    if (error.code === 'plan_changed') return `${error.message} The preview has been reloaded.`;
     if (error.code === 'own_work') return `${error.message} Four eyes: nobody decides on their own build, run, part, listing or report.`;
     if (error.status === 403) return 'Only moderators can decide on the review desk.';
     return error.message || 'The decision was not saved; try again.';

@@ -9,6 +9,8 @@ import { decisionErrorMessage, noteIssue } from './decision-errors.ts';
 export interface DecisionChoice<D extends string> {
   decision: D;
   label: string;
+  /** The words once a note is written, e.g. "Accept with note": the note goes to the maker without refusing anything. */
+  withNoteLabel?: string;
   busyLabel: string;
   variant: 'primary' | 'secondary' | 'danger';
 }
@@ -30,6 +32,7 @@ export function DecisionForm<D extends string>({
   noteLabel,
   noteHint,
   publicNote,
+  noteRows = 3,
   onDecide,
 }: {
   id: string;
@@ -39,9 +42,11 @@ export function DecisionForm<D extends string>({
   noteHint: string;
   /** Offer "show this note to everyone" for this decision (a build's publish note); otherwise notes stay private. */
   publicNote?: { decision: D; label: string };
+  /** Height of the note box; a run's form inside a build panel uses a small one. */
+  noteRows?: number;
   onDecide: (values: Values<D>) => Promise<unknown>;
 }) {
-  const { register, handleSubmit, setValue, setError, formState } = useForm<Values<string>, unknown, Values<D>>({
+  const { register, handleSubmit, setValue, setError, formState, watch } = useForm<Values<string>, unknown, Values<D>>({
     resolver: zodResolver(schema),
     defaultValues: { decision: choices[0].decision, note: '', notePublic: false },
   });
@@ -49,6 +54,7 @@ export function DecisionForm<D extends string>({
   const noteError = formState.errors.note?.message;
   const serverError = formState.errors.root?.server?.message;
   const noteId = `${id}-note`;
+  const hasNote = Boolean(watch('note')?.trim());
 
   const decide = (decision: D) => {
     setValue('decision', decision);
@@ -84,7 +90,7 @@ export function DecisionForm<D extends string>({
         </label>
         <textarea
           id={noteId}
-          rows={3}
+          rows={noteRows}
           className="w-full rounded-md border border-rule bg-white px-2 py-1.5 text-base aria-[invalid=true]:border-danger"
           aria-invalid={noteError ? true : undefined}
           aria-describedby={noteError ? `${noteId}-error` : `${noteId}-hint`}
@@ -109,7 +115,7 @@ export function DecisionForm<D extends string>({
       <div className="flex flex-wrap gap-2">
         {choices.map((c) => (
           <Button key={c.decision} variant={c.variant} disabled={busy !== null} onClick={() => decide(c.decision)}>
-            {busy === c.decision ? c.busyLabel : c.label}
+            {busy === c.decision ? c.busyLabel : hasNote && c.withNoteLabel ? c.withNoteLabel : c.label}
           </Button>
         ))}
       </div>

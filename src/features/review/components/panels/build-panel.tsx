@@ -5,10 +5,15 @@ import { Markdown } from '@/components/ui/markdown.tsx';
 import { paths } from '@/config/paths.ts';
 import { useReviewBuild } from '@/features/review/api/get-review-build.ts';
 import { useDecideBuild } from '@/features/review/api/decide-build.ts';
+import { useReviewBuildRuns } from '@/features/review/api/get-review-build-runs.ts';
+import { useReviewHistory } from '@/features/review/api/get-review-history.ts';
 import { DecisionForm } from '../decision/decision-form.tsx';
 import { age, count } from '../format.ts';
 import { formatDate } from '@shared/format/dates.ts';
 import { BuildPhotos } from './build-photos.tsx';
+import { BuildRuns } from './build-runs.tsx';
+import { PublishWithRuns } from './publish-with-runs.tsx';
+import { ReviewHistory } from './review-history.tsx';
 import { buildChoices, editedChoices } from './decision-choices.ts';
 import { Facts, PanelFrame, PanelSection } from './panel-frame.tsx';
 import { ReviewThread } from '@/components/review-thread/review-thread.tsx';
@@ -17,6 +22,8 @@ import { ReviewThread } from '@/components/review-thread/review-thread.tsx';
 export function BuildPanel({ build, edited, onDecided }: { build: QueueBuildDto; edited: boolean; onDecided: (decision: string) => void }) {
   const full = useReviewBuild(build.id);
   const decide = useDecideBuild();
+  const runs = useReviewBuildRuns(build.id);
+  const history = useReviewHistory(build.id);
   const when = edited
     ? `edited ${age(build.updatedAt)} ago`
     : `submitted ${formatDate(build.submittedAt)}, ${age(build.submittedAt ?? build.updatedAt)} waiting`;
@@ -33,18 +40,30 @@ export function BuildPanel({ build, edited, onDecided }: { build: QueueBuildDto;
         </>
       }
       decision={
-        <DecisionForm
-          id={`build-${build.id}`}
-          schema={buildDecisionInput}
-          choices={edited ? editedChoices : buildChoices}
-          noteLabel="Note to the maker"
-          noteHint="Required to return or decline: say what to change or why. The maker sees it on the build and by e-mail; visitors do not, unless you tick the box below when publishing."
-          publicNote={{ decision: 'publish', label: 'When publishing, show this note on the public build page too' }}
-          onDecide={async (v) => {
-            await decide.mutateAsync({ id: build.id, ...v });
-            onDecided(v.decision);
-          }}
-        />
+        <div className="space-y-3">
+          <DecisionForm
+            id={`build-${build.id}`}
+            schema={buildDecisionInput}
+            choices={edited ? editedChoices : buildChoices}
+            noteLabel="Note to the maker"
+            noteHint="Required to return or decline: say what to change or why. The maker sees it on the build and by e-mail; visitors do not, unless you tick the box below when publishing."
+            publicNote={{ decision: 'publish', label: 'When publishing, show this note on the public build page too' }}
+            onDecide={async (v) => {
+              await decide.mutateAsync({ id: build.id, ...v });
+              onDecided(v.decision);
+            }}
+          />
+          {runs.data && runs.data.runs.length > 0 && (
+            <PublishWithRuns
+              buildId={build.id}
+              title={build.title}
+              edited={edited}
+              runs={runs.data.runs}
+              plan={runs.data.plan}
+              onDone={() => onDecided('publish-with-runs')}
+            />
+          )}
+        </div>
       }
     >
       <p>{build.summary}</p>
@@ -62,7 +81,26 @@ export function BuildPanel({ build, edited, onDecided }: { build: QueueBuildDto;
           The build did not load: {full.error.message}
         </p>
       )}
+      {history.isError && (
+        <p role="alert" className="text-sm text-danger">
+          The review history did not load: {history.error.message}
+        </p>
+      )}
+      {history.data && <ReviewHistory history={history.data} edited={edited} />}
       {full.data && <BuildDetails build={full.data} />}
+      <PanelSection title="Runs pending review">
+        {runs.isPending && (
+          <p role="status" className="text-sm text-ink-soft">
+            Loading the runs…
+          </p>
+        )}
+        {runs.isError && (
+          <p role="alert" className="text-sm text-danger">
+            The runs did not load: {runs.error.message}
+          </p>
+        )}
+        {runs.data && <BuildRuns runs={runs.data.runs} />}
+      </PanelSection>
       <div className="border-t border-rule pt-4">
         <ReviewThread buildId={build.id} side="moderator" />
       </div>

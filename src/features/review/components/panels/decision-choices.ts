@@ -15,7 +15,7 @@ export const editedChoices: DecisionChoice<'publish' | 'return' | 'decline'>[] =
 ];
 
 export const acceptChoices: DecisionChoice<'accept' | 'reject'>[] = [
-  { decision: 'accept', label: 'Accept', busyLabel: 'Accepting…', variant: 'primary' },
+  { decision: 'accept', label: 'Accept', withNoteLabel: 'Accept with note', busyLabel: 'Accepting…', variant: 'primary' },
   { decision: 'reject', label: 'Reject', busyLabel: 'Rejecting…', variant: 'danger' },
 ];
 
@@ -27,6 +27,7 @@ export const reportChoices: DecisionChoice<'resolve' | 'dismiss'>[] = [
 /** Past tense of each decision, for the status line after it is saved. */
 export const decidedWords: Record<string, string> = {
   publish: 'Published',
+  'publish-with-runs': 'Published, with its runs without flags accepted',
   return: 'Returned with notes',
   decline: 'Declined',
   accept: 'Accepted',
@@ -34,3 +35,7 @@ export const decidedWords: Record<string, string> = {
   resolve: 'Resolved',
   dismiss: 'Dismissed',
 };
+
+/** The note box's hint on a run: a note is required to reject and kept with an acceptance too. */
+export const RUN_NOTE_HINT =
+  'Required to reject: say what looks wrong. Optional when accepting: the maker sees it with the run and in the decision mail. Only accepted runs count in the part’s statistics.';

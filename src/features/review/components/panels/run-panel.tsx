@@ -6,11 +6,12 @@ import { paths } from '@/config/paths.ts';
 import { useDecideRun } from '@/features/review/api/decide-run.ts';
 import { DecisionForm } from '../decision/decision-form.tsx';
 import { age } from '../format.ts';
-import { acceptChoices } from './decision-choices.ts';
+import { acceptChoices, RUN_NOTE_HINT } from './decision-choices.ts';
 import { FitTable } from './fit-table.tsx';
 import { FlagList } from './flag-list.tsx';
 import { PanelFrame, PanelSection } from './panel-frame.tsx';
 import { PartGains } from './part-gains.tsx';
+import { RawPoints } from './run-points-table.tsx';
 import { latticeRunLines } from '@shared/format/lattice-run-lines.ts';
 
 const CalibrationChart = lazy(() => import('@/components/charts/calibration-chart.tsx').then((m) => ({ default: m.CalibrationChart })));
@@ -38,7 +39,7 @@ export function RunPanel({ run, onDecided }: { run: QueueRunDto; onDecided: (dec
           schema={acceptRejectInput}
           choices={acceptChoices}
           noteLabel="Note to the maker"
-          noteHint="Required to reject: say what looks wrong. Only accepted runs count in the part’s statistics."
+          noteHint={RUN_NOTE_HINT}
           onDecide={async (v) => {
             await decide.mutateAsync({ id: run.id, ...v });
             onDecided(v.decision);
@@ -83,6 +84,9 @@ export function RunPanel({ run, onDecided }: { run: QueueRunDto; onDecided: (dec
       </PanelSection>
       <PanelSection title="Fit">
         <FitTable fit={run.fit} />
+      </PanelSection>
+      <PanelSection title="Raw points">
+        <RawPoints runId={run.id} />
       </PanelSection>
       <PanelSection title="Accepted gains of this part">
         <PartGains run={run} />
