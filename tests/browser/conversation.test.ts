@@ -1,6 +1,7 @@
 // Journey: the conversation around a build. A fan follows and comments, the owner is notified and answers,
 // a moderator returns a submitted build, the maker answers in the review thread and resubmits, and the
-// moderator reads the thread on the desk and publishes; the fan, who follows the maker, hears of it.
+// moderator reads the thread and the diff on the desk and publishes with the run; the fan, who follows the maker
+// and the part, hears of both.
 import { randomBytes } from 'node:crypto';
 import { describe, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
@@ -33,6 +34,10 @@ describe('journey: talking around a build', () => {
     await page.getByRole('button', { name: `Following this build` }).waitFor();
     await page.getByRole('button', { name: `Follow ${owner.login}` }).click();
     await page.getByRole('button', { name: `Following ${owner.login}` }).waitFor();
+    await page.goto(`${base}/parts/${part.id}`);
+    await page.getByRole('button', { name: 'Follow this part' }).click();
+    await page.getByRole('button', { name: 'Following this part' }).waitFor();
+    await page.goto(`${base}/builds/${shown.id}`);
     await page.getByLabel('Your comment (Markdown)').fill('Which **clamp** holds the bar at the root?');
     await page.getByRole('button', { name: 'Post comment' }).click();
     await page.getByRole('listitem').filter({ hasText: 'Which clamp holds the bar at the root?' }).waitFor();
@@ -71,6 +76,9 @@ describe('journey: talking around a build', () => {
     await thread.getByRole('button', { name: 'Send to the thread' }).click();
     await thread.getByText('1 µm per division').waitFor();
     await page.screenshot({ path: `${SCREENSHOTS}/conversation-maker-thread-1280.png`, fullPage: true });
+    await page.getByLabel('Write-up', { exact: true }).fill('The dial indicator sits on a magnetic base beside the clamp.');
+    await page.getByRole('button', { name: 'Save details' }).click();
+    await page.getByText('Details saved.').waitFor();
     await page.getByRole('button', { name: 'Submit again for review' }).click();
     await page.getByRole('button', { name: 'Submit again for review' }).waitFor({ state: 'detached' });
 
@@ -80,16 +88,21 @@ describe('journey: talking around a build', () => {
     await page.goto(`${base}/review?queue=builds&item=${submitted.id}`);
     await panel.getByRole('heading', { level: 2, name: submitted.title }).waitFor();
     await panel.locator('#review-thread').getByText('1 µm per division').waitFor();
+    await panel.getByLabel('Write-up changes').locator('ins', { hasText: 'magnetic base' }).first().waitFor();
     await page.screenshot({ path: `${SCREENSHOTS}/conversation-desk-1280.png`, fullPage: true });
-    await panel.getByRole('button', { name: 'Publish' }).click();
+    await panel.getByRole('button', { name: 'Publish and accept the runs without flags…' }).click();
+    const preview = panel.getByRole('region', { name: 'Preview of the combined decision' });
+    await preview.getByText(/accept this run, which carries no flag/).waitFor();
+    await preview.getByRole('button', { name: /^Confirm: publish, accept 1/ }).click();
     await page
       .getByRole('status')
-      .filter({ hasText: `Published: ${submitted.title}.` })
+      .filter({ hasText: `Published, with its runs without flags accepted: ${submitted.title}.` })
       .waitFor();
 
-    // The fan, who follows the maker, hears of the new build.
+    // The fan, who follows the maker and the part, hears of the new build and of the run that now counts.
     await as(page, base, fan.login, '/notifications');
     await page.getByRole('link', { name: new RegExp(`${owner.login} published a new build: “${submitted.title}”`) }).waitFor();
+    await page.getByRole('link', { name: new RegExp(`A new run counts for ${part.name}`) }).waitFor();
     await page.setViewportSize({ width: 390, height: 844 });
     await page.screenshot({ path: `${SCREENSHOTS}/conversation-fan-notifications-390.png`, fullPage: true });
     expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);

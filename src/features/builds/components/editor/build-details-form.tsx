@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
@@ -37,14 +38,18 @@ export function BuildDetailsForm({
     defaultValues: { title: '', summary: '', body: '', instrumentKind: undefined, stage: 'planning', ...defaults },
   });
   const { register, handleSubmit, setError, reset, control, formState } = form;
-  const { errors, isSubmitting, isSubmitSuccessful, isDirty } = formState;
+  const { errors, isSubmitting, isDirty } = formState;
   const body = useWatch({ control, name: 'body' }) ?? '';
+  // "Saved" shows until the next edit. Kept here rather than read from isSubmitSuccessful, which the reset below clears.
+  const [saved, setSaved] = useState(false);
 
   const submit = handleSubmit(async (values) => {
     try {
       await onSave(values);
-      reset(values, { keepIsSubmitSuccessful: true });
+      reset(values);
+      setSaved(true);
     } catch (err) {
+      setSaved(false);
       applyServerErrors(err, setError, FIELDS);
     }
   });
@@ -109,7 +114,7 @@ export function BuildDetailsForm({
         <Button type="submit" disabled={isSubmitting}>
           {isSubmitting ? 'Saving…' : submitLabel}
         </Button>
-        {savedMessage && isSubmitSuccessful && !isDirty && (
+        {savedMessage && saved && !isDirty && (
           <p role="status" className="text-sm text-teal-dark">
             {savedMessage}
           </p>

@@ -72,7 +72,7 @@ export function PublishWithRuns({
             'accept no runs (none is free of flags);'
           ) : (
             <>
-              accept {plan.accept.length === 1 ? 'this run' : `these ${plan.accept.length} runs`}, which carry no flag:
+              accept {plan.accept.length === 1 ? 'this run, which carries' : `these ${plan.accept.length} runs, which carry`} no flag:
               <ul className="list-disc pl-5">
                 {plan.accept.map((id) => (
                   <li key={id}>{byId.get(id) ? nameOf(byId.get(id)!) : `run ${id}`}</li>
