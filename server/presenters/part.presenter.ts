@@ -64,12 +64,14 @@ export function presentPartSummary(p: PartRow): PartSummaryDto {
   };
 }
 
-/** An accepted run of a part with its build's title and maker, as the part page lists it. */
+/** An accepted run of a part with its build's title, its actuator (label and axis) and maker, as the part page lists it. */
 export interface PartRunRow {
   id: number;
   buildId: number;
   buildTitle: string | null;
   maker: string | null;
+  actuatorLabel: string | null;
+  axis: string | null;
   method: string;
   kind: RunKind;
   gainNmPerV: number;
@@ -115,6 +117,7 @@ export function presentPartDetail(part: Part, rows: PartPageRows, editPhotos: bo
       buildId: r.buildId,
       buildTitle: r.buildTitle ?? '',
       maker: r.maker ?? 'unknown',
+      actuator: { label: r.actuatorLabel, axis: r.axis ?? '' },
       method: r.method,
       kind: r.kind,
       gainNmPerV: Math.abs(r.gainNmPerV),

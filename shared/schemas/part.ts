@@ -155,6 +155,8 @@ export interface PartRunDto {
   buildId: number;
   buildTitle: string;
   maker: string;
+  /** The actuator the run measured: its label (if the maker gave one) and axis. */
+  actuator: { label: string | null; axis: string };
   method: string;
   kind: RunKind;
   gainNmPerV: number;

@@ -282,7 +282,9 @@ describe('POST /api/parts and GET /api/parts/:id', () => {
     expect(res.body).toMatchObject({
       id: part.id,
       stats: { acceptedRunCount: 1, buildCount: 1 },
-      runs: [{ id: run.id, buildId: b.id, buildTitle: b.title, maker: owner.login, method: 'indicator' }],
+      runs: [
+        { id: run.id, buildId: b.id, buildTitle: b.title, maker: owner.login, actuator: { label: null, axis: 'X' }, method: 'indicator' },
+      ],
       listings: [{ kind: 'offering', quantity: 2, priceLabel: 'Free', owner: owner.login }],
     });
     expect(res.body.expectedGain.gainNmPerV).toBeCloseTo(102.6, 1); // [calc, FIELD.md: 12 × 0.6 mm PZT-5A series bimorph]

@@ -3,11 +3,12 @@ import { listingConditionLabels, type ListingDto } from '@shared/schemas/listing
 import { partCategoryLabels } from '@shared/schemas/part.ts';
 import { StatusBadge } from '@/components/ui/status-badge.tsx';
 import { paths } from '@/config/paths.ts';
+import { formatShort } from '@shared/format/measured-number.ts';
 import { KindBadge } from './kind-badge.tsx';
 import { ListingThumb } from './listing-thumb.tsx';
 import { statusBadge } from './labels.ts';
 
-/** One listing on the exchange: kind, part, quantity, condition, price, where it is and who posted it. */
+/** One listing on the exchange: kind, part, quantity, condition, price, the part's registry gain, where it is and who posted it. */
 export function ListingCard({ listing: l }: { listing: ListingDto }) {
   return (
     <article className="relative flex w-full flex-col overflow-hidden rounded-lg border border-rule bg-white transition-colors focus-within:ring-2 focus-within:ring-copper hover:border-copper">
@@ -28,6 +29,18 @@ export function ListingCard({ listing: l }: { listing: ListingDto }) {
           <dd>{listingConditionLabels[l.condition]}</dd>
           <dt className="text-ink-soft">Price</dt>
           <dd className={l.priceKind === 'price' ? 'num' : 'font-medium text-teal-dark'}>{l.priceLabel}</dd>
+          <dt className="text-ink-soft">Registry gain</dt>
+          <dd>
+            <Link to={paths.part(l.part.id)} className="relative z-10 text-copper-dark underline decoration-copper/40 underline-offset-2">
+              {l.part.gainMedianNmPerV === null ? (
+                'no accepted runs yet'
+              ) : (
+                <>
+                  <span className="num">{formatShort(l.part.gainMedianNmPerV)} nm/V</span> median
+                </>
+              )}
+            </Link>
+          </dd>
           <dt className="text-ink-soft">Region</dt>
           <dd>{l.region}</dd>
           {l.shipsTo && (

@@ -42,7 +42,7 @@ export function PartRunsTable({ runs }: { runs: PartRunDto[] }) {
           <thead className="bg-paper-deep/60 text-left text-xs uppercase tracking-wide text-ink-soft">
             <tr>
               <th scope="col" className="px-3 py-2">
-                Build
+                Build and actuator
               </th>
               <th scope="col" className="px-3 py-2">
                 Maker
@@ -68,6 +68,10 @@ export function PartRunsTable({ runs }: { runs: PartRunDto[] }) {
                   <Link to={paths.build(r.buildId)} className="text-copper-dark underline decoration-copper/40 underline-offset-2">
                     {r.buildTitle || `Build ${r.buildId}`}
                   </Link>
+                  <span className="block text-xs text-ink-soft">
+                    {r.actuator.label ? `${r.actuator.label} · ` : ''}
+                    {r.actuator.axis ? `${r.actuator.axis} axis` : ''}
+                  </span>
                 </td>
                 <td className="whitespace-nowrap px-3 py-1.5">{r.maker}</td>
                 <td className="px-3 py-1.5">
