@@ -116,8 +116,8 @@ describe('journey: a maker writes a build and submits it for review', () => {
     await gallery.getByRole('img', { name: PHOTO_ALT }).waitFor();
     await gallery.getByRole('img', { name: BENCH_ALT }).waitFor();
     const second = await gallery.getByRole('img').nth(1).getAttribute('alt');
-    await page.getByRole('button', { name: 'Make photo 2 the cover' }).click();
-    await page.getByRole('button', { name: 'Make photo 1 the cover' }).waitFor();
+    await page.getByRole('button', { name: 'Make cover: photo 2' }).click();
+    await page.getByRole('button', { name: 'Make cover: photo 1' }).waitFor();
     await page.getByRole('button', { name: 'Move photo 2 earlier' }).click();
     await gallery.getByRole('img').first().and(page.getByAltText(second!)).waitFor();
     expect(await page.evaluate(() => document.activeElement?.textContent)).toMatch(/Later/);

@@ -49,13 +49,17 @@ export async function startLiveApp(): Promise<LiveApp> {
 export const SCREENSHOTS = 'test-output/screenshots';
 
 /** Debian's chromium through playwright-core, with a fresh profile per journey. */
-export async function launchBrowser(): Promise<{ context: BrowserContext; page: Page; close(): Promise<void> }> {
+export async function launchBrowser(
+  options: { bypassCSP?: boolean } = {},
+): Promise<{ context: BrowserContext; page: Page; close(): Promise<void> }> {
   mkdirSync(SCREENSHOTS, { recursive: true });
   const profile = mkdtempSync(join(tmpdir(), 'scanwright-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: '/usr/bin/chromium',
     headless: true,
     viewport: { width: 1280, height: 860 },
+    // Only for tests that inject a checker script (axe-core) into our pages; the policy itself is tested elsewhere.
+    bypassCSP: options.bypassCSP ?? false,
     args: [
       '--no-sandbox',
       '--disable-gpu',
@@ -97,11 +101,11 @@ export interface Journey {
  * Starts the live app and a browser before a describe block's tests and closes both after, collecting
  * console and page errors (tests end with `expect(j.errors).toEqual([])`). Call it inside `describe`.
  */
-export function journey(): Journey {
+export function journey(options: { bypassCSP?: boolean } = {}): Journey {
   const j = { errors: [] as string[] } as Journey;
   beforeAll(async () => {
     j.live = await startLiveApp();
-    j.browser = await launchBrowser();
+    j.browser = await launchBrowser(options);
     j.browser.page.on('pageerror', (e) => j.errors.push(e.message));
     j.browser.page.on('console', (m) => {
       if (m.type() === 'error') j.errors.push(m.text());

@@ -28,7 +28,9 @@ export function GainMatrixFields({ form }: { form: MixingFormApi }) {
         <caption className="mb-1 text-left text-sm text-ink-soft">Tip motion per volt on each bender, G (nm/V)</caption>
         <thead className="text-xs text-ink-soft">
           <tr>
-            <th scope="col" className="w-16" />
+            <th scope="col" className="w-16">
+              <span className="sr-only">Axis</span>
+            </th>
             <th scope="col" className="pb-1 font-medium">
               Va
             </th>

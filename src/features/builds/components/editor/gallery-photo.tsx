@@ -82,7 +82,7 @@ export function GalleryPhoto({
               variant="secondary"
               disabled={cover.isPending}
               onClick={() => cover.mutate(photo.id)}
-              aria-label={`Make photo ${n} the cover`}
+              aria-label={`Make cover: photo ${n}`}
             >
               Make cover
             </Button>
