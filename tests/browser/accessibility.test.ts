@@ -6,10 +6,11 @@ import { Build } from '../../server/models/build.model.ts';
 import { Part } from '../../server/models/part.model.ts';
 import { Listing } from '../../server/models/listing.model.ts';
 import { Photo } from '../../server/models/photo.model.ts';
+import { DEMO_PARTS } from '../../server/db/seed/demo-parts.ts';
 
 const AXE = createRequire(import.meta.url).resolve('axe-core/axe.min.js');
 const AFM = 'Beam-deflection AFM on a slate offcut';
-const BAR = 'Cartridge bimorph bar 11 × 1.5 × 0.5 mm';
+const BAR = DEMO_PARTS.find((p) => p.key === 'cartridge-bar')!.name;
 
 interface AxeNode {
   target: string[];

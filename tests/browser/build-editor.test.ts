@@ -6,9 +6,10 @@ import sharp from 'sharp';
 import type { Page } from 'playwright-core';
 import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
 import { Build } from '../../server/models/build.model.ts';
+import { DEMO_PARTS } from '../../server/db/seed/demo-parts.ts';
 
 const TITLE = 'Bimorph-bar STM on a granite offcut';
-const PART = /Cartridge bimorph bar 11 × 1\.5 × 0\.5 mm/;
+const PART = DEMO_PARTS.find((p) => p.key === 'cartridge-bar')!.name;
 const PHOTO_ALT = 'The scanner head: two cartridge bars glued in a V under the tip holder';
 const BENCH_ALT = 'The granite offcut on four squash balls, the head clamped on top';
 

@@ -1,10 +1,21 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
 import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp, pickListingPart } from '../support/browser.ts';
+import { DEMO_PARTS } from '../../server/db/seed/demo-parts.ts';
+import { DEMO_BUILDS } from '../../server/db/seed/demo-builds.ts';
 
-const BAR = 'Cartridge bimorph bar 11 × 1.5 × 0.5 mm';
-const DISC = 'Brass buzzer disc 27 mm';
-const STACK = 'Multilayer stack 5 × 5 × 9 mm';
+const partName = (key: string) => DEMO_PARTS.find((p) => p.key === key)!.name;
+const BAR = partName('cartridge-bar');
+const DISC = partName('buzzer-27');
+const STACK = partName('stack-5x5');
+/** The seed's accepted gains on a part (nm/V). */
+const acceptedGains = (key: string) =>
+  DEMO_BUILDS.flatMap((b) => b.actuators.filter((a) => a.part === key).flatMap((a) => a.runs))
+    .filter((r) => r.status === 'accepted')
+    .map((r) => r.gainNmPerV);
+/** A gain filter around the bar's seeded runs: 20 % below the lowest, up to 150 nm/V. */
+const GAIN_FROM = Math.floor(Math.min(...acceptedGains('cartridge-bar')) * 0.8);
+const GAIN_TO = 150;
 const MESSAGE = 'Hello Marit, could I have two of the cartridge bars for an XY pair? Happy to pay postage to Utrecht.';
 
 const noSideways = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth);
@@ -26,7 +37,7 @@ describe('journey: parts registry and exchange', () => {
     await live?.close();
   });
 
-  test('when demo-maker filters by 80–150 nm/V, opens the cartridge bar and writes to marit-builds, then marit-builds reads it in the inbox', async () => {
+  test('when demo-maker filters by gain around the bar runs, opens the cartridge bar and writes to marit-builds, then marit-builds reads it in the inbox', async () => {
     const { page } = browser;
     await page.goto(`${live.baseUrl}/auth/github?returnTo=%2Fparts`);
     await page.getByRole('heading', { name: /Sign in \(local stand-in\)/ }).waitFor();
@@ -39,17 +50,19 @@ describe('journey: parts registry and exchange', () => {
     expect(await page.getByRole('img', { name: /Where listed parts cluster/ }).count()).toBe(1);
     await page.screenshot({ path: `${SCREENSHOTS}/parts-registry-1280.png`, fullPage: true });
 
-    await page.getByLabel('Gain from (nm/V)').fill('80');
-    await page.getByLabel('Gain to (nm/V)').fill('150');
+    // The filter leaves the disc and the stack out only if their seeded gains lie outside it.
+    for (const other of ['buzzer-27', 'stack-5x5']) expect(Math.max(...acceptedGains(other))).toBeLessThan(GAIN_FROM);
+    await page.getByLabel('Gain from (nm/V)').fill(String(GAIN_FROM));
+    await page.getByLabel('Gain to (nm/V)').fill(String(GAIN_TO));
     await page.getByRole('button', { name: 'Apply filters' }).click();
-    await page.waitForURL(/\/parts\?gainMin=80&gainMax=150$/);
+    await page.waitForURL(new RegExp(`/parts\\?gainMin=${GAIN_FROM}&gainMax=${GAIN_TO}$`));
     await table.getByRole('link', { name: DISC }).waitFor({ state: 'detached' });
     await table.getByRole('link', { name: BAR }).waitFor();
     expect(await table.getByRole('link', { name: STACK }).count()).toBe(0);
     expect(await table.getByRole('row').nth(1).textContent()).toMatch(/\d+ nm\/V/);
 
     const csv = await page.getByRole('link', { name: 'Download CSV' }).getAttribute('href');
-    expect(csv).toBe('/api/parts?gainMin=80&gainMax=150&sort=name&format=csv');
+    expect(csv).toBe(`/api/parts?gainMin=${GAIN_FROM}&gainMax=${GAIN_TO}&sort=name&format=csv`);
     const download = await page.request.get(`${live.baseUrl}${csv}`);
     expect(download.headers()['content-type']).toContain('text/csv');
     expect(await download.text()).toContain(BAR);
@@ -148,7 +161,7 @@ describe('journey: parts registry and exchange', () => {
   test('when the pages are 390 px wide, then nothing scrolls sideways except the registry table inside its region', async () => {
     const { page } = browser;
     await page.setViewportSize({ width: 390, height: 844 });
-    await page.goto(`${live.baseUrl}/parts?gainMin=80&gainMax=150`);
+    await page.goto(`${live.baseUrl}/parts?gainMin=${GAIN_FROM}&gainMax=${GAIN_TO}`);
     await page.getByRole('table').getByRole('link', { name: BAR }).waitFor();
     expect(await noSideways(page)).toBe(true);
     const region = page.getByRole('region', { name: /Parts, scrolls sideways/ });

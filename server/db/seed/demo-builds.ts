@@ -77,7 +77,7 @@ export const DEMO_BUILDS: DemoBuild[] = [
       {
         daysAgo: 55,
         title: 'Bars out of their cartridges',
-        body: 'Two cartridges gave four bars; one cracked while freeing it from the rubber. Measured **0.9 nF** on the survivors.',
+        body: 'Two cartridges gave four bars; one cracked while freeing it from the rubber. Measured **0.46 nF** on the survivors.',
       },
       {
         daysAgo: 40,
@@ -94,7 +94,10 @@ export const DEMO_BUILDS: DemoBuild[] = [
         drive: 'pair-anti-phase',
         amplifier: 'op-amp booster, ±45 V rails',
         maxVolts: 40,
-        runs: [run({ gainNmPerV: 104, daysAgo: 38 }), run({ gainNmPerV: 99, loopFraction: 0.08, daysAgo: 30, displacementUnit: 'um' })],
+        runs: [
+          run({ gainNmPerV: 71.6, loopFraction: 0.09, daysAgo: 38 }),
+          run({ gainNmPerV: 68.3, loopFraction: 0.11, daysAgo: 30, displacementUnit: 'um' }),
+        ],
       },
       {
         part: 'cartridge-bar',
@@ -103,7 +106,7 @@ export const DEMO_BUILDS: DemoBuild[] = [
         drive: 'pair-anti-phase',
         amplifier: 'op-amp booster, ±45 V rails',
         maxVolts: 40,
-        runs: [run({ gainNmPerV: 111, daysAgo: 36 })],
+        runs: [run({ gainNmPerV: 73.4, loopFraction: 0.1, daysAgo: 36 })],
       },
       {
         part: 'tube-635',
@@ -193,7 +196,9 @@ export const DEMO_BUILDS: DemoBuild[] = [
         axis: 'Z',
         drive: 'single',
         maxVolts: 30,
-        runs: [run({ gainNmPerV: 57, status: 'pending', maxVolts: 30, noiseNm: 10, daysAgo: 9, displacementUnit: 'uin' })],
+        runs: [
+          run({ gainNmPerV: 67.2, status: 'pending', maxVolts: 30, noiseNm: 10, loopFraction: 0.12, daysAgo: 9, displacementUnit: 'uin' }),
+        ],
       },
     ],
     pictures: [],
@@ -243,7 +248,7 @@ export const DEMO_BUILDS: DemoBuild[] = [
         axis: 'XY',
         drive: 'pair-in-phase',
         maxVolts: 40,
-        runs: [run({ gainNmPerV: 96, method: 'optical-lever', daysAgo: 70 })],
+        runs: [run({ gainNmPerV: 66.9, method: 'optical-lever', loopFraction: 0.07, daysAgo: 70 })],
       },
     ],
     pictures: [{ alt: 'The flexure stage with its two stacks and preload springs', scene: 'stage' }],

@@ -29,7 +29,7 @@ export const DEMO_LISTINGS: DemoListing[] = [
     currency: 'EUR',
     region: 'Lower Saxony',
     shipsTo: 'EU',
-    notes: 'Freed from their rubber, each measured at 0.85–0.95 nF. Small chips on one end of one bar.',
+    notes: 'Freed from their rubber, each measured at 0.43–0.49 nF. Small chips on one end of one bar.',
     pictures: [{ alt: 'The three bars offered, side by side on a millimetre rule', scene: 'bar' }],
   },
   {
