@@ -44,10 +44,17 @@ export function partSearchWhere(q: ListPartsQuery): { sql: string; params: unkno
     parts.push('accepted_run_count >= ?');
     params.push(q.minRuns);
   }
+  const volts: string[] = [];
+  if (q.minVolts !== undefined) {
+    volts.push('safe_volts >= ?');
+    params.push(q.minVolts);
+  }
   if (q.maxVolts !== undefined) {
-    parts.push('safe_volts <= ?');
+    volts.push('safe_volts <= ?');
     params.push(q.maxVolts);
   }
+  // A part without a stated rating fails any comparison (NULL), so it drops out unless asked for.
+  if (volts.length > 0) parts.push(q.unrated === 'include' ? `(safe_volts IS NULL OR (${volts.join(' AND ')}))` : volts.join(' AND '));
   if (q.q) {
     const like = containsPattern(q.q);
     parts.push('(name LIKE ? OR salvage_source LIKE ?)');
@@ -97,6 +104,19 @@ export function countPartsSql(q: ListPartsQuery): { sql: string; replacements: u
 export async function selectParts(sequelize: Sequelize, q: ListPartsQuery, limit: number, offset: number): Promise<PartListItemDto[]> {
   const { sql, replacements } = selectPartsSql(q, limit, offset);
   return readPool(sequelize).query(sql, replacements) as Promise<PartListItemDto[]>;
+}
+
+/** How many parts a voltage filter hides because they state no rating: 0 without one or when they are included. */
+export async function countUnratedHidden(sequelize: Sequelize, q: ListPartsQuery): Promise<number> {
+  if ((q.minVolts === undefined && q.maxVolts === undefined) || q.unrated === 'include') return 0;
+  const where = partSearchWhere({ ...q, minVolts: undefined, maxVolts: undefined });
+  const [row] = (await readPool(sequelize).query(
+    `SELECT COUNT(*) AS n FROM parts WHERE ${where.sql} AND safe_volts IS NULL`,
+    where.params,
+  )) as Array<{
+    n: number | bigint;
+  }>;
+  return Number(row?.n ?? 0);
 }
 
 /** How many parts match a search. */

@@ -13,7 +13,7 @@ import { User } from '../models/user.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { NotFoundError } from '../errors.ts';
 import { presentPartDetail, type PartPageRows } from '../presenters/part.presenter.ts';
-import { countParts, selectParts } from './part-search.sql.ts';
+import { countParts, countUnratedHidden, selectParts } from './part-search.sql.ts';
 import { cachedRegistryCount } from './registry-count-cache.ts';
 import { canEditPartPhotos, photosBySubject } from './attached-photos.service.ts';
 import { cachedPublicRead } from './public-read-cache.ts';
@@ -25,11 +25,13 @@ export const EXPORT_LIMIT = 10_000;
 /** Registry search with server-side filters, sort and paging (totals cached briefly, see registry-count-cache). */
 export async function listParts(q: ListPartsQuery): Promise<PartListDto> {
   const sequelize = Part.sequelize!;
-  const [rows, total] = await Promise.all([
+  const key = [q.q, q.category, q.gainMin, q.gainMax, q.minRuns, q.minVolts, q.maxVolts, q.unrated];
+  const [rows, total, unratedHidden] = await Promise.all([
     selectParts(sequelize, q, q.pageSize, (q.page - 1) * q.pageSize),
-    cachedRegistryCount(JSON.stringify([q.q, q.category, q.gainMin, q.gainMax, q.minRuns, q.maxVolts]), () => countParts(sequelize, q)),
+    cachedRegistryCount(JSON.stringify(key), () => countParts(sequelize, q)),
+    cachedRegistryCount(JSON.stringify(['unrated', ...key]), () => countUnratedHidden(sequelize, q)),
   ]);
-  return { items: rows, total, page: q.page, pageSize: q.pageSize };
+  return { items: rows, total, unratedHidden, page: q.page, pageSize: q.pageSize };
 }
 
 /** The whole current search (up to EXPORT_LIMIT rows) for CSV or JSON download. */

@@ -81,7 +81,11 @@ export const listPartsQuery = z
     gainMin: optionalNumber(z.number().min(0).max(1e7)),
     gainMax: optionalNumber(z.number().min(0).max(1e7)),
     minRuns: optionalNumber(z.number().int().min(0).max(1e6)),
+    /** Rated for at least this many volts (a builder with a 60 V amplifier wants parts that take 60 V). */
+    minVolts: optionalNumber(z.number().min(0).max(1e5)),
     maxVolts: optionalNumber(z.number().min(0).max(1e5)),
+    /** `include`: a voltage filter keeps parts with no stated rating too (by default they are hidden and counted). */
+    unrated: z.enum(['include']).optional(),
     sort: z.enum(PART_SORTS).default('name'),
     page: z.coerce.number().int().min(1).max(100_000).default(1),
     pageSize: z.coerce.number().int().min(1).max(100).default(25),
@@ -90,6 +94,10 @@ export const listPartsQuery = z
   .refine((v) => v.gainMin === undefined || v.gainMax === undefined || v.gainMin <= v.gainMax, {
     message: 'gainMin must not exceed gainMax.',
     path: ['gainMin'],
+  })
+  .refine((v) => v.minVolts === undefined || v.maxVolts === undefined || v.minVolts <= v.maxVolts, {
+    message: 'minVolts must not exceed maxVolts.',
+    path: ['minVolts'],
   });
 export type ListPartsQuery = z.infer<typeof listPartsQuery>;
 
@@ -123,6 +131,8 @@ export function choiceFromListItem(p: PartListItemDto): PartChoiceDto {
 export interface PartListDto {
   items: PartListItemDto[];
   total: number;
+  /** Parts that match every other filter but state no voltage rating, left out by a voltage filter (0 without one). */
+  unratedHidden: number;
   page: number;
   pageSize: number;
 }

@@ -81,15 +81,34 @@ afterAll(async () => {
 });
 
 /** The independent computation: filter and sort the seeded rows in plain JS. */
-function expected(f: { category?: string; gainMin?: number; gainMax?: number; minRuns?: number; maxVolts?: number; sort?: string }) {
-  let rows = seeded.filter(
+interface Filters {
+  category?: string;
+  gainMin?: number;
+  gainMax?: number;
+  minRuns?: number;
+  minVolts?: number;
+  maxVolts?: number;
+  unrated?: 'include';
+  sort?: string;
+}
+
+/** The seeded parts a search matches but for their voltage rating. */
+const otherFilters = (f: Filters) =>
+  seeded.filter(
     (p) =>
       (!f.category || p.category === f.category) &&
       (f.gainMin === undefined || (p.median !== null && p.median >= f.gainMin)) &&
       (f.gainMax === undefined || (p.median !== null && p.median <= f.gainMax)) &&
-      (f.minRuns === undefined || p.runs >= f.minRuns) &&
-      (f.maxVolts === undefined || (p.safeVolts !== null && p.safeVolts <= f.maxVolts)),
+      (f.minRuns === undefined || p.runs >= f.minRuns),
   );
+
+/** The independent rating check: inside [minVolts, maxVolts]; no stated rating only when asked for. */
+const rated = (f: Filters, v: number | null) =>
+  (f.minVolts === undefined && f.maxVolts === undefined) ||
+  (v === null ? f.unrated === 'include' : (f.minVolts === undefined || v >= f.minVolts) && (f.maxVolts === undefined || v <= f.maxVolts));
+
+function expected(f: Filters) {
+  let rows = otherFilters(f).filter((p) => rated(f, p.safeVolts));
   const by = (key: (p: Seeded) => number | string, dir: 1 | -1) => (a: Seeded, b: Seeded) => {
     const ka = key(a);
     const kb = key(b);
@@ -127,6 +146,11 @@ describe('GET /api/parts', () => {
     [{ gainMin: 20, gainMax: 120 }],
     [{ minRuns: 3 }],
     [{ maxVolts: 80 }],
+    [{ minVolts: 60 }],
+    [{ minVolts: 60, maxVolts: 100 }],
+    [{ minVolts: 60, unrated: 'include' }],
+    [{ maxVolts: 80, unrated: 'include', sort: '-gain' }],
+    [{ unrated: 'include' }],
     [{ category: 'bimorph', gainMin: 10, minRuns: 1, maxVolts: 200 }],
     [{ sort: 'gain' }],
     [{ sort: '-gain' }],
@@ -142,6 +166,17 @@ describe('GET /api/parts', () => {
     expect(res.body.total).toBe(ids.length);
     expect(res.body.items.map((p: { id: number }) => p.id)).toEqual(ids);
   });
+
+  test.each([[{ minVolts: 60 }], [{ maxVolts: 80, category: 'stack' }], [{ minVolts: 60, unrated: 'include' }], [{}]] as [Filters][])(
+    'when searching with %o, then unratedHidden counts the matches a voltage filter hides for want of a rating',
+    async (f) => {
+      const res = await search(f as Record<string, string | number>);
+      expect(res.status).toBe(200);
+      const hidden = otherFilters(f).filter((p) => p.safeVolts === null && !rated(f, null)).length;
+      expect(res.body.unratedHidden).toBe(hidden);
+      if (f.minVolts !== undefined && !f.unrated) expect(hidden).toBeGreaterThan(0);
+    },
+  );
 
   test('when a gain range is given, then parts without accepted runs are left out even at gainMin=0', async () => {
     const res = await search({ gainMin: 0 });
@@ -183,6 +218,9 @@ describe('GET /api/parts', () => {
     'page=0',
     'pageSize=101',
     'maxVolts=NaN',
+    'minVolts=-5',
+    'minVolts=100&maxVolts=60',
+    'unrated=yes',
     'gainMax=Infinity',
     'unknown=1',
     'format=xml',

@@ -37,7 +37,7 @@ export function PartsIndexPage() {
         actions={action}
       />
       <PartFilters search={search} />
-      <ResultsBar search={search} total={parts.data?.total} />
+      <ResultsBar search={search} total={parts.data?.total} unratedHidden={parts.data?.unratedHidden} />
       {parts.isPending ? (
         <Loading>Loading the registry…</Loading>
       ) : parts.isError ? (

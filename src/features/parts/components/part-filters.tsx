@@ -12,6 +12,7 @@ interface Draft {
   gainMin: string;
   gainMax: string;
   minRuns: string;
+  minVolts: string;
   maxVolts: string;
 }
 
@@ -23,13 +24,17 @@ function toFilters(d: Draft): Partial<Filters> {
   let gainMax = toNumber(d.gainMax);
   if (gainMin !== undefined && gainMax !== undefined && gainMin > gainMax) [gainMin, gainMax] = [gainMax, gainMin];
   const minRuns = toNumber(d.minRuns);
+  let minVolts = toNumber(d.minVolts);
+  let maxVolts = toNumber(d.maxVolts);
+  if (minVolts !== undefined && maxVolts !== undefined && minVolts > maxVolts) [minVolts, maxVolts] = [maxVolts, minVolts];
   return {
     q: d.q.trim().slice(0, 100),
     category: d.category,
     gainMin,
     gainMax,
     minRuns: minRuns === undefined ? undefined : Math.floor(minRuns),
-    maxVolts: toNumber(d.maxVolts),
+    minVolts,
+    maxVolts,
   };
 }
 
@@ -46,6 +51,7 @@ export function PartFilters({ search }: { search: PartSearch }) {
     gainMin: text(f.gainMin),
     gainMax: text(f.gainMax),
     minRuns: text(f.minRuns),
+    minVolts: text(f.minVolts),
     maxVolts: text(f.maxVolts),
   });
   const [draft, setDraft] = useFilterDraft<Draft>(search.key, fromUrl);
@@ -88,7 +94,7 @@ export function PartFilters({ search }: { search: PartSearch }) {
         onChange={(gainMin, gainMax) => setDraft({ ...draft, gainMin, gainMax })}
         onCommit={() => apply()}
       />
-      <div className="grid content-start gap-4 sm:col-span-2 sm:grid-cols-2">
+      <div className="grid content-start gap-4 sm:col-span-2 sm:grid-cols-3">
         <FilterText
           id="part-min-runs"
           label="At least this many accepted runs"
@@ -101,8 +107,19 @@ export function PartFilters({ search }: { search: PartSearch }) {
           onChange={(e) => setDraft({ ...draft, minRuns: e.target.value })}
         />
         <FilterText
+          id="part-min-volts"
+          label="Rated for at least (V)"
+          type="number"
+          inputMode="decimal"
+          min={0}
+          step="any"
+          value={draft.minVolts}
+          placeholder="any"
+          onChange={(e) => setDraft({ ...draft, minVolts: e.target.value })}
+        />
+        <FilterText
           id="part-max-volts"
-          label="Safe voltage at most (V)"
+          label="Rated for at most (V)"
           type="number"
           inputMode="decimal"
           min={0}
@@ -111,11 +128,11 @@ export function PartFilters({ search }: { search: PartSearch }) {
           placeholder="any"
           onChange={(e) => setDraft({ ...draft, maxVolts: e.target.value })}
         />
-        <p className="text-xs text-ink-soft sm:col-span-2">
+        <p className="text-xs text-ink-soft sm:col-span-3">
           A part matches a gain range when its median over accepted runs lies inside it; parts without accepted runs drop out. The bars show
           how many listed parts have their median in each band; drag the copper handles or type the numbers.
         </p>
-        <div className="flex items-center gap-3 sm:col-span-2">
+        <div className="flex items-center gap-3 sm:col-span-3">
           <Button type="submit">Apply filters</Button>
           <ClearFilters search={search} />
         </div>
