@@ -9,6 +9,7 @@ import { useSession } from '@/features/session/api/get-session.ts';
 import { toActor } from '@/features/session/to-actor.ts';
 import { AccountMenu } from './account-menu.tsx';
 import { PersonalLinks } from './personal-links.tsx';
+import { RouteProgress } from './route-progress.tsx';
 
 const linkClass = ({ isActive }: { isActive: boolean }) =>
   `block rounded px-3 py-2 text-sm font-medium md:py-1.5 ${isActive ? 'bg-ink text-paper' : 'text-ink hover:bg-paper-deep'}`;
@@ -32,6 +33,7 @@ export function AppShell() {
 
   return (
     <div className="flex min-h-screen flex-col">
+      <RouteProgress />
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-white focus:p-2">
         Skip to content
       </a>

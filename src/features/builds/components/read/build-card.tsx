@@ -4,10 +4,18 @@ import { paths } from '@/config/paths.ts';
 import { CoverTile } from './cover-tile.tsx';
 import { GainList } from './gain-list.tsx';
 
-/** One published build on the index: cover, kind, title (the link), maker, stage and its key gains. */
+const card = [
+  'relative flex min-w-0 flex-1 flex-col overflow-hidden rounded-lg border border-rule bg-white',
+  'transition-colors hover:border-copper focus-within:ring-2 focus-within:ring-copper',
+].join(' ');
+
+/**
+ * One published build on the index: cover, kind, title (the link), maker, stage and its key gains. Every card is
+ * the same size, with a photo or the drawn tile: it fills its grid cell, and the grid's rows share one height.
+ */
 export function BuildCard({ build }: { build: BuildSummaryDto }) {
   return (
-    <article className="relative flex flex-col overflow-hidden rounded-lg border border-rule bg-white transition-colors hover:border-copper focus-within:ring-2 focus-within:ring-copper">
+    <article className={card}>
       <CoverTile cover={build.cover} seed={build.id} />
       <div className="flex flex-1 flex-col gap-2 p-4">
         <p className="text-xs font-medium uppercase tracking-wide text-teal-dark">{instrumentKindLabels[build.instrumentKind]}</p>

@@ -42,7 +42,7 @@ export function BuildResults({ data, search, stale }: { data: BuildListDto; sear
           )}
         </div>
       ) : (
-        <ul className={`grid gap-4 sm:grid-cols-2 lg:grid-cols-3 ${stale ? 'opacity-60' : ''}`}>
+        <ul aria-label="Builds" className={`grid auto-rows-fr gap-4 sm:grid-cols-2 lg:grid-cols-3 ${stale ? 'opacity-60' : ''}`}>
           {data.items.map((b) => (
             <li key={b.id} className="flex">
               <BuildCard build={b} />

@@ -34,7 +34,7 @@ function DrawnCover({ seed }: { seed: number }) {
 /** The cover photo's thumbnail, or a drawn tile in our palette when the build has none. */
 export function CoverTile({ cover, seed }: { cover: PhotoDto | null; seed: number }) {
   return (
-    <div className="aspect-[16/9] overflow-hidden bg-paper-deep">
+    <div className="aspect-[16/9] w-full shrink-0 overflow-hidden bg-paper-deep">
       {cover ? (
         <img src={cover.thumbUrl} alt={cover.alt} loading="lazy" className="h-full w-full object-cover" />
       ) : (
