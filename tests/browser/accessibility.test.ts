@@ -1,6 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { createRequire } from 'node:module';
 import type { Page } from 'playwright-core';
+import type { AxeResults, RunOptions } from 'axe-core';
 import { journey, SCREENSHOTS } from '../support/browser.ts';
 import { Build } from '../../server/models/build.model.ts';
 import { Part } from '../../server/models/part.model.ts';
@@ -12,17 +13,6 @@ const AXE = createRequire(import.meta.url).resolve('axe-core/axe.min.js');
 const AFM = 'Beam-deflection AFM on a slate offcut';
 const BAR = DEMO_PARTS.find((p) => p.key === 'cartridge-bar')!.name;
 
-interface AxeNode {
-  target: string[];
-  failureSummary?: string;
-}
-interface AxeViolation {
-  id: string;
-  impact: string | null;
-  help: string;
-  nodes: AxeNode[];
-}
-
 /** Loads a page, waits until its heading shows and the network is quiet, then runs every axe-core rule on it. */
 async function violations(page: Page, url: string): Promise<string[]> {
   await page.goto(url);
@@ -31,10 +21,10 @@ async function violations(page: Page, url: string): Promise<string[]> {
   await page.getByText(/^Loading/).waitFor({ state: 'detached' });
   await page.addScriptTag({ path: AXE });
   const found = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run(ctx: Document, options: object): Promise<{ violations: unknown[] }> } }).axe;
+    const axe = (window as unknown as { axe: { run(ctx: Document, options: RunOptions): Promise<AxeResults> } }).axe;
     return (await axe.run(document, { rules: { 'label-content-name-mismatch': { enabled: true } } })).violations;
   });
-  return (found as AxeViolation[]).map(
+  return found.map(
     (v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.map((n) => `${n.target.join(' ')}: ${n.failureSummary ?? ''}`).join(' | ')}`,
   );
 }

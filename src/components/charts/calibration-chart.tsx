@@ -1,5 +1,7 @@
 import { CartesianGrid, ReferenceLine, ResponsiveContainer, Scatter, ScatterChart, Tooltip, XAxis, YAxis } from 'recharts';
+import { formatShort } from '@shared/format/measured-number.ts';
 import { chartColors, tickStyle, tooltipStyle } from './chart-theme.ts';
+import { ChartFigures, seriesText, type ChartFigure } from './chart-figures.tsx';
 
 /** One calibration point already in volts and nanometres. */
 export interface CalibrationChartPoint {
@@ -68,6 +70,25 @@ export function CalibrationChart({
   const ys = [...points.map((p) => p.displacementNm), ...(line ? [line[0].y, line[1].y] : [])];
   const x = axis(vMin, vMax);
   const y = axis(Math.min(...ys), Math.max(...ys));
+  const axes = [
+    ['drive', (p: CalibrationChartPoint) => p.volts, 'V'],
+    ['displacement', (p: CalibrationChartPoint) => p.displacementNm, 'nm'],
+  ] as const;
+  const figures: ChartFigure[] = [
+    ...(
+      [
+        ['Up sweep', all.filter((p) => p.sweep === 'up')],
+        ['Down sweep', all.filter((p) => p.sweep === 'down')],
+        ['Points', all.filter((p) => p.sweep !== 'up' && p.sweep !== 'down')],
+      ] as const
+    )
+      .filter(([, ps]) => ps.length > 0)
+      .map(([label, ps]) => ({ label, value: seriesText(ps, axes) })),
+    ...(fit && line
+      ? [{ label: 'Fitted line', value: `${formatShort(fit.gainNmPerV, 4)} nm/V, intercept ${formatShort(fit.interceptNm)} nm` }]
+      : []),
+    ...(all.length > points.length ? [{ label: 'Drawn', value: `${points.length} of ${all.length} points, evenly spaced` }] : []),
+  ];
 
   return (
     <div>
@@ -132,7 +153,7 @@ export function CalibrationChart({
           {plain.length > 0 && <Scatter name="Points" data={plain} fill={chartColors.ink} shape="circle" isAnimationActive={false} />}
         </ScatterChart>
       </ResponsiveContainer>
-      <ul className="mt-1 flex flex-wrap justify-center gap-x-4 gap-y-1 text-xs text-ink-soft" aria-label="Legend">
+      <ul className="mt-1 flex flex-wrap justify-center gap-x-4 gap-y-1 text-sm text-ink-soft" aria-label="Legend">
         {up.length > 0 && (
           <li className="flex items-center gap-1">
             <svg width="10" height="10" aria-hidden="true">
@@ -166,6 +187,7 @@ export function CalibrationChart({
           </li>
         )}
       </ul>
+      <ChartFigures figures={figures} />
     </div>
   );
 }

@@ -22,6 +22,9 @@ export const tickStyle = {
 /** Axis label text. */
 export const axisLabelStyle = { fontSize: 12, fill: chartColors.inkSoft } as const;
 
+/** Legends of recharts' own (`<Legend wrapperStyle={legendStyle} />`): the size of the page's small text (text-sm). */
+export const legendStyle = { fontSize: '0.875rem', lineHeight: '1.25rem' } as const;
+
 /** Tooltip box: monospace figures, the rule colour for its border. */
 export const tooltipStyle = { fontFamily: tickStyle.fontFamily, fontSize: 12, borderColor: chartColors.rule } as const;
 

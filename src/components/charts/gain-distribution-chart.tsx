@@ -1,6 +1,8 @@
 import { CartesianGrid, ReferenceArea, ReferenceLine, ResponsiveContainer, Scatter, ScatterChart, XAxis, YAxis } from 'recharts';
 import { summarize } from '@shared/stats/quantiles.ts';
+import { formatShort } from '@shared/format/measured-number.ts';
 import { chartColors, tickStyle } from './chart-theme.ts';
+import { ChartFigures, rangeText } from './chart-figures.tsx';
 
 const number = (v: number) => (Math.abs(v) >= 1000 ? v.toFixed(0) : String(Number(v.toPrecision(3))));
 /** Spread the dots vertically in a fixed pattern (golden-ratio steps) so equal gains stay visible. */
@@ -138,7 +140,7 @@ export function GainDistributionChart({
           />
         </ScatterChart>
       </ResponsiveContainer>
-      <ul className="mt-1 flex flex-wrap justify-center gap-x-4 gap-y-1 text-xs text-ink-soft" aria-label="Legend">
+      <ul className="mt-1 flex flex-wrap justify-center gap-x-4 gap-y-1 text-sm text-ink-soft" aria-label="Legend">
         {dots.length > 0 && (
           <li className="flex items-center gap-1">
             <svg width="10" height="10" aria-hidden="true">
@@ -171,6 +173,17 @@ export function GainDistributionChart({
           </li>
         ) : null}
       </ul>
+      <ChartFigures
+        figures={[
+          { label: 'This run', value: `${formatShort(candidate)} nm/V` },
+          ...(s.n > 0 ? [{ label: 'Accepted runs', value: `${s.n}, ${rangeText(gains, 'nm/V')}` }] : []),
+          ...(s.median !== null ? [{ label: 'Median', value: `${formatShort(s.median)} nm/V` }] : []),
+          ...(s.p25 !== null && s.p75 !== null
+            ? [{ label: 'Quartiles', value: `${formatShort(s.p25)} and ${formatShort(s.p75)} nm/V` }]
+            : []),
+          ...(expectedNmPerV ? [{ label: 'Expected from geometry', value: `${formatShort(expectedNmPerV)} nm/V` }] : []),
+        ]}
+      />
     </div>
   );
 }

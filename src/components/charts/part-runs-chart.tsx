@@ -11,7 +11,9 @@ import {
   type TooltipContentProps,
   type TooltipValueType,
 } from 'recharts';
+import { formatShort } from '@shared/format/measured-number.ts';
 import { chartColors, tickStyle } from './chart-theme.ts';
+import { ChartFigures } from './chart-figures.tsx';
 
 /** One accepted run as the strip plot shows it. */
 export interface PartRunsChartRun {
@@ -92,75 +94,98 @@ export function PartRunsChart({
   const domain: [number, number] = log ? [lo / 1.5, hi * 1.5] : linear.domain;
   const dots: Dot[] = runs.map((r, i) => ({ ...r, y: jitter(i) }));
   return (
-    <ResponsiveContainer width="100%" height={height}>
-      <ScatterChart margin={{ top: 8, right: 18, bottom: 24, left: 18 }} accessibilityLayer>
-        <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" vertical horizontal={false} />
-        <XAxis
-          type="number"
-          dataKey="gainNmPerV"
-          name="Gain"
-          scale={log ? 'log' : 'auto'}
-          domain={domain}
-          allowDataOverflow
-          ticks={log ? logTicks(domain[0], domain[1]) : linear.ticks}
-          tick={tickStyle}
-          tickFormatter={fmt}
-          label={{
-            value: `Gain (nm/V)${log ? ', log scale' : ''}`,
-            position: 'bottom',
-            offset: 6,
-            fill: chartColors.inkSoft,
-            fontSize: 12,
-          }}
-        />
-        <YAxis type="number" dataKey="y" domain={[0, 1]} hide />
-        {expected && (
-          <ReferenceArea
-            x1={expected.lowNmPerV}
-            x2={expected.highNmPerV}
-            y1={0}
-            y2={1}
-            fill={chartColors.amber}
-            fillOpacity={0.1}
-            ifOverflow="hidden"
+    <div>
+      <ResponsiveContainer width="100%" height={height}>
+        <ScatterChart margin={{ top: 8, right: 18, bottom: 24, left: 18 }} accessibilityLayer>
+          <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" vertical horizontal={false} />
+          <XAxis
+            type="number"
+            dataKey="gainNmPerV"
+            name="Gain"
+            scale={log ? 'log' : 'auto'}
+            domain={domain}
+            allowDataOverflow
+            ticks={log ? logTicks(domain[0], domain[1]) : linear.ticks}
+            tick={tickStyle}
+            tickFormatter={fmt}
+            label={{
+              value: `Gain (nm/V)${log ? ', log scale' : ''}`,
+              position: 'bottom',
+              offset: 6,
+              fill: chartColors.inkSoft,
+              fontSize: 12,
+            }}
           />
-        )}
-        {expected && (
-          <ReferenceLine x={expected.gainNmPerV} stroke={chartColors.amber} strokeWidth={1.5} strokeDasharray="6 4" ifOverflow="hidden" />
-        )}
-        {p25 !== null && p75 !== null && runs.length > 1 && (
-          <ReferenceArea
-            x1={p25}
-            x2={p75}
-            y1={0.15}
-            y2={0.85}
-            fill={chartColors.teal}
-            fillOpacity={0.12}
-            stroke={chartColors.teal}
-            strokeOpacity={0.6}
+          <YAxis type="number" dataKey="y" domain={[0, 1]} hide />
+          {expected && (
+            <ReferenceArea
+              x1={expected.lowNmPerV}
+              x2={expected.highNmPerV}
+              y1={0}
+              y2={1}
+              fill={chartColors.amber}
+              fillOpacity={0.1}
+              ifOverflow="hidden"
+            />
+          )}
+          {expected && (
+            <ReferenceLine x={expected.gainNmPerV} stroke={chartColors.amber} strokeWidth={1.5} strokeDasharray="6 4" ifOverflow="hidden" />
+          )}
+          {p25 !== null && p75 !== null && runs.length > 1 && (
+            <ReferenceArea
+              x1={p25}
+              x2={p75}
+              y1={0.15}
+              y2={0.85}
+              fill={chartColors.teal}
+              fillOpacity={0.12}
+              stroke={chartColors.teal}
+              strokeOpacity={0.6}
+            />
+          )}
+          {median !== null && (
+            <ReferenceLine
+              segment={[
+                { x: median, y: 0.08 },
+                { x: median, y: 0.92 },
+              ]}
+              stroke={chartColors.tealDark}
+              strokeWidth={2.5}
+            />
+          )}
+          <Tooltip content={RunTooltip} cursor={false} isAnimationActive={false} />
+          <Scatter
+            name="Accepted runs"
+            data={dots}
+            fill={chartColors.copper}
+            fillOpacity={0.85}
+            stroke="#fff"
+            shape="circle"
+            isAnimationActive={false}
           />
-        )}
-        {median !== null && (
-          <ReferenceLine
-            segment={[
-              { x: median, y: 0.08 },
-              { x: median, y: 0.92 },
-            ]}
-            stroke={chartColors.tealDark}
-            strokeWidth={2.5}
-          />
-        )}
-        <Tooltip content={RunTooltip} cursor={false} isAnimationActive={false} />
-        <Scatter
-          name="Accepted runs"
-          data={dots}
-          fill={chartColors.copper}
-          fillOpacity={0.85}
-          stroke="#fff"
-          shape="circle"
-          isAnimationActive={false}
-        />
-      </ScatterChart>
-    </ResponsiveContainer>
+        </ScatterChart>
+      </ResponsiveContainer>
+      <ChartFigures
+        figures={[
+          {
+            label: 'Accepted runs',
+            value:
+              runs.length === 0 ? 'none' : runs.map((r) => `${formatShort(r.gainNmPerV)} nm/V (${r.buildTitle}, ${r.maker})`).join('; '),
+          },
+          ...(median !== null ? [{ label: 'Median', value: `${formatShort(median)} nm/V` }] : []),
+          ...(p25 !== null && p75 !== null && runs.length > 1
+            ? [{ label: 'Quartiles', value: `${formatShort(p25)} and ${formatShort(p75)} nm/V` }]
+            : []),
+          ...(expected
+            ? [
+                {
+                  label: 'Expected from geometry',
+                  value: `${formatShort(expected.gainNmPerV)} nm/V (band ${formatShort(expected.lowNmPerV)} to ${formatShort(expected.highNmPerV)} nm/V)`,
+                },
+              ]
+            : []),
+        ]}
+      />
+    </div>
   );
 }

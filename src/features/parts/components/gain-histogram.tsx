@@ -22,6 +22,7 @@ export function GainHistogram({
 }) {
   const peak = Math.max(1, ...histogram.bins.map((b) => b.count));
   const total = histogram.bins.reduce((n, b) => n + b.count, 0);
+  const bandsText = histogram.bins.map((b) => `${b.count} from ${formatShort(b.fromNmPerV)} to ${formatShort(b.toNmPerV)} nm/V`).join('; ');
   const x = (g: number) => scale.fraction(g) * W;
   const left = min !== undefined ? x(min) : 0;
   const right = max !== undefined ? x(max) : W;
@@ -32,7 +33,7 @@ export function GainHistogram({
       preserveAspectRatio="none"
       className="block h-16 w-full"
       role="img"
-      aria-label={`Where listed parts cluster: ${total} median gains between ${formatShort(10 ** scale.lo)} and ${formatShort(10 ** scale.hi)} nm/V, log scale`}
+      aria-label={`Where listed parts cluster: ${total} median gains between ${formatShort(10 ** scale.lo)} and ${formatShort(10 ** scale.hi)} nm/V, log scale. ${bandsText}`}
     >
       <rect x={left} y="0" width={Math.max(0, right - left)} height={H} fill="#2F6F73" fillOpacity="0.1" />
       {scale.decades.map((d) => (

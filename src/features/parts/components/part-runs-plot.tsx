@@ -54,7 +54,7 @@ export function PartRunsPlot({ part }: { part: PartDetailDto }) {
               <PartRunsChart runs={runs} median={s.gainMedianNmPerV} p25={s.gainP25NmPerV} p75={s.gainP75NmPerV} expected={e} />
             </Suspense>
           </div>
-          <ul aria-label="Legend" className="mt-1 flex flex-wrap justify-center gap-x-4 gap-y-1 text-xs text-ink-soft">
+          <ul aria-label="Legend" className="mt-1 flex flex-wrap justify-center gap-x-4 gap-y-1 text-sm text-ink-soft">
             <li className="flex items-center gap-1">
               <svg width="10" height="10" aria-hidden="true">
                 <circle cx="5" cy="5" r="4" fill="#B5532A" />

@@ -9,7 +9,9 @@ import {
   useXAxisScale,
   useYAxisScale,
 } from 'recharts';
+import { formatShort } from '@shared/format/measured-number.ts';
 import { chartColors, numberTicks, xAxisLabel, yAxisLabel } from '@/components/charts/chart-theme.ts';
+import { ChartFigures } from '@/components/charts/chart-figures.tsx';
 
 interface PlanePoint {
   xNm: number;
@@ -59,37 +61,46 @@ function squareAxes(points: readonly PlanePoint[]) {
 }
 
 const noMarker = () => <g />;
+const cornersText = (ps: readonly PlanePoint[]) => ps.map((p) => `(${formatShort(p.xNm)}, ${formatShort(p.yNm)})`).join(', ') + ' nm';
 
 /** A small plot of the positions a saved drive matrix reaches within its limits, with the rest position (x₀, y₀). */
 export function DriveRegionChart({ region, rest }: { region: readonly PlanePoint[]; rest: PlanePoint }) {
   const domain = squareAxes([...region, rest]);
   return (
-    <ResponsiveContainer width="100%" aspect={1}>
-      <ScatterChart margin={{ top: 4, right: 8, bottom: 20, left: 4 }}>
-        <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
-        <XAxis
-          type="number"
-          dataKey="xNm"
-          domain={domain.x}
-          allowDataOverflow
-          ticks={domain.xTicks}
-          {...numberTicks}
-          label={xAxisLabel('x (nm)', -12)}
-        />
-        <YAxis
-          type="number"
-          dataKey="yNm"
-          domain={domain.y}
-          allowDataOverflow
-          ticks={domain.yTicks}
-          width={64}
-          {...numberTicks}
-          label={yAxisLabel('y (nm)')}
-        />
-        <Parallelogram corners={region} />
-        <Scatter name="Reachable region" data={[...region]} fill={chartColors.teal} shape={noMarker} isAnimationActive={false} />
-        <ReferenceDot x={rest.xNm} y={rest.yNm} r={3} fill={chartColors.ink} stroke="none" />
-      </ScatterChart>
-    </ResponsiveContainer>
+    <div>
+      <ResponsiveContainer width="100%" aspect={1}>
+        <ScatterChart margin={{ top: 4, right: 8, bottom: 20, left: 4 }}>
+          <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
+          <XAxis
+            type="number"
+            dataKey="xNm"
+            domain={domain.x}
+            allowDataOverflow
+            ticks={domain.xTicks}
+            {...numberTicks}
+            label={xAxisLabel('x (nm)', -12)}
+          />
+          <YAxis
+            type="number"
+            dataKey="yNm"
+            domain={domain.y}
+            allowDataOverflow
+            ticks={domain.yTicks}
+            width={64}
+            {...numberTicks}
+            label={yAxisLabel('y (nm)')}
+          />
+          <Parallelogram corners={region} />
+          <Scatter name="Reachable region" data={[...region]} fill={chartColors.teal} shape={noMarker} isAnimationActive={false} />
+          <ReferenceDot x={rest.xNm} y={rest.yNm} r={3} fill={chartColors.ink} stroke="none" />
+        </ScatterChart>
+      </ResponsiveContainer>
+      <ChartFigures
+        figures={[
+          { label: 'Reachable region, corners', value: cornersText(region) },
+          { label: 'Rest position', value: cornersText([rest]) },
+        ]}
+      />
+    </div>
   );
 }

@@ -11,7 +11,9 @@ import {
   useYAxisScale,
 } from 'recharts';
 import { niceStep, stepTicks } from './axis-ticks.ts';
-import { chartColors, numberTicks, xAxisLabel, yAxisLabel } from '@/components/charts/chart-theme.ts';
+import { formatShort } from '@shared/format/measured-number.ts';
+import { chartColors, legendStyle, numberTicks, xAxisLabel, yAxisLabel } from '@/components/charts/chart-theme.ts';
+import { ChartFigures } from '@/components/charts/chart-figures.tsx';
 
 /** A point of the tip plane in nm. */
 export interface PlanePoint {
@@ -43,56 +45,67 @@ function squareAxes(points: readonly PlanePoint[]): { x: number[]; y: number[] }
 }
 
 const noMarker = () => <g />;
+const cornersText = (ps: readonly PlanePoint[]) => ps.map((p) => `(${formatShort(p.xNm)}, ${formatShort(p.yNm)})`).join(', ') + ' nm';
 
 /** Reachable region (teal parallelogram) with the wanted point: copper dot if reachable, red ring if not. */
 export function MixerChart({ region, target }: { region: readonly PlanePoint[]; target: (PlanePoint & { reachable: boolean }) | null }) {
   const axes = squareAxes([...region, { xNm: 0, yNm: 0 }, ...(target ? [target] : [])]);
   const domain = { x: [axes.x[0], axes.x[axes.x.length - 1]], y: [axes.y[0], axes.y[axes.y.length - 1]] };
   return (
-    <ResponsiveContainer width="100%" aspect={1} maxHeight={420}>
-      <ScatterChart margin={{ top: 4, right: 12, bottom: 24, left: 8 }}>
-        <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
-        <XAxis
-          type="number"
-          dataKey="xNm"
-          domain={domain.x}
-          ticks={axes.x}
-          allowDataOverflow
-          {...numberTicks}
-          label={xAxisLabel('x (nm)')}
-        />
-        <YAxis
-          type="number"
-          dataKey="yNm"
-          domain={domain.y}
-          ticks={axes.y}
-          allowDataOverflow
-          width={72}
-          {...numberTicks}
-          label={yAxisLabel('y (nm)')}
-        />
-        <Legend verticalAlign="top" itemSorter={null} />
-        <RegionPolygon corners={region} />
-        <Scatter
-          name="Reachable region"
-          data={[...region]}
-          fill={chartColors.teal}
-          shape={noMarker}
-          legendType="square"
-          isAnimationActive={false}
-        />
-        <ReferenceDot x={0} y={0} r={3} fill={chartColors.ink} stroke="none" />
-        {target && (
+    <div>
+      <ResponsiveContainer width="100%" aspect={1} maxHeight={420}>
+        <ScatterChart margin={{ top: 4, right: 12, bottom: 24, left: 8 }}>
+          <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
+          <XAxis
+            type="number"
+            dataKey="xNm"
+            domain={domain.x}
+            ticks={axes.x}
+            allowDataOverflow
+            {...numberTicks}
+            label={xAxisLabel('x (nm)')}
+          />
+          <YAxis
+            type="number"
+            dataKey="yNm"
+            domain={domain.y}
+            ticks={axes.y}
+            allowDataOverflow
+            width={72}
+            {...numberTicks}
+            label={yAxisLabel('y (nm)')}
+          />
+          <Legend verticalAlign="top" itemSorter={null} wrapperStyle={legendStyle} />
+          <RegionPolygon corners={region} />
           <Scatter
-            name={target.reachable ? 'Wanted point (reachable)' : 'Wanted point (out of reach)'}
-            data={[target]}
-            fill={target.reachable ? chartColors.copper : chartColors.danger}
-            shape={target.reachable ? 'circle' : 'cross'}
-            legendType={target.reachable ? 'circle' : 'cross'}
+            name="Reachable region"
+            data={[...region]}
+            fill={chartColors.teal}
+            shape={noMarker}
+            legendType="square"
             isAnimationActive={false}
           />
-        )}
-      </ScatterChart>
-    </ResponsiveContainer>
+          <ReferenceDot x={0} y={0} r={3} fill={chartColors.ink} stroke="none" />
+          {target && (
+            <Scatter
+              name={target.reachable ? 'Wanted point (reachable)' : 'Wanted point (out of reach)'}
+              data={[target]}
+              fill={target.reachable ? chartColors.copper : chartColors.danger}
+              shape={target.reachable ? 'circle' : 'cross'}
+              legendType={target.reachable ? 'circle' : 'cross'}
+              isAnimationActive={false}
+            />
+          )}
+        </ScatterChart>
+      </ResponsiveContainer>
+      <ChartFigures
+        figures={[
+          { label: 'Reachable region, corners', value: cornersText(region) },
+          ...(target
+            ? [{ label: target.reachable ? 'Wanted point, reachable' : 'Wanted point, out of reach', value: cornersText([target]) }]
+            : []),
+        ]}
+      />
+    </div>
   );
 }
