@@ -14,8 +14,8 @@ const AFM = 'Beam-deflection AFM on a slate offcut';
 const BAR = DEMO_PARTS.find((p) => p.key === 'cartridge-bar')!.name;
 
 /** Loads a page, waits until its heading shows and the network is quiet, then runs every axe-core rule on it. */
-async function violations(page: Page, url: string): Promise<string[]> {
-  await page.goto(url);
+async function violations(page: Page, url: string, load = true): Promise<string[]> {
+  if (load) await page.goto(url);
   await page.locator('main h1').first().waitFor();
   await page.waitForLoadState('networkidle');
   await page.getByText(/^Loading/).waitFor({ state: 'detached' });
@@ -61,6 +61,27 @@ describe('journey: axe-core finds no accessibility violations on the main pages'
       '/workbench/expected-gain',
     ]);
     expect(report).toEqual({});
+    expect(j.errors).toEqual([]);
+  });
+
+  test('when a visitor reads the same pages on a 390 px phone, then no page has a violation', async () => {
+    const { page } = j.browser;
+    const build = await Build.findOne({ where: { title: AFM } });
+    const part = await Part.findOne({ where: { name: BAR } });
+    await page.setViewportSize({ width: 390, height: 844 });
+    const report = await audit(page, j.live.baseUrl, [
+      '/',
+      '/builds',
+      `/builds/${build!.id}`,
+      '/parts',
+      `/parts/${part!.id}`,
+      '/exchange',
+      '/workbench/fit',
+    ]);
+    await page.getByRole('button', { name: 'Menu' }).click();
+    const menu = await violations(page, page.url(), false);
+    await page.setViewportSize({ width: 1280, height: 860 });
+    expect({ ...report, ...(menu.length > 0 ? { 'menu open': menu } : {}) }).toEqual({});
     expect(j.errors).toEqual([]);
   });
 
