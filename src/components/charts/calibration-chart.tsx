@@ -85,7 +85,7 @@ export function CalibrationChart({
       .filter(([, ps]) => ps.length > 0)
       .map(([label, ps]) => ({ label, value: seriesText(ps, axes) })),
     ...(fit && line
-      ? [{ label: 'Fitted line', value: `${formatShort(fit.gainNmPerV, 4)} nm/V, intercept ${formatShort(fit.interceptNm)} nm` }]
+      ? [{ label: 'Fitted gain', value: `${formatShort(fit.gainNmPerV, 4)} nm/V, intercept ${formatShort(fit.interceptNm)} nm` }]
       : []),
     ...(all.length > points.length ? [{ label: 'Drawn', value: `${points.length} of ${all.length} points, evenly spaced` }] : []),
   ];
