@@ -33,6 +33,7 @@ export function DecisionForm<D extends string>({
   noteHint,
   publicNote,
   noteRows = 3,
+  label = 'Decision',
   onDecide,
 }: {
   id: string;
@@ -44,6 +45,8 @@ export function DecisionForm<D extends string>({
   publicNote?: { decision: D; label: string };
   /** Height of the note box; a run's form inside a build panel uses a small one. */
   noteRows?: number;
+  /** The form's name (a landmark): unique on the page, e.g. one run's decision inside a build panel. */
+  label?: string;
   onDecide: (values: Values<D>) => Promise<unknown>;
 }) {
   const { register, handleSubmit, setValue, setError, formState, watch } = useForm<Values<string>, unknown, Values<D>>({
@@ -82,7 +85,7 @@ export function DecisionForm<D extends string>({
       noValidate
       onSubmit={(e) => e.preventDefault()}
       className="space-y-3 rounded-lg border border-rule bg-paper-deep/60 p-3"
-      aria-label="Decision"
+      aria-label={label}
     >
       <div>
         <label htmlFor={noteId} className="mb-1 block text-sm font-medium">

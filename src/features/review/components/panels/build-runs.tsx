@@ -76,6 +76,7 @@ function BuildRun({ run, onDecided }: { run: QueueRunDto; onDecided: (decision: 
           noteLabel="Note on this run"
           noteHint={RUN_NOTE_HINT}
           noteRows={1}
+          label={`Decision on ${title}`}
           onDecide={async (v) => {
             await decide.mutateAsync({ id: run.id, ...v });
             onDecided(v.decision, title);
