@@ -1,3 +1,4 @@
+import { randomBytes } from 'node:crypto';
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import type { Role } from '@shared/policies.ts';
 
@@ -13,7 +14,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare mailOptOut: CreationOptional<boolean>;
   /** Mail kinds this person turned off, comma-separated (see shared/schemas/mail-choices.ts). */
   declare mailOff: CreationOptional<string>;
-  /** Random key that signs this person's one-click unsubscribe links; made on first need. */
+  /** Random key that signs this person's one-click unsubscribe links; made with the account. */
   declare mailKey: CreationOptional<string | null>;
   declare lastSignInAt: CreationOptional<Date | null>;
   declare dataLicenceAcceptedAt: CreationOptional<Date | null>;
@@ -33,7 +34,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         suspendedAt: DataTypes.DATE,
         mailOptOut: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         mailOff: { type: DataTypes.STRING(100), allowNull: false, defaultValue: '' },
-        mailKey: DataTypes.STRING(64),
+        // Made with the account, so sending mail never writes the users row inside another transaction.
+        mailKey: { type: DataTypes.STRING(64), allowNull: true, defaultValue: () => randomBytes(32).toString('base64url') },
         lastSignInAt: DataTypes.DATE,
         dataLicenceAcceptedAt: DataTypes.DATE,
         createdAt: DataTypes.DATE,

@@ -3,7 +3,7 @@
 // A link names the person and the kind and carries an HMAC-SHA256 (RFC 2104) of both under a random per-person key,
 // so it works without signing in and cannot be made for someone else. Opening the link (GET) changes nothing
 // (RFC 8058 §3.2: mail scanners fetch links); the POST does.
-import { createHmac, randomBytes, timingSafeEqual } from 'node:crypto';
+import { createHmac, timingSafeEqual } from 'node:crypto';
 import type { Transaction } from 'sequelize';
 import type { Actor } from '@shared/policies.ts';
 import {
@@ -23,14 +23,14 @@ import { APP_URL } from './outbox-placeholders.ts';
 const sign = (key: string, userId: number, kind: MailKind) =>
   createHmac('sha256', key).update(`unsubscribe:${userId}:${kind}`).digest('base64url').slice(0, 32);
 
-/** The person's signing key, made and stored on first need. */
+/**
+ * The person's signing key. It is made with the account (model default; the migration filled older accounts), so
+ * nothing here writes: a write to the users row inside a decision's transaction would upgrade the shared lock its
+ * foreign-key checks hold, and two decisions about one maker's work would deadlock.
+ */
 async function mailKeyOf(userId: number, transaction?: Transaction): Promise<string | null> {
   const user = await User.findByPk(userId, { attributes: ['id', 'mailKey'], transaction });
-  if (!user) return null;
-  if (user.mailKey) return user.mailKey;
-  const key = randomBytes(32).toString('base64url');
-  await User.update({ mailKey: key }, { where: { id: userId, mailKey: null }, transaction });
-  return (await User.findByPk(userId, { attributes: ['mailKey'], transaction }))?.mailKey ?? key;
+  return user?.mailKey ?? null;
 }
 
 export interface UnsubscribeLinks {

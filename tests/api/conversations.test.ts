@@ -304,3 +304,22 @@ describe('every mail', () => {
     expect(without.map((m) => m.subject)).toEqual([]);
   });
 });
+
+describe('decisions about one maker at the same time', () => {
+  test('when two moderators decide six builds of one maker at once, then every decision succeeds and every mail is queued', async () => {
+    // Sending a decision's mail reads the maker's signing key and writes nothing to their account row: a write there
+    // would upgrade the shared lock the notification's foreign-key check holds, and concurrent decisions would deadlock.
+    const maker = await person();
+    const mods = [await person('moderator'), await person('moderator')];
+    const builds = await Promise.all(
+      Array.from({ length: 6 }, (_, i) => createBuildRow(maker.user.id, { status: 'submitted', title: `Race ${i}` })),
+    );
+    const answers = await Promise.all(
+      builds.map((b, i) =>
+        post(mods[i % 2]!.agent, `/api/review/builds/${b.id}/decision`, { decision: i % 3 ? 'publish' : 'return', note: 'Checked.' }),
+      ),
+    );
+    expect(answers.map((r) => r.status)).toEqual(builds.map(() => 200));
+    expect(await OutboxMail.count({ where: { toAddress: `${maker.user.login}@example.test` } })).toBe(6);
+  });
+});

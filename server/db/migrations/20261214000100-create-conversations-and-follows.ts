@@ -1,3 +1,4 @@
+import { randomBytes } from 'node:crypto';
 import { DataTypes } from 'sequelize';
 import type { Migration } from '../migrator.ts';
 
@@ -47,6 +48,11 @@ export const up: Migration = async ({ context: qi }) => {
   await qi.addIndex('notifications', ['user_id', 'read_at']);
   await qi.addColumn('users', 'mail_off', { type: DataTypes.STRING(100), allowNull: false, defaultValue: '' });
   await qi.addColumn('users', 'mail_key', { type: DataTypes.STRING(64), allowNull: true });
+  // Every existing account gets its key now; new ones get theirs when created (the model's default).
+  const [users] = (await qi.sequelize.query('SELECT id FROM users WHERE mail_key IS NULL')) as [Array<{ id: number }>, unknown];
+  for (const u of users) {
+    await qi.sequelize.query('UPDATE users SET mail_key = ? WHERE id = ?', { replacements: [randomBytes(32).toString('base64url'), u.id] });
+  }
   await qi.addColumn('mail_outbox', 'headers', { type: DataTypes.TEXT, allowNull: true });
   await qi.changeColumn('reports', 'target_type', { type: DataTypes.ENUM('build', 'run', 'part', 'listing', 'comment'), allowNull: false });
 };
