@@ -20,11 +20,14 @@ export const apiNotFound: RequestHandler = (req, res) => {
 /** The database could not be reached (refused, timed out, connection lost), as opposed to a query that failed. */
 export function isDbDown(err: unknown): boolean {
   if (err instanceof ConnectionError || err instanceof TimeoutError) return true;
-  type Coded = { code?: string; sqlState?: string; errno?: number };
+  type Coded = { code?: string; sqlState?: string; errno?: number; fatal?: boolean };
   const e = err as { name?: string; original?: Coded; parent?: Coded } & Coded;
   const code = e?.original?.code ?? e?.parent?.code ?? e?.code ?? '';
   const sqlState = e?.original?.sqlState ?? e?.parent?.sqlState ?? e?.sqlState ?? '';
   const errno = e?.original?.errno ?? e?.parent?.errno ?? e?.errno;
+  // The mariadb driver marks an error `fatal` when it has ended the connection (the socket closed, the server went away
+  // mid-statement): whatever its code, the database is not reachable on that connection.
+  const fatal = e?.original?.fatal ?? e?.parent?.fatal ?? e?.fatal;
   // SQLSTATE class 08 is "connection exception" (SQL standard); the codes are the driver's and Node's. A server that
   // is shutting down also kills the statements it is running or holding on a lock: 1053 ER_SERVER_SHUTDOWN,
   // 1317 ER_QUERY_INTERRUPTED, 1927 ER_CONNECTION_KILLED [S: MariaDB Server error codes reference].
@@ -32,6 +35,7 @@ export function isDbDown(err: unknown): boolean {
     /ECONNREFUSED|ER_GET_CONNECTION_TIMEOUT|ER_CONNECTION_TIMEOUT|ER_SOCKET_UNEXPECTED_CLOSE|ECONNRESET|PROTOCOL_CONNECTION_LOST|ER_CONNECTION_ALREADY_CLOSED|ER_CMD_CONNECTION_CLOSED|ER_POOL_ALREADY_CLOSED|ER_SERVER_SHUTDOWN|ER_QUERY_INTERRUPTED|ER_CONNECTION_KILLED/.test(
       code,
     ) ||
+    fatal === true ||
     errno === 1053 ||
     errno === 1317 ||
     errno === 1927 ||

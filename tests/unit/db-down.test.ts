@@ -16,12 +16,21 @@ describe('isDbDown', () => {
     ['a statement killed at shutdown', wrapped('ER_CONNECTION_KILLED', 1927, '70100')],
     ['a query interrupted at shutdown', wrapped('ER_QUERY_INTERRUPTED', 1317, '70100')],
     ['a socket closed under a query', wrapped('ER_SOCKET_UNEXPECTED_CLOSE', 45007, '08S01')],
+    // Any error the driver marks fatal has ended its connection (mariadb connector's `fatal` flag).
+    [
+      'a fatal driver error of another code',
+      { name: 'SequelizeDatabaseError', original: { code: 'ER_UNKNOWN_ERROR', errno: 1105, sqlState: 'HY000', fatal: true } },
+    ],
   ])('when %s, then the database is down (503)', (_what, err) => {
     expect(isDbDown(err)).toBe(true);
   });
 
   test.each([
     ['a duplicate key', wrapped('ER_DUP_ENTRY', 1062, '23000')],
+    [
+      'a non-fatal error of that code',
+      { name: 'SequelizeDatabaseError', original: { code: 'ER_UNKNOWN_ERROR', errno: 1105, sqlState: 'HY000', fatal: false } },
+    ],
     ['a syntax error', wrapped('ER_PARSE_ERROR', 1064, '42000')],
     ['a plain error', new Error('boom')],
   ])('when %s, then it is not a database outage', (_what, err) => {
