@@ -23,15 +23,10 @@ import { APP_URL } from './outbox-placeholders.ts';
 const sign = (key: string, userId: number, kind: MailKind) =>
   createHmac('sha256', key).update(`unsubscribe:${userId}:${kind}`).digest('base64url').slice(0, 32);
 
-/**
- * The person's signing key. It is made with the account (model default; the migration filled older accounts), so
- * nothing here writes: a write to the users row inside a decision's transaction would upgrade the shared lock its
- * foreign-key checks hold, and two decisions about one maker's work would deadlock.
- */
-async function mailKeyOf(userId: number, transaction?: Transaction): Promise<string | null> {
-  const user = await User.findByPk(userId, { attributes: ['id', 'mailKey'], transaction });
-  return user?.mailKey ?? null;
-}
+const linksFor = (userId: number, key: string, kind: MailKind): UnsubscribeLinks => {
+  const tail = `${userId}/${kind}/${sign(key, userId, kind)}`;
+  return { oneClick: `${APP_URL}/api/mail/unsubscribe/${tail}`, page: `${APP_URL}/mail/stop/${tail}` };
+};
 
 export interface UnsubscribeLinks {
   /** The one-click POST target for List-Unsubscribe (RFC 8058). */
@@ -40,18 +35,25 @@ export interface UnsubscribeLinks {
   page: string;
 }
 
-/** Both addresses for one person and kind, with the app's address left as the outbox placeholder. */
-export async function unsubscribeLinks(userId: number, kind: MailKind, transaction?: Transaction): Promise<UnsubscribeLinks | null> {
-  const key = await mailKeyOf(userId, transaction);
-  if (!key) return null;
-  const tail = `${userId}/${kind}/${sign(key, userId, kind)}`;
-  return { oneClick: `${APP_URL}/api/mail/unsubscribe/${tail}`, page: `${APP_URL}/mail/stop/${tail}` };
+/**
+ * Whether mail of this kind may go to this person, and the links to stop it, from one read of their row (inside the
+ * sender's transaction). The signing key is made with the account (model default; the migration filled older ones),
+ * so nothing here writes: a write to the users row inside a decision's transaction would upgrade the shared lock its
+ * foreign-key checks hold, and two decisions about one maker's work would deadlock.
+ */
+export async function mailingFor(
+  userId: number,
+  kind: MailKind,
+  transaction?: Transaction,
+): Promise<{ wanted: boolean; links: UnsubscribeLinks | null }> {
+  const user = await User.findByPk(userId, { attributes: ['id', 'mailOff', 'mailKey'], transaction });
+  if (!user) return { wanted: false, links: null };
+  return { wanted: !parseMailOff(user.mailOff).has(kind), links: user.mailKey ? linksFor(user.id, user.mailKey, kind) : null };
 }
 
-/** Whether mails of this kind may go to this person (read inside the sender's transaction). */
-export async function wantsMail(userId: number, kind: MailKind, transaction?: Transaction): Promise<boolean> {
-  const user = await User.findByPk(userId, { attributes: ['id', 'mailOff'], transaction });
-  return user !== null && !parseMailOff(user.mailOff).has(kind);
+/** Both addresses for one person and kind, with the app's address left as the outbox placeholder. */
+export async function unsubscribeLinks(userId: number, kind: MailKind, transaction?: Transaction): Promise<UnsubscribeLinks | null> {
+  return (await mailingFor(userId, kind, transaction)).links;
 }
 
 async function checkedUser(params: UnsubscribeParams): Promise<User> {

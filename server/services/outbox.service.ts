@@ -7,7 +7,7 @@ import { User } from '../models/user.model.ts';
 import type { Logger } from '../logger.ts';
 import type { Mailer, OutgoingMail } from './mail.service.ts';
 import { mailKindLabels, type MailKind } from '@shared/schemas/mail-choices.ts';
-import { unsubscribeLinks, wantsMail } from './mail-choices.service.ts';
+import { mailingFor } from './mail-choices.service.ts';
 
 import { APP_URL } from './outbox-placeholders.ts';
 
@@ -58,8 +58,8 @@ export async function enqueueMail(
   let { text, html } = mail;
   let headers: Record<string, string> | null = null;
   if (opts.kind && recipient.id) {
-    if (!(await wantsMail(recipient.id, opts.kind, opts.transaction))) return false;
-    const links = await unsubscribeLinks(recipient.id, opts.kind, opts.transaction);
+    const { wanted, links } = await mailingFor(recipient.id, opts.kind, opts.transaction);
+    if (!wanted) return false;
     if (links) {
       headers = { 'List-Unsubscribe': `<${links.oneClick}>`, 'List-Unsubscribe-Post': 'List-Unsubscribe=One-Click' };
       const what = mailKindLabels[opts.kind].title.toLowerCase();

@@ -163,7 +163,7 @@ export async function decideRun(actor: Actor | null, runId: number, input: Accep
     authorize(me, 'review.decide', { authorIds: [run.ownerId] });
     if (run.status !== 'pending') throw notWaiting('calibration run');
     // Read the build under a shared lock: a decision on the build waits for this one, and this one sees its outcome.
-    const build = await Build.findByPk(run.buildId, { transaction, lock: transaction.LOCK.SHARE, attributes: ['id', 'status'] });
+    const build = await Build.findByPk(run.buildId, { transaction, lock: transaction.LOCK.SHARE, attributes: ['id', 'status', 'title'] });
     if (!build || !RUN_DECIDABLE_BUILD_STATUSES.includes(build.status)) {
       throw new ConflictError(
         `This run's build is ${build?.status ?? 'gone'}: runs are decided once their build is submitted, and count only while it is published.`,
@@ -177,10 +177,7 @@ export async function decideRun(actor: Actor | null, runId: number, input: Accep
     await run.update({ status, reviewNote: input.note ?? null, reviewedById: me.id, reviewedAt: new Date() }, { transaction });
     await recomputePartStats(run.partId, transaction);
     const name = await nameRun(run, transaction);
-    if (status === 'accepted' && build.status === 'published') {
-      const title = (await Build.findByPk(build.id, { attributes: ['title'], transaction }))?.title ?? '';
-      await announceCountedRuns([run.id], title, transaction);
-    }
+    if (status === 'accepted' && build.status === 'published') await announceCountedRuns([run.id], build.title, transaction);
     await recordAudit(
       me,
       { action: `run.${input.decision}`, targetType: 'run', targetId: run.id, targetLabel: name, note: input.note },

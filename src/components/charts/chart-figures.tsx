@@ -16,14 +16,15 @@ export function rangeText(values: readonly number[], unit: string): string {
   return lo === hi ? `${formatShort(lo)} ${unit}` : `${formatShort(lo)} to ${formatShort(hi)} ${unit}`;
 }
 
-/** "12 points, x from 0 to 40 V, displacement from … nm" for a plotted series. */
+/** "12 points, x from 0 to 40 V, displacement from … nm" for a plotted series; `count: false` leaves the count out (a drawn curve). */
 export function seriesText<P>(
   points: readonly P[],
   axes: ReadonlyArray<readonly [name: string, value: (p: P) => number, unit: string]>,
+  opts: { count?: boolean } = {},
 ): string {
   if (points.length === 0) return 'no points';
   return [
-    `${points.length} ${points.length === 1 ? 'point' : 'points'}`,
+    ...(opts.count === false ? [] : [`${points.length} ${points.length === 1 ? 'point' : 'points'}`]),
     ...axes.map(([name, value, unit]) => `${name} ${rangeText(points.map(value), unit)}`),
   ].join(', ');
 }

@@ -57,7 +57,7 @@ export function CreepChart({ samples, curve }: { samples: readonly CreepPoint[];
       <ChartFigures
         figures={[
           { label: 'Samples', value: seriesText(samples, creepAxes) },
-          { label: 'Fitted creep law', value: seriesText(curve, creepAxes).replace(/^\d+ points?, /, '') },
+          { label: 'Fitted creep law', value: seriesText(curve, creepAxes, { count: false }) },
         ]}
       />
     </div>

@@ -53,7 +53,7 @@ export function LoopChart({ samples, ellipse }: { samples: readonly LoopPoint[];
       <ChartFigures
         figures={[
           { label: 'Samples drawn', value: seriesText(samples, loopAxes) },
-          { label: 'Fitted ellipse', value: seriesText(ellipse, loopAxes).replace(/^\d+ points?, /, '') },
+          { label: 'Fitted ellipse', value: seriesText(ellipse, loopAxes, { count: false }) },
         ]}
       />
     </div>
