@@ -7,7 +7,7 @@ import {
   type NonAttribute,
   type Sequelize,
 } from 'sequelize';
-import type { BuildStage, BuildStatus, InstrumentKind } from '@shared/schemas/build.ts';
+import type { BuildStage, BuildStatus, InstrumentKind } from '@shared/schemas/build-vocabulary.ts';
 import type { User } from './user.model.ts';
 
 export class Build extends Model<InferAttributes<Build>, InferCreationAttributes<Build>> {

@@ -1,5 +1,5 @@
 // When a calibration run counts in the parts registry, and when a moderator may decide it.
-import type { BuildStatus } from '../schemas/build.ts';
+import type { BuildStatus } from '../schemas/build-vocabulary.ts';
 
 /**
  * A run is decided while its build is on the desk or published: a draft (or a returned or declined build) is

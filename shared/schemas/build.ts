@@ -3,42 +3,7 @@ import { multiLine, singleLine } from './text.ts';
 import { altText } from './alt-text.ts';
 import type { ActuatorDto } from './actuator.ts';
 
-export const INSTRUMENT_KINDS = [
-  'tunnelling-microscope',
-  'force-microscope',
-  'profilometer',
-  'positioning-stage',
-  'manipulator',
-  'other',
-] as const;
-export type InstrumentKind = (typeof INSTRUMENT_KINDS)[number];
-export const BUILD_STAGES = ['planning', 'assembling', 'first-signal', 'working', 'retired'] as const;
-export type BuildStage = (typeof BUILD_STAGES)[number];
-export const BUILD_STATUSES = ['draft', 'submitted', 'published', 'returned', 'declined'] as const;
-export type BuildStatus = (typeof BUILD_STATUSES)[number];
-
-export const instrumentKindLabels: Record<InstrumentKind, string> = {
-  'tunnelling-microscope': 'Tunnelling microscope',
-  'force-microscope': 'Force microscope',
-  profilometer: 'Profilometer',
-  'positioning-stage': 'Positioning stage',
-  manipulator: 'Manipulator',
-  other: 'Other instrument',
-};
-export const buildStageLabels: Record<BuildStage, string> = {
-  planning: 'Planning',
-  assembling: 'Assembling',
-  'first-signal': 'First signal',
-  working: 'Working',
-  retired: 'Retired',
-};
-export const buildStatusLabels: Record<BuildStatus, string> = {
-  draft: 'Draft',
-  submitted: 'Pending review',
-  published: 'Published',
-  returned: 'Returned with notes',
-  declined: 'Declined',
-};
+import { INSTRUMENT_KINDS, BUILD_STAGES, type InstrumentKind, type BuildStage, type BuildStatus } from './build-vocabulary.ts';
 
 const title = singleLine(160).min(3, 'At least 3 characters.');
 const summary = multiLine(600).trim().min(1, 'Say in a sentence what this build is.');

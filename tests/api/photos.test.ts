@@ -6,7 +6,7 @@ import { tmpdir } from 'node:os';
 import { basename, dirname, join } from 'node:path';
 import request from 'supertest';
 import sharp from 'sharp';
-import type { BuildStatus } from '@shared/schemas/build.ts';
+import type { BuildStatus } from '@shared/schemas/build-vocabulary.ts';
 import { startTestApp, type TestApp } from '../support/test-app.ts';
 import { signIn, type Agent } from '../support/login.ts';
 import { createUser } from '../support/factories.ts';

@@ -60,4 +60,37 @@ describe('journey: loading pages and the builds grid', () => {
     }
     expect(j.errors).toEqual([]);
   });
+
+  test("when a page's code is still on its way, then the bar shows; when it cannot load, the page says so and leaving clears it", async () => {
+    const { page } = j.browser;
+    await page.setViewportSize({ width: 1366, height: 900 });
+    await page.goto(`${j.live.baseUrl}/workbench`);
+    await page.getByRole('heading', { level: 1 }).first().waitFor();
+    let release!: () => void;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    await page.route(/\/assets\/api-reference-[^/]*\.js/, async (route) => {
+      await held;
+      await route.continue();
+    });
+    await page.getByRole('link', { name: 'API and rig tokens' }).click();
+    const bar = page.getByRole('progressbar', { name: 'Loading the page' });
+    await bar.waitFor();
+    release();
+    await page.getByRole('heading', { level: 1, name: /API/ }).waitFor();
+    await bar.waitFor({ state: 'detached' });
+    await page.unroute(/\/assets\/api-reference-[^/]*\.js/);
+    expect(j.errors).toEqual([]);
+
+    // A chunk that fails (a deploy replaced it, the network dropped) shows the error block, not a blank page.
+    await page.route(/\/assets\/notifications-[^/]*\.js/, (route) => route.abort());
+    await page.goto(`${j.live.baseUrl}/notifications`);
+    await page.getByRole('heading', { name: 'Something went wrong' }).waitFor();
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Workbench' }).click();
+    await page.getByRole('heading', { level: 1 }).first().waitFor();
+    expect(await page.getByRole('heading', { name: 'Something went wrong' }).count()).toBe(0);
+    await page.unroute(/\/assets\/notifications-[^/]*\.js/);
+    // The only errors are the browser's own reports of the refused chunk.
+    expect(j.errors.length).toBeGreaterThan(0);
+    expect(j.errors.filter((e) => !/notifications-|Failed to fetch|ERR_FAILED|dynamically imported module/i.test(e))).toEqual([]);
+  });
 });

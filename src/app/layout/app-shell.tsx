@@ -10,9 +10,25 @@ import { toActor } from '@/features/session/to-actor.ts';
 import { AccountMenu } from './account-menu.tsx';
 import { PersonalLinks } from './personal-links.tsx';
 import { RouteProgress } from './route-progress.tsx';
+import { RouteErrorBoundary } from '@/components/ui/route-error.tsx';
 
 const linkClass = ({ isActive }: { isActive: boolean }) =>
   `block rounded px-3 py-2 text-sm font-medium md:py-1.5 ${isActive ? 'bg-ink text-paper' : 'text-ink hover:bg-paper-deep'}`;
+
+/** The main navigation's links, the same in the header and in the phone menu. */
+function NavList({ items, className }: { items: Array<{ to: string; label: string }>; className: string }) {
+  return (
+    <ul className={className}>
+      {items.map((n) => (
+        <li key={n.to}>
+          <NavLink to={n.to} className={linkClass}>
+            {n.label}
+          </NavLink>
+        </li>
+      ))}
+    </ul>
+  );
+}
 
 /** Header with mark, navigation by role, account controls; the page below. */
 export function AppShell() {
@@ -44,15 +60,7 @@ export function AppShell() {
             <span className="text-lg font-semibold tracking-tight">Scanwright</span>
           </Link>
           <nav aria-label="Main" className="hidden flex-1 md:block">
-            <ul className="flex gap-1">
-              {nav.map((n) => (
-                <li key={n.to}>
-                  <NavLink to={n.to} className={linkClass}>
-                    {n.label}
-                  </NavLink>
-                </li>
-              ))}
-            </ul>
+            <NavList items={nav} className="flex gap-1" />
           </nav>
           <div className="ml-auto hidden md:block">
             <AccountMenu session={session ?? null} />
@@ -69,15 +77,7 @@ export function AppShell() {
         </div>
         {open && (
           <nav id="mobile-nav" aria-label="Main" className="border-t border-rule px-4 py-2 md:hidden" onClick={() => setOpen(false)}>
-            <ul className="space-y-1">
-              {nav.map((n) => (
-                <li key={n.to}>
-                  <NavLink to={n.to} className={linkClass}>
-                    {n.label}
-                  </NavLink>
-                </li>
-              ))}
-            </ul>
+            <NavList items={nav} className="space-y-1" />
             <div className="mt-3 border-t border-rule pt-3">
               <AccountMenu session={session ?? null} />
             </div>
@@ -95,7 +95,9 @@ export function AppShell() {
             </Notice>
           </div>
         )}
-        <Outlet />
+        <RouteErrorBoundary key={location.pathname}>
+          <Outlet />
+        </RouteErrorBoundary>
       </main>
       <footer className="border-t border-rule py-4 text-center text-xs text-ink-soft">
         <p>

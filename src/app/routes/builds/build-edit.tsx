@@ -1,7 +1,7 @@
 import { Loading } from '@/components/ui/load-states.tsx';
 import { useQuery } from '@tanstack/react-query';
 import { Link, useParams } from 'react-router-dom';
-import { buildStatusLabels } from '@shared/schemas/build.ts';
+import { buildStatusLabels } from '@shared/schemas/build-vocabulary.ts';
 import { ApiError } from '@/lib/api-client.ts';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';

@@ -1,13 +1,44 @@
 import type { RouteObject } from 'react-router-dom';
+import { lazyPage } from '../../lazy-page.tsx';
 
 /** Builds: the published index, my builds, the editor and the build page, each its own chunk. */
 export const buildsRoutes: RouteObject = {
   path: 'builds',
   children: [
-    { index: true, lazy: async () => ({ Component: (await import('./builds-index.tsx')).BuildsIndexPage }) },
-    { path: 'mine', lazy: async () => ({ Component: (await import('./my-builds.tsx')).MyBuildsPage }) },
-    { path: 'new', lazy: async () => ({ Component: (await import('./build-new.tsx')).BuildNewPage }) },
-    { path: ':buildId', lazy: async () => ({ Component: (await import('./build-page.tsx')).BuildPage }) },
-    { path: ':buildId/edit', lazy: async () => ({ Component: (await import('./build-edit.tsx')).BuildEditPage }) },
+    {
+      index: true,
+      element: lazyPage(
+        () => import('./builds-index.tsx'),
+        (m) => m.BuildsIndexPage,
+      ),
+    },
+    {
+      path: 'mine',
+      element: lazyPage(
+        () => import('./my-builds.tsx'),
+        (m) => m.MyBuildsPage,
+      ),
+    },
+    {
+      path: 'new',
+      element: lazyPage(
+        () => import('./build-new.tsx'),
+        (m) => m.BuildNewPage,
+      ),
+    },
+    {
+      path: ':buildId',
+      element: lazyPage(
+        () => import('./build-page.tsx'),
+        (m) => m.BuildPage,
+      ),
+    },
+    {
+      path: ':buildId/edit',
+      element: lazyPage(
+        () => import('./build-edit.tsx'),
+        (m) => m.BuildEditPage,
+      ),
+    },
   ],
 };

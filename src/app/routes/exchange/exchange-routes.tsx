@@ -1,14 +1,45 @@
 import type { RouteObject } from 'react-router-dom';
+import { lazyPage } from '../../lazy-page.tsx';
 
 /** Exchange: listings, a listing's page, the listing form and my listings, each its own chunk. */
 export const exchangeRoutes: RouteObject = {
   path: 'exchange',
   children: [
-    { index: true, lazy: async () => ({ Component: (await import('./exchange-index.tsx')).ExchangeIndexPage }) },
-    { path: 'new', lazy: async () => ({ Component: (await import('./listing-new.tsx')).ListingNewPage }) },
-    { path: 'mine', lazy: async () => ({ Component: (await import('./my-listings.tsx')).MyListingsPage }) },
-    { path: ':listingId', lazy: async () => ({ Component: (await import('./listing-page.tsx')).ListingPage }) },
-    { path: ':listingId/edit', lazy: async () => ({ Component: (await import('./listing-edit.tsx')).ListingEditPage }) },
+    {
+      index: true,
+      element: lazyPage(
+        () => import('./exchange-index.tsx'),
+        (m) => m.ExchangeIndexPage,
+      ),
+    },
+    {
+      path: 'new',
+      element: lazyPage(
+        () => import('./listing-new.tsx'),
+        (m) => m.ListingNewPage,
+      ),
+    },
+    {
+      path: 'mine',
+      element: lazyPage(
+        () => import('./my-listings.tsx'),
+        (m) => m.MyListingsPage,
+      ),
+    },
+    {
+      path: ':listingId',
+      element: lazyPage(
+        () => import('./listing-page.tsx'),
+        (m) => m.ListingPage,
+      ),
+    },
+    {
+      path: ':listingId/edit',
+      element: lazyPage(
+        () => import('./listing-edit.tsx'),
+        (m) => m.ListingEditPage,
+      ),
+    },
   ],
 };
 
@@ -16,7 +47,19 @@ export const exchangeRoutes: RouteObject = {
 export const inboxRoutes: RouteObject = {
   path: 'inbox',
   children: [
-    { index: true, lazy: async () => ({ Component: (await import('./inbox.tsx')).InboxPage }) },
-    { path: ':threadId', lazy: async () => ({ Component: (await import('./inbox-thread.tsx')).InboxThreadPage }) },
+    {
+      index: true,
+      element: lazyPage(
+        () => import('./inbox.tsx'),
+        (m) => m.InboxPage,
+      ),
+    },
+    {
+      path: ':threadId',
+      element: lazyPage(
+        () => import('./inbox-thread.tsx'),
+        (m) => m.InboxThreadPage,
+      ),
+    },
   ],
 };

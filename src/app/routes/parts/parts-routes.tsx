@@ -1,11 +1,30 @@
 import type { RouteObject } from 'react-router-dom';
+import { lazyPage } from '../../lazy-page.tsx';
 
 /** Parts registry: the searchable table, the proposal form and each part's page, each its own chunk. */
 export const partsRoutes: RouteObject = {
   path: 'parts',
   children: [
-    { index: true, lazy: async () => ({ Component: (await import('./parts-index.tsx')).PartsIndexPage }) },
-    { path: 'propose', lazy: async () => ({ Component: (await import('./propose-part.tsx')).ProposePartPage }) },
-    { path: ':partId', lazy: async () => ({ Component: (await import('./part-page.tsx')).PartPage }) },
+    {
+      index: true,
+      element: lazyPage(
+        () => import('./parts-index.tsx'),
+        (m) => m.PartsIndexPage,
+      ),
+    },
+    {
+      path: 'propose',
+      element: lazyPage(
+        () => import('./propose-part.tsx'),
+        (m) => m.ProposePartPage,
+      ),
+    },
+    {
+      path: ':partId',
+      element: lazyPage(
+        () => import('./part-page.tsx'),
+        (m) => m.PartPage,
+      ),
+    },
   ],
 };

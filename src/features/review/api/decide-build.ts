@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { BuildDecisionInput } from '@shared/schemas/review.ts';
-import type { BuildStatus } from '@shared/schemas/build.ts';
+import type { BuildStatus } from '@shared/schemas/build-vocabulary.ts';
 import { api } from '@/lib/api-client.ts';
 import { reviewKeys } from './get-review-queue.ts';
 

@@ -2,14 +2,8 @@ import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
-import {
-  BUILD_STAGES,
-  buildStageLabels,
-  createBuildInput,
-  INSTRUMENT_KINDS,
-  instrumentKindLabels,
-  type PhotoDto,
-} from '@shared/schemas/build.ts';
+import { createBuildInput, type PhotoDto } from '@shared/schemas/build.ts';
+import { BUILD_STAGES, buildStageLabels, INSTRUMENT_KINDS, instrumentKindLabels } from '@shared/schemas/build-vocabulary.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { describe, Field, FormError, inputClass } from '@/components/ui/form-bits.tsx';
 import { MarkdownField } from './markdown-field.tsx';

@@ -1,6 +1,6 @@
 import { useNavigate } from 'react-router-dom';
 import type { BuildDto } from '@shared/schemas/build.ts';
-import { buildStatusLabels } from '@shared/schemas/build.ts';
+import { buildStatusLabels } from '@shared/schemas/build-vocabulary.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { paths } from '@/config/paths.ts';
 import { useSubmitBuild } from '../../api/submit-build.ts';

@@ -1,6 +1,7 @@
 import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { buildStatusLabels, type BuildSummaryDto } from '@shared/schemas/build.ts';
+import { type BuildSummaryDto } from '@shared/schemas/build.ts';
+import { buildStatusLabels } from '@shared/schemas/build-vocabulary.ts';
 import { formatDate } from '@shared/format/dates.ts';
 import { LinkButton } from '@/components/ui/link-button.tsx';
 import { paths } from '@/config/paths.ts';

@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
-import { buildStageLabels, instrumentKindLabels, type BuildSummaryDto } from '@shared/schemas/build.ts';
+import { type BuildSummaryDto } from '@shared/schemas/build.ts';
+import { buildStageLabels, instrumentKindLabels } from '@shared/schemas/build-vocabulary.ts';
 import { paths } from '@/config/paths.ts';
 import { CoverTile } from './cover-tile.tsx';
 import { GainList } from './gain-list.tsx';

@@ -1,4 +1,4 @@
-import { INSTRUMENT_KINDS, instrumentKindLabels } from '@shared/schemas/build.ts';
+import { INSTRUMENT_KINDS, instrumentKindLabels } from '@shared/schemas/build-vocabulary.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { ClearFilters, FilterSelect, FilterText, SearchForm } from '@/components/search/filter-controls.tsx';
 import type { useBuildSearch } from './use-build-search.ts';

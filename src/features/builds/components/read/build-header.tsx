@@ -1,4 +1,5 @@
-import { buildStageLabels, instrumentKindLabels, type BuildDto } from '@shared/schemas/build.ts';
+import { type BuildDto } from '@shared/schemas/build.ts';
+import { buildStageLabels, instrumentKindLabels } from '@shared/schemas/build-vocabulary.ts';
 import { LinkButton } from '@/components/ui/link-button.tsx';
 import { UserBadge } from '@/components/ui/user-badge.tsx';
 import { paths } from '@/config/paths.ts';

@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
-import { instrumentKindLabels, type BuildListDto } from '@shared/schemas/build.ts';
+import { type BuildListDto } from '@shared/schemas/build.ts';
+import { instrumentKindLabels } from '@shared/schemas/build-vocabulary.ts';
 import { Pager } from '@/components/ui/pager.tsx';
 import { BuildCard } from './build-card.tsx';
 import { PendingMarker } from './gain-list.tsx';

@@ -1,4 +1,4 @@
-import { buildStatusLabels, type BuildStatus } from '@shared/schemas/build.ts';
+import { buildStatusLabels, type BuildStatus } from '@shared/schemas/build-vocabulary.ts';
 import { StatusBadge } from '@/components/ui/status-badge.tsx';
 import { buildStatusTone } from './format.ts';
 

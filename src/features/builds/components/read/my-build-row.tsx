@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
-import { buildStageLabels, instrumentKindLabels, type BuildSummaryDto } from '@shared/schemas/build.ts';
+import { type BuildSummaryDto } from '@shared/schemas/build.ts';
+import { buildStageLabels, instrumentKindLabels } from '@shared/schemas/build-vocabulary.ts';
 import { Notice } from '@/components/ui/notice.tsx';
 import { paths } from '@/config/paths.ts';
 import { BuildStatusBadge } from './build-status-badge.tsx';

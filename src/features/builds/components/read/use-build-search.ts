@@ -1,5 +1,6 @@
 import { useSearchParams } from 'react-router-dom';
-import { listBuildsQuery, type InstrumentKind, type ListBuildsQuery } from '@shared/schemas/build.ts';
+import { listBuildsQuery, type ListBuildsQuery } from '@shared/schemas/build.ts';
+import { type InstrumentKind } from '@shared/schemas/build-vocabulary.ts';
 import { readSearch, writeSearch } from '@/lib/url-search.ts';
 import { paths } from '@/config/paths.ts';
 

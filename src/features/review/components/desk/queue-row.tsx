@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { reportReasonLabels, type QueueBuildDto, type QueueRunDto } from '@shared/schemas/review.ts';
-import { instrumentKindLabels, type InstrumentKind } from '@shared/schemas/build.ts';
+import { instrumentKindLabels, type InstrumentKind } from '@shared/schemas/build-vocabulary.ts';
 import { partCategoryLabels, type PartCategory } from '@shared/schemas/part.ts';
 import { FlagChips } from '../flag-chips.tsx';
 import { age, count, sentenceCase, sig, targetTypeWords, withUncertainty } from '../format.ts';

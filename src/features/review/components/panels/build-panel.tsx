@@ -1,6 +1,7 @@
 import { Link } from 'react-router-dom';
 import { buildDecisionInput, type QueueBuildDto } from '@shared/schemas/review.ts';
-import { buildStageLabels, instrumentKindLabels, type BuildDto } from '@shared/schemas/build.ts';
+import { type BuildDto } from '@shared/schemas/build.ts';
+import { buildStageLabels, instrumentKindLabels } from '@shared/schemas/build-vocabulary.ts';
 import { Markdown } from '@/components/ui/markdown.tsx';
 import { paths } from '@/config/paths.ts';
 import { useReviewBuild } from '@/features/review/api/get-review-build.ts';
