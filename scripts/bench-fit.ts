@@ -11,6 +11,7 @@ import {
 import { fitSineRecord } from '../shared/workbench/sine-fit.ts';
 import type { SineFitInput } from '../shared/schemas/sine-fit.ts';
 import { analyseLattice } from '../shared/workbench/lattice.ts';
+import { seededRandom } from '../shared/stats/seeded-random.ts';
 
 const POINTS = 1_000_000;
 const SINE_SAMPLES = 200_000;
@@ -24,20 +25,8 @@ const GAIN_NM_PER_V = 102.6;
 const HALF_LOOP_NM = 300;
 const NOISE_SD_NM = 2;
 
-// mulberry32 PRNG (public-domain 32-bit generator) and Box–Muller for normal noise.
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 function buildPoints(): CalibrationPoint[] {
-  const rand = mulberry32(20240611);
+  const rand = seededRandom(20240611);
   const gauss = (): number => {
     const u = 1 - rand();
     return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * rand());
@@ -111,7 +100,7 @@ console.log(`target: median ≤ ${TARGET_MEDIAN_MS} ms for fitCalibration → ${
 // Sine fit of a 200 000-sample record (IEEE Std 1057 fits, issue 12's target ≤ 100 ms): 103 periods of 10.3 Hz
 // at 10 kHz with noise on both channels, frequency unknown (four-parameter) and given (three-parameter).
 function buildSineRecord(): SineFitInput {
-  const rand = mulberry32(20261202);
+  const rand = seededRandom(20261202);
   const gauss = (): number => Math.sqrt(-2 * Math.log(1 - rand())) * Math.cos(2 * Math.PI * rand());
   const w = 2 * Math.PI * 10.3;
   const samples = Array.from({ length: SINE_SAMPLES }, (_, i) => {
@@ -142,7 +131,7 @@ console.log(
 const LATTICE_SIDE = 1024;
 const LATTICE_TARGET_MEDIAN_MS = 1000;
 function buildLatticeImage(): number[][] {
-  const rand = mulberry32(18);
+  const rand = seededRandom(18);
   const gauss = (): number => Math.sqrt(-2 * Math.log(1 - rand())) * Math.cos(2 * Math.PI * rand());
   const len = 2 / (Math.sqrt(3) * 0.246);
   const waves = [42, 102, 162].map((d) => [len * Math.cos((d * Math.PI) / 180), len * Math.sin((d * Math.PI) / 180)] as const);

@@ -4,7 +4,7 @@ import { parseArgs } from 'node:util';
 import { createSequelize } from '../server/db/sequelize.ts';
 import { createMigrator } from '../server/db/migrator.ts';
 import { summarize } from '../shared/stats/quantiles.ts';
-import { seededRandom } from '../server/db/seed/demo-points.ts';
+import { seededRandom } from '../shared/stats/seeded-random.ts';
 import { benchConfig, scaleDbName, startBenchDb } from './lib/bench-db.ts';
 
 const { values } = parseArgs({

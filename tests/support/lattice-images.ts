@@ -2,18 +2,7 @@
 // pixel → nm map (nm/px in x and y, skew, rotation) plus seeded Gaussian noise. Every figure a test expects is
 // the one the image was made with [calc].
 import type { LatticeKind } from '../../shared/workbench/lattice.ts';
-
-/** Mulberry32, a small seeded PRNG [practice], so the noise is the same on every run. */
-export function prng(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+import { seededRandom } from '../../shared/stats/seeded-random.ts';
 
 export interface Scene {
   kind: LatticeKind;
@@ -46,7 +35,7 @@ export function reciprocal(kind: LatticeKind, a: number, thetaDeg: number): [num
 
 /** Image z(p) = Σ cos(2π b·A·p) + noise, A = [[sx, −sy sin φ], [0, sy cos φ]]. */
 export function makeImage(s: Scene): number[][] {
-  const rnd = prng(s.seed ?? 1);
+  const rnd = seededRandom(s.seed ?? 1);
   const gauss = () => Math.sqrt(-2 * Math.log(1 - rnd())) * Math.cos(2 * Math.PI * rnd()); // Box–Muller
   const waves = reciprocal(s.kind, s.a, s.rotationDeg)
     .map((b) => ({ b, amp: 1 }))

@@ -1,21 +1,10 @@
+import { seededRandom } from '../../shared/stats/seeded-random.ts';
 // Generated sine records for the sine-fit tests: drive V(t) = V₀ + R_V·sin(2πf·t + φ) and displacement
 // x(t) = x₀ + R_x·sin(2πf·t + φ − lag), each with seeded Gaussian noise, sampled at a fixed rate.
 
-/** mulberry32 (a public-domain 32-bit generator): the same numbers for the same seed. */
-export function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 /** Standard normal numbers by Box–Muller from a seeded uniform generator. */
 export function gaussian(seed: number): () => number {
-  const rand = mulberry32(seed);
+  const rand = seededRandom(seed);
   return () => Math.sqrt(-2 * Math.log(1 - rand())) * Math.cos(2 * Math.PI * rand());
 }
 

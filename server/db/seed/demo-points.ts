@@ -2,18 +2,7 @@
 // drawn from a seeded generator so every fresh install shows the same demo.
 import { fromNm, type DisplacementUnit } from '@shared/units.ts';
 import type { FitPoint } from '@shared/schemas/workbench.ts';
-
-/** mulberry32: a small seeded PRNG (public-domain algorithm by Tommy Ettinger). */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+import { seededRandom } from '../../../shared/stats/seeded-random.ts';
 
 /** Up then down sweep from 0 to maxVolts; the loop opens by loopFraction of the span at mid-range. */
 export function demoSweep(opts: {

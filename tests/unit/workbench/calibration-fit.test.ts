@@ -11,6 +11,7 @@ import {
 import { FitInputError, MAX_FIT_POINTS } from '@shared/workbench/fit-input-error.ts';
 import { tCritical95 } from '@shared/workbench/student-t.ts';
 import { readStrdFile, type StrdDataset } from '../../support/nist-strd.ts';
+import { seededRandom } from '../../../shared/stats/seeded-random.ts';
 
 const fixture = (name: string): StrdDataset => readStrdFile(new URL(`../../fixtures/${name}.dat`, import.meta.url));
 const toPoints = (d: StrdDataset): CalibrationPoint[] => d.x.map((volts, i) => ({ volts, displacementNm: d.y[i] }));
@@ -52,20 +53,9 @@ describe('fitCalibration against NIST StRD certified values [S: NIST/ITL Statist
   });
 });
 
-// Seeded PRNG (mulberry32) so the random reference data are the same on every run.
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = Math.imul(a ^ (a >>> 15), a | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 describe('fitCalibration against simple-statistics (npm) on seeded random data [calc: second reference, FIELD.md "Calibration fit"]', () => {
   it.each([1, 2, 3, 4, 5])('when seed %i, then slope, intercept, R² and residual SD agree to 1e-9', (seed) => {
-    const rand = mulberry32(seed);
+    const rand = seededRandom(seed);
     const n = 20 + Math.floor(rand() * 200);
     const gain = (rand() - 0.5) * 400;
     const offset = (rand() - 0.5) * 1000;

@@ -5,7 +5,8 @@ import { describe, expect, test } from 'vitest';
 import { analyseLattice, LatticeError } from '../../../shared/workbench/lattice.ts';
 import { latticeCalculator } from '../../../shared/workbench/calculators/lattice-calculator.ts';
 import { latticeInput } from '../../../shared/schemas/lattice.ts';
-import { makeImage, prng, rad, reciprocal } from '../../support/lattice-images.ts';
+import { makeImage, rad, reciprocal } from '../../support/lattice-images.ts';
+import { seededRandom } from '../../../shared/stats/seeded-random.ts';
 
 // Tolerances: the peak positions come from Gaussian interpolation on a Hann-windowed spectrum, whose bias is
 // a few hundredths of a bin [S: Gasior & Gonzalez 2004]; with 20+ periods across the image that is ≲ 0.3 % of
@@ -124,7 +125,7 @@ describe('lattice refusals', () => {
         ),
       ),
     ).toBe('no_periodicity');
-    const rnd = prng(7);
+    const rnd = seededRandom(7);
     const noise = Array.from({ length: 128 }, () => Array.from({ length: 128 }, () => rnd()));
     expect(code(() => analyseLattice(noise, hex))).toBe('no_periodicity');
   });

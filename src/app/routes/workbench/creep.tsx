@@ -16,6 +16,7 @@ import { RowProblems } from '@/features/workbench/components/row-problems.tsx';
 import { friendlyError } from '@/features/workbench/form/error-map.ts';
 import { useUrlInitialValues, useUrlWriteBack } from '@/features/workbench/form/use-url-inputs.ts';
 import { displacementOptions } from '@/features/workbench/unit-options.ts';
+import { ToolInputs } from './tool-inputs.tsx';
 
 const defaults: CreepFormValues = { text: exampleRecord, unit: 'nm', projectToS: 3600 };
 const urlInputs = { skip: ['text'] };
@@ -37,7 +38,7 @@ export function CreepPage() {
     >
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+          <ToolInputs>
             <FieldGroup legend="Step-and-hold record">
               <div className="space-y-1 sm:col-span-2">
                 <label htmlFor={textId} className="block text-sm font-medium">
@@ -74,7 +75,7 @@ export function CreepPage() {
                 <RowProblems used={r.used} problems={r.problems} what="Line" noun="sample" />
               </div>
             </FieldGroup>
-          </form>
+          </ToolInputs>
         }
         results={
           r.ok ? (

@@ -8,6 +8,7 @@ import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { capacitanceUnits, frequencyUnits } from '@/features/workbench/quantity-units.ts';
 import { driveCurrentForm } from '@/features/workbench/simple/drive-current-form.ts';
 import { driveCurrentCalculator } from '@shared/workbench/calculators/simple-calculators.ts';
+import { ToolInputs } from './tool-inputs.tsx';
 
 const defaults = { capacitance: 3.4, capacitanceUnit: 'nF', amplitudeV: 100, frequency: 1, frequencyUnit: 'kHz' } as const;
 
@@ -21,7 +22,7 @@ export function DriveCurrentPage() {
     >
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+          <ToolInputs>
             <FieldGroup legend="Load and drive" note="Capacitance: measure it, or take it from the part's registry entry.">
               <FormQuantity form={form} name="capacitance" unitName="capacitanceUnit" label="Capacitance C" units={capacitanceUnits} />
               <FormNumber form={form} name="amplitudeV" label="Amplitude (peak)" unit="V" />
@@ -34,7 +35,7 @@ export function DriveCurrentPage() {
                 hint="0 for a DC hold."
               />
             </FieldGroup>
-          </form>
+          </ToolInputs>
         }
         results={
           r ? (

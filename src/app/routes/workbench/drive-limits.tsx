@@ -7,6 +7,7 @@ import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { capacitanceUnits, frequencyUnits } from '@/features/workbench/quantity-units.ts';
 import { driveLimitsForm } from '@/features/workbench/simple/drive-limits-form.ts';
 import { driveLimitsCalculator } from '@shared/workbench/calculators/drive-limits-calculator.ts';
+import { ToolInputs } from './tool-inputs.tsx';
 
 const defaults = { capacitance: 3.4, capacitanceUnit: 'nF', amplitudeV: 100, frequency: 1, frequencyUnit: 'kHz' } as const;
 
@@ -23,7 +24,7 @@ export function DriveLimitsPage() {
     >
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+          <ToolInputs>
             <FieldGroup legend="Load and sine drive" note="Capacitance: measure it, or take one quadrant from the piezo tube page.">
               <FormQuantity form={form} name="capacitance" unitName="capacitanceUnit" label="Capacitance C" units={capacitanceUnits} />
               <FormNumber form={form} name="amplitudeV" label="Amplitude (peak)" unit="V" />
@@ -45,7 +46,7 @@ export function DriveLimitsPage() {
                 hint="Including any series resistor."
               />
             </FieldGroup>
-          </form>
+          </ToolInputs>
         }
         results={
           r ? (

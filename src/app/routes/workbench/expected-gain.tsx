@@ -1,4 +1,3 @@
-import { StartPickers } from './start-pickers.tsx';
 import { materials, type MaterialKey } from '@shared/workbench/materials.ts';
 import { FieldGroup, FormNumber, FormSelect } from '@/features/workbench/components/fields.tsx';
 import { NoResult } from '@/features/workbench/components/results.tsx';
@@ -10,6 +9,7 @@ import { sourceInWords } from '@shared/workbench/source-words.ts';
 import { ExpectedGainResults } from '@/features/workbench/expected/expected-gain-results.tsx';
 import { MaterialFields } from '@/features/workbench/expected/material-fields.tsx';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
+import { ToolInputs } from './tool-inputs.tsx';
 
 const defaults = {
   spec: { actuator: 'bimorph-series', lengthMm: 12, thicknessMm: 0.6, outerDiameterMm: 6.35, wallMm: 0.508, layers: 200, plates: 1 },
@@ -30,8 +30,7 @@ export function ExpectedGainPage() {
     >
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
-            <StartPickers tool="expected-gain" />
+          <ToolInputs start="expected-gain">
             <FieldGroup legend="Actuator">
               <div className="sm:col-span-2">
                 <FormSelect form={form} name="spec.actuator" label="Kind" options={actuatorKinds} />
@@ -84,7 +83,7 @@ export function ExpectedGainPage() {
                 hint="From a gain fit; compares it with the expectation."
               />
             </FieldGroup>
-          </form>
+          </ToolInputs>
         }
         results={live.ok ? <ExpectedGainResults r={live.result} materialSource={source} /> : <NoResult message={live.message} />}
       />

@@ -22,6 +22,7 @@ import { friendlyError } from '@/features/workbench/form/error-map.ts';
 import { useUrlInitialValues, useUrlWriteBack } from '@/features/workbench/form/use-url-inputs.ts';
 import { displacementOptions, voltageOptions } from '@/features/workbench/unit-options.ts';
 import { RecordRunPanel } from './record-run-panel.tsx';
+import { ToolInputs } from './tool-inputs.tsx';
 
 const defaults: FitFormValues = {
   source: 'grid',
@@ -61,7 +62,7 @@ export function FitPage() {
     >
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+          <ToolInputs>
             <section aria-label="Units and model" className="grid gap-3 rounded-lg border border-rule bg-white p-4 sm:grid-cols-2">
               <FormSelect form={form} name="voltageUnit" label="Voltage unit" options={voltageOptions} />
               <FormSelect form={form} name="displacementUnit" label="Displacement unit" options={displacementOptions} />
@@ -96,7 +97,7 @@ export function FitPage() {
               />
               {source === 'csv' && <RowsPreview rows={rows} problems={checked.problems} voltsUnit={voltsUnit} lengthUnit={lengthUnit} />}
             </section>
-          </form>
+          </ToolInputs>
         }
         results={
           result.ok ? (

@@ -16,6 +16,7 @@ import { RecordRunPanel } from './record-run-panel.tsx';
 import { LatticeResults } from '@/features/workbench/lattice/lattice-results.tsx';
 import { parseMatrix } from '@/features/workbench/lattice/parse-matrix.ts';
 import { useLatticeWorker } from '@/features/workbench/lattice/use-lattice-worker.ts';
+import { ToolInputs } from './tool-inputs.tsx';
 
 const KINDS = ['hexagonal', 'square', 'line'] as const;
 type Kind = (typeof KINDS)[number];
@@ -132,7 +133,7 @@ export function LatticePage() {
     >
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+          <ToolInputs>
             <section aria-label="Height image" className="space-y-3 rounded-lg border border-rule bg-white p-4">
               <div>
                 <label htmlFor={textId} className="block text-sm font-medium">
@@ -229,7 +230,7 @@ export function LatticePage() {
                 <HeightImage rows={rows} label={`Height image, ${rows[0]?.length ?? 0} × ${rows.length} pixels, grey scale`} />
               </section>
             )}
-          </form>
+          </ToolInputs>
         }
         results={
           a === undefined ? (

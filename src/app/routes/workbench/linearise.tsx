@@ -11,6 +11,7 @@ import { exampleLoop, previewLinearise } from '@/features/workbench/linearise/li
 import { LineariseResults } from '@/features/workbench/linearise/linearise-results.tsx';
 import { SaveLinearisation } from '@/features/builds/components/record/save-linearisation.tsx';
 import { useSession } from '@/features/session/api/get-session.ts';
+import { ToolInputs } from './tool-inputs.tsx';
 
 const DEGREES = ['auto', '1', '2', '3', '4', '5'] as const;
 const SETTINGS = {
@@ -39,7 +40,7 @@ export function LinearisePage() {
     >
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+          <ToolInputs>
             <section aria-label="Calibration run" className="space-y-3 rounded-lg border border-rule bg-white p-4">
               <div>
                 <label htmlFor={textId} className="block text-sm font-medium">
@@ -94,7 +95,7 @@ export function LinearisePage() {
                 onChange={(e) => set('stepNm', e.target.value)}
               />
             </section>
-          </form>
+          </ToolInputs>
         }
         results={
           r.ok ? (

@@ -1,4 +1,3 @@
-import { StartPickers } from './start-pickers.tsx';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths.ts';
 import { FieldGroup, FormNumber, FormRadios } from '@/features/workbench/components/fields.tsx';
@@ -8,6 +7,7 @@ import { loadedGainForm, stiffnessSources } from '@/features/workbench/expected/
 import { formatFixed, formatLengthNm, formatSig } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { loadedGainCalculator } from '@shared/workbench/calculators/loaded-gain-calculator.ts';
+import { ToolInputs } from './tool-inputs.tsx';
 
 const defaults = {
   freeGainNmPerV: 102.6,
@@ -31,8 +31,7 @@ export function LoadedGainPage() {
     >
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
-            <StartPickers tool="loaded-gain" />
+          <ToolInputs start="loaded-gain">
             <FieldGroup legend="Actuator">
               <FormNumber
                 form={form}
@@ -99,7 +98,7 @@ export function LoadedGainPage() {
                 hint="The force the indicator presses with at its resting reading."
               />
             </FieldGroup>
-          </form>
+          </ToolInputs>
         }
         results={
           r ? (

@@ -11,7 +11,8 @@ import { driveMatrixFromForm, mixingForm, type MixingFormValues } from '@/featur
 import { mixingCalculator } from '@shared/workbench/calculators/mixing-calculators.ts';
 import { MixingResults } from '@/features/workbench/mixing/mixing-results.tsx';
 import { PairPreset } from '@/features/workbench/mixing/pair-preset.tsx';
-import { SaveDriveMatrixPanel, StartPickers } from './start-pickers.tsx';
+import { SaveDriveMatrixPanel } from './start-pickers.tsx';
+import { ToolInputs } from './tool-inputs.tsx';
 
 const defaults: MixingFormValues = {
   gain: [
@@ -36,8 +37,7 @@ export function MixingPage() {
     >
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
-            <StartPickers tool="mixing" parts={false} />
+          <ToolInputs start="mixing" parts={false}>
             <fieldset className="space-y-3 rounded-lg border border-rule bg-white p-4">
               <legend className="px-1 text-sm font-semibold">Gain matrix</legend>
               <GainMatrixFields form={form} />
@@ -72,7 +72,7 @@ export function MixingPage() {
               <FormNumber form={form} name="targetXNm" label="x" unit="nm" optional />
               <FormNumber form={form} name="targetYNm" label="y" unit="nm" optional />
             </FieldGroup>
-          </form>
+          </ToolInputs>
         }
         results={
           live.ok ? (

@@ -7,6 +7,7 @@ import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { frequencyUnits } from '@/features/workbench/quantity-units.ts';
 import { noiseFloorForm } from '@/features/workbench/scan/noise-floor-form.ts';
 import { noiseFloorCalculator, type NoiseSource } from '@shared/workbench/calculators/noise-floor-calculator.ts';
+import { ToolInputs } from './tool-inputs.tsx';
 
 const defaults = {
   actuatorGainNmPerV: 102.6,
@@ -36,7 +37,7 @@ export function NoiseFloorPage() {
     >
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+          <ToolInputs>
             <FieldGroup legend="Actuator and amplifier">
               <FormNumber form={form} name="actuatorGainNmPerV" label="Actuator gain" unit="nm/V" hint="From a calibration run." />
               <FormNumber
@@ -73,7 +74,7 @@ export function NoiseFloorPage() {
               <FormNumber form={form} name="cantileverStiffnessNPerM" label="Spring constant k" unit="N/m" optional />
               <FormNumber form={form} name="temperatureK" label="Temperature T" unit="K" optional hint="295 K is room temperature." />
             </FieldGroup>
-          </form>
+          </ToolInputs>
         }
         results={
           r ? (

@@ -10,6 +10,7 @@ import { peakToPeakForm, peakToPeakLengthFields } from '@/features/workbench/sim
 import { displacementOptions } from '@/features/workbench/unit-options.ts';
 import { RecordRunPanel } from './record-run-panel.tsx';
 import type { RunRecordData } from '@shared/schemas/run.ts';
+import { ToolInputs } from './tool-inputs.tsx';
 
 const defaults = { unit: 'um', displacementPp: 2, displacementResolution: 0.1, voltsPpV: 20 } as const;
 
@@ -39,7 +40,7 @@ export function PeakToPeakPage() {
     >
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+          <ToolInputs>
             <FieldGroup legend="Displacement reading">
               <FormSelect
                 form={form}
@@ -61,7 +62,7 @@ export function PeakToPeakPage() {
               <FormNumber form={form} name="voltsPpV" label="Peak-to-peak voltage ΔV" unit="V" />
               <FormNumber form={form} name="voltsResolutionV" label="Voltage resolution" unit="V" optional />
             </FieldGroup>
-          </form>
+          </ToolInputs>
         }
         results={
           r ? (

@@ -1,4 +1,3 @@
-import { StartPickers } from './start-pickers.tsx';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths.ts';
 import { FieldGroup, FormNumber, FormSelect, SelectInput } from '@/features/workbench/components/fields.tsx';
@@ -10,6 +9,7 @@ import { usePresetField } from '@/features/workbench/form/use-preset.ts';
 import { useUnitConversion } from '@/hooks/use-unit-conversion.ts';
 import { resonanceForm, resonancePresets } from '@/features/workbench/simple/resonance-form.ts';
 import { resonanceCalculator } from '@shared/workbench/calculators/resonance-calculator.ts';
+import { ToolInputs } from './tool-inputs.tsx';
 
 const defaults = { preset: 'PZT-5A', dimensionUnit: 'mm', length: 12, thickness: 0.6, youngsModulusGpa: 61, densityKgPerM3: 7750 } as const;
 /** Fields in the chosen dimension unit, converted when it changes (1 mm = 1000 µm). */
@@ -37,8 +37,7 @@ export function ResonancePage() {
     >
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
-            <StartPickers tool="resonance" />
+          <ToolInputs start="resonance">
             <FieldGroup legend="Material">
               <div className="sm:col-span-2">
                 <SelectInput
@@ -71,7 +70,7 @@ export function ResonancePage() {
                 hint="A mirror, probe or holder at the free end."
               />
             </FieldGroup>
-          </form>
+          </ToolInputs>
         }
         results={
           r ? (

@@ -8,6 +8,7 @@ import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { scanForm, type ScanPlan } from '@/features/workbench/scan/scan-form.ts';
 import { scanPlanCalculator } from '@shared/workbench/calculators/scan-plan-calculator.ts';
 import { ScanResults } from '@/features/workbench/scan/scan-results.tsx';
+import { ToolInputs } from './tool-inputs.tsx';
 
 const defaults = {
   dacBits: 16,
@@ -30,7 +31,7 @@ export function ScanPlannerPage() {
     <ToolPage slug="scan-planner" lead="From DAC code to tip motion: the smallest step, the range, and how fast a frame can go.">
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+          <ToolInputs>
             <FieldGroup legend="Drive chain">
               <FormNumber form={form} name="dacBits" label="DAC resolution" unit="bit" step="1" />
               <FormNumber
@@ -60,7 +61,7 @@ export function ScanPlannerPage() {
               />
               <FormNumber form={form} name="wantedStepNm" label="Wanted step" unit="nm" optional />
             </FieldGroup>
-          </form>
+          </ToolInputs>
         }
         results={
           live.ok ? (

@@ -10,6 +10,7 @@ import { SinePreview } from '@/features/workbench/components/sine-fit/sine-previ
 import { SineSource } from '@/features/workbench/components/sine-fit/sine-source.tsx';
 import { useSineRecord } from '@/features/workbench/components/sine-fit/use-sine-record.ts';
 import { RecordRunPanel } from './record-run-panel.tsx';
+import { ToolInputs } from './tool-inputs.tsx';
 
 export function SineFitPage() {
   const record = useSineRecord();
@@ -22,7 +23,7 @@ export function SineFitPage() {
     >
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+          <ToolInputs>
             <section aria-label="Record" className="space-y-3 rounded-lg border border-rule bg-white p-4">
               <SineSource state={record} />
             </section>
@@ -35,7 +36,7 @@ export function SineFitPage() {
                 </>
               )}
             </section>
-          </form>
+          </ToolInputs>
         }
         results={
           outcome.ok && input ? (

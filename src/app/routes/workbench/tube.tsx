@@ -1,4 +1,3 @@
-import { StartPickers } from './start-pickers.tsx';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths.ts';
 import { FieldGroup, FormNumber, SelectInput } from '@/features/workbench/components/fields.tsx';
@@ -9,6 +8,7 @@ import { formatSi, formatSig } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { usePresetField } from '@/features/workbench/form/use-preset.ts';
 import { tubeCalculator } from '@shared/workbench/calculators/tube-calculator.ts';
+import { ToolInputs } from './tool-inputs.tsx';
 
 const defaults = {
   preset: 'PZT-5H',
@@ -35,8 +35,7 @@ export function TubePage() {
     >
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
-            <StartPickers tool="tube" />
+          <ToolInputs start="tube">
             <FieldGroup legend="Tube (clamped at one end)">
               <FormNumber form={form} name="lengthMm" label="Free length L" unit="mm" />
               <FormNumber form={form} name="outerDiameterMm" label="Outer diameter" unit="mm" />
@@ -50,7 +49,7 @@ export function TubePage() {
               <FormNumber form={form} name="youngsModulusGpa" label="Young's modulus E" unit="GPa" />
               <FormNumber form={form} name="densityKgPerM3" label="Density ρ" unit="kg/m³" />
             </FieldGroup>
-          </form>
+          </ToolInputs>
         }
         results={
           r ? (

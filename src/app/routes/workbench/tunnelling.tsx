@@ -5,6 +5,7 @@ import { formatSig } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { tunnellingForm } from '@/features/workbench/simple/tunnelling-form.ts';
 import { tunnellingCalculator } from '@shared/workbench/calculators/simple-calculators.ts';
+import { ToolInputs } from './tool-inputs.tsx';
 
 export function TunnellingPage() {
   const { form, live } = useLiveForm(tunnellingForm, { workFunctionEv: 4, wantedRatio: 10 }, tunnellingCalculator.compute);
@@ -13,7 +14,7 @@ export function TunnellingPage() {
     <ToolPage slug="tunnelling" lead="How steeply the tunnelling current falls with the gap: it sets how finely the Z loop must resolve.">
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+          <ToolInputs>
             <FieldGroup legend="Barrier">
               <FormNumber
                 form={form}
@@ -31,7 +32,7 @@ export function TunnellingPage() {
                 hint="Finds the barrier that gives it."
               />
             </FieldGroup>
-          </form>
+          </ToolInputs>
         }
         results={
           r ? (

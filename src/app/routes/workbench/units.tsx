@@ -5,6 +5,7 @@ import { formatSig } from '@shared/format/measured-number.ts';
 import { useLiveForm } from '@/features/workbench/form/use-live-form.ts';
 import { computeUnits, unitsForm } from '@/features/workbench/simple/units-form.ts';
 import { displacementOptions, gainOptions, voltageOptions } from '@/features/workbench/unit-options.ts';
+import { ToolInputs } from './tool-inputs.tsx';
 
 export function UnitsPage() {
   const { form, live } = useLiveForm(
@@ -19,7 +20,7 @@ export function UnitsPage() {
     >
       <ToolColumns
         inputs={
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
+          <ToolInputs>
             <FieldGroup legend="Displacement">
               <FormNumber form={form} name="length.value" label="Value" />
               <FormSelect form={form} name="length.from" label="Unit" options={displacementOptions} />
@@ -32,7 +33,7 @@ export function UnitsPage() {
               <FormNumber form={form} name="gain.value" label="Value" />
               <FormSelect form={form} name="gain.from" label="Unit" options={gainOptions} />
             </FieldGroup>
-          </form>
+          </ToolInputs>
         }
         results={
           live.ok ? (
