@@ -1,4 +1,4 @@
-import { partStatsOf } from '@shared/schemas/part.ts';
+import { partChoiceOf } from '@shared/schemas/part.ts';
 import type { RunKind } from '@shared/schemas/run.ts';
 import type { PartChoiceDto, PartDetailDto, PartSummaryDto } from '@shared/schemas/part.ts';
 import type { AttachedPhotoDto } from '@shared/schemas/attached-photo.ts';
@@ -36,17 +36,7 @@ export type PartRow = Pick<
 
 /** A part as pickers and registry rows show it: no geometry. */
 export function presentPartChoice(p: PartRow): PartChoiceDto {
-  return {
-    id: p.id,
-    name: p.name,
-    category: p.category,
-    status: p.status,
-    salvageSource: p.salvageSource,
-    material: p.material,
-    safeVolts: p.safeVolts,
-    capacitanceNf: p.capacitanceNf,
-    stats: partStatsOf(p),
-  };
+  return partChoiceOf(p);
 }
 
 /** A part with its geometry and pooled statistics. */

@@ -113,8 +113,8 @@ export interface PartListItemDto extends Omit<PartChoiceDto, 'stats'>, PartStats
   createdAt: string;
 }
 
-/** A registry row in the shape pickers and actuators use (figures under `stats`). */
-export function choiceFromListItem(p: PartListItemDto): PartChoiceDto {
+/** A part in the shape pickers and actuators use (figures under `stats`), from a registry row or a stored part. */
+export function partChoiceOf(p: Omit<PartChoiceDto, 'stats'> & PartStatsDto): PartChoiceDto {
   return {
     id: p.id,
     name: p.name,

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { PART_CATEGORIES, choiceFromListItem, partCategoryLabels, type PartCategory, type PartChoiceDto } from '@shared/schemas/part.ts';
+import { PART_CATEGORIES, partChoiceOf, partCategoryLabels, type PartCategory, type PartChoiceDto } from '@shared/schemas/part.ts';
 import { usePartSearch } from '../../api/search-parts.ts';
 import { inputClass } from '@/components/ui/form-bits.tsx';
 import { sig } from './format.ts';
@@ -27,7 +27,7 @@ export function PartPicker({
   const [q, setQ] = useState('');
   const [category, setCategory] = useState<PartCategory | ''>('');
   const search = usePartSearch(useDebouncedValue(q), category || undefined);
-  const found = (search.data?.items ?? []).map(choiceFromListItem);
+  const found = (search.data?.items ?? []).map(partChoiceOf);
   const options = current && !found.some((p) => p.id === current.id) ? [current, ...found] : found;
 
   return (
