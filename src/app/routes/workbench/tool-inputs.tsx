@@ -8,9 +8,9 @@ import { StartPickers } from './start-pickers.tsx';
  */
 export function ToolInputs({ start, parts, children }: { start?: StartTool; parts?: boolean; children: ReactNode }) {
   return (
-    <ToolInputs>
+    <form noValidate onSubmit={(e) => e.preventDefault()} className="space-y-4">
       {start && <StartPickers tool={start} parts={parts} />}
       {children}
-    </ToolInputs>
+    </form>
   );
 }
