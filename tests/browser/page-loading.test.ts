@@ -26,6 +26,8 @@ describe('journey: loading pages and the builds grid', () => {
       await route.continue();
     });
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Parts registry' }).click();
+    // The page's code has arrived (its heading shows); its data is what is held.
+    await page.getByRole('heading', { level: 1, name: 'Parts registry' }).waitFor();
     const bar = page.getByRole('progressbar', { name: 'Loading the page' });
     await bar.waitFor();
     // It fades in after its short delay (index.css) and spans the top of the window.

@@ -120,8 +120,9 @@ export function OperationCard({ method, path, op, doc }: { method: string; path:
           <h4 className="text-sm font-semibold">
             Body <span className="font-mono text-xs font-normal text-ink-soft">{media[0]}</span>
           </h4>
-          {variants.map((v) => (
-            <div key={v.label ?? 'body'}>
+          {variants.map((v, i) => (
+            // Variants of a union body may share a label (or have none): the position keeps keys unique.
+            <div key={`${i}-${v.label ?? 'body'}`}>
               {v.label && <p className="mb-1 font-mono text-xs text-teal-dark">{v.label}</p>}
               <FieldTable rows={v.rows} caption={`Body fields of ${method.toUpperCase()} ${path}${v.label ? `, ${v.label}` : ''}`} />
             </div>
