@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import { useInfiniteQuery } from '@tanstack/react-query';
 import type { NotificationDto, NotificationKind } from '@shared/schemas/notification.ts';
-import { formatDate } from '@shared/format/dates.ts';
+import { formatDateTime } from '@shared/format/dates.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { EmptyState, LoadError, Loading } from '@/components/ui/load-states.tsx';
 import { errorMessage } from '@/components/ui/form-bits.tsx';
@@ -28,7 +28,7 @@ function Row({ n, onOpen }: { n: NotificationDto; onOpen: (n: NotificationDto) =
         {!n.read && <span className="sr-only">Unread: </span>}
         {n.text}
       </Link>
-      <span className="num text-xs text-ink-soft">{formatDate(n.createdAt)}</span>
+      <span className="num text-xs text-ink-soft">{formatDateTime(n.createdAt)}</span>
     </li>
   );
 }
