@@ -61,6 +61,7 @@ export default defineConfig({
           name: 'browser',
           include: ['tests/browser/**/*.test.ts'],
           environment: 'node',
+          setupFiles: ['tests/support/browser-failures.ts'],
           // Each file starts its own live app (tests/support/browser.ts); one module cache per worker.
           isolate: false,
           testTimeout: 60000,

@@ -48,6 +48,9 @@ export async function startLiveApp(): Promise<LiveApp> {
 
 export const SCREENSHOTS = 'test-output/screenshots';
 
+/** The browser contexts open right now (tests/support/browser-failures.ts photographs them when a test fails). */
+export const openContexts = new Set<BrowserContext>();
+
 /** Debian's chromium through playwright-core, with a fresh profile per journey. */
 export async function launchBrowser(
   options: { bypassCSP?: boolean } = {},
@@ -72,10 +75,12 @@ export async function launchBrowser(
     ],
   });
   const page = context.pages()[0] ?? (await context.newPage());
+  openContexts.add(context);
   return {
     context,
     page,
     async close() {
+      openContexts.delete(context);
       await context.close();
       rmSync(profile, { recursive: true, force: true });
     },
