@@ -1,4 +1,5 @@
 import { Op } from 'sequelize';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import type { Actor } from '@shared/policies.ts';
 import type { ActuatorDto, CreateActuatorInput, UpdateActuatorInput } from '@shared/schemas/actuator.ts';
 import { Actuator } from '../models/actuator.model.ts';
@@ -27,7 +28,7 @@ async function presentOne(buildId: number, actuatorId: number): Promise<Actuator
 
 /** Record that a build uses a part on some axis, and how it is driven. */
 export async function createActuator(actor: Actor | null, buildId: number, input: CreateActuatorInput): Promise<ActuatorDto> {
-  const id = await Build.sequelize!.transaction(async (transaction) => {
+  const id = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const build = await loadBuildForEdit(actor, buildId, transaction);
     await usablePart(actor!, input.partId, transaction);
     const a = await Actuator.create(
@@ -59,7 +60,7 @@ export async function loadActuatorForEdit(actor: Actor | null, actuatorId: numbe
 
 /** Change how an actuator is described; its part cannot change once runs exist (their statistics belong to that part). */
 export async function updateActuator(actor: Actor | null, actuatorId: number, input: UpdateActuatorInput): Promise<ActuatorDto> {
-  const buildId = await Build.sequelize!.transaction(async (transaction) => {
+  const buildId = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const { actuator, build } = await loadActuatorForEdit(actor, actuatorId, transaction);
     if (input.partId !== undefined && input.partId !== actuator.partId) {
       const runs = await CalibrationRun.count({ where: { actuatorId }, transaction });
@@ -75,7 +76,7 @@ export async function updateActuator(actor: Actor | null, actuatorId: number, in
 
 /** Remove an actuator that has no accepted runs (accepted data is part of the registry). */
 export async function deleteActuator(actor: Actor | null, actuatorId: number): Promise<void> {
-  await Build.sequelize!.transaction(async (transaction) => {
+  await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const { actuator, build } = await loadActuatorForEdit(actor, actuatorId, transaction);
     const accepted = await CalibrationRun.count({ where: { actuatorId, status: 'accepted' }, transaction });
     if (accepted > 0)

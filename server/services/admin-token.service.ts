@@ -1,4 +1,5 @@
 import type { Actor } from '@shared/policies.ts';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import type { ApiTokenDto } from '@shared/schemas/api-token.ts';
 import { ApiToken } from '../models/api-token.model.ts';
 import { User } from '../models/user.model.ts';
@@ -32,7 +33,7 @@ export async function listUserTokens(actor: Actor | null, userId: number): Promi
 export async function revokeUserToken(actor: Actor | null, userId: number, tokenId: number): Promise<void> {
   authorize(actor, 'user.tokens');
   const user = await loadUser(userId);
-  await ApiToken.sequelize!.transaction(async (transaction) => {
+  await withWriteTransaction(ApiToken.sequelize!, async (transaction) => {
     const token = await ApiToken.findOne({ where: { id: tokenId, userId: user.id }, transaction, lock: transaction.LOCK.UPDATE });
     if (!token) throw new NotFoundError('No such token.');
     await token.destroy({ transaction });

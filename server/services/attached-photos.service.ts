@@ -1,6 +1,7 @@
 // Photos attached to registry parts and exchange listings: who may change them, upload, alt text, order and removal.
 // Part photos are kept by the part's proposer and by moderators; listing photos by the listing's owner.
 import type { Transaction, WhereOptions } from 'sequelize';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import { can, type Actor } from '@shared/policies.ts';
 import type { AttachedPhotoDto, UpdateAttachedPhotoInput } from '@shared/schemas/attached-photo.ts';
 import { Part } from '../models/part.model.ts';
@@ -85,7 +86,7 @@ export async function attachPhotos(
   const processed = await processAll(input.files);
   const { model } = SHELF[subject];
   return storeThenRecord(uploadsDir, processed, () =>
-    model.sequelize!.transaction(async (transaction) => {
+    withWriteTransaction(model.sequelize!, async (transaction) => {
       await assertCanEditPhotos(actor, subject, id, transaction);
       const existing = await model.count({ where: whereOwner(subject, id), transaction });
       if (existing + processed.length > MAX_ATTACHED_PHOTOS) {
@@ -117,7 +118,7 @@ export async function updateAttachedPhoto(
   photoId: number,
   input: UpdateAttachedPhotoInput,
 ): Promise<AttachedPhotoDto> {
-  return SHELF[subject].model.sequelize!.transaction(async (transaction) => {
+  return withWriteTransaction(SHELF[subject].model.sequelize!, async (transaction) => {
     await assertCanEditPhotos(actor, subject, id, transaction);
     const row = await loadAttachedPhoto(subject, id, photoId, transaction);
     await row.update({ alt: input.alt }, { transaction });
@@ -133,7 +134,7 @@ export async function reorderAttachedPhotos(
   photoIds: number[],
 ): Promise<AttachedPhotoDto[]> {
   const { model } = SHELF[subject];
-  return model.sequelize!.transaction(async (transaction) => {
+  return withWriteTransaction(model.sequelize!, async (transaction) => {
     await assertCanEditPhotos(actor, subject, id, transaction);
     const rows = await model.findAll({ where: whereOwner(subject, id), transaction });
     const byId = new Map(rows.map((r) => [r.id, r]));
@@ -158,7 +159,7 @@ export async function removeAttachedPhoto(
   uploadsDir: string,
 ): Promise<void> {
   const { model } = SHELF[subject];
-  const photo = await model.sequelize!.transaction(async (transaction) => {
+  const photo = await withWriteTransaction(model.sequelize!, async (transaction) => {
     await assertCanEditPhotos(actor, subject, id, transaction);
     const row = await loadAttachedPhoto(subject, id, photoId, transaction);
     await row.destroy({ transaction });

@@ -1,4 +1,5 @@
 import { Op, type WhereOptions } from 'sequelize';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import type { Actor } from '@shared/policies.ts';
 import type { BuildDto, BuildListDto, CreateBuildInput, ListBuildsQuery, UpdateBuildInput } from '@shared/schemas/build.ts';
 import { Build } from '../models/build.model.ts';
@@ -69,7 +70,7 @@ export async function getBuild(actor: Actor | null, buildId: number): Promise<Bu
 
 /** Owner edits; a published build stays live and is marked edited since review. */
 export async function updateBuild(actor: Actor | null, buildId: number, input: UpdateBuildInput): Promise<BuildDto> {
-  const build = await Build.sequelize!.transaction(async (transaction) => {
+  const build = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const b = await loadBuildForEdit(actor, buildId, transaction);
     if (input.coverPhotoId != null) {
       const photo = await Photo.findOne({ where: { id: input.coverPhotoId, buildId }, transaction });
@@ -87,7 +88,7 @@ export async function updateBuild(actor: Actor | null, buildId: number, input: U
 
 /** Drafts can be deleted by their owner; anything that was ever submitted stays (409). Photo files no one else uses go too. */
 export async function deleteBuild(actor: Actor | null, buildId: number, uploadsDir: string): Promise<void> {
-  const photos = await Build.sequelize!.transaction(async (transaction) => {
+  const photos = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const b = await loadBuildForEdit(actor, buildId, transaction, { anyState: true });
     if (b.status !== 'draft') throw new ConflictError('Only drafts can be deleted.', 'invalid_state');
     const rows = await Photo.findAll({ where: { buildId }, attributes: ['contentHash', 'displayFile', 'thumbFile'], transaction });
@@ -99,7 +100,7 @@ export async function deleteBuild(actor: Actor | null, buildId: number, uploadsD
 
 /** Hand a draft or returned build to the review desk. */
 export async function submitBuild(actor: Actor | null, buildId: number): Promise<BuildDto> {
-  const build = await Build.sequelize!.transaction(async (transaction) => {
+  const build = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const b = await loadBuildForEdit(actor, buildId, transaction, { anyState: true });
     if (b.status !== 'draft' && b.status !== 'returned') {
       throw new ConflictError(`A ${b.status} build cannot be submitted; only drafts and returned builds can.`, 'invalid_state');
@@ -112,7 +113,7 @@ export async function submitBuild(actor: Actor | null, buildId: number): Promise
 
 /** The maker takes a submitted build back to draft (before a moderator has decided on it). */
 export async function withdrawBuild(actor: Actor | null, buildId: number): Promise<BuildDto> {
-  const build = await Build.sequelize!.transaction(async (transaction) => {
+  const build = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const b = await loadBuildForEdit(actor, buildId, transaction, { anyState: true });
     if (b.status !== 'submitted')
       throw new ConflictError(`Only a build pending review can be withdrawn; this one is ${b.status}.`, 'invalid_state');

@@ -2,6 +2,7 @@
 // renderer), the build's owner is notified (and mailed unless they turned comment mail off), moderators hide one with a note (kept on the audit trail);
 // hidden comments are gone from the list for everyone.
 import type { Actor } from '@shared/policies.ts';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import type { BuildCommentDto, CreateCommentInput, HideCommentInput } from '@shared/schemas/comment.ts';
 import { Build } from '../models/build.model.ts';
 import { BuildComment } from '../models/build-comment.model.ts';
@@ -50,7 +51,7 @@ export async function createComment(actor: Actor | null, buildId: number, input:
   authorize(actor, 'content.create');
   const build = await publishedBuild(actor, buildId);
   const login = (await User.findByPk(actor.id, { attributes: ['login'] }))?.login ?? 'A maker';
-  const comment = await Build.sequelize!.transaction(async (transaction) => {
+  const comment = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const c = await BuildComment.create({ buildId, authorId: actor.id, body: input.body }, { transaction });
     const excerpt = input.body.length > 600 ? `${input.body.slice(0, 600)}…` : input.body;
     await tell(
@@ -74,7 +75,7 @@ export async function createComment(actor: Actor | null, buildId: number, input:
 /** A moderator hides a comment with a note; it leaves the list for everyone and the note goes on the audit trail. */
 export async function hideComment(actor: Actor | null, commentId: number, input: HideCommentInput): Promise<void> {
   authorize(actor, 'review.access');
-  await BuildComment.sequelize!.transaction(async (transaction) => {
+  await withWriteTransaction(BuildComment.sequelize!, async (transaction) => {
     const c = await BuildComment.findByPk(commentId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!c || c.hiddenAt) throw new NotFoundError('No such comment.');
     const build = await Build.findByPk(c.buildId, { attributes: ['id', 'title', 'ownerId'], transaction });

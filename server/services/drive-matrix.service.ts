@@ -1,4 +1,5 @@
 import type { Actor } from '@shared/policies.ts';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import type { ActuatorDto } from '@shared/schemas/actuator.ts';
 import type { DriveMatrixDto, DriveMatrixInput } from '@shared/schemas/drive-matrix.ts';
 import { Build } from '../models/build.model.ts';
@@ -22,7 +23,7 @@ export async function saveDriveMatrix(
   actuatorId: number,
   input: DriveMatrixInput,
 ): Promise<{ actuator: ActuatorDto; created: boolean }> {
-  const { buildId, created } = await Build.sequelize!.transaction(async (transaction) => {
+  const { buildId, created } = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const { actuator, build } = await loadActuatorForEdit(actor, actuatorId, transaction);
     if (actuator.axis !== 'XY')
       throw new ConflictError('A drive matrix belongs to an XY pair: this actuator drives one axis.', 'not_xy_pair');
@@ -44,7 +45,7 @@ export async function saveDriveMatrix(
 
 /** Remove the saved mixer result of an actuator (nothing to remove is not an error). */
 export async function clearDriveMatrix(actor: Actor | null, actuatorId: number): Promise<void> {
-  await Build.sequelize!.transaction(async (transaction) => {
+  await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const { actuator, build } = await loadActuatorForEdit(actor, actuatorId, transaction);
     if (actuator.driveMatrixJson == null) return;
     await actuator.update({ driveMatrixJson: null }, { transaction });

@@ -1,4 +1,5 @@
 import type { Actor } from '@shared/policies.ts';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import type { CreateEntryInput, LogEntryDto, UpdateEntryInput } from '@shared/schemas/build.ts';
 import { LogEntry } from '../models/log-entry.model.ts';
 import { Photo } from '../models/photo.model.ts';
@@ -27,7 +28,7 @@ async function loadEntry(buildId: number, entryId: number, transaction: Paramete
 
 /** Add a dated entry to one's own build. */
 export async function createEntry(actor: Actor | null, buildId: number, input: CreateEntryInput): Promise<LogEntryDto> {
-  const entry = await Build.sequelize!.transaction(async (transaction) => {
+  const entry = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const build = await loadBuildForEdit(actor, buildId, transaction);
     const e = await LogEntry.create({ buildId, ...input }, { transaction });
     await markEdited(build, transaction);
@@ -39,7 +40,7 @@ export async function createEntry(actor: Actor | null, buildId: number, input: C
 
 /** Change an entry's date, title or text. */
 export async function updateEntry(actor: Actor | null, buildId: number, entryId: number, input: UpdateEntryInput): Promise<LogEntryDto> {
-  const entry = await Build.sequelize!.transaction(async (transaction) => {
+  const entry = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const build = await loadBuildForEdit(actor, buildId, transaction);
     const e = await loadEntry(buildId, entryId, transaction);
     await e.update(input, { transaction });
@@ -51,7 +52,7 @@ export async function updateEntry(actor: Actor | null, buildId: number, entryId:
 
 /** Remove an entry; its photos stay with the build (detached from the entry). */
 export async function deleteEntry(actor: Actor | null, buildId: number, entryId: number): Promise<void> {
-  await Build.sequelize!.transaction(async (transaction) => {
+  await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const build = await loadBuildForEdit(actor, buildId, transaction);
     const e = await loadEntry(buildId, entryId, transaction);
     await Photo.update({ entryId: null }, { where: { entryId: e.id }, transaction });

@@ -1,4 +1,5 @@
 import type { Actor } from '@shared/policies.ts';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import type { ActuatorDto } from '@shared/schemas/actuator.ts';
 import type { SaveLinearisationInput } from '@shared/schemas/linearise.ts';
 import { linearise, type StoredLinearisation } from '@shared/workbench/linearise.ts';
@@ -20,7 +21,7 @@ export async function saveLinearisation(
   actuatorId: number,
   input: SaveLinearisationInput,
 ): Promise<{ actuator: ActuatorDto; created: boolean }> {
-  const { buildId, created } = await Build.sequelize!.transaction(async (transaction) => {
+  const { buildId, created } = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const { actuator, build } = await loadActuatorForEdit(actor, actuatorId, transaction);
     const { measuredOn, ...fitInput } = input;
     const stored: StoredLinearisation = {
@@ -39,7 +40,7 @@ export async function saveLinearisation(
 
 /** Remove an actuator's saved linearisation (nothing to remove is not an error). */
 export async function clearLinearisation(actor: Actor | null, actuatorId: number): Promise<void> {
-  await Build.sequelize!.transaction(async (transaction) => {
+  await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const { actuator, build } = await loadActuatorForEdit(actor, actuatorId, transaction);
     if (actuator.linearisationJson == null) return;
     await actuator.update({ linearisationJson: null }, { transaction });

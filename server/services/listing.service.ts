@@ -1,4 +1,5 @@
 import { Op, type WhereOptions } from 'sequelize';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import type { Actor } from '@shared/policies.ts';
 import {
   type CreateListingInput,
@@ -152,7 +153,7 @@ export async function updateListing(actor: Actor | null, listingId: number, inpu
 /** A moderator hides (or shows again) a listing, with a note on the audit trail. */
 export async function hideListing(actor: Actor | null, listingId: number, input: HideListingInput): Promise<ListingDto> {
   authorize(actor, 'listing.hide');
-  await Listing.sequelize!.transaction(async (transaction) => {
+  await withWriteTransaction(Listing.sequelize!, async (transaction) => {
     const listing = await Listing.findByPk(listingId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!listing) throw new NotFoundError('No such listing.');
     authorize(actor, 'listing.hide', { authorIds: [listing.ownerId] });

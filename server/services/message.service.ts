@@ -1,4 +1,5 @@
 import { Op, type Transaction } from 'sequelize';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import { can, type Actor } from '@shared/policies.ts';
 import type { SendMessageInput, ThreadDto, ThreadSummaryDto } from '@shared/schemas/listing.ts';
 import { Listing } from '../models/listing.model.ts';
@@ -75,7 +76,7 @@ export async function sendListingMessage(
   assertOpenForMessages(listing);
   const title = await listingTitle(listing);
   const me = await User.findByPk(actor.id, { attributes: ['login'] });
-  const result = await Listing.sequelize!.transaction(async (transaction) => {
+  const result = await withWriteTransaction(Listing.sequelize!, async (transaction) => {
     const thread = await lockThread(listing, actor.id, transaction);
     const message = await Message.create({ threadId: thread.id, senderId: actor.id, body: input.body }, { transaction });
     await notify(listing.ownerId, me?.login ?? 'A maker', title, input.body, thread.id, transaction);
@@ -174,7 +175,7 @@ export async function replyInThread(
   const me = await User.findByPk(actor!.id, { attributes: ['login'] });
   const otherId = thread.ownerId === actor!.id ? thread.starterId : thread.ownerId;
   const title = thread.ownerId === actor!.id ? `their enquiry` : await listingTitle(listing);
-  const result = await Listing.sequelize!.transaction(async (transaction) => {
+  const result = await withWriteTransaction(Listing.sequelize!, async (transaction) => {
     // The thread row first: the message's foreign key would otherwise take a shared lock on it that
     // two replies at once both try to upgrade (a deadlock).
     await thread.update({ lastMessageAt: new Date() }, { transaction });

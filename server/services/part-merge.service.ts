@@ -1,4 +1,5 @@
 import { literal } from 'sequelize';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import type { Actor } from '@shared/policies.ts';
 import type { MergePartInput } from '@shared/schemas/part.ts';
 import { Part } from '../models/part.model.ts';
@@ -17,7 +18,7 @@ export async function mergeParts(actor: Actor | null, fromId: number, input: Mer
   authorize(actor, 'review.access');
   if (fromId === input.intoPartId)
     throw new ValidationError('A part cannot be merged into itself.', [{ path: 'intoPartId', message: 'Pick another part.' }]);
-  return Part.sequelize!.transaction(async (transaction) => {
+  return withWriteTransaction(Part.sequelize!, async (transaction) => {
     const [from, into] = await Promise.all([
       Part.findByPk(fromId, { transaction, lock: transaction.LOCK.UPDATE }),
       Part.findByPk(input.intoPartId, { transaction, lock: transaction.LOCK.UPDATE }),

@@ -1,4 +1,5 @@
 import type { Transaction } from 'sequelize';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import type { Actor } from '@shared/policies.ts';
 import type { PhotoDto, UpdatePhotoInput } from '@shared/schemas/build.ts';
 import { Build } from '../models/build.model.ts';
@@ -60,7 +61,7 @@ export async function uploadPhotos(
   const alts = altsFor(input.alt, input.files.length);
   const processed = await processAll(input.files);
   return storeThenRecord(uploadsDir, processed, async () => {
-    const rows = await Build.sequelize!.transaction(async (transaction) => {
+    const rows = await withWriteTransaction(Build.sequelize!, async (transaction) => {
       const build = await loadBuildForEdit(actor, buildId, transaction);
       if (input.entryId !== undefined) await assertEntryOfBuild(buildId, input.entryId, transaction);
       const last = await Photo.max<number | null, Photo>('position', { where: { buildId }, transaction });
@@ -83,7 +84,7 @@ export async function uploadPhotos(
 
 /** Change a photo's alt text, log entry or position. */
 export async function updatePhoto(actor: Actor | null, buildId: number, photoId: number, input: UpdatePhotoInput): Promise<PhotoDto> {
-  const photo = await Build.sequelize!.transaction(async (transaction) => {
+  const photo = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const build = await loadBuildForEdit(actor, buildId, transaction);
     const p = await loadPhoto(buildId, photoId, transaction);
     if (input.entryId != null) await assertEntryOfBuild(buildId, input.entryId, transaction);
@@ -96,7 +97,7 @@ export async function updatePhoto(actor: Actor | null, buildId: number, photoId:
 
 /** Remove a photo; its files go too once no other photo shows the same content, and it stops being the cover. */
 export async function deletePhoto(actor: Actor | null, buildId: number, photoId: number, uploadsDir: string): Promise<void> {
-  const photo = await Build.sequelize!.transaction(async (transaction) => {
+  const photo = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const build = await loadBuildForEdit(actor, buildId, transaction);
     const p = await loadPhoto(buildId, photoId, transaction);
     await p.destroy({ transaction });
@@ -109,7 +110,7 @@ export async function deletePhoto(actor: Actor | null, buildId: number, photoId:
 
 /** Put the build's photos in the given order; the list must name each of its photos exactly once. */
 export async function reorderPhotos(actor: Actor | null, buildId: number, photoIds: number[]): Promise<PhotoDto[]> {
-  return Build.sequelize!.transaction(async (transaction) => {
+  return withWriteTransaction(Build.sequelize!, async (transaction) => {
     const build = await loadBuildForEdit(actor, buildId, transaction);
     const photos = await Photo.findAll({ where: { buildId }, transaction });
     const byId = new Map(photos.map((p) => [p.id, p]));
@@ -128,7 +129,7 @@ export async function reorderPhotos(actor: Actor | null, buildId: number, photoI
 
 /** Make one of the build's photos its cover (the card and page header). */
 export async function setCoverPhoto(actor: Actor | null, buildId: number, photoId: number): Promise<PhotoDto> {
-  return Build.sequelize!.transaction(async (transaction) => {
+  return withWriteTransaction(Build.sequelize!, async (transaction) => {
     const build = await loadBuildForEdit(actor, buildId, transaction);
     const photo = await loadPhoto(buildId, photoId, transaction);
     await build.update({ coverPhotoId: photo.id }, { transaction });

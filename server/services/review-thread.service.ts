@@ -3,6 +3,7 @@
 // Each post is told to the other side: a maker's post to the moderators who took part (posted or decided),
 // or to every moderator while nobody has; a moderator's post to the maker.
 import { Op } from 'sequelize';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import { can, type Actor } from '@shared/policies.ts';
 import type { CreateReviewPostInput, ReviewThreadDto, ReviewThreadItemDto } from '@shared/schemas/review-thread.ts';
 import { AuditEntry } from '../models/audit-entry.model.ts';
@@ -97,7 +98,7 @@ export async function postToReviewThread(actor: Actor | null, buildId: number, i
   const recipients = fromMaker ? await moderatorsOf(build) : [build.ownerId];
   const author = await User.findByPk(actor.id, { attributes: ['id', 'login'] });
   const login = author?.login ?? 'someone';
-  const post = await Build.sequelize!.transaction(async (transaction) => {
+  const post = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const p = await ReviewPost.create({ buildId, authorId: actor.id, body: input.body }, { transaction });
     const excerpt = input.body.length > 600 ? `${input.body.slice(0, 600)}…` : input.body;
     await tell(

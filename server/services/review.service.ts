@@ -1,4 +1,5 @@
 import type { Transaction } from 'sequelize';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import type { Actor } from '@shared/policies.ts';
 import type { AcceptRejectInput, BuildDecisionInput, ReportDecisionInput } from '@shared/schemas/review.ts';
 import { Build } from '../models/build.model.ts';
@@ -26,7 +27,7 @@ const notWaiting = (what: string) => new ConflictError(`This ${what} is not wait
 /** Run a decision in one transaction (change + audit + stats + queued mail), then nudge the mail worker. */
 export async function decide<T>(actor: Actor | null, work: (actor: Actor, t: Transaction) => Promise<T>): Promise<T> {
   authorize(actor, 'review.access');
-  const result = await Build.sequelize!.transaction((t) => work(actor, t));
+  const result = await withWriteTransaction(Build.sequelize!, (t) => work(actor, t));
   kickOutbox();
   return result;
 }

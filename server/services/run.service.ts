@@ -1,4 +1,5 @@
 import { fn, col, type Transaction } from 'sequelize';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import { can, type Actor } from '@shared/policies.ts';
 import {
   createRunInput,
@@ -100,7 +101,7 @@ async function assertBuildBudget(buildId: number, adding: number, transaction: T
 
 /** Store a run and the fit the server computes from it (never numbers sent by the client). */
 export async function createRun(actor: Actor | null, actuatorId: number, input: CreateRunInput): Promise<RunDto> {
-  const run = await Build.sequelize!.transaction(async (transaction) => {
+  const run = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const { actuator, build } = await loadActuatorForEdit(actor, actuatorId, transaction);
     const fit = asBadRequest(() => fitRun(input, actuator.axis));
     await assertBuildBudget(build.id, recordedCount(input), transaction);
@@ -141,7 +142,7 @@ export async function getRunRecord(actor: Actor | null, runId: number): Promise<
  * one is resubmitted.
  */
 export async function updateRun(actor: Actor | null, runId: number, change: UpdateRunInput): Promise<RunDto> {
-  const run = await Build.sequelize!.transaction(async (transaction) => {
+  const run = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const r = await CalibrationRun.findByPk(runId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!r) throw new NotFoundError('No such calibration run.');
     const { actuator, build } = await loadActuatorForEdit(actor, r.actuatorId, transaction);
@@ -163,7 +164,7 @@ export async function updateRun(actor: Actor | null, runId: number, change: Upda
 
 /** The owner withdraws a run that has not been accepted. */
 export async function deleteRun(actor: Actor | null, runId: number): Promise<void> {
-  await Build.sequelize!.transaction(async (transaction) => {
+  await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const run = await CalibrationRun.findByPk(runId, { transaction, attributes: ['id', 'actuatorId', 'status'] });
     if (!run) throw new NotFoundError('No such calibration run.');
     await loadActuatorForEdit(actor, run.actuatorId, transaction);

@@ -1,4 +1,5 @@
 import { Op } from 'sequelize';
+import { withWriteTransaction } from '../db/write-transaction.ts';
 import type { Actor } from '@shared/policies.ts';
 import type { AdminUserListDto, ListUsersQuery, SetRoleInput, SetSuspendedInput, AdminUserDto } from '@shared/schemas/user.ts';
 import { User } from '../models/user.model.ts';
@@ -72,7 +73,7 @@ export async function setUserRole(actor: Actor | null, userId: number, input: Se
   const user = await loadUser(userId);
   authorize(actor, 'user.set-role', { userId: user.id });
   const before = user.role;
-  await user.sequelize.transaction(async (transaction) => {
+  await withWriteTransaction(user.sequelize, async (transaction) => {
     await user.update({ role: input.role }, { transaction });
     await recordAudit(
       actor,
@@ -93,7 +94,7 @@ export async function setUserRole(actor: Actor | null, userId: number, input: Se
 export async function setUserSuspended(actor: Actor | null, userId: number, input: SetSuspendedInput): Promise<AdminUserDto> {
   const user = await loadUser(userId);
   authorize(actor, 'user.suspend', { userId: user.id });
-  await user.sequelize.transaction(async (transaction) => {
+  await withWriteTransaction(user.sequelize, async (transaction) => {
     await user.update({ suspendedAt: input.suspended ? new Date() : null }, { transaction });
     if (input.suspended) await user.sequelize.models.Session.destroy({ where: { userId: user.id }, transaction });
     await recordAudit(

@@ -16,6 +16,8 @@ describe('isDbDown', () => {
     ['a statement killed at shutdown', wrapped('ER_CONNECTION_KILLED', 1927, '70100')],
     ['a query interrupted at shutdown', wrapped('ER_QUERY_INTERRUPTED', 1317, '70100')],
     ['a socket closed under a query', wrapped('ER_SOCKET_UNEXPECTED_CLOSE', 45007, '08S01')],
+    // Galera's 1047 "WSREP has not yet prepared node for application use" (once the write retries give up) is class 08.
+    ['a Galera node outside the primary component', wrapped('ER_UNKNOWN_COM_ERROR', 1047, '08S01')],
     // Any error the driver marks fatal has ended its connection (mariadb connector's `fatal` flag).
     [
       'a fatal driver error of another code',
