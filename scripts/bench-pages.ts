@@ -3,6 +3,7 @@
 // the JavaScript it fetched as sent (compressed bytes, every chunk it loaded), the first contentful paint, and for
 // pages with a chart the time the chart's drawing surface appeared. Medians of RUNS loads, printed as a table.
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
+import { LocalPhotoStore } from '../server/storage/local-photo-store.ts';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium } from 'playwright-core';
@@ -35,7 +36,7 @@ try {
   initModels(sq);
   const uploads = mkdtempSync(join(tmpdir(), 'scanwright-bench-pages-'));
   try {
-    await seedDemoOnce(sq, demoPictureAttacher(uploads));
+    await seedDemoOnce(sq, demoPictureAttacher(new LocalPhotoStore(uploads)));
   } finally {
     rmSync(uploads, { recursive: true, force: true });
   }

@@ -2,6 +2,7 @@
 // run, on a bench database holding the demo scenario copied to a few hundred builds and listings. Loopback only.
 // Target: each read's throughput ≥ 1/3 of health's.
 import { mkdtempSync, rmSync } from 'node:fs';
+import { LocalPhotoStore } from '../server/storage/local-photo-store.ts';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import autocannon from 'autocannon';
@@ -38,7 +39,7 @@ async function seedReads(sq: Sequelize): Promise<void> {
   initModels(sq);
   const uploads = mkdtempSync(join(tmpdir(), 'scanwright-bench-reads-'));
   try {
-    await seedDemoOnce(sq, demoPictureAttacher(uploads));
+    await seedDemoOnce(sq, demoPictureAttacher(new LocalPhotoStore(uploads)));
   } finally {
     rmSync(uploads, { recursive: true, force: true });
   }

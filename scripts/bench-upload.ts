@@ -2,6 +2,7 @@
 // display + thumbnail WebP, content-hash files on disk. No database.
 // Run: node --import tsx scripts/bench-upload.ts   (npm run bench:upload)
 import { mkdtemp, readdir, rm } from 'node:fs/promises';
+import { LocalPhotoStore } from '../server/storage/local-photo-store.ts';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
@@ -38,7 +39,7 @@ async function once(input: Buffer): Promise<{ ms: number; files: number }> {
   try {
     const t0 = performance.now();
     const processed = await processPhoto(input);
-    await writeVariants(dir, [processed]);
+    await writeVariants(new LocalPhotoStore(dir), [processed]);
     const ms = performance.now() - t0;
     return { ms, files: (await readdir(dir)).length };
   } finally {

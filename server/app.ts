@@ -58,6 +58,8 @@ import { createDrain, type Drain } from './ops/drain.ts';
 import { createMetrics } from './ops/metrics.ts';
 import { createReadiness } from './ops/readiness.ts';
 import { createOutageLog } from './ops/db-outage.ts';
+import type { PhotoStore } from './storage/photo-store.ts';
+import { createPhotoStore } from './storage/create-photo-store.ts';
 
 export interface AppHandle {
   app: Express;
@@ -66,6 +68,8 @@ export interface AppHandle {
   log: Logger;
   /** SIGTERM's first step (server/index.ts): /api/ready turns 503 and responses close their connections. */
   drain: Drain;
+  /** Where photo files live (the uploads folder, or an S3 bucket when S3_BUCKET is set). */
+  photos: PhotoStore;
   close(): Promise<void>;
 }
 
@@ -80,6 +84,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   const sequelize = createSequelize(config.db);
   initModels(sequelize);
   watchIdempotentCreates(sequelize);
+  const photos = await createPhotoStore(config);
   const mailer =
     deps.mailer ??
     createMailer(config.smtpUrl ?? 'smtp://127.0.0.1:2525', config.mailFrom, log, { timeoutMs: config.outbox.smtpTimeoutMs });
@@ -178,7 +183,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
     );
     app.use(outsideApi(express.static(dist, { index: false, maxAge: '1h' })));
   }
-  app.use('/uploads', express.static(resolve(config.uploadsDir), { index: false, immutable: true, maxAge: '30d', fallthrough: false }));
+  app.use('/uploads', photos.handler());
   app.use(healthRoutes(sequelize));
   app.use(
     opsRoutes({
@@ -187,7 +192,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
       metricsToken: config.ops.metricsToken,
       readiness: createReadiness({
         sequelize,
-        uploadsDir: config.uploadsDir,
+        photos,
         minFreeMb: config.ops.readyMinFreeMb,
         maxOutbox: config.ops.readyMaxOutbox,
       }),
@@ -224,14 +229,14 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(idempotency);
 
   // The registry search is the hottest route: first in line.
-  app.use(partRoutes(config));
+  app.use(partRoutes(config, photos));
   app.use(sessionRoutes());
   app.use(authRoutes(passport, limiter(config.rateLimits, { windowMs: 60_000, limit: 20, what: 'sign-in attempts' })));
   app.use(adminRoutes());
   app.use(outboxRoutes());
   app.use(workbenchRoutes());
-  app.use(photoRoutes(config));
-  app.use(buildRoutes(config));
+  app.use(photoRoutes(photos));
+  app.use(buildRoutes(config, photos));
   app.use(actuatorRoutes());
   app.use(runRoutes(config));
   app.use(reviewRoutes(config));
@@ -240,7 +245,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(dataLicenceRoutes());
   app.use(registryDatasetRoutes(config));
   app.use(openApiRoutes(config));
-  app.use(exchangeRoutes(config));
+  app.use(exchangeRoutes(config, photos));
   app.use(commentRoutes(config));
   app.use(reviewThreadRoutes(config));
   app.use(followRoutes());
@@ -261,6 +266,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
     mailer,
     log,
     drain,
+    photos,
     async close() {
       outage.close();
       await outbox.stop();
@@ -268,6 +274,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
       mailer.close();
       await closeReadPool(sequelize);
       await sequelize.close();
+      await photos.close();
     },
   };
 }

@@ -27,6 +27,12 @@ const envSchema = z
     INBOX_PORT: z.coerce.number().int().default(3025),
     MAIL_FROM: z.string().default('Scanwright <no-reply@scanwright.local>'),
     UPLOADS_DIR: z.string().default('uploads'),
+    S3_BUCKET: z.string().trim().optional(),
+    S3_ENDPOINT: z.string().url().optional(),
+    S3_REGION: z.string().default('us-east-1'),
+    S3_ACCESS_KEY_ID: z.string().optional(),
+    S3_SECRET_ACCESS_KEY: z.string().optional(),
+    S3_PREFIX: z.string().default(''),
     CLIENT_DIST: z.string().default('dist/client'),
     RATE_LIMITS: bool.default(true),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
@@ -57,6 +63,15 @@ export interface Config {
   smtpUrl: string | null;
   mailFrom: string;
   uploadsDir: string;
+  /** Photo files in an S3-compatible bucket instead of `uploadsDir` (S3_BUCKET set; S3_ENDPOINT for anything but AWS). */
+  s3: {
+    bucket: string;
+    endpoint: string | null;
+    region: string;
+    accessKeyId: string | null;
+    secretAccessKey: string | null;
+    prefix: string;
+  } | null;
   clientDist: string;
   rateLimits: boolean;
   logLevel: string;
@@ -93,6 +108,16 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env, overrides: P
     smtpUrl: e.SMTP_URL ?? null,
     mailFrom: e.MAIL_FROM,
     uploadsDir: e.UPLOADS_DIR,
+    s3: e.S3_BUCKET
+      ? {
+          bucket: e.S3_BUCKET,
+          endpoint: e.S3_ENDPOINT ?? null,
+          region: e.S3_REGION,
+          accessKeyId: e.S3_ACCESS_KEY_ID ?? null,
+          secretAccessKey: e.S3_SECRET_ACCESS_KEY ?? null,
+          prefix: e.S3_PREFIX.replace(/^\/+/, '').replace(/([^/])$/, '$1/'),
+        }
+      : null,
     clientDist: e.CLIENT_DIST,
     rateLimits: e.RATE_LIMITS,
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),

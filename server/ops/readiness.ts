@@ -3,11 +3,10 @@
 import type { Sequelize } from 'sequelize';
 import { createMigrator } from '../db/migrator.ts';
 import { outboxStats } from '../services/outbox-admin.service.ts';
-import { freeBytes, probeWritable } from './disk-space.ts';
+import type { PhotoStore } from '../storage/photo-store.ts';
 
 const CHECK_TIMEOUT_MS = 2000;
 const CACHE_MS = 1000;
-const MB = 1024 * 1024;
 
 export interface CheckResult {
   ok: boolean;
@@ -23,7 +22,7 @@ export interface Readiness {
 
 export interface ReadinessDeps {
   sequelize: Sequelize;
-  uploadsDir: string;
+  photos: PhotoStore;
   minFreeMb: number;
   maxOutbox: number;
 }
@@ -65,11 +64,7 @@ export function createReadiness(deps: ReadinessDeps): { check(): Promise<Readine
       migrationsCurrent = pending.length === 0;
       return { ok: migrationsCurrent, pending };
     },
-    uploads: async () => {
-      await probeWritable(deps.uploadsDir);
-      const freeMb = Math.floor((await freeBytes(deps.uploadsDir)) / MB);
-      return { ok: freeMb >= deps.minFreeMb, writable: true, freeMb, minFreeMb: deps.minFreeMb };
-    },
+    uploads: () => deps.photos.check(deps.minFreeMb),
     outbox: async () => {
       const { backlog, oldestAgeS, givenUp } = await outboxStats(deps.sequelize);
       return { ok: backlog < deps.maxOutbox, backlog, maxBacklog: deps.maxOutbox, oldestAgeS: Math.round(oldestAgeS), givenUp };

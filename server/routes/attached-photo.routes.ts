@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { PhotoStore } from '../storage/photo-store.ts';
 import { z } from 'zod';
 import { listingIdParams } from '@shared/schemas/listing.ts';
 import {
@@ -38,7 +39,7 @@ const SUBJECTS: Record<
 };
 
 /** `POST …/photos` (multipart), `PUT …/photos/order`, `PATCH` and `DELETE …/photos/:photoId` for parts or listings. */
-export function photoRoutesFor(subject: PhotoSubject, uploadsDir: string): Router {
+export function photoRoutesFor(subject: PhotoSubject, store: PhotoStore): Router {
   const r = Router();
   const { base, idParams, photoParams } = SUBJECTS[subject];
   r.post(
@@ -47,7 +48,7 @@ export function photoRoutesFor(subject: PhotoSubject, uploadsDir: string): Route
     guard({ params: idParams }, ({ actor, params }) => assertCanEditPhotos(actor, subject, params.subjectId)),
     receivePhotos(),
     route({ params: idParams, body: attachPhotosFields }, async ({ actor, params, body, req, res }) => {
-      const photos = await attachPhotos(actor, subject, params.subjectId, { alt: body.alt, files: uploadedBuffers(req) }, uploadsDir);
+      const photos = await attachPhotos(actor, subject, params.subjectId, { alt: body.alt, files: uploadedBuffers(req) }, store);
       res.status(201).json({ photos });
     }),
   );
@@ -69,7 +70,7 @@ export function photoRoutesFor(subject: PhotoSubject, uploadsDir: string): Route
     `${base}/:photoId`,
     requireUser,
     route({ params: photoParams }, async ({ actor, params, res }) => {
-      await removeAttachedPhoto(actor, subject, params.subjectId, params.photoId, uploadsDir);
+      await removeAttachedPhoto(actor, subject, params.subjectId, params.photoId, store);
       res.status(204).end();
     }),
   );

@@ -9,6 +9,7 @@ import {
   updateEntryInput,
 } from '@shared/schemas/build.ts';
 import type { Config } from '../config.ts';
+import type { PhotoStore } from '../storage/photo-store.ts';
 import { requireUser } from '../middleware/auth.ts';
 import {
   createBuild,
@@ -24,7 +25,7 @@ import { createEntry, deleteEntry, updateEntry } from '../services/entry.service
 import { route } from './route.ts';
 
 /** Builds and their log entries. */
-export function buildRoutes(config: Config): Router {
+export function buildRoutes(config: Config, photos: PhotoStore): Router {
   const r = Router();
   r.get(
     '/api/builds',
@@ -63,7 +64,7 @@ export function buildRoutes(config: Config): Router {
     '/api/builds/:buildId',
     requireUser,
     route({ params: buildIdParams }, async ({ actor, params, res }) => {
-      await deleteBuild(actor, params.buildId, config.uploadsDir);
+      await deleteBuild(actor, params.buildId, photos);
       res.status(204).end();
     }),
   );

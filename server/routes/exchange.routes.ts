@@ -9,6 +9,7 @@ import {
   updateListingInput,
 } from '@shared/schemas/listing.ts';
 import type { Config } from '../config.ts';
+import type { PhotoStore } from '../storage/photo-store.ts';
 import { requireUser } from '../middleware/auth.ts';
 import { limiter } from '../middleware/rate-limit.ts';
 import { createListing, getListing, hideListing, listListings, listMyListings, updateListing } from '../services/listing.service.ts';
@@ -17,7 +18,7 @@ import { photoRoutesFor } from './attached-photo.routes.ts';
 import { route } from './route.ts';
 
 /** The exchange: listings, messages to their owners, and each maker's inbox. */
-export function exchangeRoutes(config: Config): Router {
+export function exchangeRoutes(config: Config, photos: PhotoStore): Router {
   const r = Router();
   const messageLimit = limiter(config.rateLimits, { windowMs: 10 * 60_000, limit: 20, what: 'messages', perUser: true });
   r.get(
@@ -98,6 +99,6 @@ export function exchangeRoutes(config: Config): Router {
       res.status(201).json(await replyInThread(actor, params.threadId, body));
     }),
   );
-  r.use(photoRoutesFor('listing', config.uploadsDir));
+  r.use(photoRoutesFor('listing', photos));
   return r;
 }

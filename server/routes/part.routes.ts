@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import type { Config } from '../config.ts';
+import type { PhotoStore } from '../storage/photo-store.ts';
 import Papa from 'papaparse';
 import { listPartsQuery, mergePartInput, partIdParams, proposePartInput, type PartListItemDto } from '@shared/schemas/part.ts';
 import { requireUser } from '../middleware/auth.ts';
@@ -40,7 +41,7 @@ const CSV_HEADERS = [
 ];
 
 /** The parts registry: search (paged, or exported as CSV/JSON), histogram, detail, proposals, photos and merges. */
-export function partRoutes(config: Config): Router {
+export function partRoutes(config: Config, photos: PhotoStore): Router {
   const r = Router();
   r.get(
     '/api/parts',
@@ -86,6 +87,6 @@ export function partRoutes(config: Config): Router {
       res.json(await mergeParts(actor, params.partId, body));
     }),
   );
-  r.use(photoRoutesFor('part', config.uploadsDir));
+  r.use(photoRoutesFor('part', photos));
   return r;
 }

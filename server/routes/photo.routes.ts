@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { buildIdParams, photoParams, reorderPhotosInput, updatePhotoInput } from '@shared/schemas/build.ts';
-import type { Config } from '../config.ts';
+import type { PhotoStore } from '../storage/photo-store.ts';
 import { requireUser } from '../middleware/auth.ts';
 import { altTexts, receivePhotos, uploadedBuffers } from '../middleware/receive-photos.ts';
 import { assertCanAddPhotos, deletePhoto, reorderPhotos, setCoverPhoto, updatePhoto, uploadPhotos } from '../services/photo.service.ts';
@@ -14,7 +14,7 @@ const uploadPhotosFields = z.strictObject({
 });
 
 /** Photo uploads and upkeep for builds; only the build's owner may change them. */
-export function photoRoutes(config: Config): Router {
+export function photoRoutes(store: PhotoStore): Router {
   const r = Router();
   r.post(
     '/api/builds/:buildId/photos',
@@ -22,7 +22,7 @@ export function photoRoutes(config: Config): Router {
     guard({ params: buildIdParams }, ({ actor, params }) => assertCanAddPhotos(actor, params.buildId)),
     receivePhotos(),
     route({ params: buildIdParams, body: uploadPhotosFields }, async ({ actor, params, body, req, res }) => {
-      const photos = await uploadPhotos(actor, params.buildId, { ...body, files: uploadedBuffers(req) }, config.uploadsDir);
+      const photos = await uploadPhotos(actor, params.buildId, { ...body, files: uploadedBuffers(req) }, store);
       res.status(201).json({ photos });
     }),
   );
@@ -44,7 +44,7 @@ export function photoRoutes(config: Config): Router {
     '/api/builds/:buildId/photos/:photoId',
     requireUser,
     route({ params: photoParams }, async ({ actor, params, res }) => {
-      await deletePhoto(actor, params.buildId, params.photoId, config.uploadsDir);
+      await deletePhoto(actor, params.buildId, params.photoId, store);
       res.status(204).end();
     }),
   );

@@ -1,6 +1,7 @@
 // Photos attached to registry parts and exchange listings: who may change them, upload, alt text, order and removal.
 // Part photos are kept by the part's proposer and by moderators; listing photos by the listing's owner.
 import type { Transaction, WhereOptions } from 'sequelize';
+import type { PhotoStore } from '../storage/photo-store.ts';
 import { withWriteTransaction } from '../db/write-transaction.ts';
 import { can, type Actor } from '@shared/policies.ts';
 import type { AttachedPhotoDto, UpdateAttachedPhotoInput } from '@shared/schemas/attached-photo.ts';
@@ -80,12 +81,12 @@ export async function attachPhotos(
   subject: PhotoSubject,
   id: number,
   input: { files: Buffer[]; alt: string[] },
-  uploadsDir: string,
+  store: PhotoStore,
 ): Promise<AttachedPhotoDto[]> {
   const alts = altsFor(input.alt, input.files.length);
   const processed = await processAll(input.files);
   const { model } = SHELF[subject];
-  return storeThenRecord(uploadsDir, processed, () =>
+  return storeThenRecord(store, processed, () =>
     withWriteTransaction(model.sequelize!, async (transaction) => {
       await assertCanEditPhotos(actor, subject, id, transaction);
       const existing = await model.count({ where: whereOwner(subject, id), transaction });
@@ -156,7 +157,7 @@ export async function removeAttachedPhoto(
   subject: PhotoSubject,
   id: number,
   photoId: number,
-  uploadsDir: string,
+  store: PhotoStore,
 ): Promise<void> {
   const { model } = SHELF[subject];
   const photo = await withWriteTransaction(model.sequelize!, async (transaction) => {
@@ -165,5 +166,5 @@ export async function removeAttachedPhoto(
     await row.destroy({ transaction });
     return row;
   });
-  await pruneAfterRemoval(uploadsDir, [photo]);
+  await pruneAfterRemoval(store, [photo]);
 }

@@ -1,4 +1,5 @@
 import { Op, type WhereOptions } from 'sequelize';
+import type { PhotoStore } from '../storage/photo-store.ts';
 import { withWriteTransaction } from '../db/write-transaction.ts';
 import type { Actor } from '@shared/policies.ts';
 import type { BuildDto, BuildListDto, CreateBuildInput, ListBuildsQuery, UpdateBuildInput } from '@shared/schemas/build.ts';
@@ -87,7 +88,7 @@ export async function updateBuild(actor: Actor | null, buildId: number, input: U
 }
 
 /** Drafts can be deleted by their owner; anything that was ever submitted stays (409). Photo files no one else uses go too. */
-export async function deleteBuild(actor: Actor | null, buildId: number, uploadsDir: string): Promise<void> {
+export async function deleteBuild(actor: Actor | null, buildId: number, store: PhotoStore): Promise<void> {
   const photos = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const b = await loadBuildForEdit(actor, buildId, transaction, { anyState: true });
     if (b.status !== 'draft') throw new ConflictError('Only drafts can be deleted.', 'invalid_state');
@@ -95,7 +96,7 @@ export async function deleteBuild(actor: Actor | null, buildId: number, uploadsD
     await b.destroy({ transaction });
     return rows;
   });
-  await pruneAfterRemoval(uploadsDir, photos);
+  await pruneAfterRemoval(store, photos);
 }
 
 /** Hand a draft or returned build to the review desk. */

@@ -5,7 +5,8 @@ import { ListingPhoto } from '../models/listing-photo.model.ts';
 import { PartPhoto } from '../models/part-photo.model.ts';
 import { Photo } from '../models/photo.model.ts';
 import { ValidationError } from '../errors.ts';
-import { processPhoto, removeFiles, withContentLocks, writeVariants, type ProcessedPhoto } from './photo-storage.ts';
+import type { PhotoStore } from '../storage/photo-store.ts';
+import { processPhoto, withContentLocks, writeVariants, type ProcessedPhoto } from './photo-storage.ts';
 
 interface StoredFiles {
   contentHash: string;
@@ -40,10 +41,10 @@ export async function processAll(files: Buffer[]): Promise<ProcessedPhoto[]> {
 }
 
 /** Remove files of content nobody references any more; checked by the indexed content hash in every photo table. */
-export async function pruneUnreferenced(uploadsDir: string, byHash: Map<string, string[]>): Promise<void> {
+export async function pruneUnreferenced(store: PhotoStore, byHash: Map<string, string[]>): Promise<void> {
   for (const [contentHash, files] of byHash) {
     const counts = await Promise.all([Photo, ListingPhoto, PartPhoto].map((m) => (m as typeof Photo).count({ where: { contentHash } })));
-    if (counts.every((n) => n === 0)) await removeFiles(uploadsDir, files);
+    if (counts.every((n) => n === 0)) await store.remove(files);
   }
 }
 
@@ -55,9 +56,9 @@ export function filesByHash(rows: StoredFiles[]): Map<string, string[]> {
 }
 
 /** After photo rows are deleted: remove their files unless another photo shows the same content. */
-export async function pruneAfterRemoval(uploadsDir: string, rows: StoredFiles[]): Promise<void> {
+export async function pruneAfterRemoval(store: PhotoStore, rows: StoredFiles[]): Promise<void> {
   const byHash = filesByHash(rows);
-  await withContentLocks(byHash.keys(), () => pruneUnreferenced(uploadsDir, byHash));
+  await withContentLocks(byHash.keys(), () => pruneUnreferenced(store, byHash));
 }
 
 /**
@@ -65,18 +66,18 @@ export async function pruneAfterRemoval(uploadsDir: string, rows: StoredFiles[])
  * If it fails, the files this call created are removed again unless another row already uses the
  * same content, and the original failure is rethrown.
  */
-export async function storeThenRecord<T>(uploadsDir: string, processed: ProcessedPhoto[], record: () => Promise<T>): Promise<T> {
+export async function storeThenRecord<T>(store: PhotoStore, processed: ProcessedPhoto[], record: () => Promise<T>): Promise<T> {
   return withContentLocks(
     processed.map((p) => p.contentHash),
     async () => {
-      const created = await writeVariants(uploadsDir, processed);
+      const created = await writeVariants(store, processed);
       try {
         return await record();
       } catch (err) {
         const byHash = new Map<string, string[]>();
         for (const file of created) byHash.set(file.slice(0, 64), [...(byHash.get(file.slice(0, 64)) ?? []), file]);
         // The original failure is what the client needs to hear about; a leftover file is the lesser harm.
-        await pruneUnreferenced(uploadsDir, byHash).catch(() => undefined);
+        await pruneUnreferenced(store, byHash).catch(() => undefined);
         throw err;
       }
     },

@@ -1,12 +1,10 @@
-import { createHash, randomBytes } from 'node:crypto';
-import { link, mkdir, stat, unlink, writeFile } from 'node:fs/promises';
-import { join } from 'node:path';
+import { createHash } from 'node:crypto';
 import sharp, { type Metadata } from 'sharp';
 import { fileTypeFromBuffer } from 'file-type';
 import pLimit from 'p-limit';
 import { availableParallelism } from 'node:os';
-import { AppError, InsufficientStorageError } from '../errors.ts';
-import { isNoSpace } from '../ops/disk-space.ts';
+import { AppError } from '../errors.ts';
+import type { PhotoStore } from '../storage/photo-store.ts';
 
 export const MAX_FILE_BYTES = 20 * 1024 * 1024;
 export const MAX_FILES_PER_UPLOAD = 10;
@@ -14,7 +12,6 @@ export const MAX_FILES_PER_UPLOAD = 10;
 export const MAX_INPUT_PIXELS = 50_000_000;
 const DISPLAY_EDGE = 1600;
 const THUMB_EDGE = 400;
-const STORED_NAME = /^[a-f0-9]{64}(-t)?\.webp$/;
 
 /** An upload refused for what its bytes are (415, 413 or 400 with its own code), so the client can say why. */
 export class ImageRejectedError extends AppError {}
@@ -42,7 +39,7 @@ const ACCEPTED = new Map<string, string>([
 export const ACCEPTED_IMAGE_TYPES: readonly string[] = [...ACCEPTED.keys()];
 
 export interface StoredVariant {
-  /** Content-hash file name under the uploads dir. */
+  /** Content-hash file name in the photo store. */
   file: string;
   bytes: Buffer;
   width: number;
@@ -126,51 +123,13 @@ async function convert(input: Buffer, index: number): Promise<ProcessedPhoto> {
   };
 }
 
-const isMissing = (err: unknown) => (err as NodeJS.ErrnoException).code === 'ENOENT';
-const exists = (path: string) =>
-  stat(path).then(
-    () => true,
-    (err) => (isMissing(err) ? false : Promise.reject(err)),
-  );
-
 /**
- * Put the variants on disk under their content-hash names and return only the files this call
+ * Put the variants in the store under their content-hash names and return only the files this call
  * created, so a failed request removes exactly those. A file that already exists is the same
- * content and is not written again; new files appear whole (temp file, then hard link).
+ * content and is not written again.
  */
-export async function writeVariants(dir: string, photos: ProcessedPhoto[]): Promise<string[]> {
-  await mkdir(dir, { recursive: true });
-  const variants = new Map(photos.flatMap((p) => [p.display, p.thumb]).map((v) => [v.file, v.bytes]));
-  const created: string[] = [];
-  try {
-    for (const [file, bytes] of variants) {
-      const target = join(dir, file);
-      if (await exists(target)) continue;
-      const temp = join(dir, `.tmp-${randomBytes(8).toString('hex')}`);
-      try {
-        await writeFile(temp, bytes, { flag: 'wx' });
-        await link(temp, target).then(
-          () => void created.push(file),
-          (err: NodeJS.ErrnoException) => (err.code === 'EEXIST' ? undefined : Promise.reject(err)),
-        );
-      } finally {
-        await unlink(temp).catch(() => undefined);
-      }
-    }
-  } catch (err) {
-    await removeFiles(dir, created).catch(() => undefined);
-    // A full disk is the server's state, not the upload's fault: 507 and a message to try later.
-    throw isNoSpace(err) ? new InsufficientStorageError() : err;
-  }
-  return created;
-}
-
-/** Delete stored variants by name; only content-hash names are touched, so a bad value can never reach outside the dir. */
-export async function removeFiles(dir: string, files: Iterable<string>): Promise<void> {
-  for (const file of new Set(files)) {
-    if (!STORED_NAME.test(file)) continue;
-    await unlink(join(dir, file)).catch((err) => (isMissing(err) ? undefined : Promise.reject(err)));
-  }
+export function writeVariants(store: PhotoStore, photos: ProcessedPhoto[]): Promise<string[]> {
+  return store.putMissing(new Map(photos.flatMap((p) => [p.display, p.thumb]).map((v) => [v.file, v.bytes])));
 }
 
 const lockTails = new Map<string, Promise<void>>();

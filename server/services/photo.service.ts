@@ -1,4 +1,5 @@
 import type { Transaction } from 'sequelize';
+import type { PhotoStore } from '../storage/photo-store.ts';
 import { withWriteTransaction } from '../db/write-transaction.ts';
 import type { Actor } from '@shared/policies.ts';
 import type { PhotoDto, UpdatePhotoInput } from '@shared/schemas/build.ts';
@@ -52,15 +53,10 @@ export async function assertCanAddPhotos(actor: Actor | null, buildId: number): 
  * files land first, then all rows in one transaction; on any failure the files this request
  * created are removed again unless another row already uses the same content.
  */
-export async function uploadPhotos(
-  actor: Actor | null,
-  buildId: number,
-  input: UploadPhotosInput,
-  uploadsDir: string,
-): Promise<PhotoDto[]> {
+export async function uploadPhotos(actor: Actor | null, buildId: number, input: UploadPhotosInput, store: PhotoStore): Promise<PhotoDto[]> {
   const alts = altsFor(input.alt, input.files.length);
   const processed = await processAll(input.files);
-  return storeThenRecord(uploadsDir, processed, async () => {
+  return storeThenRecord(store, processed, async () => {
     const rows = await withWriteTransaction(Build.sequelize!, async (transaction) => {
       const build = await loadBuildForEdit(actor, buildId, transaction);
       if (input.entryId !== undefined) await assertEntryOfBuild(buildId, input.entryId, transaction);
@@ -96,7 +92,7 @@ export async function updatePhoto(actor: Actor | null, buildId: number, photoId:
 }
 
 /** Remove a photo; its files go too once no other photo shows the same content, and it stops being the cover. */
-export async function deletePhoto(actor: Actor | null, buildId: number, photoId: number, uploadsDir: string): Promise<void> {
+export async function deletePhoto(actor: Actor | null, buildId: number, photoId: number, store: PhotoStore): Promise<void> {
   const photo = await withWriteTransaction(Build.sequelize!, async (transaction) => {
     const build = await loadBuildForEdit(actor, buildId, transaction);
     const p = await loadPhoto(buildId, photoId, transaction);
@@ -105,7 +101,7 @@ export async function deletePhoto(actor: Actor | null, buildId: number, photoId:
     await markEdited(build, transaction);
     return p;
   });
-  await pruneAfterRemoval(uploadsDir, [photo]);
+  await pruneAfterRemoval(store, [photo]);
 }
 
 /** Put the build's photos in the given order; the list must name each of its photos exactly once. */

@@ -31,7 +31,7 @@ export async function startLiveApp(): Promise<LiveApp> {
   const uploadsDir = process.env.TEST_UPLOADS_DIR ?? mkdtempSync(join(tmpdir(), 'scanwright-live-uploads-'));
   mkdirSync(uploadsDir, { recursive: true });
   const t = await startTestApp({ publicUrl: baseUrl, port, uploadsDir });
-  await seedDemoOnce(t.handle.sequelize, demoPictureAttacher(uploadsDir));
+  await seedDemoOnce(t.handle.sequelize, demoPictureAttacher(t.handle.photos));
   const server: Server = await new Promise((resolve) => {
     const s = t.app.listen(port, '127.0.0.1', () => resolve(s));
   });

@@ -1,6 +1,7 @@
 // Pictures for the demo builds, drawn here as SVG and rendered by sharp: schematic scenes in our
 // palette, no photographs. Stored through the same pipeline as uploads.
 import sharp from 'sharp';
+import type { PhotoStore } from '../../storage/photo-store.ts';
 import type { Transaction } from 'sequelize';
 import { Photo } from '../../models/photo.model.ts';
 import { PartPhoto } from '../../models/part-photo.model.ts';
@@ -48,12 +49,12 @@ ${['X+', 'Y+', 'X−'].map((t, i) => `<text x="${520 + i * 80}" y="420" font-siz
 };
 
 /** Render each scene, store it like an upload, and add the rows (build, part or listing photos) inside the seed's transaction. */
-export function demoPictureAttacher(uploadsDir: string): AttachPictures {
+export function demoPictureAttacher(store: PhotoStore): AttachPictures {
   return async (target, pictures, transaction: Transaction) => {
     for (const [position, picture] of pictures.entries()) {
       const png = await sharp(Buffer.from(SCENES[picture.scene])).png().toBuffer();
       const processed = await processPhoto(png);
-      await writeVariants(uploadsDir, [processed]);
+      await writeVariants(store, [processed]);
       const stored = { ...storedColumns(processed), alt: picture.alt, position };
       if ('build' in target)
         await Photo.create({ ...stored, buildId: target.build.id, entryId: null, ownerId: target.build.ownerId }, { transaction });
