@@ -202,12 +202,12 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   app.use(privateAnswers('scanwright.sid'));
   app.use(maintenance(sequelize));
   // A rig's personal API token: checked (401/403/429) before any body is read; such requests skip sessions and CSRF.
-  app.use(...bearerToken(config.rateLimits));
+  app.use(...bearerToken(config));
 
   // Workbench calculations are open to visitors, and reading a body of up to 32 MB (a 200 000-sample sine record) costs
   // seconds of CPU: large ones are limited per client before the body is read (normal use sends kilobytes).
   // A compressed body is counted by its inflated size, after the parser has inflated it (within the 32 MB limit).
-  const largeBodies = largeBodyLimit(config.rateLimits);
+  const largeBodies = largeBodyLimit(config);
   app.use('/api/workbench', largeBodies.beforeBody);
   app.use(['/api/workbench', '/api/actuators', '/api/runs'], jsonBody('32mb'));
   app.use('/api/workbench', largeBodies.afterBody);
@@ -231,7 +231,7 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   // The registry search is the hottest route: first in line.
   app.use(partRoutes(config, photos));
   app.use(sessionRoutes());
-  app.use(authRoutes(passport, limiter(config.rateLimits, { windowMs: 60_000, limit: 20, what: 'sign-in attempts' })));
+  app.use(authRoutes(passport, limiter(config, { windowMs: 60_000, limit: 20, what: 'sign-in attempts' })));
   app.use(adminRoutes());
   app.use(outboxRoutes());
   app.use(workbenchRoutes());

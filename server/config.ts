@@ -35,6 +35,7 @@ const envSchema = z
     S3_PREFIX: z.string().default(''),
     CLIENT_DIST: z.string().default('dist/client'),
     RATE_LIMITS: bool.default(true),
+    RATE_LIMIT_STORE: z.enum(['memory', 'mariadb']).default('memory'),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
     READY_MIN_FREE_MB: z.coerce.number().min(0).default(200),
     READY_MAX_OUTBOX: z.coerce.number().int().min(1).default(500),
@@ -74,6 +75,8 @@ export interface Config {
   } | null;
   clientDist: string;
   rateLimits: boolean;
+  /** Where limit counts live: this process's memory, or MariaDB (shared by every instance on the database). */
+  rateLimitStore: 'memory' | 'mariadb';
   logLevel: string;
   /** /api/ready bounds (uploads disk free space, unsent mails) and the /metrics bearer token (loopback only when null). */
   ops: { readyMinFreeMb: number; readyMaxOutbox: number; metricsToken: string | null };
@@ -120,6 +123,7 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env, overrides: P
       : null,
     clientDist: e.CLIENT_DIST,
     rateLimits: e.RATE_LIMITS,
+    rateLimitStore: e.RATE_LIMIT_STORE,
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
     ops: { readyMinFreeMb: e.READY_MIN_FREE_MB, readyMaxOutbox: e.READY_MAX_OUTBOX, metricsToken: e.METRICS_TOKEN ?? null },
     outbox: { leaseS: e.OUTBOX_LEASE_S, smtpTimeoutMs: Math.round(e.SMTP_TIMEOUT_S * 1000) },

@@ -26,6 +26,7 @@ import * as addBuildReviewNotePublic from './migrations/20261210000300-add-build
 import * as createBuildComments from './migrations/20261212000100-create-build-comments.ts';
 import * as createConversationsAndFollows from './migrations/20261214000100-create-conversations-and-follows.ts';
 import * as createBuildReviewSnapshots from './migrations/20261213000100-create-build-review-snapshots.ts';
+import * as createRateLimitCounters from './migrations/20261215000100-create-rate-limit-counters.ts';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -57,6 +58,7 @@ const migrations: Array<[string, { up: Migration; down: Migration }]> = [
   ['20261212000100-create-build-comments', createBuildComments],
   ['20261214000100-create-conversations-and-follows', createConversationsAndFollows],
   ['20261213000100-create-build-review-snapshots', createBuildReviewSnapshots],
+  ['20261215000100-create-rate-limit-counters', createRateLimitCounters],
 ];
 
 /** Umzug over our migration list; the only source of the schema, in tests too. */

@@ -3,7 +3,7 @@ import type { TokenScope } from '@shared/schemas/api-token.ts';
 import { tokenMayRequest } from '@shared/auth/token-scopes.ts';
 import { AppError, ForbiddenError } from '../errors.ts';
 import { authenticateApiToken } from '../services/api-token.service.ts';
-import { limiter } from './rate-limit.ts';
+import { limiter, type RateLimitSettings } from './rate-limit.ts';
 import { routePath } from './route-path.ts';
 
 declare module 'express-serve-static-core' {
@@ -24,7 +24,7 @@ const invalidToken = () =>
  * scopes allow (`shared/auth/token-scopes.ts`, else 403 `token_scope`). The request then acts as the
  * token's owner; the session and CSRF middleware skip it (`unlessBearer`).
  */
-export function bearerToken(rateLimits: boolean): RequestHandler[] {
+export function bearerToken(rateLimits: RateLimitSettings): RequestHandler[] {
   const authenticate: RequestHandler = async (req, res, next) => {
     const header = req.headers.authorization;
     if (header === undefined) return next();

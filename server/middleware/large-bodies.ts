@@ -1,5 +1,5 @@
 import type { Request, RequestHandler } from 'express';
-import { limiter } from './rate-limit.ts';
+import { limiter, type RateLimitSettings } from './rate-limit.ts';
 
 /** A body over this many bytes (as parsed, after any Content-Encoding is undone) is a large one. */
 const LARGE_BYTES = 1_000_000;
@@ -18,10 +18,10 @@ const encoded = (req: Request) => (req.headers['content-encoding'] ?? 'identity'
  * a plain body by its Content-Length before it is read (no length: counted), a gzip, deflate or br body by its
  * inflated size once the parser has inflated it — a 10 kB gzip body can inflate to 32 MB. One counter for both.
  */
-export function largeBodyLimit(enabled: boolean): { beforeBody: RequestHandler; afterBody: RequestHandler } {
+export function largeBodyLimit(settings: RateLimitSettings): { beforeBody: RequestHandler; afterBody: RequestHandler } {
   const large = (req: Request) =>
     encoded(req) ? (inflatedSizes.get(req) ?? 0) > LARGE_BYTES : Number(req.headers['content-length'] ?? Infinity) > LARGE_BYTES;
-  const limit = limiter(enabled, {
+  const limit = limiter(settings, {
     windowMs: 60_000,
     limit: 10,
     what: 'large workbench calculations (over 1 MB)',

@@ -1,9 +1,17 @@
 import { rateLimit } from 'express-rate-limit';
 import type { Request, RequestHandler } from 'express';
+import type { Config } from '../config.ts';
+import { MariaDbRateLimitStore } from './rate-limit-store.ts';
 
-/** A per-client limiter answering 429 in the error shape; a no-op when limits are switched off (benchmarks, most tests). */
+/** Whether limits apply, and where their counts live. */
+export type RateLimitSettings = Pick<Config, 'rateLimits' | 'rateLimitStore'>;
+
+/**
+ * A per-client limiter answering 429 in the error shape; a no-op when limits are switched off (benchmarks, most tests).
+ * Counts are kept in this process, or in MariaDB when several instances must share them (`rateLimitStore`).
+ */
 export function limiter(
-  enabled: boolean,
+  settings: RateLimitSettings,
   opts: {
     windowMs: number;
     limit: number;
@@ -14,12 +22,13 @@ export function limiter(
     skip?: (req: Request) => boolean;
   },
 ): RequestHandler {
-  if (!enabled) return (_req, _res, next) => next();
+  if (!settings.rateLimits) return (_req, _res, next) => next();
   return rateLimit({
     windowMs: opts.windowMs,
     limit: opts.limit,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
+    ...(settings.rateLimitStore === 'mariadb' ? { store: new MariaDbRateLimitStore(opts.what) } : {}),
     ...(opts.skip ? { skip: opts.skip } : {}),
     ...(opts.perUser ? { keyGenerator: (req: Request) => `user:${(req.user as { id?: number } | undefined)?.id ?? 'anon'}` } : {}),
     ...(opts.keyOf ? { keyGenerator: opts.keyOf } : {}),

@@ -21,6 +21,7 @@ import { PartPhoto } from './part-photo.model.ts';
 import { Message, MessageThread } from './message.model.ts';
 import { ApiToken } from './api-token.model.ts';
 import { IdempotencyKey } from './idempotency-key.model.ts';
+import { RateLimitCounter } from './rate-limit-counter.model.ts';
 
 /** Bind every model to this process's Sequelize instance and declare associations. */
 export function initModels(sequelize: Sequelize) {
@@ -47,6 +48,7 @@ export function initModels(sequelize: Sequelize) {
   Message.initModel(sequelize);
   ApiToken.initModel(sequelize);
   IdempotencyKey.initModel(sequelize);
+  RateLimitCounter.initModel(sequelize);
   Build.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
   Actuator.belongsTo(Part, { as: 'part', foreignKey: 'partId' });
   // The session store's model; its table comes from a migration, never from sync().

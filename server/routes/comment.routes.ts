@@ -10,7 +10,7 @@ import { route } from './route.ts';
 /** Comments on published builds: read by anyone, written by signed-in makers (rate limited), hidden by moderators. */
 export function commentRoutes(config: Config): Router {
   const r = Router();
-  const commentLimit = limiter(config.rateLimits, { windowMs: 10 * 60_000, limit: 10, what: 'comments', perUser: true });
+  const commentLimit = limiter(config, { windowMs: 10 * 60_000, limit: 10, what: 'comments', perUser: true });
   r.get(
     '/api/builds/:buildId/comments',
     route({ params: buildIdParams }, async ({ actor, params, res }) => {

@@ -20,7 +20,7 @@ import { route } from './route.ts';
 /** The exchange: listings, messages to their owners, and each maker's inbox. */
 export function exchangeRoutes(config: Config, photos: PhotoStore): Router {
   const r = Router();
-  const messageLimit = limiter(config.rateLimits, { windowMs: 10 * 60_000, limit: 20, what: 'messages', perUser: true });
+  const messageLimit = limiter(config, { windowMs: 10 * 60_000, limit: 20, what: 'messages', perUser: true });
   r.get(
     '/api/listings',
     route({ query: listListingsQuery }, async ({ actor, query, res }) => {

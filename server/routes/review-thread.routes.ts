@@ -10,7 +10,7 @@ import { route } from './route.ts';
 /** A build's review thread: its maker and the moderators, nobody else (404 for them). */
 export function reviewThreadRoutes(config: Config): Router {
   const r = Router();
-  const postLimit = limiter(config.rateLimits, { windowMs: 10 * 60_000, limit: 20, what: 'review-thread posts', perUser: true });
+  const postLimit = limiter(config, { windowMs: 10 * 60_000, limit: 20, what: 'review-thread posts', perUser: true });
   r.get(
     '/api/builds/:buildId/review-thread',
     requireUser,

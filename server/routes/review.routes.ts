@@ -23,7 +23,7 @@ import { route } from './route.ts';
 /** The review desk, reports and the audit trail. */
 export function reviewRoutes(config: Config): Router {
   const r = Router();
-  const reportLimit = limiter(config.rateLimits, { windowMs: 60 * 60_000, limit: 30, what: 'reports', perUser: true });
+  const reportLimit = limiter(config, { windowMs: 60 * 60_000, limit: 30, what: 'reports', perUser: true });
   r.get(
     '/api/review/queue',
     requireUser,
