@@ -3,10 +3,15 @@
 // and tests). npm packages stay external and load from node_modules; `@shared/` comes from tsconfig paths.
 import { build } from 'esbuild';
 
-/** Builds dist/server/{index,migrate,prepare}.mjs from the TypeScript sources. */
+/** Builds dist/server/{index,migrate,prepare,stand-ins}.mjs from the TypeScript sources. */
 export async function buildServer() {
   await build({
-    entryPoints: { index: 'server/index.ts', migrate: 'server/cli/migrate.ts', prepare: 'server/cli/prepare.ts' },
+    entryPoints: {
+      index: 'server/index.ts',
+      migrate: 'server/cli/migrate.ts',
+      prepare: 'server/cli/prepare.ts',
+      'stand-ins': 'server/cli/stand-ins.ts',
+    },
     outdir: 'dist/server',
     outExtension: { '.js': '.mjs' },
     bundle: true,

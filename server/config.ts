@@ -25,6 +25,8 @@ const envSchema = z
     SMTP_URL: z.string().optional(),
     SMTP_CATCHER_PORT: z.coerce.number().int().default(2525),
     INBOX_PORT: z.coerce.number().int().default(3025),
+    /** `external`: the OAuth stand-in and SMTP catcher run once elsewhere (npm run cluster), not in each instance. */
+    STAND_INS: z.enum(['auto', 'external']).default('auto'),
     MAIL_FROM: z.string().default('Scanwright <no-reply@scanwright.local>'),
     UPLOADS_DIR: z.string().default('uploads'),
     S3_BUCKET: z.string().trim().optional(),
@@ -134,5 +136,5 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env, overrides: P
 /** Ports the local stand-ins listen on when no real service is configured. */
 export function standInPorts(source: NodeJS.ProcessEnv = process.env) {
   const e = envSchema.parse(source);
-  return { oauth: e.OAUTH_STANDIN_PORT, smtp: e.SMTP_CATCHER_PORT, inbox: e.INBOX_PORT };
+  return { oauth: e.OAUTH_STANDIN_PORT, smtp: e.SMTP_CATCHER_PORT, inbox: e.INBOX_PORT, external: e.STAND_INS === 'external' };
 }

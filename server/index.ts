@@ -17,10 +17,13 @@ const ports = standInPorts();
 
 let oauth: OAuthStandIn | null = null;
 let catcher: SmtpCatcher | null = null;
-if (config.github.standIn) oauth = await startOAuthStandIn(ports.oauth);
-if (!config.smtpUrl) catcher = await startSmtpCatcher(ports.smtp, ports.inbox);
+// With STAND_INS=external (npm run cluster) they run once for every instance (server/cli/stand-ins.ts) on the same ports.
+if (config.github.standIn && !ports.external) oauth = await startOAuthStandIn(ports.oauth);
+if (!config.smtpUrl && !ports.external) catcher = await startSmtpCatcher(ports.smtp, ports.inbox);
 
-const mailer = createMailer(config.smtpUrl ?? catcher!.smtpUrl, config.mailFrom, log, { timeoutMs: config.outbox.smtpTimeoutMs });
+const mailer = createMailer(config.smtpUrl ?? catcher?.smtpUrl ?? `smtp://127.0.0.1:${ports.smtp}`, config.mailFrom, log, {
+  timeoutMs: config.outbox.smtpTimeoutMs,
+});
 const handle = await createApp(config, { mailer, log });
 const demoRest = (role: string) => DEMO_ACCOUNTS.slice(3).filter((a) => a.role === role).length;
 const server: Server = handle.app.listen(config.port, config.host, () => {
@@ -28,9 +31,11 @@ const server: Server = handle.app.listen(config.port, config.host, () => {
     '',
     '  Scanwright is running',
     `  App          ${config.publicUrl}`,
-    oauth ? `  Sign-in      local stand-in at ${oauth.url} (GitHub when GITHUB_CLIENT_ID/SECRET are set)` : '  Sign-in      GitHub',
-    catcher ? `  Mail inbox   ${catcher.inboxUrl}` : `  Mail         ${config.smtpUrl}`,
     oauth
+      ? `  Sign-in      local stand-in at ${oauth.url} (GitHub when GITHUB_CLIENT_ID/SECRET are set)`
+      : `  Sign-in      ${config.github.baseUrl}`,
+    catcher ? `  Mail inbox   ${catcher.inboxUrl}` : `  Mail         ${config.smtpUrl ?? `smtp://127.0.0.1:${ports.smtp}`}`,
+    config.github.standIn
       ? `  Demo logins  ${DEMO_ACCOUNTS.slice(0, 3)
           .map((a) => a.login)
           .join(', ')} (+ ${demoRest('maker')} demo makers, ${demoRest('moderator')} more moderator)`

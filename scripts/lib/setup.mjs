@@ -7,10 +7,18 @@ import { mariadbTools } from './mariadb.mjs';
 const run = (cmd, args, opts = {}) => spawnSync(cmd, args, { stdio: 'inherit', ...opts });
 const has = (cmd) => spawnSync('sh', ['-c', `command -v ${cmd}`], { stdio: 'ignore' }).status === 0;
 
-/** Install Debian packages with apt-get when root; otherwise say exactly what to install. */
-export function ensureDebianPackages({ chromium = false } = {}) {
+/**
+ * Install Debian packages with apt-get when root; otherwise say exactly what to install. `cluster` (npm run cluster)
+ * also needs Galera's provider, rsync for its state transfers and haproxy.
+ */
+export function ensureDebianPackages({ chromium = false, cluster = false } = {}) {
   const missing = [];
   if (!mariadbTools()) missing.push('mariadb-server', 'mariadb-client');
+  if (cluster) {
+    if (!existsSync('/usr/lib/galera/libgalera_smm.so')) missing.push('galera-4');
+    if (!has('rsync')) missing.push('rsync');
+    if (!has('haproxy') && !existsSync('/usr/sbin/haproxy')) missing.push('haproxy');
+  }
   if (chromium && !existsSync('/usr/bin/chromium')) missing.push('chromium');
   if (missing.length === 0) return;
   const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
