@@ -64,6 +64,8 @@ const appEnv = {
   S3_ACCESS_KEY_ID: S3_KEY,
   S3_SECRET_ACCESS_KEY: S3_KEY,
   RATE_LIMIT_STORE: 'mariadb',
+  // haproxy adds X-Forwarded-For: limits per address count the visitor, not the proxy.
+  TRUST_PROXY: '1',
   STAND_INS: 'external',
   OAUTH_STANDIN_PORT: String(PORTS.oauth),
   SMTP_CATCHER_PORT: String(PORTS.smtp),
@@ -211,6 +213,7 @@ frontend web
 backend apps
   mode http
   balance roundrobin
+  option forwardedfor
   option httpchk GET /api/ready
   http-check expect status 200
   default-server inter 500ms fall 2 rise 2

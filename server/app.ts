@@ -128,7 +128,8 @@ export async function createApp(config: Config, deps: { mailer?: Mailer; log?: L
   const app = express();
   app.disable('x-powered-by');
   app.set('query parser', 'simple');
-  if (https) app.set('trust proxy', 1);
+  // Behind a proxy the client's address (rate limits per address, logs) comes from X-Forwarded-For.
+  if (https || config.trustProxy > 0) app.set('trust proxy', Math.max(config.trustProxy, 1));
   app.use(drain.middleware, metrics.middleware);
   const probes = new Set(['/api/health', '/api/ready', '/metrics']);
   app.use(

@@ -37,6 +37,8 @@ const envSchema = z
     S3_PREFIX: z.string().default(''),
     CLIENT_DIST: z.string().default('dist/client'),
     RATE_LIMITS: bool.default(true),
+    /** Proxies in front of the app whose X-Forwarded-For is believed (npm run cluster: haproxy, 1). */
+    TRUST_PROXY: z.coerce.number().int().min(0).max(5).default(0),
     RATE_LIMIT_STORE: z.enum(['memory', 'mariadb']).default('memory'),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
     READY_MIN_FREE_MB: z.coerce.number().min(0).default(200),
@@ -77,6 +79,8 @@ export interface Config {
   } | null;
   clientDist: string;
   rateLimits: boolean;
+  /** Hops of X-Forwarded-For to trust for the client address (0: none; behind HTTPS at least 1). */
+  trustProxy: number;
   /** Where limit counts live: this process's memory, or MariaDB (shared by every instance on the database). */
   rateLimitStore: 'memory' | 'mariadb';
   logLevel: string;
@@ -125,6 +129,7 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env, overrides: P
       : null,
     clientDist: e.CLIENT_DIST,
     rateLimits: e.RATE_LIMITS,
+    trustProxy: e.TRUST_PROXY,
     rateLimitStore: e.RATE_LIMIT_STORE,
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
     ops: { readyMinFreeMb: e.READY_MIN_FREE_MB, readyMaxOutbox: e.READY_MAX_OUTBOX, metricsToken: e.METRICS_TOKEN ?? null },

@@ -46,6 +46,21 @@ describe('a limit shared through MariaDB', () => {
   });
 });
 
+describe('behind a proxy (TRUST_PROXY=1, as in npm run cluster)', () => {
+  test('when visitors arrive through the proxy from two addresses, then each address has its own sign-in limit', async () => {
+    const proxied = await startTestApp({ rateLimits: true, rateLimitStore: 'mariadb', trustProxy: 1 });
+    try {
+      const from = (ip: string) => request(proxied.app).get('/auth/github?login=someone').set('X-Forwarded-For', ip);
+      for (let i = 0; i < 20; i++) expect((await from('192.0.2.10')).status).toBe(302);
+      expectError(await from('192.0.2.10'), 429, 'rate_limited');
+      expect((await from('192.0.2.11')).status).toBe(302);
+    } finally {
+      await proxied.close();
+      a.rebind();
+    }
+  });
+});
+
 describe('MariaDbRateLimitStore', () => {
   test('when a client hits concurrently, then every hit is counted once; after the window it starts again at 1', async () => {
     const store = new MariaDbRateLimitStore('store-test');
