@@ -29,7 +29,8 @@ const tooSmall = (d: readonly [number, number]): [number, number] =>
  * Every chart of the app: uPlot draws the axes, grid and zoom selection on a canvas, the chart's layers are drawn
  * over the plot area by `drawLayers` (markers up to 2 000 points, one square per pixel beyond), the legend is HTML
  * at the text size and `ChartFigures` lists the figures in words. On the plot, `data-drawn-at` holds the time of the
- * last drawing (performance.now()) and `data-markers` the points it drew, for the benchmarks and the browser tests.
+ * last drawing (performance.now()), `data-first-draw-ms` how long the chart took from creation to its first drawing,
+ * `data-markers` the points it drew and `data-x-range` the x range shown, for the benchmarks and the browser tests.
  */
 export function UplotChart({ x, y, layers, legend = [], figures, height, square = false, zoom = false }: UplotChartProps) {
   const box = useRef<HTMLDivElement>(null);
@@ -40,6 +41,8 @@ export function UplotChart({ x, y, layers, legend = [], figures, height, square 
   useEffect(() => {
     const el = box.current;
     if (!el) return;
+    const created = performance.now();
+    let first = true;
     const xDomain = tooSmall(x.domain);
     const yDomain = tooSmall(y.domain);
     const sizeFor = (width: number) => ({ width, height: square ? Math.min(width, height) : height });
@@ -76,14 +79,18 @@ export function UplotChart({ x, y, layers, legend = [], figures, height, square 
               axisLabelFont,
             );
             ctx.restore();
+            const now = performance.now();
             el.dataset.markers = String(markers);
-            el.dataset.drawnAt = String(performance.now());
+            el.dataset.drawnAt = String(now);
+            if (first) el.dataset.firstDrawMs = (now - created).toFixed(1);
+            first = false;
           },
         ],
         setScale: [
           (u, key) => {
             if (key !== 'x') return;
             const { min, max } = u.scales.x;
+            el.dataset.xRange = `${min},${max}`;
             const span = xDomain[1] - xDomain[0];
             setZoomed(min != null && max != null && (Math.abs(min - xDomain[0]) > span * 1e-9 || Math.abs(max - xDomain[1]) > span * 1e-9));
           },
