@@ -18,7 +18,7 @@ import { startServerProcess } from './lib/bench-server.ts';
 
 const DATABASE = 'scanwright_pages';
 const RUNS = Number(process.env.BENCH_RUNS ?? 5);
-const CHART = '.recharts-surface';
+const CHART = '[data-drawn-at]';
 /** Targets from the page-weight issue: the home page and every other page, compressed JavaScript at first load. */
 const HOME_KB = 100;
 const PAGE_KB = 200;

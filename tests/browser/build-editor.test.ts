@@ -154,7 +154,7 @@ describe('journey: a maker writes a build and submits it for review', () => {
     await preview.getByText('Gain (preview)').waitFor();
     expect(await preview.textContent()).toMatch(/9[56]\.\d+ ± \d+\.\d+\s*nm\/V/);
     expect(await preview.textContent()).toMatch(/Hysteresis\d+(\.\d+)? % of span/);
-    await preview.locator('.recharts-surface').first().waitFor();
+    await preview.locator('[data-drawn-at]').first().waitFor();
     await run.screenshot({ path: `${SCREENSHOTS}/build-editor-run-form-1280.png` });
     await run.getByRole('button', { name: 'Save calibration run' }).click();
     await page.getByText('Stored fit, computed by Scanwright').waitFor();

@@ -27,7 +27,7 @@ describe('journey: every chart has its figures in words', () => {
       await page.goto(`${j.live.baseUrl}${path}`);
       await page.locator('main h1').first().waitFor();
       await page.waitForLoadState('networkidle');
-      const wrappers = page.locator('.recharts-wrapper');
+      const wrappers = page.getByTestId('chart');
       await wrappers.first().waitFor();
       const n = await wrappers.count();
       charts += n;
@@ -37,10 +37,9 @@ describe('journey: every chart has its figures in words', () => {
       const first = figures.first();
       await first.locator('summary').click();
       expect(await first.locator('dl').textContent(), path).toMatch(/\d.*(nm|V|s)\b/);
-      // Legends, ours or the chart library's, at the page's small text size (14 px), never smaller.
-      const sizes = await page
-        .locator('.recharts-legend-wrapper, ul[aria-label="Legend"]')
-        .evaluateAll((els) => els.map((el) => getComputedStyle(el).fontSize));
+      // Every chart has a legend, at the page's small text size (14 px), never smaller.
+      const sizes = await page.locator('ul[aria-label="Legend"]').evaluateAll((els) => els.map((el) => getComputedStyle(el).fontSize));
+      expect(sizes.length, path).toBe(n);
       for (const size of sizes) expect(size, path).toBe('14px');
     }
     expect(charts).toBeGreaterThanOrEqual(pages.length);

@@ -75,8 +75,9 @@ describe('journey: parts registry and exchange', () => {
     await table.getByRole('link', { name: BAR }).click();
     await page.getByRole('heading', { level: 1, name: BAR }).waitFor();
     const plot = page.getByTestId('part-runs-plot');
-    await plot.locator('svg.recharts-surface').waitFor();
-    expect(await plot.locator('.recharts-symbols').count()).toBeGreaterThanOrEqual(4);
+    const drawn = plot.locator('[data-drawn-at]');
+    await drawn.waitFor();
+    expect(Number(await drawn.getAttribute('data-markers'))).toBeGreaterThanOrEqual(4);
     expect(await page.getByRole('alert').filter({ hasText: 'Hazardous voltage: this part is rated up to 60 V' }).count()).toBe(1);
     expect(await page.getByRole('button', { name: 'Report' }).count()).toBe(1);
     await page.getByRole('button', { name: 'Report' }).click();
@@ -170,7 +171,7 @@ describe('journey: parts registry and exchange', () => {
     await page.screenshot({ path: `${SCREENSHOTS}/parts-registry-390.png`, fullPage: true });
 
     await page.getByRole('table').getByRole('link', { name: BAR }).click();
-    await page.getByTestId('part-runs-plot').locator('svg.recharts-surface').waitFor();
+    await page.getByTestId('part-runs-plot').locator('[data-drawn-at]').waitFor();
     expect(await noSideways(page)).toBe(true);
     await page.screenshot({ path: `${SCREENSHOTS}/part-page-390.png`, fullPage: true });
 

@@ -106,7 +106,8 @@ describe('journey: workbench links', () => {
 
     const matrix = page.getByRole('region', { name: 'Drive matrix' });
     await matrix.waitFor();
-    await matrix.locator('svg.recharts-surface polygon').first().waitFor();
+    await matrix.locator('[data-drawn-at]').first().waitFor();
+    expect(await matrix.getByText('Reachable region, corners').count()).toBe(1);
     await page.screenshot({ path: `${SCREENSHOTS}/build-drive-matrix.png`, fullPage: true });
     // Limits ±100 V cross 42.4 V peak [S: IEC 61010-1, 6.3.1 — memory for the clause]
     await matrix.getByText('Hazardous voltage', { exact: false }).first().waitFor();

@@ -75,7 +75,7 @@ describe('journey: a visitor uses the workbench', () => {
     await gain.filter({ hasText: expectedGain('nm') }).waitFor();
     await page.getByText('12 points used, 1 left out').waitFor();
     await page.getByText('displacement “abc” is not a number').waitFor();
-    await page.getByRole('figure', { name: 'Calibration plot' }).locator('svg.recharts-surface').first().waitFor();
+    await page.getByRole('figure', { name: 'Calibration plot' }).locator('[data-drawn-at]').first().waitFor();
     expect(await page.getByRole('figure', { name: 'Calibration plot' }).getByText('Down sweep').count()).toBeGreaterThan(0);
     await page.screenshot({ path: `${SCREENSHOTS}/workbench-fit-desktop.png`, fullPage: true });
 
@@ -98,7 +98,7 @@ describe('journey: a visitor uses the workbench', () => {
     const caution = page.getByRole('alert').filter({ hasText: 'Hazardous voltage' });
     await caution.waitFor();
     expect(await caution.textContent()).toContain('local electrical codes or qualified practice');
-    await page.getByRole('figure', { name: 'Step against DAC bits' }).locator('svg.recharts-surface').first().waitFor();
+    await page.getByRole('figure', { name: 'Step against DAC bits' }).locator('[data-drawn-at]').first().waitFor();
     await page.screenshot({ path: `${SCREENSHOTS}/workbench-scan-planner-desktop.png`, fullPage: true });
     expect(errors).toEqual([]);
   });
@@ -116,7 +116,7 @@ describe('journey: a visitor uses the workbench', () => {
           .first()
           .waitFor();
         const chart = page.getByRole('figure');
-        if (await chart.count()) await chart.first().locator('svg.recharts-surface').first().waitFor();
+        if (await chart.count()) await chart.first().locator('[data-drawn-at]').first().waitFor();
         if (width === 390 || !['fit', 'scan-planner'].includes(slug)) {
           await page.screenshot({ path: `${SCREENSHOTS}/workbench-${slug}-${tag}.png`, fullPage: true });
         }

@@ -7,7 +7,7 @@ const PartRunsChart = lazy(() => import('@/components/charts/part-runs-chart.tsx
 
 const methodLabel = (m: string) => runMethodLabels[m as RunMethod] ?? m;
 
-/** The strip plot of every accepted run (lazily loaded), its legend, and the same story in one sentence. */
+/** The strip plot of every accepted run (lazily loaded, with its legend), and the same story in one sentence. */
 export function PartRunsPlot({ part }: { part: PartDetailDto }) {
   const s = part.stats;
   const runs = part.runs.map((r) => ({
@@ -41,7 +41,7 @@ export function PartRunsPlot({ part }: { part: PartDetailDto }) {
                 )
               </>
             )}
-            . Point at or tap a dot for its build, maker and method.
+            . Point at a dot for its build, maker and method; the figures under the plot list every run.
           </p>
           <div className="mt-2" data-testid="part-runs-plot">
             <Suspense
@@ -54,30 +54,6 @@ export function PartRunsPlot({ part }: { part: PartDetailDto }) {
               <PartRunsChart runs={runs} median={s.gainMedianNmPerV} p25={s.gainP25NmPerV} p75={s.gainP75NmPerV} expected={e} />
             </Suspense>
           </div>
-          <ul aria-label="Legend" className="mt-1 flex flex-wrap justify-center gap-x-4 gap-y-1 text-sm text-ink-soft">
-            <li className="flex items-center gap-1">
-              <svg width="10" height="10" aria-hidden="true">
-                <circle cx="5" cy="5" r="4" fill="#B5532A" />
-              </svg>
-              Accepted run
-            </li>
-            <li className="flex items-center gap-1">
-              <svg width="18" height="10" aria-hidden="true">
-                <rect x="1" y="1" width="16" height="8" fill="#2F6F73" fillOpacity="0.12" stroke="#2F6F73" />
-                <path d="M9 0v10" stroke="#23575A" strokeWidth="2" />
-              </svg>
-              Median and middle half (IQR)
-            </li>
-            {e && (
-              <li className="flex items-center gap-1">
-                <svg width="18" height="10" aria-hidden="true">
-                  <rect width="18" height="10" fill="#C98A00" fillOpacity="0.12" />
-                  <path d="M9 0v10" stroke="#C98A00" strokeDasharray="3 2" strokeWidth="1.5" />
-                </svg>
-                Expected from geometry, with its material band
-              </li>
-            )}
-          </ul>
         </>
       )}
     </section>

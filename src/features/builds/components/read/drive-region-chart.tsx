@@ -1,36 +1,11 @@
-import {
-  CartesianGrid,
-  ReferenceDot,
-  ResponsiveContainer,
-  Scatter,
-  ScatterChart,
-  XAxis,
-  YAxis,
-  useXAxisScale,
-  useYAxisScale,
-} from 'recharts';
+import { useMemo } from 'react';
 import { formatShort } from '@shared/format/measured-number.ts';
-import { chartColors, numberTicks, xAxisLabel, yAxisLabel } from '@/components/charts/chart-theme.ts';
-import { ChartFigures } from '@/components/charts/chart-figures.tsx';
+import { chartColors } from '@/components/charts/chart-theme.ts';
+import { UplotChart } from '@/components/charts/uplot-chart.tsx';
 
 interface PlanePoint {
   xNm: number;
   yNm: number;
-}
-
-function Parallelogram({ corners }: { corners: readonly PlanePoint[] }) {
-  const sx = useXAxisScale();
-  const sy = useYAxisScale();
-  if (!sx || !sy) return null;
-  return (
-    <polygon
-      points={corners.map((c) => `${sx(c.xNm)},${sy(c.yNm)}`).join(' ')}
-      fill={chartColors.teal}
-      fillOpacity={0.14}
-      stroke={chartColors.teal}
-      strokeWidth={1.5}
-    />
-  );
 }
 
 /** A 1-2-5 step giving about four intervals over `span` [practice: the usual chart tick rule]. */
@@ -60,47 +35,36 @@ function squareAxes(points: readonly PlanePoint[]) {
   return { x, y, xTicks: ticksIn(x[0], x[1], step), yTicks: ticksIn(y[0], y[1], step) };
 }
 
-const noMarker = () => <g />;
 const cornersText = (ps: readonly PlanePoint[]) => ps.map((p) => `(${formatShort(p.xNm)}, ${formatShort(p.yNm)})`).join(', ') + ' nm';
 
 /** A small plot of the positions a saved drive matrix reaches within its limits, with the rest position (x₀, y₀). */
 export function DriveRegionChart({ region, rest }: { region: readonly PlanePoint[]; rest: PlanePoint }) {
-  const domain = squareAxes([...region, rest]);
-  return (
-    <div>
-      <ResponsiveContainer width="100%" aspect={1}>
-        <ScatterChart margin={{ top: 4, right: 8, bottom: 20, left: 4 }}>
-          <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
-          <XAxis
-            type="number"
-            dataKey="xNm"
-            domain={domain.x}
-            allowDataOverflow
-            ticks={domain.xTicks}
-            {...numberTicks}
-            label={xAxisLabel('x (nm)', -12)}
-          />
-          <YAxis
-            type="number"
-            dataKey="yNm"
-            domain={domain.y}
-            allowDataOverflow
-            ticks={domain.yTicks}
-            width={64}
-            {...numberTicks}
-            label={yAxisLabel('y (nm)')}
-          />
-          <Parallelogram corners={region} />
-          <Scatter name="Reachable region" data={[...region]} fill={chartColors.teal} shape={noMarker} isAnimationActive={false} />
-          <ReferenceDot x={rest.xNm} y={rest.yNm} r={3} fill={chartColors.ink} stroke="none" />
-        </ScatterChart>
-      </ResponsiveContainer>
-      <ChartFigures
-        figures={[
-          { label: 'Reachable region, corners', value: cornersText(region) },
-          { label: 'Rest position', value: cornersText([rest]) },
-        ]}
-      />
-    </div>
-  );
+  const chart = useMemo(() => {
+    const d = squareAxes([...region, rest]);
+    return {
+      x: { label: 'x (nm)', domain: d.x, ticks: d.xTicks },
+      y: { label: 'y (nm)', domain: d.y, ticks: d.yTicks },
+      layers: [
+        {
+          kind: 'polygon' as const,
+          xs: region.map((p) => p.xNm),
+          ys: region.map((p) => p.yNm),
+          fill: chartColors.teal,
+          fillOpacity: 0.14,
+          stroke: chartColors.teal,
+          width: 1.5,
+        },
+        { kind: 'points' as const, xs: [rest.xNm], ys: [rest.yNm], color: chartColors.ink, radius: 3 },
+      ],
+      legend: [
+        { label: 'Reachable region', swatch: { kind: 'area' as const, fill: chartColors.teal, stroke: chartColors.teal } },
+        { label: 'Rest position', swatch: { kind: 'marker' as const, marker: 'circle' as const, color: chartColors.ink } },
+      ],
+      figures: [
+        { label: 'Reachable region, corners', value: cornersText(region) },
+        { label: 'Rest position', value: cornersText([rest]) },
+      ],
+    };
+  }, [region, rest]);
+  return <UplotChart {...chart} height={360} square />;
 }

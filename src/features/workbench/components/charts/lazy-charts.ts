@@ -1,4 +1,4 @@
-// The chart components, each loaded on first use so recharts stays out of the entry chunk.
+// The chart components, each loaded on first use so the chart library (uPlot) stays out of the entry chunk.
 import { lazy } from 'react';
 
 /** Calibration scatter with the fit line (the app-wide chart in components/charts). */

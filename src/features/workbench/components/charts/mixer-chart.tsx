@@ -1,32 +1,15 @@
-import {
-  CartesianGrid,
-  Legend,
-  ReferenceDot,
-  ResponsiveContainer,
-  Scatter,
-  ScatterChart,
-  XAxis,
-  YAxis,
-  useXAxisScale,
-  useYAxisScale,
-} from 'recharts';
+import { useMemo } from 'react';
 import { niceStep, stepTicks } from './axis-ticks.ts';
 import { formatShort } from '@shared/format/measured-number.ts';
-import { chartColors, legendStyle, numberTicks, xAxisLabel, yAxisLabel } from '@/components/charts/chart-theme.ts';
-import { ChartFigures } from '@/components/charts/chart-figures.tsx';
+import { chartColors } from '@/components/charts/chart-theme.ts';
+import type { ChartLayer } from '@/components/charts/chart-layers.ts';
+import type { LegendItem } from '@/components/charts/chart-legend.tsx';
+import { UplotChart } from '@/components/charts/uplot-chart.tsx';
 
 /** A point of the tip plane in nm. */
 export interface PlanePoint {
   xNm: number;
   yNm: number;
-}
-
-function RegionPolygon({ corners }: { corners: readonly PlanePoint[] }) {
-  const sx = useXAxisScale();
-  const sy = useYAxisScale();
-  if (!sx || !sy) return null;
-  const pts = corners.map((c) => `${sx(c.xNm)},${sy(c.yNm)}`).join(' ');
-  return <polygon points={pts} fill={chartColors.teal} fillOpacity={0.12} stroke={chartColors.teal} strokeWidth={1.5} />;
 }
 
 /** Equal spans on both axes with 1-2-5 ticks, so the parallelogram keeps its true shape. */
@@ -44,68 +27,45 @@ function squareAxes(points: readonly PlanePoint[]): { x: number[]; y: number[] }
   return { x: stepTicks(xLo * step, (xLo + n) * step, step), y: stepTicks(yLo * step, (yLo + n) * step, step) };
 }
 
-const noMarker = () => <g />;
 const cornersText = (ps: readonly PlanePoint[]) => ps.map((p) => `(${formatShort(p.xNm)}, ${formatShort(p.yNm)})`).join(', ') + ' nm';
 
-/** Reachable region (teal parallelogram) with the wanted point: copper dot if reachable, red ring if not. */
+/** Reachable region (teal parallelogram) with the wanted point: copper dot if reachable, red cross if not. */
 export function MixerChart({ region, target }: { region: readonly PlanePoint[]; target: (PlanePoint & { reachable: boolean }) | null }) {
-  const axes = squareAxes([...region, { xNm: 0, yNm: 0 }, ...(target ? [target] : [])]);
-  const domain = { x: [axes.x[0], axes.x[axes.x.length - 1]], y: [axes.y[0], axes.y[axes.y.length - 1]] };
-  return (
-    <div>
-      <ResponsiveContainer width="100%" aspect={1} maxHeight={420}>
-        <ScatterChart margin={{ top: 4, right: 12, bottom: 24, left: 8 }}>
-          <CartesianGrid stroke={chartColors.rule} strokeDasharray="3 3" />
-          <XAxis
-            type="number"
-            dataKey="xNm"
-            domain={domain.x}
-            ticks={axes.x}
-            allowDataOverflow
-            {...numberTicks}
-            label={xAxisLabel('x (nm)')}
-          />
-          <YAxis
-            type="number"
-            dataKey="yNm"
-            domain={domain.y}
-            ticks={axes.y}
-            allowDataOverflow
-            width={72}
-            {...numberTicks}
-            label={yAxisLabel('y (nm)')}
-          />
-          <Legend verticalAlign="top" itemSorter={null} wrapperStyle={legendStyle} />
-          <RegionPolygon corners={region} />
-          <Scatter
-            name="Reachable region"
-            data={[...region]}
-            fill={chartColors.teal}
-            shape={noMarker}
-            legendType="square"
-            isAnimationActive={false}
-          />
-          <ReferenceDot x={0} y={0} r={3} fill={chartColors.ink} stroke="none" />
-          {target && (
-            <Scatter
-              name={target.reachable ? 'Wanted point (reachable)' : 'Wanted point (out of reach)'}
-              data={[target]}
-              fill={target.reachable ? chartColors.copper : chartColors.danger}
-              shape={target.reachable ? 'circle' : 'cross'}
-              legendType={target.reachable ? 'circle' : 'cross'}
-              isAnimationActive={false}
-            />
-          )}
-        </ScatterChart>
-      </ResponsiveContainer>
-      <ChartFigures
-        figures={[
-          { label: 'Reachable region, corners', value: cornersText(region) },
-          ...(target
-            ? [{ label: target.reachable ? 'Wanted point, reachable' : 'Wanted point, out of reach', value: cornersText([target]) }]
-            : []),
-        ]}
-      />
-    </div>
-  );
+  const chart = useMemo(() => {
+    const axes = squareAxes([...region, { xNm: 0, yNm: 0 }, ...(target ? [target] : [])]);
+    const wanted = target ? (target.reachable ? 'Wanted point (reachable)' : 'Wanted point (out of reach)') : '';
+    const marker = target?.reachable ? ('circle' as const) : ('cross' as const);
+    const color = target?.reachable ? chartColors.copper : chartColors.danger;
+    const layers: ChartLayer[] = [
+      {
+        kind: 'polygon',
+        xs: region.map((p) => p.xNm),
+        ys: region.map((p) => p.yNm),
+        fill: chartColors.teal,
+        fillOpacity: 0.12,
+        stroke: chartColors.teal,
+        width: 1.5,
+      },
+      { kind: 'points', xs: [0], ys: [0], color: chartColors.ink, radius: 3 },
+      ...(target ? [{ kind: 'points' as const, xs: [target.xNm], ys: [target.yNm], color, marker, radius: 5 }] : []),
+    ];
+    const legend: LegendItem[] = [
+      { label: 'Reachable region', swatch: { kind: 'area', fill: chartColors.teal, stroke: chartColors.teal } },
+      { label: 'Rest position (0, 0)', swatch: { kind: 'marker', marker: 'circle', color: chartColors.ink } },
+      ...(target ? [{ label: wanted, swatch: { kind: 'marker' as const, marker, color } }] : []),
+    ];
+    return {
+      x: { label: 'x (nm)', domain: [axes.x[0]!, axes.x.at(-1)!] as [number, number], ticks: axes.x },
+      y: { label: 'y (nm)', domain: [axes.y[0]!, axes.y.at(-1)!] as [number, number], ticks: axes.y },
+      layers,
+      legend,
+      figures: [
+        { label: 'Reachable region, corners', value: cornersText(region) },
+        ...(target
+          ? [{ label: target.reachable ? 'Wanted point, reachable' : 'Wanted point, out of reach', value: cornersText([target]) }]
+          : []),
+      ],
+    };
+  }, [region, target]);
+  return <UplotChart {...chart} height={420} square />;
 }
