@@ -15,10 +15,24 @@ export const freePort = () =>
     });
   });
 
-/** Starts the server on one bench database and waits for its health route; `stop()` ends it. */
-export async function startServerProcess(database: string): Promise<{ base: string; stop: () => Promise<unknown> }> {
+/**
+ * Starts the server on one bench database and waits for its health route; `stop()` ends it. With `signIn`, the local
+ * OAuth stand-in runs beside it (on free ports), so a browser can sign in as a seeded account via `/auth/github?login=`.
+ */
+export async function startServerProcess(
+  database: string,
+  { signIn = false }: { signIn?: boolean } = {},
+): Promise<{ base: string; stop: () => Promise<unknown> }> {
   const config = benchConfig(database);
   const port = await freePort();
+  const github = signIn
+    ? {
+        OAUTH_STANDIN_PORT: String(await freePort()),
+        SMTP_CATCHER_PORT: String(await freePort()),
+        INBOX_PORT: String(await freePort()),
+        PUBLIC_URL: `http://127.0.0.1:${port}`,
+      }
+    : { GITHUB_CLIENT_ID: 'bench', GITHUB_CLIENT_SECRET: 'bench' };
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     stdio: ['ignore', 'ignore', 'inherit'],
     env: {
@@ -34,8 +48,7 @@ export async function startServerProcess(database: string): Promise<{ base: stri
       DB_USER: config.db.user,
       DB_PASSWORD: config.db.password,
       DB_POOL_MAX: '20',
-      GITHUB_CLIENT_ID: 'bench',
-      GITHUB_CLIENT_SECRET: 'bench',
+      ...github,
       SMTP_URL: 'smtp://127.0.0.1:9',
       SESSION_SECRET: 'bench-session-secret-bench-session-secret',
     },

@@ -7,7 +7,7 @@ import {
   type NonAttribute,
   type Sequelize,
 } from 'sequelize';
-import type { ActuatorAxis, ActuatorDrive } from '@shared/schemas/actuator.ts';
+import type { ActuatorAxis, ActuatorDrive } from '@shared/schemas/actuator-vocabulary.ts';
 import type { Part } from './part.model.ts';
 
 export class Actuator extends Model<InferAttributes<Actuator>, InferCreationAttributes<Actuator>> {

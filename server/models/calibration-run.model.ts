@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import type { RunKind, RunMethod, RunStatus } from '@shared/schemas/run.ts';
+import type { RunKind, RunMethod, RunStatus } from '@shared/schemas/run-vocabulary.ts';
 import type { DisplacementUnit, VoltageUnit } from '@shared/units.ts';
 import type { FitModel } from '@shared/workbench/line-fit.ts';
 

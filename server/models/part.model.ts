@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import type { PartCategory, PartStatus } from '@shared/schemas/part.ts';
+import type { PartCategory, PartStatus } from '@shared/schemas/part-vocabulary.ts';
 
 export class Part extends Model<InferAttributes<Part>, InferCreationAttributes<Part>> {
   declare id: CreationOptional<number>;

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import type { ReportReason, ReportStatus, ReportTargetType } from '@shared/schemas/review.ts';
+import type { ReportReason, ReportStatus, ReportTargetType } from '@shared/schemas/review-vocabulary.ts';
 
 export class Report extends Model<InferAttributes<Report>, InferCreationAttributes<Report>> {
   declare id: CreationOptional<number>;

@@ -1,5 +1,5 @@
 import { partChoiceOf } from '@shared/schemas/part.ts';
-import type { RunKind } from '@shared/schemas/run.ts';
+import type { RunKind } from '@shared/schemas/run-vocabulary.ts';
 import type { PartChoiceDto, PartDetailDto, PartSummaryDto } from '@shared/schemas/part.ts';
 import type { AttachedPhotoDto } from '@shared/schemas/attached-photo.ts';
 import { priceLabel, type PriceKind } from '@shared/schemas/listing.ts';

@@ -16,7 +16,7 @@ import {
   runRow,
   type DatasetPart,
 } from '@shared/export/registry-dataset.ts';
-import { RUN_KINDS } from '@shared/schemas/run.ts';
+import { RUN_KINDS } from '@shared/schemas/run-vocabulary.ts';
 import { CalibrationRun } from '../models/calibration-run.model.ts';
 import { Build } from '../models/build.model.ts';
 import { Part } from '../models/part.model.ts';

@@ -1,5 +1,6 @@
 import type { Actor } from '@shared/policies.ts';
-import type { CreateReportInput, ReportTargetType } from '@shared/schemas/review.ts';
+import type { CreateReportInput } from '@shared/schemas/review.ts';
+import type { ReportTargetType } from '@shared/schemas/review-vocabulary.ts';
 import { Report } from '../models/report.model.ts';
 import { authorize } from '../policies/authorize.ts';
 import { getRun } from './run.service.ts';

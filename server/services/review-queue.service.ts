@@ -1,6 +1,7 @@
 import { Op, col, fn, type Model, type ModelStatic, type Transaction } from 'sequelize';
 import type { Actor } from '@shared/policies.ts';
-import type { QueueBuildDto, QueueRunDto, ReportTargetType, ReviewAuthorDto, ReviewQueueDto } from '@shared/schemas/review.ts';
+import type { QueueBuildDto, QueueRunDto, ReviewAuthorDto, ReviewQueueDto } from '@shared/schemas/review.ts';
+import type { ReportTargetType } from '@shared/schemas/review-vocabulary.ts';
 import { Build } from '../models/build.model.ts';
 import { CalibrationRun } from '../models/calibration-run.model.ts';
 import { RUN_READ_COLUMNS } from '../presenters/run.presenter.ts';

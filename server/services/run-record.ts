@@ -1,4 +1,5 @@
-import { runKindLabels, type RunKind, type UpdateRunInput } from '@shared/schemas/run.ts';
+import { type UpdateRunInput } from '@shared/schemas/run.ts';
+import { runKindLabels, type RunKind } from '@shared/schemas/run-vocabulary.ts';
 import { ValidationError } from '../errors.ts';
 import type { CalibrationRun } from '../models/calibration-run.model.ts';
 import type { RunDetail } from '../presenters/run.presenter.ts';

@@ -1,14 +1,8 @@
 import { fn, col, type Transaction } from 'sequelize';
 import { withWriteTransaction } from '../db/write-transaction.ts';
 import { can, type Actor } from '@shared/policies.ts';
-import {
-  createRunInput,
-  MAX_BUILD_POINTS,
-  MAX_BUILD_RUNS,
-  type CreateRunInput,
-  type RunDto,
-  type UpdateRunInput,
-} from '@shared/schemas/run.ts';
+import { createRunInput, type CreateRunInput, type RunDto, type UpdateRunInput } from '@shared/schemas/run.ts';
+import { MAX_BUILD_POINTS, MAX_BUILD_RUNS } from '@shared/schemas/run-vocabulary.ts';
 import { fitRun, plotSeries, recordedCount, type RunFit } from '@shared/workbench/run-fit.ts';
 import { CalibrationRun } from '../models/calibration-run.model.ts';
 import { Build } from '../models/build.model.ts';

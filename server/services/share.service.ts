@@ -3,7 +3,7 @@
 // feeds and the sitemap.
 import { Op } from 'sequelize';
 import { formatPlusMinus, formatShort } from '@shared/format/measured-number.ts';
-import { partCategoryLabels } from '@shared/schemas/part.ts';
+import { partCategoryLabels } from '@shared/schemas/part-vocabulary.ts';
 import { Build } from '../models/build.model.ts';
 import { Part } from '../models/part.model.ts';
 import { Listing } from '../models/listing.model.ts';

@@ -2,7 +2,8 @@
 // (RUN_FIGURE_COLUMNS, rounded as the run's page shows them) and every accepted run's raw record in long
 // format, plus the README that explains them. Pure: the server feeds rows and streams the result.
 import Papa from 'papaparse';
-import type { PartCategory, PartStatsDto } from '../schemas/part.ts';
+import type { PartStatsDto } from '../schemas/part.ts';
+import type { PartCategory } from '../schemas/part-vocabulary.ts';
 import type { RunDto } from '../schemas/run.ts';
 import { formatShort, plainFigure } from '../format/measured-number.ts';
 import { DATA_LICENCE } from '../data-licence.ts';

@@ -1,7 +1,7 @@
 // Plausibility flags for a pending calibration run, shown on the review desk. Each flag names its
 // threshold and why. They help a moderator look; they never decide.
 import { summarize } from '../stats/quantiles.ts';
-import type { RunKind } from '../schemas/run.ts';
+import type { RunKind } from '../schemas/run-vocabulary.ts';
 
 /** R² below this on a quasi-static run suggests misread or slipped readings. [practice: a piezo read
  * on an indicator over its range is near-linear; hysteresis alone keeps R² above ~0.98] */

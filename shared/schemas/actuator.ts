@@ -4,18 +4,7 @@ import type { PartSummaryDto } from './part.ts';
 import type { RunDto } from './run.ts';
 import type { DriveMatrixDto } from './drive-matrix.ts';
 import type { LinearisationDto } from './linearise.ts';
-
-export const ACTUATOR_AXES = ['X', 'Y', 'Z', 'XY'] as const;
-export type ActuatorAxis = (typeof ACTUATOR_AXES)[number];
-export const ACTUATOR_DRIVES = ['single', 'pair-in-phase', 'pair-anti-phase', 'quartered-tube'] as const;
-export type ActuatorDrive = (typeof ACTUATOR_DRIVES)[number];
-
-export const actuatorDriveLabels: Record<ActuatorDrive, string> = {
-  single: 'Single element',
-  'pair-in-phase': 'Pair, in phase',
-  'pair-anti-phase': 'Pair, anti-phase',
-  'quartered-tube': 'Quartered tube',
-};
+import { ACTUATOR_AXES, type ActuatorAxis, ACTUATOR_DRIVES, type ActuatorDrive } from './actuator-vocabulary.ts';
 
 const optionalText = (max: number) => singleLine(max).optional();
 

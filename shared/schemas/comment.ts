@@ -1,8 +1,6 @@
 import { z } from 'zod';
 import { multiLine } from './text.ts';
-
-/** Longest comment, in characters of Markdown. */
-export const MAX_COMMENT_CHARS = 4000;
+import { MAX_COMMENT_CHARS } from './post-limits.ts';
 
 export const createCommentInput = z.strictObject({
   body: multiLine(MAX_COMMENT_CHARS).trim().min(1, 'Write something.'),

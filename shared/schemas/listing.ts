@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { multiLine, singleLine } from './text.ts';
 import type { AttachedPhotoDto } from './attached-photo.ts';
-import { PART_CATEGORIES, type PartCategory } from './part.ts';
+import { PART_CATEGORIES, type PartCategory } from './part-vocabulary.ts';
 
 export const LISTING_KINDS = ['offering', 'seeking'] as const;
 export type ListingKind = (typeof LISTING_KINDS)[number];

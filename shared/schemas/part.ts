@@ -1,22 +1,8 @@
-import type { RunKind } from './run.ts';
+import type { RunKind } from './run-vocabulary.ts';
 import { z } from 'zod';
 import { multiLine, singleLine } from './text.ts';
 import type { AttachedPhotoDto } from './attached-photo.ts';
-
-export const PART_CATEGORIES = ['bimorph', 'buzzer-disc', 'stack', 'tube', 'shear-plate', 'voice-coil', 'other'] as const;
-export type PartCategory = (typeof PART_CATEGORIES)[number];
-export const PART_STATUSES = ['proposed', 'accepted', 'rejected'] as const;
-export type PartStatus = (typeof PART_STATUSES)[number];
-
-export const partCategoryLabels: Record<PartCategory, string> = {
-  bimorph: 'Bimorph bender',
-  'buzzer-disc': 'Buzzer disc',
-  stack: 'Multilayer stack',
-  tube: 'Piezo tube',
-  'shear-plate': 'Shear plate',
-  'voice-coil': 'Voice coil',
-  other: 'Other',
-};
+import { PART_CATEGORIES, type PartCategory, type PartStatus } from './part-vocabulary.ts';
 
 /** Geometry in mm as far as it is known; which fields matter depends on the category. */
 export interface PartGeometryDto {

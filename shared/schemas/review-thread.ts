@@ -1,7 +1,6 @@
 import { z } from 'zod';
 import { multiLine } from './text.ts';
-
-export const MAX_REVIEW_POST_CHARS = 4000;
+import { MAX_REVIEW_POST_CHARS } from './post-limits.ts';
 
 export const createReviewPostInput = z.strictObject({
   body: multiLine(MAX_REVIEW_POST_CHARS).trim().min(1, 'Write something.'),

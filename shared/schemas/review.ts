@@ -2,8 +2,10 @@ import { z } from 'zod';
 import { MAIL_KINDS, type MailKind } from './mail-choices.ts';
 import { multiLine } from './text.ts';
 import type { PlausibilityFlag } from '../review/plausibility.ts';
-import type { RunFitDto, RunKind } from './run.ts';
+import type { RunFitDto } from './run.ts';
+import type { RunKind } from './run-vocabulary.ts';
 import type { PartStatsDto } from './part.ts';
+import { REPORT_TARGETS, type ReportTargetType, REPORT_REASONS, type ReportReason } from './review-vocabulary.ts';
 
 const note = multiLine(4000).trim();
 
@@ -33,20 +35,6 @@ export type AcceptRejectInput = z.infer<typeof acceptRejectInput>;
 
 export const reportDecisionInput = z.strictObject({ decision: z.enum(['resolve', 'dismiss']), note: note.min(1, 'Say what you did.') });
 export type ReportDecisionInput = z.infer<typeof reportDecisionInput>;
-
-export const REPORT_TARGETS = ['build', 'run', 'part', 'listing', 'comment'] as const;
-export type ReportTargetType = (typeof REPORT_TARGETS)[number];
-export const REPORT_REASONS = ['wrong-data', 'spam', 'unsafe', 'offensive', 'duplicate', 'other'] as const;
-export type ReportReason = (typeof REPORT_REASONS)[number];
-export type ReportStatus = 'open' | 'resolved' | 'dismissed';
-export const reportReasonLabels: Record<ReportReason, string> = {
-  'wrong-data': 'Data looks wrong',
-  spam: 'Spam or advertising',
-  unsafe: 'Unsafe advice',
-  offensive: 'Offensive',
-  duplicate: 'Duplicate',
-  other: 'Something else',
-};
 
 export const createReportInput = z.strictObject({
   targetType: z.enum(REPORT_TARGETS),

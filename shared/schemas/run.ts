@@ -4,40 +4,7 @@ import { fitInput, fitPoint, type FitPoint, type FitResultDto } from './workbenc
 import { sineSample } from './sine-fit.ts';
 import { imageVector, latticeRunFigures, type LatticeRunFiguresDto } from './lattice.ts';
 import { displacementUnits, voltageUnits, type DisplacementUnit, type VoltageUnit } from '../units.ts';
-
-export const RUN_METHODS = ['indicator', 'capacitive', 'interferometer', 'optical-lever', 'reference-sample'] as const;
-export type RunMethod = (typeof RUN_METHODS)[number];
-export const RUN_STATUSES = ['pending', 'accepted', 'rejected'] as const;
-export type RunStatus = (typeof RUN_STATUSES)[number];
-
-/**
- * How a run was recorded: calibration points, one peak-to-peak reading of a sine drive, a sampled sine record, or
- * the lattice of a reference sample read off a scan image (lateral axes).
- */
-export const RUN_KINDS = ['points', 'peak-to-peak', 'sine-record', 'lattice'] as const;
-export type RunKind = (typeof RUN_KINDS)[number];
-
-/** Most points or samples one run may hold (the raw record; pages show a decimated series). */
-export const MAX_RUN_POINTS = 200_000;
-/** Most points and samples all runs of one build may hold together. */
-export const MAX_BUILD_POINTS = 2_000_000;
-/** Most runs one build may hold, so a build page stays small whatever its runs hold. */
-export const MAX_BUILD_RUNS = 100;
-
-export const runMethodLabels: Record<RunMethod, string> = {
-  indicator: 'Dial or electronic indicator',
-  capacitive: 'Capacitive sensor',
-  interferometer: 'Interferometer',
-  'optical-lever': 'Optical lever',
-  'reference-sample': 'Reference sample (known step or lattice)',
-};
-
-export const runKindLabels: Record<RunKind, string> = {
-  points: 'Calibration points',
-  'peak-to-peak': 'Peak-to-peak reading',
-  'sine-record': 'Sine record',
-  lattice: 'Lattice image',
-};
+import { RUN_METHODS, type RunMethod, type RunStatus, type RunKind, MAX_RUN_POINTS } from './run-vocabulary.ts';
 
 /** DC steps, or a sine with its frequency and amplitude. */
 export const runDrive = z.discriminatedUnion('kind', [

@@ -4,7 +4,7 @@
 // (one part driving both axes, e.g. a quartered tube or a bimorph driven two ways) with the mean of the two,
 // u = √(u_x² + u_y²)/2 taking the axes' errors as independent [S: JCGM 100:2008 (GUM) 5.1.2]. One image is
 // one run: counting both axes as two runs would weigh a single scan twice.
-import type { ActuatorAxis } from '../schemas/actuator.ts';
+import type { ActuatorAxis } from '../schemas/actuator-vocabulary.ts';
 import type { LatticeRunFiguresDto } from '../schemas/lattice.ts';
 import type { LatticeRunInput } from '../schemas/run.ts';
 import { latticeFigures } from './lattice-figures.ts';

@@ -7,7 +7,7 @@
 // - sine-record: the IEEE Std 1057 sine fit of each channel (sine-fit.ts), gain = displacement
 //   amplitude ÷ drive amplitude;
 // - lattice: both lateral axes solved from the image's reciprocal vectors (lattice-run-fit.ts).
-import type { ActuatorAxis } from '../schemas/actuator.ts';
+import type { ActuatorAxis } from '../schemas/actuator-vocabulary.ts';
 import type { LatticeRunFiguresDto } from '../schemas/lattice.ts';
 import type { CreateRunInput, PeakToPeakRunInput, RunPlotPoint, SineRecordFitDto } from '../schemas/run.ts';
 import { toNm, toVolts } from '../units.ts';

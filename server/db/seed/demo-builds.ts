@@ -1,8 +1,8 @@
 // The demo community's builds (invented): entries, actuators and calibration runs. Every number is invented;
 // none is a measurement.
 import type { BuildStage, BuildStatus, InstrumentKind } from '@shared/schemas/build-vocabulary.ts';
-import type { ActuatorAxis, ActuatorDrive } from '@shared/schemas/actuator.ts';
-import type { RunMethod, RunStatus } from '@shared/schemas/run.ts';
+import type { ActuatorAxis, ActuatorDrive } from '@shared/schemas/actuator-vocabulary.ts';
+import type { RunMethod, RunStatus } from '@shared/schemas/run-vocabulary.ts';
 import type { DemoPicture } from './demo-parts.ts';
 
 export interface DemoRun {

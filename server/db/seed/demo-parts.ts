@@ -1,5 +1,5 @@
 // The demo community's parts (invented): what the registry lists. Every number is invented; none is a measurement.
-import type { PartCategory } from '@shared/schemas/part.ts';
+import type { PartCategory } from '@shared/schemas/part-vocabulary.ts';
 
 export interface DemoPart {
   key: string;

@@ -1,5 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
-import { MAX_REVIEW_POST_CHARS, type ReviewThreadItemDto } from '@shared/schemas/review-thread.ts';
+import type { ReviewThreadItemDto } from '@shared/schemas/review-thread.ts';
+import { MAX_REVIEW_POST_CHARS } from '@shared/schemas/post-limits.ts';
 import { formatDate } from '@shared/format/dates.ts';
 import { Markdown } from '@/components/ui/markdown.tsx';
 import { errorMessage } from '@/components/ui/form-bits.tsx';

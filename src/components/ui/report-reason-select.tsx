@@ -1,4 +1,4 @@
-import { REPORT_REASONS, reportReasonLabels, type ReportReason } from '@shared/schemas/review.ts';
+import { REPORT_REASONS, reportReasonLabels, type ReportReason } from '@shared/schemas/review-vocabulary.ts';
 import { inputClass } from '@/components/ui/form-bits.tsx';
 
 /** The reasons a report can give, as one select ("Choose…" first); `errorId` names the message shown when none is picked. */

@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import { listingConditionLabels, type ListingDto } from '@shared/schemas/listing.ts';
-import { partCategoryLabels } from '@shared/schemas/part.ts';
+import { partCategoryLabels } from '@shared/schemas/part-vocabulary.ts';
 import { StatusBadge } from '@/components/ui/status-badge.tsx';
 import { paths } from '@/config/paths.ts';
 import { formatShort } from '@shared/format/measured-number.ts';

@@ -1,5 +1,5 @@
 import { LISTING_CONDITIONS, LISTING_KINDS, listingConditionLabels, type ListingKind } from '@shared/schemas/listing.ts';
-import { PART_CATEGORIES, partCategoryLabels } from '@shared/schemas/part.ts';
+import { PART_CATEGORIES, partCategoryLabels } from '@shared/schemas/part-vocabulary.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { ClearFilters, FilterSelect, FilterText, SearchForm, useFilterDraft } from '@/components/search/filter-controls.tsx';
 import type { ListingFilters as Filters, ListingSearch } from './use-listing-search.ts';

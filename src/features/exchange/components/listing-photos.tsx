@@ -1,5 +1,5 @@
 import type { ListingDto } from '@shared/schemas/listing.ts';
-import { partCategoryLabels } from '@shared/schemas/part.ts';
+import { partCategoryLabels } from '@shared/schemas/part-vocabulary.ts';
 import { PhotoGrid } from '@/components/photos/photo-grid.tsx';
 import { ListingTile } from './listing-tile.tsx';
 

@@ -1,4 +1,4 @@
-import type { PartCategory } from '@shared/schemas/part.ts';
+import type { PartCategory } from '@shared/schemas/part-vocabulary.ts';
 
 /** A drawn outline of the part's kind, varied by listing id: bar, disc, stack, tube or a generic block. */
 function Shape({ category, seed }: { category: PartCategory; seed: number }) {

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { partCategoryLabels } from '@shared/schemas/part.ts';
+import { partCategoryLabels } from '@shared/schemas/part-vocabulary.ts';
 import { usePartOptions, usePickedPart } from '../api/part-options.ts';
 import { InputField, SelectField } from '@/components/ui/form-bits.tsx';
 

@@ -1,6 +1,6 @@
 import { useSearchParams } from 'react-router-dom';
 import { listListingsQuery, type ListingCondition, type ListingKind, type ListListingsQuery } from '@shared/schemas/listing.ts';
-import type { PartCategory } from '@shared/schemas/part.ts';
+import type { PartCategory } from '@shared/schemas/part-vocabulary.ts';
 import { readSearch, writeSearch } from '@/lib/url-search.ts';
 import { paths } from '@/config/paths.ts';
 

@@ -1,4 +1,4 @@
-import type { PartCategory } from '@shared/schemas/part.ts';
+import type { PartCategory } from '@shared/schemas/part-vocabulary.ts';
 
 /** Geometry inputs of a proposal. */
 export type GeometryKey = 'lengthMm' | 'widthMm' | 'thicknessMm' | 'outerDiameterMm' | 'wallMm' | 'layers';

@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import { PART_CATEGORIES, partCategoryLabels, type PartCategory } from '@shared/schemas/part.ts';
+import { PART_CATEGORIES, partCategoryLabels, type PartCategory } from '@shared/schemas/part-vocabulary.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { partQueries } from '@/lib/part-queries.ts';
 import { ClearFilters, FilterSelect, FilterText, SearchForm, useFilterDraft } from '@/components/search/filter-controls.tsx';

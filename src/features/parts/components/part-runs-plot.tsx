@@ -1,6 +1,6 @@
 import { lazy, Suspense } from 'react';
 import type { PartDetailDto } from '@shared/schemas/part.ts';
-import { runMethodLabels, type RunMethod } from '@shared/schemas/run.ts';
+import { runMethodLabels, type RunMethod } from '@shared/schemas/run-vocabulary.ts';
 import { formatShort } from '@shared/format/measured-number.ts';
 
 const PartRunsChart = lazy(() => import('@/components/charts/part-runs-chart.tsx').then((m) => ({ default: m.PartRunsChart })));

@@ -1,7 +1,7 @@
 import { formatDate } from '@shared/format/dates.ts';
 import { Link } from 'react-router-dom';
 import type { PartRunDto } from '@shared/schemas/part.ts';
-import { runKindLabels, runMethodLabels, type RunMethod } from '@shared/schemas/run.ts';
+import { runKindLabels, runMethodLabels, type RunMethod } from '@shared/schemas/run-vocabulary.ts';
 import { runGainPlusMinus } from '@shared/export/run-figures.ts';
 import { paths } from '@/config/paths.ts';
 import { formatShort, formatWithUncertainty } from '@shared/format/measured-number.ts';

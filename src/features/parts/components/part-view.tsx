@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
-import { partCategoryLabels, type PartDetailDto } from '@shared/schemas/part.ts';
+import { type PartDetailDto } from '@shared/schemas/part.ts';
+import { partCategoryLabels } from '@shared/schemas/part-vocabulary.ts';
 import { Notice } from '@/components/ui/notice.tsx';
 import { paths } from '@/config/paths.ts';
 import { PartFacts } from './part-facts.tsx';

@@ -1,6 +1,7 @@
 import { Link } from 'react-router-dom';
 import { createColumnHelper, type RowData } from '@tanstack/react-table';
-import { partCategoryLabels, type PartListItemDto, type PartSort } from '@shared/schemas/part.ts';
+import { type PartListItemDto, type PartSort } from '@shared/schemas/part.ts';
+import { partCategoryLabels } from '@shared/schemas/part-vocabulary.ts';
 import { paths } from '@/config/paths.ts';
 import { formatShort } from '@shared/format/measured-number.ts';
 

@@ -1,7 +1,8 @@
 import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { PART_CATEGORIES, partCategoryLabels, proposePartInput, type ProposePartInput } from '@shared/schemas/part.ts';
+import { proposePartInput, type ProposePartInput } from '@shared/schemas/part.ts';
+import { PART_CATEGORIES, partCategoryLabels } from '@shared/schemas/part-vocabulary.ts';
 import { materialKeys } from '@shared/workbench/materials.ts';
 import { Button } from '@/components/ui/button.tsx';
 import {

@@ -1,5 +1,5 @@
 import { useRef, useState, type FormEvent } from 'react';
-import type { ReportReason } from '@shared/schemas/review.ts';
+import type { ReportReason } from '@shared/schemas/review-vocabulary.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { ApiError } from '@/lib/api-client.ts';
 import { useReportPart } from '../api/report-part.ts';

@@ -1,5 +1,6 @@
 import { useSearchParams } from 'react-router-dom';
-import { listPartsQuery, type ListPartsQuery, type PartCategory, type PartSort } from '@shared/schemas/part.ts';
+import { listPartsQuery, type ListPartsQuery, type PartSort } from '@shared/schemas/part.ts';
+import { type PartCategory } from '@shared/schemas/part-vocabulary.ts';
 import { readSearch, writeSearch } from '@/lib/url-search.ts';
 import { paths } from '@/config/paths.ts';
 

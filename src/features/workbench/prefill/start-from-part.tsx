@@ -2,7 +2,7 @@ import { useEffect, useId, useState } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { partStartSearch, type StartTool } from '@shared/workbench/start-links.ts';
-import { partCategoryLabels } from '@shared/schemas/part.ts';
+import { partCategoryLabels } from '@shared/schemas/part-vocabulary.ts';
 import { paths } from '@/config/paths.ts';
 import { partQueries } from '@/lib/part-queries.ts';
 

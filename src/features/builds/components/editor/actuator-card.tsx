@@ -1,15 +1,15 @@
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths.ts';
-import { useState } from 'react';
+import { Suspense, useState } from 'react';
 import type { ActuatorDto } from '@shared/schemas/actuator.ts';
-import { actuatorDriveLabels } from '@shared/schemas/actuator.ts';
-import { partCategoryLabels } from '@shared/schemas/part.ts';
+import { actuatorDriveLabels } from '@shared/schemas/actuator-vocabulary.ts';
+import { partCategoryLabels } from '@shared/schemas/part-vocabulary.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { useDeleteActuator, useUpdateActuator } from '../../api/actuators.ts';
-import { ActuatorForm } from './actuator-form.tsx';
+import { LazyActuatorForm } from './lazy-forms.ts';
 import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { sig } from './format.ts';
-import { RunForm } from './run-form.tsx';
+import { LazyRunForm } from './lazy-forms.ts';
 import { errorMessage } from '@/components/ui/form-bits.tsx';
 import { StoredRun } from './stored-run.tsx';
 import { DriveMatrixPanel } from '../read/drive-matrix-panel.tsx';
@@ -82,16 +82,18 @@ export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
       )}
       {editing && (
         <div className="mt-3">
-          <ActuatorForm
-            idPrefix={`actuator-${a.id}`}
-            actuator={a}
-            submitLabel="Save actuator"
-            onCancel={() => setEditing(false)}
-            onSave={async (values) => {
-              await update.mutateAsync({ actuatorId: a.id, ...values });
-              setEditing(false);
-            }}
-          />
+          <Suspense fallback={<p className="text-sm text-ink-soft">Opening the form…</p>}>
+            <LazyActuatorForm
+              idPrefix={`actuator-${a.id}`}
+              actuator={a}
+              submitLabel="Save actuator"
+              onCancel={() => setEditing(false)}
+              onSave={async (values) => {
+                await update.mutateAsync({ actuatorId: a.id, ...values });
+                setEditing(false);
+              }}
+            />
+          </Suspense>
         </div>
       )}
       <div className="mt-3 space-y-2">
@@ -130,13 +132,15 @@ export function ActuatorCard({ actuator }: { actuator: ActuatorDto }) {
       </ul>
       <div className="mt-3">
         {addingRun ? (
-          <RunForm
-            actuatorId={a.id}
-            maxVolts={a.maxVolts}
-            flagContext={{ expectedGainNmPerV: a.expectedGain?.gainNmPerV ?? null, partMedianNmPerV: a.part.stats.gainMedianNmPerV }}
-            onSaved={() => setAddingRun(false)}
-            onCancel={() => setAddingRun(false)}
-          />
+          <Suspense fallback={<p className="text-sm text-ink-soft">Opening the run form…</p>}>
+            <LazyRunForm
+              actuatorId={a.id}
+              maxVolts={a.maxVolts}
+              flagContext={{ expectedGainNmPerV: a.expectedGain?.gainNmPerV ?? null, partMedianNmPerV: a.part.stats.gainMedianNmPerV }}
+              onSaved={() => setAddingRun(false)}
+              onCancel={() => setAddingRun(false)}
+            />
+          </Suspense>
         ) : (
           <Button variant="secondary" onClick={() => setAddingRun(true)} aria-label={`Add a calibration run to ${name}`}>
             Add a calibration run

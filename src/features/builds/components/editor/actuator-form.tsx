@@ -2,14 +2,8 @@ import { useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
-import {
-  ACTUATOR_AXES,
-  ACTUATOR_DRIVES,
-  actuatorDriveLabels,
-  createActuatorInput,
-  type ActuatorDto,
-  type CreateActuatorInput,
-} from '@shared/schemas/actuator.ts';
+import { createActuatorInput, type ActuatorDto, type CreateActuatorInput } from '@shared/schemas/actuator.ts';
+import { ACTUATOR_AXES, ACTUATOR_DRIVES, actuatorDriveLabels } from '@shared/schemas/actuator-vocabulary.ts';
 import type { PartChoiceDto } from '@shared/schemas/part.ts';
 import { Button } from '@/components/ui/button.tsx';
 import {

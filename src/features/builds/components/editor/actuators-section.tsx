@@ -1,9 +1,9 @@
-import { useState } from 'react';
+import { useState, Suspense } from 'react';
 import type { BuildDto } from '@shared/schemas/build.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { useCreateActuator } from '../../api/actuators.ts';
 import { ActuatorCard } from './actuator-card.tsx';
-import { ActuatorForm } from './actuator-form.tsx';
+import { LazyActuatorForm } from './lazy-forms.ts';
 import { EditorSection } from './editor-section.tsx';
 import { DataLicenceNotice } from '../data-licence-notice.tsx';
 
@@ -28,15 +28,17 @@ export function ActuatorsSection({ build }: { build: BuildDto }) {
       </ul>
       <div className="mt-4">
         {adding ? (
-          <ActuatorForm
-            idPrefix="new-actuator"
-            submitLabel="Add actuator"
-            onCancel={() => setAdding(false)}
-            onSave={async (values) => {
-              await create.mutateAsync(values);
-              setAdding(false);
-            }}
-          />
+          <Suspense fallback={<p className="text-sm text-ink-soft">Opening the form…</p>}>
+            <LazyActuatorForm
+              idPrefix="new-actuator"
+              submitLabel="Add actuator"
+              onCancel={() => setAdding(false)}
+              onSave={async (values) => {
+                await create.mutateAsync(values);
+                setAdding(false);
+              }}
+            />
+          </Suspense>
         ) : (
           <Button variant="secondary" onClick={() => setAdding(true)}>
             Add an actuator

@@ -1,5 +1,6 @@
 import { useState } from 'react';
-import { PART_CATEGORIES, partChoiceOf, partCategoryLabels, type PartCategory, type PartChoiceDto } from '@shared/schemas/part.ts';
+import { partChoiceOf, type PartChoiceDto } from '@shared/schemas/part.ts';
+import { PART_CATEGORIES, partCategoryLabels, type PartCategory } from '@shared/schemas/part-vocabulary.ts';
 import { usePartSearch } from '../../api/search-parts.ts';
 import { inputClass } from '@/components/ui/form-bits.tsx';
 import { sig } from './format.ts';

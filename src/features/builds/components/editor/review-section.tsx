@@ -1,3 +1,4 @@
+import { lazy, Suspense } from 'react';
 import { useNavigate } from 'react-router-dom';
 import type { BuildDto } from '@shared/schemas/build.ts';
 import { buildStatusLabels } from '@shared/schemas/build-vocabulary.ts';
@@ -7,9 +8,11 @@ import { useSubmitBuild } from '../../api/submit-build.ts';
 import { useDeleteBuild } from '../../api/delete-build.ts';
 import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { EditorSection } from './editor-section.tsx';
-import { BuildRunFlags } from './build-run-flags.tsx';
 import { errorMessage } from '@/components/ui/form-bits.tsx';
 import { ReviewThread } from '@/components/review-thread/review-thread.tsx';
+
+/** The flag checks load only for a build with pending runs: most editor visits have nothing to flag. */
+const LazyBuildRunFlags = lazy(() => import('./build-run-flags.tsx').then((m) => ({ default: m.BuildRunFlags })));
 
 export const WHAT_HAPPENS_NEXT =
   "A moderator checks the write-up and runs. While it waits you can't edit it; you'll get an e-mail when it is published or returned with notes.";
@@ -22,6 +25,7 @@ export function ReviewSection({ build }: { build: BuildDto }) {
   const error = submit.error ?? remove.error;
   const { abilities } = build;
   const noRuns = build.actuators.every((a) => a.runs.length === 0);
+  const pendingRuns = build.actuators.some((a) => a.runs.some((r) => r.status === 'pending'));
 
   return (
     <EditorSection
@@ -41,7 +45,11 @@ export function ReviewSection({ build }: { build: BuildDto }) {
               This build has no calibration run yet. You can submit it anyway; runs help other builders most.
             </p>
           )}
-          <BuildRunFlags build={build} />
+          {pendingRuns && (
+            <Suspense fallback={null}>
+              <LazyBuildRunFlags build={build} />
+            </Suspense>
+          )}
           <Button onClick={() => submit.mutate()} disabled={submit.isPending}>
             {submit.isPending ? 'Submitting…' : build.status === 'returned' ? 'Submit again for review' : 'Submit for review'}
           </Button>

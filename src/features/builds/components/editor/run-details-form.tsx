@@ -1,5 +1,6 @@
 import { useState } from 'react';
-import { RUN_METHODS, runMethodLabels, type RunDto, type RunMethod, type UpdateRunInput } from '@shared/schemas/run.ts';
+import { type RunDto, type UpdateRunInput } from '@shared/schemas/run.ts';
+import { RUN_METHODS, runMethodLabels, type RunMethod } from '@shared/schemas/run-vocabulary.ts';
 import { displacementUnitLabels, voltageUnitLabels } from '@shared/units.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Field, FormError, errorMessage, inputClass } from '@/components/ui/form-bits.tsx';

@@ -1,6 +1,6 @@
 import { useFormContext, useWatch } from 'react-hook-form';
 import type { PointsRunInput } from '@shared/schemas/run.ts';
-import { RUN_METHODS, runMethodLabels } from '@shared/schemas/run.ts';
+import { RUN_METHODS, runMethodLabels } from '@shared/schemas/run-vocabulary.ts';
 import { displacementUnitLabels, displacementUnits, voltageUnitLabels, voltageUnits } from '@shared/units.ts';
 import { describe, Field, fieldMessage, inputClass } from '@/components/ui/form-bits.tsx';
 import type { RunFormValues } from './run-form-schema.ts';

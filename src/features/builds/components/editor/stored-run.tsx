@@ -1,14 +1,13 @@
 import { lazy, Suspense, useState } from 'react';
 import type { RunDto } from '@shared/schemas/run.ts';
-import { runKindLabels, runMethodLabels } from '@shared/schemas/run.ts';
+import { runKindLabels, runMethodLabels } from '@shared/schemas/run-vocabulary.ts';
 import { displacementUnitLabels, toNm, toVolts, voltageUnitLabels } from '@shared/units.ts';
 import { StatusBadge, type BadgeTone } from '@/components/ui/status-badge.tsx';
 import { Button } from '@/components/ui/button.tsx';
 import { useDeleteRun } from '../../api/delete-run.ts';
 import { ConfirmButton } from '@/components/ui/confirm-button.tsx';
 import { FitSummary } from './fit-summary.tsx';
-import { RunForm } from './run-form.tsx';
-import { RunDetailsForm } from './run-details-form.tsx';
+import { LazyRunDetailsForm, LazyRunForm } from './lazy-forms.ts';
 import { sig } from './format.ts';
 import { errorMessage } from '@/components/ui/form-bits.tsx';
 
@@ -104,15 +103,19 @@ export function StoredRun({ run, maxVolts = null }: { run: RunDto; maxVolts?: nu
       {editing && (
         <div className="mt-2">
           {run.kind === 'points' ? (
-            <RunForm
-              actuatorId={run.actuatorId}
-              maxVolts={maxVolts}
-              run={run}
-              onSaved={() => setEditing(false)}
-              onCancel={() => setEditing(false)}
-            />
+            <Suspense fallback={<p className="text-sm text-ink-soft">Opening the run form…</p>}>
+              <LazyRunForm
+                actuatorId={run.actuatorId}
+                maxVolts={maxVolts}
+                run={run}
+                onSaved={() => setEditing(false)}
+                onCancel={() => setEditing(false)}
+              />
+            </Suspense>
           ) : (
-            <RunDetailsForm run={run} onDone={() => setEditing(false)} />
+            <Suspense fallback={<p className="text-sm text-ink-soft">Opening the form…</p>}>
+              <LazyRunDetailsForm run={run} onDone={() => setEditing(false)} />
+            </Suspense>
           )}
         </div>
       )}

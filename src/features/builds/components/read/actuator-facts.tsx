@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
-import { actuatorDriveLabels, type ActuatorDto } from '@shared/schemas/actuator.ts';
-import { partCategoryLabels } from '@shared/schemas/part.ts';
+import { type ActuatorDto } from '@shared/schemas/actuator.ts';
+import { actuatorDriveLabels } from '@shared/schemas/actuator-vocabulary.ts';
+import { partCategoryLabels } from '@shared/schemas/part-vocabulary.ts';
 import { formatShort } from '@shared/format/measured-number.ts';
 import { describeBasis } from './format.ts';
 

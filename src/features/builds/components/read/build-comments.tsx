@@ -1,7 +1,8 @@
 import { useState } from 'react';
 import { useLocation } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { MAX_COMMENT_CHARS, type BuildCommentDto } from '@shared/schemas/comment.ts';
+import type { BuildCommentDto } from '@shared/schemas/comment.ts';
+import { MAX_COMMENT_CHARS } from '@shared/schemas/post-limits.ts';
 import { formatDate } from '@shared/format/dates.ts';
 import { Markdown } from '@/components/ui/markdown.tsx';
 import { Button } from '@/components/ui/button.tsx';
@@ -9,7 +10,7 @@ import { FormError, errorMessage, inputClass } from '@/components/ui/form-bits.t
 import { ApiError } from '@/lib/api-client.ts';
 import { paths } from '@/config/paths.ts';
 import { commentsQuery, useCreateComment, useHideComment, useReportComment } from '../../api/comments.ts';
-import type { ReportReason } from '@shared/schemas/review.ts';
+import type { ReportReason } from '@shared/schemas/review-vocabulary.ts';
 import { ReportReasonSelect } from '@/components/ui/report-reason-select.tsx';
 import { MarkdownPostForm } from '@/components/ui/markdown-post-form.tsx';
 

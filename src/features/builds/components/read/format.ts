@@ -1,7 +1,7 @@
 // Display helpers for the build pages: dates, gains and the expected-gain basis in our words.
 import { EXPECTED_GAIN_SOURCE } from '@shared/workbench/expected-gain.ts';
 import type { BuildStatus } from '@shared/schemas/build-vocabulary.ts';
-import type { RunStatus } from '@shared/schemas/run.ts';
+import type { RunStatus } from '@shared/schemas/run-vocabulary.ts';
 import type { BadgeTone } from '@/components/ui/status-badge.tsx';
 
 /** Badge colour of each build review state. */

@@ -1,4 +1,5 @@
-import { runMethodLabels, runKindLabels, type RunDto } from '@shared/schemas/run.ts';
+import { type RunDto } from '@shared/schemas/run.ts';
+import { runMethodLabels, runKindLabels } from '@shared/schemas/run-vocabulary.ts';
 import { runPrintedFigures } from '@shared/export/run-figures.ts';
 import { runStatusBadge } from './format.ts';
 import { formatDate } from '@shared/format/dates.ts';

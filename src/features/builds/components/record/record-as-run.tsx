@@ -1,15 +1,8 @@
 import { useMemo, useState } from 'react';
-import { Link, useLocation } from 'react-router-dom';
+import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import {
-  createRunInput,
-  RUN_METHODS,
-  runMethodLabels,
-  type RunDto,
-  type RunFitDto,
-  type RunMethod,
-  type RunRecordData,
-} from '@shared/schemas/run.ts';
+import { createRunInput, type RunDto, type RunFitDto, type RunRecordData } from '@shared/schemas/run.ts';
+import { RUN_METHODS, runMethodLabels, type RunMethod } from '@shared/schemas/run-vocabulary.ts';
 import type { ActuatorDto } from '@shared/schemas/actuator.ts';
 import { fitRun, type RunFit } from '@shared/workbench/run-fit.ts';
 import { toVolts } from '@shared/units.ts';
@@ -29,6 +22,7 @@ import { FitSummary } from '../editor/fit-summary.tsx';
 import { MakerFlags } from './maker-flags.tsx';
 import { DataLicenceNotice } from '../data-licence-notice.tsx';
 import { RunTarget, actuatorLine } from './run-target.tsx';
+import { RecordRunInvite } from './record-run-invite.tsx';
 
 /** The stored fit as the run's page will show it. */
 const asDto = (f: RunFit): RunFitDto => ({
@@ -40,21 +34,20 @@ const text = (s: string) => s.trim() || undefined;
 
 /**
  * "Record as a run": what a workbench page computed goes into one of my builds as a calibration run,
- * with the same data, units and the fit the page showed (the server refits with the same shared code).
+ * with the same data, units and the fit the page showed (the server refits with the same shared code). Loaded
+ * only when a signed-in maker opens it, so a workbench page does not carry the form's code for every visitor.
  */
 export function RecordAsRun({
   data,
-  signedIn,
   defaultMethod = 'indicator',
+  onClose,
 }: {
   data: RunRecordData | null;
-  /** Whether someone is signed in (the page knows from the session); visitors get a sign-in line and no requests. */
-  signedIn: boolean;
   defaultMethod?: RunMethod;
+  /** "Cancel": back to the invitation (the page shows `RecordRunInvite` until the maker opens the form). */
+  onClose: () => void;
 }) {
-  const location = useLocation();
-  const mine = useQuery({ ...buildQueries.mine(), enabled: signedIn });
-  const [open, setOpen] = useState(false);
+  const mine = useQuery(buildQueries.mine());
   const [buildId, setBuildId] = useState<number | null>(null);
   const [actuatorId, setActuatorId] = useState<number | 'new' | null>(null);
   const [actuator, setActuator] = useState<ActuatorDto | undefined>();
@@ -104,19 +97,7 @@ export function RecordAsRun({
     }
   }, [data, method, measuredOn, preload, temperatureC, notes, frequencyHz, actuator]);
 
-  if (!signedIn || (mine.error instanceof ApiError && mine.error.status === 401)) {
-    return (
-      <section aria-label="Record as a run" className="rounded-lg border border-dashed border-rule bg-white p-4 text-sm">
-        <p>
-          Measured this on your own instrument?{' '}
-          <a className="text-teal-dark underline" href={paths.signIn(location.pathname + location.search)}>
-            Sign in
-          </a>{' '}
-          to record it as a calibration run of one of your builds.
-        </p>
-      </section>
-    );
-  }
+  if (mine.error instanceof ApiError && mine.error.status === 401) return <RecordRunInvite signedIn={false} ready={Boolean(data)} />;
   if (saved) {
     return (
       <section aria-label="Record as a run" className="rounded-lg border border-teal bg-teal/5 p-4 text-sm" role="status">
@@ -129,19 +110,6 @@ export function RecordAsRun({
             Record another
           </Button>
         </p>
-      </section>
-    );
-  }
-  if (!open) {
-    return (
-      <section
-        aria-label="Record as a run"
-        className="flex flex-wrap items-center justify-between gap-2 rounded-lg border border-rule bg-white p-4"
-      >
-        <p className="text-sm">Measured on your own instrument? Keep it with the build it belongs to.</p>
-        <Button variant="secondary" disabled={!data} onClick={() => setOpen(true)}>
-          Record as a run…
-        </Button>
       </section>
     );
   }
@@ -248,7 +216,7 @@ export function RecordAsRun({
         <Button disabled={!ready || createRun.isPending} onClick={() => void save().catch(() => undefined)}>
           {createRun.isPending ? 'Recording…' : 'Record this run'}
         </Button>
-        <Button variant="ghost" onClick={() => setOpen(false)}>
+        <Button variant="ghost" onClick={onClose}>
           Not now
         </Button>
         {buildId !== null && (

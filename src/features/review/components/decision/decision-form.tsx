@@ -1,6 +1,4 @@
-import { useState } from 'react';
-import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
+import { useRef, useState } from 'react';
 import type { z } from 'zod';
 import { Button } from '@/components/ui/button.tsx';
 import { decisionErrorMessage, noteIssue } from './decision-errors.ts';
@@ -23,7 +21,8 @@ interface Values<D extends string> {
 
 /**
  * The note box and the decision buttons of one desk item, validated with the shared zod schema
- * (which says which decisions need a note); the server's refusal shows under the buttons.
+ * (which says which decisions need a note); the server's refusal shows under the buttons. Two fields in plain state:
+ * the desk does not load a form library for them.
  */
 export function DecisionForm<D extends string>({
   id,
@@ -49,35 +48,45 @@ export function DecisionForm<D extends string>({
   label?: string;
   onDecide: (values: Values<D>) => Promise<unknown>;
 }) {
-  const { register, handleSubmit, setValue, setError, formState, watch } = useForm<Values<string>, unknown, Values<D>>({
-    resolver: zodResolver(schema),
-    defaultValues: { decision: choices[0].decision, note: '', notePublic: false },
-  });
+  const [note, setNote] = useState('');
+  const [notePublic, setNotePublic] = useState(false);
+  const [noteError, setNoteError] = useState<string | null>(null);
+  const [serverError, setServerError] = useState<string | null>(null);
   const [busy, setBusy] = useState<D | null>(null);
-  const noteError = formState.errors.note?.message;
-  const serverError = formState.errors.root?.server?.message;
+  const noteBox = useRef<HTMLTextAreaElement>(null);
   const noteId = `${id}-note`;
-  const hasNote = Boolean(watch('note')?.trim());
+  const hasNote = Boolean(note.trim());
+  const refuseNote = (message: string) => {
+    setNoteError(message);
+    noteBox.current?.focus();
+  };
 
-  const decide = (decision: D) => {
-    setValue('decision', decision);
-    void handleSubmit(async (values) => {
-      setBusy(decision);
-      try {
-        const shareNote = Boolean(values.note && values.notePublic && values.decision === publicNote?.decision);
-        await onDecide({
-          decision: values.decision,
-          ...(values.note ? { note: values.note } : {}),
-          ...(shareNote ? { notePublic: true } : {}),
-        });
-      } catch (err) {
-        const issue = noteIssue(err);
-        if (issue) setError('note', { type: 'server', message: issue }, { shouldFocus: true });
-        else setError('root.server', { type: 'server', message: decisionErrorMessage(err) });
-      } finally {
-        setBusy(null);
-      }
-    })();
+  const decide = async (decision: D) => {
+    setServerError(null);
+    const parsed = schema.safeParse({ decision, note, notePublic });
+    if (!parsed.success) {
+      const issue = parsed.error.issues.find((i) => i.path[0] === 'note') ?? parsed.error.issues[0];
+      if (issue?.path[0] === 'note') refuseNote(issue.message);
+      else setServerError(issue?.message ?? 'This decision cannot be sent.');
+      return;
+    }
+    setNoteError(null);
+    const values = parsed.data;
+    setBusy(decision);
+    try {
+      const shareNote = Boolean(values.note && values.notePublic && values.decision === publicNote?.decision);
+      await onDecide({
+        decision: values.decision,
+        ...(values.note ? { note: values.note } : {}),
+        ...(shareNote ? { notePublic: true } : {}),
+      });
+    } catch (err) {
+      const issue = noteIssue(err);
+      if (issue) refuseNote(issue);
+      else setServerError(decisionErrorMessage(err));
+    } finally {
+      setBusy(null);
+    }
   };
 
   return (
@@ -97,7 +106,12 @@ export function DecisionForm<D extends string>({
           className="w-full rounded-md border border-rule bg-white px-2 py-1.5 text-base aria-[invalid=true]:border-danger"
           aria-invalid={noteError ? true : undefined}
           aria-describedby={noteError ? `${noteId}-error` : `${noteId}-hint`}
-          {...register('note')}
+          ref={noteBox}
+          value={note}
+          onChange={(e) => {
+            setNote(e.target.value);
+            if (noteError) setNoteError(null);
+          }}
         />
         {noteError ? (
           <p id={`${noteId}-error`} className="mt-1 text-sm text-danger">
@@ -111,13 +125,13 @@ export function DecisionForm<D extends string>({
       </div>
       {publicNote && (
         <label className="flex items-start gap-2 text-sm">
-          <input type="checkbox" className="mt-1" {...register('notePublic')} />
+          <input type="checkbox" className="mt-1" checked={notePublic} onChange={(e) => setNotePublic(e.target.checked)} />
           <span>{publicNote.label}</span>
         </label>
       )}
       <div className="flex flex-wrap gap-2">
         {choices.map((c) => (
-          <Button key={c.decision} variant={c.variant} disabled={busy !== null} onClick={() => decide(c.decision)}>
+          <Button key={c.decision} variant={c.variant} disabled={busy !== null} onClick={() => void decide(c.decision)}>
             {busy === c.decision ? c.busyLabel : hasNote && c.withNoteLabel ? c.withNoteLabel : c.label}
           </Button>
         ))}

@@ -1,11 +1,12 @@
 import type { ReactNode } from 'react';
-import { reportReasonLabels, type QueueBuildDto, type QueueRunDto } from '@shared/schemas/review.ts';
+import { type QueueBuildDto, type QueueRunDto } from '@shared/schemas/review.ts';
+import { reportReasonLabels } from '@shared/schemas/review-vocabulary.ts';
 import { instrumentKindLabels, type InstrumentKind } from '@shared/schemas/build-vocabulary.ts';
-import { partCategoryLabels, type PartCategory } from '@shared/schemas/part.ts';
+import { partCategoryLabels, type PartCategory } from '@shared/schemas/part-vocabulary.ts';
 import { FlagChips } from '../flag-chips.tsx';
 import { age, count, sentenceCase, sig, targetTypeWords, withUncertainty } from '../format.ts';
 import type { QueueEntry } from './queue-model.ts';
-import { runKindLabels } from '@shared/schemas/run.ts';
+import { runKindLabels } from '@shared/schemas/run-vocabulary.ts';
 import { runGainPlusMinus } from '@shared/export/run-figures.ts';
 import { PlusMinusLabel } from '@/components/ui/plus-minus-label.tsx';
 

@@ -1,5 +1,5 @@
 import { acceptRejectInput, type QueuePartDto } from '@shared/schemas/review.ts';
-import { partCategoryLabels, type PartCategory } from '@shared/schemas/part.ts';
+import { partCategoryLabels, type PartCategory } from '@shared/schemas/part-vocabulary.ts';
 import { useDecidePart } from '@/features/review/api/decide-part.ts';
 import { DecisionForm } from '../decision/decision-form.tsx';
 import { age } from '../format.ts';

@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
-import { reportDecisionInput, reportReasonLabels, type QueueReportDto } from '@shared/schemas/review.ts';
+import { reportDecisionInput, type QueueReportDto } from '@shared/schemas/review.ts';
+import { reportReasonLabels } from '@shared/schemas/review-vocabulary.ts';
 import { useDecideReport } from '@/features/review/api/decide-report.ts';
 import { DecisionForm } from '../decision/decision-form.tsx';
 import { age, sentenceCase, targetTypeWords } from '../format.ts';

@@ -1,7 +1,7 @@
 import { lazy, Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import { acceptRejectInput, type QueueRunDto } from '@shared/schemas/review.ts';
-import { runMethodLabels, type RunMethod } from '@shared/schemas/run.ts';
+import { runMethodLabels, type RunMethod } from '@shared/schemas/run-vocabulary.ts';
 import { paths } from '@/config/paths.ts';
 import { useDecideRun } from '@/features/review/api/decide-run.ts';
 import { DecisionForm } from '../decision/decision-form.tsx';
