@@ -6,6 +6,7 @@
 import { spawn, execFile } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { createServer } from 'node:http';
+import { connect } from 'node:net';
 import { join } from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
 import S3rver from 's3rver';
@@ -15,20 +16,11 @@ import { running, stopChild, waitExit, pidAlive } from './lib/processes.mjs';
 import { supervise } from './lib/supervisor.mjs';
 import { NODES, chooseBootstrapNode, clientPort, ensureClusterDatabase, initNode, nodeSocket, startNode } from './lib/galera.mjs';
 import { buildServer } from './build-server.mjs';
+import { CLUSTER_PORTS } from './lib/cluster-run.mjs';
 
 const log = (line) => process.stdout.write(`[cluster] ${line}\n`);
 
-/** Every port of the cluster (docs/deploy/cluster.md). */
-export const PORTS = {
-  web: 3100,
-  apps: [3110, 3111],
-  dbProxy: 3510,
-  nodeChecks: [3514, 3515, 3516],
-  s3: 3520,
-  oauth: 3121,
-  smtp: 3122,
-  inbox: 3123,
-};
+const PORTS = CLUSTER_PORTS;
 const BUCKET = 'scanwright-photos';
 const S3_KEY = 'S3RVER'; // s3rver's built-in access key and secret
 
@@ -213,7 +205,7 @@ frontend web
 backend apps
   mode http
   balance roundrobin
-  option forwardedfor
+  option forwardfor
   option httpchk GET /api/ready
   http-check expect status 200
   default-server inter 500ms fall 2 rise 2
@@ -250,6 +242,29 @@ async function until200(url, ms) {
     await sleep(200);
   }
   throw new Error(`${url} did not answer 200 within ${ms / 1000} s`);
+}
+
+/** Resolves once a connection to the database proxy gets a MariaDB greeting (haproxy is up and has a node). */
+async function untilProxyGreets(ms) {
+  const deadline = Date.now() + ms;
+  const greets = () =>
+    new Promise((resolve) => {
+      const socket = connect(PORTS.dbProxy, '127.0.0.1');
+      const done = (ok) => {
+        socket.destroy();
+        resolve(ok);
+      };
+      socket.setTimeout(1000, () => done(false));
+      socket.once('data', () => done(true));
+      socket.once('error', () => done(false));
+      socket.once('close', () => done(false));
+    });
+  while (Date.now() < deadline) {
+    if (!running(live.haproxy)) throw new Error(`haproxy exited with ${live.haproxy?.exitCode} (its messages are above)`);
+    if (await greets()) return;
+    await sleep(200);
+  }
+  throw new Error(`the database proxy on :${PORTS.dbProxy} did not answer within ${ms / 1000} s`);
 }
 
 function startApp(port) {
@@ -314,6 +329,7 @@ try {
   writeFileSync(cfg, haproxyConfig());
   live.haproxy = spawnLogged('haproxy', 'haproxy', ['-f', cfg, '-db'], appEnv);
   await until200(`http://127.0.0.1:${PORTS.nodeChecks[0]}/`, 10_000);
+  await untilProxyGreets(30_000);
 
   // 3. Migrations and the demo seed through the proxy (photos go to the bucket), the client build, then the apps.
   if ((await step(process.execPath, ['--enable-source-maps', 'dist/server/prepare.mjs'])) !== 0)
