@@ -9,7 +9,6 @@ import { createServer } from 'node:http';
 import { connect } from 'node:net';
 import { join } from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
-import S3rver from 's3rver';
 import { ensureDebianPackages, ensureNodeModules } from './lib/setup.mjs';
 import { DATA_DIR, localSecrets, clientBuildIsStale, serverBuildIsStale } from './lib/paths.mjs';
 import { running, stopChild, waitExit, pidAlive } from './lib/processes.mjs';
@@ -26,6 +25,8 @@ const S3_KEY = 'S3RVER'; // s3rver's built-in access key and secret
 
 ensureDebianPackages({ cluster: true });
 ensureNodeModules();
+// An npm package: imported only once node_modules is there (a fresh clone has none before the line above).
+const { default: S3rver } = await import('s3rver');
 
 const root = join(DATA_DIR, 'cluster');
 mkdirSync(root, { recursive: true });
