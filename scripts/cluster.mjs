@@ -13,7 +13,16 @@ import { ensureDebianPackages, ensureNodeModules } from './lib/setup.mjs';
 import { DATA_DIR, localSecrets, clientBuildIsStale, serverBuildIsStale } from './lib/paths.mjs';
 import { running, stopChild, waitExit, pidAlive } from './lib/processes.mjs';
 import { supervise } from './lib/supervisor.mjs';
-import { NODES, chooseBootstrapNode, clientPort, ensureClusterDatabase, initNode, nodeSocket, startNode } from './lib/galera.mjs';
+import {
+  NODES,
+  chooseBootstrapNode,
+  clientPort,
+  ensureClusterDatabase,
+  initNode,
+  nodeSocket,
+  startNode,
+  untilEvicted,
+} from './lib/galera.mjs';
 import { buildServer } from './build-server.mjs';
 import { CLUSTER_PORTS } from './lib/cluster-run.mjs';
 
@@ -287,9 +296,22 @@ try {
   const order = [first, ...NODES.filter((i) => i !== first)];
   for (const [k, i] of order.entries()) {
     let bootstrap = k === 0;
+    let restart = false;
     const sup = supervise({
       name: `Galera node ${i}`,
       start: async () => {
+        // A node that died rejoins only once the others have evicted it (scripts/lib/galera.mjs, untilEvicted).
+        if (restart) {
+          const since = Date.now();
+          const evicted = await untilEvicted(root, i, { shouldStop: () => stopping });
+          if (stopping) throw new Error('stopping');
+          log(
+            evicted
+              ? `Galera node ${i} is out of the others' view (waited ${((Date.now() - since) / 1000).toFixed(1)} s); starting it again.`
+              : `Galera node ${i} is still a member for the others after 15 s; starting it anyway.`,
+          );
+        }
+        restart = true;
         const child = await startNode(root, i, {
           bootstrap,
           onSpawn: (c) => {
