@@ -120,6 +120,8 @@ function nodeArgs(root, i, { bootstrap }) {
     `--wsrep-cluster-address=${CLUSTER_ADDRESS}`,
     `--wsrep-node-address=127.0.0.1:${groupPort(i)}`,
     `--wsrep-node-name=n${i}`,
+    // What wsrep_incoming_addresses lists for this node (else "AUTO"); untilEvicted looks for it there.
+    `--wsrep-node-incoming-address=127.0.0.1:${clientPort(i)}`,
     `--wsrep-provider-options=${provider}`,
     `--wsrep-sst-receive-address=127.0.0.1:${groupPort(i) + 2}`,
     '--wsrep-sst-method=rsync',
