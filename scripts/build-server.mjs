@@ -1,10 +1,12 @@
 // Bundles the server for `npm start`: server/index.ts and the CLI (migrate, prepare) become plain
 // ESM in dist/server/, so production runs compiled code with Node alone (tsx stays for development
 // and tests). npm packages stay external and load from node_modules; `@shared/` comes from tsconfig paths.
-import { build } from 'esbuild';
+// esbuild is imported when a build runs, not when this file loads: `npm start` and `npm run cluster` import it before
+// they have installed node_modules on a fresh clone.
 
 /** Builds dist/server/{index,migrate,prepare,stand-ins}.mjs from the TypeScript sources. */
 export async function buildServer() {
+  const { build } = await import('esbuild');
   await build({
     entryPoints: {
       index: 'server/index.ts',

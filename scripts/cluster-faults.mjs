@@ -6,18 +6,17 @@
 // write is on every node exactly once and that no mail arrived twice. Prints
 //   cluster faults: acknowledged N, lost L, duplicated D, outage S s, mail duplicated M
 // and exits 1 when L, D or M is not 0 or the longest all-errors outage S is over 5 s.
-import { spawn } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { randomBytes } from 'node:crypto';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { NODES, nodeSql, nodeState } from './lib/galera.mjs';
-import { running, stopChild, waitExit } from './lib/processes.mjs';
+import { CLUSTER_PORTS, startClusterChild } from './lib/cluster-run.mjs';
 
 const log = (line) => process.stdout.write(`[faults] ${line}\n`);
-const WEB = 'http://127.0.0.1:3100';
-const APPS = [3110, 3111];
-const INBOX = 'http://127.0.0.1:3123';
+const WEB = `http://127.0.0.1:${CLUSTER_PORTS.web}`;
+const APPS = CLUSTER_PORTS.apps;
+const INBOX = `http://127.0.0.1:${CLUSTER_PORTS.inbox}`;
 const LOAD_S = Number(process.env.FAULTS_LOAD_S ?? 60);
 const WORKERS = 4;
 /** Messages per maker: under the limit of 20 per 10 minutes, and all mail fits the catcher's 500. */
@@ -29,25 +28,14 @@ const run = randomBytes(3).toString('hex');
 
 // 1. The cluster, as a child; its supervisor restarts what we kill. A short outbox lease, so that a mail claimed by
 // the killed instance is taken over (and would be sent twice, if the claim were not honest) within this run.
-const cluster = spawn(process.execPath, ['scripts/cluster.mjs'], {
-  env: { ...process.env, SCANWRIGHT_DATA_DIR: dataDir, SCANWRIGHT_SKIP_CLIENT_BUILD: '1', OUTBOX_LEASE_S: '10', LOG_LEVEL: 'error' },
-  stdio: ['ignore', 'pipe', 'inherit'],
-});
-let clusterOut = '';
-const ready = new Promise((resolveReady, reject) => {
-  cluster.stdout.on('data', (c) => {
-    clusterOut += c;
+const cluster = startClusterChild({
+  dataDir,
+  env: { SCANWRIGHT_SKIP_CLIENT_BUILD: '1', OUTBOX_LEASE_S: '10', LOG_LEVEL: 'error' },
+  onOutput: (c) => {
     for (const line of c.toString().split('\n')) if (/^\[cluster\]/.test(line)) process.stdout.write(`${line}\n`);
-    if (clusterOut.includes('cluster ready')) resolveReady();
-  });
-  cluster.once('exit', (code) => reject(new Error(`npm run cluster exited with ${code}:\n${clusterOut.slice(-2000)}`)));
+  },
 });
-
-async function stopCluster() {
-  if (!running(cluster)) return;
-  cluster.kill('SIGINT');
-  if (!(await waitExit(cluster, 90_000))) await stopChild(cluster, { graceMs: 5000 });
-}
+const stopCluster = () => cluster.stop();
 for (const sig of ['SIGINT', 'SIGTERM'])
   process.on(sig, async () => {
     await stopCluster();
@@ -99,7 +87,7 @@ const pids = () => JSON.parse(readFileSync(join(root, 'pids.json'), 'utf8'));
 
 let status;
 try {
-  await ready;
+  await cluster.ready;
   const listing = (await (await fetch(`${WEB}/api/listings`)).json()).items?.[0];
   if (!listing) throw new Error('the demo has no listing to write to');
   const makers = [];

@@ -6,34 +6,36 @@
 import { spawn, execFile } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { createServer } from 'node:http';
+import { connect } from 'node:net';
 import { join } from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
-import S3rver from 's3rver';
 import { ensureDebianPackages, ensureNodeModules } from './lib/setup.mjs';
 import { DATA_DIR, localSecrets, clientBuildIsStale, serverBuildIsStale } from './lib/paths.mjs';
 import { running, stopChild, waitExit, pidAlive } from './lib/processes.mjs';
 import { supervise } from './lib/supervisor.mjs';
-import { NODES, chooseBootstrapNode, clientPort, ensureClusterDatabase, initNode, nodeSocket, startNode } from './lib/galera.mjs';
+import {
+  NODES,
+  chooseBootstrapNode,
+  clientPort,
+  ensureClusterDatabase,
+  initNode,
+  nodeSocket,
+  startNode,
+  untilEvicted,
+} from './lib/galera.mjs';
 import { buildServer } from './build-server.mjs';
+import { CLUSTER_PORTS } from './lib/cluster-run.mjs';
 
 const log = (line) => process.stdout.write(`[cluster] ${line}\n`);
 
-/** Every port of the cluster (docs/deploy/cluster.md). */
-export const PORTS = {
-  web: 3100,
-  apps: [3110, 3111],
-  dbProxy: 3510,
-  nodeChecks: [3514, 3515, 3516],
-  s3: 3520,
-  oauth: 3121,
-  smtp: 3122,
-  inbox: 3123,
-};
+const PORTS = CLUSTER_PORTS;
 const BUCKET = 'scanwright-photos';
 const S3_KEY = 'S3RVER'; // s3rver's built-in access key and secret
 
 ensureDebianPackages({ cluster: true });
 ensureNodeModules();
+// An npm package: imported only once node_modules is there (a fresh clone has none before the line above).
+const { default: S3rver } = await import('s3rver');
 
 const root = join(DATA_DIR, 'cluster');
 mkdirSync(root, { recursive: true });
@@ -213,7 +215,7 @@ frontend web
 backend apps
   mode http
   balance roundrobin
-  option forwardedfor
+  option forwardfor
   option httpchk GET /api/ready
   http-check expect status 200
   default-server inter 500ms fall 2 rise 2
@@ -252,6 +254,29 @@ async function until200(url, ms) {
   throw new Error(`${url} did not answer 200 within ${ms / 1000} s`);
 }
 
+/** Resolves once a connection to the database proxy gets a MariaDB greeting (haproxy is up and has a node). */
+async function untilProxyGreets(ms) {
+  const deadline = Date.now() + ms;
+  const greets = () =>
+    new Promise((resolve) => {
+      const socket = connect(PORTS.dbProxy, '127.0.0.1');
+      const done = (ok) => {
+        socket.destroy();
+        resolve(ok);
+      };
+      socket.setTimeout(1000, () => done(false));
+      socket.once('data', () => done(true));
+      socket.once('error', () => done(false));
+      socket.once('close', () => done(false));
+    });
+  while (Date.now() < deadline) {
+    if (!running(live.haproxy)) throw new Error(`haproxy exited with ${live.haproxy?.exitCode} (its messages are above)`);
+    if (await greets()) return;
+    await sleep(200);
+  }
+  throw new Error(`the database proxy on :${PORTS.dbProxy} did not answer within ${ms / 1000} s`);
+}
+
 function startApp(port) {
   const child = spawnLogged(`app:${port}`, process.execPath, ['--enable-source-maps', 'dist/server/index.mjs'], {
     ...appEnv,
@@ -271,9 +296,22 @@ try {
   const order = [first, ...NODES.filter((i) => i !== first)];
   for (const [k, i] of order.entries()) {
     let bootstrap = k === 0;
+    let restart = false;
     const sup = supervise({
       name: `Galera node ${i}`,
       start: async () => {
+        // A node that died rejoins only once the others have evicted it (scripts/lib/galera.mjs, untilEvicted).
+        if (restart) {
+          const since = Date.now();
+          const evicted = await untilEvicted(root, i, { shouldStop: () => stopping });
+          if (stopping) throw new Error('stopping');
+          log(
+            evicted
+              ? `Galera node ${i} is out of the others' view (waited ${((Date.now() - since) / 1000).toFixed(1)} s); starting it again.`
+              : `Galera node ${i} is still a member for the others after 15 s; starting it anyway.`,
+          );
+        }
+        restart = true;
         const child = await startNode(root, i, {
           bootstrap,
           onSpawn: (c) => {
@@ -314,6 +352,7 @@ try {
   writeFileSync(cfg, haproxyConfig());
   live.haproxy = spawnLogged('haproxy', 'haproxy', ['-f', cfg, '-db'], appEnv);
   await until200(`http://127.0.0.1:${PORTS.nodeChecks[0]}/`, 10_000);
+  await untilProxyGreets(30_000);
 
   // 3. Migrations and the demo seed through the proxy (photos go to the bucket), the client build, then the apps.
   if ((await step(process.execPath, ['--enable-source-maps', 'dist/server/prepare.mjs'])) !== 0)

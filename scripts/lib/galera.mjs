@@ -2,7 +2,7 @@
 // each node has its own data directory under .data/cluster/n<i>/, owned by and run as the `mysql` user (as root,
 // the joiner's rsync SST daemon drops to `nobody` and state transfer fails), every tool with --no-defaults.
 // Ports of node i (1…3): client 351i, group communication 45i7, IST 45i8, SST 45i9 (i = 6, 7, 8 for nodes 1, 2, 3).
-import { spawn, spawnSync } from 'node:child_process';
+import { execFile, spawn, spawnSync } from 'node:child_process';
 import { chownSync, existsSync, mkdirSync, readFileSync, readdirSync, statSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
@@ -120,6 +120,8 @@ function nodeArgs(root, i, { bootstrap }) {
     `--wsrep-cluster-address=${CLUSTER_ADDRESS}`,
     `--wsrep-node-address=127.0.0.1:${groupPort(i)}`,
     `--wsrep-node-name=n${i}`,
+    // What wsrep_incoming_addresses lists for this node (else "AUTO"); untilEvicted looks for it there.
+    `--wsrep-node-incoming-address=127.0.0.1:${clientPort(i)}`,
     `--wsrep-provider-options=${provider}`,
     `--wsrep-sst-receive-address=127.0.0.1:${groupPort(i) + 2}`,
     '--wsrep-sst-method=rsync',
@@ -157,6 +159,35 @@ export function nodeState(root, i) {
   } catch {
     return { synced: false, size: 0 };
   }
+}
+
+/** The members' client addresses (`host:port`) in the view of node j, or null when it does not answer. */
+const membersSeenBy = (root, j) =>
+  new Promise((resolve) => {
+    execFile(
+      'mariadb',
+      ['--no-defaults', `--socket=${nodeSocket(root, j)}`, '-uroot', '-N', '-B', '-e', "SHOW STATUS LIKE 'wsrep_incoming_addresses'"],
+      { timeout: 1500 },
+      (err, stdout) => resolve(err ? null : (stdout.trim().split('\t')[1] ?? '').split(',').filter(Boolean)),
+    );
+  });
+
+/**
+ * Before node i starts again after it died: wait until no other node still counts its previous incarnation as a
+ * member. Galera evicts a dead node only after evs.inactive_timeout; a new incarnation on the same address joining
+ * before that makes the membership change fail over and over, until the survivors fall to a non-primary component and
+ * take no writes (seen: 8 s without a primary after a writer was killed and restarted 0.5 s later). Gives up waiting
+ * after `timeoutMs` or when `shouldStop()` says so.
+ */
+export async function untilEvicted(root, i, { timeoutMs = 15_000, shouldStop = () => false } = {}) {
+  const address = `127.0.0.1:${clientPort(i)}`;
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline && !shouldStop()) {
+    const views = await Promise.all(NODES.filter((j) => j !== i).map((j) => membersSeenBy(root, j)));
+    if (!views.some((members) => members?.includes(address))) return true;
+    await sleep(250);
+  }
+  return false;
 }
 
 /** Start node i; resolves with the child once it is Synced (or throws with the end of its error log). */
