@@ -1,4 +1,5 @@
 import { useId, useState, type ClipboardEvent, type ComponentProps, type ReactNode } from 'react';
+import { flushSync } from 'react-dom';
 import { CsvFileInput } from '@/components/ui/csv-file-input.tsx';
 import { inputClass } from '@/components/ui/form-bits.tsx';
 
@@ -37,8 +38,11 @@ export function CsvTextSource({
   const textId = useId();
   const [held, setHeld] = useState<{ chars: number; lines: number } | null>(null);
   const take = (text: string) => {
+    const large = text.length > LARGE_TEXT;
+    // A large text: the box goes first, so the form does not lay megabytes out in it on the way.
+    if (large) flushSync(() => setHeld({ chars: text.length, lines: lineCount(text) }));
     onFileText(text);
-    setHeld(text.length > LARGE_TEXT ? { chars: text.length, lines: lineCount(text) } : null);
+    if (!large) setHeld(null);
   };
   const onPaste = (e: ClipboardEvent<HTMLTextAreaElement>) => {
     const text = e.clipboardData.getData('text/plain');
