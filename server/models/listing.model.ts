@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import type { ListingCondition, ListingKind, ListingStatus, PriceKind } from '@shared/schemas/listing.ts';
+import type { ListingCondition, ListingKind, ListingStatus, PriceKind } from '@shared/schemas/listing-vocabulary.ts';
 
 export class Listing extends Model<InferAttributes<Listing>, InferCreationAttributes<Listing>> {
   declare id: CreationOptional<number>;

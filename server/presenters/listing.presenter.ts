@@ -1,5 +1,6 @@
 import { can, type Actor } from '@shared/policies.ts';
-import { priceLabel, type ListingDto, type ListingPhotoDto } from '@shared/schemas/listing.ts';
+import { type ListingDto, type ListingPhotoDto } from '@shared/schemas/listing.ts';
+import { priceLabel } from '@shared/schemas/listing-vocabulary.ts';
 import type { Listing } from '../models/listing.model.ts';
 import type { Part } from '../models/part.model.ts';
 

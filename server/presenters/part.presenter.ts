@@ -2,7 +2,7 @@ import { partChoiceOf } from '@shared/schemas/part.ts';
 import type { RunKind } from '@shared/schemas/run-vocabulary.ts';
 import type { PartChoiceDto, PartDetailDto, PartSummaryDto } from '@shared/schemas/part.ts';
 import type { AttachedPhotoDto } from '@shared/schemas/attached-photo.ts';
-import { priceLabel, type PriceKind } from '@shared/schemas/listing.ts';
+import { priceLabel, type PriceKind } from '@shared/schemas/listing-vocabulary.ts';
 import { expectedGainForPart } from '@shared/workbench/part-expected-gain.ts';
 import type { Part } from '../models/part.model.ts';
 

@@ -1,4 +1,4 @@
-import type { ListingKind } from '@shared/schemas/listing.ts';
+import type { ListingKind } from '@shared/schemas/listing-vocabulary.ts';
 import { kindLabels } from './labels.ts';
 
 /** Offering (teal, filled) or Seeking (amber outline); the word carries the meaning. */

@@ -1,4 +1,4 @@
-import type { ListingKind, ListingStatus } from '@shared/schemas/listing.ts';
+import type { ListingKind, ListingStatus } from '@shared/schemas/listing-vocabulary.ts';
 import type { BadgeTone } from '@/components/ui/status-badge.tsx';
 
 /** "Offering" / "Seeking", as badges and filters say it. */

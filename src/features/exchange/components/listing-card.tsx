@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
-import { listingConditionLabels, type ListingDto } from '@shared/schemas/listing.ts';
+import { type ListingDto } from '@shared/schemas/listing.ts';
+import { listingConditionLabels } from '@shared/schemas/listing-vocabulary.ts';
 import { partCategoryLabels } from '@shared/schemas/part-vocabulary.ts';
 import { StatusBadge } from '@/components/ui/status-badge.tsx';
 import { paths } from '@/config/paths.ts';

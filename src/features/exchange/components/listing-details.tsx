@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
-import { listingConditionLabels, type ListingDto } from '@shared/schemas/listing.ts';
+import { type ListingDto } from '@shared/schemas/listing.ts';
+import { listingConditionLabels } from '@shared/schemas/listing-vocabulary.ts';
 import { partCategoryLabels } from '@shared/schemas/part-vocabulary.ts';
 import { Markdown } from '@/components/ui/markdown.tsx';
 import { paths } from '@/config/paths.ts';

@@ -1,4 +1,4 @@
-import { LISTING_CONDITIONS, LISTING_KINDS, listingConditionLabels, type ListingKind } from '@shared/schemas/listing.ts';
+import { LISTING_CONDITIONS, LISTING_KINDS, listingConditionLabels, type ListingKind } from '@shared/schemas/listing-vocabulary.ts';
 import { PART_CATEGORIES, partCategoryLabels } from '@shared/schemas/part-vocabulary.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { ClearFilters, FilterSelect, FilterText, SearchForm, useFilterDraft } from '@/components/search/filter-controls.tsx';

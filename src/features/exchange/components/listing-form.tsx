@@ -3,13 +3,8 @@ import { Controller, useForm, useWatch } from 'react-hook-form';
 import { currencyOfRegionText, defaultCurrency } from '@shared/exchange/currency-by-region.ts';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import {
-  createListingInput,
-  LISTING_CONDITIONS,
-  LISTING_KINDS,
-  listingConditionLabels,
-  type CreateListingInput,
-} from '@shared/schemas/listing.ts';
+import { createListingInput, type CreateListingInput } from '@shared/schemas/listing.ts';
+import { LISTING_CONDITIONS, LISTING_KINDS, listingConditionLabels } from '@shared/schemas/listing-vocabulary.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { applyServerErrors, FormError, InputField, SelectField, TextAreaField, textOrUndefined } from '@/components/ui/form-bits.tsx';
 import { PartPicker } from './part-picker.tsx';

@@ -1,5 +1,6 @@
 import { useState } from 'react';
-import type { ListingDto, ListingStatus } from '@shared/schemas/listing.ts';
+import type { ListingDto } from '@shared/schemas/listing.ts';
+import type { ListingStatus } from '@shared/schemas/listing-vocabulary.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { LinkButton } from '@/components/ui/link-button.tsx';
 import { paths } from '@/config/paths.ts';

@@ -1,6 +1,7 @@
 import type { UseFormRegister, FieldErrors } from 'react-hook-form';
 import type { z } from 'zod';
-import { PRICE_KINDS, type createListingInput, type PriceKind } from '@shared/schemas/listing.ts';
+import { type createListingInput } from '@shared/schemas/listing.ts';
+import { PRICE_KINDS, type PriceKind } from '@shared/schemas/listing-vocabulary.ts';
 import { InputField, numberOrNull } from '@/components/ui/form-bits.tsx';
 
 type Values = z.input<typeof createListingInput>;

@@ -1,5 +1,6 @@
 import { useSearchParams } from 'react-router-dom';
-import { listListingsQuery, type ListingCondition, type ListingKind, type ListListingsQuery } from '@shared/schemas/listing.ts';
+import { listListingsQuery, type ListListingsQuery } from '@shared/schemas/listing.ts';
+import { type ListingCondition, type ListingKind } from '@shared/schemas/listing-vocabulary.ts';
 import type { PartCategory } from '@shared/schemas/part-vocabulary.ts';
 import { readSearch, writeSearch } from '@/lib/url-search.ts';
 import { paths } from '@/config/paths.ts';

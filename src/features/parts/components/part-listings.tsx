@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { PartListingRefDto } from '@shared/schemas/part.ts';
-import { listingConditionLabels, type ListingCondition } from '@shared/schemas/listing.ts';
+import { listingConditionLabels, type ListingCondition } from '@shared/schemas/listing-vocabulary.ts';
 import { paths } from '@/config/paths.ts';
 
 /** Open exchange listings for this part, each linking to the listing. */

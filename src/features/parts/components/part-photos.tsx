@@ -1,6 +1,9 @@
+import { lazy, Suspense } from 'react';
 import type { PartDetailDto } from '@shared/schemas/part.ts';
 import { PhotoGrid } from '@/components/photos/photo-grid.tsx';
-import { PartPhotoManager } from './part-photo-manager.tsx';
+
+/** The photo manager, loaded for those who may use it. */
+const LazyPartPhotoManager = lazy(() => import('./part-photo-manager.tsx').then((m) => ({ default: m.PartPhotoManager })));
 
 /** What the part looks like; its proposer and moderators also get the photo manager below. Nothing at all when there is nothing to show or do. */
 export function PartPhotos({ part }: { part: PartDetailDto }) {
@@ -18,7 +21,11 @@ export function PartPhotos({ part }: { part: PartDetailDto }) {
           No photos of this part yet. A clear one of the bare part helps others recognise it.
         </p>
       )}
-      {canEdit && <PartPhotoManager part={part} />}
+      {canEdit && (
+        <Suspense fallback={<p className="text-sm text-ink-soft">Opening the photo manager…</p>}>
+          <LazyPartPhotoManager part={part} />
+        </Suspense>
+      )}
     </section>
   );
 }
