@@ -142,7 +142,7 @@ export function UplotChart({ x, y, layers, legend = [], figures, height, square 
     <div data-testid="chart">
       {zoom && (
         <div className="mb-1 flex flex-wrap items-center justify-end gap-x-3 text-sm text-ink-soft">
-          <span>Drag to zoom, shift-drag to pan, double-click to reset.</span>
+          <span className="pointer-coarse:hidden">Drag to zoom, shift-drag to pan, double-click to reset.</span>
           <button
             type="button"
             className="rounded border border-rule px-2 py-0.5 text-ink hover:bg-paper disabled:text-ink-soft disabled:opacity-60"

@@ -61,7 +61,7 @@ function BuildRun({ run, onDecided }: { run: QueueRunDto; onDecided: (decision: 
               </p>
             }
           >
-            <CalibrationChart points={run.points} fit={{ interceptNm: run.fit.interceptNm, gainNmPerV: run.fit.gainNmPerV }} height={140} />
+            <CalibrationChart points={run.points} fit={{ interceptNm: run.fit.interceptNm, gainNmPerV: run.fit.gainNmPerV }} height={220} />
           </Suspense>
         </div>
       )}
