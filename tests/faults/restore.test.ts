@@ -17,6 +17,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { startTestApp, type TestApp } from '../support/test-app.ts';
 import { signIn } from '../support/login.ts';
 import { createUser } from '../support/factories.ts';
+import { waitFor } from '../support/wait-for.ts';
 import { startPrivateMariaDb, type PrivateMariaDb } from '../support/private-mariadb.ts';
 import { OutboxMail } from '../../server/models/outbox-mail.model.ts';
 
@@ -173,7 +174,13 @@ describe('when db:restore runs while makers keep writing', () => {
     at.restoreEnd = Date.now();
     restoreOut = restored.stdout + restored.stderr;
     if (restored.code !== 0) throw new Error(`restore failed:\n${restoreOut}`);
-    await pause(800);
+    // Writes go on until one sent after the fence was lifted is acknowledged: an instance reads the fence at most
+    // once a second (server/middleware/maintenance.ts), so a fixed pause here could end before it sees it lifted.
+    await waitFor(() => log.some((o) => o.what === 'create-build' && o.status === 201 && o.startedAt > at.open), {
+      timeoutMs: 10_000,
+      what: 'a write sent after the fence was lifted to be acknowledged',
+    }).catch(() => undefined);
+    await pause(300);
     running = false;
     await Promise.all(workers);
     await pause(1500); // let the outbox send what is due
