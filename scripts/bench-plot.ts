@@ -9,7 +9,7 @@ import { chromium, type Page } from 'playwright-core';
 import { createSequelize } from '../server/db/sequelize.ts';
 import { createMigrator } from '../server/db/migrator.ts';
 import { quantileSorted } from '../shared/stats/quantiles.ts';
-import { seededRandom } from '../shared/stats/seeded-random.ts';
+import { syntheticLoopCsv } from '../shared/stats/synthetic-loop.ts';
 import { benchConfig, startBenchDb } from './lib/bench-db.ts';
 import { startServerProcess } from './lib/bench-server.ts';
 
@@ -19,21 +19,6 @@ const SIZES = [1_000, 100_000];
 /** Item 12 of the page-weight issue: 100 000 points plotted within 300 ms. */
 const TARGET_MS = 300;
 const PLOT = '[data-testid="chart"] [data-drawn-at]';
-
-/** A loop of `n` readings over ±60 V, up then down, 102.6 nm/V with 4 % hysteresis and 2 nm of noise [calc]. */
-function loopCsv(n: number): string {
-  const rand = seededRandom(n);
-  const lines = ['volts,displacement,sweep'];
-  for (let i = 0; i < n; i++) {
-    const phase = i / n;
-    const up = phase < 0.5;
-    const volts = up ? -60 + 240 * phase : 60 - 240 * (phase - 0.5);
-    const lag = (up ? -1 : 1) * 0.04 * 102.6 * 60 * (1 - (volts / 60) ** 2);
-    const nm = 102.6 * volts + lag + (rand() - 0.5) * 4;
-    lines.push(`${volts.toFixed(4)},${nm.toFixed(3)},${up ? 'up' : 'down'}`);
-  }
-  return lines.join('\n');
-}
 
 const median = (xs: number[]) =>
   quantileSorted(
@@ -133,7 +118,7 @@ try {
   });
   try {
     for (const n of SIZES) {
-      const csv = loopCsv(n);
+      const csv = syntheticLoopCsv(n, 70);
       const first: number[] = [];
       const whole: number[] = [];
       for (let i = 0; i < RUNS; i++) {

@@ -1,23 +1,9 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
-import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
-import { seededRandom } from '../../shared/stats/seeded-random.ts';
+import { journey, SCREENSHOTS } from '../support/browser.ts';
+import { syntheticLoopCsv } from '../../shared/stats/synthetic-loop.ts';
 
 const PLOT = '[data-testid="chart"] [data-drawn-at]';
-
-/** A loop of `n` readings over ±60 V, up then down, about 70 nm/V with 4 % hysteresis and 2 nm of noise [calc]. */
-function loopCsv(n: number): string {
-  const rand = seededRandom(n);
-  const lines = ['volts,displacement,sweep'];
-  for (let i = 0; i < n; i++) {
-    const phase = i / n;
-    const up = phase < 0.5;
-    const volts = up ? -60 + 240 * phase : 60 - 240 * (phase - 0.5);
-    const lag = (up ? -1 : 1) * 0.04 * 70 * 60 * (1 - (volts / 60) ** 2);
-    lines.push(`${volts.toFixed(4)},${(70 * volts + lag + (rand() - 0.5) * 4).toFixed(3)},${up ? 'up' : 'down'}`);
-  }
-  return lines.join('\n');
-}
 
 /** The x range the chart shows (the wrapper keeps it in `data-x-range`). */
 async function xRange(page: Page): Promise<[number, number]> {
@@ -36,26 +22,15 @@ async function paste(page: Page, text: string) {
 }
 
 describe('journey: a visitor zooms into a long calibration record on the fit page', () => {
-  let live: LiveApp;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
-  const errors: string[] = [];
-  beforeAll(async () => {
-    live = await startLiveApp();
-    browser = await launchBrowser();
-    browser.page.on('pageerror', (e) => errors.push(e.message));
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await live?.close();
-  });
+  const j = journey();
 
   test('when 100 000 points are pasted, then they are held out of the text box, plotted without markers, and the chart zooms, pans and resets', async () => {
-    const { page } = browser;
-    await page.goto(`${live.baseUrl}/workbench/fit`);
+    const { page } = j.browser;
+    await page.goto(`${j.live.baseUrl}/workbench/fit`);
     // The example's chart first (the chart code is loaded), then the CSV source.
     await page.locator(PLOT).first().waitFor();
     await page.getByRole('radio', { name: 'Paste or load a CSV' }).check();
-    await paste(page, loopCsv(100_000));
+    await paste(page, syntheticLoopCsv(100_000, 70));
 
     // The text stays out of the box: a line says how much is in use.
     await expect.poll(() => page.getByRole('status').filter({ hasText: '100,001 lines' }).count(), { timeout: 20_000 }).toBe(1);
@@ -111,6 +86,6 @@ describe('journey: a visitor zooms into a long calibration record on the fit pag
     // "Show as text" puts the record back in the box.
     await page.getByRole('button', { name: 'Show as text' }).click();
     expect((await page.getByLabel('CSV text').inputValue()).length).toBeGreaterThan(200_000);
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 });
