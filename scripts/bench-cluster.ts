@@ -6,13 +6,14 @@
 // In each shape the health route alone is measured too, as the floor every request stands on. Prints each shape's
 // per-route table, then throughput, p95 of all requests and of the writes, each as a ratio to the single shape.
 // Rate limits are off in both (as in bench:load). Loopback only; about 4 minutes; stops everything it started.
-import { chmodSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, accessSync, constants } from 'node:fs';
+import { chmodSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
-import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Sequelize } from 'sequelize';
 // @ts-expect-error plain ESM helper without types
 import { CLUSTER_PORTS, startClusterChild } from './lib/cluster-run.mjs';
+// @ts-expect-error plain ESM helper without types
+import { scratchBase } from './lib/throwaway-mariadb.mjs';
 import { startSingleShape, type SingleShape } from './lib/bench-single.ts';
 import {
   addGeneratedParts,
@@ -56,15 +57,6 @@ const assertFree = (port: number) =>
     s.once('error', () => reject(new Error(`port ${port} is in use; bench:cluster needs it`)));
     s.listen(port, '127.0.0.1', () => s.close(() => resolve()));
   });
-
-function scratchBase() {
-  try {
-    accessSync('/dev/shm', constants.W_OK);
-    return '/dev/shm';
-  } catch {
-    return tmpdir();
-  }
-}
 
 /** The mixed load and then the health route alone, against `origin`, with the models bound to its database. */
 async function measureShape(shape: string, origin: string, serverErrors: string[]): Promise<ShapeResult> {

@@ -6,6 +6,7 @@ import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { LocalPhotoStore } from '../server/storage/local-photo-store.ts';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from './lib/chromium.ts';
 import { chromium } from 'playwright-core';
 import { createSequelize } from '../server/db/sequelize.ts';
 import { createMigrator } from '../server/db/migrator.ts';
@@ -77,8 +78,8 @@ try {
   ];
   const server = await startServerProcess(DATABASE, { signIn: true });
   const browser = await chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking'],
+    executablePath: CHROMIUM_PATH,
+    args: CHROMIUM_ARGS,
   });
   try {
     for (const [path, hasChart, login] of pages) {

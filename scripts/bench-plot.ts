@@ -5,6 +5,8 @@
 // loads. Then on the 100 000-point chart: drag-zoom narrows x, shift-drag pans it, double-click restores it, each
 // with the time to the redrawn frame. Prints a table; exits 1 if an interaction does not work.
 import { existsSync } from 'node:fs';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from './lib/chromium.ts';
+import { dragAcross, xRange } from './lib/chart-gestures.ts';
 import { chromium, type Page } from 'playwright-core';
 import { createSequelize } from '../server/db/sequelize.ts';
 import { createMigrator } from '../server/db/migrator.ts';
@@ -62,13 +64,6 @@ async function pasteAndDraw(page: Page, base: string, csv: string, n: number) {
   );
 }
 
-/** The x range the chart shows, from its `data-x-range`. */
-async function xRange(page: Page): Promise<[number, number]> {
-  const raw = (await page.locator(PLOT).getAttribute('data-x-range')) ?? 'NaN,NaN';
-  const [a, b] = raw.split(',').map(Number);
-  return [a!, b!];
-}
-
 /** Runs `act` and returns the time from its end to the frame after the chart redrew. */
 async function timedRedraw(page: Page, act: () => Promise<void>): Promise<number> {
   await page.evaluate(() => {
@@ -104,17 +99,8 @@ try {
   await sq.close();
   const server = await startServerProcess(DATABASE);
   const browser = await chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    args: [
-      '--headless',
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
+    executablePath: CHROMIUM_PATH,
+    args: CHROMIUM_ARGS,
   });
   try {
     for (const n of SIZES) {
@@ -133,30 +119,16 @@ try {
           const plot = page.locator(PLOT);
           await plot.scrollIntoViewIfNeeded();
           const box = (await plot.boundingBox())!;
-          const whole0 = await xRange(page);
-          const y = box.y + box.height * 0.4;
-          const zoomMs = await timedRedraw(page, async () => {
-            await page.mouse.move(box.x + box.width * 0.35, y);
-            await page.mouse.down();
-            await page.mouse.move(box.x + box.width * 0.5, y, { steps: 5 });
-            await page.mouse.move(box.x + box.width * 0.65, y, { steps: 5 });
-            await page.mouse.up();
-          });
-          const zoomed = await xRange(page);
+          const whole0 = await xRange(plot);
+          const zoomMs = await timedRedraw(page, () => dragAcross(page, box, 0.35, 0.65));
+          const zoomed = await xRange(plot);
           checks.push(['drag-zoom narrows x', zoomed[1] - zoomed[0] < (whole0[1] - whole0[0]) * 0.6, zoomMs]);
-          const panMs = await timedRedraw(page, async () => {
-            await page.keyboard.down('Shift');
-            await page.mouse.move(box.x + box.width * 0.6, y);
-            await page.mouse.down();
-            await page.mouse.move(box.x + box.width * 0.4, y, { steps: 8 });
-            await page.mouse.up();
-            await page.keyboard.up('Shift');
-          });
-          const panned = await xRange(page);
+          const panMs = await timedRedraw(page, () => dragAcross(page, box, 0.6, 0.4, { shift: true }));
+          const panned = await xRange(plot);
           const sameWidth = Math.abs(panned[1] - panned[0] - (zoomed[1] - zoomed[0])) < (zoomed[1] - zoomed[0]) * 1e-6;
           checks.push(['shift-drag pans (same width, moved right)', sameWidth && panned[0] > zoomed[0], panMs]);
           const resetMs = await timedRedraw(page, () => plot.dblclick({ position: { x: box.width / 2, y: box.height * 0.4 } }));
-          const reset = await xRange(page);
+          const reset = await xRange(plot);
           checks.push(['double-click restores the whole range', reset[0] === whole0[0] && reset[1] === whole0[1], resetMs]);
         }
         await context.close();

@@ -18,7 +18,8 @@ export function freePort() {
   });
 }
 
-function scratchBase() {
+/** A scratch folder for database files: /dev/shm (memory) when writable, else the system temp folder. */
+export function scratchBase() {
   try {
     accessSync('/dev/shm', constants.W_OK);
     return '/dev/shm';

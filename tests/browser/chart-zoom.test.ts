@@ -1,16 +1,10 @@
 import { describe, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
 import { journey, SCREENSHOTS } from '../support/browser.ts';
+import { dragAcross, xRange } from '../../scripts/lib/chart-gestures.ts';
 import { syntheticLoopCsv } from '../../shared/stats/synthetic-loop.ts';
 
 const PLOT = '[data-testid="chart"] [data-drawn-at]';
-
-/** The x range the chart shows (the wrapper keeps it in `data-x-range`). */
-async function xRange(page: Page): Promise<[number, number]> {
-  const raw = (await page.locator(PLOT).first().getAttribute('data-x-range')) ?? 'NaN,NaN';
-  const [a, b] = raw.split(',').map(Number);
-  return [a!, b!];
-}
 
 /** Pastes text into the focused CSV box the way a browser does (a paste event carrying the clipboard's text). */
 async function paste(page: Page, text: string) {
@@ -42,46 +36,33 @@ describe('journey: a visitor zooms into a long calibration record on the fit pag
     expect(Number(await plot.getAttribute('data-markers'))).toBeLessThan(20_000);
     await plot.scrollIntoViewIfNeeded();
     const box = (await plot.boundingBox())!;
-    const whole = await xRange(page);
+    const whole = await xRange(plot);
     expect(whole[0]).toBeLessThanOrEqual(-60);
     expect(whole[1]).toBeGreaterThanOrEqual(60);
     const reset = page.getByRole('button', { name: 'Reset zoom' });
     expect(await reset.isDisabled()).toBe(true);
 
     // Drag across the middle third: x narrows to about that stretch.
-    const y = box.y + box.height * 0.4;
-    await page.mouse.move(box.x + box.width * 0.35, y);
-    await page.mouse.down();
-    await page.mouse.move(box.x + box.width * 0.5, y, { steps: 5 });
-    await page.mouse.move(box.x + box.width * 0.65, y, { steps: 5 });
-    await page.mouse.up();
-    await expect.poll(async () => (await xRange(page))[1] - (await xRange(page))[0]).toBeLessThan((whole[1] - whole[0]) * 0.6);
-    const zoomed = await xRange(page);
+    await dragAcross(page, box, 0.35, 0.65);
+    await expect.poll(async () => (await xRange(plot))[1] - (await xRange(plot))[0]).toBeLessThan((whole[1] - whole[0]) * 0.6);
+    const zoomed = await xRange(plot);
     expect(zoomed[0]).toBeGreaterThan(whole[0]);
     expect(await reset.isDisabled()).toBe(false);
 
     // Shift-drag to the left: the same width, moved to higher volts.
-    await page.keyboard.down('Shift');
-    await page.mouse.move(box.x + box.width * 0.6, y);
-    await page.mouse.down();
-    await page.mouse.move(box.x + box.width * 0.4, y, { steps: 8 });
-    await page.mouse.up();
-    await page.keyboard.up('Shift');
-    await expect.poll(async () => (await xRange(page))[0]).toBeGreaterThan(zoomed[0]);
-    const panned = await xRange(page);
+    await dragAcross(page, box, 0.6, 0.4, { shift: true });
+    await expect.poll(async () => (await xRange(plot))[0]).toBeGreaterThan(zoomed[0]);
+    const panned = await xRange(plot);
     expect(panned[1] - panned[0]).toBeCloseTo(zoomed[1] - zoomed[0], 6);
     await page.screenshot({ path: `${SCREENSHOTS}/chart-zoom-panned.png`, fullPage: false });
 
     // "Reset zoom" brings the whole range back; so does a double-click after another zoom.
     await reset.click();
-    await expect.poll(() => xRange(page)).toEqual(whole);
-    await page.mouse.move(box.x + box.width * 0.3, y);
-    await page.mouse.down();
-    await page.mouse.move(box.x + box.width * 0.5, y, { steps: 8 });
-    await page.mouse.up();
-    await expect.poll(async () => (await xRange(page))[0]).toBeGreaterThan(whole[0]);
+    await expect.poll(() => xRange(plot)).toEqual(whole);
+    await dragAcross(page, box, 0.3, 0.5);
+    await expect.poll(async () => (await xRange(plot))[0]).toBeGreaterThan(whole[0]);
     await plot.dblclick({ position: { x: box.width / 2, y: box.height * 0.4 } });
-    await expect.poll(() => xRange(page)).toEqual(whole);
+    await expect.poll(() => xRange(plot)).toEqual(whole);
 
     // "Show as text" puts the record back in the box.
     await page.getByRole('button', { name: 'Show as text' }).click();

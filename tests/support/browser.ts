@@ -6,6 +6,7 @@ import { createServer, type AddressInfo } from 'node:net';
 import type { Server } from 'node:http';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { startTestApp, type TestApp } from './test-app.ts';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../../scripts/lib/chromium.ts';
 import { seedDemoOnce } from '../../server/db/seed/demo.ts';
 import { demoPictureAttacher } from '../../server/db/seed/demo-pictures.ts';
 
@@ -58,21 +59,12 @@ export async function launchBrowser(
   mkdirSync(SCREENSHOTS, { recursive: true });
   const profile = mkdtempSync(join(tmpdir(), 'scanwright-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
-    executablePath: '/usr/bin/chromium',
+    executablePath: CHROMIUM_PATH,
     headless: true,
     viewport: { width: 1280, height: 860 },
     // Only for tests that inject a checker script (axe-core) into our pages; the policy itself is tested elsewhere.
     bypassCSP: options.bypassCSP ?? false,
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-      '--disable-dev-shm-usage',
-    ],
+    args: CHROMIUM_ARGS,
   });
   const page = context.pages()[0] ?? (await context.newPage());
   openContexts.add(context);
