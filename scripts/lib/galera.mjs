@@ -6,6 +6,7 @@ import { execFile, spawn, spawnSync } from 'node:child_process';
 import { chownSync, existsSync, mkdirSync, readFileSync, readdirSync, statSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
+import { initDataDir } from './mariadb.mjs';
 
 export const NODES = [1, 2, 3];
 export const clientPort = (i) => 3510 + i;
@@ -31,24 +32,15 @@ function chownTree(path, { uid, gid }) {
 /** Make node i's data directory once (mariadb-install-db as mysql); true when it was new. */
 export function initNode(root, i) {
   const dir = nodeDir(root, i);
-  const data = join(dir, 'data');
-  if (existsSync(join(data, 'mysql'))) return false;
-  mkdirSync(data, { recursive: true });
+  if (existsSync(join(dir, 'data', 'mysql'))) return false;
+  mkdirSync(join(dir, 'data'), { recursive: true });
   const ids = mysqlIds();
   chownTree(dir, ids);
-  const r = spawnSync(
-    'mariadb-install-db',
-    [
-      '--no-defaults',
-      '--user=mysql',
-      `--datadir=${data}`,
-      '--auth-root-authentication-method=socket',
-      '--skip-test-db',
-      '--skip-name-resolve',
-    ],
-    { encoding: 'utf8' },
-  );
-  if (r.status !== 0) throw new Error(`mariadb-install-db for node ${i} failed:\n${r.stdout}\n${r.stderr}`);
+  try {
+    initDataDir(dir, { user: 'mysql' });
+  } catch (err) {
+    throw new Error(`node ${i}: ${err.message}`, { cause: err });
+  }
   chownTree(dir, ids);
   return true;
 }

@@ -18,8 +18,11 @@ export function mariadbTools() {
   return { mariadbd, installDb, client, admin };
 }
 
-/** Initialise a data directory once (socket auth for root, no test database). */
-export function initDataDir(dir) {
+/**
+ * Initialise a data directory once (socket auth for root, no test database), owned by `user` (root for the embedded
+ * server; the cluster's Galera nodes run as mysql and chown their folder first). True when it was new.
+ */
+export function initDataDir(dir, { user = 'root' } = {}) {
   const data = join(dir, 'data');
   if (existsSync(join(data, 'mysql'))) return false;
   mkdirSync(data, { recursive: true });
@@ -27,7 +30,7 @@ export function initDataDir(dir) {
     'mariadb-install-db',
     [
       '--no-defaults',
-      '--user=root',
+      `--user=${user}`,
       `--datadir=${data}`,
       '--auth-root-authentication-method=socket',
       '--skip-test-db',

@@ -5,16 +5,15 @@ import { spawn } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { basename, join } from 'node:path';
-import S3rver from 's3rver';
 import { GetObjectCommand, ListObjectsV2Command, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { freePort, startPrivateMariaDb, type PrivateMariaDb } from '../support/private-mariadb.ts';
+import { startS3StandIn, S3RVER_KEY as KEY, type S3StandIn } from '../support/s3-stand-in.ts';
 
 const BUCKET = 'scanwright-backups';
-const KEY = 'S3RVER'; // s3rver's built-in access key and secret
 
 let db: PrivateMariaDb;
-let s3: S3rver;
+let s3: S3StandIn;
 let endpoint: string;
 let client: S3Client;
 let work: string;
@@ -61,21 +60,12 @@ const written = (stdout: string) => /Backed up database `[^`]+` .* to (\S+\.tar\
 beforeAll(async () => {
   work = mkdtempSync(join(tmpdir(), 'scanwright-backup-s3-'));
   db = await startPrivateMariaDb({ database: 'scanwright_s3', migrate: true });
-  const port = await freePort();
-  endpoint = `http://127.0.0.1:${port}`;
-  s3 = new S3rver({
-    port,
-    address: '127.0.0.1',
-    silent: true,
-    directory: join(work, 's3'),
-    configureBuckets: [{ name: BUCKET, configs: [] }],
-  });
-  await s3.run();
-  client = new S3Client({ endpoint, region: 'us-east-1', forcePathStyle: true, credentials: { accessKeyId: KEY, secretAccessKey: KEY } });
+  s3 = await startS3StandIn(work, BUCKET);
+  endpoint = s3.endpoint;
+  client = s3.client;
 }, 90_000);
 
 afterAll(async () => {
-  client?.destroy();
   await s3?.close();
   await db?.destroy();
   if (work) rmSync(work, { recursive: true, force: true });

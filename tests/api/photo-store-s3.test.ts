@@ -4,15 +4,14 @@ import { createHash } from 'node:crypto';
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { basename, join } from 'node:path';
-import S3rver from 's3rver';
-import { ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
+import { ListObjectsV2Command, type S3Client } from '@aws-sdk/client-s3';
 import request from 'supertest';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { Config } from '../../server/config.ts';
 import { createPhotoStore } from '../../server/storage/create-photo-store.ts';
 import type { PhotoStore } from '../../server/storage/photo-store.ts';
-import { freePort } from '../support/private-mariadb.ts';
+import { startS3StandIn, S3RVER_KEY as KEY, type S3StandIn } from '../support/s3-stand-in.ts';
 import { startTestApp, type TestApp } from '../support/test-app.ts';
 import { signIn } from '../support/login.ts';
 import { createUser } from '../support/factories.ts';
@@ -20,10 +19,9 @@ import * as img from '../support/images.ts';
 import { Build } from '../../server/models/build.model.ts';
 
 const BUCKET = 'scanwright-photos';
-const KEY = 'S3RVER'; // s3rver's built-in access key and secret
 
 let work: string;
-let s3: S3rver;
+let s3: S3StandIn;
 let settings: NonNullable<Config['s3']>;
 let client: S3Client;
 let store: PhotoStore;
@@ -31,18 +29,9 @@ let t: TestApp;
 
 beforeAll(async () => {
   work = mkdtempSync(join(tmpdir(), 'scanwright-photo-s3-'));
-  const port = await freePort();
-  s3 = new S3rver({
-    port,
-    address: '127.0.0.1',
-    silent: true,
-    directory: join(work, 's3'),
-    configureBuckets: [{ name: BUCKET, configs: [] }],
-  });
-  await s3.run();
-  const endpoint = `http://127.0.0.1:${port}`;
-  settings = { bucket: BUCKET, endpoint, region: 'us-east-1', accessKeyId: KEY, secretAccessKey: KEY, prefix: 'photos/' };
-  client = new S3Client({ endpoint, region: 'us-east-1', forcePathStyle: true, credentials: { accessKeyId: KEY, secretAccessKey: KEY } });
+  s3 = await startS3StandIn(work, BUCKET);
+  settings = { bucket: BUCKET, endpoint: s3.endpoint, region: 'us-east-1', accessKeyId: KEY, secretAccessKey: KEY, prefix: 'photos/' };
+  client = s3.client;
   store = await createPhotoStore({ uploadsDir: join(work, 'unused'), s3: settings });
   // The app's own uploads folder must stay empty: every file goes to the bucket.
   t = await startTestApp({ uploadsDir: join(work, 'uploads'), s3: settings });
@@ -51,7 +40,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await t?.close();
   await store?.close();
-  client?.destroy();
   await s3?.close();
   rmSync(work, { recursive: true, force: true });
 });
