@@ -6,7 +6,7 @@ import { execFile, spawn, spawnSync } from 'node:child_process';
 import { chownSync, existsSync, mkdirSync, readFileSync, readdirSync, statSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
-import { initDataDir } from './mariadb.mjs';
+import { initDataDir, serverArgs } from './mariadb.mjs';
 
 export const NODES = [1, 2, 3];
 export const clientPort = (i) => 3510 + i;
@@ -85,20 +85,7 @@ function nodeArgs(root, i, { bootstrap }) {
     'gcache.size=64M',
   ].join(';');
   return [
-    '--no-defaults',
-    '--user=mysql',
-    `--datadir=${join(dir, 'data')}`,
-    '--skip-networking=0',
-    '--bind-address=127.0.0.1',
-    `--port=${clientPort(i)}`,
-    `--socket=${join(dir, 'mysqld.sock')}`,
-    `--pid-file=${join(dir, 'mysqld.pid')}`,
-    `--log-error=${join(dir, 'error.log')}`,
-    '--skip-name-resolve',
-    '--character-set-server=utf8mb4',
-    '--collation-server=utf8mb4_unicode_ci',
-    '--max-connections=300',
-    '--max-allowed-packet=64M',
+    ...serverArgs({ dir, port: clientPort(i), user: 'mysql' }),
     '--innodb-buffer-pool-size=64M',
     // Durability comes from the other nodes holding each commit; flushing the log once a second is enough here.
     '--innodb-flush-log-at-trx-commit=2',

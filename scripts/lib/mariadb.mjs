@@ -51,6 +51,27 @@ function pidAlive(pid) {
   }
 }
 
+/** The options every mariadbd of the project starts with: loopback only, its own socket, pid and log in `dir`, utf8mb4. */
+export function serverArgs({ dir, port, user }) {
+  return [
+    '--no-defaults',
+    `--user=${user}`,
+    `--datadir=${join(dir, 'data')}`,
+    '--skip-networking=0',
+    '--bind-address=127.0.0.1',
+    `--port=${port}`,
+    `--socket=${join(dir, 'mysqld.sock')}`,
+    `--pid-file=${join(dir, 'mysqld.pid')}`,
+    `--log-error=${join(dir, 'error.log')}`,
+    '--skip-name-resolve',
+    '--character-set-server=utf8mb4',
+    '--collation-server=utf8mb4_unicode_ci',
+    '--max-connections=300',
+    // A run may carry 200 000 samples (about 12 MB of JSON) in one INSERT.
+    '--max-allowed-packet=64M',
+  ];
+}
+
 /**
  * Start mariadbd on 127.0.0.1:port; resolves once it answers a ping. `onSpawn(child)` gets the process
  * at once (a supervisor can stop it while it is still starting); `shouldStop()` true gives up waiting.
@@ -61,23 +82,7 @@ export async function startServer(dir, port, { fast = false, onSpawn, shouldStop
     const old = Number(readFileSync(pidFile, 'utf8').trim());
     if (old && pidAlive(old)) throw new Error(`MariaDB already running from ${dir} (pid ${old}); stop it first`);
   }
-  const args = [
-    '--no-defaults',
-    '--user=root',
-    `--datadir=${join(dir, 'data')}`,
-    '--skip-networking=0',
-    '--bind-address=127.0.0.1',
-    `--port=${port}`,
-    `--socket=${join(dir, 'mysqld.sock')}`,
-    `--pid-file=${pidFile}`,
-    `--log-error=${join(dir, 'error.log')}`,
-    '--skip-name-resolve',
-    '--character-set-server=utf8mb4',
-    '--collation-server=utf8mb4_unicode_ci',
-    '--max-connections=300',
-    // A run may carry 200 000 samples (about 12 MB of JSON) in one INSERT.
-    '--max-allowed-packet=64M',
-  ];
+  const args = serverArgs({ dir, port, user: 'root' });
   if (fast) args.push('--innodb-flush-log-at-trx-commit=2', '--innodb-doublewrite=0', '--innodb-buffer-pool-size=64M');
   const child = spawn('mariadbd', args, { stdio: 'ignore', detached: false });
   onSpawn?.(child);
