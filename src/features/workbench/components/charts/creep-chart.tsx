@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { decadeTicks } from './axis-ticks.ts';
+import { decadeTicks } from '@/components/charts/axis-ticks.ts';
 import { chartColors } from '@/components/charts/chart-theme.ts';
 import { niceTicks } from '@/components/charts/chart-axes.ts';
 import { seriesText } from '@/components/charts/chart-figures.tsx';
