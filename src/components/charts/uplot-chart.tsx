@@ -135,7 +135,8 @@ export function UplotChart({ x, y, layers, legend = [], figures, height, square 
 
   const reset = () => {
     const u = chart.current;
-    if (u) u.setScale('x', { min: x.domain[0], max: x.domain[1] });
+    const [min, max] = tooSmall(x.domain);
+    if (u) u.setScale('x', { min, max });
   };
 
   return (
