@@ -10,12 +10,15 @@ export interface PlanePoint {
   yNm: number;
 }
 
-/** Equal spans on both axes around `points`, as tick positions (the first and last are the domain). */
-export function squareAxes(points: readonly PlanePoint[]): { x: number[]; y: number[] } {
+/**
+ * Equal spans on both axes around `points`, as tick positions (the first and last are the domain), about
+ * `divisions` ticks apart: fewer for a small plot, so its tick figures do not run into each other.
+ */
+export function squareAxes(points: readonly PlanePoint[], divisions = 6): { x: number[]; y: number[] } {
   const xs = points.map((p) => p.xNm);
   const ys = points.map((p) => p.yNm);
   const span = Math.max(Math.max(...xs) - Math.min(...xs), Math.max(...ys) - Math.min(...ys)) || 1;
-  const step = niceStep(span / 6);
+  const step = niceStep(span / divisions);
   const snap = (lo: number, hi: number) => [Math.floor((lo - span * 0.04) / step), Math.ceil((hi + span * 0.04) / step)];
   const [x0, x1] = snap(Math.min(...xs), Math.max(...xs));
   const [y0, y1] = snap(Math.min(...ys), Math.max(...ys));

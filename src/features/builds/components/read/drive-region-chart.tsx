@@ -6,7 +6,8 @@ import { UplotChart } from '@/components/charts/uplot-chart.tsx';
 /** A small plot of the positions a saved drive matrix reaches within its limits, with the rest position (x₀, y₀). */
 export function DriveRegionChart({ region, rest }: { region: readonly PlanePoint[]; rest: PlanePoint }) {
   const chart = useMemo(() => {
-    const axes = squareAxes([...region, rest]);
+    // A small plot beside the matrix: two divisions keep its tick figures apart.
+    const axes = squareAxes([...region, rest], 2);
     return {
       x: { label: 'x (nm)', domain: tickDomain(axes.x), ticks: axes.x },
       y: { label: 'y (nm)', domain: tickDomain(axes.y), ticks: axes.y },
