@@ -8,11 +8,10 @@ export default defineConfig({
   resolve: { alias },
   test: {
     env: { TZ: 'UTC' },
-    // Projects of one `sequence.groupOrder` run together and must agree on maxWorkers. unit and api run
-    // first, two files at a time (vitest's default is cores − 1, one worker on a two-core machine); then
-    // browser, then faults, one file at a time (`npm test` runs the phases as separate vitest processes,
-    // scripts/test.mjs). Each api worker has its own database copy
-    // (tests/support/worker-database.ts).
+    // Projects of one `sequence.groupOrder` run together and must agree on maxWorkers. Every project runs two
+    // files at a time (vitest's default is cores − 1, one worker on a two-core machine): unit and api first,
+    // then browser, then faults (`npm test` runs the phases as separate vitest processes, scripts/test.mjs).
+    // Each api and browser worker has its own database copy (tests/support/worker-database.ts).
     maxWorkers: 2,
     projects: [
       {
@@ -43,15 +42,15 @@ export default defineConfig({
       },
       {
         resolve: { alias },
-        // Database and process faults (killed servers, a MariaDB that goes away): slow, and each file
-        // owns its processes, so they run one file at a time in their own project.
+        // Database and process faults (killed servers, a MariaDB that goes away): slow and mostly waiting. Each file
+        // owns its processes (a private MariaDB, its own ports and data folder), so two run side by side.
         test: {
           name: 'faults',
           include: ['tests/faults/**/*.test.ts'],
           environment: 'node',
           testTimeout: 60000,
           hookTimeout: 60000,
-          maxWorkers: 1,
+          maxWorkers: 2,
           sequence: { groupOrder: 2 },
         },
       },
@@ -61,12 +60,15 @@ export default defineConfig({
           name: 'browser',
           include: ['tests/browser/**/*.test.ts'],
           environment: 'node',
-          setupFiles: ['tests/support/browser-failures.ts'],
-          // Each file starts its own live app (tests/support/browser.ts); one module cache per worker.
+          // Each worker has its own database copy with the demo seeded once, and its own uploads folder.
+          env: { TEST_WORKER_DATABASE_GROUP: 'browser' },
+          setupFiles: ['tests/support/worker-database.ts', 'tests/support/browser-failures.ts'],
+          // Each file starts its own live app (tests/support/browser.ts); one module cache per worker. Two files run
+          // side by side: a journey mostly waits on chromium and the app.
           isolate: false,
           testTimeout: 60000,
           hookTimeout: 60000,
-          maxWorkers: 1,
+          maxWorkers: 2,
           sequence: { groupOrder: 1 },
         },
       },

@@ -7,7 +7,8 @@ import { join } from 'node:path';
 import { createServer } from 'node:net';
 import { ensureDebianPackages, ensureNodeModules } from './lib/setup.mjs';
 import { initDataDir, startServer, ensureDatabase, stopServer, copyDatabase } from './lib/mariadb.mjs';
-import { clientBuildIsStale } from './lib/paths.mjs';
+import { clientBuildIsStale, serverBuildIsStale } from './lib/paths.mjs';
+import { buildServer } from './build-server.mjs';
 
 ensureDebianPackages({ chromium: true });
 ensureNodeModules();
@@ -29,8 +30,8 @@ try {
 } catch {
   /* use tmpdir */
 }
-/** Workers of the api project, as many as `maxWorkers` in vitest.config.ts; one database copy each. */
-const API_WORKERS = 2;
+/** Workers of the api and browser projects, as many as `maxWorkers` in vitest.config.ts; one database copy each. */
+const WORKERS = 2;
 const dir = mkdtempSync(join(base, 'scanwright-test-'));
 let mariadb = null;
 let status;
@@ -55,6 +56,20 @@ const runAsync = (cmd, args, env) =>
   });
 
 try {
+  const extra = process.argv.slice(2);
+  const projects = extra.flatMap((a, i) => (a === '--project' ? [extra[i + 1]] : a.startsWith('--project=') ? [a.slice(10)] : []));
+  const needsClient = projects.length === 0 || projects.includes('browser');
+  const needsServer = projects.length === 0 || projects.includes('faults');
+  // The client for the browser tests; the compiled server for the fault tests that run `npm start` and the systemd
+  // unit's `npm run serve`, built once here so two fault files never build it at the same time.
+  // Both run while the database starts and is migrated and copied, and are awaited before any test runs.
+  const buildClient = async () => {
+    if (needsServer && serverBuildIsStale()) await buildServer();
+    if (!needsClient || !clientBuildIsStale()) return;
+    if ((await runAsync('npx', ['vite', 'build', '--logLevel', 'warn'], process.env)) !== 0) throw new Error('client build failed');
+  };
+  const builds = buildClient();
+  builds.catch(() => undefined);
   const port = await freePort();
   initDataDir(dir);
   mariadb = await startServer(dir, port, { fast: true });
@@ -70,42 +85,38 @@ try {
     DB_USER: db.user,
     DB_PASSWORD: db.password,
     MARIADB_SOCKET: join(dir, 'mysqld.sock'),
-    // Live-app browser tests share one uploads folder (demo pictures seeded once); removed with the run.
+    // Live-app browser tests: one uploads folder per worker under this one (demo pictures); removed with the run.
     TEST_UPLOADS_DIR: join(dir, 'uploads'),
     SESSION_SECRET: 'test-session-secret-test-session-secret',
-    TEST_WORKER_DATABASES: String(API_WORKERS),
+    TEST_WORKER_DATABASES: String(WORKERS),
   };
   const migrate = spawnSync(process.execPath, ['--import', 'tsx', 'server/cli/migrate.ts'], { stdio: 'inherit', env });
   if (migrate.status !== 0) throw new Error('migrations failed');
-  // API test files run two at a time, each worker on its own copy of the migrated database
+  // API and browser test files run two at a time, each worker on its own copy of the migrated database
   // (tests/support/worker-database.ts), so one file's app never sees another's rows, mails or jobs.
-  for (let worker = 1; worker <= API_WORKERS; worker++) {
-    ensureDatabase(dir, { ...db, database: `${db.database}_${worker}` });
-    copyDatabase(dir, db.database, `${db.database}_${worker}`);
-  }
-  const extra = process.argv.slice(2);
-  const projects = extra.flatMap((a, i) => (a === '--project' ? [extra[i + 1]] : a.startsWith('--project=') ? [a.slice(10)] : []));
-  const needsClient = projects.length === 0 || projects.includes('browser');
+  for (const stem of [db.database, `${db.database}_browser`])
+    for (let worker = 1; worker <= WORKERS; worker++) {
+      ensureDatabase(dir, { ...db, database: `${stem}_${worker}` });
+      copyDatabase(dir, db.database, `${stem}_${worker}`);
+    }
   mkdirSync('test-output', { recursive: true });
   const vitest = (args, json) =>
     runAsync('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${json}`, ...args], env);
-  const buildClient = async () => {
-    if (!needsClient || !clientBuildIsStale()) return;
-    if ((await runAsync('npx', ['vite', 'build', '--logLevel', 'warn'], env)) !== 0) throw new Error('client build failed');
-  };
   const reports = [];
   if (extra.length > 0) {
-    await buildClient();
+    await builds;
     reports.push('test-output/vitest.json');
     rmSync(reports[0], { force: true });
     status = await vitest(extra, reports[0]);
   } else {
-    // A full run, in three phases (timed in DEVELOPERS.md): the client build for the browser tests; then
+    // A full run, in three phases (timed in DEVELOPERS.md), the client and server builds running from the start; then
     // 1. unit and api, two files at a time, each worker on its own copy of the migrated database;
-    // 2. browser, one file at a time, while the conventions are checked one after another: lint with the import
-    //    boundaries and cycles, formatting, dead code (knip) and the types of client, server, shared code and
-    //    tests (a browser file mostly waits on chromium and the live app). Any failure fails the run;
-    // 3. faults alone: they time recoveries of killed processes and must not compete for the cores.
+    // 2. browser, two files at a time (each worker on its own database copy), while the conventions are checked
+    //    one after another: lint with the import boundaries and cycles, formatting, dead code (knip) and the types
+    //    of client, server, shared code and tests (a browser file mostly waits on chromium and the live app). Any
+    //    failure fails the run;
+    // 3. faults, two files at a time: they time recoveries of killed processes, so they do not share the cores
+    //    with the browser phase.
     reports.push('test-output/vitest-unit-api.json', 'test-output/vitest-browser.json', 'test-output/vitest-faults.json');
     for (const f of reports) rmSync(f, { force: true });
     const checks = [
@@ -114,7 +125,8 @@ try {
       ['format', ['prettier', '--check', '.', '--log-level', 'warn']],
       ['dead code', ['knip', '--no-progress']],
     ];
-    await buildClient();
+    // api tests serve dist/client when it exists, so they start after the build.
+    await builds;
     const first = await vitest(['--project', 'unit', '--project', 'api'], reports[0]);
     const checking = (async () => {
       const codes = [];

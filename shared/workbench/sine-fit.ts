@@ -1,5 +1,7 @@
 // Sine fit of a recorded drive and displacement (a scope or data-acquisition export of a sine-driven
 // actuator): gain = displacement amplitude ÷ drive amplitude, and the phase lag of the displacement.
+// The steps live beside this file: sine-record.ts (checking and preparing the samples, the first frequency)
+// and sine-least-squares.ts (the three- and four-parameter least squares, amplitudes and phases).
 //
 // Sources and choices:
 // - Model y(t) = A·cos ωt + B·sin ωt + C per channel. Three-parameter fit at a known ω: linear least
@@ -25,9 +27,10 @@
 //   of the two amplitudes add in quadrature (independent channels); the displacement channel is fitted
 //   at the drive's frequency, taken as known.
 import type { SineFitInput } from '../schemas/sine-fit.ts';
-import { toNm, toVolts } from '../units.ts';
-import { MIN_SINE_SAMPLES, SineFitError } from './sine-fit-error.ts';
+import { SineFitError } from './sine-fit-error.ts';
 import { solveNormal } from './small-normal-solve.ts';
+import { crossingFrequencyHz, prepareSineRecord } from './sine-record.ts';
+import { fillTrig, fourParameterSystem, meanOf, polar, refineFrequency, sumSquaresAbout, threeParameterFit } from './sine-least-squares.ts';
 
 /**
  * Fewest drive periods a record must span: "about two" — below two periods the four-parameter fit
@@ -43,10 +46,6 @@ export const MIN_RECORD_PERIODS = 1.9;
  * σ ≈ R/4.2 [calc]: beyond that the record is noise with a tone in it, not a sine drive [practice].
  */
 export const MIN_EXPLAINED_FRACTION = 0.9;
-
-/** Gauss–Newton stops when a step moves the phase at the record's ends by less than this (rad) [practice]. */
-const PHASE_TOLERANCE_RAD = 1e-9;
-const MAX_ITERATIONS = 50;
 
 /** The fit of one record: both channels at one frequency, the gain and the phase lag, with standard uncertainties (k = 1). */
 export interface SineFit {
@@ -82,248 +81,6 @@ export interface SineFitOptions {
   maxSamples?: number;
 }
 
-interface Record {
-  n: number;
-  /** Time from the record's middle (s). */
-  t: Float64Array;
-  v: Float64Array;
-  x: Float64Array;
-  durationS: number;
-  halfSpanS: number;
-}
-
-function prepare(input: SineFitInput, maxSamples: number): Record {
-  const samples = input.samples;
-  const n = samples.length;
-  if (n < MIN_SINE_SAMPLES)
-    throw new SineFitError('too_few_samples', `A sine record needs at least ${MIN_SINE_SAMPLES} samples; this one has ${n}.`);
-  if (n > maxSamples)
-    throw new SineFitError('too_many_samples', `A sine record may have at most ${maxSamples} samples; this one has ${n}.`);
-  const t = new Float64Array(n);
-  const v = new Float64Array(n);
-  const x = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    const s = samples[i];
-    for (const field of ['timeS', 'volts', 'displacement'] as const) {
-      if (!Number.isFinite(s[field]))
-        throw new SineFitError('non_finite_value', `Sample ${i + 1} has no finite ${field}.`, { index: i, field });
-    }
-    if (i > 0 && !(s.timeS > samples[i - 1].timeS))
-      throw new SineFitError('times_not_increasing', `Times must increase from sample to sample; sample ${i + 1} does not.`, {
-        index: i,
-        field: 'timeS',
-      });
-    t[i] = s.timeS;
-    v[i] = toVolts(s.volts, input.voltageUnit);
-    x[i] = toNm(s.displacement, input.displacementUnit);
-  }
-  const t0 = t[0];
-  const t1 = t[n - 1];
-  const mid = t0 + (t1 - t0) / 2;
-  for (let i = 0; i < n; i++) t[i] = t[i] - mid;
-  return { n, t, v, x, durationS: t1 - t0, halfSpanS: (t1 - t0) / 2 };
-}
-
-function meanOf(y: Float64Array): number {
-  let s = 0;
-  for (let i = 0; i < y.length; i++) s += y[i];
-  return s / y.length;
-}
-
-function sumSquaresAbout(y: Float64Array, mean: number): number {
-  let s = 0;
-  for (let i = 0; i < y.length; i++) {
-    const d = y[i] - mean;
-    s += d * d;
-  }
-  return s;
-}
-
-/** Frequency from zero crossings with hysteresis (both directions pooled); null with fewer than two crossings of one kind. */
-function crossingFrequencyHz(rec: Record, mean: number, rms: number): number | null {
-  const { t, v, n } = rec;
-  const h = 0.5 * rms;
-  let state = 0;
-  let lastNonPos = -1;
-  let lastNonNeg = -1;
-  const first = [Number.NaN, Number.NaN];
-  const last = [Number.NaN, Number.NaN];
-  const count = [0, 0];
-  const cross = (k: number, dir: 0 | 1) => {
-    const y0 = v[k] - mean;
-    const y1 = v[k + 1] - mean;
-    const tc = t[k] + ((t[k + 1] - t[k]) * -y0) / (y1 - y0);
-    if (count[dir] === 0) first[dir] = tc;
-    last[dir] = tc;
-    count[dir]++;
-  };
-  for (let i = 0; i < n; i++) {
-    const y = v[i] - mean;
-    if (y <= 0) lastNonPos = i;
-    if (y >= 0) lastNonNeg = i;
-    if (y > h) {
-      if (state === -1 && lastNonPos >= 0) cross(lastNonPos, 0);
-      state = 1;
-    } else if (y < -h) {
-      if (state === 1 && lastNonNeg >= 0) cross(lastNonNeg, 1);
-      state = -1;
-    }
-  }
-  let intervals = 0;
-  let span = 0;
-  for (const d of [0, 1]) {
-    if (count[d] >= 2) {
-      intervals += count[d] - 1;
-      span += last[d] - first[d];
-    }
-  }
-  return intervals > 0 && span > 0 ? intervals / span : null;
-}
-
-function fillTrig(t: Float64Array, omega: number, c: Float64Array, s: Float64Array): void {
-  for (let i = 0; i < t.length; i++) {
-    const p = omega * t[i];
-    c[i] = Math.cos(p);
-    s[i] = Math.sin(p);
-  }
-}
-
-/** One channel's three-parameter fit: A, B, offset about `mean`, SSE and (XᵀX)⁻¹. */
-interface ChannelFit {
-  a: number;
-  b: number;
-  offset: number;
-  sse: number;
-  inverse: Float64Array;
-}
-
-const aliasing = () =>
-  new SineFitError(
-    'no_clear_sine',
-    'At this frequency the samples cannot tell a sine from an offset (every sample at nearly the same phase); check the frequency and the sampling rate.',
-  );
-
-function threeParameterFit(c: Float64Array, s: Float64Array, y: Float64Array, mean: number): ChannelFit {
-  let cc = 0;
-  let cs = 0;
-  let c1 = 0;
-  let ss = 0;
-  let s1 = 0;
-  let cy = 0;
-  let sy = 0;
-  let y1 = 0;
-  const n = y.length;
-  for (let i = 0; i < n; i++) {
-    const ci = c[i];
-    const si = s[i];
-    const yi = y[i] - mean;
-    cc += ci * ci;
-    cs += ci * si;
-    c1 += ci;
-    ss += si * si;
-    s1 += si;
-    cy += ci * yi;
-    sy += si * yi;
-    y1 += yi;
-  }
-  const solved = solveNormal(Float64Array.of(cc, cs, c1, cs, ss, s1, c1, s1, n), Float64Array.of(cy, sy, y1), 3);
-  if (!solved) throw aliasing();
-  const [a, b, k] = solved.x;
-  let sse = 0;
-  for (let i = 0; i < n; i++) {
-    const r = y[i] - mean - a * c[i] - b * s[i] - k;
-    sse += r * r;
-  }
-  return { a, b, offset: mean + k, sse, inverse: solved.inverse };
-}
-
-/** The 4×4 normal equations of the four-parameter model at ω, A, B (columns cos, sin, 1, ∂y/∂ω = t·(B·cos − A·sin)). */
-function fourParameterSystem(
-  t: Float64Array,
-  y: Float64Array,
-  mean: number,
-  omega: number,
-  a: number,
-  b: number,
-  trig?: readonly [Float64Array, Float64Array],
-): { m: Float64Array; r: Float64Array } {
-  let cc = 0;
-  let cs = 0;
-  let c1 = 0;
-  let cd = 0;
-  let ss = 0;
-  let s1 = 0;
-  let sd = 0;
-  let d1 = 0;
-  let dd = 0;
-  let cy = 0;
-  let sy = 0;
-  let y1 = 0;
-  let dy = 0;
-  const n = y.length;
-  for (let i = 0; i < n; i++) {
-    let ci: number;
-    let si: number;
-    if (trig) {
-      ci = trig[0][i];
-      si = trig[1][i];
-    } else {
-      const p = omega * t[i];
-      ci = Math.cos(p);
-      si = Math.sin(p);
-    }
-    const di = t[i] * (b * ci - a * si);
-    const yi = y[i] - mean;
-    cc += ci * ci;
-    cs += ci * si;
-    c1 += ci;
-    cd += ci * di;
-    ss += si * si;
-    s1 += si;
-    sd += si * di;
-    d1 += di;
-    dd += di * di;
-    cy += ci * yi;
-    sy += si * yi;
-    y1 += yi;
-    dy += di * yi;
-  }
-  return {
-    m: Float64Array.of(cc, cs, c1, cd, cs, ss, s1, sd, c1, s1, n, d1, cd, sd, d1, dd),
-    r: Float64Array.of(cy, sy, y1, dy),
-  };
-}
-
-/** Gauss–Newton refinement of ω from a three-parameter start; each step's size limited to a quarter period over the half-record. */
-function refineFrequency(
-  t: Float64Array,
-  y: Float64Array,
-  halfSpanS: number,
-  mean: number,
-  omega0: number,
-  start: ChannelFit,
-): { omega: number; iterations: number } {
-  let omega = omega0;
-  let a = start.a;
-  let b = start.b;
-  const maxStep = Math.PI / 2 / halfSpanS;
-  for (let it = 1; it <= MAX_ITERATIONS; it++) {
-    const { m, r } = fourParameterSystem(t, y, mean, omega, a, b);
-    const solved = solveNormal(m, r, 4);
-    if (!solved) throw aliasing();
-    a = solved.x[0];
-    b = solved.x[1];
-    const step = Math.max(-maxStep, Math.min(maxStep, solved.x[3]));
-    omega += step;
-    if (!(omega > 0) || !Number.isFinite(omega)) break;
-    if (Math.abs(step) * halfSpanS < PHASE_TOLERANCE_RAD) return { omega, iterations: it };
-  }
-  throw new SineFitError(
-    'no_clear_sine',
-    'The drive frequency did not settle in the four-parameter fit: the drive may not be a sine. Enter the drive frequency if you know it.',
-  );
-}
-
 const TWO_PI = 2 * Math.PI;
 const DEG = 180 / Math.PI;
 
@@ -333,31 +90,13 @@ export function wrapDegrees(deg: number): number {
   return w === -180 ? 180 : w;
 }
 
-/** Amplitude, phase and their standard uncertainties from A, B and their covariance (σ²·inverse, rows/cols 0 and 1). */
-function polar(fit: ChannelFit, sigma2: number, inverse: Float64Array, size: number) {
-  const { a, b } = fit;
-  const vaa = sigma2 * inverse[0];
-  const vbb = sigma2 * inverse[size + 1];
-  const vab = sigma2 * inverse[1];
-  const r2 = a * a + b * b;
-  const amplitude = Math.sqrt(r2);
-  const ampVar = r2 > 0 ? (a * a * vaa + b * b * vbb + 2 * a * b * vab) / r2 : Math.max(vaa, vbb);
-  const phaseVar = r2 > 0 ? (b * b * vaa + a * a * vbb - 2 * a * b * vab) / (r2 * r2) : 0;
-  return {
-    amplitude,
-    amplitudeStdUnc: Math.sqrt(Math.max(0, ampVar)),
-    phase: Math.atan2(a, b),
-    phaseStdUnc: Math.sqrt(Math.max(0, phaseVar)),
-  };
-}
-
 /**
  * Fits the drive (volts) with the three-parameter fit at the given frequency, or the four-parameter fit
  * when none is given, then the displacement at the same frequency; refuses records it cannot use with a
  * SineFitError (see sine-fit-error.ts).
  */
 export function fitSineRecord(input: SineFitInput, options?: SineFitOptions): SineFit {
-  const rec = prepare(input, options?.maxSamples ?? Number.POSITIVE_INFINITY);
+  const rec = prepareSineRecord(input, options?.maxSamples ?? Number.POSITIVE_INFINITY);
   const { n } = rec;
   const vMean = meanOf(rec.v);
   const vSst = sumSquaresAbout(rec.v, vMean);

@@ -2,7 +2,7 @@ import { describe, expect, test } from 'vitest';
 import { createRequire } from 'node:module';
 import type { Page } from 'playwright-core';
 import type { AxeResults, RunOptions } from 'axe-core';
-import { journey, SCREENSHOTS } from '../support/browser.ts';
+import { journey, snapshot } from '../support/browser.ts';
 import { Build } from '../../server/models/build.model.ts';
 import { Part } from '../../server/models/part.model.ts';
 import { Listing } from '../../server/models/listing.model.ts';
@@ -97,7 +97,7 @@ describe('journey: axe-core finds no accessibility violations on the main pages'
       .first()
       .waitFor();
     const report = await audit(page, j.live.baseUrl, [edit, '/account', '/inbox', '/builds/mine']);
-    await page.screenshot({ path: `${SCREENSHOTS}/accessibility-inbox.png`, fullPage: true });
+    await snapshot(page, 'accessibility-inbox');
     expect(report).toEqual({});
     expect(j.errors).toEqual([]);
   });

@@ -1,5 +1,5 @@
 import { beforeAll, describe, expect, test } from 'vitest';
-import { journey, SCREENSHOTS } from '../support/browser.ts';
+import { journey, snapshot } from '../support/browser.ts';
 import { createUser } from '../support/factories.ts';
 
 describe('journey: a maker makes a rig token, copies it once and revokes it', () => {
@@ -32,7 +32,7 @@ describe('journey: a maker makes a rig token, copies it once and revokes it', ()
     await section.getByText('Copied to the clipboard.').waitFor();
     expect(await page.evaluate(() => navigator.clipboard.readText())).toBe(secret);
     await section.getByRole('listitem').filter({ hasText: name }).getByText('never used').waitFor();
-    await section.screenshot({ path: `${SCREENSHOTS}/account-rig-token-created-1280.png` });
+    await snapshot(section, 'account-rig-token-created-1280');
 
     const asRig = () => fetch(`${live.baseUrl}/api/account/settings`, { headers: { Authorization: `Bearer ${secret}` } });
     expect((await asRig()).status).toBe(200);
@@ -47,7 +47,7 @@ describe('journey: a maker makes a rig token, copies it once and revokes it', ()
     expect(await page.content()).not.toContain(secret.slice(4));
     await page.setViewportSize({ width: 390, height: 800 });
     expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
-    await section.screenshot({ path: `${SCREENSHOTS}/account-rig-tokens-390.png` });
+    await snapshot(section, 'account-rig-tokens-390');
     await page.setViewportSize({ width: 1280, height: 860 });
 
     await section.getByRole('button', { name: `Revoke ${name}` }).click();

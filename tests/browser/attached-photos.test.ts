@@ -5,7 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import type { Page } from 'playwright-core';
-import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp, pickListingPart } from '../support/browser.ts';
+import { launchBrowser, startLiveApp, snapshot, type LiveApp, pickListingPart } from '../support/browser.ts';
 
 const DISC = 'Brass buzzer disc 27 mm';
 /** A maker of this run only, so the part and listing below are ours alone in the shared database. */
@@ -90,7 +90,7 @@ describe('journey: photos on registry parts and exchange listings', () => {
     await grid.getByRole('img', { name: PART_ALT }).waitFor();
     await grid.getByRole('img', { name: SPARE_ALT }).waitFor();
     expect(await photos.getByText('No photos of this part yet.').count()).toBe(0);
-    await page.screenshot({ path: `${SCREENSHOTS}/part-photos-1280.png`, fullPage: true });
+    await snapshot(page, 'part-photos-1280');
 
     await grid.getByRole('button', { name: PART_ALT }).click();
     const lightbox = page.getByRole('dialog', { name: 'Photo 1 of 2' });
@@ -124,7 +124,7 @@ describe('journey: photos on registry parts and exchange listings', () => {
     await page.reload();
     await grid.getByRole('img', { name: PART_ALT }).waitFor();
     expect(await noSideways(page)).toBe(true);
-    await page.screenshot({ path: `${SCREENSHOTS}/part-photos-owner-390.png`, fullPage: true });
+    await snapshot(page, 'part-photos-owner-390');
     await page.setViewportSize({ width: 1280, height: 860 });
     expect(errors).toEqual([]);
   });
@@ -152,12 +152,12 @@ describe('journey: photos on registry parts and exchange listings', () => {
     await page.getByRole('list', { name: 'Photos of this listing' }).getByRole('img', { name: LISTING_ALT }).waitFor();
     await manager.getByRole('list', { name: 'Photos you can change' }).getByRole('img', { name: LISTING_ALT }).waitFor();
     expect(await page.getByText('No photos yet: a drawing of a buzzer disc.').count()).toBe(0);
-    await page.screenshot({ path: `${SCREENSHOTS}/listing-photos-1280.png`, fullPage: true });
+    await snapshot(page, 'listing-photos-1280');
 
     await page.goto(`${live.baseUrl}/exchange?region=${encodeURIComponent(REGION)}`);
     const card = page.getByRole('article').filter({ hasText: REGION });
     await card.getByRole('img', { name: LISTING_ALT }).waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/exchange-card-photo-1280.png`, fullPage: true });
+    await snapshot(page, 'exchange-card-photo-1280');
 
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByRole('link', { name: 'Sign in', exact: true }).first().waitFor();
@@ -171,7 +171,7 @@ describe('journey: photos on registry parts and exchange listings', () => {
     await page.reload();
     await page.getByRole('list', { name: 'Photos of this listing' }).getByRole('img', { name: LISTING_ALT }).waitFor();
     expect(await noSideways(page)).toBe(true);
-    await page.screenshot({ path: `${SCREENSHOTS}/listing-photos-visitor-390.png`, fullPage: true });
+    await snapshot(page, 'listing-photos-visitor-390');
     await page.setViewportSize({ width: 1280, height: 860 });
     expect(errors).toEqual([]);
   });

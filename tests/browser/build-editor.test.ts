@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import type { Page } from 'playwright-core';
-import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
+import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
 import { Build } from '../../server/models/build.model.ts';
 import { DEMO_PARTS } from '../../server/db/seed/demo-parts.ts';
 
@@ -69,7 +69,7 @@ describe('journey: a maker writes a build and submits it for review', () => {
       .getByRole('region', { name: 'Write-up as readers see it' })
       .getByRole('heading', { name: 'Two cartridge bars in a V.' })
       .waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/build-new-1280.png`, fullPage: true });
+    await snapshot(page, 'build-new-1280');
     await page.getByRole('button', { name: 'Create draft' }).click();
     await page.waitForURL(/\/builds\/\d+\/edit$/);
     await page.getByRole('heading', { level: 1, name: TITLE }).waitFor();
@@ -125,7 +125,7 @@ describe('journey: a maker writes a build and submits it for review', () => {
     await page.keyboard.press('Enter');
     await gallery.getByRole('img').nth(1).and(page.getByAltText(second!)).waitFor();
     expect(await page.evaluate(() => document.activeElement?.getAttribute('aria-label'))).toBe('Move photo 2 earlier');
-    await page.locator('#photos').screenshot({ path: `${SCREENSHOTS}/build-editor-photos-1280.png` });
+    await snapshot(page.locator('#photos'), 'build-editor-photos-1280');
 
     // An actuator from the parts registry; 60 V trips the IEC 61010-1 caution (above 42.4 V peak).
     await page.getByRole('button', { name: 'Add an actuator' }).click();
@@ -155,21 +155,21 @@ describe('journey: a maker writes a build and submits it for review', () => {
     expect(await preview.textContent()).toMatch(/9[56]\.\d+ ± \d+\.\d+\s*nm\/V/);
     expect(await preview.textContent()).toMatch(/Hysteresis\d+(\.\d+)? % of span/);
     await preview.locator('[data-drawn-at]').first().waitFor();
-    await run.screenshot({ path: `${SCREENSHOTS}/build-editor-run-form-1280.png` });
+    await snapshot(run, 'build-editor-run-form-1280');
     await run.getByRole('button', { name: 'Save calibration run' }).click();
     await page.getByText('Stored fit, computed by Scanwright').waitFor();
     await page.getByText('Pending review').first().waitFor();
     expect(await page.getByRole('listitem', { name: /Calibration run of/ }).textContent()).toMatch(/9[56]\.\d+ ± .*nm\/V/);
-    await page.screenshot({ path: `${SCREENSHOTS}/build-editor-1280.png`, fullPage: true });
+    await snapshot(page, 'build-editor-1280');
 
     await page.setViewportSize({ width: 390, height: 844 });
     await page.getByRole('navigation', { name: 'Build editor sections' }).waitFor();
     expect(await noSideways(page)).toBe(true);
-    await page.screenshot({ path: `${SCREENSHOTS}/build-editor-390.png`, fullPage: true });
+    await snapshot(page, 'build-editor-390');
     await page.getByRole('button', { name: 'Add a calibration run to Z bender pair' }).click();
     await page.getByLabel('Drive, point 1').waitFor();
     expect(await noSideways(page)).toBe(true);
-    await page.getByRole('form', { name: 'New calibration run' }).screenshot({ path: `${SCREENSHOTS}/build-editor-run-form-390.png` });
+    await snapshot(page.getByRole('form', { name: 'New calibration run' }), 'build-editor-run-form-390');
     await page.getByRole('form', { name: 'New calibration run' }).getByRole('button', { name: 'Cancel' }).click();
     await page.setViewportSize({ width: 1280, height: 860 });
 
@@ -177,7 +177,7 @@ describe('journey: a maker writes a build and submits it for review', () => {
     await page.getByRole('button', { name: 'Submit for review' }).click();
     await page.getByRole('button', { name: 'Save details' }).waitFor({ state: 'detached' });
     await page.getByText('Pending review', { exact: true }).first().waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/build-editor-submitted-1280.png`, fullPage: true });
+    await snapshot(page, 'build-editor-submitted-1280');
     expect(errors).toEqual([]);
   });
 
@@ -191,6 +191,6 @@ describe('journey: a maker writes a build and submits it for review', () => {
     expect(await page.getByRole('button', { name: 'Save details' }).count()).toBe(0);
     await page.goto(`${live.baseUrl}/builds/${othersDraft!.id}/edit`);
     await page.getByText('No build to edit here').waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/build-editor-not-yours-1280.png` });
+    await snapshot(page, 'build-editor-not-yours-1280', { fullPage: false });
   });
 });

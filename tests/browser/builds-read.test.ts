@@ -3,7 +3,7 @@ import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
-import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
+import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
 import { signIn } from '../support/login.ts';
 import { jpeg } from '../support/images.ts';
 import { Build } from '../../server/models/build.model.ts';
@@ -68,7 +68,7 @@ describe('journey: reading builds', () => {
       '/auth/github?returnTo=%2Fbuilds%3Fkind%3Dtunnelling-microscope',
     );
     expect(await page.getByRole('list', { name: 'Measured gains' }).first().textContent()).toMatch(/nm\/V/);
-    await page.screenshot({ path: `${SCREENSHOTS}/builds-index-1280.png`, fullPage: true });
+    await snapshot(page, 'builds-index-1280');
 
     await page.getByLabel('Instrument kind').selectOption('force-microscope');
     await page.waitForURL(/\/builds\?kind=force-microscope$/);
@@ -107,7 +107,7 @@ describe('journey: reading builds', () => {
       await thumbs.first().click();
       const dialog = page.getByRole('dialog');
       await dialog.getByText(PHOTO_ALTS[0]!, { exact: true }).waitFor();
-      await page.screenshot({ path: `${SCREENSHOTS}/build-lightbox-1280.png` });
+      await snapshot(page, 'build-lightbox-1280', { fullPage: false });
       await page.keyboard.press('ArrowRight');
       await dialog.getByText(PHOTO_ALTS[1]!, { exact: true }).waitFor();
       await page.keyboard.press('Tab');
@@ -118,7 +118,7 @@ describe('journey: reading builds', () => {
       await dialog.waitFor({ state: 'detached' });
       expect(await thumbs.first().evaluate((b) => b === document.activeElement)).toBe(true);
     }
-    await page.screenshot({ path: `${SCREENSHOTS}/build-page-1280.png`, fullPage: true });
+    await snapshot(page, 'build-page-1280');
     expect(errors).toEqual([]);
   });
 
@@ -139,7 +139,7 @@ describe('journey: reading builds', () => {
     await page.goto(`${live.baseUrl}/builds?kind=force-microscope`);
     await page.getByRole('link', { name: AFM }).waitFor();
     expect(await noSideways(page)).toBe(true);
-    await page.screenshot({ path: `${SCREENSHOTS}/builds-index-390.png`, fullPage: true });
+    await snapshot(page, 'builds-index-390');
     await page.goto(`${live.baseUrl}/builds/${afmId}`);
     const xBender = page.getByRole('article', { name: /^X bender/ });
     await xBender
@@ -150,7 +150,7 @@ describe('journey: reading builds', () => {
     expect(await xBender.getByRole('radio', { name: /^Plot the run of/ }).count()).toBe(2);
     expect(await xBender.getByText(/^Nonlinearity$/).count()).toBe(2);
     expect(await noSideways(page)).toBe(true);
-    await page.screenshot({ path: `${SCREENSHOTS}/build-page-390.png`, fullPage: true });
+    await snapshot(page, 'build-page-390');
     await page.setViewportSize({ width: 1280, height: 860 });
   });
 
@@ -167,10 +167,10 @@ describe('journey: reading builds', () => {
       .getByRole('listitem')
       .filter({ has: page.getByRole('link', { name: 'My first tunnelling microscope', exact: true }) });
     await draft.getByText('Draft', { exact: true }).waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/my-builds-1280.png`, fullPage: true });
+    await snapshot(page, 'my-builds-1280');
     await page.setViewportSize({ width: 390, height: 844 });
     expect(await noSideways(page)).toBe(true);
-    await page.screenshot({ path: `${SCREENSHOTS}/my-builds-390.png`, fullPage: true });
+    await snapshot(page, 'my-builds-390');
     await page.setViewportSize({ width: 1280, height: 860 });
 
     await draft.getByRole('link', { name: 'My first tunnelling microscope', exact: true }).click();
@@ -193,6 +193,6 @@ describe('journey: reading builds', () => {
     await returned.getByText('Returned with notes').waitFor();
     await returned.getByText(/Please add at least one photo/).waitFor();
     await page.getByText('edited since review').waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/my-builds-returned-1280.png`, fullPage: true });
+    await snapshot(page, 'my-builds-returned-1280');
   });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { journey, SCREENSHOTS } from '../support/browser.ts';
+import { journey, snapshot } from '../support/browser.ts';
 import { Build } from '../../server/models/build.model.ts';
 import { Part } from '../../server/models/part.model.ts';
 import { DEMO_PARTS } from '../../server/db/seed/demo-parts.ts';
@@ -43,7 +43,7 @@ describe('journey: every chart has its figures in words', () => {
       for (const size of sizes) expect(size, path).toBe('14px');
     }
     expect(charts).toBeGreaterThanOrEqual(pages.length);
-    await page.screenshot({ path: `${SCREENSHOTS}/chart-figures-sine-fit-1366.png`, fullPage: true });
+    await snapshot(page, 'chart-figures-sine-fit-1366');
     expect(j.errors).toEqual([]);
   });
 });

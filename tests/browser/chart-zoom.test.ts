@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
-import { journey, SCREENSHOTS } from '../support/browser.ts';
+import { journey, snapshot } from '../support/browser.ts';
 import { dragAcross, xRange } from '../../scripts/lib/chart-gestures.ts';
 import { syntheticLoopCsv } from '../../shared/stats/synthetic-loop.ts';
 
@@ -54,7 +54,7 @@ describe('journey: a visitor zooms into a long calibration record on the fit pag
     await expect.poll(async () => (await xRange(plot))[0]).toBeGreaterThan(zoomed[0]);
     const panned = await xRange(plot);
     expect(panned[1] - panned[0]).toBeCloseTo(zoomed[1] - zoomed[0], 6);
-    await page.screenshot({ path: `${SCREENSHOTS}/chart-zoom-panned.png`, fullPage: false });
+    await snapshot(page, 'chart-zoom-panned', { fullPage: false });
 
     // "Reset zoom" brings the whole range back; so does a double-click after another zoom.
     await reset.click();

@@ -5,7 +5,7 @@
 import { randomBytes } from 'node:crypto';
 import { describe, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
-import { journey, SCREENSHOTS } from '../support/browser.ts';
+import { journey, snapshot } from '../support/browser.ts';
 import { createBuildRow, createPart, createRunRow, createUser } from '../support/factories.ts';
 
 /** Sign in as this account through the local OAuth stand-in, landing on `path`. */
@@ -41,7 +41,7 @@ describe('journey: talking around a build', () => {
     await page.getByLabel('Your comment (Markdown)').fill('Which **clamp** holds the bar at the root?');
     await page.getByRole('button', { name: 'Post comment' }).click();
     await page.getByRole('listitem').filter({ hasText: 'Which clamp holds the bar at the root?' }).waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/conversation-fan-1280.png`, fullPage: true });
+    await snapshot(page, 'conversation-fan-1280');
 
     // The owner sees the badge, opens the notification and answers.
     await as(page, base, owner.login, '/');
@@ -75,7 +75,7 @@ describe('journey: talking around a build', () => {
     await thread.getByLabel('Write to the moderators (Markdown)').fill('A **dial indicator**, 1 µm per division; now in the run notes.');
     await thread.getByRole('button', { name: 'Send to the thread' }).click();
     await thread.getByText('1 µm per division').waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/conversation-maker-thread-1280.png`, fullPage: true });
+    await snapshot(page, 'conversation-maker-thread-1280');
     await page.getByLabel('Write-up', { exact: true }).fill('The dial indicator sits on a magnetic base beside the clamp.');
     await page.getByRole('button', { name: 'Save details' }).click();
     await page.getByText('Details saved.').waitFor();
@@ -89,7 +89,7 @@ describe('journey: talking around a build', () => {
     await panel.getByRole('heading', { level: 2, name: submitted.title }).waitFor();
     await panel.locator('#review-thread').getByText('1 µm per division').waitFor();
     await panel.getByLabel('Write-up changes').locator('ins', { hasText: 'magnetic base' }).first().waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/conversation-desk-1280.png`, fullPage: true });
+    await snapshot(page, 'conversation-desk-1280');
     await panel.getByRole('button', { name: 'Publish and accept the runs without flags…' }).click();
     const preview = panel.getByRole('region', { name: 'Preview of the combined decision' });
     await preview.getByText(/accept this run, which carries no flag/).waitFor();
@@ -104,7 +104,7 @@ describe('journey: talking around a build', () => {
     await page.getByRole('link', { name: new RegExp(`${owner.login} published a new build: “${submitted.title}”`) }).waitFor();
     await page.getByRole('link', { name: new RegExp(`A new run counts for ${part.name}`) }).waitFor();
     await page.setViewportSize({ width: 390, height: 844 });
-    await page.screenshot({ path: `${SCREENSHOTS}/conversation-fan-notifications-390.png`, fullPage: true });
+    await snapshot(page, 'conversation-fan-notifications-390');
     expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
     await page.setViewportSize({ width: 1280, height: 860 });
     expect(j.errors).toEqual([]);

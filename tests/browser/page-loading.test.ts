@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
-import { journey, SCREENSHOTS } from '../support/browser.ts';
+import { journey, snapshot } from '../support/browser.ts';
 import { createBuildRow, createUser } from '../support/factories.ts';
 
 /** Width and height of every card in the builds grid, rounded to whole pixels. */
@@ -36,7 +36,7 @@ describe('journey: loading pages and the builds grid', () => {
     expect(box).toMatchObject({ y: 0, x: 0, width: await page.evaluate(() => window.innerWidth) });
     expect(box.height).toBeGreaterThan(0);
     expect(box.height).toBeLessThanOrEqual(4);
-    await page.screenshot({ path: `${SCREENSHOTS}/route-progress-1366.png` });
+    await snapshot(page, 'route-progress-1366', { fullPage: false });
     release();
     await page.getByRole('table').waitFor();
     await bar.waitFor({ state: 'detached' });
@@ -58,7 +58,7 @@ describe('journey: loading pages and the builds grid', () => {
       const sizes = await cardSizes(page);
       expect(sizes.length).toBeGreaterThanOrEqual(4);
       expect(new Set(sizes)).toEqual(new Set([sizes[0]]));
-      await page.screenshot({ path: `${SCREENSHOTS}/builds-grid-${width}.png`, fullPage: true });
+      await snapshot(page, `builds-grid-${width}`);
     }
     expect(j.errors).toEqual([]);
   });

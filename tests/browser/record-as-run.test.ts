@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { journey, SCREENSHOTS } from '../support/browser.ts';
+import { journey, snapshot } from '../support/browser.ts';
 import { createBuildRow, createUser } from '../support/factories.ts';
 import { CalibrationRun } from '../../server/models/calibration-run.model.ts';
 import { peakToPeakGain } from '../../shared/workbench/peak-to-peak.ts';
@@ -32,7 +32,7 @@ describe('journey: a maker turns an indicator reading into a stored run from the
     await form.getByLabel('Actuator').locator('option', { hasText: 'Y bender' }).waitFor({ state: 'attached' });
     await form.getByLabel('Drive frequency (Hz)').fill('2');
     await form.getByLabel('Measured on').fill('2026-11-28');
-    await page.screenshot({ path: `${SCREENSHOTS}/record-as-run-peak-to-peak-1366.png`, fullPage: true });
+    await snapshot(page, 'record-as-run-peak-to-peak-1366');
     await form.getByRole('button', { name: 'Record this run' }).click();
     await page.getByText(/Recorded: run of 28 Nov 2026 on Y bender/).waitFor();
 
@@ -52,7 +52,7 @@ describe('journey: a maker turns an indicator reading into a stored run from the
 
     await page.getByRole('link', { name: 'Open the build editor' }).click();
     await page.getByText('Peak-to-peak reading', { exact: false }).first().waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/record-as-run-editor-1366.png`, fullPage: true });
+    await snapshot(page, 'record-as-run-editor-1366');
     expect(j.errors).toEqual([]);
   });
 });

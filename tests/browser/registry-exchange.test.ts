@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
-import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp, pickListingPart } from '../support/browser.ts';
+import { launchBrowser, startLiveApp, snapshot, type LiveApp, pickListingPart } from '../support/browser.ts';
 import { DEMO_PARTS } from '../../server/db/seed/demo-parts.ts';
 import { DEMO_BUILDS } from '../../server/db/seed/demo-builds.ts';
 
@@ -48,7 +48,7 @@ describe('journey: parts registry and exchange', () => {
     await table.getByRole('link', { name: DISC }).waitFor();
     expect(await page.getByRole('link', { name: 'Propose a part' }).count()).toBe(1);
     expect(await page.getByRole('img', { name: /Where listed parts cluster/ }).count()).toBe(1);
-    await page.screenshot({ path: `${SCREENSHOTS}/parts-registry-1280.png`, fullPage: true });
+    await snapshot(page, 'parts-registry-1280');
 
     // The filter leaves the disc and the stack out only if their seeded gains lie outside it.
     for (const other of ['buzzer-27', 'stack-5x5']) expect(Math.max(...acceptedGains(other))).toBeLessThan(GAIN_FROM);
@@ -70,7 +70,9 @@ describe('journey: parts registry and exchange', () => {
     await table.getByRole('button', { name: /Median gain/ }).click();
     await page.waitForURL(/sort=-gain/);
     await table.locator('th[aria-sort="descending"]', { hasText: 'Median gain' }).waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/parts-registry-filtered-1280.png`, fullPage: true });
+    // The rows are re-sorted when the new page arrives; until then the old rows stay, dimmed and marked busy.
+    await page.locator('[role="region"][aria-label="Parts"][aria-busy="false"]').waitFor();
+    await snapshot(page, 'parts-registry-filtered-1280');
 
     await table.getByRole('link', { name: BAR }).click();
     await page.getByRole('heading', { level: 1, name: BAR }).waitFor();
@@ -90,7 +92,7 @@ describe('journey: parts registry and exchange', () => {
     await dialog.getByRole('status').filter({ hasText: 'your report is with the moderators' }).waitFor();
     await page.keyboard.press('Escape');
     await dialog.waitFor({ state: 'hidden' });
-    await page.screenshot({ path: `${SCREENSHOTS}/part-page-1280.png`, fullPage: true });
+    await snapshot(page, 'part-page-1280');
 
     await page.getByRole('region', { name: 'On the exchange' }).getByRole('link', { name: '3 from marit-builds' }).click();
     await page.getByRole('heading', { level: 1, name: `3 × ${BAR}` }).waitFor();
@@ -98,7 +100,7 @@ describe('journey: parts registry and exchange', () => {
     await page.getByLabel('Message').fill(MESSAGE);
     await page.getByRole('button', { name: 'Send message' }).click();
     await page.getByRole('status').filter({ hasText: 'Sent.' }).waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/listing-message-sent-1280.png`, fullPage: true });
+    await snapshot(page, 'listing-message-sent-1280');
 
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByRole('link', { name: 'Sign in', exact: true }).first().waitFor();
@@ -108,7 +110,7 @@ describe('journey: parts registry and exchange', () => {
     const thread = page.getByRole('listitem').filter({ hasText: 'demo-maker' });
     await thread.getByText('1 unread').waitFor();
     expect(await thread.textContent()).toContain('Hello Marit');
-    await page.screenshot({ path: `${SCREENSHOTS}/inbox-1280.png`, fullPage: true });
+    await snapshot(page, 'inbox-1280');
 
     await thread.getByRole('link', { name: 'demo-maker' }).click();
     await page.getByRole('heading', { level: 1, name: 'Conversation with demo-maker' }).waitFor();
@@ -116,7 +118,7 @@ describe('journey: parts registry and exchange', () => {
     await page.getByLabel('Reply to demo-maker').fill('Yes, two are yours. I will post them on Monday.');
     await page.getByRole('button', { name: 'Send reply' }).click();
     await page.getByRole('list', { name: 'Messages' }).getByText('I will post them on Monday.').waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/inbox-thread-1280.png`, fullPage: true });
+    await snapshot(page, 'inbox-thread-1280');
     expect(errors).toEqual([]);
   });
 
@@ -130,7 +132,7 @@ describe('journey: parts registry and exchange', () => {
     await page.getByLabel('Wall thickness (mm)').fill('0.4');
     await page.getByLabel('Material family').selectOption('PZT-5H');
     await page.getByLabel('Safe voltage (V)').fill('120');
-    await page.screenshot({ path: `${SCREENSHOTS}/propose-part-1280.png`, fullPage: true });
+    await snapshot(page, 'propose-part-1280');
     await page.getByRole('button', { name: 'Propose this part' }).click();
     await page.getByRole('status').filter({ hasText: 'Proposed: waiting for a moderator' }).waitFor();
     await page.getByRole('link', { name: 'Open its page' }).click();
@@ -150,12 +152,12 @@ describe('journey: parts registry and exchange', () => {
     await page.getByLabel('Currency').fill('eur');
     await page.getByLabel('Region').fill('Hamburg');
     await page.getByLabel('Ships to').fill('EU');
-    await page.screenshot({ path: `${SCREENSHOTS}/listing-new-1280.png`, fullPage: true });
+    await snapshot(page, 'listing-new-1280');
     await page.getByRole('button', { name: 'Post listing' }).click();
     await page.getByRole('heading', { level: 1, name: `4 × ${DISC}` }).waitFor();
     expect(await page.getByRole('region', { name: 'Your listing' }).getByRole('button', { name: 'Mark reserved' }).count()).toBe(1);
     await page.getByText('1.50 EUR').waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/listing-own-1280.png`, fullPage: true });
+    await snapshot(page, 'listing-own-1280');
     expect(errors).toEqual([]);
   });
 
@@ -168,12 +170,12 @@ describe('journey: parts registry and exchange', () => {
     const table = page.getByRole('table');
     expect(await table.evaluate((el) => el.scrollWidth <= el.clientWidth)).toBe(true);
     expect(await table.getByRole('row', { name: BAR }).innerText()).toMatch(/\d+(\.\d+)? nm\/V/);
-    await page.screenshot({ path: `${SCREENSHOTS}/parts-registry-390.png`, fullPage: true });
+    await snapshot(page, 'parts-registry-390');
 
     await page.getByRole('table').getByRole('link', { name: BAR }).click();
     await page.getByTestId('part-runs-plot').locator('[data-drawn-at]').waitFor();
     expect(await noSideways(page)).toBe(true);
-    await page.screenshot({ path: `${SCREENSHOTS}/part-page-390.png`, fullPage: true });
+    await snapshot(page, 'part-page-390');
 
     await page.goto(`${live.baseUrl}/exchange`);
     await page.getByRole('link', { name: new RegExp(STACK) }).waitFor();
@@ -182,7 +184,7 @@ describe('journey: parts registry and exchange', () => {
     await page.getByRole('link', { name: new RegExp(STACK) }).waitFor({ state: 'detached' });
     await page.getByRole('link', { name: new RegExp(DISC) }).waitFor();
     expect(await noSideways(page)).toBe(true);
-    await page.screenshot({ path: `${SCREENSHOTS}/exchange-390.png`, fullPage: true });
+    await snapshot(page, 'exchange-390');
 
     await page.goto(`${live.baseUrl}/exchange/mine`);
     await page.getByRole('heading', { level: 1, name: 'My listings' }).waitFor();
@@ -191,13 +193,13 @@ describe('journey: parts registry and exchange', () => {
     await page.getByRole('button', { name: `Reopen: 3 × ${BAR}` }).waitFor();
     expect(await page.getByRole('listitem').filter({ hasText: BAR }).getByText('Reserved', { exact: true }).count()).toBe(1);
     expect(await noSideways(page)).toBe(true);
-    await page.screenshot({ path: `${SCREENSHOTS}/my-listings-390.png`, fullPage: true });
+    await snapshot(page, 'my-listings-390');
 
     await page.goto(`${live.baseUrl}/inbox`);
     await page.getByRole('link', { name: 'demo-maker' }).click();
     await page.getByRole('list', { name: 'Messages' }).waitFor();
     expect(await noSideways(page)).toBe(true);
-    await page.screenshot({ path: `${SCREENSHOTS}/inbox-thread-390.png`, fullPage: true });
+    await snapshot(page, 'inbox-thread-390');
     await page.setViewportSize({ width: 1280, height: 860 });
     expect(errors).toEqual([]);
   });

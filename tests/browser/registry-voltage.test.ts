@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import { randomBytes } from 'node:crypto';
-import { journey, SCREENSHOTS } from '../support/browser.ts';
+import { journey, snapshot } from '../support/browser.ts';
 import { createPart } from '../support/factories.ts';
 
 const TAG = `volt${randomBytes(3).toString('hex')}`;
@@ -23,7 +23,7 @@ describe('journey: the registry by voltage rating', () => {
     await table.getByRole('link', { name: `${TAG} bar 0` }).waitFor({ state: 'detached' });
     await page.getByText('2 parts with no stated rating are hidden').waitFor();
     expect(await table.getByRole('link', { name: new RegExp(`^${TAG} bar`) }).count()).toBe(2);
-    await page.screenshot({ path: `${SCREENSHOTS}/registry-rated-at-least-1280.png`, fullPage: true });
+    await snapshot(page, 'registry-rated-at-least-1280');
 
     await page.getByRole('button', { name: 'show them' }).click();
     await page.waitForURL(/unrated=include/);
@@ -39,7 +39,7 @@ describe('journey: the registry by voltage rating', () => {
     expect(await table.getByRole('link', { name: new RegExp(`^${TAG} bar`) }).count()).toBe(1);
 
     await page.setViewportSize({ width: 390, height: 844 });
-    await page.screenshot({ path: `${SCREENSHOTS}/registry-rated-at-least-390.png`, fullPage: true });
+    await snapshot(page, 'registry-rated-at-least-390');
     expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
     expect(j.errors).toEqual([]);
   });

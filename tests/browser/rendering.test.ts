@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
+import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
 import { createBuildRow, createUser } from '../support/factories.ts';
 import { LogEntry } from '../../server/models/log-entry.model.ts';
 
@@ -89,6 +89,6 @@ describe('journey: hostile Markdown renders inert under the Content-Security-Pol
     expect(await page.evaluate(() => (window as unknown as { __pwned?: unknown }).__pwned)).toBeUndefined();
     const seen = await page.evaluate(() => (window as unknown as { __violations?: string[] }).__violations ?? []);
     expect(seen.some((v) => v.startsWith('script-src'))).toBe(true);
-    await page.screenshot({ path: `${SCREENSHOTS}/hostile-markdown.png`, fullPage: true });
+    await snapshot(page, 'hostile-markdown');
   });
 });

@@ -2,7 +2,7 @@
 // points; the combined decision with its preview; and a resubmitted build showing what changed since review.
 import { randomBytes } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
+import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
 import { createBuildRow, createPart, createRunRow, createUser } from '../support/factories.ts';
 import { decideBuild } from '../../server/services/review.service.ts';
 import { toActor } from '../../server/services/user.service.ts';
@@ -84,7 +84,7 @@ describe('journey: a moderator decides a build with its runs from the builds tab
     const diff = panel.getByLabel('Write-up changes');
     await diff.locator('ins', { hasText: 'worm gear' }).first().waitFor();
     await diff.locator('del', { hasText: 'screw' }).first().waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/review-desk-resubmitted-1366.png`, fullPage: true });
+    await snapshot(page, 'review-desk-resubmitted-1366');
 
     // The combined build: each run with its ± and what it is, flags, plot and raw points.
     await rowOf(combined.title).click();
@@ -113,10 +113,10 @@ describe('journey: a moderator decides a build with its runs from the builds tab
     await preview.getByText(`publish the build “${combined.title}”`).waitFor();
     await preview.getByText(/accept these 2 runs, which carry no flag/).waitFor();
     await preview.getByText(/Loose stack .*\(.*Large hysteresis.*\)/).waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/review-desk-publish-preview-1366.png`, fullPage: true });
+    await snapshot(page, 'review-desk-publish-preview-1366');
     await page.setViewportSize({ width: 390, height: 844 });
     await preview.scrollIntoViewIfNeeded();
-    await page.screenshot({ path: `${SCREENSHOTS}/review-desk-publish-preview-390.png`, fullPage: true });
+    await snapshot(page, 'review-desk-publish-preview-390');
     await page.setViewportSize({ width: 1366, height: 900 });
     await preview.getByRole('button', { name: 'Confirm: publish, accept 2' }).click();
     await page
@@ -137,12 +137,12 @@ describe('journey: a moderator decides a build with its runs from the builds tab
     await rowOf(edited.title).click();
     await panel.getByRole('heading', { level: 3, name: 'Edited since review: what changed' }).waitFor();
     await panel.getByLabel('Write-up changes').locator('ins', { hasText: 'leaf spring' }).first().waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/review-desk-edited-1366.png`, fullPage: true });
+    await snapshot(page, 'review-desk-edited-1366');
 
     await page.goto(`${live.baseUrl}/review?queue=builds&item=${resubmitted.id}`);
     await panel.getByRole('blockquote').filter({ hasText: earlierNote }).waitFor();
     await page.setViewportSize({ width: 390, height: 844 });
-    await page.screenshot({ path: `${SCREENSHOTS}/review-desk-resubmitted-390.png`, fullPage: true });
+    await snapshot(page, 'review-desk-resubmitted-390');
     await page.setViewportSize({ width: 1280, height: 860 });
     expect(errors).toEqual([]);
   }, 150_000);

@@ -1,7 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
-import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
+import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
 import { createBuildRow, createPart, createRunRow, createUser } from '../support/factories.ts';
 
 const DAY = 86_400_000;
@@ -70,7 +70,7 @@ describe('journey: a moderator works the review desk', () => {
     const panel = page.getByRole('region', { name: 'Selected item' });
     await panel.getByRole('heading', { level: 2, name: toPublish.title }).waitFor();
     expect(await rowOf(toPublish.title).textContent()).toContain('3 days waiting');
-    await page.screenshot({ path: `${SCREENSHOTS}/review-desk-build-1280.png`, fullPage: true });
+    await snapshot(page, 'review-desk-build-1280');
     await panel.getByRole('button', { name: 'Publish', exact: true }).click();
     await page
       .getByRole('status')
@@ -102,7 +102,7 @@ describe('journey: a moderator works the review desk', () => {
     await panel.getByRole('table').waitFor();
     await panel.getByText('Quartiles and median').waitFor();
     await panel.getByText('Fitted line').waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/review-desk-run-1280.png`, fullPage: true });
+    await snapshot(page, 'review-desk-run-1280');
     await rowOf(partName).press('k');
     await expect.poll(() => rowOf(partName).getAttribute('aria-current')).toBeNull();
     await page.locator('button[aria-current="true"]').press('j');
@@ -114,7 +114,7 @@ describe('journey: a moderator works the review desk', () => {
     await panel.getByRole('link', { name: /Calibration run \d+ .*its build/ }).waitFor();
     await panel.getByRole('button', { name: 'Dismiss' }).click();
     await panel.getByText('Say what you did.').waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/review-desk-report-1280.png`, fullPage: true });
+    await snapshot(page, 'review-desk-report-1280');
 
     await page.getByRole('link', { name: 'Audit trail' }).click();
     await page.getByRole('heading', { level: 1, name: 'Audit trail' }).waitFor();
@@ -122,20 +122,20 @@ describe('journey: a moderator works the review desk', () => {
     await page.getByLabel('Thing').selectOption('build');
     await page.getByRole('button', { name: 'Show' }).click();
     await page.waitForURL(/targetType=build/);
-    await page.screenshot({ path: `${SCREENSHOTS}/review-audit-1280.png`, fullPage: true });
+    await snapshot(page, 'review-audit-1280');
 
     await page.setViewportSize({ width: 390, height: 844 });
     await page.goto(`${live.baseUrl}/review?queue=builds`);
     await panel.waitFor();
     await panel.getByText('Loading the build…').waitFor({ state: 'hidden' });
-    await page.screenshot({ path: `${SCREENSHOTS}/review-desk-build-390.png`, fullPage: true });
+    await snapshot(page, 'review-desk-build-390');
     await page.goto(`${live.baseUrl}/review?queue=runs`);
     await rowOf(partName).click();
     await panel.getByText('Quartiles and median').waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/review-desk-run-390.png`, fullPage: true });
+    await snapshot(page, 'review-desk-run-390');
     await page.goto(`${live.baseUrl}/review/audit`);
     await page.getByRole('row').filter({ hasText: note }).waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/review-audit-390.png`, fullPage: true });
+    await snapshot(page, 'review-audit-390');
     await page.setViewportSize({ width: 1280, height: 860 });
 
     await page.getByRole('button', { name: 'Sign out' }).click();
@@ -151,7 +151,7 @@ describe('journey: a moderator works the review desk', () => {
       .getByText('Published')
       .first()
       .waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/review-returned-owner-1280.png`, fullPage: true });
+    await snapshot(page, 'review-returned-owner-1280');
 
     await page.goto(`${live.baseUrl}/review`);
     await page.getByText('Only moderators can open the review desk').waitFor();
@@ -163,11 +163,11 @@ describe('journey: a moderator works the review desk', () => {
     await page.getByRole('status').filter({ hasText: 'Saved.' }).waitFor();
     await expect(toggle.isChecked()).resolves.toBe(false);
     await page.setViewportSize({ width: 390, height: 844 });
-    await page.screenshot({ path: `${SCREENSHOTS}/account-settings-390.png`, fullPage: true });
+    await snapshot(page, 'account-settings-390');
     // The maker's own pages stay in a bar under the header at every width.
     await page.getByRole('navigation', { name: 'Your pages' }).getByRole('link', { name: 'Mail settings' }).waitFor();
     await page.getByRole('button', { name: 'Menu' }).click();
-    await page.screenshot({ path: `${SCREENSHOTS}/account-menu-390.png` });
+    await snapshot(page, 'account-menu-390', { fullPage: false });
     await page.setViewportSize({ width: 1280, height: 860 });
     expect(errors).toEqual([]);
   }, 150_000);

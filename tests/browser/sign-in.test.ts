@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
+import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
 
 describe('journey: a moderator signs in and out', () => {
   let live: LiveApp;
@@ -25,21 +25,21 @@ describe('journey: a moderator signs in and out', () => {
     await expect(page.getByRole('heading', { level: 1 }).textContent()).resolves.toContain('Measure it once');
     const nav = page.getByRole('navigation', { name: 'Main' });
     expect(await nav.getByRole('link', { name: 'Review desk' }).count()).toBe(0);
-    await page.screenshot({ path: `${SCREENSHOTS}/home-visitor.png`, fullPage: true });
+    await snapshot(page, 'home-visitor');
 
     await page.getByRole('link', { name: 'Sign in', exact: true }).first().click();
     await page.getByRole('heading', { name: /Sign in \(local stand-in\)/ }).waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/stand-in-picker.png` });
+    await snapshot(page, 'stand-in-picker', { fullPage: false });
     await page.getByRole('button', { name: /demo-moderator/ }).click();
 
     await page.waitForURL(`${live.baseUrl}/`);
-    await page.screenshot({ path: `${SCREENSHOTS}/after-sign-in.png`, fullPage: true });
+    await snapshot(page, 'after-sign-in');
     await page.getByTestId('signed-in-login').waitFor();
     expect(await page.getByTestId('signed-in-login').textContent()).toBe('demo-moderator');
     expect(await page.getByTestId('signed-in-role').textContent()).toBe('Moderator');
     await nav.getByRole('link', { name: 'Review desk' }).waitFor();
     expect(await nav.getByRole('link', { name: 'Admin' }).count()).toBe(0);
-    await page.screenshot({ path: `${SCREENSHOTS}/home-moderator.png`, fullPage: true });
+    await snapshot(page, 'home-moderator');
 
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByRole('link', { name: 'Sign in', exact: true }).first().waitFor();
@@ -54,7 +54,7 @@ describe('journey: a moderator signs in and out', () => {
     await page.getByRole('heading', { name: 'No page at this address' }).waitFor();
     await page.getByRole('button', { name: 'Menu' }).click();
     await page.locator('#mobile-nav').getByRole('link', { name: 'Workbench' }).waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/phone-menu-404.png`, fullPage: true });
+    await snapshot(page, 'phone-menu-404');
     await page.setViewportSize({ width: 1280, height: 860 });
   });
 });

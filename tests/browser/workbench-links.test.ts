@@ -3,7 +3,7 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { expectedGainCalculator } from '../../shared/workbench/calculators/expected-gain-calculator.ts';
 import { formatWithUncertainty } from '../../shared/format/measured-number.ts';
-import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
+import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
 import { createBuildRow, createPart, createUser } from '../support/factories.ts';
 import { signIn } from '../support/login.ts';
 
@@ -49,7 +49,7 @@ describe('journey: workbench links', () => {
     expect(await shared.getByRole('textbox', { name: 'Free length L (mm)', exact: true }).inputValue()).toBe('20');
     await expect.poll(() => shared.locator('output').first().textContent()).toBe(before);
     await shared.getByRole('button', { name: 'Copy link to this result' }).waitFor();
-    await shared.screenshot({ path: `${SCREENSHOTS}/workbench-link-expected-gain.png`, fullPage: true });
+    await snapshot(shared, 'workbench-link-expected-gain');
     await shared.close();
 
     // A bad param falls back to its default: the page still opens and computes.
@@ -108,7 +108,7 @@ describe('journey: workbench links', () => {
     await matrix.waitFor();
     await matrix.locator('[data-drawn-at]').first().waitFor();
     expect(await matrix.getByText('Reachable region, corners').count()).toBe(1);
-    await page.screenshot({ path: `${SCREENSHOTS}/build-drive-matrix.png`, fullPage: true });
+    await snapshot(page, 'build-drive-matrix');
     // Limits ±100 V cross 42.4 V peak [S: IEC 61010-1, 6.3.1 — memory for the clause]
     await matrix.getByText('Hazardous voltage', { exact: false }).first().waitFor();
     expect(await matrix.textContent()).toMatch(/Offsets x₀, y₀\s*40(\.0*)?, [−-]25(\.0*)? nm/);

@@ -3,7 +3,7 @@ import type { Page } from 'playwright-core';
 import { fitCalibrationInUnits } from '../../shared/workbench/calibration-fit.ts';
 import type { DisplacementUnit } from '../../shared/units.ts';
 import { formatWithUncertainty } from '../../shared/format/measured-number.ts';
-import { launchBrowser, startLiveApp, SCREENSHOTS, type LiveApp } from '../support/browser.ts';
+import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
 import { workbenchTools } from '../../src/features/workbench/tools.ts';
 
 // A bender run with up and down sweeps; one bad line (7) that must be left out and reported.
@@ -64,7 +64,7 @@ describe('journey: a visitor uses the workbench', () => {
     const { page } = browser;
     await page.goto(`${live.baseUrl}/workbench`);
     await page.getByRole('heading', { level: 1, name: 'Workbench' }).waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/workbench-index-desktop.png`, fullPage: true });
+    await snapshot(page, 'workbench-index-desktop');
 
     await page.getByRole('link', { name: /Gain fit/ }).click();
     await page.getByRole('heading', { level: 1, name: 'Gain fit' }).waitFor();
@@ -77,7 +77,7 @@ describe('journey: a visitor uses the workbench', () => {
     await page.getByText('displacement “abc” is not a number').waitFor();
     await page.getByRole('figure', { name: 'Calibration plot' }).locator('[data-drawn-at]').first().waitFor();
     expect(await page.getByRole('figure', { name: 'Calibration plot' }).getByText('Down sweep').count()).toBeGreaterThan(0);
-    await page.screenshot({ path: `${SCREENSHOTS}/workbench-fit-desktop.png`, fullPage: true });
+    await snapshot(page, 'workbench-fit-desktop');
 
     await page.getByLabel('Displacement unit').selectOption('um');
     await gain.filter({ hasText: expectedGain('um') }).waitFor();
@@ -99,7 +99,7 @@ describe('journey: a visitor uses the workbench', () => {
     await caution.waitFor();
     expect(await caution.textContent()).toContain('local electrical codes or qualified practice');
     await page.getByRole('figure', { name: 'Step against DAC bits' }).locator('[data-drawn-at]').first().waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/workbench-scan-planner-desktop.png`, fullPage: true });
+    await snapshot(page, 'workbench-scan-planner-desktop');
     expect(errors).toEqual([]);
   });
 
@@ -118,14 +118,14 @@ describe('journey: a visitor uses the workbench', () => {
         const chart = page.getByRole('figure');
         if (await chart.count()) await chart.first().locator('[data-drawn-at]').first().waitFor();
         if (width === 390 || !['fit', 'scan-planner'].includes(slug)) {
-          await page.screenshot({ path: `${SCREENSHOTS}/workbench-${slug}-${tag}.png`, fullPage: true });
+          await snapshot(page, `workbench-${slug}-${tag}`);
         }
         expect(await noHorizontalScroll(page), `${slug} at ${width} px`).toBe(true);
       }
     }
     await page.goto(`${live.baseUrl}/workbench`);
     await page.getByRole('heading', { level: 1, name: 'Workbench' }).waitFor();
-    await page.screenshot({ path: `${SCREENSHOTS}/workbench-index-phone.png`, fullPage: true });
+    await snapshot(page, 'workbench-index-phone');
     await page.setViewportSize({ width: 1280, height: 860 });
     expect(errors).toEqual([]);
   }, 240_000);

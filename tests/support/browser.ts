@@ -1,10 +1,10 @@
 import { afterAll, beforeAll } from 'vitest';
-import { mkdtempSync, rmSync, mkdirSync } from 'node:fs';
+import { mkdtempSync, mkdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { createServer, type AddressInfo } from 'node:net';
 import type { Server } from 'node:http';
-import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type Locator, type Page } from 'playwright-core';
 import { startTestApp, type TestApp } from './test-app.ts';
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../../scripts/lib/chromium.ts';
 import { seedDemoOnce } from '../../server/db/seed/demo.ts';
@@ -49,24 +49,48 @@ export async function startLiveApp(): Promise<LiveApp> {
 
 export const SCREENSHOTS = 'test-output/screenshots';
 
+/**
+ * A screenshot for people to look at (`test-output/screenshots/<name>.png`; a page is captured whole unless
+ * `fullPage: false`), taken only when TEST_SCREENSHOTS=1: whole-page captures cost about a fifth of chromium's CPU in
+ * these tests, and no test reads them. A failing test's pages are photographed either way (browser-failures.ts).
+ */
+export async function snapshot(target: Page | Locator, name: string, options: { fullPage?: boolean } = {}): Promise<void> {
+  if (process.env.TEST_SCREENSHOTS !== '1') return;
+  mkdirSync(SCREENSHOTS, { recursive: true });
+  const path = `${SCREENSHOTS}/${name}.png`;
+  if ('goto' in target) await target.screenshot({ path, fullPage: options.fullPage ?? true });
+  else await target.screenshot({ path });
+}
+
 /** The browser contexts open right now (tests/support/browser-failures.ts photographs them when a test fails). */
 export const openContexts = new Set<BrowserContext>();
 
-/** Debian's chromium through playwright-core, with a fresh profile per journey. */
+/**
+ * One chromium per test worker (files in a worker share the module cache), started on first use; it goes with the
+ * worker. Launching a browser costs about twice as much as a fresh context in a running one.
+ */
+let running: Promise<Browser> | null = null;
+function sharedChromium(): Promise<Browser> {
+  running ??= chromium.launch({ executablePath: CHROMIUM_PATH, headless: true, args: CHROMIUM_ARGS });
+  return running.then((b) => {
+    if (b.isConnected()) return b;
+    running = null;
+    return sharedChromium();
+  });
+}
+
+/** Debian's chromium through playwright-core, with a fresh context (no cookies, storage or cache) per journey. */
 export async function launchBrowser(
   options: { bypassCSP?: boolean } = {},
 ): Promise<{ context: BrowserContext; page: Page; close(): Promise<void> }> {
-  mkdirSync(SCREENSHOTS, { recursive: true });
-  const profile = mkdtempSync(join(tmpdir(), 'scanwright-chromium-'));
-  const context = await chromium.launchPersistentContext(profile, {
-    executablePath: CHROMIUM_PATH,
-    headless: true,
+  const context = await (
+    await sharedChromium()
+  ).newContext({
     viewport: { width: 1280, height: 860 },
     // Only for tests that inject a checker script (axe-core) into our pages; the policy itself is tested elsewhere.
     bypassCSP: options.bypassCSP ?? false,
-    args: CHROMIUM_ARGS,
   });
-  const page = context.pages()[0] ?? (await context.newPage());
+  const page = await context.newPage();
   openContexts.add(context);
   return {
     context,
@@ -74,7 +98,6 @@ export async function launchBrowser(
     async close() {
       openContexts.delete(context);
       await context.close();
-      rmSync(profile, { recursive: true, force: true });
     },
   };
 }

@@ -71,6 +71,7 @@ export function PartsTable({ data, search, stale }: { data: PartListDto; search:
         tabIndex={0}
         role="region"
         aria-label="Parts"
+        aria-busy={stale}
       >
         <table className="w-full border-collapse text-sm md:min-w-[44rem]">
           <caption className="sr-only">Listed parts with pooled figures from accepted calibration runs</caption>
