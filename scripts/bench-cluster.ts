@@ -12,8 +12,7 @@ import { join } from 'node:path';
 import type { Sequelize } from 'sequelize';
 // @ts-expect-error plain ESM helper without types
 import { CLUSTER_PORTS, startClusterChild } from './lib/cluster-run.mjs';
-// @ts-expect-error plain ESM helper without types
-import { scratchBase } from './lib/throwaway-mariadb.mjs';
+import { scratchBase } from './lib/scratch.mjs';
 import { startSingleShape, type SingleShape } from './lib/bench-single.ts';
 import {
   addGeneratedParts,

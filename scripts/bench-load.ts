@@ -2,7 +2,7 @@
 // (`server/index.ts`), against a throwaway MariaDB on tmpfs seeded with the demo scenario plus generated parts
 // (scripts/lib/bench-single.ts). About 60 s in all by default (BENCH_SECONDS sets the measured part, 40 by default).
 // Rate limits are off. Prints throughput and latency per route, errors, and lost writes (201s vs rows that appeared).
-import { freePort } from './lib/bench-server.ts';
+import { freePort } from './lib/scratch.mjs';
 import { startSingleShape, type SingleShape } from './lib/bench-single.ts';
 import { addGeneratedParts, mixTable, prepareLoadMix, runLoadMix, serverErrorSummary } from './lib/load-mix.ts';
 

@@ -3,22 +3,13 @@
 // each started 3 times against a throwaway MariaDB.
 import { spawn, spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { join } from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { initDataDir, startServer, ensureDatabase, stopServer } from './lib/mariadb.mjs';
 import { buildServer } from './build-server.mjs';
+import { freePort, scratchBase } from './lib/scratch.mjs';
 
-const freePort = () =>
-  new Promise((resolve) => {
-    const s = createServer();
-    s.listen(0, '127.0.0.1', () => {
-      const { port } = s.address();
-      s.close(() => resolve(port));
-    });
-  });
-
-const dir = mkdtempSync(join('/dev/shm', 'scanwright-startup-'));
+const dir = mkdtempSync(join(scratchBase(), 'scanwright-startup-'));
 const dbPort = await freePort();
 initDataDir(dir);
 const db = await startServer(dir, dbPort, { fast: true });

@@ -10,7 +10,8 @@ import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
-import { freePort, startThrowawayMariaDb } from './lib/throwaway-mariadb.mjs';
+import { freePort } from './lib/scratch.mjs';
+import { startThrowawayMariaDb } from './lib/throwaway-mariadb.mjs';
 import { running, waitExit } from './lib/processes.mjs';
 
 const UNIT = 'docs/deploy/scanwright.service';

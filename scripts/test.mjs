@@ -1,38 +1,20 @@
 // `npm test`: the same installs (plus chromium), a throwaway MariaDB on tmpfs, migrations, a client
 // build for the browser tests, then every test. Cleans up and exits non-zero on any failure.
 import { spawnSync, spawn } from 'node:child_process';
-import { existsSync, mkdtempSync, rmSync, accessSync, constants, readFileSync, mkdirSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { existsSync, mkdtempSync, rmSync, readFileSync, mkdirSync } from 'node:fs';
 import { join } from 'node:path';
-import { createServer } from 'node:net';
 import { ensureDebianPackages, ensureNodeModules } from './lib/setup.mjs';
 import { initDataDir, startServer, ensureDatabase, stopServer, copyDatabase } from './lib/mariadb.mjs';
 import { clientBuildIsStale, serverBuildIsStale } from './lib/paths.mjs';
+import { freePort, scratchBase } from './lib/scratch.mjs';
 import { buildServer } from './build-server.mjs';
 
 ensureDebianPackages({ chromium: true });
 ensureNodeModules();
 
-const freePort = () =>
-  new Promise((resolve, reject) => {
-    const s = createServer();
-    s.once('error', reject);
-    s.listen(0, '127.0.0.1', () => {
-      const { port } = s.address();
-      s.close(() => resolve(port));
-    });
-  });
-
-let base = tmpdir();
-try {
-  accessSync('/dev/shm', constants.W_OK);
-  base = '/dev/shm';
-} catch {
-  /* use tmpdir */
-}
 /** Workers of the api and browser projects, as many as `maxWorkers` in vitest.config.ts; one database copy each. */
 const WORKERS = 2;
-const dir = mkdtempSync(join(base, 'scanwright-test-'));
+const dir = mkdtempSync(join(scratchBase(), 'scanwright-test-'));
 let mariadb = null;
 let status;
 let cleaning = false;

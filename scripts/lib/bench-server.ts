@@ -1,19 +1,9 @@
 // The real server in its own process (as in production), for the load benchmarks: the load
 // generator does not share its event loop. Stand-ins stay off; rate limits are switched off.
 import { spawn } from 'node:child_process';
-import { createServer, type AddressInfo } from 'node:net';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { benchConfig } from './bench-db.ts';
-
-/** A free loopback port. */
-export const freePort = () =>
-  new Promise<number>((resolve) => {
-    const srv = createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as AddressInfo;
-      srv.close(() => resolve(port));
-    });
-  });
+import { freePort } from './scratch.mjs';
 
 /**
  * Starts the server on one bench database and waits for its health route; `stop()` ends it. With `signIn`, the local

@@ -2,14 +2,14 @@
 // deleted again) migrated and seeded with the demo scenario and its pictures, and one real server process on it, with
 // its own OAuth stand-in and SMTP catcher. Rate limits are off. Loopback only.
 import { spawn, type ChildProcess } from 'node:child_process';
-import { accessSync, constants, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Sequelize } from 'sequelize';
 // @ts-expect-error plain ESM helper without types
 import { initDataDir, startServer, ensureDatabase, stopServer } from './mariadb.mjs';
 // @ts-expect-error plain ESM helper without types
 import { serverBuildIsStale } from './paths.mjs';
+import { scratchBase } from './scratch.mjs';
 // @ts-expect-error plain ESM helper without types
 import { buildServer } from '../build-server.mjs';
 import { createSequelize } from '../../server/db/sequelize.ts';
@@ -44,14 +44,7 @@ export interface SingleShape {
  * development does), `'compiled'` runs dist/server/index.mjs (as `npm start` and the cluster do; built when stale).
  */
 export async function startSingleShape(ports: SinglePorts, server: 'tsx' | 'compiled'): Promise<SingleShape> {
-  let base = tmpdir();
-  try {
-    accessSync('/dev/shm', constants.W_OK);
-    base = '/dev/shm';
-  } catch {
-    /* tmpdir */
-  }
-  const dir = mkdtempSync(join(base, 'scanwright-bench-single-'));
+  const dir = mkdtempSync(join(scratchBase(), 'scanwright-bench-single-'));
   // mariadbd keeps temporary tables in $TMPDIR and a starting server deletes every `#sql*` file there,
   // so a private directory keeps this instance and any other starting at the same time apart.
   const tmp = join(dir, 'tmp');

@@ -1,32 +1,9 @@
 // A MariaDB of its own for a script (db:verify, check-serve): its own data directory on tmpfs when
 // there is one, its own port (free unless given) and its own TMPDIR, deleted again by `destroy()`.
-import { accessSync, constants, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { tmpdir } from 'node:os';
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { ensureDatabase, initDataDir, rootSql, startServer, stopServer } from './mariadb.mjs';
-
-/** A port nothing listens on right now. */
-export function freePort() {
-  return new Promise((resolve, reject) => {
-    const s = createServer();
-    s.once('error', reject);
-    s.listen(0, '127.0.0.1', () => {
-      const { port } = s.address();
-      s.close(() => resolve(port));
-    });
-  });
-}
-
-/** A scratch folder for database files: /dev/shm (memory) when writable, else the system temp folder. */
-export function scratchBase() {
-  try {
-    accessSync('/dev/shm', constants.W_OK);
-    return '/dev/shm';
-  } catch {
-    return tmpdir();
-  }
-}
+import { freePort, scratchBase } from './scratch.mjs';
 
 /** Init, start and (when `database` is given) create a database and a password user for 127.0.0.1. */
 export async function startThrowawayMariaDb({ port, database, user = 'scanwright', password = 'throwaway-password' } = {}) {

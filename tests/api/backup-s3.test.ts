@@ -7,7 +7,8 @@ import { tmpdir } from 'node:os';
 import { basename, join } from 'node:path';
 import { GetObjectCommand, ListObjectsV2Command, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { freePort, startPrivateMariaDb, type PrivateMariaDb } from '../support/private-mariadb.ts';
+import { freePort } from '../../scripts/lib/scratch.mjs';
+import { startPrivateMariaDb, type PrivateMariaDb } from '../support/private-mariadb.ts';
 import { startS3StandIn, S3RVER_KEY as KEY, type S3StandIn } from '../support/s3-stand-in.ts';
 
 const BUCKET = 'scanwright-backups';

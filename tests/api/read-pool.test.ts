@@ -1,23 +1,14 @@
 // The registry's read pool must survive a database that stays away: its queries fail (and map to
 // 503), but the driver's background connection errors must not crash the process.
 import { afterAll, expect, test } from 'vitest';
-import { createServer, type AddressInfo } from 'node:net';
 import { errorMonitor, type EventEmitter } from 'node:events';
 import { Sequelize } from 'sequelize';
 import { closeReadPool, readPool } from '../../server/db/read-pool.ts';
-
-const unusedPort = () =>
-  new Promise<number>((resolve) => {
-    const srv = createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as AddressInfo;
-      srv.close(() => resolve(port));
-    });
-  });
+import { freePort } from '../../scripts/lib/scratch.mjs';
 
 const sequelize = new Sequelize('nothing', 'nobody', 'x', {
   host: '127.0.0.1',
-  port: await unusedPort(),
+  port: await freePort(), // nothing listens there
   dialect: 'mariadb',
   logging: false,
 });

@@ -8,11 +8,10 @@ import { randomUUID } from 'node:crypto';
 import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, describe, expect, test } from 'vitest';
-import { freePort } from '../support/private-mariadb.ts';
+import { freePort, scratchBase } from '../../scripts/lib/scratch.mjs';
 import { waitFor } from '../support/wait-for.ts';
 
-const base = existsSync('/dev/shm') ? '/dev/shm' : '/tmp';
-const dataDir = mkdtempSync(join(base, 'scanwright-supervisor-'));
+const dataDir = mkdtempSync(join(scratchBase(), 'scanwright-supervisor-'));
 const stacks: ChildProcess[] = [];
 let env: NodeJS.ProcessEnv;
 

@@ -2,22 +2,13 @@ import { afterAll, beforeAll } from 'vitest';
 import { mkdtempSync, mkdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { createServer, type AddressInfo } from 'node:net';
 import type { Server } from 'node:http';
 import { chromium, type Browser, type BrowserContext, type Locator, type Page } from 'playwright-core';
 import { startTestApp, type TestApp } from './test-app.ts';
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../../scripts/lib/chromium.ts';
+import { freePort } from '../../scripts/lib/scratch.mjs';
 import { seedDemoOnce } from '../../server/db/seed/demo.ts';
 import { demoPictureAttacher } from '../../server/db/seed/demo-pictures.ts';
-
-const freePort = () =>
-  new Promise<number>((resolve) => {
-    const s = createServer();
-    s.listen(0, '127.0.0.1', () => {
-      const { port } = s.address() as AddressInfo;
-      s.close(() => resolve(port));
-    });
-  });
 
 export interface LiveApp {
   t: TestApp;

@@ -1,10 +1,9 @@
 // A MariaDB of a test's own (not the shared test database), for tests that stop, restart, dump or
 // restore it while other test files keep using theirs. Tmpfs when writable, a free port, migrated.
-import { accessSync, constants, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { tmpdir } from 'node:os';
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import type { ChildProcess } from 'node:child_process';
+import { freePort, scratchBase } from '../../scripts/lib/scratch.mjs';
 // @ts-expect-error plain ESM helper without types
 import { initDataDir, startServer, ensureDatabase, stopServer, rootSql } from '../../scripts/lib/mariadb.mjs';
 import type { Config } from '../../server/config.ts';
@@ -27,27 +26,6 @@ export interface PrivateMariaDb {
   sql(statement: string): string;
   /** Stop the server and delete the data directory. */
   destroy(): Promise<void>;
-}
-
-/** A port nothing listens on right now. */
-export function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const s = createServer();
-    s.once('error', reject);
-    s.listen(0, '127.0.0.1', () => {
-      const { port } = s.address() as { port: number };
-      s.close(() => resolve(port));
-    });
-  });
-}
-
-function scratchBase(): string {
-  try {
-    accessSync('/dev/shm', constants.W_OK);
-    return '/dev/shm';
-  } catch {
-    return tmpdir();
-  }
 }
 
 /**

@@ -2,7 +2,7 @@
 import { join } from 'node:path';
 import S3rver from 's3rver';
 import { S3Client } from '@aws-sdk/client-s3';
-import { freePort } from './private-mariadb.ts';
+import { freePort } from '../../scripts/lib/scratch.mjs';
 
 /** s3rver's built-in access key and secret. */
 export const S3RVER_KEY = 'S3RVER';

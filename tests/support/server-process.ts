@@ -1,7 +1,8 @@
 // The real server process (`node --import tsx server/index.ts`) on free loopback ports (app, OAuth stand-in,
 // SMTP catcher, inbox) against a private MariaDB, for the fault tests that kill, signal or double it.
 import { spawn, type ChildProcess } from 'node:child_process';
-import { freePort, type PrivateMariaDb } from './private-mariadb.ts';
+import { freePort } from '../../scripts/lib/scratch.mjs';
+import type { PrivateMariaDb } from './private-mariadb.ts';
 
 export interface RunningServer {
   port: number;

@@ -1,0 +1,3 @@
+// Types of scratch.mjs for the TypeScript tests and benchmarks.
+export function freePort(): Promise<number>;
+export function scratchBase(): string;
