@@ -2,26 +2,21 @@
 // resident memory once up, for the compiled bundle (what `npm start` runs) against tsx (development),
 // each started 3 times against a throwaway MariaDB.
 import { spawn, spawnSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
-import { join } from 'node:path';
+import { readFileSync } from 'node:fs';
 import { setTimeout as sleep } from 'node:timers/promises';
-import { initDataDir, startServer, ensureDatabase, stopServer } from './lib/mariadb.mjs';
 import { buildServer } from './build-server.mjs';
-import { freePort, scratchBase } from './lib/scratch.mjs';
+import { freePort } from './lib/scratch.mjs';
+import { startThrowawayMariaDb } from './lib/throwaway-mariadb.mjs';
 
-const dir = mkdtempSync(join(scratchBase(), 'scanwright-startup-'));
-const dbPort = await freePort();
-initDataDir(dir);
-const db = await startServer(dir, dbPort, { fast: true });
 const creds = { database: 'scanwright_startup', user: 'scanwright', password: 'startup-only-password' };
-ensureDatabase(dir, creds);
+const mariadb = await startThrowawayMariaDb({ ...creds, label: 'startup' });
 const env = {
   ...process.env,
   NODE_ENV: 'production',
   LOG_LEVEL: 'silent',
   SESSION_SECRET: 'startup-bench-session-secret-0123456789',
   DB_HOST: '127.0.0.1',
-  DB_PORT: String(dbPort),
+  DB_PORT: String(mariadb.port),
   DB_NAME: creds.database,
   DB_USER: creds.user,
   DB_PASSWORD: creds.password,
@@ -76,6 +71,5 @@ try {
     );
   }
 } finally {
-  await stopServer(db);
-  rmSync(dir, { recursive: true, force: true });
+  await mariadb.destroy();
 }

@@ -1,12 +1,12 @@
 // `npm test`: the same installs (plus chromium), a throwaway MariaDB on tmpfs, migrations, a client
 // build for the browser tests, then every test. Cleans up and exits non-zero on any failure.
 import { spawnSync, spawn } from 'node:child_process';
-import { existsSync, mkdtempSync, rmSync, readFileSync, mkdirSync } from 'node:fs';
+import { existsSync, rmSync, readFileSync, mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { ensureDebianPackages, ensureNodeModules } from './lib/setup.mjs';
-import { initDataDir, startServer, ensureDatabase, stopServer, copyDatabase } from './lib/mariadb.mjs';
+import { ensureDatabase, copyDatabase } from './lib/mariadb.mjs';
+import { startThrowawayMariaDb } from './lib/throwaway-mariadb.mjs';
 import { clientBuildIsStale, serverBuildIsStale } from './lib/paths.mjs';
-import { freePort, scratchBase } from './lib/scratch.mjs';
 import { buildServer } from './build-server.mjs';
 
 ensureDebianPackages({ chromium: true });
@@ -14,7 +14,6 @@ ensureNodeModules();
 
 /** Workers of the api and browser projects, as many as `maxWorkers` in vitest.config.ts; one database copy each. */
 const WORKERS = 2;
-const dir = mkdtempSync(join(scratchBase(), 'scanwright-test-'));
 let mariadb = null;
 let status;
 let cleaning = false;
@@ -22,8 +21,7 @@ let cleaning = false;
 async function cleanup() {
   if (cleaning) return;
   cleaning = true;
-  await stopServer(mariadb);
-  rmSync(dir, { recursive: true, force: true });
+  await mariadb?.destroy();
 }
 for (const sig of ['SIGINT', 'SIGTERM'])
   process.on(sig, async () => {
@@ -52,21 +50,19 @@ try {
   };
   const builds = buildClient();
   builds.catch(() => undefined);
-  const port = await freePort();
-  initDataDir(dir);
-  mariadb = await startServer(dir, port, { fast: true });
   const db = { database: 'scanwright_test', user: 'scanwright', password: 'test-only-password' };
-  ensureDatabase(dir, db);
+  mariadb = await startThrowawayMariaDb({ ...db, label: 'test' });
+  const { dir } = mariadb;
   const env = {
     ...process.env,
     NODE_ENV: 'test',
     TZ: 'UTC',
     DB_HOST: '127.0.0.1',
-    DB_PORT: String(port),
+    DB_PORT: String(mariadb.port),
     DB_NAME: db.database,
     DB_USER: db.user,
     DB_PASSWORD: db.password,
-    MARIADB_SOCKET: join(dir, 'mysqld.sock'),
+    MARIADB_SOCKET: mariadb.socket,
     // Live-app browser tests: one uploads folder per worker under this one (demo pictures); removed with the run.
     TEST_UPLOADS_DIR: join(dir, 'uploads'),
     SESSION_SECRET: 'test-session-secret-test-session-secret',

@@ -2,14 +2,11 @@
 // deleted again) migrated and seeded with the demo scenario and its pictures, and one real server process on it, with
 // its own OAuth stand-in and SMTP catcher. Rate limits are off. Loopback only.
 import { spawn, type ChildProcess } from 'node:child_process';
-import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Sequelize } from 'sequelize';
 // @ts-expect-error plain ESM helper without types
-import { initDataDir, startServer, ensureDatabase, stopServer } from './mariadb.mjs';
-// @ts-expect-error plain ESM helper without types
 import { serverBuildIsStale } from './paths.mjs';
-import { scratchBase } from './scratch.mjs';
+import { startThrowawayMariaDb, type ThrowawayMariaDb } from './throwaway-mariadb.mjs';
 // @ts-expect-error plain ESM helper without types
 import { buildServer } from '../build-server.mjs';
 import { createSequelize } from '../../server/db/sequelize.ts';
@@ -44,15 +41,16 @@ export interface SingleShape {
  * development does), `'compiled'` runs dist/server/index.mjs (as `npm start` and the cluster do; built when stale).
  */
 export async function startSingleShape(ports: SinglePorts, server: 'tsx' | 'compiled'): Promise<SingleShape> {
-  const dir = mkdtempSync(join(scratchBase(), 'scanwright-bench-single-'));
-  // mariadbd keeps temporary tables in $TMPDIR and a starting server deletes every `#sql*` file there,
-  // so a private directory keeps this instance and any other starting at the same time apart.
-  const tmp = join(dir, 'tmp');
-  mkdirSync(tmp);
-  const savedTmp = process.env.TMPDIR;
-  process.env.TMPDIR = tmp;
-  const db = { host: '127.0.0.1', port: ports.db, name: 'scanwright_load', user: 'scanwright_bench', password: 'bench-only-password' };
-  let mariadb: ChildProcess | null = null;
+  // Durable like production (no `fast`): the benchmarks measure writes.
+  const mariadb: ThrowawayMariaDb = await startThrowawayMariaDb({
+    port: ports.db,
+    database: 'scanwright_load',
+    user: 'scanwright_bench',
+    password: 'bench-only-password',
+    fast: false,
+    label: 'bench-single',
+  });
+  const { dir, db } = mariadb;
   let app: ChildProcess | null = null;
   let sequelize: Sequelize | null = null;
   const stop = async () => {
@@ -62,15 +60,9 @@ export async function startSingleShape(ports: SinglePorts, server: 'tsx' | 'comp
       app.kill('SIGTERM');
       await gone;
     }
-    await stopServer(mariadb);
-    rmSync(dir, { recursive: true, force: true });
+    await mariadb.destroy();
   };
   try {
-    initDataDir(dir);
-    mariadb = (await startServer(dir, ports.db)) as ChildProcess;
-    ensureDatabase(dir, { database: db.name, user: db.user, password: db.password });
-    if (savedTmp === undefined) delete process.env.TMPDIR;
-    else process.env.TMPDIR = savedTmp;
     sequelize = createSequelize({ ...db, poolMax: 5 });
     await createMigrator(sequelize).up();
     initModels(sequelize);
@@ -101,7 +93,7 @@ export async function startSingleShape(ports: SinglePorts, server: 'tsx' | 'comp
         DB_PASSWORD: db.password,
         SESSION_SECRET: 'bench-load-session-secret-0123456789',
         UPLOADS_DIR: uploads,
-        TMPDIR: tmp,
+        TMPDIR: mariadb.tmp,
       },
     });
     await new Promise<void>((resolve, reject) => {
