@@ -1,11 +1,15 @@
 import { DataTypes, Model, type CreationOptional, type ModelAttributes } from 'sequelize';
 
 /**
- * What every photo attached to a part or a listing holds (tables part_photos and listing_photos):
- * the two stored WebP variants under content-hash names, their size, alt text and order.
- * Build photos (models/photo.model.ts) add an owner and a log entry to the same fields.
+ * What every stored photo holds (tables photos, part_photos and listing_photos): the two stored WebP variants under
+ * content-hash names, their size, alt text and order. Build photos (models/photo.model.ts) add an owner and a log
+ * entry, and type their attributes through the parameters (as Sequelize's Model does).
  */
-export abstract class AttachedPhoto extends Model {
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- the same default as Sequelize's own Model
+export abstract class AttachedPhoto<TAttributes extends object = any, TCreation extends object = TAttributes> extends Model<
+  TAttributes,
+  TCreation
+> {
   declare id: CreationOptional<number>;
   declare contentHash: string;
   declare displayFile: string;

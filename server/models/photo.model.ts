@@ -1,28 +1,18 @@
 import {
   DataTypes,
-  Model,
   type CreationOptional,
   type InferAttributes,
   type InferCreationAttributes,
   type ModelAttributes,
   type Sequelize,
 } from 'sequelize';
-import { attachedPhotoAttributes } from './attached-photo.ts';
+import { AttachedPhoto, attachedPhotoAttributes } from './attached-photo.ts';
 
-export class Photo extends Model<InferAttributes<Photo>, InferCreationAttributes<Photo>> {
-  declare id: CreationOptional<number>;
+/** A photo in a build log: the fields every stored photo has, plus its owner and the log entry it belongs to. */
+export class Photo extends AttachedPhoto<InferAttributes<Photo>, InferCreationAttributes<Photo>> {
   declare buildId: number;
   declare entryId: CreationOptional<number | null>;
   declare ownerId: number;
-  declare contentHash: string;
-  declare displayFile: string;
-  declare thumbFile: string;
-  declare width: number;
-  declare height: number;
-  declare alt: string;
-  declare position: CreationOptional<number>;
-  declare createdAt: CreationOptional<Date>;
-  declare updatedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
     Photo.init(
