@@ -5,7 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import type { Page } from 'playwright-core';
-import { launchBrowser, startLiveApp, snapshot, type LiveApp, pickListingPart } from '../support/browser.ts';
+import { journey, snapshot, pickListingPart } from '../support/browser.ts';
 
 const DISC = 'Brass buzzer disc 27 mm';
 /** A maker of this run only, so the part and listing below are ours alone in the shared database. */
@@ -38,29 +38,19 @@ const uploaded = (page: Page, name: string) =>
 const noSideways = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth);
 
 describe('journey: photos on registry parts and exchange listings', () => {
-  let live: LiveApp;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
+  const j = journey({ expectedConsole: /status of 40[14]/ });
   let dir: string;
-  const errors: string[] = [];
   beforeAll(async () => {
     dir = await mkdtemp(join(tmpdir(), 'scanwright-attached-photos-'));
-    live = await startLiveApp();
-    browser = await launchBrowser();
-    browser.page.on('pageerror', (e) => errors.push(e.message));
-    browser.page.on('console', (m) => {
-      if (m.type() === 'error' && !/status of 40[14]/.test(m.text())) errors.push(m.text());
-    });
   });
   afterAll(async () => {
-    await browser?.close();
-    await live?.close();
     await rm(dir, { recursive: true, force: true });
   });
 
   test('when a maker proposes a part and adds photos with alt text on its page, then they show there, open large, and can be reordered, redescribed and deleted', async () => {
-    const { page } = browser;
-    await page.goto(`${live.baseUrl}/auth/github?login=${MAKER}&returnTo=%2Fparts%2Fpropose`);
-    await page.waitForURL(`${live.baseUrl}/parts/propose`);
+    const { page } = j.browser;
+    await page.goto(`${j.live.baseUrl}/auth/github?login=${MAKER}&returnTo=%2Fparts%2Fpropose`);
+    await page.waitForURL(`${j.live.baseUrl}/parts/propose`);
     await page.getByLabel('Category').selectOption('tube');
     await page.getByLabel('Name', { exact: true }).fill(PART);
     await page.getByLabel('Outer diameter (mm)').fill('6.35');
@@ -126,12 +116,12 @@ describe('journey: photos on registry parts and exchange listings', () => {
     expect(await noSideways(page)).toBe(true);
     await snapshot(page, 'part-photos-owner-390');
     await page.setViewportSize({ width: 1280, height: 860 });
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 
   test('when the maker posts a listing and adds a photo, then the listing page and its exchange card show it, and a visitor gets no upload controls', async () => {
-    const { page } = browser;
-    await page.goto(`${live.baseUrl}/exchange/new`);
+    const { page } = j.browser;
+    await page.goto(`${j.live.baseUrl}/exchange/new`);
     await pickListingPart(page, 'buzzer', DISC, 'Buzzer disc');
     await page.getByLabel('Quantity').fill('5');
     // A swap, so the other journeys' "Free only" filters never meet this listing.
@@ -154,7 +144,7 @@ describe('journey: photos on registry parts and exchange listings', () => {
     expect(await page.getByText('No photos yet: a drawing of a buzzer disc.').count()).toBe(0);
     await snapshot(page, 'listing-photos-1280');
 
-    await page.goto(`${live.baseUrl}/exchange?region=${encodeURIComponent(REGION)}`);
+    await page.goto(`${j.live.baseUrl}/exchange?region=${encodeURIComponent(REGION)}`);
     const card = page.getByRole('article').filter({ hasText: REGION });
     await card.getByRole('img', { name: LISTING_ALT }).waitFor();
     await snapshot(page, 'exchange-card-photo-1280');
@@ -173,6 +163,6 @@ describe('journey: photos on registry parts and exchange listings', () => {
     expect(await noSideways(page)).toBe(true);
     await snapshot(page, 'listing-photos-visitor-390');
     await page.setViewportSize({ width: 1280, height: 860 });
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 });

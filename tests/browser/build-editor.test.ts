@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import type { Page } from 'playwright-core';
-import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
+import { journey, snapshot } from '../support/browser.ts';
 import { Build } from '../../server/models/build.model.ts';
 import { DEMO_PARTS } from '../../server/db/seed/demo-parts.ts';
 
@@ -24,37 +24,26 @@ const CSV = [
 const noSideways = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth);
 
 describe('journey: a maker writes a build and submits it for review', () => {
-  let live: LiveApp;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
+  // The non-photo upload answers 415 on purpose; the browser logs that as a console error.
+  const j = journey({ expectedConsole: /status of 415/ });
+  /** The files the maker uploads. */
   let dir: string;
-  const errors: string[] = [];
   beforeAll(async () => {
     dir = await mkdtemp(join(tmpdir(), 'scanwright-editor-'));
-    process.env.UPLOADS_DIR = join(dir, 'uploads');
-    live = await startLiveApp();
-    browser = await launchBrowser();
-    browser.page.on('pageerror', (e) => errors.push(e.message));
-    // The non-photo upload answers 415 on purpose; the browser logs that as a console error.
-    browser.page.on('console', (m) => {
-      if (m.type() === 'error' && !/status of 415/.test(m.text())) errors.push(m.text());
-    });
   });
   afterAll(async () => {
-    await browser?.close();
-    await live?.close();
-    delete process.env.UPLOADS_DIR;
     await rm(dir, { recursive: true, force: true });
   });
 
   test('when demo-maker creates a build, uploads a photo, adds an actuator and a run from CSV and submits, then the build is submitted for review', async () => {
-    const { page } = browser;
+    const { page } = j.browser;
     await page.setViewportSize({ width: 1280, height: 860 });
 
-    await page.goto(`${live.baseUrl}/builds/new`);
+    await page.goto(`${j.live.baseUrl}/builds/new`);
     await page.getByText('Sign in to write builds').waitFor();
     await page.getByRole('main').getByRole('link', { name: 'Sign in' }).click();
     await page.getByRole('button', { name: /demo-maker/ }).click();
-    await page.waitForURL(`${live.baseUrl}/builds/new`);
+    await page.waitForURL(`${j.live.baseUrl}/builds/new`);
 
     await page.getByLabel('Title', { exact: true }).fill(TITLE);
     await page.getByLabel('Instrument kind').selectOption('tunnelling-microscope');
@@ -178,18 +167,18 @@ describe('journey: a maker writes a build and submits it for review', () => {
     await page.getByRole('button', { name: 'Save details' }).waitFor({ state: 'detached' });
     await page.getByText('Pending review', { exact: true }).first().waitFor();
     await snapshot(page, 'build-editor-submitted-1280');
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 
   test("when demo-maker opens the editor of someone else's build, then a plain message says why it cannot be edited", async () => {
-    const { page } = browser;
+    const { page } = j.browser;
     const published = await Build.findOne({ where: { title: 'Beam-deflection AFM on a slate offcut' } });
     const othersDraft = await Build.findOne({ where: { title: 'Micromanipulator for pulling glass tips' } });
-    await page.goto(`${live.baseUrl}/builds/${published!.id}/edit`);
+    await page.goto(`${j.live.baseUrl}/builds/${published!.id}/edit`);
     await page.getByText('Only the owner can edit this build').waitFor();
     await page.getByRole('link', { name: 'Read the build' }).waitFor();
     expect(await page.getByRole('button', { name: 'Save details' }).count()).toBe(0);
-    await page.goto(`${live.baseUrl}/builds/${othersDraft!.id}/edit`);
+    await page.goto(`${j.live.baseUrl}/builds/${othersDraft!.id}/edit`);
     await page.getByText('No build to edit here').waitFor();
     await snapshot(page, 'build-editor-not-yours-1280', { fullPage: false });
   });

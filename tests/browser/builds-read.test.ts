@@ -1,9 +1,6 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { mkdtemp, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { beforeAll, describe, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
-import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
+import { journey, snapshot, type LiveApp } from '../support/browser.ts';
 import { signIn } from '../support/login.ts';
 import { jpeg } from '../support/images.ts';
 import { Build } from '../../server/models/build.model.ts';
@@ -34,33 +31,16 @@ async function addPhotos(live: LiveApp): Promise<number> {
 const noSideways = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth);
 
 describe('journey: reading builds', () => {
-  let live: LiveApp;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
-  let uploadsDir: string;
+  const j = journey({ expectedConsole: /status of 40[14]/ });
   let afmId: number;
-  const errors: string[] = [];
   beforeAll(async () => {
-    uploadsDir = await mkdtemp(join(tmpdir(), 'scanwright-read-uploads-'));
-    process.env.UPLOADS_DIR = uploadsDir;
-    live = await startLiveApp();
-    afmId = await addPhotos(live);
-    browser = await launchBrowser();
-    browser.page.on('pageerror', (e) => errors.push(e.message));
-    browser.page.on('console', (m) => {
-      if (m.type() === 'error' && !/status of 40[14]/.test(m.text())) errors.push(m.text());
-    });
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await live?.close();
-    delete process.env.UPLOADS_DIR;
-    await rm(uploadsDir, { recursive: true, force: true });
+    afmId = await addPhotos(j.live);
   });
 
   test('when a visitor filters the index by kind and opens a build, then the write-up, runs table, plot and photos show', async () => {
-    const { page } = browser;
+    const { page } = j.browser;
     // Other test files publish builds into the same database, so start from a kind filter the demo owns.
-    await page.goto(`${live.baseUrl}/builds?kind=tunnelling-microscope`);
+    await page.goto(`${j.live.baseUrl}/builds?kind=tunnelling-microscope`);
     await page.getByRole('heading', { level: 1, name: 'Builds' }).waitFor();
     await page.getByRole('link', { name: STM }).waitFor();
     expect(await page.getByRole('link', { name: 'Stylus profilometer from a record-player arm' }).count()).toBe(0);
@@ -119,28 +99,28 @@ describe('journey: reading builds', () => {
       expect(await thumbs.first().evaluate((b) => b === document.activeElement)).toBe(true);
     }
     await snapshot(page, 'build-page-1280');
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 
   test('when a visitor asks for a build under review or one that does not exist, then the page says there is no such published build', async () => {
-    const { page } = browser;
+    const { page } = j.browser;
     const submitted = await Build.findOne({ where: { title: 'Stylus profilometer from a record-player arm' } });
     for (const id of [submitted!.id, 99_999_999]) {
-      await page.goto(`${live.baseUrl}/builds/${id}`);
+      await page.goto(`${j.live.baseUrl}/builds/${id}`);
       await page.getByRole('heading', { name: 'No such build (or it is not published)' }).waitFor();
     }
-    await page.goto(`${live.baseUrl}/builds/mine`);
+    await page.goto(`${j.live.baseUrl}/builds/mine`);
     await page.getByText('Sign in to see your builds').waitFor();
   });
 
   test('when the pages are read at phone width, then nothing scrolls sideways and the runs and plot still show', async () => {
-    const { page } = browser;
+    const { page } = j.browser;
     await page.setViewportSize({ width: 390, height: 844 });
-    await page.goto(`${live.baseUrl}/builds?kind=force-microscope`);
+    await page.goto(`${j.live.baseUrl}/builds?kind=force-microscope`);
     await page.getByRole('link', { name: AFM }).waitFor();
     expect(await noSideways(page)).toBe(true);
     await snapshot(page, 'builds-index-390');
-    await page.goto(`${live.baseUrl}/builds/${afmId}`);
+    await page.goto(`${j.live.baseUrl}/builds/${afmId}`);
     const xBender = page.getByRole('article', { name: /^X bender/ });
     await xBender
       .getByRole('region', { name: /^Calibration plot: X bender/ })
@@ -155,14 +135,14 @@ describe('journey: reading builds', () => {
   });
 
   test('when demo-maker signs in from the index, then the write button shows and my builds lists the draft', async () => {
-    const { page } = browser;
-    await page.goto(`${live.baseUrl}/builds`);
+    const { page } = j.browser;
+    await page.goto(`${j.live.baseUrl}/builds`);
     await page.getByRole('link', { name: 'Sign in to write a build' }).click();
     await page.getByRole('button', { name: /demo-maker/ }).click();
-    await page.waitForURL(`${live.baseUrl}/builds`);
+    await page.waitForURL(`${j.live.baseUrl}/builds`);
     await page.getByRole('link', { name: 'Write a build' }).waitFor();
 
-    await page.goto(`${live.baseUrl}/builds/mine`);
+    await page.goto(`${j.live.baseUrl}/builds/mine`);
     const draft = page
       .getByRole('listitem')
       .filter({ has: page.getByRole('link', { name: 'My first tunnelling microscope', exact: true }) });
@@ -177,16 +157,16 @@ describe('journey: reading builds', () => {
     await page.getByRole('heading', { level: 1, name: 'My first tunnelling microscope' }).waitFor();
     await page.getByRole('note').getByText('Only you and moderators can see this build.').waitFor();
     expect(await page.getByRole('link', { name: 'Edit build' }).getAttribute('href')).toMatch(/\/builds\/\d+\/edit$/);
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 
   test('when stage-kwame opens my builds, then the returned build shows the review desk note', async () => {
-    const { page } = browser;
+    const { page } = j.browser;
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByRole('link', { name: 'Sign in', exact: true }).first().click();
     await page.getByRole('button', { name: /stage-kwame/ }).click();
     await page.waitForURL(/\/$|\/builds/);
-    await page.goto(`${live.baseUrl}/builds/mine`);
+    await page.goto(`${j.live.baseUrl}/builds/mine`);
     const returned = page
       .getByRole('listitem')
       .filter({ has: page.getByRole('link', { name: 'Micromanipulator for pulling glass tips', exact: true }) });

@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
-import { launchBrowser, startLiveApp, snapshot, type LiveApp, pickListingPart } from '../support/browser.ts';
+import { journey, snapshot, pickListingPart } from '../support/browser.ts';
 import { DEMO_PARTS } from '../../server/db/seed/demo-parts.ts';
 import { DEMO_BUILDS } from '../../server/db/seed/demo-builds.ts';
 
@@ -21,28 +21,14 @@ const MESSAGE = 'Hello Marit, could I have two of the cartridge bars for an XY p
 const noSideways = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth);
 
 describe('journey: parts registry and exchange', () => {
-  let live: LiveApp;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
-  const errors: string[] = [];
-  beforeAll(async () => {
-    live = await startLiveApp();
-    browser = await launchBrowser();
-    browser.page.on('pageerror', (e) => errors.push(e.message));
-    browser.page.on('console', (m) => {
-      if (m.type() === 'error' && !/status of 40[14]/.test(m.text())) errors.push(m.text());
-    });
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await live?.close();
-  });
+  const j = journey({ expectedConsole: /status of 40[14]/ });
 
   test('when demo-maker filters by gain around the bar runs, opens the cartridge bar and writes to marit-builds, then marit-builds reads it in the inbox', async () => {
-    const { page } = browser;
-    await page.goto(`${live.baseUrl}/auth/github?returnTo=%2Fparts`);
+    const { page } = j.browser;
+    await page.goto(`${j.live.baseUrl}/auth/github?returnTo=%2Fparts`);
     await page.getByRole('heading', { name: /Sign in \(local stand-in\)/ }).waitFor();
     await page.getByRole('button', { name: /demo-maker/ }).click();
-    await page.waitForURL(`${live.baseUrl}/parts`);
+    await page.waitForURL(`${j.live.baseUrl}/parts`);
     await page.getByRole('heading', { level: 1, name: 'Parts registry' }).waitFor();
     const table = page.getByRole('table');
     await table.getByRole('link', { name: DISC }).waitFor();
@@ -63,7 +49,7 @@ describe('journey: parts registry and exchange', () => {
 
     const csv = await page.getByRole('link', { name: 'Download CSV' }).getAttribute('href');
     expect(csv).toBe(`/api/parts?gainMin=${GAIN_FROM}&gainMax=${GAIN_TO}&sort=name&format=csv`);
-    const download = await page.request.get(`${live.baseUrl}${csv}`);
+    const download = await page.request.get(`${j.live.baseUrl}${csv}`);
     expect(download.headers()['content-type']).toContain('text/csv');
     expect(await download.text()).toContain(BAR);
 
@@ -104,8 +90,8 @@ describe('journey: parts registry and exchange', () => {
 
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByRole('link', { name: 'Sign in', exact: true }).first().waitFor();
-    await page.goto(`${live.baseUrl}/auth/github?login=marit-builds&returnTo=%2Finbox`);
-    await page.waitForURL(`${live.baseUrl}/inbox`);
+    await page.goto(`${j.live.baseUrl}/auth/github?login=marit-builds&returnTo=%2Finbox`);
+    await page.waitForURL(`${j.live.baseUrl}/inbox`);
     await page.getByRole('heading', { level: 1, name: 'Inbox' }).waitFor();
     const thread = page.getByRole('listitem').filter({ hasText: 'demo-maker' });
     await thread.getByText('1 unread').waitFor();
@@ -119,12 +105,12 @@ describe('journey: parts registry and exchange', () => {
     await page.getByRole('button', { name: 'Send reply' }).click();
     await page.getByRole('list', { name: 'Messages' }).getByText('I will post them on Monday.').waitFor();
     await snapshot(page, 'inbox-thread-1280');
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 
   test('when marit-builds proposes a part, then the page says it waits for a moderator', async () => {
-    const { page } = browser;
-    await page.goto(`${live.baseUrl}/parts/propose`);
+    const { page } = j.browser;
+    await page.goto(`${j.live.baseUrl}/parts/propose`);
     await page.getByLabel('Category').selectOption('tube');
     await page.getByLabel('Name', { exact: true }).fill('Short quartered tube 3.2 OD × 6 mm');
     await page.getByLabel('Outer diameter (mm)').fill('3.2');
@@ -138,12 +124,12 @@ describe('journey: parts registry and exchange', () => {
     await page.getByRole('link', { name: 'Open its page' }).click();
     await page.getByRole('heading', { level: 1, name: 'Short quartered tube 3.2 OD × 6 mm' }).waitFor();
     await page.getByText('Only its proposer and the moderators can see this page').waitFor();
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 
   test('when marit-builds posts a listing seeking buzzer discs for a price, then its page shows it with the price', async () => {
-    const { page } = browser;
-    await page.goto(`${live.baseUrl}/exchange/new`);
+    const { page } = j.browser;
+    await page.goto(`${j.live.baseUrl}/exchange/new`);
     await pickListingPart(page, 'buzzer', DISC, 'Buzzer disc');
     await page.getByLabel('Seeking: I am looking for parts').check();
     await page.getByLabel('Quantity').fill('4');
@@ -158,13 +144,13 @@ describe('journey: parts registry and exchange', () => {
     expect(await page.getByRole('region', { name: 'Your listing' }).getByRole('button', { name: 'Mark reserved' }).count()).toBe(1);
     await page.getByText('1.50 EUR').waitFor();
     await snapshot(page, 'listing-own-1280');
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 
   test('when the pages are 390 px wide, then nothing scrolls sideways and the registry rows keep name and median gain', async () => {
-    const { page } = browser;
+    const { page } = j.browser;
     await page.setViewportSize({ width: 390, height: 844 });
-    await page.goto(`${live.baseUrl}/parts?gainMin=${GAIN_FROM}&gainMax=${GAIN_TO}`);
+    await page.goto(`${j.live.baseUrl}/parts?gainMin=${GAIN_FROM}&gainMax=${GAIN_TO}`);
     await page.getByRole('table').getByRole('link', { name: BAR }).waitFor();
     expect(await noSideways(page)).toBe(true);
     const table = page.getByRole('table');
@@ -177,7 +163,7 @@ describe('journey: parts registry and exchange', () => {
     expect(await noSideways(page)).toBe(true);
     await snapshot(page, 'part-page-390');
 
-    await page.goto(`${live.baseUrl}/exchange`);
+    await page.goto(`${j.live.baseUrl}/exchange`);
     await page.getByRole('link', { name: new RegExp(STACK) }).waitFor();
     await page.getByLabel('Free only').check();
     await page.waitForURL(/freeOnly=true/);
@@ -186,7 +172,7 @@ describe('journey: parts registry and exchange', () => {
     expect(await noSideways(page)).toBe(true);
     await snapshot(page, 'exchange-390');
 
-    await page.goto(`${live.baseUrl}/exchange/mine`);
+    await page.goto(`${j.live.baseUrl}/exchange/mine`);
     await page.getByRole('heading', { level: 1, name: 'My listings' }).waitFor();
     await page.getByRole('link', { name: `3 × ${BAR}`, exact: true }).waitFor();
     await page.getByRole('button', { name: `Mark reserved: 3 × ${BAR}` }).click();
@@ -195,12 +181,12 @@ describe('journey: parts registry and exchange', () => {
     expect(await noSideways(page)).toBe(true);
     await snapshot(page, 'my-listings-390');
 
-    await page.goto(`${live.baseUrl}/inbox`);
+    await page.goto(`${j.live.baseUrl}/inbox`);
     await page.getByRole('link', { name: 'demo-maker' }).click();
     await page.getByRole('list', { name: 'Messages' }).waitFor();
     expect(await noSideways(page)).toBe(true);
     await snapshot(page, 'inbox-thread-390');
     await page.setViewportSize({ width: 1280, height: 860 });
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 });

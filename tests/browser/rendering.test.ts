@@ -1,5 +1,5 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
+import { describe, expect, test } from 'vitest';
+import { journey, snapshot } from '../support/browser.ts';
 import { createBuildRow, createUser } from '../support/factories.ts';
 import { LogEntry } from '../../server/models/log-entry.model.ts';
 
@@ -17,16 +17,7 @@ const HOSTILE = [
 ].join('\n\n');
 
 describe('journey: hostile Markdown renders inert under the Content-Security-Policy', () => {
-  let live: LiveApp;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
-  beforeAll(async () => {
-    live = await startLiveApp();
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await live?.close();
-  });
+  const j = journey();
 
   test('when a published build carries scripts, handlers, javascript: and data: links, then nothing runs and unsafe links are emptied', async () => {
     const owner = await createUser();
@@ -38,7 +29,7 @@ describe('journey: hostile Markdown renders inert under the Content-Security-Pol
       title: 'Entry with HTML',
       body: '<script>window.__pwned="entry"</script> <b onmouseover="window.__pwned=\'b\'">bold?</b>',
     });
-    const { page } = browser;
+    const { page } = j.browser;
     const dialogs: string[] = [];
     page.on('dialog', async (d) => {
       dialogs.push(d.message());
@@ -50,7 +41,7 @@ describe('journey: hostile Markdown renders inert under the Content-Security-Pol
         (window as unknown as { __violations: string[] }).__violations.push(`${e.violatedDirective} ${e.blockedURI}`);
       });
     });
-    const response = await page.goto(`${live.baseUrl}/builds/${build.id}`);
+    const response = await page.goto(`${j.live.baseUrl}/builds/${build.id}`);
     const csp = response!.headers()['content-security-policy']!;
     expect(csp).toContain("script-src 'self'");
     expect(csp).not.toContain('unsafe-inline');

@@ -1,8 +1,8 @@
 // The builds tab as a place to decide a build and its runs: each run's gain with its ±, flags, plot and raw
 // points; the combined decision with its preview; and a resubmitted build showing what changed since review.
 import { randomBytes } from 'node:crypto';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
+import { beforeAll, describe, expect, test } from 'vitest';
+import { journey, snapshot } from '../support/browser.ts';
 import { createBuildRow, createPart, createRunRow, createUser } from '../support/factories.ts';
 import { decideBuild } from '../../server/services/review.service.ts';
 import { toActor } from '../../server/services/user.service.ts';
@@ -12,8 +12,7 @@ import { CalibrationRun } from '../../server/models/calibration-run.model.ts';
 const DAY = 86_400_000;
 
 describe('journey: a moderator decides a build with its runs from the builds tab', () => {
-  let live: LiveApp;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
+  const j = journey();
   const tag = randomBytes(3).toString('hex');
   let combined: Awaited<ReturnType<typeof createBuildRow>>;
   let resubmitted: Awaited<ReturnType<typeof createBuildRow>>;
@@ -22,8 +21,6 @@ describe('journey: a moderator decides a build with its runs from the builds tab
   const earlierNote = `Say how the coarse approach is geared (${tag}).`;
 
   beforeAll(async () => {
-    live = await startLiveApp();
-    browser = await launchBrowser();
     const owner = await createUser();
     combined = await createBuildRow(owner.id, { status: 'submitted', title: `Bimorph stage ${tag}` });
     await combined.update({ submittedAt: new Date(Date.now() - 20 * DAY) });
@@ -58,20 +55,11 @@ describe('journey: a moderator decides a build with its runs from the builds tab
       { where: { id: edited.id } },
     );
   });
-  afterAll(async () => {
-    await browser?.close();
-    await live?.close();
-  });
 
   test('when the moderator previews and confirms publish-with-runs, then the clean runs are accepted and the flagged one waits; a resubmission shows its diff', async () => {
-    const { page } = browser;
-    const errors: string[] = [];
-    page.on('pageerror', (e) => errors.push(e.message));
-    page.on('console', (m) => {
-      if (m.type() === 'error') errors.push(m.text());
-    });
+    const { page } = j.browser;
     await page.setViewportSize({ width: 1366, height: 900 });
-    await page.goto(`${live.baseUrl}/auth/github?login=demo-moderator&returnTo=/review?queue=builds`);
+    await page.goto(`${j.live.baseUrl}/auth/github?login=demo-moderator&returnTo=/review?queue=builds`);
     await page.getByTestId('signed-in-login').filter({ hasText: 'demo-moderator' }).waitFor();
     await page.getByRole('heading', { level: 1, name: 'Review desk' }).waitFor();
     const rowOf = (title: string) => page.getByRole('list').getByRole('button', { name: new RegExp(title) });
@@ -139,11 +127,11 @@ describe('journey: a moderator decides a build with its runs from the builds tab
     await panel.getByLabel('Write-up changes').locator('ins', { hasText: 'leaf spring' }).first().waitFor();
     await snapshot(page, 'review-desk-edited-1366');
 
-    await page.goto(`${live.baseUrl}/review?queue=builds&item=${resubmitted.id}`);
+    await page.goto(`${j.live.baseUrl}/review?queue=builds&item=${resubmitted.id}`);
     await panel.getByRole('blockquote').filter({ hasText: earlierNote }).waitFor();
     await page.setViewportSize({ width: 390, height: 844 });
     await snapshot(page, 'review-desk-resubmitted-390');
     await page.setViewportSize({ width: 1280, height: 860 });
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   }, 150_000);
 });

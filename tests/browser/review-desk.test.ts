@@ -1,7 +1,7 @@
 import { randomBytes } from 'node:crypto';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { beforeAll, describe, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
-import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
+import { journey, snapshot } from '../support/browser.ts';
 import { createBuildRow, createPart, createRunRow, createUser } from '../support/factories.ts';
 
 const DAY = 86_400_000;
@@ -15,8 +15,7 @@ async function signInAsDemo(page: Page, baseUrl: string, login: string) {
 }
 
 describe('journey: a moderator works the review desk', () => {
-  let live: LiveApp;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
+  const j = journey();
   const tag = randomBytes(3).toString('hex');
   let owner: Awaited<ReturnType<typeof createUser>>;
   let toPublish: Awaited<ReturnType<typeof createBuildRow>>;
@@ -25,8 +24,6 @@ describe('journey: a moderator works the review desk', () => {
   const note = `Please add a photo of the bimorph clamp and say which indicator you used (${tag}).`;
 
   beforeAll(async () => {
-    live = await startLiveApp();
-    browser = await launchBrowser();
     owner = await createUser();
     const part = await createPart({ name: `Cartridge bimorph ${tag}` });
     partName = part.name;
@@ -47,20 +44,11 @@ describe('journey: a moderator works the review desk', () => {
       note: `Looks like µm entered as nm (${tag}).`,
     });
   });
-  afterAll(async () => {
-    await browser?.close();
-    await live?.close();
-  });
 
   test('when demo-moderator publishes one submitted build and returns another with a note, then the owner reads the note', async () => {
-    const { page } = browser;
-    const errors: string[] = [];
-    page.on('pageerror', (e) => errors.push(e.message));
-    page.on('console', (m) => {
-      if (m.type() === 'error') errors.push(m.text());
-    });
+    const { page } = j.browser;
 
-    await signInAsDemo(page, live.baseUrl, 'demo-moderator');
+    await signInAsDemo(page, j.live.baseUrl, 'demo-moderator');
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Review desk' }).click();
     await page.getByRole('heading', { level: 1, name: 'Review desk' }).waitFor();
     await page.getByRole('tab', { name: /Builds submitted/ }).click();
@@ -89,7 +77,7 @@ describe('journey: a moderator works the review desk', () => {
       .filter({ hasText: `Returned with notes: ${toReturn.title}.` })
       .waitFor();
     await rowOf(toReturn.title).waitFor({ state: 'detached' });
-    const mail = await live.t.mail.waitFor((m) => m.subject.includes(toReturn.title));
+    const mail = await j.live.t.mail.waitFor((m) => m.subject.includes(toReturn.title));
     expect(mail.text).toContain(note);
 
     await page.getByRole('tab', { name: /Calibration runs pending/ }).click();
@@ -125,24 +113,24 @@ describe('journey: a moderator works the review desk', () => {
     await snapshot(page, 'review-audit-1280');
 
     await page.setViewportSize({ width: 390, height: 844 });
-    await page.goto(`${live.baseUrl}/review?queue=builds`);
+    await page.goto(`${j.live.baseUrl}/review?queue=builds`);
     await panel.waitFor();
     await panel.getByText('Loading the build…').waitFor({ state: 'hidden' });
     await snapshot(page, 'review-desk-build-390');
-    await page.goto(`${live.baseUrl}/review?queue=runs`);
+    await page.goto(`${j.live.baseUrl}/review?queue=runs`);
     await rowOf(partName).click();
     await panel.getByText('Quartiles and median').waitFor();
     await snapshot(page, 'review-desk-run-390');
-    await page.goto(`${live.baseUrl}/review/audit`);
+    await page.goto(`${j.live.baseUrl}/review/audit`);
     await page.getByRole('row').filter({ hasText: note }).waitFor();
     await snapshot(page, 'review-audit-390');
     await page.setViewportSize({ width: 1280, height: 860 });
 
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByRole('link', { name: 'Sign in', exact: true }).first().waitFor();
-    await page.goto(`${live.baseUrl}/auth/github?login=${owner.login}`);
+    await page.goto(`${j.live.baseUrl}/auth/github?login=${owner.login}`);
     await page.getByTestId('signed-in-login').filter({ hasText: owner.login }).waitFor();
-    await page.goto(`${live.baseUrl}/builds/mine`);
+    await page.goto(`${j.live.baseUrl}/builds/mine`);
     const returned = page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: toReturn.title }) });
     await returned.getByText(note).waitFor();
     await page
@@ -153,7 +141,7 @@ describe('journey: a moderator works the review desk', () => {
       .waitFor();
     await snapshot(page, 'review-returned-owner-1280');
 
-    await page.goto(`${live.baseUrl}/review`);
+    await page.goto(`${j.live.baseUrl}/review`);
     await page.getByText('Only moderators can open the review desk').waitFor();
 
     await page.getByRole('link', { name: 'Mail settings' }).click();
@@ -169,6 +157,6 @@ describe('journey: a moderator works the review desk', () => {
     await page.getByRole('button', { name: 'Menu' }).click();
     await snapshot(page, 'account-menu-390', { fullPage: false });
     await page.setViewportSize({ width: 1280, height: 860 });
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   }, 150_000);
 });

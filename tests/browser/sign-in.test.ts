@@ -1,27 +1,13 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
+import { describe, expect, test } from 'vitest';
+import { journey, snapshot } from '../support/browser.ts';
 
 describe('journey: a moderator signs in and out', () => {
-  let live: LiveApp;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
-  beforeAll(async () => {
-    live = await startLiveApp();
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await live?.close();
-  });
+  const j = journey();
 
   test('when demo-moderator signs in through the stand-in page, then the review desk shows in the navigation, and sign-out removes it', async () => {
-    const { page } = browser;
-    const errors: string[] = [];
-    page.on('pageerror', (e) => errors.push(e.message));
-    page.on('console', (m) => {
-      if (m.type() === 'error') errors.push(m.text());
-    });
+    const { page } = j.browser;
 
-    await page.goto(live.baseUrl);
+    await page.goto(j.live.baseUrl);
     await expect(page.getByRole('heading', { level: 1 }).textContent()).resolves.toContain('Measure it once');
     const nav = page.getByRole('navigation', { name: 'Main' });
     expect(await nav.getByRole('link', { name: 'Review desk' }).count()).toBe(0);
@@ -32,7 +18,7 @@ describe('journey: a moderator signs in and out', () => {
     await snapshot(page, 'stand-in-picker', { fullPage: false });
     await page.getByRole('button', { name: /demo-moderator/ }).click();
 
-    await page.waitForURL(`${live.baseUrl}/`);
+    await page.waitForURL(`${j.live.baseUrl}/`);
     await snapshot(page, 'after-sign-in');
     await page.getByTestId('signed-in-login').waitFor();
     expect(await page.getByTestId('signed-in-login').textContent()).toBe('demo-moderator');
@@ -42,18 +28,18 @@ describe('journey: a moderator signs in and out', () => {
     await snapshot(page, 'home-moderator');
 
     // Once the server has ended the session, the page reads it again.
-    const reread = page.waitForResponse((r) => r.url() === `${live.baseUrl}/api/session`);
+    const reread = page.waitForResponse((r) => r.url() === `${j.live.baseUrl}/api/session`);
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByRole('link', { name: 'Sign in', exact: true }).first().waitFor();
     expect(await nav.getByRole('link', { name: 'Review desk' }).count()).toBe(0);
     expect(((await (await reread).json()) as { user: unknown }).user).toBeNull();
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 
   test('when a phone-width visitor opens the menu, then the navigation is reachable', async () => {
-    const { page } = browser;
+    const { page } = j.browser;
     await page.setViewportSize({ width: 390, height: 800 });
-    await page.goto(`${live.baseUrl}/no/such/page`);
+    await page.goto(`${j.live.baseUrl}/no/such/page`);
     await page.getByRole('heading', { name: 'No page at this address' }).waitFor();
     await page.getByRole('button', { name: 'Menu' }).click();
     await page.locator('#mobile-nav').getByRole('link', { name: 'Workbench' }).waitFor();

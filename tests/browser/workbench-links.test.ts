@@ -1,29 +1,18 @@
 // Workbench inputs live in the URL: a reload keeps them, a shared link opens the same result, a part page
 // starts the expected-gain page, and a maker saves the mixer's matrix onto an XY pair of a build.
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { expectedGainCalculator } from '../../shared/workbench/calculators/expected-gain-calculator.ts';
 import { formatWithUncertainty } from '../../shared/format/measured-number.ts';
-import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
+import { journey, snapshot } from '../support/browser.ts';
 import { createBuildRow, createPart, createUser } from '../support/factories.ts';
 import { signIn } from '../support/login.ts';
 
 describe('journey: workbench links', () => {
-  let live: LiveApp;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
-  const errors: string[] = [];
-  beforeAll(async () => {
-    live = await startLiveApp();
-    browser = await launchBrowser();
-    browser.page.on('pageerror', (e) => errors.push(e.message));
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await live?.close();
-  });
+  const j = journey();
 
   test('when inputs are typed on the expected-gain page, then a reload and a shared link keep the inputs and the result', async () => {
-    const { page, context } = browser;
-    await page.goto(`${live.baseUrl}/workbench/expected-gain`);
+    const { page, context } = j.browser;
+    await page.goto(`${j.live.baseUrl}/workbench/expected-gain`);
     await page.getByRole('heading', { level: 1, name: 'Expected gain' }).waitFor();
     await page.getByRole('textbox', { name: 'Free length L (mm)', exact: true }).fill('20');
     await page.getByLabel(/Measured gain/).fill('250');
@@ -53,15 +42,15 @@ describe('journey: workbench links', () => {
     await shared.close();
 
     // A bad param falls back to its default: the page still opens and computes.
-    await page.goto(`${live.baseUrl}/workbench/expected-gain?spec.lengthMm=abc&actuator=warp&materialKey=PZT-5H`);
+    await page.goto(`${j.live.baseUrl}/workbench/expected-gain?spec.lengthMm=abc&actuator=warp&materialKey=PZT-5H`);
     await page.getByRole('heading', { level: 1, name: 'Expected gain' }).waitFor();
     expect(await page.getByRole('textbox', { name: 'Free length L (mm)', exact: true }).inputValue()).toBe('12');
     expect(await page.getByLabel('Piezoceramic').inputValue()).toBe('PZT-5H');
   });
 
   test('when typed points are on the gain-fit page, then a reload keeps them; a pasted CSV says it is not kept', async () => {
-    const { page } = browser;
-    await page.goto(`${live.baseUrl}/workbench/fit?pts=0,0,u;5,520,u;10,1010,u;5,540,d;0,15,d&displacementUnit=nm`);
+    const { page } = j.browser;
+    await page.goto(`${j.live.baseUrl}/workbench/fit?pts=0,0,u;5,520,u;10,1010,u;5,540,d;0,15,d&displacementUnit=nm`);
     await page.getByRole('heading', { level: 1, name: 'Gain fit' }).waitFor();
     const gain = page.getByRole('status', { name: 'Gain' });
     await gain.waitFor();
@@ -73,9 +62,9 @@ describe('journey: workbench links', () => {
   });
 
   test('when a part page links to the workbench, then the expected-gain page opens with its geometry', async () => {
-    const { page } = browser;
+    const { page } = j.browser;
     const part = await createPart({ name: `Link bar ${Date.now()}`, lengthMm: 15, thicknessMm: 0.5 });
-    await page.goto(`${live.baseUrl}/parts/${part.id}`);
+    await page.goto(`${j.live.baseUrl}/parts/${part.id}`);
     await page.getByRole('navigation', { name: 'Open in the workbench' }).getByRole('link', { name: 'Expected gain' }).click();
     await page.getByRole('heading', { level: 1, name: 'Expected gain' }).waitFor();
     expect(await page.getByRole('textbox', { name: 'Free length L (mm)', exact: true }).inputValue()).toBe('15');
@@ -83,20 +72,20 @@ describe('journey: workbench links', () => {
   });
 
   test('when a maker saves the mixer result onto an XY pair, then the build page shows the drive matrix and its region', async () => {
-    const { page } = browser;
+    const { page } = j.browser;
     const maker = await createUser();
     const build = await createBuildRow(maker.id, { status: 'draft', title: `Mixer rig ${Date.now()}` });
     const part = await createPart();
-    const agent = await signIn(live.t, maker.login);
+    const agent = await signIn(j.live.t, maker.login);
     const created = await agent
       .post(`/api/builds/${build.id}/actuators`)
       .set('X-CSRF-Token', agent.csrf)
       .send({ partId: part.id, axis: 'XY', drive: 'pair-anti-phase', label: 'Tip pair' });
     expect(created.status).toBe(201);
 
-    await page.goto(`${live.baseUrl}/auth/github?login=${maker.login}`);
+    await page.goto(`${j.live.baseUrl}/auth/github?login=${maker.login}`);
     await page.getByTestId('signed-in-login').waitFor();
-    await page.goto(`${live.baseUrl}/workbench/mixing?vaMinV=-100&vaMaxV=100&vbMinV=-100&vbMaxV=100&offsetXNm=40&offsetYNm=-25`);
+    await page.goto(`${j.live.baseUrl}/workbench/mixing?vaMinV=-100&vaMaxV=100&vbMinV=-100&vbMaxV=100&offsetXNm=40&offsetYNm=-25`);
     await page.getByRole('heading', { level: 1, name: 'Two-axis mixer' }).waitFor();
     const panel = page.getByRole('region', { name: 'Save onto an actuator' });
     await panel.getByLabel('Build').selectOption(String(build.id));
@@ -112,6 +101,6 @@ describe('journey: workbench links', () => {
     // Limits ±100 V cross 42.4 V peak [S: IEC 61010-1, 6.3.1 — memory for the clause]
     await matrix.getByText('Hazardous voltage', { exact: false }).first().waitFor();
     expect(await matrix.textContent()).toMatch(/Offsets x₀, y₀\s*40(\.0*)?, [−-]25(\.0*)? nm/);
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 });

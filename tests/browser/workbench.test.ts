@@ -1,9 +1,9 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import type { Page } from 'playwright-core';
 import { fitCalibrationInUnits } from '../../shared/workbench/calibration-fit.ts';
 import type { DisplacementUnit } from '../../shared/units.ts';
 import { formatWithUncertainty } from '../../shared/format/measured-number.ts';
-import { launchBrowser, startLiveApp, snapshot, type LiveApp } from '../support/browser.ts';
+import { journey, snapshot } from '../support/browser.ts';
 import { workbenchTools } from '../../src/features/workbench/tools.ts';
 
 // A bender run with up and down sweeps; one bad line (7) that must be left out and reported.
@@ -44,25 +44,11 @@ async function noHorizontalScroll(page: Page): Promise<boolean> {
 }
 
 describe('journey: a visitor uses the workbench', () => {
-  let live: LiveApp;
-  let browser: Awaited<ReturnType<typeof launchBrowser>>;
-  const errors: string[] = [];
-  beforeAll(async () => {
-    live = await startLiveApp();
-    browser = await launchBrowser();
-    browser.page.on('pageerror', (e) => errors.push(e.message));
-    browser.page.on('console', (m) => {
-      if (m.type() === 'error') errors.push(m.text());
-    });
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await live?.close();
-  });
+  const j = journey();
 
   test('when a CSV with up and down sweeps is pasted on the fit page, then the gain and the plot show, and a unit change changes the gain', async () => {
-    const { page } = browser;
-    await page.goto(`${live.baseUrl}/workbench`);
+    const { page } = j.browser;
+    await page.goto(`${j.live.baseUrl}/workbench`);
     await page.getByRole('heading', { level: 1, name: 'Workbench' }).waitFor();
     await snapshot(page, 'workbench-index-desktop');
 
@@ -82,12 +68,12 @@ describe('journey: a visitor uses the workbench', () => {
     await page.getByLabel('Displacement unit').selectOption('um');
     await gain.filter({ hasText: expectedGain('um') }).waitFor();
     expect(expectedGain('um')).not.toBe(expectedGain('nm'));
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 
   test('when the scan planner amplifier output crosses 42.4 V peak (IEC 61010-1), then the caution shows, and not below', async () => {
-    const { page } = browser;
-    await page.goto(`${live.baseUrl}/workbench/scan-planner`);
+    const { page } = j.browser;
+    await page.goto(`${j.live.baseUrl}/workbench/scan-planner`);
     const amp = page.getByLabel('Amplifier gain (V/V)');
     await amp.fill('1');
     // 102.6 nm/V × 10 V / 2^16 = 0.01566 nm [calc]
@@ -100,16 +86,16 @@ describe('journey: a visitor uses the workbench', () => {
     expect(await caution.textContent()).toContain('local electrical codes or qualified practice');
     await page.getByRole('figure', { name: 'Step against DAC bits' }).locator('[data-drawn-at]').first().waitFor();
     await snapshot(page, 'workbench-scan-planner-desktop');
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   });
 
   test('when every calculator opens at desktop and at 390 px, then each shows a result and the phone page does not scroll sideways', async () => {
-    const { page } = browser;
+    const { page } = j.browser;
     for (const width of [1280, 390]) {
       await page.setViewportSize({ width, height: 860 });
       const tag = width === 390 ? 'phone' : 'desktop';
       for (const slug of slugs) {
-        await page.goto(`${live.baseUrl}/workbench/${slug}`);
+        await page.goto(`${j.live.baseUrl}/workbench/${slug}`);
         await page.getByRole('heading', { level: 1 }).waitFor();
         await page
           .getByRole('region', { name: /Results|Displacement/ })
@@ -123,10 +109,10 @@ describe('journey: a visitor uses the workbench', () => {
         expect(await noHorizontalScroll(page), `${slug} at ${width} px`).toBe(true);
       }
     }
-    await page.goto(`${live.baseUrl}/workbench`);
+    await page.goto(`${j.live.baseUrl}/workbench`);
     await page.getByRole('heading', { level: 1, name: 'Workbench' }).waitFor();
     await snapshot(page, 'workbench-index-phone');
     await page.setViewportSize({ width: 1280, height: 860 });
-    expect(errors).toEqual([]);
+    expect(j.errors).toEqual([]);
   }, 240_000);
 });

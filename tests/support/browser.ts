@@ -17,7 +17,7 @@ export interface LiveApp {
 }
 
 /** The real built app (dist/client) listening on a free loopback port, demo accounts seeded. */
-export async function startLiveApp(): Promise<LiveApp> {
+async function startLiveApp(): Promise<LiveApp> {
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
   const uploadsDir = process.env.TEST_UPLOADS_DIR ?? mkdtempSync(join(tmpdir(), 'scanwright-live-uploads-'));
@@ -71,7 +71,7 @@ function sharedChromium(): Promise<Browser> {
 }
 
 /** Debian's chromium through playwright-core, with a fresh context (no cookies, storage or cache) per journey. */
-export async function launchBrowser(
+async function launchBrowser(
   options: { bypassCSP?: boolean } = {},
 ): Promise<{ context: BrowserContext; page: Page; close(): Promise<void> }> {
   const context = await (
@@ -110,16 +110,18 @@ export interface Journey {
 
 /**
  * Starts the live app and a browser before a describe block's tests and closes both after, collecting
- * console and page errors (tests end with `expect(j.errors).toEqual([])`). Call it inside `describe`.
+ * console and page errors (tests end with `expect(j.errors).toEqual([])`). Call it inside `describe`; a `beforeAll`
+ * after it runs once the app is up. `expectedConsole` matches console errors the journey provokes on purpose (the
+ * browser logs every 4xx answer, e.g. a page for a hidden build), which are not collected.
  */
-export function journey(options: { bypassCSP?: boolean } = {}): Journey {
+export function journey(options: { bypassCSP?: boolean; expectedConsole?: RegExp } = {}): Journey {
   const j = { errors: [] as string[] } as Journey;
   beforeAll(async () => {
     j.live = await startLiveApp();
-    j.browser = await launchBrowser(options);
+    j.browser = await launchBrowser({ bypassCSP: options.bypassCSP });
     j.browser.page.on('pageerror', (e) => j.errors.push(e.message));
     j.browser.page.on('console', (m) => {
-      if (m.type() === 'error') j.errors.push(m.text());
+      if (m.type() === 'error' && !options.expectedConsole?.test(m.text())) j.errors.push(m.text());
     });
   });
   afterAll(async () => {
