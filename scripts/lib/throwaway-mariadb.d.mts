@@ -6,7 +6,7 @@ export interface ThrowawayMariaDb {
   socket: string;
   /** The server's own TMPDIR, inside `dir`. */
   tmp: string;
-  /** Where to connect: the database and user made at start (name undefined when none was asked for). */
+  /** Where to connect: the database and user made at start (`name` is set only when `database` was given). */
   db: { host: string; port: number; name: string; user: string; password: string };
   /** Start mariadbd again on the same data directory and port (nothing when it runs). */
   start(): Promise<void>;
