@@ -1,5 +1,5 @@
 // Route table rows (route-docs.ts): signing in and out and the session.
-import { json, noContent, type RouteDoc } from './route-doc.ts';
+import { json, type RouteDoc } from './route-doc.ts';
 
 /** Signing in and out and the session. */
 export const sessionDocs: readonly RouteDoc[] = [
@@ -30,5 +30,13 @@ export const sessionDocs: readonly RouteDoc[] = [
     auth: 'visitor',
     response: { status: 302, description: 'Redirect into the app, signed in.' },
   },
-  { method: 'POST', path: '/auth/logout', summary: 'Sign out', tag: 'Session', auth: 'session', response: noContent('Signed out.') },
+  {
+    method: 'POST',
+    path: '/auth/logout',
+    summary: 'Sign out',
+    description: 'Ends the signed-in session and starts an empty one, whose CSRF token the answer carries.',
+    tag: 'Session',
+    auth: 'session',
+    response: json(200, '`{ user: null, csrfToken }`.'),
+  },
 ];

@@ -41,12 +41,16 @@ describe('CSRF', () => {
     await t.close();
   });
 
-  test('when logout carries the token, then 204 and the session is gone server-side', async () => {
+  test('when logout carries the token, then the answer is a new signed-out session with its own token, and the old one is gone server-side', async () => {
     const u = await createUser();
     const agent = await signIn(t, u.login);
     const cookie = (await agent.get('/api/session')).request.cookies;
-    await agent.post('/auth/logout').set('X-CSRF-Token', agent.csrf).expect(204);
-    expect((await agent.get('/api/session')).body.user).toBeNull();
+    const out = await agent.post('/auth/logout').set('X-CSRF-Token', agent.csrf).expect(200);
+    // The answer is the new, empty session: signed out, with a fresh CSRF token that the next read repeats.
+    expect(out.body).toEqual({ user: null, csrfToken: expect.any(String) });
+    expect(out.body.csrfToken).not.toBe(agent.csrf);
+    expect(out.headers['cache-control']).toBe('no-store');
+    expect(await agent.get('/api/session').then((r) => r.body)).toEqual({ user: null, csrfToken: out.body.csrfToken });
     // Replaying the old cookie does not bring the session back.
     const replay = await request(t.app).get('/api/session').set('Cookie', cookie);
     expect(replay.body.user).toBeNull();

@@ -41,7 +41,7 @@ describe('logout', () => {
     const sid = sidOf(agent);
     expect(await sessionRows(t, { sid })).toBe(1);
     const cookie = sessionCookie(agent)!;
-    await agent.post('/auth/logout').set('X-CSRF-Token', agent.csrf).expect(204);
+    await agent.post('/auth/logout').set('X-CSRF-Token', agent.csrf).expect(200);
     expect(await sessionRows(t, { sid })).toBe(0);
     expect(await sessionRows(t, { userId: user!.id })).toBe(0);
     const replay = await request(t.app).get('/api/session').set('Cookie', cookie);

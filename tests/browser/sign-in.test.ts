@@ -4,7 +4,7 @@ import { journey, snapshot } from '../support/browser.ts';
 describe('journey: a moderator signs in and out', () => {
   const j = journey();
 
-  test('when demo-moderator signs in through the stand-in page, then the review desk shows in the navigation, and sign-out removes it', async () => {
+  test('when demo-moderator signs in through the stand-in page, then the review desk shows in the navigation, sign-out removes it, and signing in again at once works', async () => {
     const { page } = j.browser;
 
     await page.goto(j.live.baseUrl);
@@ -27,12 +27,19 @@ describe('journey: a moderator signs in and out', () => {
     expect(await nav.getByRole('link', { name: 'Admin' }).count()).toBe(0);
     await snapshot(page, 'home-moderator');
 
-    // Once the server has ended the session, the page reads it again.
-    const reread = page.waitForResponse((r) => r.url() === `${j.live.baseUrl}/api/session`);
+    // The logout's answer is the new signed-out session: the page reads nothing more, so signing in again at once
+    // cannot race a session read that would set its own cookie over the sign-in's.
+    const logout = page.waitForResponse((r) => r.url() === `${j.live.baseUrl}/auth/logout`);
+    const sessionReads: string[] = [];
+    page.on('request', (r) => void (r.url() === `${j.live.baseUrl}/api/session` && sessionReads.push(r.url())));
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByRole('link', { name: 'Sign in', exact: true }).first().waitFor();
     expect(await nav.getByRole('link', { name: 'Review desk' }).count()).toBe(0);
-    expect(((await (await reread).json()) as { user: unknown }).user).toBeNull();
+    expect(await (await logout).json()).toEqual({ user: null, csrfToken: expect.any(String) });
+    await page.getByRole('link', { name: 'Sign in', exact: true }).first().click();
+    await page.getByRole('button', { name: /demo-maker/ }).click();
+    await page.getByTestId('signed-in-login').filter({ hasText: 'demo-maker' }).waitFor();
+    expect(sessionReads).toHaveLength(1); // the new page's own first read, none left over from signing out
     expect(j.errors).toEqual([]);
   });
 
