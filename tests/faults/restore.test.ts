@@ -9,7 +9,7 @@
 //   - no answer is a 5xx other than 503, reads keep answering 200, and no mail is delivered twice.
 import { spawn } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { request as httpRequest, type Server, Agent } from 'node:http';
+import { request as httpRequest, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -19,6 +19,7 @@ import { signIn } from '../support/login.ts';
 import { createUser } from '../support/factories.ts';
 import { waitFor } from '../support/wait-for.ts';
 import { startPrivateMariaDb, type PrivateMariaDb } from '../support/private-mariadb.ts';
+import { keepAliveAgent } from '../support/keep-alive-agent.ts';
 import { OutboxMail } from '../../server/models/outbox-mail.model.ts';
 
 interface Outcome {
@@ -39,7 +40,7 @@ let t: TestApp;
 let server: Server;
 let port: number;
 let backups: string;
-const agent = new Agent({ keepAlive: true, maxSockets: 16 });
+const agent = keepAliveAgent(16);
 const pause = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
 function call(what: string, path: string, opts: { method?: string; as?: Who; json?: unknown } = {}): Promise<Outcome> {
