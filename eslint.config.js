@@ -80,6 +80,19 @@ export default tseslint.config(
     },
   },
   {
+    files: ['src/**'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        {
+          // Sign-out and leaving a page cancel reads; only a read that was handed the signal is really stopped.
+          selector: "Property[key.name='queryFn'] > ArrowFunctionExpression[params.length=0]",
+          message: 'Take the query context and pass its signal to the API client: queryFn: ({ signal }) => api.get(path, { signal }).',
+        },
+      ],
+    },
+  },
+  {
     files: ['scripts/**', 'server/cli/**', 'server/index.ts', 'server/dev/**'],
     rules: { 'no-console': 'off' },
   },

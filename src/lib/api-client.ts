@@ -33,7 +33,12 @@ async function fetchCsrfToken(): Promise<string> {
 
 type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
 
-async function request<T>(method: Method, path: string, body?: unknown, retried = false): Promise<T> {
+/** Options of a read: an AbortSignal, which TanStack Query fires when the read is cancelled or no longer wanted. */
+export interface ReadOptions {
+  signal?: AbortSignal;
+}
+
+async function request<T>(method: Method, path: string, body?: unknown, signal?: AbortSignal, retried = false): Promise<T> {
   const headers: Record<string, string> = { Accept: 'application/json' };
   if (body !== undefined) headers['Content-Type'] = 'application/json';
   if (method !== 'GET') headers['X-CSRF-Token'] = await currentCsrfToken();
@@ -42,6 +47,7 @@ async function request<T>(method: Method, path: string, body?: unknown, retried 
     headers,
     credentials: 'same-origin',
     body: body === undefined ? undefined : JSON.stringify(body),
+    signal,
   });
   if (res.status === 204) return undefined as T;
   const parsed = parseJson(await res.text());
@@ -49,7 +55,7 @@ async function request<T>(method: Method, path: string, body?: unknown, retried 
     const err = toApiError(res.status, parsed);
     if (isCsrfFailure(err) && !retried) {
       await fetchCsrfToken();
-      return request<T>(method, path, body, true);
+      return request<T>(method, path, body, signal, true);
     }
     throw err;
   }
@@ -74,7 +80,7 @@ function toApiError(status: number, parsed: unknown): ApiError {
 const isCsrfFailure = (err: ApiError) => err.status === 403 && err.code === 'csrf_failed';
 
 export const api = {
-  get: <T>(path: string) => request<T>('GET', path),
+  get: <T>(path: string, options: ReadOptions = {}) => request<T>('GET', path, undefined, options.signal),
   post: <T>(path: string, body?: unknown) => request<T>('POST', path, body ?? {}),
   patch: <T>(path: string, body: unknown) => request<T>('PATCH', path, body),
   put: <T>(path: string, body: unknown) => request<T>('PUT', path, body),

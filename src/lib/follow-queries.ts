@@ -8,12 +8,12 @@ export const followQueries = {
   state: (type: FollowTargetType, id: number) =>
     queryOptions({
       queryKey: ['follows', 'state', type, id] as const,
-      queryFn: () => api.get<FollowStateDto>(`/api/follows/${type}/${id}`),
+      queryFn: ({ signal }) => api.get<FollowStateDto>(`/api/follows/${type}/${id}`, { signal }),
     }),
   mine: () =>
     queryOptions({
       queryKey: ['follows', 'mine'] as const,
-      queryFn: () => api.get<{ items: FollowDto[] }>('/api/follows/mine'),
+      queryFn: ({ signal }) => api.get<{ items: FollowDto[] }>('/api/follows/mine', { signal }),
     }),
 };
 

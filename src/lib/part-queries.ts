@@ -11,17 +11,20 @@ export const partQueries = {
   list: (p: Partial<ListPartsQuery>) =>
     queryOptions({
       queryKey: ['parts', 'list', p] as const,
-      queryFn: () => api.get<PartListDto>(`/api/parts${toQuery(p)}`),
+      queryFn: ({ signal }) => api.get<PartListDto>(`/api/parts${toQuery(p)}`, { signal }),
       placeholderData: keepPreviousData,
     }),
   histogram: () =>
     queryOptions({
       queryKey: ['parts', 'histogram'] as const,
-      queryFn: () => api.get<GainHistogramDto>('/api/parts/histogram'),
+      queryFn: ({ signal }) => api.get<GainHistogramDto>('/api/parts/histogram', { signal }),
       staleTime: 5 * 60_000,
     }),
   detail: (id: number) =>
-    queryOptions({ queryKey: ['parts', 'detail', id] as const, queryFn: () => api.get<PartDetailDto>(`/api/parts/${id}`) }),
+    queryOptions({
+      queryKey: ['parts', 'detail', id] as const,
+      queryFn: ({ signal }) => api.get<PartDetailDto>(`/api/parts/${id}`, { signal }),
+    }),
 };
 
 /** Address of a download of the whole current search (all pages) as CSV or JSON; the server names the file. */

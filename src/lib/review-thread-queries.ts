@@ -6,7 +6,7 @@ import { api } from './api-client.ts';
 export const reviewThreadQuery = (buildId: number) =>
   queryOptions({
     queryKey: ['review-thread', buildId] as const,
-    queryFn: () => api.get<ReviewThreadDto>(`/api/builds/${buildId}/review-thread`),
+    queryFn: ({ signal }) => api.get<ReviewThreadDto>(`/api/builds/${buildId}/review-thread`, { signal }),
   });
 
 export function usePostToReviewThread(buildId: number) {

@@ -121,7 +121,10 @@ export function journey(options: { bypassCSP?: boolean; expectedConsole?: RegExp
     j.browser = await launchBrowser({ bypassCSP: options.bypassCSP });
     j.browser.page.on('pageerror', (e) => j.errors.push(e.message));
     j.browser.page.on('console', (m) => {
-      if (m.type() === 'error' && !options.expectedConsole?.test(m.text())) j.errors.push(m.text());
+      // A failed load names only its status; the resource's address says which read it was.
+      const where = m.location().url;
+      const text = /^Failed to load resource/.test(m.text()) && where ? `${m.text()} (${where})` : m.text();
+      if (m.type() === 'error' && !options.expectedConsole?.test(text)) j.errors.push(text);
     });
   });
   afterAll(async () => {

@@ -14,7 +14,7 @@ export const accountKeys = { all: ['account'] as const };
 
 export const accountSettingsQuery = queryOptions({
   queryKey: [...accountKeys.all, 'settings'] as const,
-  queryFn: () => api.get<AccountSettingsDto>('/api/account/settings'),
+  queryFn: ({ signal }) => api.get<AccountSettingsDto>('/api/account/settings', { signal }),
 });
 
 export const useAccountSettings = (enabled: boolean) => useQuery({ ...accountSettingsQuery, enabled });

@@ -6,7 +6,7 @@ import { accountKeys } from './get-account-settings.ts';
 /** The signed-in person's rig tokens (names, scopes and dates; never the secrets). */
 export const apiTokensQuery = queryOptions({
   queryKey: [...accountKeys.all, 'tokens'] as const,
-  queryFn: () => api.get<ApiTokenDto[]>('/api/account/tokens'),
+  queryFn: ({ signal }) => api.get<ApiTokenDto[]>('/api/account/tokens', { signal }),
 });
 
 export const useApiTokens = () => useQuery(apiTokensQuery);

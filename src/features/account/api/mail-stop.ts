@@ -6,7 +6,7 @@ import { api } from '@/lib/api-client.ts';
 export const mailStopQuery = (tail: string) =>
   queryOptions({
     queryKey: ['mail-stop', tail] as const,
-    queryFn: () => api.get<UnsubscribeStateDto>(`/api/mail/unsubscribe/${tail}`),
+    queryFn: ({ signal }) => api.get<UnsubscribeStateDto>(`/api/mail/unsubscribe/${tail}`, { signal }),
     retry: false,
   });
 

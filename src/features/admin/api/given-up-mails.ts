@@ -4,7 +4,11 @@ import { api } from '@/lib/api-client.ts';
 
 export const givenUpMailQueries = {
   all: ['admin', 'outbox', 'given-up'] as const,
-  list: () => queryOptions({ queryKey: givenUpMailQueries.all, queryFn: () => api.get<GivenUpMailListDto>('/api/admin/outbox/given-up') }),
+  list: () =>
+    queryOptions({
+      queryKey: givenUpMailQueries.all,
+      queryFn: ({ signal }) => api.get<GivenUpMailListDto>('/api/admin/outbox/given-up', { signal }),
+    }),
 };
 
 export const useGivenUpMails = () => useQuery(givenUpMailQueries.list());

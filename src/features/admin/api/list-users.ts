@@ -7,7 +7,7 @@ export const adminUserQueries = {
   list: (p: Partial<ListUsersQuery>) =>
     queryOptions({
       queryKey: [...adminUserQueries.all, p],
-      queryFn: () => api.get<AdminUserListDto>(`/api/admin/users${toQuery(p)}`),
+      queryFn: ({ signal }) => api.get<AdminUserListDto>(`/api/admin/users${toQuery(p)}`, { signal }),
       placeholderData: keepPreviousData,
     }),
 };

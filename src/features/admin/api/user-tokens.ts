@@ -8,7 +8,7 @@ export const adminTokenQueries = {
   list: (userId: number) =>
     queryOptions({
       queryKey: [...adminTokenQueries.all, userId],
-      queryFn: () => api.get<ApiTokenDto[]>(`/api/admin/users/${userId}/tokens`),
+      queryFn: ({ signal }) => api.get<ApiTokenDto[]>(`/api/admin/users/${userId}/tokens`, { signal }),
     }),
 };
 

@@ -4,7 +4,7 @@ import type { OpenApiDoc } from '../openapi-types.ts';
 
 const openApiQuery = queryOptions({
   queryKey: ['openapi'],
-  queryFn: () => api.get<OpenApiDoc>('/api/openapi.json'),
+  queryFn: ({ signal }) => api.get<OpenApiDoc>('/api/openapi.json', { signal }),
   staleTime: 5 * 60_000,
 });
 

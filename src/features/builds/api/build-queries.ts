@@ -8,10 +8,14 @@ export const buildQueries = {
   list: (p: Partial<ListBuildsQuery>) =>
     queryOptions({
       queryKey: ['builds', 'list', p] as const,
-      queryFn: () => api.get<BuildListDto>(`/api/builds${toQuery(p)}`),
+      queryFn: ({ signal }) => api.get<BuildListDto>(`/api/builds${toQuery(p)}`, { signal }),
       placeholderData: keepPreviousData,
     }),
-  mine: () => queryOptions({ queryKey: ['builds', 'mine'] as const, queryFn: () => api.get<BuildListDto>('/api/builds/mine') }),
+  mine: () =>
+    queryOptions({ queryKey: ['builds', 'mine'] as const, queryFn: ({ signal }) => api.get<BuildListDto>('/api/builds/mine', { signal }) }),
   detail: (id: number) =>
-    queryOptions({ queryKey: ['builds', 'detail', id] as const, queryFn: () => api.get<BuildDto>(`/api/builds/${id}`) }),
+    queryOptions({
+      queryKey: ['builds', 'detail', id] as const,
+      queryFn: ({ signal }) => api.get<BuildDto>(`/api/builds/${id}`, { signal }),
+    }),
 };

@@ -8,7 +8,7 @@ import { buildQueries } from './build-queries.ts';
 export const commentsQuery = (buildId: number) =>
   queryOptions({
     queryKey: [...buildQueries.all, 'comments', buildId] as const,
-    queryFn: () => api.get<{ items: BuildCommentDto[] }>(`/api/builds/${buildId}/comments`),
+    queryFn: ({ signal }) => api.get<{ items: BuildCommentDto[] }>(`/api/builds/${buildId}/comments`, { signal }),
   });
 
 export function useCreateComment(buildId: number) {

@@ -4,7 +4,7 @@ import { api } from '@/lib/api-client.ts';
 
 const dataLicenceQuery = queryOptions({
   queryKey: ['account', 'data-licence'],
-  queryFn: () => api.get<DataLicenceAcceptanceDto>('/api/account/data-licence'),
+  queryFn: ({ signal }) => api.get<DataLicenceAcceptanceDto>('/api/account/data-licence', { signal }),
   staleTime: 5 * 60_000,
   retry: false,
 });

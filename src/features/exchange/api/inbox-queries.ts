@@ -8,9 +8,13 @@ export const inboxQueries = {
   threads: () =>
     queryOptions({
       queryKey: ['inbox', 'threads'] as const,
-      queryFn: async () => (await api.get<{ threads: ThreadSummaryDto[] }>('/api/inbox')).threads,
+      queryFn: async ({ signal }) => (await api.get<{ threads: ThreadSummaryDto[] }>('/api/inbox', { signal })).threads,
       staleTime: 10_000,
     }),
   thread: (id: number) =>
-    queryOptions({ queryKey: ['inbox', 'thread', id] as const, queryFn: () => api.get<ThreadDto>(`/api/inbox/${id}`), staleTime: 0 }),
+    queryOptions({
+      queryKey: ['inbox', 'thread', id] as const,
+      queryFn: ({ signal }) => api.get<ThreadDto>(`/api/inbox/${id}`, { signal }),
+      staleTime: 0,
+    }),
 };

@@ -8,10 +8,17 @@ export const listingQueries = {
   list: (p: Partial<ListListingsQuery>) =>
     queryOptions({
       queryKey: ['listings', 'list', p] as const,
-      queryFn: () => api.get<ListingListDto>(`/api/listings${toQuery(p)}`),
+      queryFn: ({ signal }) => api.get<ListingListDto>(`/api/listings${toQuery(p)}`, { signal }),
       placeholderData: keepPreviousData,
     }),
-  mine: () => queryOptions({ queryKey: ['listings', 'mine'] as const, queryFn: () => api.get<ListingListDto>('/api/listings/mine') }),
+  mine: () =>
+    queryOptions({
+      queryKey: ['listings', 'mine'] as const,
+      queryFn: ({ signal }) => api.get<ListingListDto>('/api/listings/mine', { signal }),
+    }),
   detail: (id: number) =>
-    queryOptions({ queryKey: ['listings', 'detail', id] as const, queryFn: () => api.get<ListingDto>(`/api/listings/${id}`) }),
+    queryOptions({
+      queryKey: ['listings', 'detail', id] as const,
+      queryFn: ({ signal }) => api.get<ListingDto>(`/api/listings/${id}`, { signal }),
+    }),
 };

@@ -8,14 +8,15 @@ export const notificationQueries = {
   list: () =>
     infiniteQueryOptions({
       queryKey: ['notifications', 'list'] as const,
-      queryFn: ({ pageParam }) => api.get<NotificationsDto>(`/api/notifications${toQuery({ before: pageParam ?? undefined })}`),
+      queryFn: ({ pageParam, signal }) =>
+        api.get<NotificationsDto>(`/api/notifications${toQuery({ before: pageParam ?? undefined })}`, { signal }),
       initialPageParam: null as number | null,
       getNextPageParam: (last) => last.nextBefore,
     }),
   counts: () =>
     queryOptions({
       queryKey: ['notifications', 'counts'] as const,
-      queryFn: () => api.get<UnreadCountsDto>('/api/notifications/counts'),
+      queryFn: ({ signal }) => api.get<UnreadCountsDto>('/api/notifications/counts', { signal }),
       refetchInterval: 60_000,
     }),
 };

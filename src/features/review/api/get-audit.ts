@@ -10,7 +10,7 @@ export type AuditFilters = Partial<Omit<AuditQuery, 'pageSize'>>;
 export const auditQueryOptions = (filters: AuditFilters) =>
   queryOptions({
     queryKey: [...reviewKeys.all, 'audit', filters] as const,
-    queryFn: () => api.get<AuditListDto>(`/api/review/audit${toQuery(filters)}`),
+    queryFn: ({ signal }) => api.get<AuditListDto>(`/api/review/audit${toQuery(filters)}`, { signal }),
     placeholderData: keepPreviousData,
   });
 

@@ -7,7 +7,7 @@ import { reviewKeys } from './get-review-queue.ts';
 const reviewBuildRunsQuery = (buildId: number) =>
   queryOptions({
     queryKey: [...reviewKeys.all, 'build', buildId, 'runs'] as const,
-    queryFn: () => api.get<ReviewBuildRunsDto>(`/api/review/builds/${buildId}/runs`),
+    queryFn: ({ signal }) => api.get<ReviewBuildRunsDto>(`/api/review/builds/${buildId}/runs`, { signal }),
   });
 
 export const useReviewBuildRuns = (buildId: number) => useQuery(reviewBuildRunsQuery(buildId));

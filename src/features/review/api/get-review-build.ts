@@ -7,7 +7,7 @@ import { reviewKeys } from './get-review-queue.ts';
 export const reviewBuildQuery = (id: number) =>
   queryOptions({
     queryKey: [...reviewKeys.all, 'build', id] as const,
-    queryFn: () => api.get<BuildDto>(`/api/builds/${id}`),
+    queryFn: ({ signal }) => api.get<BuildDto>(`/api/builds/${id}`, { signal }),
   });
 
 export const useReviewBuild = (id: number) => useQuery(reviewBuildQuery(id));

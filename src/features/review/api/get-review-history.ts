@@ -7,7 +7,7 @@ import { reviewKeys } from './get-review-queue.ts';
 const reviewHistoryQuery = (buildId: number) =>
   queryOptions({
     queryKey: [...reviewKeys.all, 'build', buildId, 'history'] as const,
-    queryFn: () => api.get<ReviewHistoryDto>(`/api/review/builds/${buildId}/history`),
+    queryFn: ({ signal }) => api.get<ReviewHistoryDto>(`/api/review/builds/${buildId}/history`, { signal }),
   });
 
 export const useReviewHistory = (buildId: number) => useQuery(reviewHistoryQuery(buildId));

@@ -10,7 +10,7 @@ export const reviewKeys = {
 
 export const reviewQueueQuery = queryOptions({
   queryKey: reviewKeys.queue,
-  queryFn: () => api.get<ReviewQueueDto>('/api/review/queue'),
+  queryFn: ({ signal }) => api.get<ReviewQueueDto>('/api/review/queue', { signal }),
   staleTime: 15_000,
 });
 

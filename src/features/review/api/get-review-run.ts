@@ -7,7 +7,7 @@ import { reviewKeys } from './get-review-queue.ts';
 export const reviewRunQuery = (id: number) =>
   queryOptions({
     queryKey: [...reviewKeys.all, 'run', id] as const,
-    queryFn: () => api.get<RunDto>(`/api/runs/${id}`),
+    queryFn: ({ signal }) => api.get<RunDto>(`/api/runs/${id}`, { signal }),
     staleTime: 5 * 60_000,
   });
 

@@ -7,7 +7,8 @@ import { reviewKeys } from './get-review-queue.ts';
 const runPointsQuery = (runId: number, page: number) =>
   queryOptions({
     queryKey: [...reviewKeys.all, 'run', runId, 'points', page] as const,
-    queryFn: () => api.get<RunPointsPageDto>(`/api/review/runs/${runId}/points${toQuery({ page, pageSize: RUN_POINTS_PAGE_SIZE })}`),
+    queryFn: ({ signal }) =>
+      api.get<RunPointsPageDto>(`/api/review/runs/${runId}/points${toQuery({ page, pageSize: RUN_POINTS_PAGE_SIZE })}`, { signal }),
     placeholderData: keepPreviousData,
     staleTime: 5 * 60_000,
   });

@@ -4,8 +4,8 @@ import { api, setCsrfToken } from '@/lib/api-client.ts';
 
 export const sessionQuery = queryOptions({
   queryKey: ['session'],
-  queryFn: async () => {
-    const s = await api.get<SessionDto>('/api/session');
+  queryFn: async ({ signal }) => {
+    const s = await api.get<SessionDto>('/api/session', { signal });
     setCsrfToken(s.csrfToken);
     return s;
   },
