@@ -1,8 +1,7 @@
 import { Router } from 'express';
 import type { PassportStatic } from 'passport';
 import type { RequestHandler } from 'express';
-import type { SessionDto } from '@shared/schemas/user.ts';
-import { csrfTokenFor } from '../middleware/csrf.ts';
+import { sendSession } from './session.routes.ts';
 
 /** Only same-site paths are allowed as a place to return to after sign-in. */
 function safeReturnTo(value: unknown): string | undefined {
@@ -36,11 +35,10 @@ export function authRoutes(passport: PassportStatic, signInLimiter: RequestHandl
     // passport 0.7 deletes the signed-in session and gives the request a new, empty one (no fixation).
     req.logout((err) => {
       if (err) return next(err);
-      // The answer carries that new session's CSRF token, stored before it is handed out, so the page needs no
-      // second read after signing out: a read still in flight when the user starts signing in again could set
-      // its own session cookie over the one holding the sign-in's OAuth state.
-      const dto: SessionDto = { user: null, csrfToken: csrfTokenFor(req) };
-      req.session.save((e) => (e ? next(e) : res.set('Cache-Control', 'no-store').json(dto)));
+      // The answer is that new session with its CSRF token (stored first), so the page needs no second read after
+      // signing out: a read still in flight when the user starts signing in again could set its own session cookie
+      // over the one holding the sign-in's OAuth state.
+      sendSession(req, res).catch(next);
     });
   });
 
