@@ -29,6 +29,17 @@ describe('journey: a moderator signs in and out', () => {
 
     // The logout's answer is the new signed-out session: the page reads nothing more, so signing in again at once
     // cannot race a session read that would set its own cookie over the sign-in's.
+    // A read of the user's own builds is still on its way when they sign out (held back 1 s here): sign-out waits for
+    // its answer before it ends the session, so it comes back 200, not 401.
+    await page.route(/\/api\/builds\/mine$/, async (route) => {
+      await new Promise((r) => setTimeout(r, 1000));
+      await route.continue();
+    });
+    await page.reload();
+    await page.getByText('Loading your builds…').waitFor();
+    const order: string[] = [];
+    page.on('response', (r) => void (r.url().endsWith('/api/builds/mine') && order.push(`mine ${r.status()}`)));
+    page.on('request', (r) => void (r.url().endsWith('/auth/logout') && order.push('logout')));
     const logout = page.waitForResponse((r) => r.url() === `${j.live.baseUrl}/auth/logout`);
     const sessionReads: string[] = [];
     page.on('request', (r) => void (r.url() === `${j.live.baseUrl}/api/session` && sessionReads.push(r.url())));
@@ -36,6 +47,8 @@ describe('journey: a moderator signs in and out', () => {
     await page.getByRole('link', { name: 'Sign in', exact: true }).first().waitFor();
     expect(await nav.getByRole('link', { name: 'Review desk' }).count()).toBe(0);
     expect(await (await logout).json()).toEqual({ user: null, csrfToken: expect.any(String) });
+    expect(order).toEqual(['mine 200', 'logout']);
+    await page.unroute(/\/api\/builds\/mine$/);
     await page.getByRole('link', { name: 'Sign in', exact: true }).first().click();
     await page.getByRole('button', { name: /demo-maker/ }).click();
     await page.getByTestId('signed-in-login').filter({ hasText: 'demo-maker' }).waitFor();

@@ -20,7 +20,7 @@ afterEach(() => void vi.unstubAllGlobals());
 
 // The queries' own options from src/, run by TanStack Query's client (no React, no network).
 describe('a read that is cancelled', () => {
-  test('when a signed-in read is in flight and sign-out cancels it, then its request is aborted, not left to come back 401', async () => {
+  test('when a signed-in read in flight is cancelled (sign-out after waiting 5 s for it), then its request is aborted, not left to come back 401', async () => {
     const signals = pendingFetch();
     const qc = new QueryClient({ defaultOptions: { queries: { retry: false } } });
     const read = qc.fetchQuery(notificationQueries.counts()).catch((e: unknown) => e);
